@@ -1,0 +1,17 @@
+import type { Metadata } from "next";
+import { SignInForm } from "@/components/auth/sign-in-form";
+
+export const metadata: Metadata = { title: "Sign in" };
+
+export default async function SignInPage({ searchParams }: { searchParams: Promise<{ callbackUrl?: string; error?: string; email?: string }> }) {
+  const { callbackUrl, error, email } = await searchParams;
+  // Only same-site paths: an absolute callbackUrl could send a freshly signed-in user elsewhere.
+  const next = callbackUrl && callbackUrl.startsWith("/") && !callbackUrl.startsWith("//") ? callbackUrl : "/home";
+  return (
+    <>
+      <h1 className="text-xl font-semibold text-ink-950">Sign in</h1>
+      <p className="mt-1 text-sm text-ink-500">Use the e-mail your club registered you with.</p>
+      <SignInForm next={next} initialError={error ? "E-mail or password is not right. Check both and try again." : undefined} initialEmail={email} />
+    </>
+  );
+}

@@ -1,0 +1,43 @@
+import type { ReactNode } from "react";
+import { Logo } from "@/components/shell/logo";
+import { SignOutButton } from "@/components/shell/sign-out-button";
+import { WorkspaceNav } from "@/components/shell/workspace-nav";
+import { pageViewer } from "@/lib/auth/page-access";
+import { ROLE_LABEL } from "@/lib/auth/roles";
+import { navFor } from "@/lib/nav";
+import { extraNavLinks } from "@/lib/nav-extras";
+
+export default async function WorkspaceLayout({ children }: { children: ReactNode }) {
+  const viewer = await pageViewer();
+  const links = [...navFor(viewer.role).map(({ href, label }) => ({ href, label })), ...(await extraNavLinks(viewer))];
+  return (
+    <div className="min-h-dvh md:grid md:grid-cols-[15rem_1fr]">
+      <aside className="border-b border-ink-100 bg-paper-raised px-4 py-3 md:sticky md:top-0 md:h-dvh md:border-b-0 md:border-r md:px-4 md:py-6">
+        <div className="flex items-center justify-between md:block">
+          <Logo href="/home" />
+          <div className="md:hidden">
+            <SignOutButton />
+          </div>
+        </div>
+        <p className="mt-1 hidden text-xs text-ink-500 md:mt-6 md:block" data-testid="team-name">
+          {viewer.teamName}
+        </p>
+        <div className="mt-3 md:mt-4">
+          <WorkspaceNav links={links} />
+        </div>
+        <div className="mt-8 hidden border-t border-ink-100 pt-4 md:block">
+          <p className="text-sm font-medium text-ink-900" data-testid="viewer-name">
+            {viewer.name}
+          </p>
+          <p className="text-xs text-ink-500" data-testid="viewer-role">
+            {ROLE_LABEL[viewer.role]}
+          </p>
+          <div className="-ml-2 mt-2">
+            <SignOutButton />
+          </div>
+        </div>
+      </aside>
+      <main className="mx-auto w-full max-w-7xl px-4 py-6 md:px-8 md:py-8">{children}</main>
+    </div>
+  );
+}

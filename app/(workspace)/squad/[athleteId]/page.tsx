@@ -1,0 +1,46 @@
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { Card, PageHeader } from "@/components/ui/card";
+import { pageAthlete } from "@/lib/auth/page-access";
+import { getAthlete } from "@/lib/data/athletes";
+import { PLYO_LEVEL_LABEL, formatSpeed } from "@/lib/format/athlete";
+
+export default async function AthleteProfilePage({ params }: { params: Promise<{ athleteId: string }> }) {
+  const { athleteId } = await params;
+  const viewer = await pageAthlete(Number(athleteId), "athletes:view");
+  const athlete = await getAthlete({ teamId: viewer.teamId, athleteId: viewer.athlete.id });
+  if (!athlete) notFound();
+  const facts: [string, string][] = [
+    ["Training group", athlete.groupName ?? "None"],
+    ["Max velocity", formatSpeed(athlete.vmaxMs)],
+    ["Tested on", athlete.vmaxTestedOn ?? "–"],
+    ["Acceleration constant τ", athlete.tauS ? `${athlete.tauS.toFixed(2)} s` : "untested"],
+    ["Step length at top speed", athlete.stepLengthM ? `${athlete.stepLengthM.toFixed(2)} m` : "untested"],
+    ["Body mass", athlete.bodyMassKg ? `${athlete.bodyMassKg.toFixed(1)} kg` : "–"],
+    ["Plyometric experience", PLYO_LEVEL_LABEL[athlete.plyoLevel]],
+    ["Born", athlete.birthDate ?? "–"],
+  ];
+  return (
+    <>
+      <PageHeader
+        title={athlete.name}
+        lead="Test values drive the athlete's HSR and near-max metres."
+        actions={
+          <Link href={`/load/${athlete.id}`} className="text-sm font-medium text-lane-700 underline">
+            Load history
+          </Link>
+        }
+      />
+      <Card className="p-5">
+        <dl className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4" data-testid="athlete-facts">
+          {facts.map(([k, v]) => (
+            <div key={k}>
+              <dt className="text-xs text-ink-500">{k}</dt>
+              <dd className="mt-0.5 font-medium tabular-nums text-ink-900">{v}</dd>
+            </div>
+          ))}
+        </dl>
+      </Card>
+    </>
+  );
+}

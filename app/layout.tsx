@@ -1,0 +1,22 @@
+import "@fontsource/inter/400.css";
+import "@fontsource/inter/500.css";
+import "@fontsource/inter/600.css";
+import "@fontsource/inter/700.css";
+import "./globals.css";
+import type { Metadata, Viewport } from "next";
+import type { ReactNode } from "react";
+
+export const metadata: Metadata = {
+  title: { default: "Sprintwright", template: "%s · Sprintwright" },
+  description: "Plan speed training week by week, keep sprint and plyometric load progressive, and keep the physio in the loop.",
+};
+
+export const viewport: Viewport = { themeColor: "#121a25", width: "device-width", initialScale: 1 };
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en">
+      <body className="min-h-dvh font-sans">{children}</body>
+    </html>
+  );
+}

@@ -1,0 +1,79 @@
+import type { Role } from "./roles";
+
+/**
+ * The one permission table. Every page, server action and route handler asks `can(role, action)`
+ * through lib/auth/access.ts. "team" reaches every athlete of the member's team; "own" reaches only the
+ * athlete profile linked to the signed-in user.
+ */
+export type Action =
+  | "team:view"
+  | "members:manage"
+  | "settings:edit"
+  | "athletes:view"
+  | "athletes:edit"
+  | "plan:view"
+  | "plan:edit"
+  | "load:view"
+  | "log:write"
+  | "alerts:view"
+  | "alerts:manage"
+  | "restrictions:edit"
+  | "calendar:manage";
+
+export type Scope = "team" | "own";
+
+export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
+  head_coach: {
+    "team:view": "team",
+    "members:manage": "team",
+    "settings:edit": "team",
+    "athletes:view": "team",
+    "athletes:edit": "team",
+    "plan:view": "team",
+    "plan:edit": "team",
+    "load:view": "team",
+    "log:write": "team",
+    "alerts:view": "team",
+    "alerts:manage": "team",
+    "calendar:manage": "team",
+  },
+  coach: {
+    "team:view": "team",
+    "athletes:view": "team",
+    "athletes:edit": "team",
+    "plan:view": "team",
+    "plan:edit": "team",
+    "load:view": "team",
+    "log:write": "team",
+    "alerts:view": "team",
+    "alerts:manage": "team",
+    "calendar:manage": "team",
+  },
+  physio: {
+    "team:view": "team",
+    "athletes:view": "team",
+    "plan:view": "team",
+    "load:view": "team",
+    "alerts:view": "team",
+    "alerts:manage": "team",
+    "restrictions:edit": "team",
+  },
+  athlete: {
+    "team:view": "team",
+    "athletes:view": "own",
+    "plan:view": "own",
+    "load:view": "own",
+    "log:write": "own",
+    "calendar:manage": "own",
+  },
+};
+
+export function scopeOf(role: Role, action: Action): Scope | null {
+  return PERMISSIONS[role][action] ?? null;
+}
+
+export function can(role: Role, action: Action, scope: Scope = "own"): boolean {
+  const granted = scopeOf(role, action);
+  if (!granted) return false;
+  return granted === "team" || scope === "own";
+}

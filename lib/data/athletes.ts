@@ -1,0 +1,67 @@
+import "server-only";
+import { db } from "@/models";
+
+export type AthleteRow = {
+  id: number;
+  name: string;
+  groupId: number | null;
+  groupName: string | null;
+  sex: "female" | "male" | null;
+  birthDate: string | null;
+  bodyMassKg: number | null;
+  vmaxMs: number | null;
+  vmaxTestedOn: string | null;
+  tauS: number | null;
+  stepLengthM: number | null;
+  plyoLevel: "beginner" | "intermediate" | "advanced";
+  hasAccount: boolean;
+};
+
+const ATHLETE_FIELDS = ["id", "name", "groupId", "userId", "sex", "birthDate", "bodyMassKg", "vmaxMs", "vmaxTestedOn", "tauS", "stepLengthM", "plyoLevel"] as const;
+
+export type GroupRow = { id: number; name: string; sortOrder: number };
+
+export async function listGroups({ teamId }: { teamId: number }): Promise<GroupRow[]> {
+  const { TrainingGroup } = await db();
+  const groups = await TrainingGroup.findAll({ where: { teamId }, attributes: ["id", "name", "sortOrder"], order: [["sortOrder", "ASC"], ["name", "ASC"]] });
+  return groups.map((g) => ({ id: g.id, name: g.name, sortOrder: g.sortOrder }));
+}
+
+/** The team's athletes, ordered by training group then name. */
+export async function listSquad({ teamId, athleteId }: { teamId: number; athleteId?: number }): Promise<AthleteRow[]> {
+  const { Athlete } = await db();
+  const [groups, athletes] = await Promise.all([
+    listGroups({ teamId }),
+    Athlete.findAll({ where: athleteId ? { teamId, id: athleteId } : { teamId }, attributes: [...ATHLETE_FIELDS], order: [["name", "ASC"]] }),
+  ]);
+  const byId = new Map(groups.map((g) => [g.id, g]));
+  const order = (groupId: number | null) => (groupId && byId.has(groupId) ? byId.get(groupId)!.sortOrder : 1e9);
+  return athletes
+    .map((a) => ({
+      id: a.id,
+      name: a.name,
+      groupId: a.groupId,
+      groupName: a.groupId ? (byId.get(a.groupId)?.name ?? null) : null,
+      sex: a.sex,
+      birthDate: a.birthDate,
+      bodyMassKg: a.bodyMassKg,
+      vmaxMs: a.vmaxMs,
+      vmaxTestedOn: a.vmaxTestedOn,
+      tauS: a.tauS,
+      stepLengthM: a.stepLengthM,
+      plyoLevel: a.plyoLevel,
+      hasAccount: a.userId !== null,
+    }))
+    .sort((x, y) => order(x.groupId) - order(y.groupId) || x.name.localeCompare(y.name));
+}
+
+export async function getAthlete({ teamId, athleteId }: { teamId: number; athleteId: number }): Promise<AthleteRow | null> {
+  const [row] = await listSquad({ teamId, athleteId });
+  return row ?? null;
+}
+
+export async function listUnlinkedAthletes({ teamId }: { teamId: number }) {
+  const { Athlete } = await db();
+  const rows = await Athlete.findAll({ where: { teamId, userId: null }, attributes: ["id", "name"], order: [["name", "ASC"]] });
+  return rows.map((a) => ({ id: a.id, name: a.name }));
+}

@@ -1,0 +1,43 @@
+import "server-only";
+import bcrypt from "bcryptjs";
+import { db } from "@/models";
+import type { Role } from "@/lib/auth/roles";
+
+export type MembershipSummary = { teamId: number; teamName: string; role: Role; athleteId: number | null };
+
+let dummyHash: string | undefined;
+
+/** Checks a password; returns the public user fields only (never the hash). */
+export async function verifyCredentials({ email, password }: { email: string; password: string }) {
+  const { User } = await db();
+  const user = await User.findOne({ where: { email: email.trim().toLowerCase() }, attributes: ["id", "name", "email", "passwordHash"] });
+  // Compare against a dummy hash when the user is unknown so timing does not reveal which e-mails exist.
+  const hash = user?.passwordHash ?? (dummyHash ??= bcrypt.hashSync("no-such-user-password", 10));
+  const ok = await bcrypt.compare(password, hash);
+  if (!user || !user.passwordHash || !ok) return null;
+  return { id: user.id, name: user.name, email: user.email };
+}
+
+export async function listMembershipsOfUser({ userId }: { userId: number }): Promise<MembershipSummary[]> {
+  const { Membership, Team, Athlete } = await db();
+  const rows = await Membership.findAll({
+    where: { userId },
+    attributes: ["teamId", "role"],
+    include: [{ model: Team, as: "team", attributes: ["name"] }],
+    order: [["id", "ASC"]],
+  });
+  const athletes = await Athlete.findAll({ where: { userId }, attributes: ["id", "teamId"] });
+  return rows.map((m) => {
+    const team = (m as unknown as { team: { name: string } }).team;
+    return {
+      teamId: m.teamId,
+      teamName: team.name,
+      role: m.role,
+      athleteId: athletes.find((a) => a.teamId === m.teamId)?.id ?? null,
+    };
+  });
+}
+
+export async function hashPassword(password: string): Promise<string> {
+  return bcrypt.hash(password, 10);
+}

@@ -1,0 +1,41 @@
+export type FieldErrors = Record<string, string[]>;
+
+export type ErrorCode =
+  | "unauthenticated"
+  | "forbidden"
+  | "not_found"
+  | "invalid"
+  | "conflict"
+  | "stale"
+  | "internal";
+
+const STATUS: Record<ErrorCode, number> = {
+  unauthenticated: 401,
+  forbidden: 403,
+  not_found: 404,
+  invalid: 400,
+  conflict: 409,
+  stale: 409,
+  internal: 500,
+};
+
+/** The one error type the app throws on purpose; route handlers turn it into JSON with its status. */
+export class AppError extends Error {
+  readonly code: ErrorCode;
+  readonly status: number;
+  readonly fields?: FieldErrors;
+  readonly details?: Record<string, unknown>;
+
+  constructor(code: ErrorCode, message: string, opts: { fields?: FieldErrors; details?: Record<string, unknown> } = {}) {
+    super(message);
+    this.name = "AppError";
+    this.code = code;
+    this.status = STATUS[code];
+    this.fields = opts.fields;
+    this.details = opts.details;
+  }
+}
+
+export const notFound = (what = "Not found") => new AppError("not_found", what);
+export const forbidden = (what = "You do not have access to this") => new AppError("forbidden", what);
+export const invalid = (message: string, fields?: FieldErrors) => new AppError("invalid", message, { fields });

@@ -1,0 +1,29 @@
+import { scopeOf, type Action, type Scope } from "@/lib/auth/permissions";
+import type { Role } from "@/lib/auth/roles";
+
+export type NavItem = { href: string; label: string; can: Action; scope: Scope; athleteHref?: (athleteId: number) => string };
+
+/**
+ * The signed-in navigation. An item shows when the role holds the action at the given scope, so an athlete
+ * ("own" scope) never sees squad screens. Hiding an item is convenience only: every page checks again.
+ */
+export const NAV: NavItem[] = [
+  { href: "/home", label: "Today", can: "team:view", scope: "own" },
+  { href: "/plan", label: "Week plan", can: "plan:view", scope: "team" },
+  { href: "/load", label: "Squad load", can: "load:view", scope: "team" },
+  { href: "/alerts", label: "Alerts", can: "alerts:view", scope: "team" },
+  { href: "/squad", label: "Squad", can: "athletes:view", scope: "team" },
+  { href: "/me", label: "My training", can: "log:write", scope: "own" },
+  { href: "/members", label: "Members", can: "members:manage", scope: "team" },
+  { href: "/settings", label: "Thresholds", can: "settings:edit", scope: "team" },
+];
+
+export function navFor(role: Role): NavItem[] {
+  return NAV.filter((item) => {
+    const granted = scopeOf(role, item.can);
+    if (!granted) return false;
+    // "My training" is for athletes; staff reach athletes through the squad screens.
+    if (item.scope === "own" && item.can !== "team:view") return granted === "own";
+    return item.scope === "own" || granted === "team";
+  });
+}

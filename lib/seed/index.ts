@@ -1,0 +1,17 @@
+import type { Db } from "@/models";
+import { seedClub, type SeededClub } from "./seed-club";
+
+export type SeedOptions = {
+  /** The local date the demo's "today" falls on (YYYY-MM-DD); defaults to the real date. */
+  today?: string;
+};
+
+/**
+ * Seeds the whole demo: the club, then each feature's invented content. Feature seeders register here
+ * in order; each receives the club it builds on.
+ */
+export async function seedDemo(d: Db, options: SeedOptions = {}): Promise<SeededClub> {
+  const club = await seedClub(d);
+  void options;
+  return club;
+}

@@ -1,0 +1,16 @@
+import { z } from "zod";
+
+export const signInSchema = z.object({
+  email: z.email("Enter a valid e-mail address").trim().toLowerCase(),
+  password: z.string().min(1, "Enter your password").max(200),
+});
+export type SignInInput = z.infer<typeof signInSchema>;
+
+export const setPasswordSchema = z
+  .object({
+    token: z.string().min(20, "This link is not valid").max(200),
+    password: z.string().min(10, "Use at least 10 characters").max(200),
+    confirm: z.string(),
+  })
+  .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ" });
+export type SetPasswordInput = z.infer<typeof setPasswordSchema>;

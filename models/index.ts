@@ -1,0 +1,119 @@
+import { mkdirSync } from "node:fs";
+import { dirname } from "node:path";
+import { Sequelize, Transaction } from "sequelize";
+import sqlite3 from "sqlite3";
+import { databaseStorage } from "@/lib/env";
+import { Athlete } from "./athlete";
+import { BlockTemplate } from "./block-template";
+import { Invitation } from "./invitation";
+import { Membership } from "./membership";
+import { PlannedSession } from "./planned-session";
+import { SessionBlock } from "./session-block";
+import { SessionLog } from "./session-log";
+import { Team } from "./team";
+import { TeamLoadSettings } from "./team-load-settings";
+import { TrainingGroup } from "./training-group";
+import { User } from "./user";
+
+export { Athlete, BlockTemplate, Invitation, Membership, PlannedSession, SessionBlock, SessionLog, Team, TeamLoadSettings, TrainingGroup, User };
+
+const models = { Athlete, BlockTemplate, Invitation, Membership, PlannedSession, SessionBlock, SessionLog, Team, TeamLoadSettings, TrainingGroup, User };
+export type Models = typeof models;
+export type Db = Models & { sequelize: Sequelize };
+
+function associate() {
+  const cascade = { onDelete: "CASCADE" as const, onUpdate: "CASCADE" as const };
+  const setNull = { onDelete: "SET NULL" as const, onUpdate: "CASCADE" as const };
+
+  Team.hasMany(Membership, { foreignKey: "teamId", as: "memberships", ...cascade });
+  Membership.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+  User.hasMany(Membership, { foreignKey: "userId", as: "memberships", ...cascade });
+  Membership.belongsTo(User, { foreignKey: "userId", as: "user" });
+
+  Team.hasMany(TrainingGroup, { foreignKey: "teamId", as: "groups", ...cascade });
+  TrainingGroup.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+
+  Team.hasMany(Athlete, { foreignKey: "teamId", as: "athletes", ...cascade });
+  Athlete.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+  TrainingGroup.hasMany(Athlete, { foreignKey: "groupId", as: "athletes", ...setNull });
+  Athlete.belongsTo(TrainingGroup, { foreignKey: "groupId", as: "group" });
+  User.hasMany(Athlete, { foreignKey: "userId", as: "athleteProfiles", ...setNull });
+  Athlete.belongsTo(User, { foreignKey: "userId", as: "user" });
+
+  Team.hasMany(Invitation, { foreignKey: "teamId", as: "invitations", ...cascade });
+  Invitation.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+  User.hasMany(Invitation, { foreignKey: "userId", as: "invitations", ...cascade });
+  Invitation.belongsTo(User, { foreignKey: "userId", as: "user" });
+
+  Team.hasOne(TeamLoadSettings, { foreignKey: "teamId", as: "loadSettings", ...cascade });
+  TeamLoadSettings.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+
+  Team.hasMany(BlockTemplate, { foreignKey: "teamId", as: "templates", ...cascade });
+  BlockTemplate.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+
+  Team.hasMany(PlannedSession, { foreignKey: "teamId", as: "sessions", ...cascade });
+  PlannedSession.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+  Athlete.hasMany(PlannedSession, { foreignKey: "athleteId", as: "sessions", ...cascade });
+  PlannedSession.belongsTo(Athlete, { foreignKey: "athleteId", as: "athlete" });
+
+  PlannedSession.hasMany(SessionBlock, { foreignKey: "sessionId", as: "blocks", ...cascade });
+  SessionBlock.belongsTo(PlannedSession, { foreignKey: "sessionId", as: "session" });
+  BlockTemplate.hasMany(SessionBlock, { foreignKey: "templateId", as: "copies", ...setNull });
+  SessionBlock.belongsTo(BlockTemplate, { foreignKey: "templateId", as: "template" });
+
+  PlannedSession.hasOne(SessionLog, { foreignKey: "sessionId", as: "log", ...cascade });
+  SessionLog.belongsTo(PlannedSession, { foreignKey: "sessionId", as: "session" });
+  Athlete.hasMany(SessionLog, { foreignKey: "athleteId", as: "logs", ...cascade });
+  SessionLog.belongsTo(Athlete, { foreignKey: "athleteId", as: "athlete" });
+}
+
+/** Builds a Sequelize instance on an SQLite file with the pragmas the app relies on. */
+export async function openDatabase(storage: string): Promise<Sequelize> {
+  if (storage !== ":memory:") mkdirSync(dirname(storage), { recursive: true });
+  const sequelize = new Sequelize({
+    dialect: "sqlite",
+    storage,
+    dialectModule: sqlite3,
+    logging: false,
+    // IMMEDIATE takes the write lock at BEGIN, so two writers queue on busy_timeout instead of deadlocking.
+    transactionType: Transaction.TYPES.IMMEDIATE,
+    hooks: {
+      // Each transaction gets its own sqlite3 connection; pragmas are per connection.
+      afterConnect(connection) {
+        (connection as sqlite3.Database).configure("busyTimeout", 5000);
+      },
+    },
+  });
+  await sequelize.query("PRAGMA foreign_keys = ON");
+  await sequelize.query("PRAGMA busy_timeout = 5000");
+  if (storage !== ":memory:") await sequelize.query("PRAGMA journal_mode = WAL");
+  return sequelize;
+}
+
+function initModels(sequelize: Sequelize) {
+  for (const model of Object.values(models)) model.initModel(sequelize);
+  associate();
+}
+
+type Cache = { db?: Promise<Db> };
+const cache = globalThis as typeof globalThis & { __sprintwrightDb?: Cache };
+cache.__sprintwrightDb ??= {};
+
+/** The app's one database handle, created on first use and cached on globalThis across dev reloads. */
+export function db(): Promise<Db> {
+  const c = cache.__sprintwrightDb!;
+  c.db ??= openDatabase(databaseStorage()).then((sequelize) => {
+    initModels(sequelize);
+    return { ...models, sequelize };
+  });
+  return c.db;
+}
+
+/** Closes the cached handle (tests and scripts). */
+export async function closeDb(): Promise<void> {
+  const c = cache.__sprintwrightDb!;
+  if (!c.db) return;
+  const { sequelize } = await c.db;
+  c.db = undefined;
+  await sequelize.close();
+}

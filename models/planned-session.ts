@@ -1,0 +1,53 @@
+import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from "sequelize";
+import type { Athlete } from "./athlete";
+import type { SessionBlock } from "./session-block";
+import type { Team } from "./team";
+
+export const SESSION_STATUSES = ["draft", "published", "cancelled"] as const;
+export type SessionStatus = (typeof SESSION_STATUSES)[number];
+
+export class PlannedSession extends Model<InferAttributes<PlannedSession>, InferCreationAttributes<PlannedSession>> {
+  declare id: CreationOptional<number>;
+  declare teamId: ForeignKey<Team["id"]>;
+  declare athleteId: ForeignKey<Athlete["id"]>;
+  /** Local calendar date in the team's time zone, YYYY-MM-DD. */
+  declare date: string;
+  /** Local wall-clock start, HH:MM. */
+  declare startTime: string;
+  declare durationMin: number;
+  declare title: string;
+  /** Planned session RPE on the CR-10 scale (Foster et al. 2001). */
+  declare plannedRpe: number;
+  declare status: CreationOptional<SessionStatus>;
+  declare notes: string | null;
+  /** Optimistic-locking counter: every write must send the version it read. */
+  declare version: CreationOptional<number>;
+  /** iCalendar SEQUENCE (RFC 5545 §3.8.7.4), bumped when a published session changes. */
+  declare sequence: CreationOptional<number>;
+  declare publishedAt: Date | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  declare blocks?: NonAttribute<SessionBlock[]>;
+
+  static initModel(sequelize: Sequelize) {
+    PlannedSession.init(
+      {
+        id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+        date: { type: DataTypes.DATEONLY, allowNull: false },
+        startTime: { type: DataTypes.STRING(5), allowNull: false, defaultValue: "16:00" },
+        durationMin: { type: DataTypes.INTEGER, allowNull: false },
+        title: { type: DataTypes.STRING(120), allowNull: false },
+        plannedRpe: { type: DataTypes.FLOAT, allowNull: false },
+        status: { type: DataTypes.STRING(12), allowNull: false, defaultValue: "draft" },
+        notes: { type: DataTypes.TEXT, allowNull: true },
+        version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+        sequence: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        publishedAt: { type: DataTypes.DATE, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "planned_sessions", underscored: true },
+    );
+  }
+}
