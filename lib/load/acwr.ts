@@ -1,0 +1,149 @@
+import type { AcwrMethod } from "./types";
+
+export type EwmaSeed = "first" | "zero";
+
+export const ACUTE_DAYS = 7;
+export const CHRONIC_DAYS = 28;
+/** Ratios from fewer days of history than this are provisional (a design choice; no published rule, methods.md §2). */
+export const ACWR_MIN_HISTORY_DAYS = 28;
+
+/** λ = 2 / (N + 1), Williams et al. 2017, BJSM 51:209. */
+export function ewmaLambda(n: number): number {
+  return 2 / (n + 1);
+}
+
+/**
+ * EWMA_t = λ·load_t + (1 − λ)·EWMA_{t−1} (Williams et al. 2017). Seed "first" starts at day 1's load, matching
+ * pandas `ewm(span=N, adjust=False)`; "zero" starts from 0 (the first day then gives λ·load).
+ */
+export function ewmaInto(values: ArrayLike<number>, n: number, seed: EwmaSeed, out: Float64Array): Float64Array {
+  const len = values.length;
+  if (len === 0) return out;
+  const lambda = ewmaLambda(n);
+  const keep = 1 - lambda;
+  let e = seed === "first" ? values[0] : lambda * values[0];
+  out[0] = e;
+  for (let i = 1; i < len; i++) {
+    e = lambda * values[i] + keep * e;
+    out[i] = e;
+  }
+  return out;
+}
+
+export function ewma(values: ArrayLike<number>, n: number, seed: EwmaSeed = "first"): Float64Array {
+  return ewmaInto(values, n, seed, new Float64Array(values.length));
+}
+
+export interface AcwrColumns {
+  acute: Float64Array;
+  chronic: Float64Array;
+  /** NaN where there is no ratio (chronic 0 or an empty window). */
+  ratio: Float64Array;
+}
+
+export function allocAcwrColumns(length: number): AcwrColumns {
+  return { acute: new Float64Array(length), chronic: new Float64Array(length), ratio: new Float64Array(length) };
+}
+
+/**
+ * Hot path. Rolling windows use prefix sums, so a window of rest days is exactly 0 (a running sum with
+ * subtraction would leave rounding residue and invent ratios). Early days average the days available
+ * (SQLite's AVG over a short frame does the same); the uncoupled chronic window is empty (0) before day 8.
+ */
+export function acwrInto(
+  values: ArrayLike<number>,
+  method: AcwrMethod,
+  out: AcwrColumns,
+  seed: EwmaSeed = "first",
+  prefix?: Float64Array,
+): void {
+  const n = values.length;
+  const { acute, chronic, ratio } = out;
+  if (method === "ewma") {
+    ewmaInto(values, ACUTE_DAYS, seed, acute);
+    ewmaInto(values, CHRONIC_DAYS, seed, chronic);
+  } else {
+    const s = prefix && prefix.length >= n + 1 ? prefix : new Float64Array(n + 1);
+    s[0] = 0;
+    for (let i = 0; i < n; i++) s[i + 1] = s[i] + values[i];
+    const coupled = method === "rolling_coupled";
+    for (let i = 0; i < n; i++) {
+      const a0 = i + 1 > ACUTE_DAYS ? i + 1 - ACUTE_DAYS : 0;
+      acute[i] = (s[i + 1] - s[a0]) / (i + 1 - a0);
+      if (coupled) {
+        // Hulin et al. 2016: chronic = mean of the last 28 days, this week included.
+        const c0 = i + 1 > CHRONIC_DAYS ? i + 1 - CHRONIC_DAYS : 0;
+        chronic[i] = (s[i + 1] - s[c0]) / (i + 1 - c0);
+      } else {
+        // Lolli 2019 / Gabbett 2019: chronic = mean of days t−27 … t−7 (the three weeks before the acute week).
+        const end = i - ACUTE_DAYS + 1; // exclusive index
+        const c0 = i + 1 > CHRONIC_DAYS ? i + 1 - CHRONIC_DAYS : 0;
+        chronic[i] = end > c0 ? (s[end] - s[c0]) / (end - c0) : 0;
+      }
+    }
+  }
+  for (let i = 0; i < n; i++) {
+    const c = chronic[i];
+    ratio[i] = c > 0 ? acute[i] / c : Number.NaN;
+  }
+}
+
+export interface AcwrOptions {
+  seed?: EwmaSeed;
+  /** Index of the first day with data on record; history counts from here (default 0). */
+  firstDataIndex?: number;
+  minHistoryDays?: number;
+}
+
+export interface AcwrSeries {
+  acute: Float64Array;
+  chronic: Float64Array;
+  /** null when chronic is 0 (never Infinity or NaN). */
+  ratio: (number | null)[];
+  /** true while fewer than 28 days of history stand behind the ratio. */
+  provisional: boolean[];
+}
+
+export function isProvisional(i: number, firstDataIndex: number, minHistoryDays = ACWR_MIN_HISTORY_DAYS): boolean {
+  return firstDataIndex < 0 || i - firstDataIndex + 1 < minHistoryDays;
+}
+
+export function acwrSeries(values: ArrayLike<number>, method: AcwrMethod, options: AcwrOptions = {}): AcwrSeries {
+  const n = values.length;
+  const cols = allocAcwrColumns(n);
+  acwrInto(values, method, cols, options.seed ?? "first");
+  const first = options.firstDataIndex ?? 0;
+  const minDays = options.minHistoryDays ?? ACWR_MIN_HISTORY_DAYS;
+  const ratio: (number | null)[] = new Array(n);
+  const provisional: boolean[] = new Array(n);
+  for (let i = 0; i < n; i++) {
+    const r = cols.ratio[i];
+    ratio[i] = Number.isFinite(r) ? r : null;
+    provisional[i] = isProvisional(i, first, minDays);
+  }
+  return { acute: cols.acute, chronic: cols.chronic, ratio, provisional };
+}
+
+function safeRatio(num: number, den: number): number | null {
+  const r = num / den;
+  return den > 0 && Number.isFinite(r) ? r : null;
+}
+
+/** Weekly form, coupled: C = A / ((A + W1 + W2 + W3) / 4) (Hulin et al. 2016; written out in Lolli et al. 2019). */
+export function coupledRatio(acute: number, w1: number, w2: number, w3: number): number | null {
+  return safeRatio(acute, (acute + w1 + w2 + w3) / 4);
+}
+
+/** Weekly form, uncoupled: U = A / ((W1 + W2 + W3) / 3) (Lolli et al. 2019; Gabbett et al. 2019). */
+export function uncoupledRatio(acute: number, w1: number, w2: number, w3: number): number | null {
+  return safeRatio(acute, (w1 + w2 + w3) / 3);
+}
+
+/** Exact link between the two weekly forms: U = 3C / (4 − C) (derived, methods.md §1). */
+export function uncoupledFromCoupled(c: number): number | null {
+  return c < 4 ? (3 * c) / (4 - c) : null;
+}
+
+export function coupledFromUncoupled(u: number): number {
+  return (4 * u) / (3 + u);
+}

@@ -1,0 +1,106 @@
+/**
+ * Sprintwright load engine: pure, isomorphic maths (no I/O, no clock, no React). Route handlers and the
+ * planner's drag preview call the same functions, so the number a coach sees while dragging is the number stored.
+ *
+ * Model choices (sources and check values: shared/methods.md; pinned by tests/unit/load):
+ * - Dates are local calendar dates "YYYY-MM-DD" handled as integer day numbers; "today" is always an input.
+ * - Running reps follow the mono-exponential model v(t) = target·(1 − e^(−t/τ)) from rest (Furusawa, Hill &
+ *   Parkinson 1927), target = intensityPct% of vmax; a flying rep's run-in is run and counted. HSR and near-max
+ *   metres are the analytic metres at or above the threshold; a threshold at or above the target gives 0.
+ *   Untested athletes use DEFAULT_VMAX 9.0 m/s, DEFAULT_TAU 1.2 s, DEFAULT_STEP_LENGTH 2.1 m [from memory].
+ * - Sprint metres = acceleration + max-velocity + speed-endurance metres (tempo is not sprinting);
+ *   sprint steps = sprint metres ÷ step length (an estimate).
+ * - sRPE = RPE × minutes (Foster 2001). Logs: completion yes/partly/no = 1/0.5/0 unless per-block reps are
+ *   logged; "no" is a logged 0. A published session before today without a log is "missing", not a rest day.
+ * - "projected" = logged work + the plan from today on (drafts included, cancelled excluded).
+ * - ACWR: EWMA (Williams 2017, λ = 2/(N+1), N = 7 and 28) seeded with the first day's load (pandas
+ *   ewm(adjust=False)); rolling coupled = mean of 7 ÷ mean of 28 days (Hulin 2016); rolling uncoupled =
+ *   mean of 7 ÷ mean of days t−27…t−7 (Lolli 2019, Gabbett 2019). History runs from the athlete's first session
+ *   (at least 56 days before the range). Ratios with < 28 days of history are provisional; chronic 0 → null.
+ * - Monotony = mean ÷ SD with the population SD by default (Foster 1998); SD 0 → null.
+ * - Boundaries: ACWR ≥ spike (1.5) is a spike, [rising 1.3, spike) climbing, < low (0.8) underloaded, judged on
+ *   the week's peak ratio (Gabbett 2016 zones); weekly change strictly > 15% is a jump (so exactly 15% passes);
+ *   contacts strictly above the NSCA band's top are an overload; high-intensity sessions less than 48 h apart
+ *   are a short recovery (exactly 48 h passes). Threshold comparisons allow 1e-9 of float noise.
+ * - Flags are monitoring aids, not diagnoses: show LOAD_CAUTION with them.
+ */
+export * from "./types";
+export * from "./dates";
+export { formatNumber, formatRatio } from "./format";
+export {
+  velocityAt,
+  accelerationAt,
+  distanceAt,
+  timeToDistance,
+  metresAtOrAbove,
+  msToKmh,
+  kmhToMs,
+  averageSpeed,
+  percentOfVmax,
+  type RepShape,
+} from "./sprint-model";
+export { blockMetrics, resolveProfile, prescribedReps, type BlockMetrics, type ResolvedProfile } from "./block-metrics";
+export {
+  srpe,
+  sessionMetrics,
+  actualSessionMetrics,
+  COMPLETION_FACTOR,
+  type SessionMetrics,
+} from "./session-metrics";
+export {
+  dailySeries,
+  weeklyTotals,
+  sessionUse,
+  indexLogs,
+  effectiveSessions,
+  type DailySeries,
+  type DailySeriesInput,
+  type WeeklyTotals,
+  type SessionUse,
+  type EffectiveSession,
+} from "./series";
+export {
+  ewma,
+  ewmaLambda,
+  acwrSeries,
+  coupledRatio,
+  uncoupledRatio,
+  uncoupledFromCoupled,
+  coupledFromUncoupled,
+  ACUTE_DAYS,
+  CHRONIC_DAYS,
+  ACWR_MIN_HISTORY_DAYS,
+  type EwmaSeed,
+  type AcwrSeries,
+  type AcwrOptions,
+} from "./acwr";
+export { monotony, strain, DEFAULT_SD_TYPE, type SdType } from "./monotony";
+export { weeklyChangePct, exceedsWeeklyLimit } from "./weekly-change";
+export { contactBand, aboveContactBand, drillContacts, PLYO_CONTACT_BANDS, type ContactBand } from "./plyo";
+export { computeFlags, topFlagLevel, type Flag, type FlagKind, type FlagLevel, type FlagInput, type FlagSession } from "./flags";
+export {
+  LOAD_CAUTION,
+  FLAG_DISPLAY,
+  FLAG_LEVEL_DISPLAY,
+  FLAG_COLOUR_CLASSES,
+  flagClasses,
+  type FlagColour,
+  type FlagDisplay,
+  type FlagClasses,
+} from "./flag-display";
+export { summariseWeek, type WeekSummary } from "./week-summary";
+export {
+  computeAthleteLoad,
+  HISTORY_LEAD_DAYS,
+  type AthleteLoad,
+  type AthleteLoadDay,
+  type AthleteLoadInput,
+} from "./athlete-load";
+export {
+  computeWeekPreview,
+  buildWeekPreviewContext,
+  type WeekPreviewInput,
+  type WeekPreviewContext,
+  type WeekPreviewContextInput,
+} from "./week-preview";
+export { computeSquadWeek, type SquadAthleteInput, type SquadWeekRow } from "./squad";

@@ -1,0 +1,198 @@
+import { ACC_SIZE, resolveProfile, type ResolvedProfile } from "./block-metrics";
+import { dateFromDayIndex, dayIndex, weekdayOfDay } from "./dates";
+import { evaluateSessionInto, metricValueFromAcc, toSessionMetrics, type SessionMetrics } from "./session-metrics";
+import {
+  METRICS,
+  type AthleteProfile,
+  type LoadView,
+  type LogInput,
+  type Metric,
+  type SessionInput,
+  type TeamLoadSettings,
+} from "./types";
+
+/** How one session enters a view. */
+export type SessionUse = "logged" | "planned" | "missing" | "none";
+
+/**
+ * - a logged session counts as logged (in "actual" only up to today); logs count whatever the session status;
+ * - unlogged, before today: 0; "missing" when it was published (drafts and cancelled ones were never asked for);
+ * - unlogged, today or later: the plan in "projected" (drafts included, so the coach sees the week being
+ *   written; cancelled excluded), nothing in "actual".
+ */
+export function sessionUse(
+  status: SessionInput["status"],
+  hasLog: boolean,
+  day: number,
+  todayDay: number,
+  view: LoadView,
+): SessionUse {
+  if (hasLog) return view === "actual" && day > todayDay ? "none" : "logged";
+  if (day < todayDay) return status === "published" ? "missing" : "none";
+  return view === "projected" && status !== "cancelled" ? "planned" : "none";
+}
+
+export function indexLogs(logs: readonly LogInput[]): Map<string, LogInput> {
+  const map = new Map<string, LogInput>();
+  for (const log of logs) map.set(log.sessionId, log); // a later log for the same session replaces an earlier one
+  return map;
+}
+
+/** Daily columns over [startDay, startDay + length): one Float64Array per metric, views of one buffer. */
+export interface DailyColumns {
+  startDay: number;
+  length: number;
+  values: Record<Metric, Float64Array>;
+  logged: Uint8Array;
+  missing: Uint8Array;
+  /** Index of the first day holding any session on record (not cancelled, or logged); -1 when none. */
+  firstDataIndex: number;
+}
+
+export function emptyMetricColumns(length: number): Record<Metric, Float64Array> {
+  const buffer = new Float64Array(length * METRICS.length);
+  const out = {} as Record<Metric, Float64Array>;
+  METRICS.forEach((m, i) => {
+    out[m] = buffer.subarray(i * length, (i + 1) * length);
+  });
+  return out;
+}
+
+export interface ColumnsInput {
+  startDay: number;
+  length: number;
+  sessions: readonly SessionInput[];
+  logsById: ReadonlyMap<string, LogInput>;
+  rp: ResolvedProfile;
+  view: LoadView;
+  todayDay: number;
+}
+
+/** Hot path: no per-day or per-session allocation; one scratch accumulator for all sessions. */
+export function buildDailyColumns(input: ColumnsInput): DailyColumns {
+  const { startDay, length, sessions, logsById, rp, view, todayDay } = input;
+  const values = emptyMetricColumns(length);
+  const cols = METRICS.map((m) => values[m]);
+  const logged = new Uint8Array(length);
+  const missing = new Uint8Array(length);
+  const acc = new Float64Array(ACC_SIZE);
+  let firstDataIndex = -1;
+  for (const session of sessions) {
+    const i = dayIndex(session.date) - startDay;
+    if (i < 0 || i >= length) continue;
+    const log = logsById.get(session.id);
+    if ((log || session.status !== "cancelled") && (firstDataIndex < 0 || i < firstDataIndex)) firstDataIndex = i;
+    const use = sessionUse(session.status, log !== undefined, i + startDay, todayDay, view);
+    if (use === "none") continue;
+    if (use === "missing") {
+      missing[i] = 1;
+      continue;
+    }
+    evaluateSessionInto(acc, session, use === "logged" ? log : undefined, rp);
+    if (use === "logged") logged[i] = 1;
+    for (let k = 0; k < cols.length; k++) cols[k][i] += metricValueFromAcc(acc, k);
+  }
+  return { startDay, length, values, logged, missing, firstDataIndex };
+}
+
+/** A session as it enters a view, with its numbers: what the flags look at. */
+export interface EffectiveSession extends SessionMetrics {
+  id: string;
+  date: string;
+  startTime: string;
+  use: "logged" | "planned";
+}
+
+/** Sessions dated in [fromDay, toDay] that count in the view, with their metrics. */
+export function effectiveSessions(
+  sessions: readonly SessionInput[],
+  logsById: ReadonlyMap<string, LogInput>,
+  rp: ResolvedProfile,
+  view: LoadView,
+  todayDay: number,
+  fromDay: number,
+  toDay: number,
+): EffectiveSession[] {
+  const out: EffectiveSession[] = [];
+  const acc = new Float64Array(ACC_SIZE);
+  for (const s of sessions) {
+    const day = dayIndex(s.date);
+    if (day < fromDay || day > toDay) continue;
+    const log = logsById.get(s.id);
+    const use = sessionUse(s.status, log !== undefined, day, todayDay, view);
+    if (use !== "logged" && use !== "planned") continue;
+    evaluateSessionInto(acc, s, use === "logged" ? log : undefined, rp);
+    out.push({ id: s.id, date: s.date, startTime: s.startTime, use, ...toSessionMetrics(acc) });
+  }
+  return out;
+}
+
+export interface DailySeriesInput {
+  from: string;
+  to: string;
+  sessions: readonly SessionInput[];
+  logs: readonly LogInput[];
+  profile: AthleteProfile;
+  settings: TeamLoadSettings;
+  view: LoadView;
+  today: string;
+}
+
+export interface DailySeries {
+  dates: string[];
+  values: Record<Metric, Float64Array>;
+  /** 1 when the day's value came from at least one log. */
+  logged: Uint8Array;
+  /** 1 where a published session before today has no log: unknown, not a rest day (its value is 0). */
+  missing: Uint8Array;
+  firstDataIndex: number;
+}
+
+/** Daily load per metric from `from` to `to` inclusive; rest days are 0. */
+export function dailySeries(input: DailySeriesInput): DailySeries {
+  const startDay = dayIndex(input.from);
+  const length = Math.max(0, dayIndex(input.to) - startDay + 1);
+  const cols = buildDailyColumns({
+    startDay,
+    length,
+    sessions: input.sessions,
+    logsById: indexLogs(input.logs),
+    rp: resolveProfile(input.profile, input.settings),
+    view: input.view,
+    todayDay: dayIndex(input.today),
+  });
+  const dates: string[] = new Array(length);
+  for (let i = 0; i < length; i++) dates[i] = dateFromDayIndex(startDay + i);
+  return { dates, values: cols.values, logged: cols.logged, missing: cols.missing, firstDataIndex: cols.firstDataIndex };
+}
+
+export interface WeeklyTotals {
+  weekStarts: string[];
+  totals: Record<Metric, Float64Array>;
+  /** Days of each week that fall inside the series (7 except at the edges). */
+  days: Uint8Array;
+}
+
+/** Sums daily values into weeks starting on weekStartDay (0 = Sunday, 1 = Monday …); edge weeks may be partial. */
+export function weeklyTotals(
+  dates: readonly string[],
+  values: Record<Metric, ArrayLike<number>>,
+  weekStartDay = 1,
+): WeeklyTotals {
+  const n = dates.length;
+  if (n === 0) return { weekStarts: [], totals: emptyMetricColumns(0), days: new Uint8Array(0) };
+  const first = dayIndex(dates[0]);
+  const lead = (weekdayOfDay(first) - weekStartDay + 7) % 7;
+  const weeks = Math.ceil((n + lead) / 7);
+  const totals = emptyMetricColumns(weeks);
+  const days = new Uint8Array(weeks);
+  for (let i = 0; i < n; i++) days[Math.floor((i + lead) / 7)]++;
+  for (const m of METRICS) {
+    const src = values[m];
+    const dst = totals[m];
+    for (let i = 0; i < n; i++) dst[Math.floor((i + lead) / 7)] += src[i];
+  }
+  const weekStarts: string[] = [];
+  for (let w = 0; w < weeks; w++) weekStarts.push(dateFromDayIndex(first - lead + w * 7));
+  return { weekStarts, totals, days };
+}

@@ -1,0 +1,64 @@
+import { computeAthleteColumns, weekFromColumns, type ColumnsRequest } from "./athlete-load";
+import { dayIndex } from "./dates";
+import { topFlagLevel, type Flag, type FlagLevel } from "./flags";
+import { indexLogs } from "./series";
+import {
+  METRICS,
+  type AthleteProfile,
+  type LoadView,
+  type LogInput,
+  type Metric,
+  type SessionInput,
+  type TeamLoadSettings,
+} from "./types";
+import { peakRatioIn, type WeekSummary } from "./week-summary";
+
+export interface SquadAthleteInput {
+  id: string;
+  name: string;
+  group: string | null;
+  profile: AthleteProfile;
+  sessions: readonly SessionInput[];
+  logs: readonly LogInput[];
+}
+
+export interface SquadWeekRow {
+  id: string;
+  name: string;
+  group: string | null;
+  week: WeekSummary;
+  /** Highest ACWR in the week for every metric (team method); week.peakRatio is the team metric's. */
+  peakRatios: Record<Metric, number | null>;
+  flags: Flag[];
+  topLevel: FlagLevel | null;
+}
+
+/** One row per athlete for the squad table, in input order. weekStart is used as given. */
+export function computeSquadWeek(
+  athletes: readonly SquadAthleteInput[],
+  settings: TeamLoadSettings,
+  weekStart: string,
+  today: string,
+  view: LoadView,
+): SquadWeekRow[] {
+  const ws = dayIndex(weekStart);
+  const todayDay = dayIndex(today);
+  return athletes.map((a) => {
+    const req: ColumnsRequest = {
+      profile: a.profile,
+      settings,
+      sessions: a.sessions,
+      logsById: indexLogs(a.logs),
+      view,
+      todayDay,
+      fromDay: ws - 7,
+      toDay: ws + 6,
+    };
+    const cols = computeAthleteColumns(req);
+    const { week, flags } = weekFromColumns(cols, req, ws);
+    const w = ws - cols.startDay;
+    const peakRatios = {} as Record<Metric, number | null>;
+    for (const m of METRICS) peakRatios[m] = peakRatioIn(cols.acwr[m].ratio, w, w + 7)?.value ?? null;
+    return { id: a.id, name: a.name, group: a.group, week, peakRatios, flags, topLevel: topFlagLevel(flags) };
+  });
+}

@@ -1,0 +1,213 @@
+// Plain-data types shared by the load engine, route handlers and the week grid.
+// Everything here is serialisable JSON: no classes, no Dates (dates are local "YYYY-MM-DD" strings).
+
+export type BlockKind =
+  | "acceleration"
+  | "max_velocity"
+  | "plyometric"
+  | "speed_endurance"
+  | "tempo"
+  | "strength"
+  | "recovery";
+
+export const BLOCK_KINDS: readonly BlockKind[] = [
+  "acceleration",
+  "max_velocity",
+  "plyometric",
+  "speed_endurance",
+  "tempo",
+  "strength",
+  "recovery",
+];
+
+/** Blocks whose `running` prescription produces running metres. */
+export const RUNNING_KINDS: readonly BlockKind[] = ["acceleration", "max_velocity", "speed_endurance", "tempo"];
+
+/** Running kinds whose metres count as sprint metres; tempo is deliberately excluded (sub-maximal work). */
+export const SPRINT_KINDS: readonly BlockKind[] = ["acceleration", "max_velocity", "speed_endurance"];
+
+export type StartType = "standing" | "crouch" | "blocks" | "flying";
+export type PlyoIntensity = "low" | "moderate" | "high";
+export type PlyoLevel = "beginner" | "intermediate" | "advanced";
+
+export interface RunningPrescription {
+  sets: number;
+  reps: number;
+  distanceM: number;
+  /** % of the athlete's vmax, e.g. 95. */
+  intensityPct: number;
+  start: StartType;
+  /** Run-in before the timed distance; 0 unless flying. */
+  runInM: number;
+  restSec: number;
+}
+
+export interface PlyoDrill {
+  name: string;
+  sets: number;
+  reps: number;
+  /** Ground contacts per rep: one per landing of one foot or both feet together (NSCA). */
+  contactsPerRep: number;
+  intensity: PlyoIntensity;
+}
+
+export interface BlockInput {
+  id?: string;
+  kind: BlockKind;
+  title: string;
+  running?: RunningPrescription | null;
+  drills?: PlyoDrill[] | null;
+  notes?: string;
+}
+
+export interface AthleteProfile {
+  /** Tested maximal velocity, m/s; null until tested. */
+  vmax: number | null;
+  /** Mono-exponential time constant, s; null until fitted. */
+  tau: number | null;
+  /** Step length at max velocity, m; null until measured. */
+  stepLengthM: number | null;
+  plyoLevel: PlyoLevel;
+}
+
+// Defaults used while an athlete is untested. They only shape estimates; the UI should say "estimated".
+/** 9.0 m/s (32.4 km/h): a trained, non-elite sprinter; trained sprinters span about 9–11 m/s [from memory]. */
+export const DEFAULT_VMAX = 9.0;
+/** 1.2 s: mid-range for the Furusawa/Hill model in trained sprinters, about 1.0–1.4 s [from memory]; methods.md T5 uses 1.2. */
+export const DEFAULT_TAU = 1.2;
+/** 2.1 m: low end of max-velocity step length 2.0–2.6 m [from memory], because sprint metres include the acceleration, where steps are shorter. */
+export const DEFAULT_STEP_LENGTH = 2.1;
+
+export type AcwrMethod = "ewma" | "rolling_coupled" | "rolling_uncoupled";
+export const ACWR_METHODS: readonly AcwrMethod[] = ["ewma", "rolling_coupled", "rolling_uncoupled"];
+
+export type Metric = "hsrM" | "nearMaxM" | "sprintM" | "sprintSteps" | "contacts" | "srpe";
+
+/** Fixed order: the engine stores metrics in typed arrays indexed by this order. */
+export const METRICS: readonly Metric[] = ["hsrM", "nearMaxM", "sprintM", "sprintSteps", "contacts", "srpe"];
+
+export interface MetricInfo {
+  label: string;
+  short: string;
+  unit: string;
+  /** Decimals to show. */
+  decimals: number;
+  description: string;
+}
+
+export const METRIC_INFO: Record<Metric, MetricInfo> = {
+  hsrM: {
+    label: "HSR metres",
+    short: "HSR",
+    unit: "m",
+    decimals: 0,
+    description: "Estimated metres run at or above the team's high-speed running threshold.",
+  },
+  nearMaxM: {
+    label: "Near-max metres",
+    short: "Near-max",
+    unit: "m",
+    decimals: 0,
+    description: "Estimated metres run at or above the team's near-max share of the athlete's vmax.",
+  },
+  sprintM: {
+    label: "Sprint metres",
+    short: "Sprint",
+    unit: "m",
+    decimals: 0,
+    description: "Running metres in acceleration, max-velocity and speed-endurance blocks (tempo excluded).",
+  },
+  sprintSteps: {
+    label: "Sprint steps",
+    short: "Steps",
+    unit: "steps",
+    decimals: 0,
+    description: "Estimated steps in sprint blocks: sprint metres divided by the athlete's step length.",
+  },
+  contacts: {
+    label: "Ground contacts",
+    short: "Contacts",
+    unit: "contacts",
+    decimals: 0,
+    description: "Plyometric ground contacts (one per landing of one foot or both feet together).",
+  },
+  srpe: {
+    label: "sRPE load",
+    short: "sRPE",
+    unit: "AU",
+    decimals: 0,
+    description: "Session RPE (CR-10) times duration in minutes.",
+  },
+};
+
+export interface TeamLoadSettings {
+  /** HSR threshold, m/s; 5.5 m/s = 19.8 km/h (Bradley et al. 2009). */
+  hsrSpeedMs: number;
+  /** Near-max threshold as % of the athlete's vmax. */
+  nearMaxPct: number;
+  acwrMethod: AcwrMethod;
+  /** ACWR at or above this is a spike (Gabbett 2016: ≥1.5 "danger zone"). */
+  spikeRatio: number;
+  /** ACWR at or above this (and below spike) is climbing (top of Gabbett's 0.8–1.3 sweet spot). */
+  risingRatio: number;
+  /** ACWR below this is underloaded (bottom of the sweet spot). */
+  lowRatio: number;
+  /** A weekly change strictly greater than this % is flagged. */
+  weeklyChangeLimitPct: number;
+  /** Minimum hours between high-intensity sessions; exactly this many hours passes. */
+  recoveryHours: number;
+  /** Metric the ACWR zones are judged on. */
+  acwrMetric: Metric;
+  /** Metrics checked for a weekly jump; defaults to DEFAULT_JUMP_METRICS. */
+  jumpMetrics?: readonly Metric[];
+}
+
+/** sprintSteps is left out because it moves in lock-step with sprintM (same % change). */
+export const DEFAULT_JUMP_METRICS: readonly Metric[] = ["srpe", "hsrM", "nearMaxM", "contacts"];
+
+export const DEFAULT_TEAM_LOAD_SETTINGS: TeamLoadSettings = {
+  hsrSpeedMs: 5.5,
+  nearMaxPct: 90,
+  acwrMethod: "ewma",
+  spikeRatio: 1.5,
+  risingRatio: 1.3,
+  lowRatio: 0.8,
+  weeklyChangeLimitPct: 15,
+  recoveryHours: 48,
+  acwrMetric: "srpe",
+};
+
+export type SessionStatus = "draft" | "published" | "cancelled";
+
+export interface SessionInput {
+  id: string;
+  date: string;
+  /** "HH:MM", local wall-clock time. */
+  startTime: string;
+  durationMin: number;
+  plannedRpe: number;
+  status: SessionStatus;
+  blocks: BlockInput[];
+}
+
+export type Completion = "yes" | "partly" | "no";
+
+export interface LogInput {
+  sessionId: string;
+  completion: Completion;
+  rpe: number | null;
+  minutes: number | null;
+  /** Block id → reps done (out of sets×reps; for plyometric blocks out of total reps across drills). */
+  completedReps?: Record<string, number> | null;
+}
+
+export type LoadView = "actual" | "projected";
+
+export type MetricValues = Record<Metric, number>;
+
+export interface ContactsByIntensity {
+  low: number;
+  moderate: number;
+  high: number;
+  total: number;
+}

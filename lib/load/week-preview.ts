@@ -1,0 +1,158 @@
+import { acwrInto, allocAcwrColumns, isProvisional } from "./acwr";
+import { computeAthleteColumns } from "./athlete-load";
+import { resolveProfile } from "./block-metrics";
+import { dateFromDayIndex, dayIndex } from "./dates";
+import { computeFlags, type Flag, type FlagSession } from "./flags";
+import { buildDailyColumns, effectiveSessions, indexLogs } from "./series";
+import {
+  METRICS,
+  type AthleteProfile,
+  type LoadView,
+  type LogInput,
+  type Metric,
+  type SessionInput,
+  type TeamLoadSettings,
+} from "./types";
+import { summariseWeek, type WeekSummary } from "./week-summary";
+
+export interface WeekPreviewInput {
+  /** Consecutive dates before the week (normally ending the day before weekStart); may be empty. */
+  historyDates: readonly string[];
+  /** Daily values aligned with historyDates. */
+  historyValues: Record<Metric, ArrayLike<number>>;
+  weekSessions: readonly SessionInput[];
+  weekLogs: readonly LogInput[];
+  profile: AthleteProfile;
+  settings: TeamLoadSettings;
+  weekStart: string;
+  today: string;
+  /** Default "projected": the planner shows the plan. */
+  view?: LoadView;
+  /** First day with data on record (for "provisional"); defaults to historyDates[0]. */
+  firstDataDate?: string | null;
+  /** Sessions counted in the view shortly before the week, for the recovery-window check. */
+  priorSessions?: readonly FlagSession[];
+}
+
+/**
+ * Fast path for the drag preview: evaluates only the week's sessions and recomputes the ACWR of the team
+ * metric over history + week. With the full history (buildWeekPreviewContext's default) the result equals
+ * computeAthleteLoad's week and flags exactly; a shorter history shifts the EWMA seed slightly.
+ */
+export function computeWeekPreview(input: WeekPreviewInput): { week: WeekSummary; flags: Flag[] } {
+  const { settings } = input;
+  const view = input.view ?? "projected";
+  const ws = dayIndex(input.weekStart);
+  const todayDay = dayIndex(input.today);
+  const historyStart = input.historyDates.length > 0 ? dayIndex(input.historyDates[0]) : ws;
+  const offset = Math.max(0, ws - historyStart);
+  const length = offset + 7;
+  const rp = resolveProfile(input.profile, settings);
+  const logsById = indexLogs(input.weekLogs);
+  const week = buildDailyColumns({ startDay: ws, length: 7, sessions: input.weekSessions, logsById, rp, view, todayDay });
+  const values = {} as Record<Metric, Float64Array>;
+  for (const m of METRICS) {
+    const col = new Float64Array(length);
+    const hist = input.historyValues[m];
+    const n = Math.min(offset, hist ? hist.length : 0);
+    for (let i = 0; i < n; i++) col[i] = hist[i];
+    col.set(week.values[m], offset);
+    values[m] = col;
+  }
+  const missing = new Uint8Array(length);
+  missing.set(week.missing, offset);
+  let firstData = input.firstDataDate ? dayIndex(input.firstDataDate) - historyStart : input.historyDates.length > 0 ? 0 : -1;
+  if (week.firstDataIndex >= 0 && (firstData < 0 || offset + week.firstDataIndex < firstData)) {
+    firstData = offset + week.firstDataIndex;
+  }
+  const acwr = allocAcwrColumns(length);
+  acwrInto(values[settings.acwrMetric], settings.acwrMethod, acwr, "first");
+  const provisional = new Uint8Array(length);
+  for (let i = offset; i < length; i++) provisional[i] = isProvisional(i, firstData) ? 1 : 0;
+  const firstDate = dateFromDayIndex(historyStart);
+  const summary = summariseWeek({
+    firstDate,
+    values,
+    ratio: acwr.ratio,
+    provisional,
+    missing,
+    settings,
+    weekStart: input.weekStart,
+  });
+  const sessions: FlagSession[] = [
+    ...(input.priorSessions ?? []),
+    ...effectiveSessions(input.weekSessions, logsById, rp, view, todayDay, ws, ws + 6),
+  ];
+  const flags = computeFlags({
+    firstDate,
+    values,
+    ratio: acwr.ratio,
+    provisional,
+    sessions,
+    profile: input.profile,
+    settings,
+    weekStart: input.weekStart,
+  });
+  return { week: summary, flags };
+}
+
+export interface WeekPreviewContextInput {
+  profile: AthleteProfile;
+  settings: TeamLoadSettings;
+  /** All the athlete's sessions; those inside the week are left out of the history. */
+  sessions: readonly SessionInput[];
+  logs: readonly LogInput[];
+  weekStart: string;
+  today: string;
+  view?: LoadView;
+  /** Keep only this many days of history (smaller payload, slightly different EWMA seed); default all. */
+  historyDays?: number;
+}
+
+export interface WeekPreviewContext {
+  historyDates: string[];
+  /** Plain arrays so the context survives JSON. */
+  historyValues: Record<Metric, number[]>;
+  firstDataDate: string | null;
+  priorSessions: FlagSession[];
+}
+
+/** Everything computeWeekPreview needs besides the week itself; build once per athlete, reuse while dragging. */
+export function buildWeekPreviewContext(input: WeekPreviewContextInput): WeekPreviewContext {
+  const view = input.view ?? "projected";
+  const ws = dayIndex(input.weekStart);
+  const logsById = indexLogs(input.logs);
+  const req = {
+    profile: input.profile,
+    settings: input.settings,
+    sessions: input.sessions,
+    logsById,
+    view,
+    todayDay: dayIndex(input.today),
+    fromDay: ws - 7,
+    toDay: ws - 1,
+  };
+  const cols = computeAthleteColumns(req);
+  const keep = Math.min(cols.length, input.historyDays ?? cols.length);
+  const from = cols.length - keep;
+  const historyDates: string[] = [];
+  for (let i = from; i < cols.length; i++) historyDates.push(dateFromDayIndex(cols.startDay + i));
+  const historyValues = {} as Record<Metric, number[]>;
+  for (const m of METRICS) historyValues[m] = Array.from(cols.values[m].subarray(from));
+  let firstDataDay = cols.firstDataIndex >= 0 ? cols.startDay + cols.firstDataIndex : Number.POSITIVE_INFINITY;
+  for (const s of input.sessions) {
+    const d = dayIndex(s.date);
+    if (d >= ws && d < firstDataDay && (logsById.has(s.id) || s.status !== "cancelled")) firstDataDay = d;
+  }
+  const lookBack = Math.ceil(input.settings.recoveryHours / 24) + 1;
+  const rp = resolveProfile(input.profile, input.settings);
+  const priorSessions = effectiveSessions(input.sessions, logsById, rp, view, req.todayDay, ws - lookBack, ws - 1)
+    .filter((s) => s.highIntensity)
+    .map((s) => ({ id: s.id, date: s.date, startTime: s.startTime, contactsByIntensity: s.contactsByIntensity, highIntensity: true }));
+  return {
+    historyDates,
+    historyValues,
+    firstDataDate: Number.isFinite(firstDataDay) ? dateFromDayIndex(firstDataDay) : null,
+    priorSessions,
+  };
+}

@@ -1,0 +1,151 @@
+import { describe, expect, it } from "vitest";
+import {
+  acwrSeries,
+  coupledFromUncoupled,
+  coupledRatio,
+  ewma,
+  ewmaLambda,
+  uncoupledFromCoupled,
+  uncoupledRatio,
+} from "@/lib/load/acwr";
+
+const rep = (value: number, n: number): number[] => Array.from({ length: n }, () => value);
+
+describe("EWMA constants (Williams et al. 2017, BJSM 51:209: λ = 2/(N+1); methods.md §2 [C])", () => {
+  it("λ7 = 0.25 and λ28 = 2/29", () => {
+    expect(ewmaLambda(7)).toBe(0.25);
+    expect(ewmaLambda(28)).toBeCloseTo(0.0689655172, 10);
+    expect(1 - ewmaLambda(28)).toBeCloseTo(0.9310344828, 10);
+  });
+
+  it("weights λ(1−λ)^k, half-lives and the weight of the last N days", () => {
+    const l7 = ewmaLambda(7);
+    const l28 = ewmaLambda(28);
+    expect([0, 1, 2].map((k) => l7 * (1 - l7) ** k)).toEqual([0.25, 0.1875, 0.140625]);
+    expect(l28 * (1 - l28)).toBeCloseTo(0.064209, 6);
+    expect(l28 * (1 - l28) ** 2).toBeCloseTo(0.059781, 6);
+    expect(Math.log(0.5) / Math.log(1 - l7)).toBeCloseTo(2.4094, 4);
+    expect(Math.log(0.5) / Math.log(1 - l28)).toBeCloseTo(9.6999, 4);
+    expect(1 - 0.75 ** 7).toBeCloseTo(0.866516, 6);
+    expect(1 - (27 / 29) ** 28).toBeCloseTo(0.86478, 6);
+  });
+
+  it("an impulse on day 1 (seed 0) decays with exactly these weights", () => {
+    const e = ewma([100, 0, 0], 7, "zero");
+    expect(Array.from(e)).toEqual([25, 18.75, 14.0625]);
+  });
+});
+
+describe("EWMA check values (methods.md §2 [C], recurrence of Williams et al. 2017)", () => {
+  it("E1: loads [100, 200] seeded with day 1 → acute 125, chronic 106.896552, ratio 1.169355", () => {
+    const s = acwrSeries([100, 200], "ewma");
+    expect(s.acute[1]).toBe(125);
+    expect(s.chronic[1]).toBeCloseTo(3100 / 29, 9);
+    expect(s.chronic[1]).toBeCloseTo(106.896552, 6);
+    expect(s.ratio[1]).toBeCloseTo(1.169355, 6);
+  });
+
+  it("E1 matches pandas ewm(span=N, adjust=False): y0 = x0, y_t = (1−α)y_{t−1} + αx_t (pandas.Series.ewm docs)", () => {
+    const xs = [3, 7, 1, 9, 4];
+    const alpha = 2 / (7 + 1);
+    let y = xs[0];
+    const expected = xs.map((x, i) => (i === 0 ? y : (y = (1 - alpha) * y + alpha * x)));
+    expect(Array.from(ewma(xs, 7))).toEqual(expected);
+  });
+
+  it("E2: 21×300 then 7×600, seed = first → day 28 acute 559.954834, chronic 418.079509, ratio 1.339350", () => {
+    const loads = [...rep(300, 21), ...rep(600, 7)];
+    const s = acwrSeries(loads, "ewma");
+    expect(s.acute[27]).toBeCloseTo(559.954834, 6);
+    expect(s.chronic[27]).toBeCloseTo(418.079509, 6);
+    expect(s.ratio[27]).toBeCloseTo(1.33935, 6);
+  });
+
+  it("E2 with a seed of 0 → acute 559.859590, chronic 377.513460, ratio 1.483019 (the seed matters)", () => {
+    const loads = [...rep(300, 21), ...rep(600, 7)];
+    const s = acwrSeries(loads, "ewma", { seed: "zero" });
+    expect(s.acute[27]).toBeCloseTo(559.85959, 6);
+    expect(s.chronic[27]).toBeCloseTo(377.51346, 6);
+    expect(s.ratio[27]).toBeCloseTo(1.483019, 6);
+  });
+
+  it("E3: a constant load seeded with itself keeps both EWMAs at L and the ratio at exactly 1", () => {
+    const s = acwrSeries(rep(420, 60), "ewma");
+    expect(s.acute.every((v) => v === 420)).toBe(true);
+    expect(s.chronic.every((v) => v === 420)).toBe(true);
+    expect(s.ratio.every((r) => r === 1)).toBe(true);
+  });
+});
+
+describe("rolling ACWR (Hulin 2016 coupled; Lolli 2019 / Gabbett 2019 uncoupled; methods.md §1 [C])", () => {
+  it("R1 weekly form: A 1800, W 1200/1100/1000 → C = 1.411765, U = 1.636364", () => {
+    const c = coupledRatio(1800, 1200, 1100, 1000)!;
+    const u = uncoupledRatio(1800, 1200, 1100, 1000)!;
+    expect(c).toBeCloseTo(1.411765, 6);
+    expect(u).toBeCloseTo(1.636364, 6);
+    // Exact link U = 3C / (4 − C) and back (derived, methods.md §1).
+    expect(uncoupledFromCoupled(c)).toBeCloseTo(u, 12);
+    expect(coupledFromUncoupled(u)).toBeCloseTo(c, 12);
+  });
+
+  it("R1 daily form gives the same ratios when each week is spread over its 7 days", () => {
+    const loads = [...rep(1000 / 7, 7), ...rep(1100 / 7, 7), ...rep(1200 / 7, 7), ...rep(1800 / 7, 7)];
+    expect(acwrSeries(loads, "rolling_coupled").ratio[27]).toBeCloseTo(1.411765, 6);
+    expect(acwrSeries(loads, "rolling_uncoupled").ratio[27]).toBeCloseTo(1.636364, 6);
+  });
+
+  it("R2: a constant 150 AU for 28 days gives C = U = 1", () => {
+    expect(acwrSeries(rep(150, 28), "rolling_coupled").ratio[27]).toBeCloseTo(1, 12);
+    expect(acwrSeries(rep(150, 28), "rolling_uncoupled").ratio[27]).toBeCloseTo(1, 12);
+  });
+
+  it("R3: 21×150 then 7×300 → acute 300, coupled chronic 187.5 (C = 1.6), uncoupled chronic 150 (U = 2.0)", () => {
+    const loads = [...rep(150, 21), ...rep(300, 7)];
+    const c = acwrSeries(loads, "rolling_coupled");
+    const u = acwrSeries(loads, "rolling_uncoupled");
+    expect(c.acute[27]).toBeCloseTo(300, 9);
+    expect(c.chronic[27]).toBeCloseTo(187.5, 9);
+    expect(c.ratio[27]).toBeCloseTo(1.6, 9);
+    expect(u.chronic[27]).toBeCloseTo(150, 9);
+    expect(u.ratio[27]).toBeCloseTo(2.0, 9);
+    // The same series under EWMA (E2 scaled by ½) gives 1.339350: the method must be pinned.
+    expect(acwrSeries(loads, "ewma").ratio[27]).toBeCloseTo(1.33935, 6);
+  });
+
+  it("uncoupled chronic window is empty (no ratio) during the first 7 days", () => {
+    const s = acwrSeries(rep(100, 10), "rolling_uncoupled");
+    expect(s.ratio.slice(0, 7)).toEqual(rep(0, 7).map(() => null));
+    expect(s.ratio[7]).toBeCloseTo(1, 12);
+  });
+});
+
+describe("provisional ratios and zero chronic (design choices, methods.md §2 and §9)", () => {
+  it("ratios with fewer than 28 days of history are provisional", () => {
+    const s = acwrSeries(rep(100, 40), "ewma");
+    expect(s.provisional[26]).toBe(true);
+    expect(s.provisional[27]).toBe(false);
+    expect(s.provisional[39]).toBe(false);
+  });
+
+  it("history counts from the first day with data", () => {
+    const s = acwrSeries(rep(100, 60), "ewma", { firstDataIndex: 10 });
+    expect(s.provisional[36]).toBe(true);
+    expect(s.provisional[37]).toBe(false);
+  });
+
+  it("chronic 0 gives null, never Infinity or NaN", () => {
+    for (const method of ["ewma", "rolling_coupled", "rolling_uncoupled"] as const) {
+      const s = acwrSeries(rep(0, 30), method);
+      expect(s.ratio.every((r) => r === null)).toBe(true);
+    }
+    expect(coupledRatio(0, 0, 0, 0)).toBeNull();
+    expect(uncoupledRatio(500, 0, 0, 0)).toBeNull();
+  });
+
+  it("a 28-day block of rest after training is exactly 0, so no ratio is invented from rounding residue", () => {
+    const loads = [...Array.from({ length: 90 }, (_, i) => 137.3 + (i % 5) * 41.9), ...rep(0, 30)];
+    const s = acwrSeries(loads, "rolling_coupled");
+    expect(s.chronic[119]).toBe(0);
+    expect(s.ratio[119]).toBeNull();
+  });
+});

@@ -1,0 +1,86 @@
+import { describe, expect, it } from "vitest";
+import { ACC_SIZE } from "@/lib/load/block-metrics";
+import { blockMetrics } from "@/lib/load/block-metrics";
+import { actualSessionMetrics, metricValueFromAcc, metricsFromAcc, sessionMetrics, srpe } from "@/lib/load/session-metrics";
+import { METRICS } from "@/lib/load/types";
+import { PROFILE, SETTINGS, drill, log, plyoBlock, runBlock, session } from "./fixtures";
+
+describe("sRPE (Foster et al. 2001, JSCR 15:109; methods.md §3 S1 [C])", () => {
+  it("S1: RPE 7 × 60 min = 420 AU; RPE 5 × 45 min = 225 AU", () => {
+    expect(srpe(7, 60)).toBe(420);
+    expect(srpe(5, 45)).toBe(225);
+  });
+});
+
+const blocks = [
+  runBlock("acceleration", { sets: 2, reps: 4, distanceM: 20, intensityPct: 95 }, "b-acc"),
+  runBlock("max_velocity", { reps: 4, distanceM: 30, runInM: 20, start: "flying", intensityPct: 98 }, "b-mv"),
+  plyoBlock([drill(3, 10, 1, "moderate"), drill(2, 5, 2, "high")], "b-plyo"),
+];
+
+describe("sessionMetrics (as planned)", () => {
+  it("sums the blocks and sets sRPE = planned RPE × duration", () => {
+    const s = session("2026-03-10", { plannedRpe: 7, durationMin: 60, blocks });
+    const m = sessionMetrics(s, PROFILE, SETTINGS);
+    const byBlock = blocks.map((b) => blockMetrics(b, PROFILE, SETTINGS));
+    expect(m.metrics.hsrM).toBeCloseTo(byBlock[0].hsrM + byBlock[1].hsrM, 12);
+    expect(m.metrics.sprintM).toBe(160 + 200);
+    expect(m.metrics.contacts).toBe(50);
+    expect(m.contactsByIntensity).toEqual({ low: 0, moderate: 30, high: 20, total: 50 });
+    expect(m.metrics.srpe).toBe(420);
+    expect(m.highIntensity).toBe(true);
+    expect(m.maxIntensityPct).toBe(98);
+  });
+
+  it("is high-intensity only with a max_velocity block or high-intensity plyometrics", () => {
+    const acc = session("2026-03-10", { blocks: [blocks[0]] });
+    expect(sessionMetrics(acc, PROFILE, SETTINGS).highIntensity).toBe(false);
+    const hiPlyo = session("2026-03-10", { blocks: [plyoBlock([drill(1, 5, 1, "high")])] });
+    expect(sessionMetrics(hiPlyo, PROFILE, SETTINGS).highIntensity).toBe(true);
+  });
+
+  it("metricValueFromAcc follows METRICS order", () => {
+    const acc = new Float64Array(ACC_SIZE).map((_, i) => i + 1);
+    const rec = metricsFromAcc(acc);
+    METRICS.forEach((m, k) => expect(metricValueFromAcc(acc, k)).toBe(rec[m]));
+  });
+});
+
+describe("actualSessionMetrics (as logged)", () => {
+  const s = session("2026-03-10", { plannedRpe: 6, durationMin: 50, blocks });
+  const planned = sessionMetrics(s, PROFILE, SETTINGS);
+
+  it("completion yes / partly / no scale the prescription by 1 / 0.5 / 0", () => {
+    const yes = actualSessionMetrics(s, log(s.id, { completion: "yes" }), PROFILE, SETTINGS);
+    const partly = actualSessionMetrics(s, log(s.id, { completion: "partly" }), PROFILE, SETTINGS);
+    const no = actualSessionMetrics(s, log(s.id, { completion: "no", rpe: 3, minutes: 20 }), PROFILE, SETTINGS);
+    expect(yes.metrics).toEqual(planned.metrics);
+    expect(partly.metrics.hsrM).toBeCloseTo(planned.metrics.hsrM / 2, 12);
+    expect(partly.metrics.contacts).toBe(25);
+    expect(Object.values(no.metrics).every((v) => v === 0)).toBe(true);
+    expect(no.highIntensity).toBe(false);
+  });
+
+  it("sRPE = logged RPE × logged minutes; nulls fall back to planned RPE and planned minutes × completion", () => {
+    expect(actualSessionMetrics(s, log(s.id, { rpe: 8, minutes: 55 }), PROFILE, SETTINGS).metrics.srpe).toBe(440);
+    expect(actualSessionMetrics(s, log(s.id, { completion: "partly" }), PROFILE, SETTINGS).metrics.srpe).toBe(6 * 25);
+    expect(actualSessionMetrics(s, log(s.id, { rpe: 9 }), PROFILE, SETTINGS).metrics.srpe).toBe(9 * 50);
+    expect(actualSessionMetrics(s, log(s.id, { minutes: 30 }), PROFILE, SETTINGS).metrics.srpe).toBe(6 * 30);
+  });
+
+  it("completedReps scale each listed block by done ÷ prescribed; unlisted blocks use the completion factor", () => {
+    const a = actualSessionMetrics(
+      s,
+      log(s.id, { completion: "partly", completedReps: { "b-acc": 4, "b-plyo": 20 } }),
+      PROFILE,
+      SETTINGS,
+    );
+    const acc = blockMetrics(blocks[0], PROFILE, SETTINGS);
+    const mv = blockMetrics(blocks[1], PROFILE, SETTINGS);
+    // b-acc: 4 of 8 reps; b-mv: not listed → partly 0.5; b-plyo: 20 of 40 total reps → half the contacts.
+    expect(a.metrics.sprintM).toBeCloseTo(acc.sprintM * 0.5 + mv.sprintM * 0.5, 12);
+    expect(a.metrics.contacts).toBe(25);
+    const all = actualSessionMetrics(s, log(s.id, { completedReps: { "b-mv": 2 } }), PROFILE, SETTINGS);
+    expect(all.metrics.sprintM).toBeCloseTo(acc.sprintM + mv.sprintM / 2, 12);
+  });
+});
