@@ -54,7 +54,7 @@ describe("getSquadLoadInputs", () => {
 
   it("uses a constant number of queries whatever the squad size", async () => {
     let count = 0;
-    const opts = d.sequelize.options as { logging?: unknown };
+    const opts = (d.sequelize as unknown as { options: { logging?: unknown } }).options;
     const before = opts.logging;
     opts.logging = () => void count++;
     try {
