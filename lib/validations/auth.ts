@@ -1,7 +1,7 @@
 import { z } from "zod";
 
 export const signInSchema = z.object({
-  email: z.email("Enter a valid e-mail address").trim().toLowerCase(),
+  email: z.string().trim().toLowerCase().pipe(z.email("Enter a valid e-mail address")),
   password: z.string().min(1, "Enter your password").max(200),
 });
 export type SignInInput = z.infer<typeof signInSchema>;

@@ -5,12 +5,13 @@ export const roleSchema = z.enum(ROLES, { message: "Choose a role" });
 
 export const addMemberSchema = z.object({
   name: z.string().trim().min(2, "Enter the member's name").max(120, "Keep the name under 120 characters"),
-  email: z.email("Enter a valid e-mail address").trim().toLowerCase(),
+  email: z.string().trim().toLowerCase().pipe(z.email("Enter a valid e-mail address")),
   role: roleSchema,
   /** For an athlete: link an existing athlete profile instead of creating one. */
   athleteId: z.coerce.number().int().positive().optional(),
 });
 export type AddMemberInput = z.infer<typeof addMemberSchema>;
+export type AddMemberFormValues = z.input<typeof addMemberSchema>;
 
 export const changeRoleSchema = z.object({ role: roleSchema });
 export type ChangeRoleInput = z.infer<typeof changeRoleSchema>;

@@ -1,0 +1,83 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { addMemberAction } from "@/app/(workspace)/members/actions";
+import { Button } from "@/components/ui/button";
+import { Field, Input, Select } from "@/components/ui/field";
+import { ROLES, ROLE_LABEL } from "@/lib/auth/roles";
+import { addMemberSchema, type AddMemberFormValues, type AddMemberInput } from "@/lib/validations/members";
+
+export function AddMemberForm({ unlinkedAthletes }: { unlinkedAthletes: { id: number; name: string }[] }) {
+  const [message, setMessage] = useState<{ tone: "error" | "ok"; text: string; link?: string | null }>();
+  const { register, handleSubmit, watch, reset, setError, formState } = useForm<AddMemberFormValues, unknown, AddMemberInput>({
+    resolver: zodResolver(addMemberSchema),
+    defaultValues: { name: "", email: "", role: "coach" },
+  });
+  const role = watch("role");
+
+  const onSubmit = handleSubmit(async (values) => {
+    setMessage(undefined);
+    const result = await addMemberAction({ ...values, athleteId: values.athleteId || undefined });
+    if (!result.ok) {
+      for (const [field, messages] of Object.entries(result.fields ?? {})) {
+        if (field === "name" || field === "email" || field === "role" || field === "athleteId") setError(field, { message: messages[0] });
+      }
+      setMessage({ tone: "error", text: result.message });
+      return;
+    }
+    reset({ name: "", email: "", role: values.role });
+    setMessage({
+      tone: "ok",
+      text: result.data.inviteUrl ? `Added ${values.name}. Send them this one-time link to set a password (valid 7 days):` : `Added ${values.name}; they already have a password.`,
+      link: result.data.inviteUrl,
+    });
+  });
+
+  const { errors, isSubmitting } = formState;
+  return (
+    <form onSubmit={onSubmit} noValidate className="mt-4 space-y-4" data-testid="add-member-form">
+      <Field label="Name" htmlFor="member-name" error={errors.name?.message}>
+        <Input id="member-name" aria-invalid={!!errors.name} {...register("name")} />
+      </Field>
+      <Field label="E-mail" htmlFor="member-email" error={errors.email?.message}>
+        <Input id="member-email" type="email" aria-invalid={!!errors.email} {...register("email")} />
+      </Field>
+      <Field label="Role" htmlFor="member-role" error={errors.role?.message}>
+        <Select id="member-role" {...register("role")}>
+          {ROLES.map((r) => (
+            <option key={r} value={r}>
+              {ROLE_LABEL[r]}
+            </option>
+          ))}
+        </Select>
+      </Field>
+      {role === "athlete" && unlinkedAthletes.length > 0 ? (
+        <Field label="Athlete profile" htmlFor="member-athlete" error={errors.athleteId?.message} hint="Link an existing profile, or leave empty to create one.">
+          <Select id="member-athlete" {...register("athleteId")}>
+            <option value="">Create a new profile</option>
+            {unlinkedAthletes.map((a) => (
+              <option key={a.id} value={a.id}>
+                {a.name}
+              </option>
+            ))}
+          </Select>
+        </Field>
+      ) : null}
+      {message ? (
+        <div role={message.tone === "error" ? "alert" : "status"} data-testid="add-member-message" className={message.tone === "error" ? "rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike" : "rounded-lg bg-lane-50 px-3 py-2 text-sm text-lane-800"}>
+          <p>{message.text}</p>
+          {message.link ? (
+            <p className="mt-1 break-all font-mono text-xs" data-testid="invite-link">
+              {message.link}
+            </p>
+          ) : null}
+        </div>
+      ) : null}
+      <Button type="submit" className="w-full" disabled={isSubmitting}>
+        {isSubmitting ? "Adding…" : "Add member"}
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,115 @@
+import { afterAll, beforeAll, expect, it } from "vitest";
+import type { Browser } from "playwright-core";
+import { DEMO_ATHLETES, DEMO_STAFF } from "@/lib/seed/demo-club";
+import { apiSession, describeBrowser, launchBrowser, screenshot, signIn, startApp, type App } from "./harness";
+
+const headCoach = DEMO_STAFF.find((s) => s.role === "head_coach")!;
+const physio = DEMO_STAFF.find((s) => s.role === "physio")!;
+const athlete = DEMO_ATHLETES.find((a) => a.email)!;
+
+describeBrowser("foundation journeys", () => {
+  let app: App;
+  let browser: Browser;
+
+  beforeAll(async () => {
+    app = await startApp();
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await app?.stop();
+  });
+
+  it("serves the landing page with no console errors", async () => {
+    const page = await browser.newPage();
+    const errors: string[] = [];
+    page.on("console", (m) => m.type() === "error" && errors.push(m.text()));
+    await page.goto(app.url, { waitUntil: "networkidle" });
+    await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toMatch(/planned one week at a time/);
+    expect(await page.evaluate(() => document.fonts.check("16px Inter"))).toBe(true);
+    await screenshot(page, "landing");
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it("signs the head coach in and shows the squad", async () => {
+    const page = await browser.newPage();
+    await signIn(page, app, headCoach.email);
+    await page.goto(`${app.url}/squad`);
+    const rows = page.getByTestId("squad-row");
+    await rows.first().waitFor();
+    expect(await rows.count()).toBe(DEMO_ATHLETES.length);
+    expect(await page.getByTestId("viewer-role").textContent()).toBe("Head coach");
+    await screenshot(page, "squad");
+    await page.goto(`${app.url}/members`);
+    expect(await page.getByTestId("member-row").count()).toBeGreaterThanOrEqual(5);
+    await page.close();
+  });
+
+  it("refuses an athlete a squad screen and hides squad navigation", async () => {
+    const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
+    await signIn(page, app, athlete.email!);
+    const nav = await page.getByRole("navigation", { name: "Main" }).textContent();
+    expect(nav).not.toMatch(/Squad|Members|Week plan/);
+    await page.goto(`${app.url}/squad`);
+    await page.getByTestId("not-allowed").waitFor();
+    await page.goto(`${app.url}/members`);
+    await page.getByTestId("not-allowed").waitFor();
+    await screenshot(page, "athlete-refused");
+    await page.close();
+  });
+
+  it("shows a clear message on a wrong password", async () => {
+    const page = await browser.newPage();
+    await page.goto(`${app.url}/sign-in`);
+    await page.getByLabel("E-mail").fill(headCoach.email);
+    await page.getByLabel("Password").fill("definitely-wrong");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await expect(page.getByTestId("sign-in-error").textContent()).resolves.toMatch(/not right/);
+    // Bad input is caught field by field before it reaches the server.
+    await page.getByLabel("E-mail").fill("not-an-email");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await expect(page.getByText("Enter a valid e-mail address").count()).resolves.toBe(1);
+    await page.close();
+  });
+
+  it("lets the head coach add a member, who then sets a password from the one-time link", async () => {
+    const page = await browser.newPage();
+    await signIn(page, app, headCoach.email);
+    await page.goto(`${app.url}/members`);
+    const form = page.getByTestId("add-member-form");
+    await form.getByRole("button", { name: "Add member" }).click();
+    await expect(form.getByText("Enter the member's name").count()).resolves.toBe(1);
+    await form.getByLabel("Name").fill("Lior Fennimore");
+    await form.getByLabel("E-mail").fill(headCoach.email);
+    await form.getByRole("button", { name: "Add member" }).click();
+    await expect(form.getByText("Already a member of this team").count()).resolves.toBe(1);
+    await form.getByLabel("E-mail").fill("lior@harbourvale.test");
+    await form.getByLabel("Role").selectOption("physio");
+    await form.getByRole("button", { name: "Add member" }).click();
+    const link = (await page.getByTestId("invite-link").textContent())!;
+    expect(link).toContain("/invite/");
+    await screenshot(page, "members");
+
+    const guest = await browser.newContext();
+    const invitee = await guest.newPage();
+    await invitee.goto(link);
+    await invitee.getByLabel("New password").fill("lior-new-password");
+    await invitee.getByLabel("Repeat it").fill("lior-new-password");
+    await invitee.getByRole("button", { name: "Set password" }).click();
+    await invitee.waitForURL(/\/sign-in/);
+    await signIn(invitee, app, "lior@harbourvale.test", "lior-new-password");
+    expect(await invitee.getByTestId("viewer-role").textContent()).toBe("Physio");
+    await guest.close();
+    await page.close();
+  });
+
+  it("answers the session endpoint without password hashes", async () => {
+    const s = await apiSession(app, physio.email);
+    const res = await s.fetch("/api/auth/session");
+    const body = await res.text();
+    expect(res.status).toBe(200);
+    expect(body).toContain(physio.email);
+    expect(body).not.toMatch(/password|\$2[aby]\$/i);
+  });
+});
