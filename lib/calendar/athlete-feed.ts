@@ -1,6 +1,9 @@
 import { addSessionEvent, assertTimeZone, calendarText, defaultSessionUrl, escapeText, newCalendar } from "./session-event";
 import type { CalendarPerson, CalendarSession, CalendarTeam, SessionUrlFn } from "./types";
 
+/** Content-Type for serving a feed or attaching an .ics file. */
+export const ICS_CONTENT_TYPE = "text/calendar; charset=utf-8";
+
 export interface AthleteFeedInput {
   team: CalendarTeam;
   athlete: Pick<CalendarPerson, "name">;

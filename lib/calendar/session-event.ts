@@ -11,13 +11,13 @@ const DATE = /^\d{4}-\d{2}-\d{2}$/;
 const TIME = /^([01]\d|2[0-3]):[0-5]\d$/;
 
 /** Stable across feed and invitations, so a client updates the same event (RFC 5545 §3.8.4.7). */
-export function sessionUid(sessionId: string): string {
+export function sessionUid(sessionId: string | number): string {
   return `session-${sessionId}@sprintwright`;
 }
 
 export function defaultSessionUrl(appUrl: string): SessionUrlFn {
   const base = appUrl.replace(/\/+$/, "");
-  return (s) => `${base}/sessions/${encodeURIComponent(s.id)}`;
+  return (s) => `${base}/sessions/${encodeURIComponent(String(s.id))}`;
 }
 
 /** TEXT values are escaped by ical-generator, except the calendar NAME: do it here (RFC 5545 §3.3.11). */

@@ -2,7 +2,8 @@ import type { BlockInput, SessionStatus } from "@/lib/load/types";
 
 /** A training session as the calendar needs it (plain data; the caller loads it). */
 export interface CalendarSession {
-  id: string;
+  /** Database ids are numbers; both work (the UID is built from the text form). */
+  id: string | number;
   /** Local date in the team's zone, YYYY-MM-DD. */
   date: string;
   /** Local wall-clock start, HH:MM. */

@@ -73,6 +73,7 @@ export async function startFakeSmtp(options: FakeSmtpOptions = {}): Promise<Fake
     allowInsecureAuth: true,
     size: MAX_MESSAGE_BYTES,
     logger: false,
+    disableReverseLookup: true, // no DNS round trip per connection
     onAuth(auth, _session, callback) {
       callback(null, { user: auth.username ?? "local" });
     },

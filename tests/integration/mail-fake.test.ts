@@ -115,6 +115,16 @@ describe("fake SMTP mailbox", () => {
     expect(isFakeMailbox(readMailConfig({ NODE_ENV: "production", SMTP_URL: "smtp://127.0.0.1:2525" }))).toBe(false);
   });
 
+  it("reads SMTP settings from the environment and names a wrong variable", () => {
+    const c = readMailConfig({ SMTP_HOST: "smtp.example.test", SMTP_PORT: "465", SMTP_USER: "u", SMTP_PASS: "p" });
+    expect(c).toMatchObject({ host: "smtp.example.test", port: 465, secure: true, auth: { user: "u", pass: "p" }, loopback: false });
+    expect(readMailConfig({}).port).toBe(2525);
+    expect(readMailConfig({}).from).toBe("Sprintwright <no-reply@sprintwright.local>");
+    expect(() => readMailConfig({ SMTP_URL: "http://x" })).toThrow(/SMTP_URL/);
+    expect(() => readMailConfig({ SMTP_HOST: "h", SMTP_PORT: "99999" })).toThrow(/SMTP_PORT/);
+    expect(() => readMailConfig({ NODE_ENV: "production" })).toThrow(/SMTP_URL/);
+  });
+
   it("throws on a refused send so the outbox can retry", async () => {
     const closed = readMailConfig({ NODE_ENV: "test", SMTP_URL: "smtp://127.0.0.1:1" });
     await expect(sendMail({ to: "a@b.test", subject: "x", html: "<p>x</p>", text: "x" }, closed)).rejects.toThrow();
