@@ -93,7 +93,7 @@ function acwrFlag(input: FlagInput, from: number, to: number, first: number): Fl
       kind: "rising",
       level: "caution",
       threshold: settings.risingRatio,
-      reason: `${name} peaks at ${r} on ${on}, above the climbing threshold ${formatRatio(settings.risingRatio)} and below the spike threshold ${formatRatio(settings.spikeRatio)}.${note}`,
+      reason: `${name} peaks at ${r} on ${on}, at or above the climbing threshold ${formatRatio(settings.risingRatio)} and below the spike threshold ${formatRatio(settings.spikeRatio)}.${note}`,
     };
   }
   if (peak.value < settings.lowRatio - 1e-9) {

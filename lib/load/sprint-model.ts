@@ -71,6 +71,7 @@ export function metresAtOrAbove(speed: number, rep: RepShape): number {
   if (speed <= 0) return totalDistance;
   if (speed >= targetSpeed) return 0;
   const tStar = -tau * Math.log1p(-speed / targetSpeed);
-  const xStar = targetSpeed * tStar - tau * speed;
+  // Clamped: for a tiny speed the two terms cancel and rounding could push x(t*) below 0.
+  const xStar = Math.max(0, targetSpeed * tStar - tau * speed);
   return xStar >= totalDistance ? 0 : totalDistance - xStar;
 }
