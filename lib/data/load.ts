@@ -31,6 +31,7 @@ export type LoadAthleteInputs = {
 };
 
 export type LoadInputs = {
+  teamId: number;
   settings: TeamLoadSettings;
   timeZone: string;
   /** Engine convention: 0 = Sunday, 1 = Monday … 6 = Saturday (the Team row stores ISO 1–7). */
@@ -56,6 +57,16 @@ export function historyRange({ from, to }: { from: string; to: string }): { from
 export function teamToday({ timeZone, now }: { timeZone: string; now?: Date }): string {
   const dt = (now ? DateTime.fromJSDate(now) : DateTime.now()).setZone(timeZone);
   return (dt.isValid ? dt : DateTime.utc()).toISODate()!;
+}
+
+export type TeamClock = { teamId: number; timeZone: string; weekStartDay: number };
+
+/** The team's zone and week start (engine convention); 404 when the team does not exist. */
+export async function getTeamClock({ teamId, transaction }: { teamId: number; transaction?: Transaction }): Promise<TeamClock> {
+  const { Team } = await db();
+  const team = await Team.findByPk(teamId, { attributes: ["timeZone", "weekStartDay"], raw: true, transaction });
+  if (!team) throw new AppError("not_found", "Not found");
+  return { teamId, timeZone: team.timeZone, weekStartDay: engineWeekStartDay(team.weekStartDay) };
 }
 
 /** ISO weekday (1 = Monday … 7 = Sunday) → engine weekday (0 = Sunday … 6 = Saturday). */
@@ -175,7 +186,7 @@ async function loadInputs({ teamId, athleteId, from, to, transaction }: Range & 
   }
   const sortOrder = (groupId: number | null) => (groupId !== null && groupById.has(groupId) ? groupById.get(groupId)!.sortOrder : 1e9);
   const list = [...byAthlete.values()].sort((x, y) => sortOrder(x.groupId) - sortOrder(y.groupId) || x.name.localeCompare(y.name));
-  return { settings, timeZone: team.timeZone, weekStartDay: engineWeekStartDay(team.weekStartDay), athletes: list };
+  return { teamId, settings, timeZone: team.timeZone, weekStartDay: engineWeekStartDay(team.weekStartDay), athletes: list };
 }
 
 /** Every athlete of the team with sessions (and blocks) and logs dated in [from, to], as engine inputs. */
