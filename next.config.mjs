@@ -5,6 +5,9 @@ const nextConfig = {
   // Lets tests and parallel builds use their own output folder.
   distDir: process.env.NEXT_DIST_DIR || ".next",
   poweredByHeader: false,
+  // The browser-test harness builds with this set: `npm run typecheck` checks types on its own in CI,
+  // so a half-written test file elsewhere in the tree does not stop the app from building.
+  typescript: { ignoreBuildErrors: process.env.NEXT_SKIP_TYPECHECK === "1" },
 };
 
 export default nextConfig;

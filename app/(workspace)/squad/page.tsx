@@ -26,11 +26,11 @@ export default async function SquadPage() {
               {group} <span className="font-normal normal-case tracking-normal">· {athletes.length}</span>
             </h2>
             <Card className="overflow-x-auto">
-              <table className="w-full min-w-[40rem] text-sm">
+              <table className="w-full min-w-[40rem] table-fixed text-sm">
                 <thead className="border-b border-ink-100 text-left text-xs text-ink-500">
                   <tr>
-                    <th className="px-4 py-2 font-medium">Athlete</th>
-                    <th className="px-4 py-2 font-medium">Max velocity</th>
+                    <th className="w-[30%] px-4 py-2 font-medium">Athlete</th>
+                    <th className="w-[20%] px-4 py-2 font-medium">Max velocity</th>
                     <th className="px-4 py-2 font-medium">τ</th>
                     <th className="px-4 py-2 font-medium">Step length</th>
                     <th className="px-4 py-2 font-medium">Body mass</th>
