@@ -1,0 +1,94 @@
+// Plain JSON shapes of the week plan, shared by lib/data/plan.ts, the route handlers and the week grid.
+import type { Flag, FlagLevel } from "@/lib/load/flags";
+import type { AthleteProfile, BlockKind, LogInput, PlyoDrill, RunningPrescription, SessionStatus, TeamLoadSettings } from "@/lib/load/types";
+import type { WeekPreviewContext } from "@/lib/load/week-preview";
+import type { WeekSummary } from "@/lib/load/week-summary";
+
+export type PlanBlock = {
+  id: number;
+  templateId: number | null;
+  position: number;
+  kind: BlockKind;
+  title: string;
+  running: RunningPrescription | null;
+  drills: PlyoDrill[] | null;
+  notes: string | null;
+};
+
+export type PlanSession = {
+  id: number;
+  athleteId: number;
+  date: string;
+  startTime: string;
+  durationMin: number;
+  title: string;
+  plannedRpe: number;
+  status: SessionStatus;
+  notes: string | null;
+  /** Optimistic lock: send it back with every write. */
+  version: number;
+  /** iCalendar SEQUENCE (RFC 5545 §3.8.7.4). */
+  sequence: number;
+  publishedAt: string | null;
+  /** The athlete has logged this session (it can no longer be moved). */
+  logged: boolean;
+  blocks: PlanBlock[];
+};
+
+export type PlanTemplate = {
+  id: number;
+  kind: BlockKind;
+  title: string;
+  running: RunningPrescription | null;
+  drills: PlyoDrill[] | null;
+  notes: string | null;
+  durationMin: number;
+  plannedRpe: number;
+};
+
+/** The week's numbers for one row, exactly as computeWeekPreview answers. */
+export type RowLoad = { week: WeekSummary; flags: Flag[]; topLevel: FlagLevel | null };
+
+export type PlanAthlete = {
+  id: number;
+  name: string;
+  groupId: number | null;
+  profile: AthleteProfile;
+  /** The week's sessions (cancelled ones included, shown faded), by date then start time. */
+  sessions: PlanSession[];
+  /** Logs of the week's sessions, in engine shape. */
+  logs: LogInput[];
+  /** History before the week, so the browser can recompute the week while a block is dragged. */
+  context: WeekPreviewContext;
+  /** The server's numbers for the week as stored. */
+  load: RowLoad;
+};
+
+export type PlanGroup = { id: number | null; name: string; athleteIds: number[] };
+
+export type PlanWeek = {
+  teamId: number;
+  timeZone: string;
+  /** ISO weekday the team's week starts on (1 = Monday … 7 = Sunday). */
+  weekStartDay: number;
+  weekStart: string;
+  weekEnd: string;
+  isoWeek: number;
+  isoYear: number;
+  days: string[];
+  today: string;
+  settings: TeamLoadSettings;
+  groups: PlanGroup[];
+  athletes: PlanAthlete[];
+  templates: PlanTemplate[];
+  /** The viewer may change the plan (head coach, coach). */
+  canEdit: boolean;
+  /** "own": an athlete seeing only their own row. */
+  scope: "team" | "own";
+};
+
+/** What each write answers: the sessions as they now are, and those that are gone. */
+export type PlanWriteResult = { sessions: PlanSession[]; removedIds: number[] };
+
+/** The body of a 409 "stale" answer. */
+export type StaleError = { code: "stale"; message: string; current: PlanSession | null };
