@@ -9,7 +9,7 @@ import { closeDb, db, type Db } from "@/models";
  * Points the app's database at a throwaway SQLite file for this test file, migrates it, and removes it
  * afterwards. Each vitest file runs in its own process (pool: forks), so the cached handle is per file.
  */
-export async function useTestDb(): Promise<Db & { storage: string }> {
+export async function setupTestDb(): Promise<Db & { storage: string }> {
   const dir = mkdtempSync(join(tmpdir(), "sprintwright-test-"));
   const storage = join(dir, "test.sqlite");
   process.env.DATABASE_URL = `file:${storage}`;

@@ -4,9 +4,9 @@ import { listMembershipsOfUser, verifyCredentials } from "@/lib/data/users";
 import { AppError } from "@/lib/errors";
 import { addMemberSchema } from "@/lib/validations/members";
 import { createTestTeam } from "../helpers/fixtures";
-import { useTestDb } from "../helpers/db";
+import { setupTestDb } from "../helpers/db";
 
-const d = await useTestDb();
+const d = await setupTestDb();
 const team = await createTestTeam(d, { name: "Members Club" });
 
 describe("members", () => {

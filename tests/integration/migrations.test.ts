@@ -2,9 +2,9 @@ import { describe, expect, it } from "vitest";
 import { QueryTypes, UniqueConstraintError } from "sequelize";
 import { createMigrator } from "@/lib/db/migrator";
 import { createTestTeam } from "../helpers/fixtures";
-import { useTestDb } from "../helpers/db";
+import { setupTestDb } from "../helpers/db";
 
-const d = await useTestDb();
+const d = await setupTestDb();
 
 async function tables(): Promise<string[]> {
   const [rows] = await d.sequelize.query("SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' ORDER BY name");

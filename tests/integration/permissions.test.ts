@@ -2,9 +2,9 @@ import { describe, expect, it } from "vitest";
 import { authorizeAthlete, authorizeTeam } from "@/lib/auth/authorize";
 import { AppError } from "@/lib/errors";
 import { createTestTeam } from "../helpers/fixtures";
-import { useTestDb } from "../helpers/db";
+import { setupTestDb } from "../helpers/db";
 
-const d = await useTestDb();
+const d = await setupTestDb();
 const a = await createTestTeam(d, { name: "Alpha Track" });
 const b = await createTestTeam(d, { name: "Bravo Track" });
 const ath = (team: typeof a, email: string) => team.users[email];
