@@ -2,7 +2,7 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { addMemberAction } from "@/app/(workspace)/members/actions";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
@@ -11,11 +11,11 @@ import { addMemberSchema, type AddMemberFormValues, type AddMemberInput } from "
 
 export function AddMemberForm({ unlinkedAthletes }: { unlinkedAthletes: { id: number; name: string }[] }) {
   const [message, setMessage] = useState<{ tone: "error" | "ok"; text: string; link?: string | null }>();
-  const { register, handleSubmit, watch, reset, setError, formState } = useForm<AddMemberFormValues, unknown, AddMemberInput>({
+  const { register, handleSubmit, control, reset, setError, formState } = useForm<AddMemberFormValues, unknown, AddMemberInput>({
     resolver: zodResolver(addMemberSchema),
     defaultValues: { name: "", email: "", role: "coach" },
   });
-  const role = watch("role");
+  const role = useWatch({ control, name: "role" });
 
   const onSubmit = handleSubmit(async (values) => {
     setMessage(undefined);
