@@ -1,0 +1,23 @@
+import { changeBlock } from "@/lib/data/plan";
+import { parseJson, parseParams, parseQuery, route } from "@/lib/http";
+import { blockParamsSchema, updateBlockSchema, versionQuerySchema } from "@/lib/validations/plan";
+import { sessionEditor } from "../../session-access";
+
+export const runtime = "nodejs";
+
+type Params = { sessionId: string; blockId: string };
+
+export const PATCH = route<Params>(async (req, { params }) => {
+  const { blockId } = parseParams(await params, blockParamsSchema);
+  const ctx = await sessionEditor(params);
+  const { version, block } = await parseJson(req, updateBlockSchema);
+  return Response.json(await changeBlock({ ...ctx, blockId, version, block }));
+});
+
+/** DELETE ?version= */
+export const DELETE = route<Params>(async (req, { params }) => {
+  const { blockId } = parseParams(await params, blockParamsSchema);
+  const ctx = await sessionEditor(params);
+  const { version } = parseQuery(req, versionQuerySchema);
+  return Response.json(await changeBlock({ ...ctx, blockId, version, block: null }));
+});

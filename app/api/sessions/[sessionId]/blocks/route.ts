@@ -1,0 +1,13 @@
+import { addBlock } from "@/lib/data/plan";
+import { parseJson, route } from "@/lib/http";
+import { addBlockSchema } from "@/lib/validations/plan";
+import { sessionEditor } from "../session-access";
+
+export const runtime = "nodejs";
+
+/** Appends a block: { version, templateId } or { version, block }. */
+export const POST = route<{ sessionId: string }>(async (req, { params }) => {
+  const ctx = await sessionEditor(params);
+  const input = await parseJson(req, addBlockSchema);
+  return Response.json(await addBlock({ ...ctx, input }), { status: 201 });
+});
