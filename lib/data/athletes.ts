@@ -1,4 +1,6 @@
 import "server-only";
+import { AppError } from "@/lib/errors";
+import type { AthleteInput } from "@/lib/validations/athlete";
 import { db } from "@/models";
 
 export type AthleteRow = {
@@ -64,4 +66,27 @@ export async function listUnlinkedAthletes({ teamId }: { teamId: number }) {
   const { Athlete } = await db();
   const rows = await Athlete.findAll({ where: { teamId, userId: null }, attributes: ["id", "name"], order: [["name", "ASC"]] });
   return rows.map((a) => ({ id: a.id, name: a.name }));
+}
+
+async function assertGroupOfTeam({ teamId, groupId }: { teamId: number; groupId: number | null }) {
+  if (groupId === null) return;
+  const { TrainingGroup } = await db();
+  if (!(await TrainingGroup.count({ where: { id: groupId, teamId } }))) {
+    throw new AppError("invalid", "Choose a training group of this team", { fields: { groupId: ["Unknown group"] } });
+  }
+}
+
+export async function createAthlete({ teamId, input }: { teamId: number; input: AthleteInput }): Promise<{ id: number }> {
+  const { Athlete } = await db();
+  await assertGroupOfTeam({ teamId, groupId: input.groupId });
+  const athlete = await Athlete.create({ teamId, userId: null, ...input });
+  return { id: athlete.id };
+}
+
+export async function updateAthlete({ teamId, athleteId, input }: { teamId: number; athleteId: number; input: AthleteInput }): Promise<{ id: number }> {
+  const { Athlete } = await db();
+  await assertGroupOfTeam({ teamId, groupId: input.groupId });
+  const [count] = await Athlete.update(input, { where: { id: athleteId, teamId } });
+  if (!count) throw new AppError("not_found", "No such athlete");
+  return { id: athleteId };
 }

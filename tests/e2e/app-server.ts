@@ -75,7 +75,7 @@ export async function startApp({ env = {}, seed = true }: { env?: Record<string,
     MAILBOX_DIR: join(dir, "mailbox"),
     ...env,
   };
-  const fullEnv = { ...process.env, ...appEnv, NODE_ENV: "production" } as NodeJS.ProcessEnv;
+  const fullEnv = { NEXT_TELEMETRY_DISABLED: "1", ...process.env, ...appEnv, NODE_ENV: "production" } as NodeJS.ProcessEnv;
   const prep = spawnSync(process.execPath, ["--conditions=react-server", "--import", "tsx", "scripts/db-prepare.ts", ...(seed ? [] : ["--no-seed"])], { cwd: ROOT, env: fullEnv, encoding: "utf8" });
   if (prep.status !== 0) throw new Error(`db-prepare failed:\n${prep.stdout}\n${prep.stderr}`);
 

@@ -1,7 +1,9 @@
 import Link from "next/link";
 import { Badge } from "@/components/ui/badge";
 import { Card, EmptyState, PageHeader } from "@/components/ui/card";
+import { buttonClass } from "@/components/ui/button";
 import { pageViewer } from "@/lib/auth/page-access";
+import { scopeOf } from "@/lib/auth/permissions";
 import { listSquad } from "@/lib/data/athletes";
 import { PLYO_LEVEL_LABEL, formatSpeed } from "@/lib/format/athlete";
 
@@ -17,7 +19,17 @@ export default async function SquadPage() {
   }
   return (
     <>
-      <PageHeader title="Squad" lead="Every athlete with the test values the load engine uses: max velocity, acceleration constant τ and step length." />
+      <PageHeader
+        title="Squad"
+        lead="Every athlete with the test values the load engine uses: max velocity, acceleration constant τ and step length."
+        actions={
+          scopeOf(viewer.role, "athletes:edit") === "team" ? (
+            <Link href="/squad/new" className={buttonClass({ variant: "secondary", size: "sm" })}>
+              Add athlete
+            </Link>
+          ) : null
+        }
+      />
       {squad.length === 0 ? <EmptyState title="No athletes yet">Add athletes from the members screen.</EmptyState> : null}
       <div className="space-y-6" data-testid="squad-list">
         {[...groups.entries()].map(([group, athletes]) => (

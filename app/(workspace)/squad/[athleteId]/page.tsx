@@ -2,7 +2,9 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Card, PageHeader } from "@/components/ui/card";
 import { pageAthlete } from "@/lib/auth/page-access";
-import { getAthlete } from "@/lib/data/athletes";
+import { AthleteForm } from "@/components/squad/athlete-form";
+import { scopeOf } from "@/lib/auth/permissions";
+import { getAthlete, listGroups } from "@/lib/data/athletes";
 import { PLYO_LEVEL_LABEL, formatSpeed } from "@/lib/format/athlete";
 
 export default async function AthleteProfilePage({ params }: { params: Promise<{ athleteId: string }> }) {
@@ -10,6 +12,8 @@ export default async function AthleteProfilePage({ params }: { params: Promise<{
   const viewer = await pageAthlete(Number(athleteId), "athletes:view");
   const athlete = await getAthlete({ teamId: viewer.teamId, athleteId: viewer.athlete.id });
   if (!athlete) notFound();
+  const canEdit = scopeOf(viewer.role, "athletes:edit") === "team";
+  const groups = canEdit ? await listGroups({ teamId: viewer.teamId }) : [];
   const facts: [string, string][] = [
     ["Training group", athlete.groupName ?? "None"],
     ["Max velocity", formatSpeed(athlete.vmaxMs)],
@@ -41,6 +45,27 @@ export default async function AthleteProfilePage({ params }: { params: Promise<{
           ))}
         </dl>
       </Card>
+      {canEdit ? (
+        <Card className="mt-6 p-5">
+          <h2 className="mb-4 font-semibold text-ink-950">Edit profile and test values</h2>
+          <AthleteForm
+            athleteId={athlete.id}
+            groups={groups}
+            initial={{
+              name: athlete.name,
+              groupId: athlete.groupId ?? "",
+              sex: athlete.sex ?? "",
+              birthDate: athlete.birthDate ?? "",
+              bodyMassKg: athlete.bodyMassKg ?? "",
+              vmaxMs: athlete.vmaxMs ?? "",
+              vmaxTestedOn: athlete.vmaxTestedOn ?? "",
+              tauS: athlete.tauS ?? "",
+              stepLengthM: athlete.stepLengthM ?? "",
+              plyoLevel: athlete.plyoLevel,
+            }}
+          />
+        </Card>
+      ) : null}
     </>
   );
 }

@@ -1,0 +1,29 @@
+import { z } from "zod";
+
+const optionalNumber = (min: number, max: number, label: string) =>
+  z.preprocess(
+    (v) => (v === "" || v === null || v === undefined ? null : v),
+    z.coerce.number({ message: `${label} must be a number` }).min(min, `${label} must be at least ${min}`).max(max, `${label} must be at most ${max}`).nullable(),
+  );
+
+const optionalDate = z.preprocess(
+  (v) => (v === "" || v === undefined ? null : v),
+  z.iso.date({ message: "Use a date like 2026-10-06" }).nullable(),
+);
+
+/** An athlete's profile and test values; ranges are generous bounds for sprinting humans, not norms. */
+export const athleteSchema = z.object({
+  name: z.string().trim().min(2, "Enter the athlete's name").max(120),
+  groupId: z.preprocess((v) => (v === "" || v === undefined ? null : v), z.coerce.number().int().positive().nullable()),
+  sex: z.preprocess((v) => (v === "" || v === undefined ? null : v), z.enum(["female", "male"]).nullable()),
+  birthDate: optionalDate,
+  bodyMassKg: optionalNumber(25, 200, "Body mass"),
+  vmaxMs: optionalNumber(4, 13, "Max velocity"),
+  vmaxTestedOn: optionalDate,
+  tauS: optionalNumber(0.4, 3, "τ"),
+  stepLengthM: optionalNumber(1, 3.2, "Step length"),
+  plyoLevel: z.enum(["beginner", "intermediate", "advanced"], { message: "Choose an experience level" }),
+});
+
+export type AthleteInput = z.infer<typeof athleteSchema>;
+export type AthleteFormValues = z.input<typeof athleteSchema>;
