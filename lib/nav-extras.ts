@@ -1,12 +1,23 @@
 import "server-only";
+import { createElement } from "react";
 import type { Viewer } from "@/lib/auth/access";
+import { can } from "@/lib/auth/permissions";
 import type { NavLink } from "@/components/shell/workspace-nav";
+import { UnreadBadge } from "@/components/notices/unread-badge";
+import { countUnreadAlerts } from "@/lib/data/alerts";
+import { isFakeMailbox } from "@/lib/mail/transport";
 
 /**
  * Navigation entries that depend on runtime state (e.g. the unread alert count, the local mailbox in
  * development). Features register here; kept separate so lib/nav.ts stays a plain, testable table.
+ * An entry with the href of a NAV item replaces that item (same place, e.g. with a badge).
  */
 export async function extraNavLinks(viewer: Viewer): Promise<NavLink[]> {
-  void viewer;
-  return [];
+  const links: NavLink[] = [];
+  if (can(viewer.role, "alerts:view", "team")) {
+    const unread = await countUnreadAlerts({ teamId: viewer.teamId, userId: viewer.userId });
+    links.push({ href: "/alerts", label: "Alerts", badge: unread > 0 ? createElement(UnreadBadge, { count: unread }) : undefined });
+  }
+  if (isFakeMailbox()) links.push({ href: "/mailbox", label: "Mailbox" });
+  return links;
 }

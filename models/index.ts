@@ -3,10 +3,14 @@ import { dirname } from "node:path";
 import { Sequelize, Transaction } from "sequelize";
 import sqlite3 from "sqlite3";
 import { databaseStorage } from "@/lib/env";
+import { Alert } from "./alert";
 import { Athlete } from "./athlete";
 import { BlockTemplate } from "./block-template";
+import { CalendarToken } from "./calendar-token";
 import { Invitation } from "./invitation";
 import { Membership } from "./membership";
+import { NotificationSetting } from "./notification-setting";
+import { OutboxMessage } from "./outbox-message";
 import { PlannedSession } from "./planned-session";
 import { SessionBlock } from "./session-block";
 import { SessionLog } from "./session-log";
@@ -15,9 +19,10 @@ import { TeamLoadSettings } from "./team-load-settings";
 import { TrainingGroup } from "./training-group";
 import { User } from "./user";
 
+export { Alert, CalendarToken, NotificationSetting, OutboxMessage };
 export { Athlete, BlockTemplate, Invitation, Membership, PlannedSession, SessionBlock, SessionLog, Team, TeamLoadSettings, TrainingGroup, User };
 
-const models = { Athlete, BlockTemplate, Invitation, Membership, PlannedSession, SessionBlock, SessionLog, Team, TeamLoadSettings, TrainingGroup, User };
+const models = { Alert, CalendarToken, NotificationSetting, OutboxMessage, Athlete, BlockTemplate, Invitation, Membership, PlannedSession, SessionBlock, SessionLog, Team, TeamLoadSettings, TrainingGroup, User };
 export type Models = typeof models;
 export type Db = Models & { sequelize: Sequelize };
 
@@ -65,6 +70,22 @@ function associate() {
   SessionLog.belongsTo(PlannedSession, { foreignKey: "sessionId", as: "session" });
   Athlete.hasMany(SessionLog, { foreignKey: "athleteId", as: "logs", ...cascade });
   SessionLog.belongsTo(Athlete, { foreignKey: "athleteId", as: "athlete" });
+
+  // Notices (migration 003).
+  Team.hasMany(Alert, { foreignKey: "teamId", as: "alerts", ...cascade });
+  Alert.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+  Athlete.hasMany(Alert, { foreignKey: "athleteId", as: "alerts", ...cascade });
+  Alert.belongsTo(Athlete, { foreignKey: "athleteId", as: "athlete" });
+  Team.hasMany(OutboxMessage, { foreignKey: "teamId", as: "outbox", ...setNull });
+  OutboxMessage.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+  Athlete.hasMany(CalendarToken, { foreignKey: "athleteId", as: "calendarTokens", ...cascade });
+  CalendarToken.belongsTo(Athlete, { foreignKey: "athleteId", as: "athlete" });
+  Team.hasMany(CalendarToken, { foreignKey: "teamId", as: "calendarTokens", ...cascade });
+  CalendarToken.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+  User.hasMany(NotificationSetting, { foreignKey: "userId", as: "notificationSettings", ...cascade });
+  NotificationSetting.belongsTo(User, { foreignKey: "userId", as: "user" });
+  Team.hasMany(NotificationSetting, { foreignKey: "teamId", as: "notificationSettings", ...cascade });
+  NotificationSetting.belongsTo(Team, { foreignKey: "teamId", as: "team" });
 }
 
 /** Builds a Sequelize instance on an SQLite file with the pragmas the app relies on. */

@@ -9,7 +9,9 @@ import { extraNavLinks } from "@/lib/nav-extras";
 
 export default async function WorkspaceLayout({ children }: { children: ReactNode }) {
   const viewer = await pageViewer();
-  const links = [...navFor(viewer.role).map(({ href, label }) => ({ href, label })), ...(await extraNavLinks(viewer))];
+  const extras = await extraNavLinks(viewer);
+  const base = navFor(viewer.role).map(({ href, label }) => extras.find((e) => e.href === href) ?? { href, label });
+  const links = [...base, ...extras.filter((e) => !base.some((b) => b.href === e.href))];
   return (
     <div className="min-h-dvh md:grid md:grid-cols-[15rem_1fr]">
       <aside className="border-b border-ink-100 bg-paper-raised px-4 py-3 md:sticky md:top-0 md:h-dvh md:border-b-0 md:border-r md:px-4 md:py-6">

@@ -5,6 +5,9 @@ import { hashToken, newToken } from "@/lib/auth/tokens";
 import type { Role } from "@/lib/auth/roles";
 import type { AddMemberInput } from "@/lib/validations/members";
 import { db } from "@/models";
+import { memberInvitationEmail } from "@/emails/member-invitation";
+import { appUrl } from "@/lib/env";
+import { enqueueMail } from "./outbox";
 import { hashPassword } from "./users";
 
 const INVITE_DAYS = 7;
@@ -43,9 +46,12 @@ export async function listMembers({ teamId }: { teamId: number }): Promise<Membe
   });
 }
 
-/** Adds a member, creating the user account if needed, and returns a one-time link token for setting a password. */
-export async function addMember({ teamId, input }: { teamId: number; input: AddMemberInput }) {
-  const { sequelize, User, Membership, Athlete, Invitation } = await db();
+/**
+ * Adds a member, creating the user account if needed. A new account also gets a one-time link for setting a
+ * password, e-mailed through the outbox in the same transaction; the token is returned too (development shows it).
+ */
+export async function addMember({ teamId, input, invitedBy }: { teamId: number; input: AddMemberInput; invitedBy?: number }) {
+  const { sequelize, User, Membership, Athlete, Invitation, Team } = await db();
   return sequelize.transaction(async (transaction) => {
     const [user] = await User.findOrCreate({
       where: { email: input.email },
@@ -72,14 +78,30 @@ export async function addMember({ teamId, input }: { teamId: number; input: AddM
     let inviteToken: string | null = null;
     if (!user.passwordHash) {
       const { token, hash } = newToken();
-      await Invitation.create(
-        { teamId, userId: user.id, purpose: "invite", tokenHash: hash, expiresAt: new Date(Date.now() + INVITE_DAYS * 86_400_000), usedAt: null },
-        { transaction },
-      );
+      const expiresAt = new Date(Date.now() + INVITE_DAYS * 86_400_000);
+      await Invitation.create({ teamId, userId: user.id, purpose: "invite", tokenHash: hash, expiresAt, usedAt: null }, { transaction });
       inviteToken = token;
+      const team = await Team.findByPk(teamId, { attributes: ["name", "timeZone"], transaction });
+      const inviterName = await inviterNameFor({ teamId, invitedBy, transaction });
+      await enqueueMail({
+        transaction,
+        teamId,
+        kind: "invitation",
+        to: user.email,
+        mail: memberInvitationEmail({ inviteeName: user.name, teamName: team?.name ?? "your team", role: input.role, inviterName, acceptUrl: `${appUrl()}/invite/${token}`, expiresAt, timeZone: team?.timeZone }),
+      });
     }
     return { membershipId: membership.id, userId: user.id, athleteId, inviteToken };
   });
+}
+
+/** Who the invitation mail names: the inviting member, else the team's first head coach. */
+async function inviterNameFor({ teamId, invitedBy, transaction }: { teamId: number; invitedBy?: number; transaction: import("sequelize").Transaction }): Promise<string> {
+  const { User, Membership } = await db();
+  const userId =
+    invitedBy ?? (await Membership.findOne({ where: { teamId, role: "head_coach" }, attributes: ["userId"], order: [["id", "ASC"]], transaction }))?.userId;
+  const user = userId ? await User.findByPk(userId, { attributes: ["name"], transaction }) : null;
+  return user?.name ?? "Your coach";
 }
 
 export async function changeMemberRole({ teamId, membershipId, role }: { teamId: number; membershipId: number; role: Role }) {

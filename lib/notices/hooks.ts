@@ -1,11 +1,15 @@
 import "server-only";
 import type { Transaction } from "sequelize";
 import type { BlockInput } from "@/lib/load/types";
+import { getAthleteSessionDate } from "@/lib/data/alerts";
+import { queueCalendarNotices } from "./calendar-notices";
+import { evaluateLoadAlerts } from "./load-alerts";
+import { kickOutbox } from "./outbox-worker";
 
 /**
  * The seam between plan/log writes and notices (alerts, e-mail, calendar invitations). Writers call these
- * inside the same transaction as their change, so a notice is recorded exactly when the change commits.
- * The notices feature fills these in; until then they record nothing.
+ * inside the same transaction as their change, so a notice is recorded exactly when the change commits
+ * (and rolled back with it). Delivery happens later, from the outbox.
  */
 export type SessionSnapshot = {
   id: number;
@@ -32,10 +36,33 @@ export type SessionChange = {
   after: SessionSnapshot | null;
 };
 
-export async function afterPlanChange(args: { transaction: Transaction; teamId: number; actorUserId: number; changes: SessionChange[] }): Promise<void> {
-  void args;
+function wakeOutboxOnCommit(transaction: Transaction) {
+  transaction.afterCommit(() => kickOutbox());
 }
 
+/** Alerts for every athlete whose load the change moved, then calendar invitations/updates/cancellations. */
+export async function afterPlanChange(args: { transaction: Transaction; teamId: number; actorUserId: number; changes: SessionChange[] }): Promise<void> {
+  const { transaction, teamId, actorUserId, changes } = args;
+  if (changes.length === 0) return;
+  const datesByAthlete = new Map<number, Set<string>>();
+  for (const c of changes) {
+    const dates = datesByAthlete.get(c.athleteId) ?? new Set<string>();
+    if (c.before) dates.add(c.before.date);
+    if (c.after) dates.add(c.after.date);
+    datesByAthlete.set(c.athleteId, dates);
+  }
+  for (const [athleteId, dates] of datesByAthlete) {
+    await evaluateLoadAlerts({ transaction, teamId, athleteId, dates: [...dates], basis: "planned" });
+  }
+  await queueCalendarNotices({ transaction, teamId, actorUserId, changes });
+  wakeOutboxOnCommit(transaction);
+}
+
+/** A log changes what the athlete actually did: re-check that session's week (and the next) on logged data. */
 export async function afterLogChange(args: { transaction: Transaction; teamId: number; athleteId: number; sessionId: number; actorUserId: number }): Promise<void> {
-  void args;
+  const { transaction, teamId, athleteId, sessionId } = args;
+  const date = await getAthleteSessionDate({ athleteId, sessionId, transaction });
+  if (!date) return;
+  await evaluateLoadAlerts({ transaction, teamId, athleteId, dates: [date], basis: "actual" });
+  wakeOutboxOnCommit(transaction);
 }

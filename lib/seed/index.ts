@@ -1,5 +1,6 @@
 import type { Db } from "@/models";
 import { seedClub, type SeededClub } from "./seed-club";
+import { seedNotices } from "@/lib/notices/seed";
 
 export type SeedOptions = {
   /** The local date the demo's "today" falls on (YYYY-MM-DD); defaults to the real date. */
@@ -12,6 +13,7 @@ export type SeedOptions = {
  */
 export async function seedDemo(d: Db, options: SeedOptions = {}): Promise<SeededClub> {
   const club = await seedClub(d);
+  await seedNotices(d, club);
   void options;
   return club;
 }

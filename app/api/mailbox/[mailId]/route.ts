@@ -1,0 +1,10 @@
+import { route } from "@/lib/http";
+import { mailFromParams, requireMailbox } from "@/lib/notices/mailbox-access";
+
+export const runtime = "nodejs";
+
+/** One stored mail: headers, HTML and text parts, attachments (calendar parts as text). */
+export const GET = route<{ mailId: string }>(async (_req, { params }) => {
+  await requireMailbox();
+  return Response.json({ mail: await mailFromParams(params) });
+});

@@ -1,0 +1,73 @@
+// Plain words for alerts, shared by the inbox (browser) and the alert e-mails (server).
+import { FLAG_DISPLAY } from "@/lib/load/flag-display";
+import { METRIC_INFO, type Metric } from "@/lib/load/types";
+import type { LoadAlertItem } from "@/emails/load-alert-parts";
+import type { AlertKind } from "@/models/alert";
+
+export const ALERT_KIND_LABEL: Record<AlertKind, string> = {
+  spike: FLAG_DISPLAY.spike.label,
+  weekly_jump: FLAG_DISPLAY.weekly_jump.label,
+  plyo_volume: FLAG_DISPLAY.plyo_volume.label,
+  recovery: FLAG_DISPLAY.recovery.label,
+  restriction_override: "Restriction overridden",
+};
+
+export const ALERT_KIND_HINT: Record<AlertKind, string> = {
+  spike: FLAG_DISPLAY.spike.hint,
+  weekly_jump: FLAG_DISPLAY.weekly_jump.hint,
+  plyo_volume: FLAG_DISPLAY.plyo_volume.hint,
+  recovery: FLAG_DISPLAY.recovery.hint,
+  restriction_override: "A session was planned against a restriction the medical staff set.",
+};
+
+function isMetric(value: string | null): value is Metric {
+  return value !== null && value in METRIC_INFO;
+}
+
+export type AlertFacts = { kind: AlertKind; metric: string | null };
+
+/** What was measured, its unit, and whether the threshold is a ceiling or a floor. */
+export function alertMeasure(alert: AlertFacts): { metricLabel: string; unit: string | null; direction: "above" | "below" } {
+  switch (alert.kind) {
+    case "spike":
+      return { metricLabel: `ACWR (${isMetric(alert.metric) ? METRIC_INFO[alert.metric].short : "load"})`, unit: null, direction: "above" };
+    case "weekly_jump":
+      return { metricLabel: `${isMetric(alert.metric) ? METRIC_INFO[alert.metric].label : "Load"}: change on last week`, unit: "%", direction: "above" };
+    case "plyo_volume":
+      return { metricLabel: "Ground contacts in one session", unit: "contacts", direction: "above" };
+    case "recovery":
+      return { metricLabel: "Time between high-intensity sessions", unit: "h", direction: "below" };
+    case "restriction_override":
+      return { metricLabel: isMetric(alert.metric) ? METRIC_INFO[alert.metric].label : "Restriction", unit: null, direction: "above" };
+  }
+}
+
+export type AlertForMail = AlertFacts & {
+  athleteId: number;
+  athleteName: string;
+  value: number;
+  threshold: number;
+  date: string;
+  basis: "planned" | "actual";
+};
+
+export function loadPageUrl(appUrl: string, athleteId: number): string {
+  return `${appUrl.replace(/\/+$/, "")}/load/${athleteId}`;
+}
+
+/** The template's input for one alert. */
+export function toLoadAlertItem(alert: AlertForMail, appUrl: string): LoadAlertItem {
+  const measure = alertMeasure(alert);
+  return {
+    athleteName: alert.athleteName,
+    flagLabel: ALERT_KIND_LABEL[alert.kind],
+    metricLabel: measure.metricLabel,
+    value: alert.value,
+    threshold: alert.threshold,
+    unit: measure.unit,
+    direction: measure.direction,
+    date: alert.date,
+    basis: alert.basis,
+    loadUrl: loadPageUrl(appUrl, alert.athleteId),
+  };
+}

@@ -1,0 +1,120 @@
+import "server-only";
+import type { Transaction } from "sequelize";
+import { loadAlertEmail } from "@/emails/load-alert";
+import { syncWeekAlerts, type AlertCandidate } from "@/lib/data/alerts";
+import { getAthleteLoadInputs, historyRange, teamToday } from "@/lib/data/load";
+import { enqueueMail } from "@/lib/data/outbox";
+import { getNoticeTeam, listAlertRecipients } from "@/lib/data/notification-settings";
+import { appUrl } from "@/lib/env";
+import { addDays, computeAthleteLoad, startOfWeek, type Flag } from "@/lib/load";
+import type { AlertBasis, AlertKind } from "@/models/alert";
+import { toLoadAlertItem } from "./alert-display";
+
+/** Engine flags that become alerts ("rising" and "low" stay on the load screens). */
+const WEEK_KINDS: readonly AlertKind[] = ["spike", "weekly_jump", "plyo_volume", "recovery"];
+/**
+ * A change also moves the next week's comparison with this one and the recovery gap across the weekend.
+ * Spikes are judged in the changed week only: the next week's ratio is still high from the same sessions.
+ */
+const NEXT_WEEK_KINDS: readonly AlertKind[] = ["weekly_jump", "recovery"];
+
+type FlagKindForAlert = "spike" | "weekly_jump" | "plyo_volume" | "recovery";
+
+/** How far a flag goes past its threshold; recovery is a floor (fewer hours is worse). */
+function severity(flag: Flag): number {
+  if (flag.threshold === 0) return flag.value;
+  return flag.kind === "recovery" ? flag.threshold / Math.max(flag.value, 1e-9) : flag.value / flag.threshold;
+}
+
+/** The strongest flag of each alert kind (one alert per athlete × kind × week). */
+export function strongestByKind(flags: readonly Flag[], kinds: readonly AlertKind[]): AlertCandidate[] {
+  const best = new Map<AlertKind, Flag>();
+  for (const flag of flags) {
+    const kind = flag.kind as FlagKindForAlert;
+    if (!kinds.includes(kind)) continue;
+    const current = best.get(kind);
+    if (!current || severity(flag) > severity(current)) best.set(kind, flag);
+  }
+  return [...best.entries()].map(([kind, f]) => ({
+    kind,
+    level: f.level,
+    metric: f.metric ?? null,
+    value: f.value,
+    threshold: f.threshold,
+    date: f.date,
+    reason: f.reason,
+    provisional: Boolean(f.provisional),
+  }));
+}
+
+export type EvaluateArgs = {
+  transaction: Transaction;
+  teamId: number;
+  athleteId: number;
+  /** Session dates the change touched (before and after), YYYY-MM-DD. */
+  dates: readonly string[];
+  basis: AlertBasis;
+  /** The team's "today"; defaults to the clock in the team's zone. */
+  today?: string;
+};
+
+/**
+ * Runs the load engine over the weeks a change touched (on the projected view: logged work plus the plan
+ * from today on, so a spike is flagged while it is still only planned), records new alerts and queues
+ * their e-mails, all inside the caller's transaction. Returns the ids of the new alerts.
+ */
+export async function evaluateLoadAlerts(args: EvaluateArgs): Promise<number[]> {
+  const { transaction, teamId, athleteId } = args;
+  if (args.dates.length === 0) return [];
+  const sorted = [...args.dates].sort();
+  // Wide enough for any week start day: the week before the first date to two weeks after the last.
+  const range = historyRange({ from: addDays(sorted[0]!, -7), to: addDays(sorted.at(-1)!, 14) });
+  const inputs = await getAthleteLoadInputs({ athleteId, from: range.from, to: range.to, transaction });
+  const weekStartDay = inputs.weekStartDay;
+  const weeks = new Map<string, Set<AlertKind>>();
+  for (const w of new Set(sorted.map((d) => startOfWeek(d, weekStartDay)))) {
+    weeks.set(w, new Set([...(weeks.get(w) ?? []), ...WEEK_KINDS]));
+    const next = addDays(w, 7);
+    weeks.set(next, new Set([...(weeks.get(next) ?? []), ...NEXT_WEEK_KINDS]));
+  }
+  const today = args.today ?? teamToday({ timeZone: inputs.timeZone });
+
+  const created: Array<{ id: number } & AlertCandidate> = [];
+  for (const [weekStart, kindSet] of [...weeks.entries()].sort(([a], [b]) => a.localeCompare(b))) {
+    const kinds = WEEK_KINDS.filter((k) => kindSet.has(k));
+    const load = computeAthleteLoad({
+      profile: inputs.athlete.profile,
+      settings: inputs.settings,
+      sessions: inputs.athlete.sessions,
+      logs: inputs.athlete.logs,
+      from: weekStart,
+      to: addDays(weekStart, 6),
+      today,
+      view: "projected",
+      weekStart,
+      weekStartDay,
+    });
+    const candidates = strongestByKind(load.flags, kinds);
+    const fresh = await syncWeekAlerts({ transaction, teamId, athleteId, weekStart, basis: args.basis, kinds, candidates });
+    created.push(...fresh);
+  }
+  if (created.length === 0) return [];
+
+  const recipients = (await listAlertRecipients({ teamId, transaction })).filter((r) => r.alertEmail === "each");
+  const team = await getNoticeTeam({ teamId, transaction });
+  const base = appUrl();
+  for (const alert of created) {
+    const item = toLoadAlertItem({ ...alert, athleteId, athleteName: inputs.athlete.name, basis: args.basis }, base);
+    for (const r of recipients) {
+      await enqueueMail({
+        transaction,
+        teamId,
+        kind: "alert",
+        to: r.email,
+        mail: loadAlertEmail({ ...item, recipientName: r.name, teamName: team?.name ?? "your team" }),
+        dedupeKey: `alert:${alert.id}:user:${r.userId}`,
+      });
+    }
+  }
+  return created.map((a) => a.id);
+}

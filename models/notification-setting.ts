@@ -1,0 +1,33 @@
+import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import type { Team } from "./team";
+import type { User } from "./user";
+
+export const ALERT_EMAIL_MODES = ["each", "digest", "off"] as const;
+export type AlertEmailMode = (typeof ALERT_EMAIL_MODES)[number];
+
+/** How one member hears about load alerts in one team. No row = the role's default. */
+export class NotificationSetting extends Model<InferAttributes<NotificationSetting>, InferCreationAttributes<NotificationSetting>> {
+  declare id: CreationOptional<number>;
+  declare teamId: ForeignKey<Team["id"]>;
+  declare userId: ForeignKey<User["id"]>;
+  declare alertEmail: AlertEmailMode;
+  declare lastDigestAt: Date | null;
+  /** Alerts created after this count as unread for the member. */
+  declare alertsSeenAt: Date | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    NotificationSetting.init(
+      {
+        id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+        alertEmail: { type: DataTypes.STRING(10), allowNull: false },
+        lastDigestAt: { type: DataTypes.DATE, allowNull: true },
+        alertsSeenAt: { type: DataTypes.DATE, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "notification_settings", underscored: true },
+    );
+  }
+}
