@@ -18,20 +18,12 @@ export type AlertCandidate = {
   provisional: boolean;
 };
 
-export type AlertRow = {
+export type AlertRow = AlertCandidate & {
   id: number;
   athleteId: number;
   athleteName: string;
-  kind: AlertKind;
-  level: "alert" | "caution" | "info";
-  metric: string | null;
-  value: number;
-  threshold: number;
-  date: string;
   weekStart: string;
   basis: AlertBasis;
-  reason: string;
-  provisional: boolean;
   flagged: boolean;
   status: AlertStatus;
   note: string | null;
