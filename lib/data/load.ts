@@ -1,6 +1,6 @@
 import "server-only";
 import { DateTime } from "luxon";
-import { Op, type Transaction } from "sequelize";
+import { QueryTypes, type Transaction } from "sequelize";
 import type {
   AthleteProfile,
   BlockInput,
@@ -59,6 +59,11 @@ export function teamToday({ timeZone, now }: { timeZone: string; now?: Date }): 
   return (dt.isValid ? dt : DateTime.utc()).toISODate()!;
 }
 
+/** ISO weekday (1 = Monday … 7 = Sunday) → engine weekday (0 = Sunday … 6 = Saturday). */
+export function engineWeekStartDay(isoWeekday: number): number {
+  return ((isoWeekday % 7) + 7) % 7;
+}
+
 export type TeamClock = { teamId: number; timeZone: string; weekStartDay: number };
 
 /** The team's zone and week start (engine convention); 404 when the team does not exist. */
@@ -69,12 +74,7 @@ export async function getTeamClock({ teamId, transaction }: { teamId: number; tr
   return { teamId, timeZone: team.timeZone, weekStartDay: engineWeekStartDay(team.weekStartDay) };
 }
 
-/** ISO weekday (1 = Monday … 7 = Sunday) → engine weekday (0 = Sunday … 6 = Saturday). */
-export function engineWeekStartDay(isoWeekday: number): number {
-  return ((isoWeekday % 7) + 7) % 7;
-}
-
-// Raw rows skip model instantiation (the squad-week handler has a 50 ms budget); JSON columns may come back as text.
+// JSON columns come back from SQLite as text.
 function json<T>(value: unknown): T | null {
   if (value === null || value === undefined) return null;
   if (typeof value === "string") {
@@ -91,102 +91,94 @@ function num(value: unknown): number | null {
   return value === null || value === undefined ? null : Number(value);
 }
 
-function dateOnly(value: unknown): string {
-  return typeof value === "string" ? value.slice(0, 10) : DateTime.fromJSDate(value as Date, { zone: "utc" }).toISODate()!;
+type TeamRow = { time_zone: string; week_start_day: number };
+type GroupRow = { id: number; name: string; sort_order: number };
+type AthleteRow = { id: number; name: string; group_id: number | null; vmax_ms: number | null; tau_s: number | null; step_length_m: number | null; plyo_level: PlyoLevel };
+type SessionRow = { id: number; athlete_id: number; date: string; start_time: string; duration_min: number; planned_rpe: number; status: SessionStatus };
+type BlockRow = { id: number; session_id: number; kind: BlockKind; title: string; running: unknown; drills: unknown; notes: string | null };
+type LogRow = { session_id: number; athlete_id: number; completion: Completion; rpe: unknown; minutes: unknown; completed_reps: unknown };
+
+// Plain SQL, not model finders: the squad-week handler has a 50 ms budget and Sequelize's row handling costs
+// about twice the query itself. Values go in as escaped replacements; table names are the migrations'.
+const SESSION_FILTER = "s.team_id = :teamId AND s.date BETWEEN :from AND :to AND (:athleteId IS NULL OR s.athlete_id = :athleteId)";
+const SQL = {
+  team: "SELECT time_zone, week_start_day FROM teams WHERE id = :teamId",
+  groups: "SELECT id, name, sort_order FROM training_groups WHERE team_id = :teamId",
+  athletes: "SELECT id, name, group_id, vmax_ms, tau_s, step_length_m, plyo_level FROM athletes WHERE team_id = :teamId AND (:athleteId IS NULL OR id = :athleteId)",
+  sessions: `SELECT s.id, s.athlete_id, s.date, s.start_time, s.duration_min, s.planned_rpe, s.status FROM planned_sessions s WHERE ${SESSION_FILTER} ORDER BY s.date, s.start_time, s.id`,
+  blocks: `SELECT b.id, b.session_id, b.kind, b.title, b.running, b.drills, b.notes FROM session_blocks b JOIN planned_sessions s ON s.id = b.session_id WHERE ${SESSION_FILTER} ORDER BY b.session_id, b.position, b.id`,
+  logs: `SELECT l.session_id, l.athlete_id, l.completion, l.rpe, l.minutes, l.completed_reps FROM session_logs l JOIN planned_sessions s ON s.id = l.session_id WHERE ${SESSION_FILTER}`,
+};
+
+function toBlock(b: BlockRow): BlockInput {
+  return {
+    id: String(b.id),
+    kind: b.kind,
+    title: b.title,
+    running: json<RunningPrescription>(b.running),
+    drills: json<PlyoDrill[]>(b.drills),
+    ...(b.notes ? { notes: b.notes } : {}),
+  };
 }
 
-type AthleteRow = { id: number; name: string; groupId: number | null; vmaxMs: number | null; tauS: number | null; stepLengthM: number | null; plyoLevel: PlyoLevel };
-type SessionRow = { id: number; athleteId: number; date: unknown; startTime: string; durationMin: number; plannedRpe: number; status: SessionStatus };
-type BlockRow = { id: number; sessionId: number; kind: BlockKind; title: string; running: unknown; drills: unknown; notes: string | null };
-type LogRow = { sessionId: number; athleteId: number; completion: Completion; rpe: unknown; minutes: unknown; completedReps: unknown };
-
 async function loadInputs({ teamId, athleteId, from, to, transaction }: Range & { teamId: number; athleteId?: number }): Promise<LoadInputs> {
-  const { Team, Athlete, TrainingGroup, PlannedSession, SessionBlock, SessionLog } = await db();
-  const athleteWhere = athleteId === undefined ? { teamId } : { teamId, id: athleteId };
-  const sessionWhere = { teamId, ...(athleteId === undefined ? {} : { athleteId }), date: { [Op.between]: [from, to] } };
-  // A constant six queries whatever the squad size: no query per athlete or per session.
-  const [team, settings, groups, athletes, sessions, blocks, logs] = await Promise.all([
-    Team.findByPk(teamId, { attributes: ["timeZone", "weekStartDay"], raw: true, transaction }),
+  const { sequelize } = await db();
+  const replacements = { teamId, athleteId: athleteId ?? null, from, to };
+  const select = <T extends object>(sql: string) => sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements, transaction });
+  // A constant seven queries whatever the squad size: no query per athlete or per session.
+  const [[team], settings, groups, athletes, sessions, blocks, logs] = await Promise.all([
+    select<TeamRow>(SQL.team),
     getTeamLoadSettings({ teamId, transaction }),
-    TrainingGroup.findAll({ where: { teamId }, attributes: ["id", "name", "sortOrder"], raw: true, transaction }),
-    Athlete.findAll({
-      where: athleteWhere,
-      attributes: ["id", "name", "groupId", "vmaxMs", "tauS", "stepLengthM", "plyoLevel"],
-      raw: true,
-      transaction,
-    }) as unknown as Promise<AthleteRow[]>,
-    PlannedSession.findAll({
-      where: sessionWhere,
-      attributes: ["id", "athleteId", "date", "startTime", "durationMin", "plannedRpe", "status"],
-      order: [["date", "ASC"], ["startTime", "ASC"], ["id", "ASC"]],
-      raw: true,
-      transaction,
-    }) as unknown as Promise<SessionRow[]>,
-    SessionBlock.findAll({
-      attributes: ["id", "sessionId", "kind", "title", "running", "drills", "notes"],
-      include: [{ model: PlannedSession, as: "session", attributes: [], where: sessionWhere, required: true }],
-      order: [["sessionId", "ASC"], ["position", "ASC"], ["id", "ASC"]],
-      raw: true,
-      transaction,
-    }) as unknown as Promise<BlockRow[]>,
-    SessionLog.findAll({
-      attributes: ["sessionId", "athleteId", "completion", "rpe", "minutes", "completedReps"],
-      include: [{ model: PlannedSession, as: "session", attributes: [], where: sessionWhere, required: true }],
-      raw: true,
-      transaction,
-    }) as unknown as Promise<LogRow[]>,
+    select<GroupRow>(SQL.groups),
+    select<AthleteRow>(SQL.athletes),
+    select<SessionRow>(SQL.sessions),
+    select<BlockRow>(SQL.blocks),
+    select<LogRow>(SQL.logs),
   ]);
   if (!team) throw new AppError("not_found", "Not found");
 
   const blocksBySession = new Map<number, BlockInput[]>();
   for (const b of blocks) {
-    const list = blocksBySession.get(b.sessionId) ?? [];
-    list.push({
-      id: String(b.id),
-      kind: b.kind,
-      title: b.title,
-      running: json<RunningPrescription>(b.running),
-      drills: json<PlyoDrill[]>(b.drills),
-      ...(b.notes ? { notes: b.notes } : {}),
-    });
-    blocksBySession.set(b.sessionId, list);
+    const list = blocksBySession.get(b.session_id);
+    if (list) list.push(toBlock(b));
+    else blocksBySession.set(b.session_id, [toBlock(b)]);
   }
-  const byAthlete = new Map<number, LoadAthleteInputs>();
   const groupById = new Map(groups.map((g) => [g.id, g]));
+  const byAthlete = new Map<number, LoadAthleteInputs>();
   for (const a of athletes) {
     byAthlete.set(a.id, {
       id: a.id,
       name: a.name,
-      groupId: a.groupId,
-      groupName: a.groupId ? (groupById.get(a.groupId)?.name ?? null) : null,
-      profile: { vmax: num(a.vmaxMs), tau: num(a.tauS), stepLengthM: num(a.stepLengthM), plyoLevel: a.plyoLevel },
+      groupId: a.group_id,
+      groupName: a.group_id !== null ? (groupById.get(a.group_id)?.name ?? null) : null,
+      profile: { vmax: num(a.vmax_ms), tau: num(a.tau_s), stepLengthM: num(a.step_length_m), plyoLevel: a.plyo_level },
       sessions: [],
       logs: [],
     });
   }
   for (const s of sessions) {
-    byAthlete.get(s.athleteId)?.sessions.push({
+    byAthlete.get(s.athlete_id)?.sessions.push({
       id: String(s.id),
-      date: dateOnly(s.date),
-      startTime: s.startTime,
-      durationMin: Number(s.durationMin),
-      plannedRpe: Number(s.plannedRpe),
+      date: s.date.slice(0, 10),
+      startTime: s.start_time,
+      durationMin: Number(s.duration_min),
+      plannedRpe: Number(s.planned_rpe),
       status: s.status,
       blocks: blocksBySession.get(s.id) ?? [],
     });
   }
   for (const l of logs) {
-    byAthlete.get(l.athleteId)?.logs.push({
-      sessionId: String(l.sessionId),
+    byAthlete.get(l.athlete_id)?.logs.push({
+      sessionId: String(l.session_id),
       completion: l.completion,
       rpe: num(l.rpe),
       minutes: num(l.minutes),
-      completedReps: json<Record<string, number>>(l.completedReps),
+      completedReps: json<Record<string, number>>(l.completed_reps),
     });
   }
-  const sortOrder = (groupId: number | null) => (groupId !== null && groupById.has(groupId) ? groupById.get(groupId)!.sortOrder : 1e9);
+  const sortOrder = (groupId: number | null) => (groupId !== null && groupById.has(groupId) ? groupById.get(groupId)!.sort_order : 1e9);
   const list = [...byAthlete.values()].sort((x, y) => sortOrder(x.groupId) - sortOrder(y.groupId) || x.name.localeCompare(y.name));
-  return { teamId, settings, timeZone: team.timeZone, weekStartDay: engineWeekStartDay(team.weekStartDay), athletes: list };
+  return { teamId, settings, timeZone: team.time_zone, weekStartDay: engineWeekStartDay(team.week_start_day), athletes: list };
 }
 
 /** Every athlete of the team with sessions (and blocks) and logs dated in [from, to], as engine inputs. */

@@ -1,5 +1,6 @@
 import type { Db } from "@/models";
 import { seedClub, type SeededClub } from "./seed-club";
+import { seedLoad } from "./seed-load";
 import { seedNotices } from "@/lib/notices/seed";
 
 export type SeedOptions = {
@@ -13,6 +14,7 @@ export type SeedOptions = {
  */
 export async function seedDemo(d: Db, options: SeedOptions = {}): Promise<SeededClub> {
   const club = await seedClub(d);
+  await seedLoad(d, club, options);
   await seedNotices(d, club);
   void options;
   return club;

@@ -2,10 +2,10 @@ import { describe, expect, it } from "vitest";
 import { getAthleteLoadInputs, getSquadLoadInputs, historyRange, teamToday } from "@/lib/data/load";
 import { getTeamLoadSettings, updateTeamLoadSettings } from "@/lib/data/team-settings";
 import { DEFAULT_TEAM_LOAD_SETTINGS } from "@/lib/load/types";
-import { useTestDb } from "../helpers/db";
+import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
 
-const d = await useTestDb();
+const d = await setupTestDb();
 const a = await createTestTeam(d, { name: "Alpha Track" });
 const b = await createTestTeam(d, { name: "Bravo Track" });
 const ada = a.users["ada@alphatrack.test"].athleteId!;

@@ -1,0 +1,33 @@
+import { requireAthlete } from "@/lib/auth/access";
+import { teamToday } from "@/lib/data/load";
+import { deleteSessionLog, getLogTarget, saveSessionLog } from "@/lib/data/logs";
+import { AppError } from "@/lib/errors";
+import { parseJson, parseParams, route } from "@/lib/http";
+import { sessionLogSchema } from "@/lib/validations/log";
+import { sessionParamsSchema } from "@/lib/validations/plan";
+
+export const runtime = "nodejs";
+
+type Params = { sessionId: string };
+
+/** The session and a viewer allowed to log it (an athlete only their own sessions); 404 reveals nothing. */
+async function authorized(params: Promise<Params>) {
+  const { sessionId } = parseParams(await params, sessionParamsSchema);
+  const target = await getLogTarget({ sessionId });
+  if (!target) throw new AppError("not_found", "Not found");
+  const viewer = await requireAthlete({ athleteId: target.athleteId, can: "log:write" });
+  return { target, viewer };
+}
+
+export const PUT = route<Params>(async (req, { params }) => {
+  const { target, viewer } = await authorized(params);
+  const input = await parseJson(req, sessionLogSchema);
+  const log = await saveSessionLog({ target, input, actorUserId: viewer.userId, today: teamToday({ timeZone: viewer.timeZone }) });
+  return Response.json({ log });
+});
+
+export const DELETE = route<Params>(async (_req, { params }) => {
+  const { target, viewer } = await authorized(params);
+  const deleted = await deleteSessionLog({ target, actorUserId: viewer.userId });
+  return Response.json({ deleted });
+});

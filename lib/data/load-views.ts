@@ -1,0 +1,224 @@
+import "server-only";
+import {
+  addDays,
+  computeAthleteLoad,
+  computeSquadWeek,
+  dayIndex,
+  startOfWeek,
+  type Flag,
+  type FlagLevel,
+  type LoadView,
+  type Metric,
+  type MetricValues,
+  type SessionInput,
+  type TeamLoadSettings,
+  type WeekSummary,
+} from "@/lib/load";
+import { AppError } from "@/lib/errors";
+import type { LoadPreviewInput } from "@/lib/validations/load";
+import { getAthleteLoadInputs, getSquadLoadInputs, getTeamClock, historyRange, teamToday } from "./load";
+
+// What the load handlers answer: the engine's numbers for one athlete or the squad, as plain JSON.
+
+export type SquadWeekRowDto = {
+  id: number;
+  name: string;
+  groupId: number | null;
+  groupName: string | null;
+  totals: MetricValues;
+  previousTotals: MetricValues;
+  changePct: Record<Metric, number | null>;
+  /** Highest ACWR of the team metric this week (team method); null when none. */
+  ratio: number | null;
+  ratioProvisional: boolean;
+  peakRatios: Record<Metric, number | null>;
+  missingDays: number;
+  flags: Flag[];
+  topLevel: FlagLevel | null;
+};
+
+export type SquadWeekDto = {
+  weekStart: string;
+  weekEnd: string;
+  previousWeek: string;
+  nextWeek: string;
+  today: string;
+  view: LoadView;
+  settings: TeamLoadSettings;
+  groups: { id: number; name: string }[];
+  rows: SquadWeekRowDto[];
+};
+
+/** The squad's week: totals per metric, ACWR (provisional marked) and flags with reasons, one row per athlete. */
+export async function getSquadWeekLoad({ teamId, week, view, today }: { teamId: number; week?: string; view: LoadView; today?: string }): Promise<SquadWeekDto> {
+  const probe = await getTeamClock({ teamId });
+  const now = today ?? teamToday({ timeZone: probe.timeZone });
+  const weekStart = startOfWeek(week ?? now, probe.weekStartDay);
+  const weekEnd = addDays(weekStart, 6);
+  const inputs = await getSquadLoadInputs({ teamId, ...historyRange({ from: addDays(weekStart, -7), to: weekEnd }) });
+  const rows = computeSquadWeek(
+    inputs.athletes.map((a) => ({ id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions: a.sessions, logs: a.logs })),
+    inputs.settings,
+    weekStart,
+    now,
+    view,
+  );
+  const groups = new Map<number, string>();
+  for (const a of inputs.athletes) if (a.groupId !== null && a.groupName) groups.set(a.groupId, a.groupName);
+  return {
+    weekStart,
+    weekEnd,
+    previousWeek: addDays(weekStart, -7),
+    nextWeek: addDays(weekStart, 7),
+    today: now,
+    view,
+    settings: inputs.settings,
+    groups: [...groups].map(([id, name]) => ({ id, name })),
+    rows: rows.map((r, i) => {
+      const a = inputs.athletes[i];
+      return {
+        id: a.id,
+        name: a.name,
+        groupId: a.groupId,
+        groupName: a.groupName,
+        totals: r.week.totals,
+        previousTotals: r.week.previousTotals,
+        changePct: r.week.changePct,
+        ratio: r.week.peakRatio,
+        ratioProvisional: r.week.ratioProvisional,
+        peakRatios: r.peakRatios,
+        missingDays: r.week.missingDays,
+        flags: r.flags,
+        topLevel: r.topLevel,
+      };
+    }),
+  };
+}
+
+export type AthleteLoadDayDto = {
+  date: string;
+  /** The metric's daily value in the chosen view. */
+  value: number;
+  /** The same day as planned (every non-cancelled session, logs ignored). */
+  planned: number;
+  acute: number;
+  chronic: number;
+  ratio: number | null;
+  provisional: boolean;
+  logged: boolean;
+  missing: boolean;
+};
+
+export type AthleteLoadDto = {
+  athlete: { id: number; name: string; groupName: string | null; profile: { vmax: number | null; tau: number | null; stepLengthM: number | null; plyoLevel: string } };
+  from: string;
+  to: string;
+  today: string;
+  view: LoadView;
+  metric: Metric;
+  settings: TeamLoadSettings;
+  days: AthleteLoadDayDto[];
+  /** The week holding today (or `to` when the range ends earlier). */
+  week: WeekSummary;
+  flags: Flag[];
+};
+
+/** Default athlete range: eight weeks back to the end of next week. */
+function defaultRange(today: string, weekStartDay: number): { from: string; to: string } {
+  const ws = startOfWeek(today, weekStartDay);
+  return { from: addDays(ws, -56), to: addDays(ws, 13) };
+}
+
+/** One athlete's daily series, acute/chronic/ratio for one metric, planned alongside, and this week's flags. */
+export async function getAthleteLoad({ teamId, athleteId, from, to, view, metric, today }: { teamId: number; athleteId: number; from?: string; to?: string; view: LoadView; metric?: Metric; today?: string }): Promise<AthleteLoadDto> {
+  const probe = await getTeamClock({ teamId });
+  const now = today ?? teamToday({ timeZone: probe.timeZone });
+  const fallback = defaultRange(now, probe.weekStartDay);
+  const range = { from: from ?? (to ? addDays(to, -69) : fallback.from), to: to ?? (from ? addDays(from, 69) : fallback.to) };
+  if (dayIndex(range.to) < dayIndex(range.from)) throw new AppError("invalid", "Invalid to", { fields: { to: ["Must be on or after from"] } });
+  const inputs = await getAthleteLoadInputs({ athleteId, ...historyRange(range) });
+  if (inputs.teamId !== teamId) throw new AppError("not_found", "Not found");
+  const { athlete, settings } = inputs;
+  const chosen = metric ?? settings.acwrMetric;
+  const weekStart = startOfWeek(now <= range.to ? now : range.to, inputs.weekStartDay);
+  const base = { profile: athlete.profile, settings: { ...settings, acwrMetric: chosen }, sessions: athlete.sessions, from: range.from, to: range.to, weekStart };
+  const load = computeAthleteLoad({ ...base, logs: athlete.logs, today: now, view });
+  // "Planned": the engine's projected view with today before every session and no logs counts the whole plan.
+  const plan = computeAthleteLoad({ ...base, logs: [], today: "1970-01-01", view: "projected" });
+  // Flags judge the team's own metric, not the one charted.
+  const flagged = chosen === settings.acwrMetric ? load : computeAthleteLoad({ ...base, settings, logs: athlete.logs, today: now, view });
+  return {
+    athlete: { id: athlete.id, name: athlete.name, groupName: athlete.groupName, profile: athlete.profile },
+    from: range.from,
+    to: range.to,
+    today: now,
+    view,
+    metric: chosen,
+    settings,
+    days: load.days.map((d, i) => ({
+      date: d.date,
+      value: d.values[chosen],
+      planned: plan.days[i]?.values[chosen] ?? 0,
+      acute: d.acute[chosen],
+      chronic: d.chronic[chosen],
+      ratio: d.ratio[chosen],
+      provisional: d.provisional,
+      logged: d.logged,
+      missing: d.missing,
+    })),
+    week: flagged.week,
+    flags: flagged.flags,
+  };
+}
+
+export type LoadPreviewDto = {
+  weekStart: string;
+  weekEnd: string;
+  today: string;
+  /** The week as proposed (projected view: logs up to today, the proposal from today on). */
+  proposed: { week: WeekSummary; flags: Flag[]; days: { date: string; values: MetricValues }[] };
+  /** The week as saved now, for comparison. */
+  current: { week: WeekSummary; flags: Flag[] };
+};
+
+/** Projected totals and flags for a proposed week, without saving anything. */
+export async function previewAthleteWeek({ input, today }: { input: LoadPreviewInput; today?: string }): Promise<LoadPreviewDto> {
+  const probe = await getTeamClock({ teamId: input.teamId });
+  const weekStart = startOfWeek(input.week, probe.weekStartDay);
+  const weekEnd = addDays(weekStart, 6);
+  const fields: Record<string, string[]> = {};
+  input.sessions.forEach((s, i) => {
+    if (s.date < weekStart || s.date > weekEnd) fields[`sessions.${i}.date`] = [`Must be inside the week ${weekStart} to ${weekEnd}`];
+  });
+  if (Object.keys(fields).length > 0) throw new AppError("invalid", `Invalid ${Object.keys(fields).join(", ")}`, { fields });
+  const now = today ?? teamToday({ timeZone: probe.timeZone });
+  const inputs = await getAthleteLoadInputs({ athleteId: input.athleteId, ...historyRange({ from: addDays(weekStart, -7), to: weekEnd }) });
+  // An athlete of another team is "not found", whatever the caller may do in its own team.
+  if (inputs.teamId !== input.teamId) throw new AppError("not_found", "Not found");
+  const { athlete, settings } = inputs;
+  const proposed: SessionInput[] = input.sessions.map((s, i) => ({
+    id: s.id === undefined ? `proposed-${i}` : String(s.id),
+    date: s.date,
+    startTime: s.startTime,
+    durationMin: s.durationMin,
+    plannedRpe: s.plannedRpe,
+    status: s.status,
+    blocks: s.blocks.map((b) => ({ kind: b.kind, title: b.title, running: b.running, drills: b.drills })),
+  }));
+  const outside = athlete.sessions.filter((s) => s.date < weekStart || s.date > weekEnd);
+  // Logs carry over only to proposed sessions that are the same saved session (same id); block ids are not kept.
+  const proposedIds = new Set(proposed.map((s) => s.id));
+  const keptLogs = athlete.logs
+    .filter((l) => outside.some((s) => s.id === l.sessionId) || proposedIds.has(l.sessionId))
+    .map((l) => (proposedIds.has(l.sessionId) ? { ...l, completedReps: null } : l));
+  const base = { profile: athlete.profile, settings, from: weekStart, to: weekEnd, today: now, view: "projected" as const, weekStart };
+  const next = computeAthleteLoad({ ...base, sessions: [...outside, ...proposed], logs: keptLogs });
+  const saved = computeAthleteLoad({ ...base, sessions: athlete.sessions, logs: athlete.logs });
+  return {
+    weekStart,
+    weekEnd,
+    today: now,
+    proposed: { week: next.week, flags: next.flags, days: next.days.map((d) => ({ date: d.date, values: d.values })) },
+    current: { week: saved.week, flags: saved.flags },
+  };
+}
