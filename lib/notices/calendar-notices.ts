@@ -47,7 +47,7 @@ function visibleChange(a: SessionSnapshot, b: SessionSnapshot): boolean {
 /**
  * The iTIP message a change calls for (RFC 5546 §3.2): REQUEST when a session becomes visible or a visible
  * one changes, CANCEL when a published session is cancelled, unpublished or deleted; nothing for drafts.
- * A CANCEL's SEQUENCE must not be lower than the last REQUEST's (§2.1.4), so it is at least one above it.
+ * A CANCEL's SEQUENCE must not be lower than the last REQUEST's (message sequencing, §2.1.4 from memory), so it is one above.
  */
 export function calendarActionFor(change: SessionChange): CalendarAction | null {
   const { before, after } = change;
