@@ -108,6 +108,11 @@ export function isProvisional(i: number, firstDataIndex: number, minHistoryDays 
   return firstDataIndex < 0 || i - firstDataIndex + 1 < minHistoryDays;
 }
 
+/** Fills out[i] with 1 where day i's ratio is provisional. */
+export function markProvisional(out: Uint8Array, firstDataIndex: number, minHistoryDays = ACWR_MIN_HISTORY_DAYS): void {
+  for (let i = 0; i < out.length; i++) out[i] = isProvisional(i, firstDataIndex, minHistoryDays) ? 1 : 0;
+}
+
 export function acwrSeries(values: ArrayLike<number>, method: AcwrMethod, options: AcwrOptions = {}): AcwrSeries {
   const n = values.length;
   const cols = allocAcwrColumns(n);

@@ -1,8 +1,8 @@
-import { acwrInto, allocAcwrColumns, isProvisional, type AcwrColumns } from "./acwr";
-import { resolveProfile } from "./block-metrics";
+import { acwrInto, markProvisional, type AcwrColumns } from "./acwr";
+import { resolveProfile, type ResolvedProfile } from "./accumulate";
 import { dateFromDayIndex, dayIndex, startOfWeek } from "./dates";
 import { computeFlags, type Flag } from "./flags";
-import { buildDailyColumns, effectiveSessions, indexLogs, type DailyColumns } from "./series";
+import { buildDailyColumns, effectiveSessions, indexLogs, sessionDayNumbers, type DailyColumns } from "./series";
 import {
   METRICS,
   type AthleteProfile,
@@ -14,6 +14,7 @@ import {
   type TeamLoadSettings,
 } from "./types";
 import { summariseWeek, type WeekSummary } from "./week-summary";
+import { reserve, type EngineWorkspace } from "./workspace";
 
 /** Days of history before the range that the ACWR always sees (two chronic windows). */
 export const HISTORY_LEAD_DAYS = 56;
@@ -39,16 +40,9 @@ export interface AthleteColumns extends DailyColumns {
   /** 1 while fewer than 28 days of history stand behind the day's ratio. */
   provisional: Uint8Array;
   firstDate: string;
-}
-
-/** Earliest session date as a day number, or +Infinity when there are none. */
-function earliestSessionDay(sessions: readonly SessionInput[]): number {
-  let min = Number.POSITIVE_INFINITY;
-  for (const s of sessions) {
-    const d = dayIndex(s.date);
-    if (d < min) min = d;
-  }
-  return min;
+  /** Day number of each input session (same order), parsed once. */
+  sessionDays: Int32Array;
+  rp: ResolvedProfile;
 }
 
 export interface ColumnsRequest {
@@ -63,28 +57,47 @@ export interface ColumnsRequest {
   toDay: number;
 }
 
-/** The columnar engine: daily values and ACWR for every metric from the athlete's first session. */
-export function computeAthleteColumns(req: ColumnsRequest): AthleteColumns {
-  const startDay = Math.min(earliestSessionDay(req.sessions), req.fromDay - HISTORY_LEAD_DAYS);
-  const length = Math.max(0, req.toDay - startDay + 1);
+/**
+ * The columnar engine: daily values and ACWR for every metric from the athlete's first session. With a
+ * workspace the columns are views into it (no allocation per athlete) and the next call overwrites them.
+ */
+export function computeAthleteColumns(req: ColumnsRequest, ws?: EngineWorkspace): AthleteColumns {
+  const sessionDays = sessionDayNumbers(req.sessions);
+  let startDay = req.fromDay - HISTORY_LEAD_DAYS;
+  for (let k = 0; k < sessionDays.length; k++) if (sessionDays[k] < startDay) startDay = sessionDays[k];
+  const n = Math.max(0, req.toDay - startDay + 1);
+  const nm = METRICS.length;
+  // Doubles: values (6n) | acute, chronic, ratio per metric (18n) | prefix sums (n + 1). Bytes: logged, missing, provisional.
+  const f64Size = 4 * nm * n + n + 1;
+  if (ws) reserve(ws, f64Size, 3 * n);
+  const f64 = ws ? ws.f64 : new Float64Array(f64Size);
+  const u8 = ws ? ws.u8 : new Uint8Array(3 * n);
+  if (ws) {
+    f64.fill(0, 0, nm * n);
+    u8.fill(0, 0, 2 * n);
+  }
+  const rp = resolveProfile(req.profile, req.settings);
   const cols = buildDailyColumns({
     startDay,
-    length,
+    length: n,
     sessions: req.sessions,
+    sessionDays,
     logsById: req.logsById,
-    rp: resolveProfile(req.profile, req.settings),
+    rp,
     view: req.view,
     todayDay: req.todayDay,
+    scratch: { f64, u8 },
   });
+  const prefix = f64.subarray(4 * nm * n, f64Size);
   const acwr = {} as Record<Metric, AcwrColumns>;
-  const prefix = new Float64Array(length + 1);
-  for (const m of METRICS) {
-    acwr[m] = allocAcwrColumns(length);
+  METRICS.forEach((m, k) => {
+    const at = (j: number) => f64.subarray((nm + 3 * k + j) * n, (nm + 3 * k + j + 1) * n);
+    acwr[m] = { acute: at(0), chronic: at(1), ratio: at(2) };
     acwrInto(cols.values[m], req.settings.acwrMethod, acwr[m], "first", prefix);
-  }
-  const provisional = new Uint8Array(length);
-  for (let i = 0; i < length; i++) provisional[i] = isProvisional(i, cols.firstDataIndex) ? 1 : 0;
-  return { ...cols, acwr, provisional, firstDate: dateFromDayIndex(startDay) };
+  });
+  const provisional = u8.subarray(2 * n, 3 * n);
+  markProvisional(provisional, cols.firstDataIndex);
+  return { ...cols, acwr, provisional, firstDate: dateFromDayIndex(startDay), sessionDays, rp };
 }
 
 /** Week summary and flags for the week starting at weekStartDay (a day number) from precomputed columns. */
@@ -106,15 +119,15 @@ export function weekFromColumns(
     weekStart,
   });
   const lookBack = Math.ceil(req.settings.recoveryHours / 24) + 1;
-  const rp = resolveProfile(req.profile, req.settings);
   const sessions = effectiveSessions(
     req.sessions,
     req.logsById,
-    rp,
+    cols.rp,
     req.view,
     req.todayDay,
     weekStartDay - lookBack,
     weekStartDay + 6,
+    cols.sessionDays,
   );
   const flags = computeFlags({
     firstDate: cols.firstDate,

@@ -7,26 +7,32 @@ export const DEFAULT_SD_TYPE: SdType = "population";
 /** SD this small relative to the mean is treated as 0: identical days must not divide by rounding noise. */
 const RELATIVE_ZERO = 1e-12;
 
-function meanAndSd(week: ArrayLike<number>, sd: SdType): { sum: number; mean: number; sd: number } | null {
-  const n = week.length;
-  const dof = sd === "sample" ? n - 1 : n;
-  if (n === 0 || dof <= 0) return null;
-  let sum = 0;
-  for (let i = 0; i < n; i++) sum += week[i];
-  const mean = sum / n;
-  let ss = 0;
-  for (let i = 0; i < n; i++) {
-    const d = week[i] - mean;
-    ss += d * d;
-  }
-  return { sum, mean, sd: Math.sqrt(ss / dof) };
+/** Value at i, with days outside the column counting as 0 (no data there). */
+function at(col: ArrayLike<number>, i: number): number {
+  return i >= 0 && i < col.length ? col[i] : 0;
 }
 
-/** null when the SD is 0 (identical days, e.g. a week of rest) or the week is too short. */
+/**
+ * Monotony of the `days` values col[from … from + days − 1]; null when the SD is 0 (identical days,
+ * e.g. a week of rest) or there are too few days for the SD type.
+ */
+export function monotonyOfWindow(col: ArrayLike<number>, from: number, days: number, sd: SdType = DEFAULT_SD_TYPE): number | null {
+  const dof = sd === "sample" ? days - 1 : days;
+  if (days <= 0 || dof <= 0) return null;
+  let sum = 0;
+  for (let i = 0; i < days; i++) sum += at(col, from + i);
+  const mean = sum / days;
+  let ss = 0;
+  for (let i = 0; i < days; i++) {
+    const d = at(col, from + i) - mean;
+    ss += d * d;
+  }
+  const s = Math.sqrt(ss / dof);
+  return s > RELATIVE_ZERO * Math.max(1, Math.abs(mean)) ? mean / s : null;
+}
+
 export function monotony(week: ArrayLike<number>, sd: SdType = DEFAULT_SD_TYPE): number | null {
-  const s = meanAndSd(week, sd);
-  if (!s || !(s.sd > RELATIVE_ZERO * Math.max(1, Math.abs(s.mean)))) return null;
-  return s.mean / s.sd;
+  return monotonyOfWindow(week, 0, week.length, sd);
 }
 
 export function strain(week: ArrayLike<number>, sd: SdType = DEFAULT_SD_TYPE): number | null {

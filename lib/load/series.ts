@@ -1,6 +1,6 @@
-import { ACC_SIZE, resolveProfile, type ResolvedProfile } from "./block-metrics";
+import { ACC_SIZE, addAccToColumns, evaluateSessionInto, resolveProfile, type ResolvedProfile } from "./accumulate";
 import { dateFromDayIndex, dayIndex, weekdayOfDay } from "./dates";
-import { evaluateSessionInto, metricValueFromAcc, toSessionMetrics, type SessionMetrics } from "./session-metrics";
+import { toSessionMetrics, type SessionMetrics } from "./session-metrics";
 import {
   METRICS,
   type AthleteProfile,
@@ -10,6 +10,12 @@ import {
   type SessionInput,
   type TeamLoadSettings,
 } from "./types";
+
+// Local bindings for the per-session loops: CommonJS transpilation (tsx, vitest) turns each imported name
+// into a property getter on the module object, which costs more than the call itself in a hot loop.
+const parseDay = dayIndex;
+const evaluate = evaluateSessionInto;
+const addToColumns = addAccToColumns;
 
 /** How one session enters a view. */
 export type SessionUse = "logged" | "planned" | "missing" | "none";
@@ -49,48 +55,68 @@ export interface DailyColumns {
   firstDataIndex: number;
 }
 
-export function emptyMetricColumns(length: number): Record<Metric, Float64Array> {
-  const buffer = new Float64Array(length * METRICS.length);
-  const out = {} as Record<Metric, Float64Array>;
+/** One Float64Array per metric (METRICS order), all views of one buffer (a zeroed `into` is used when given). */
+export function metricColumns(
+  length: number,
+  into?: Float64Array,
+): { buffer: Float64Array; values: Record<Metric, Float64Array> } {
+  const buffer = into ? into.subarray(0, length * METRICS.length) : new Float64Array(length * METRICS.length);
+  const values = {} as Record<Metric, Float64Array>;
   METRICS.forEach((m, i) => {
-    out[m] = buffer.subarray(i * length, (i + 1) * length);
+    values[m] = buffer.subarray(i * length, (i + 1) * length);
   });
-  return out;
+  return { buffer, values };
+}
+
+export function emptyMetricColumns(length: number): Record<Metric, Float64Array> {
+  return metricColumns(length).values;
+}
+
+/** Day number of every session, parsed once per computation. */
+export function sessionDayNumbers(sessions: readonly SessionInput[]): Int32Array {
+  const days = new Int32Array(sessions.length);
+  for (let i = 0; i < sessions.length; i++) days[i] = parseDay(sessions[i].date);
+  return days;
 }
 
 export interface ColumnsInput {
   startDay: number;
   length: number;
   sessions: readonly SessionInput[];
+  /** sessionDayNumbers(sessions), when the caller already has it. */
+  sessionDays?: Int32Array;
   logsById: ReadonlyMap<string, LogInput>;
   rp: ResolvedProfile;
   view: LoadView;
   todayDay: number;
+  /** Zeroed scratch to use instead of allocating: ≥ 6·length doubles and ≥ 2·length bytes. */
+  scratch?: { f64: Float64Array; u8: Uint8Array };
 }
 
 /** Hot path: no per-day or per-session allocation; one scratch accumulator for all sessions. */
 export function buildDailyColumns(input: ColumnsInput): DailyColumns {
   const { startDay, length, sessions, logsById, rp, view, todayDay } = input;
-  const values = emptyMetricColumns(length);
-  const cols = METRICS.map((m) => values[m]);
-  const logged = new Uint8Array(length);
-  const missing = new Uint8Array(length);
+  const days = input.sessionDays ?? sessionDayNumbers(sessions);
+  const { buffer, values } = metricColumns(length, input.scratch?.f64);
+  const logged = input.scratch ? input.scratch.u8.subarray(0, length) : new Uint8Array(length);
+  const missing = input.scratch ? input.scratch.u8.subarray(length, 2 * length) : new Uint8Array(length);
   const acc = new Float64Array(ACC_SIZE);
   let firstDataIndex = -1;
-  for (const session of sessions) {
-    const i = dayIndex(session.date) - startDay;
+  for (let k = 0; k < sessions.length; k++) {
+    const i = days[k] - startDay;
     if (i < 0 || i >= length) continue;
+    const session = sessions[k];
     const log = logsById.get(session.id);
     if ((log || session.status !== "cancelled") && (firstDataIndex < 0 || i < firstDataIndex)) firstDataIndex = i;
-    const use = sessionUse(session.status, log !== undefined, i + startDay, todayDay, view);
+    const use = sessionUse(session.status, log !== undefined, days[k], todayDay, view);
     if (use === "none") continue;
     if (use === "missing") {
       missing[i] = 1;
       continue;
     }
-    evaluateSessionInto(acc, session, use === "logged" ? log : undefined, rp);
+    evaluate(acc, session, use === "logged" ? log : undefined, rp);
     if (use === "logged") logged[i] = 1;
-    for (let k = 0; k < cols.length; k++) cols[k][i] += metricValueFromAcc(acc, k);
+    addToColumns(acc, buffer, length, i);
   }
   return { startDay, length, values, logged, missing, firstDataIndex };
 }
@@ -112,16 +138,18 @@ export function effectiveSessions(
   todayDay: number,
   fromDay: number,
   toDay: number,
+  sessionDays?: Int32Array,
 ): EffectiveSession[] {
   const out: EffectiveSession[] = [];
   const acc = new Float64Array(ACC_SIZE);
-  for (const s of sessions) {
-    const day = dayIndex(s.date);
+  for (let k = 0; k < sessions.length; k++) {
+    const s = sessions[k];
+    const day = sessionDays ? sessionDays[k] : parseDay(s.date);
     if (day < fromDay || day > toDay) continue;
     const log = logsById.get(s.id);
     const use = sessionUse(s.status, log !== undefined, day, todayDay, view);
     if (use !== "logged" && use !== "planned") continue;
-    evaluateSessionInto(acc, s, use === "logged" ? log : undefined, rp);
+    evaluate(acc, s, use === "logged" ? log : undefined, rp);
     out.push({ id: s.id, date: s.date, startTime: s.startTime, use, ...toSessionMetrics(acc) });
   }
   return out;

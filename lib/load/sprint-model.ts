@@ -61,17 +61,25 @@ export interface RepShape {
 }
 
 /**
- * Metres of one rep at or above `speed`, analytic: the runner passes `speed` at t* = −τ·ln(1 − speed/target),
- * after x(t*) = target·t* − τ·speed metres (because e^(−t* ÷ τ) = 1 − speed/target), so the rest of the rep is at or above it.
- * The model approaches the target asymptotically, so a threshold at or above the target gives 0.
+ * Metres from rest until the runner, approaching `targetSpeed`, reaches `speed`: x(t*) with
+ * t* = −τ·ln(1 − speed/target), and because e^(−t* ÷ τ) = 1 − speed/target, x(t*) = target·t* − τ·speed.
+ * +Infinity when speed ≥ target (the model only approaches its target); 0 for speed ≤ 0.
+ */
+export function distanceToReach(speed: number, targetSpeed: number, tau: number): number {
+  if (speed <= 0) return 0;
+  if (!(speed < targetSpeed)) return Number.POSITIVE_INFINITY;
+  const tStar = -tau * Math.log1p(-speed / targetSpeed);
+  // Clamped: for a tiny speed the two terms cancel and rounding could push x(t*) below 0.
+  return Math.max(0, targetSpeed * tStar - tau * speed);
+}
+
+/**
+ * Metres of one rep at or above `speed`, analytic: everything after x(t*) (see distanceToReach).
+ * A threshold at or above the target gives 0.
  */
 export function metresAtOrAbove(speed: number, rep: RepShape): number {
   const { targetSpeed, tau, totalDistance } = rep;
   if (!(totalDistance > 0) || !(targetSpeed > 0)) return 0;
-  if (speed <= 0) return totalDistance;
-  if (speed >= targetSpeed) return 0;
-  const tStar = -tau * Math.log1p(-speed / targetSpeed);
-  // Clamped: for a tiny speed the two terms cancel and rounding could push x(t*) below 0.
-  const xStar = Math.max(0, targetSpeed * tStar - tau * speed);
-  return xStar >= totalDistance ? 0 : totalDistance - xStar;
+  const reach = distanceToReach(speed, targetSpeed, tau);
+  return reach >= totalDistance ? 0 : totalDistance - reach;
 }

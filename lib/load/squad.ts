@@ -2,6 +2,7 @@ import { computeAthleteColumns, weekFromColumns, type ColumnsRequest } from "./a
 import { dayIndex } from "./dates";
 import { topFlagLevel, type Flag, type FlagLevel } from "./flags";
 import { indexLogs } from "./series";
+import { createWorkspace } from "./workspace";
 import {
   METRICS,
   type AthleteProfile,
@@ -43,6 +44,8 @@ export function computeSquadWeek(
 ): SquadWeekRow[] {
   const ws = dayIndex(weekStart);
   const todayDay = dayIndex(today);
+  // Each athlete's columns are read into plain row values before the next athlete reuses the memory.
+  const scratch = createWorkspace();
   return athletes.map((a) => {
     const req: ColumnsRequest = {
       profile: a.profile,
@@ -54,7 +57,7 @@ export function computeSquadWeek(
       fromDay: ws - 7,
       toDay: ws + 6,
     };
-    const cols = computeAthleteColumns(req);
+    const cols = computeAthleteColumns(req, scratch);
     const { week, flags } = weekFromColumns(cols, req, ws);
     const w = ws - cols.startDay;
     const peakRatios = {} as Record<Metric, number | null>;

@@ -1,6 +1,6 @@
-import { acwrInto, allocAcwrColumns, isProvisional } from "./acwr";
+import { acwrInto, allocAcwrColumns, markProvisional } from "./acwr";
 import { computeAthleteColumns } from "./athlete-load";
-import { resolveProfile } from "./block-metrics";
+import { resolveProfile } from "./accumulate";
 import { dateFromDayIndex, dayIndex } from "./dates";
 import { computeFlags, type Flag, type FlagSession } from "./flags";
 import { buildDailyColumns, effectiveSessions, indexLogs } from "./series";
@@ -68,7 +68,7 @@ export function computeWeekPreview(input: WeekPreviewInput): { week: WeekSummary
   const acwr = allocAcwrColumns(length);
   acwrInto(values[settings.acwrMetric], settings.acwrMethod, acwr, "first");
   const provisional = new Uint8Array(length);
-  for (let i = offset; i < length; i++) provisional[i] = isProvisional(i, firstData) ? 1 : 0;
+  markProvisional(provisional, firstData);
   const firstDate = dateFromDayIndex(historyStart);
   const summary = summariseWeek({
     firstDate,

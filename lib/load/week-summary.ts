@@ -1,5 +1,5 @@
 import { dateFromDayIndex, dayIndex } from "./dates";
-import { DEFAULT_SD_TYPE, monotony, strain, type SdType } from "./monotony";
+import { DEFAULT_SD_TYPE, monotonyOfWindow, type SdType } from "./monotony";
 import { METRICS, type AcwrMethod, type Metric, type MetricValues, type TeamLoadSettings } from "./types";
 import { weeklyChangePct } from "./weekly-change";
 
@@ -76,14 +76,7 @@ export function summariseWeek(input: WeekSummaryInput): WeekSummary {
   const w = dayIndex(input.weekStart) - dayIndex(input.firstDate);
   const totals = metricRecord((m) => sumWindow(values[m], w, w + 7));
   const previousTotals = metricRecord((m) => sumWindow(values[m], w - 7, w));
-  const weekValues = metricRecord((m) => {
-    const out = new Float64Array(7);
-    for (let d = 0; d < 7; d++) {
-      const i = w + d;
-      out[d] = i >= 0 && i < values[m].length ? values[m][i] : 0;
-    }
-    return out;
-  });
+  const mono = metricRecord((m) => monotonyOfWindow(values[m], w, 7, sdType));
   const peak = peakRatioIn(ratio, w, w + 7);
   return {
     weekStart: input.weekStart,
@@ -91,8 +84,12 @@ export function summariseWeek(input: WeekSummaryInput): WeekSummary {
     totals,
     previousTotals,
     changePct: metricRecord((m) => weeklyChangePct(previousTotals[m], totals[m])),
-    monotony: metricRecord((m) => monotony(weekValues[m], sdType)),
-    strain: metricRecord((m) => strain(weekValues[m], sdType)),
+    monotony: mono,
+    // Strain = weekly load × monotony (Foster 1998).
+    strain: metricRecord((m) => {
+      const mo = mono[m];
+      return mo === null ? null : totals[m] * mo;
+    }),
     sdType,
     acwrMetric: settings.acwrMetric,
     acwrMethod: settings.acwrMethod,

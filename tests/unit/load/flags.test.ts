@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { FLAG_DISPLAY, LOAD_CAUTION, flagClasses } from "@/lib/load/flag-display";
 import { computeFlags, topFlagLevel, type FlagInput, type FlagSession } from "@/lib/load/flags";
 import { emptyMetricColumns } from "@/lib/load/series";
+import type { Metric } from "@/lib/load/types";
 import { SETTINGS } from "./fixtures";
 
 // Zones after Gabbett 2016, BJSM 50:273 ("0.8–1.3 … sweet spot", "≥1.5 … danger zone"); the 1.3–1.5 band is
@@ -11,7 +12,9 @@ const FIRST = "2026-02-09"; // Monday, 28 days before the week
 const WEEK = "2026-03-09";
 const W = 28;
 
-function input(overrides: Partial<FlagInput> & { peak?: [number, number]; provisionalAll?: boolean } = {}): FlagInput {
+type TestInput = FlagInput & { values: Record<Metric, Float64Array> };
+
+function input(overrides: Partial<FlagInput> & { peak?: [number, number]; provisionalAll?: boolean } = {}): TestInput {
   const ratio = new Float64Array(35).fill(Number.NaN);
   for (let i = W; i < 35; i++) ratio[i] = 1.0;
   if (overrides.peak) ratio[W + overrides.peak[0]] = overrides.peak[1];
@@ -25,7 +28,7 @@ function input(overrides: Partial<FlagInput> & { peak?: [number, number]; provis
     settings: SETTINGS,
     weekStart: WEEK,
     ...overrides,
-  };
+  } as TestInput;
 }
 
 describe("ACWR flags use the week's peak ratio", () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { ACC_SIZE } from "@/lib/load/block-metrics";
+import { ACC_SIZE, addAccToColumns } from "@/lib/load/accumulate";
 import { blockMetrics } from "@/lib/load/block-metrics";
-import { actualSessionMetrics, metricValueFromAcc, metricsFromAcc, sessionMetrics, srpe } from "@/lib/load/session-metrics";
+import { actualSessionMetrics, metricsFromAcc, sessionMetrics, srpe } from "@/lib/load/session-metrics";
 import { METRICS } from "@/lib/load/types";
 import { PROFILE, SETTINGS, drill, log, plyoBlock, runBlock, session } from "./fixtures";
 
@@ -39,10 +39,15 @@ describe("sessionMetrics (as planned)", () => {
     expect(sessionMetrics(hiPlyo, PROFILE, SETTINGS).highIntensity).toBe(true);
   });
 
-  it("metricValueFromAcc follows METRICS order", () => {
+  it("addAccToColumns writes the columns in METRICS order", () => {
     const acc = new Float64Array(ACC_SIZE).map((_, i) => i + 1);
     const rec = metricsFromAcc(acc);
-    METRICS.forEach((m, k) => expect(metricValueFromAcc(acc, k)).toBe(rec[m]));
+    const cols = new Float64Array(2 * METRICS.length);
+    addAccToColumns(acc, cols, 2, 1);
+    METRICS.forEach((m, k) => {
+      expect(cols[2 * k + 1]).toBe(rec[m]);
+      expect(cols[2 * k]).toBe(0);
+    });
   });
 });
 
