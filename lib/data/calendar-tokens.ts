@@ -64,7 +64,7 @@ const LAST_USED_GRANULARITY_MS = 60 * 60_000;
  * or null for an unknown or revoked token. The token is the credential here, so it is looked up by hash only.
  */
 export async function getFeedByToken({ token, now = new Date() }: { token: string; now?: Date }): Promise<AthleteFeedData | null> {
-  const { CalendarToken, Athlete, Team, PlannedSession, SessionBlock } = await db();
+  const { CalendarToken, Athlete, Team } = await db();
   const row = await CalendarToken.findOne({ where: { tokenHash: hashToken(token), revokedAt: null }, attributes: ["id", "athleteId", "teamId", "lastUsedAt"] });
   if (!row) return null;
   const [athlete, team] = await Promise.all([
@@ -72,33 +72,53 @@ export async function getFeedByToken({ token, now = new Date() }: { token: strin
     Team.findByPk(row.teamId, { attributes: ["name", "timeZone"] }),
   ]);
   if (!athlete || !team) return null;
-  const sessions = await PlannedSession.findAll({
-    where: { athleteId: athlete.id, teamId: row.teamId, status: { [Op.in]: ["published", "cancelled"] } },
-    attributes: ["id", "date", "startTime", "durationMin", "title", "status", "sequence", "updatedAt", "notes"],
-    include: [{ model: SessionBlock, as: "blocks", attributes: ["id", "kind", "title", "running", "drills", "notes", "position"] }],
-    order: [["date", "ASC"], ["startTime", "ASC"], ["id", "ASC"], [{ model: SessionBlock, as: "blocks" }, "position", "ASC"]],
-  });
   if (!row.lastUsedAt || now.getTime() - row.lastUsedAt.getTime() > LAST_USED_GRANULARITY_MS) {
     await CalendarToken.update({ lastUsedAt: now }, { where: { id: row.id } });
   }
-  return {
-    team: { name: team.name, timeZone: team.timeZone },
-    athlete: { id: athlete.id, name: athlete.name },
-    sessions: sessions.map((s) => ({
+  const sessions = await listAthleteSessions({ teamId: row.teamId, athleteId: athlete.id });
+  return { team: { name: team.name, timeZone: team.timeZone }, athlete: { id: athlete.id, name: athlete.name }, sessions };
+}
+
+export type AthleteSession = CalendarSession & {
+  sessionId: number;
+  plannedRpe: number;
+  log: { completion: "yes" | "partly" | "no"; rpe: number | null; minutes: number | null; completedReps: Record<string, number> | null; notes: string | null } | null;
+};
+
+/**
+ * The sessions an athlete sees (published and cancelled, never drafts) with blocks in order and their log:
+ * the calendar feed and the athlete's own training screen read the same list.
+ */
+export async function listAthleteSessions({ teamId, athleteId, from, to }: { teamId: number; athleteId: number; from?: string; to?: string }): Promise<AthleteSession[]> {
+  const { PlannedSession, SessionBlock, SessionLog } = await db();
+  const range = from && to ? { date: { [Op.between]: [from, to] } } : {};
+  const rows = await PlannedSession.findAll({
+    where: { athleteId, teamId, status: { [Op.in]: ["published", "cancelled"] }, ...range },
+    attributes: ["id", "date", "startTime", "durationMin", "title", "plannedRpe", "status", "sequence", "updatedAt", "notes"],
+    include: [
+      { model: SessionBlock, as: "blocks", attributes: ["id", "kind", "title", "running", "drills", "notes", "position"] },
+      { model: SessionLog, as: "log", attributes: ["completion", "rpe", "minutes", "completedReps", "notes"] },
+    ],
+    order: [["date", "ASC"], ["startTime", "ASC"], ["id", "ASC"], [{ model: SessionBlock, as: "blocks" }, "position", "ASC"]],
+  });
+  return rows.map((s) => {
+    const log = (s as unknown as { log: AthleteSession["log"] }).log;
+    return {
       id: String(s.id),
+      sessionId: s.id,
       date: String(s.date).slice(0, 10),
       startTime: s.startTime,
       durationMin: s.durationMin,
       title: s.title,
+      plannedRpe: s.plannedRpe,
       status: s.status as SessionStatus,
       sequence: s.sequence,
       updatedAt: s.updatedAt,
       notes: s.notes,
-      blocks: (s.blocks ?? []).map(
-        (b): BlockInput => ({ id: String(b.id), kind: b.kind, title: b.title, running: b.running ?? null, drills: b.drills ?? null, ...(b.notes ? { notes: b.notes } : {}) }),
-      ),
-    })),
-  };
+      blocks: (s.blocks ?? []).map((b): BlockInput => ({ id: String(b.id), kind: b.kind, title: b.title, running: b.running ?? null, drills: b.drills ?? null, ...(b.notes ? { notes: b.notes } : {}) })),
+      log: log ? { completion: log.completion, rpe: log.rpe, minutes: log.minutes, completedReps: log.completedReps, notes: log.notes } : null,
+    };
+  });
 }
 
 /** Seeds or tests: a token for every athlete of the team who has none yet. */

@@ -8,7 +8,8 @@ import { chromium, type Browser, type Page } from "playwright-core";
 import { DEMO_PASSWORD } from "@/lib/seed/demo-club";
 
 const ROOT = process.cwd();
-const DIST = ".next-e2e";
+// E2E_DIST_DIR lets an engineer build into their own folder while others run browser tests too.
+const DIST = process.env.E2E_DIST_DIR || ".next-e2e";
 const NEXT = join(ROOT, "node_modules/next/dist/bin/next");
 export const ARTIFACTS = join(ROOT, "tests/e2e/artifacts");
 export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";

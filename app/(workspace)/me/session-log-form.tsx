@@ -1,0 +1,85 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import type { z } from "zod";
+import { Button } from "@/components/ui/button";
+import { Field, Input, Textarea } from "@/components/ui/field";
+import { ApiError, sendJson } from "@/components/notices/fetch-json";
+import { LOG_COMPLETIONS, sessionLogSchema, type SessionLogInput } from "@/lib/validations/log";
+
+type FormValues = z.input<typeof sessionLogSchema>;
+type Log = { completion: SessionLogInput["completion"]; rpe: number | null; minutes: number | null; notes: string | null };
+
+const COMPLETION_LABEL: Record<(typeof LOG_COMPLETIONS)[number], string> = { yes: "Did it all", partly: "Did part of it", no: "Did not train" };
+const blankToNull = (v: unknown) => (v === "" || v === null || v === undefined ? null : Number(v));
+
+/** What the athlete did in one session: completion, session RPE (CR-10), minutes and a note. */
+export function SessionLogForm({ sessionId, plannedMinutes, log }: { sessionId: number; plannedMinutes: number; log: Log | null }) {
+  const router = useRouter();
+  const [saved, setSaved] = useState<string | null>(null);
+  const { register, handleSubmit, setError, formState, watch } = useForm<FormValues, unknown, SessionLogInput>({
+    resolver: zodResolver(sessionLogSchema),
+    defaultValues: { completion: log?.completion ?? "yes", rpe: log?.rpe ?? null, minutes: log?.minutes ?? plannedMinutes, completedReps: null, notes: log?.notes ?? null },
+  });
+  const errors = formState.errors;
+  const didNotTrain = watch("completion") === "no";
+  const id = (name: string) => `log-${sessionId}-${name}`;
+
+  const submit = handleSubmit(async (values) => {
+    setSaved(null);
+    const body: SessionLogInput = didNotTrain ? { ...values, rpe: values.rpe ?? 0, minutes: null } : values;
+    try {
+      await sendJson(`/api/sessions/${sessionId}/log`, "PUT", body);
+      setSaved("Saved. Thank you!");
+      router.refresh();
+    } catch (err) {
+      if (err instanceof ApiError) {
+        for (const [field, messages] of Object.entries(err.fields)) {
+          if (field === "completion" || field === "rpe" || field === "minutes" || field === "notes") setError(field, { message: messages[0] });
+        }
+        setSaved(err.message);
+      } else setSaved("Could not save; check your connection and try again.");
+    }
+  });
+
+  return (
+    <form onSubmit={submit} className="mt-4 space-y-4 rounded-lg bg-paper-sunk p-3 sm:p-4" data-testid="log-form" noValidate>
+      <fieldset>
+        <legend className="text-sm font-medium text-ink-800">How did it go?</legend>
+        <div className="mt-2 grid gap-2 sm:grid-cols-3">
+          {LOG_COMPLETIONS.map((c) => (
+            <label key={c} className="flex cursor-pointer items-center gap-2 rounded-lg bg-paper-raised px-3 py-3 text-sm ring-1 ring-inset ring-ink-200 has-[:checked]:ring-2 has-[:checked]:ring-lane-500">
+              <input type="radio" value={c} {...register("completion")} className="accent-lane-600" data-testid={`log-completion-${c}`} />
+              {COMPLETION_LABEL[c]}
+            </label>
+          ))}
+        </div>
+        {errors.completion ? <p role="alert" className="mt-1 text-xs font-medium text-flag-spike">{errors.completion.message}</p> : null}
+      </fieldset>
+      {didNotTrain ? null : (
+        <div className="grid grid-cols-2 gap-3">
+          <Field label="Effort (RPE 0–10)" htmlFor={id("rpe")} error={errors.rpe?.message} hint="How hard the whole session felt, about 30 min after.">
+            <Input id={id("rpe")} type="number" inputMode="decimal" min={0} max={10} step={0.5} aria-invalid={Boolean(errors.rpe)} {...register("rpe", { setValueAs: blankToNull })} data-testid="log-rpe" />
+          </Field>
+          <Field label="Minutes" htmlFor={id("minutes")} error={errors.minutes?.message}>
+            <Input id={id("minutes")} type="number" inputMode="numeric" min={1} max={600} aria-invalid={Boolean(errors.minutes)} {...register("minutes", { setValueAs: blankToNull })} data-testid="log-minutes" />
+          </Field>
+        </div>
+      )}
+      <Field label="Anything to tell your coach? (optional)" htmlFor={id("notes")} error={errors.notes?.message}>
+        <Textarea id={id("notes")} rows={2} {...register("notes", { setValueAs: (v: unknown) => (typeof v === "string" && v.trim() ? v : null) })} data-testid="log-notes" />
+      </Field>
+      <div className="flex items-center gap-3">
+        <Button type="submit" disabled={formState.isSubmitting} className="w-full sm:w-auto" data-testid="log-save">
+          {log ? "Update my log" : "Save my log"}
+        </Button>
+        <p aria-live="polite" className="text-sm text-lane-700" data-testid="log-status">
+          {saved}
+        </p>
+      </div>
+    </form>
+  );
+}
