@@ -5,6 +5,7 @@ import {
   computeSquadWeek,
   dayIndex,
   startOfWeek,
+  type AthleteProfile,
   type Flag,
   type FlagLevel,
   type LoadView,
@@ -110,7 +111,7 @@ export type AthleteLoadDayDto = {
 };
 
 export type AthleteLoadDto = {
-  athlete: { id: number; name: string; groupName: string | null; profile: { vmax: number | null; tau: number | null; stepLengthM: number | null; plyoLevel: string } };
+  athlete: { id: number; name: string; groupName: string | null; profile: AthleteProfile };
   from: string;
   to: string;
   today: string;
@@ -121,6 +122,8 @@ export type AthleteLoadDto = {
   /** The week holding today (or `to` when the range ends earlier). */
   week: WeekSummary;
   flags: Flag[];
+  /** Next week as planned so far (logged work plus the plan, drafts included). */
+  upcoming: { week: WeekSummary; flags: Flag[] };
 };
 
 /** Default athlete range: eight weeks back to the end of next week. */
@@ -147,6 +150,7 @@ export async function getAthleteLoad({ teamId, athleteId, from, to, view, metric
   const plan = computeAthleteLoad({ ...base, logs: [], today: "1970-01-01", view: "projected" });
   // Flags judge the team's own metric, not the one charted.
   const flagged = chosen === settings.acwrMetric ? load : computeAthleteLoad({ ...base, settings, logs: athlete.logs, today: now, view });
+  const next = computeAthleteLoad({ ...base, settings, logs: athlete.logs, today: now, view: "projected", weekStart: addDays(weekStart, 7) });
   return {
     athlete: { id: athlete.id, name: athlete.name, groupName: athlete.groupName, profile: athlete.profile },
     from: range.from,
@@ -168,6 +172,7 @@ export async function getAthleteLoad({ teamId, athleteId, from, to, view, metric
     })),
     week: flagged.week,
     flags: flagged.flags,
+    upcoming: { week: next.week, flags: next.flags },
   };
 }
 

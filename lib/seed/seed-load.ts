@@ -120,8 +120,8 @@ export async function seedLoad(d: Db, club: SeededClub, options: { today?: strin
           });
           if (!past) continue;
           const roll = random();
-          if (roll < 0.02) continue; // never logged: shows as missing
-          const completion = roll < 0.04 ? "no" : roll < 0.1 ? "partly" : "yes";
+          if (roll < 0.015) continue; // never logged: shows as missing
+          const completion = roll < 0.03 ? "no" : roll < 0.08 ? "partly" : "yes";
           const rpe = completion === "no" ? null : Math.max(1, Math.min(10, half(p.rpe + (random() - 0.5) * 2)));
           const minutes = completion === "no" ? null : Math.round(duration * (completion === "partly" ? 0.6 : 0.95 + random() * 0.1));
           // A partial session sometimes records reps for its first block; otherwise completion scales the plan.

@@ -31,3 +31,6 @@ export type TeamSettingsInput = z.infer<typeof teamSettingsSchema>;
 /** PATCH body: any subset; the merged record is checked with teamSettingsSchema. */
 export const teamSettingsPatchSchema = base.partial().strict();
 export type TeamSettingsPatch = z.infer<typeof teamSettingsPatchSchema>;
+
+/** What the thresholds form holds before parsing (inputs give strings; the schema coerces). */
+export type TeamSettingsFormValues = z.input<typeof teamSettingsSchema>;

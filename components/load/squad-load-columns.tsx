@@ -1,0 +1,155 @@
+"use client";
+
+import Link from "next/link";
+import {
+  columnFilteringFeature,
+  columnVisibilityFeature,
+  createColumnHelper,
+  createFilteredRowModel,
+  createSortedRowModel,
+  rowSortingFeature,
+  sortFn_alphanumeric,
+  tableFeatures,
+  type Row,
+} from "@tanstack/react-table";
+import type { SquadWeekRowDto } from "@/lib/data/load-views";
+import { formatNumber } from "@/lib/format/number";
+import type { FlagKind } from "@/lib/load/flags";
+import { METRIC_INFO, type Metric } from "@/lib/load/types";
+import { AcwrCell } from "./acwr-cell";
+import { FlagBadges } from "./flag-badge";
+
+export const squadFeatures = tableFeatures({
+  rowSortingFeature,
+  columnFilteringFeature,
+  columnVisibilityFeature,
+  filteredRowModel: createFilteredRowModel(),
+  sortedRowModel: createSortedRowModel(),
+  sortFns: { alphanumeric: sortFn_alphanumeric },
+});
+
+type Features = typeof squadFeatures;
+export type SquadRow = SquadWeekRowDto & { acwrMetric: Metric };
+export type FlagFilter = "any" | FlagKind;
+
+const helper = createColumnHelper<Features, SquadRow>();
+
+/** Column ids the CSV and the column chooser know, with their plain labels. */
+export const COLUMN_LABELS: Record<string, string> = {
+  name: "Athlete",
+  group: "Group",
+  hsrM: "HSR m",
+  nearMaxM: "Near-max m",
+  sprintSteps: "Sprint steps (est.)",
+  contacts: "Plyo contacts",
+  srpe: "sRPE (AU)",
+  ratio: "ACWR",
+  change: "Weekly change",
+  flags: "Flags",
+};
+
+/** Right-aligned numeric columns, and the one-line explanation shown on each header. */
+export const NUMERIC_COLUMNS = new Set(["hsrM", "nearMaxM", "sprintSteps", "contacts", "srpe", "ratio", "change"]);
+export const COLUMN_HINTS: Record<string, string> = {
+  hsrM: METRIC_INFO.hsrM.description,
+  nearMaxM: METRIC_INFO.nearMaxM.description,
+  sprintSteps: `${METRIC_INFO.sprintSteps.description} An estimate.`,
+  contacts: METRIC_INFO.contacts.description,
+  srpe: METRIC_INFO.srpe.description,
+  ratio: "Highest acute:chronic workload ratio of the team metric this week (team method).",
+  change: "Change of the team metric against last week.",
+};
+
+function metricColumn(metric: Metric, id: keyof typeof COLUMN_LABELS) {
+  return helper.accessor((r) => r.totals[metric], {
+    id,
+    header: COLUMN_LABELS[id],
+    sortDescFirst: true,
+    cell: (c) => <span className="tabular-nums">{formatNumber(c.getValue(), 0)}</span>,
+  });
+}
+
+function hasFlag(row: Row<Features, SquadRow>, _columnId: string, value: FlagFilter): boolean {
+  return value === "any" ? row.original.flags.length > 0 : row.original.flags.some((f) => f.kind === value);
+}
+
+function inGroup(row: Row<Features, SquadRow>, _columnId: string, value: string): boolean {
+  return (row.original.groupName ?? "") === value;
+}
+
+export const squadColumns = helper.columns([
+  helper.accessor("name", {
+    id: "name",
+    header: COLUMN_LABELS.name,
+    sortFn: "alphanumeric",
+    enableHiding: false,
+    cell: (c) => (
+      <span className="flex flex-col whitespace-nowrap">
+        <Link href={`/load/${c.row.original.id}`} className="font-medium text-ink-900 hover:text-lane-700 hover:underline" data-testid="athlete-link">
+          {c.getValue()}
+        </Link>
+        {c.row.original.missingDays > 0 ? (
+          <span className="text-2xs text-flag-climb">{c.row.original.missingDays === 1 ? "1 session not logged" : `${c.row.original.missingDays} sessions not logged`}</span>
+        ) : null}
+      </span>
+    ),
+  }),
+  helper.accessor((r) => r.ratio ?? undefined, {
+    id: "ratio",
+    header: COLUMN_LABELS.ratio,
+    sortDescFirst: true,
+    sortUndefined: "last",
+    cell: (c) => <AcwrCell row={c.row.original} />,
+  }),
+  helper.accessor((r) => r.flags.length, {
+    id: "flags",
+    header: COLUMN_LABELS.flags,
+    sortDescFirst: true,
+    filterFn: hasFlag,
+    cell: (c) => <FlagBadges flags={c.row.original.flags} />,
+  }),
+  metricColumn("hsrM", "hsrM"),
+  metricColumn("nearMaxM", "nearMaxM"),
+  metricColumn("sprintSteps", "sprintSteps"),
+  metricColumn("contacts", "contacts"),
+  metricColumn("srpe", "srpe"),
+  helper.accessor((r) => r.changePct[r.acwrMetric] ?? undefined, {
+    id: "change",
+    header: COLUMN_LABELS.change,
+    sortDescFirst: true,
+    sortUndefined: "last",
+    cell: (c) => {
+      const v = c.getValue();
+      if (v === undefined) return <span className="text-ink-300">–</span>;
+      const tone = v > 0 ? "text-ink-800" : "text-ink-500";
+      return <span className={`tabular-nums ${tone}`}>{`${v > 0 ? "+" : ""}${formatNumber(v, 0)}%`}</span>;
+    },
+  }),
+  helper.accessor((r) => r.groupName ?? "", {
+    id: "group",
+    header: COLUMN_LABELS.group,
+    sortFn: "alphanumeric",
+    filterFn: inGroup,
+    cell: (c) => <span className="whitespace-nowrap text-ink-600">{c.getValue() || "–"}</span>,
+  }),
+]);
+
+/** Plain values for the CSV export (numbers unrounded to one decimal, ratios to two). */
+export function csvValue(row: SquadRow, columnId: string): string | number {
+  switch (columnId) {
+    case "name":
+      return row.name;
+    case "group":
+      return row.groupName ?? "";
+    case "ratio":
+      return row.ratio === null ? "" : Number(row.ratio.toFixed(2));
+    case "change": {
+      const v = row.changePct[row.acwrMetric];
+      return v === null ? "" : Number(v.toFixed(1));
+    }
+    case "flags":
+      return row.flags.map((f) => f.reason).join(" | ");
+    default:
+      return Number((row.totals[columnId as Metric] ?? 0).toFixed(1));
+  }
+}

@@ -1,0 +1,87 @@
+"use client";
+
+import Papa from "papaparse";
+import type { ReactTable } from "@tanstack/react-table";
+import { Button } from "@/components/ui/button";
+import { Select } from "@/components/ui/field";
+import { FLAG_DISPLAY } from "@/lib/load/flag-display";
+import type { FlagKind } from "@/lib/load/flags";
+import { COLUMN_LABELS, csvValue, type FlagFilter, type SquadRow, type squadFeatures } from "./squad-load-columns";
+
+type Table = ReactTable<typeof squadFeatures, SquadRow>;
+
+const FLAG_KINDS = Object.keys(FLAG_DISPLAY) as FlagKind[];
+
+/** CSV of the rows as shown (filtered, sorted) and the visible columns. */
+function exportCsv(table: Table, week: string) {
+  const columns = table.getVisibleLeafColumns().map((c) => c.id);
+  const data = table.getRowModel().rows.map((r) => columns.map((id) => csvValue(r.original, id)));
+  const csv = Papa.unparse({ fields: columns.map((id) => COLUMN_LABELS[id] ?? id), data });
+  const url = URL.createObjectURL(new Blob([csv], { type: "text/csv;charset=utf-8" }));
+  const a = document.createElement("a");
+  a.href = url;
+  a.download = `squad-load-${week}.csv`;
+  a.click();
+  URL.revokeObjectURL(url);
+}
+
+export function SquadToolbar({ table, groups, week }: { table: Table; groups: { id: number; name: string }[]; week: string }) {
+  const group = table.getColumn("group");
+  const flags = table.getColumn("flags");
+  return (
+    <div className="flex flex-wrap items-end gap-3">
+      <label className="flex flex-col gap-1 text-xs font-medium text-ink-600">
+        Group
+        <Select
+          className="w-44"
+          data-testid="filter-group"
+          value={(group?.getFilterValue() as string | undefined) ?? ""}
+          onChange={(e) => group?.setFilterValue(e.target.value || undefined)}
+        >
+          <option value="">All groups</option>
+          {groups.map((g) => (
+            <option key={g.id} value={g.name}>
+              {g.name}
+            </option>
+          ))}
+        </Select>
+      </label>
+      <label className="flex flex-col gap-1 text-xs font-medium text-ink-600">
+        Flags
+        <Select
+          className="w-44"
+          data-testid="filter-flag"
+          value={(flags?.getFilterValue() as FlagFilter | undefined) ?? ""}
+          onChange={(e) => flags?.setFilterValue((e.target.value || undefined) as FlagFilter | undefined)}
+        >
+          <option value="">Everyone</option>
+          <option value="any">Any flag</option>
+          {FLAG_KINDS.map((k) => (
+            <option key={k} value={k}>
+              {FLAG_DISPLAY[k].label}
+            </option>
+          ))}
+        </Select>
+      </label>
+      <details className="relative">
+        <summary className="flex h-10 cursor-pointer list-none items-center rounded-lg px-3 text-sm font-medium text-ink-700 ring-1 ring-inset ring-ink-200 hover:bg-ink-50" data-testid="choose-columns">
+          Columns
+        </summary>
+        <div className="absolute z-10 mt-1 w-56 space-y-1 rounded-lg bg-paper-raised p-3 shadow-lift ring-1 ring-ink-100">
+          {table
+            .getAllLeafColumns()
+            .filter((c) => c.getCanHide())
+            .map((c) => (
+              <label key={c.id} className="flex items-center gap-2 text-sm text-ink-700">
+                <input type="checkbox" checked={c.getIsVisible()} onChange={(e) => c.toggleVisibility(e.target.checked)} className="accent-lane-600" />
+                {COLUMN_LABELS[c.id] ?? c.id}
+              </label>
+            ))}
+        </div>
+      </details>
+      <Button variant="secondary" onClick={() => exportCsv(table, week)} data-testid="export-csv">
+        Export CSV
+      </Button>
+    </div>
+  );
+}

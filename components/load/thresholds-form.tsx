@@ -1,0 +1,116 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState, type ReactNode } from "react";
+import { useForm, useWatch } from "react-hook-form";
+import { mutate } from "swr";
+import { Button } from "@/components/ui/button";
+import { Field, Input, Select } from "@/components/ui/field";
+import { METRIC_INFO, METRICS, type TeamLoadSettings } from "@/lib/load/types";
+import { teamSettingsSchema, type TeamSettingsFormValues, type TeamSettingsInput } from "@/lib/validations/team-settings";
+import { FetchError, fetchJson, loadKeys } from "./swr-keys";
+
+const METHODS: [TeamLoadSettings["acwrMethod"], string, string][] = [
+  ["ewma", "EWMA (default)", "Exponentially weighted, 7 and 28 days (Williams et al. 2017)."],
+  ["rolling_coupled", "Rolling, coupled", "7-day mean ÷ 28-day mean including this week (Hulin et al. 2016)."],
+  ["rolling_uncoupled", "Rolling, uncoupled", "7-day mean ÷ mean of the three weeks before (Lolli et al. 2019)."],
+];
+
+type NumberField = Exclude<keyof TeamSettingsInput, "acwrMethod" | "acwrMetric">;
+const NUMBER_FIELDS: { name: NumberField; section: "speed" | "ratio" | "week"; label: string; unit: string; step: string; hint: string }[] = [
+  { name: "hsrSpeedMs", section: "speed", label: "High-speed running from", unit: "m/s", step: "0.1", hint: "5.5 m/s = 19.8 km/h, the usual HSR line (Bradley et al. 2009)." },
+  { name: "nearMaxPct", section: "speed", label: "Near-max from", unit: "% of vmax", step: "1", hint: "Share of each athlete's own tested max velocity." },
+  { name: "spikeRatio", section: "ratio", label: "Spike at or above", unit: "ratio", step: "0.05", hint: "Gabbett 2016 calls ≥ 1.5 the danger zone." },
+  { name: "risingRatio", section: "ratio", label: "Climbing at or above", unit: "ratio", step: "0.05", hint: "Top of the 0.8–1.3 comfortable range." },
+  { name: "lowRatio", section: "ratio", label: "Underloaded below", unit: "ratio", step: "0.05", hint: "Bottom of the comfortable range." },
+  { name: "weeklyChangeLimitPct", section: "week", label: "Weekly increase limit", unit: "%", step: "1", hint: "More than this on last week is flagged (Harrison & Johnston 2017)." },
+  { name: "recoveryHours", section: "week", label: "Hours between hard sessions", unit: "h", step: "1", hint: "Max-velocity or high-intensity plyometric sessions; NSCA suggests 48–72 h." },
+];
+
+function Section({ title, lead, children }: { title: string; lead: string; children: ReactNode }) {
+  return (
+    <fieldset className="border-t border-ink-100 pt-4 first:border-t-0 first:pt-0">
+      <legend className="sr-only">{title}</legend>
+      <h2 className="text-sm font-semibold text-ink-900" aria-hidden>
+        {title}
+      </h2>
+      <p className="mb-3 text-xs text-ink-500">{lead}</p>
+      <div className="grid gap-4 sm:grid-cols-2">{children}</div>
+    </fieldset>
+  );
+}
+
+export function ThresholdsForm({ teamId, initial }: { teamId: number; initial: TeamLoadSettings }) {
+  const [message, setMessage] = useState<{ tone: "ok" | "error"; text: string }>();
+  const { register, handleSubmit, setError, reset, formState, control } = useForm<TeamSettingsFormValues, unknown, TeamSettingsInput>({
+    resolver: zodResolver(teamSettingsSchema),
+    defaultValues: initial,
+  });
+  const { errors, isSubmitting, isDirty } = formState;
+  const method = useWatch({ control, name: "acwrMethod" });
+  const field = (f: (typeof NUMBER_FIELDS)[number]) => (
+    <Field key={f.name} label={`${f.label} (${f.unit})`} htmlFor={f.name} error={errors[f.name]?.message} hint={f.hint}>
+      <Input id={f.name} type="number" inputMode="decimal" step={f.step} aria-invalid={!!errors[f.name]} {...register(f.name)} />
+    </Field>
+  );
+
+  const onSubmit = handleSubmit(async (values) => {
+    setMessage(undefined);
+    try {
+      const { settings } = await fetchJson<{ settings: TeamLoadSettings }>(loadKeys.teamSettings(teamId), { method: "PATCH", body: JSON.stringify(values) });
+      reset(settings);
+      // Every load answer depends on these thresholds.
+      await mutate((key) => typeof key === "string" && key.includes("/load"), undefined, { revalidate: true });
+      setMessage({ tone: "ok", text: "Saved. Flags and ratios now use these thresholds." });
+    } catch (err) {
+      if (err instanceof FetchError && err.fields) {
+        for (const [field, messages] of Object.entries(err.fields)) {
+          if (field in initial) setError(field as keyof TeamSettingsInput, { message: messages[0] });
+        }
+      }
+      setMessage({ tone: "error", text: err instanceof Error ? err.message : "Could not save" });
+    }
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="space-y-6" data-testid="thresholds-form">
+      <Section title="Speed lines" lead="Running at or above these speeds counts towards HSR and near-max metres.">
+        {NUMBER_FIELDS.filter((f) => f.section === "speed").map(field)}
+      </Section>
+      <Section title="Acute:chronic ratio" lead="How the ratio is worked out, and the zones that raise a flag.">
+        <Field label="Method" htmlFor="acwrMethod" error={errors.acwrMethod?.message} hint={METHODS.find((m) => m[0] === method)?.[2]}>
+          <Select id="acwrMethod" {...register("acwrMethod")}>
+            {METHODS.map(([v, label]) => (
+              <option key={v} value={v}>
+                {label}
+              </option>
+            ))}
+          </Select>
+        </Field>
+        <Field label="Judged on" htmlFor="acwrMetric" error={errors.acwrMetric?.message} hint="The metric whose ratio raises spike, climbing and underloaded flags.">
+          <Select id="acwrMetric" {...register("acwrMetric")}>
+            {METRICS.map((m) => (
+              <option key={m} value={m}>
+                {METRIC_INFO[m].label}
+              </option>
+            ))}
+          </Select>
+        </Field>
+        {NUMBER_FIELDS.filter((f) => f.section === "ratio").map(field)}
+      </Section>
+      <Section title="Week to week" lead="Jumps in weekly load and hard sessions too close together.">
+        {NUMBER_FIELDS.filter((f) => f.section === "week").map(field)}
+      </Section>
+      <div className="flex flex-wrap items-center gap-3">
+        <Button type="submit" disabled={isSubmitting || !isDirty} data-testid="save-thresholds">
+          {isSubmitting ? "Saving…" : "Save thresholds"}
+        </Button>
+        {message ? (
+          <p role="status" className={message.tone === "ok" ? "text-sm text-flag-steady" : "text-sm text-flag-spike"}>
+            {message.text}
+          </p>
+        ) : null}
+      </div>
+    </form>
+  );
+}

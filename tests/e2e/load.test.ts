@@ -1,0 +1,97 @@
+// Load screens in a real browser against the built app and the demo seed: the squad table shows the club's
+// week, sorts by ACWR, flags the demo's spike next week, and the athlete chart draws; athletes see only their own.
+import type { Browser, Page } from "playwright-core";
+import { afterAll, beforeAll, expect, it } from "vitest";
+import { DEMO_ATHLETES, DEMO_STAFF } from "@/lib/seed/demo-club";
+import { SPIKE_ATHLETE } from "@/lib/seed/seed-load";
+import { apiSession, describeBrowser, launchBrowser, screenshot, signIn, startApp, type App } from "./harness";
+
+const headCoach = DEMO_STAFF.find((s) => s.role === "head_coach")!;
+const maya = DEMO_ATHLETES.find((a) => a.name === "Maya Okafor")!;
+
+async function ratios(page: Page): Promise<number[]> {
+  const cells = page.locator('[data-testid="squad-load-row"] [data-testid="acwr-cell"]');
+  return (await cells.evaluateAll((els) => els.map((e) => Number(e.getAttribute("data-ratio"))))) as number[];
+}
+
+describeBrowser("load screens", () => {
+  let app: App;
+  let browser: Browser;
+  let page: Page;
+
+  beforeAll(async () => {
+    app = await startApp();
+    browser = await launchBrowser();
+    page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await signIn(page, app, headCoach.email);
+  }, 300_000);
+  afterAll(async () => {
+    await browser?.close();
+    await app?.stop();
+  });
+
+  it("renders the demo club's week, one row per athlete, with the caution", async () => {
+    await page.goto(`${app.url}/load`);
+    await page.getByTestId("squad-load-table").waitFor();
+    const names = await page.getByTestId("squad-load-row").evaluateAll((rows) => rows.map((r) => r.getAttribute("data-athlete")));
+    expect(names.sort()).toEqual(DEMO_ATHLETES.map((a) => a.name).sort());
+    expect(await page.getByTestId("load-caution").count()).toBe(1);
+    // Eight weeks of logged history stand behind this week, so every athlete has a ratio.
+    expect((await ratios(page)).every((r) => Number.isFinite(r) && r > 0)).toBe(true);
+    await screenshot(page, "load-squad");
+  });
+
+  it("sorts by ACWR, highest first, then lowest first", async () => {
+    await page.getByTestId("sort-ratio").click();
+    const desc = await ratios(page);
+    expect(desc).toEqual([...desc].sort((a, b) => b - a));
+    await page.getByTestId("sort-ratio").click();
+    const asc = await ratios(page);
+    expect(asc).toEqual([...asc].sort((a, b) => a - b));
+    expect(new Set(asc).size).toBeGreaterThan(1);
+  });
+
+  it("filters by group and shows the demo's spike in next week's plan", async () => {
+    await page.getByTestId("filter-group").selectOption("Senior sprint");
+    const seniors = DEMO_ATHLETES.filter((a) => a.group === "Senior sprint").length;
+    await expect.poll(() => page.getByTestId("squad-load-row").count()).toBe(seniors);
+    await page.getByLabel("Next week").click();
+    await page.getByTestId("week-label").getByText(/–/).waitFor();
+    const jonah = page.locator(`[data-testid="squad-load-row"][data-athlete="${SPIKE_ATHLETE}"]`);
+    await jonah.locator('[data-testid="flag-badge"][data-kind="spike"]').waitFor({ timeout: 15_000 });
+    await page.getByTestId("filter-flag").selectOption("spike");
+    await expect.poll(() => page.getByTestId("squad-load-row").count()).toBe(1);
+    await screenshot(page, "load-squad-next-week");
+  });
+
+  it("draws the athlete chart: bars of the chosen metric and the ratio line", async () => {
+    await page.locator(`[data-testid="squad-load-row"][data-athlete="${SPIKE_ATHLETE}"]`).getByTestId("athlete-link").click();
+    await page.waitForURL(/\/load\/\d+$/);
+    const chart = page.getByTestId("load-chart");
+    await chart.locator("svg .recharts-bar-rectangle").first().waitFor();
+    expect(await chart.locator("svg .recharts-bar-rectangle").count()).toBeGreaterThan(20);
+    expect(await page.getByTestId("ratio-chart").locator("svg path.recharts-curve").count()).toBeGreaterThan(0);
+    await page.getByTestId("metric-select").selectOption("hsrM");
+    await page.getByText("HSR metres per day").waitFor();
+    expect(await page.getByTestId("load-caution").count()).toBe(1);
+    await screenshot(page, "load-athlete");
+  });
+
+  it("lets an athlete open only their own load", async () => {
+    const mayaPage = await browser.newPage({ viewport: { width: 390, height: 844 } });
+    await signIn(mayaPage, app, maya.email!);
+    await mayaPage.goto(`${app.url}/load`);
+    await mayaPage.waitForURL(/\/load\/\d+$/);
+    const own = Number(new URL(mayaPage.url()).pathname.split("/").pop());
+    await mayaPage.getByTestId("load-chart").locator("svg").first().waitFor();
+    const api = await apiSession(app, maya.email!);
+    expect((await api.fetch(`/api/athletes/${own}/load`)).status).toBe(200);
+    const squad = await (await apiSession(app, headCoach.email)).fetch(`/api/teams/1/load`);
+    const jonahId = ((await squad.json()) as { rows: { id: number; name: string }[] }).rows.find((r) => r.name === SPIKE_ATHLETE)!.id;
+    expect((await api.fetch(`/api/athletes/${jonahId}/load`)).status).toBe(404);
+    expect((await api.fetch(`/api/teams/1/load`)).status).toBe(403);
+    const res = await mayaPage.goto(`${app.url}/load/${jonahId}`);
+    expect(res?.status()).toBe(404);
+    await mayaPage.close();
+  });
+});
