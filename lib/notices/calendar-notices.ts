@@ -84,8 +84,14 @@ export async function queueCalendarNotices({ transaction, teamId, actorUserId, c
   for (const [athleteId, contact] of contacts) {
     const mine = actions.filter((a) => a.athleteId === athleteId).map((a) => a.action);
     const send = async (method: "REQUEST" | "CANCEL", sessions: CalendarSession[], mail: RenderedEmail) => {
-      const content = buildInvite({ method, team, organizer, attendee: { name: contact.name, email: contact.email }, sessions, appUrl: base, sessionUrl });
-      await enqueueMail({ transaction, teamId, kind: method === "CANCEL" ? "calendar_cancel" : "calendar_request", to: contact.email, mail, icalEvent: { method, content } });
+      let icalEvent: { method: typeof method; content: string } | null = null;
+      try {
+        icalEvent = { method, content: buildInvite({ method, team, organizer, attendee: { name: contact.name, email: contact.email }, sessions, appUrl: base, sessionUrl }) };
+      } catch (err) {
+        // The coach's plan change must not fail over a calendar attachment: the mail still lists the sessions.
+        console.error(`[notices] no calendar attachment for ${contact.email}:`, err);
+      }
+      await enqueueMail({ transaction, teamId, kind: method === "CANCEL" ? "calendar_cancel" : "calendar_request", to: contact.email, mail, icalEvent });
       queued += 1;
     };
     for (const [weekStart, sessions] of byWeek(team, mine.filter((a) => a.method === "REQUEST" && !a.update))) {

@@ -3,7 +3,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Textarea } from "@/components/ui/field";
@@ -20,12 +20,12 @@ const blankToNull = (v: unknown) => (v === "" || v === null || v === undefined ?
 export function SessionLogForm({ sessionId, plannedMinutes, log }: { sessionId: number; plannedMinutes: number; log: Log | null }) {
   const router = useRouter();
   const [saved, setSaved] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState, watch } = useForm<FormValues, unknown, SessionLogInput>({
+  const { register, handleSubmit, setError, formState, control } = useForm<FormValues, unknown, SessionLogInput>({
     resolver: zodResolver(sessionLogSchema),
     defaultValues: { completion: log?.completion ?? "yes", rpe: log?.rpe ?? null, minutes: log?.minutes ?? plannedMinutes, completedReps: null, notes: log?.notes ?? null },
   });
   const errors = formState.errors;
-  const didNotTrain = watch("completion") === "no";
+  const didNotTrain = useWatch({ control, name: "completion" }) === "no";
   const id = (name: string) => `log-${sessionId}-${name}`;
 
   const submit = handleSubmit(async (values) => {
