@@ -90,4 +90,34 @@ describeBrowser("physio journey", () => {
     await page.getByTestId("mail-html").screenshot({ path: "tests/e2e/artifacts/physio-mail-html.png" });
     await page.close();
   });
+
+  it("the notices API checks who is asking and names the wrong field", async () => {
+    const athleteApi = await apiSession(app, "maya@harbourvale.test");
+    const physioApi = await apiSession(app, PHYSIO);
+    expect((await athleteApi.fetch("/api/alerts")).status).toBe(403);
+    expect((await athleteApi.fetch("/api/me/notification-settings")).status).toBe(403);
+    expect((await fetch(`${app.url}/api/alerts`)).status).toBe(401);
+    expect((await fetch(`${app.url}/api/mailbox`)).status).toBe(401);
+
+    const list = (await (await physioApi.fetch("/api/alerts?status=all")).json()) as { alerts: Array<{ id: number }> };
+    const id = list.alerts[0]!.id;
+    const noNote = await physioApi.fetch(`/api/alerts/${id}`, { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify({ action: "resolve", note: "  " }) });
+    expect(noNote.status).toBe(400);
+    expect(((await noNote.json()) as { error: { fields: Record<string, string[]> } }).error.fields.note).toBeDefined();
+    expect((await physioApi.fetch("/api/alerts?status=later")).status).toBe(400);
+    expect((await physioApi.fetch("/api/alerts/999999", { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify({ action: "acknowledge" }) })).status).toBe(404);
+    const setting = await physioApi.fetch("/api/me/notification-settings", { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify({ alertEmail: "weekly" }) });
+    expect(setting.status).toBe(400);
+
+    // Calendar links: the athlete manages only their own; a physio manages none; a coach any in the team.
+    const [jonah] = await app.query<{ id: number }>("SELECT id FROM athletes WHERE name = ?", ["Jonah Pell"]);
+    expect((await athleteApi.fetch(`/api/athletes/${jonah!.id}/calendar-token`)).status).toBe(404);
+    expect((await athleteApi.fetch(`/api/athletes/${athlete.id}/calendar-token`)).status).toBe(200);
+    expect((await physioApi.fetch(`/api/athletes/${athlete.id}/calendar-token`, { method: "POST" })).status).toBe(403);
+    const coachApi = await apiSession(app, "coach@harbourvale.test");
+    const rotated = await coachApi.fetch(`/api/athletes/${jonah!.id}/calendar-token`, { method: "POST" });
+    expect(rotated.status).toBe(201);
+    const { url } = (await rotated.json()) as { url: string };
+    expect((await fetch(url)).status).toBe(200);
+  });
 });

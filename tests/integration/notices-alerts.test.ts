@@ -4,10 +4,12 @@ import { describe, expect, it } from "vitest";
 import { listAlerts, updateAlertStatus } from "@/lib/data/alerts";
 import { teamToday } from "@/lib/data/load";
 import { listOutbox } from "@/lib/data/outbox";
+import { getLogTarget, saveSessionLog } from "@/lib/data/logs";
 import { createSessions, deleteSession, updateSession } from "@/lib/data/plan-sessions";
 import { addDays, startOfWeek } from "@/lib/load";
 import { createSessionSchema, updateSessionSchema } from "@/lib/validations/plan";
 import { alertActionSchema } from "@/lib/validations/alerts";
+import { sessionLogSchema } from "@/lib/validations/log";
 import { createTestTeam } from "../helpers/fixtures";
 import { setupNotices } from "./notices-setup";
 
@@ -122,5 +124,28 @@ describe("spike alerts", () => {
     const row = (await d.OutboxMessage.findByPk(sent!.id))!;
     expect(benMails[0]!.messageId).toBe(row.messageId);
     expect(row.messageId).toMatch(new RegExp(`^<outbox-${row.id}-\\d+@sprintwright\\.local>$`));
+  });
+
+  it("a log that makes the actual load spike records an alert based on logged sessions", async () => {
+    const today = teamToday({ timeZone: "Europe/London" });
+    const dora = (await d.Athlete.create({ teamId: team.teamId, userId: null, groupId: team.groupId, name: "Dora Logger", sex: "female", birthDate: null, bodyMassKg: null, vmaxMs: null, vmaxTestedOn: null, tauS: null, stepLengthM: null })).id;
+    // Five weeks of logged steady work before today (every other day, 60 min at RPE 5).
+    for (let back = 35; back >= 1; back -= 2) {
+      const s = await d.PlannedSession.create({ teamId: team.teamId, athleteId: dora, date: addDays(today, -back), startTime: "17:00", durationMin: 60, title: "Steady", plannedRpe: 5, status: "published", notes: null, publishedAt: new Date() });
+      await d.SessionLog.create({ sessionId: s.id, athleteId: dora, completion: "yes", rpe: 5, minutes: 60, completedReps: null, notes: null });
+    }
+    const planned = await d.PlannedSession.create({ teamId: team.teamId, athleteId: dora, date: today, startTime: "07:00", durationMin: 60, title: "Steady", plannedRpe: 5, status: "published", notes: null, publishedAt: new Date() });
+    const target = (await getLogTarget({ sessionId: planned.id }))!;
+    // The athlete's log, through the load engineer's data path (which calls afterLogChange in its transaction).
+    await saveSessionLog({ target, input: sessionLogSchema.parse({ completion: "yes", rpe: 10, minutes: 300 }), actorUserId: coach, today });
+    const [alert] = await spikes(dora);
+    expect(alert).toMatchObject({ kind: "spike", basis: "actual", status: "open", weekStart: startOfWeek(today, 1) });
+    await n.worker.runOnce();
+    const mail = (await n.mailTo(PHYSIO)).find((m) => m.subject === "Load flag: Dora Logger · Spike");
+    expect(mail?.text).toContain("The sessions Dora Logger logged raise a load flag");
+    // Saving the same log again changes nothing that is new.
+    await saveSessionLog({ target, input: sessionLogSchema.parse({ completion: "yes", rpe: 10, minutes: 300 }), actorUserId: coach, today });
+    await n.worker.runOnce();
+    expect((await n.mailTo(PHYSIO)).filter((m) => m.subject === "Load flag: Dora Logger · Spike")).toHaveLength(1);
   });
 });
