@@ -17,7 +17,10 @@ import {
 } from "@/lib/load";
 import { AppError } from "@/lib/errors";
 import type { LoadPreviewInput } from "@/lib/validations/load";
-import { getAthleteLoadInputs, getSquadLoadInputs, getTeamClock, historyRange, teamToday } from "./load";
+import { getAthleteLoadInputs, getSquadLoadInputs, getTeamClock, historyRange, teamToday, type TeamClock } from "./load";
+
+/** The caller's already-known team clock (e.g. from the authorized viewer) saves a query on hot paths. */
+type Clock = Omit<TeamClock, "teamId">;
 
 // What the load handlers answer: the engine's numbers for one athlete or the squad, as plain JSON.
 
@@ -51,8 +54,8 @@ export type SquadWeekDto = {
 };
 
 /** The squad's week: totals per metric, ACWR (provisional marked) and flags with reasons, one row per athlete. */
-export async function getSquadWeekLoad({ teamId, week, view, today }: { teamId: number; week?: string; view: LoadView; today?: string }): Promise<SquadWeekDto> {
-  const probe = await getTeamClock({ teamId });
+export async function getSquadWeekLoad({ teamId, week, view, today, clock }: { teamId: number; week?: string; view: LoadView; today?: string; clock?: Clock }): Promise<SquadWeekDto> {
+  const probe = clock ?? (await getTeamClock({ teamId }));
   const now = today ?? teamToday({ timeZone: probe.timeZone });
   const weekStart = startOfWeek(week ?? now, probe.weekStartDay);
   const weekEnd = addDays(weekStart, 6);
@@ -133,8 +136,8 @@ function defaultRange(today: string, weekStartDay: number): { from: string; to: 
 }
 
 /** One athlete's daily series, acute/chronic/ratio for one metric, planned alongside, and this week's flags. */
-export async function getAthleteLoad({ teamId, athleteId, from, to, view, metric, today }: { teamId: number; athleteId: number; from?: string; to?: string; view: LoadView; metric?: Metric; today?: string }): Promise<AthleteLoadDto> {
-  const probe = await getTeamClock({ teamId });
+export async function getAthleteLoad({ teamId, athleteId, from, to, view, metric, today, clock }: { teamId: number; athleteId: number; from?: string; to?: string; view: LoadView; metric?: Metric; today?: string; clock?: Clock }): Promise<AthleteLoadDto> {
+  const probe = clock ?? (await getTeamClock({ teamId }));
   const now = today ?? teamToday({ timeZone: probe.timeZone });
   const fallback = defaultRange(now, probe.weekStartDay);
   const range = { from: from ?? (to ? addDays(to, -69) : fallback.from), to: to ?? (from ? addDays(from, 69) : fallback.to) };

@@ -13,10 +13,11 @@ import type {
   SessionInput,
   SessionStatus,
   TeamLoadSettings,
+  AcwrMethod,
 } from "@/lib/load/types";
 import { AppError } from "@/lib/errors";
 import { db } from "@/models";
-import { getTeamLoadSettings } from "./team-settings";
+import { toEngineSettings } from "./team-settings";
 
 export type LoadAthleteInputs = {
   id: number;
@@ -66,6 +67,11 @@ export function engineWeekStartDay(isoWeekday: number): number {
 
 export type TeamClock = { teamId: number; timeZone: string; weekStartDay: number };
 
+/** The clock of an authorized viewer (lib/auth Viewer carries the team's zone and ISO week start). */
+export function viewerClock(viewer: { timeZone: string; weekStartDay: number }): Omit<TeamClock, "teamId"> {
+  return { timeZone: viewer.timeZone, weekStartDay: engineWeekStartDay(viewer.weekStartDay) };
+}
+
 /** The team's zone and week start (engine convention); 404 when the team does not exist. */
 export async function getTeamClock({ teamId, transaction }: { teamId: number; transaction?: Transaction }): Promise<TeamClock> {
   const { Team } = await db();
@@ -91,9 +97,31 @@ function num(value: unknown): number | null {
   return value === null || value === undefined ? null : Number(value);
 }
 
-type TeamRow = { time_zone: string; week_start_day: number };
-type GroupRow = { id: number; name: string; sort_order: number };
-type AthleteRow = { id: number; name: string; group_id: number | null; vmax_ms: number | null; tau_s: number | null; step_length_m: number | null; plyo_level: PlyoLevel };
+type TeamRow = {
+  time_zone: string;
+  week_start_day: number;
+  settings_id: number | null;
+  hsr_speed_ms: number;
+  near_max_pct: number;
+  acwr_method: string;
+  acwr_metric: string;
+  spike_ratio: number;
+  rising_ratio: number;
+  low_ratio: number;
+  weekly_change_limit_pct: number;
+  recovery_hours: number;
+};
+type AthleteRow = {
+  id: number;
+  name: string;
+  group_id: number | null;
+  group_name: string | null;
+  group_order: number | null;
+  vmax_ms: number | null;
+  tau_s: number | null;
+  step_length_m: number | null;
+  plyo_level: PlyoLevel;
+};
 type SessionRow = { id: number; athlete_id: number; date: string; start_time: string; duration_min: number; planned_rpe: number; status: SessionStatus };
 type BlockRow = { id: number; session_id: number; kind: BlockKind; title: string; running: unknown; drills: unknown; notes: string | null };
 type LogRow = { session_id: number; athlete_id: number; completion: Completion; rpe: unknown; minutes: unknown; completed_reps: unknown };
@@ -102,9 +130,12 @@ type LogRow = { session_id: number; athlete_id: number; completion: Completion; 
 // about twice the query itself. Values go in as escaped replacements; table names are the migrations'.
 const SESSION_FILTER = "s.team_id = :teamId AND s.date BETWEEN :from AND :to AND (:athleteId IS NULL OR s.athlete_id = :athleteId)";
 const SQL = {
-  team: "SELECT time_zone, week_start_day FROM teams WHERE id = :teamId",
-  groups: "SELECT id, name, sort_order FROM training_groups WHERE team_id = :teamId",
-  athletes: "SELECT id, name, group_id, vmax_ms, tau_s, step_length_m, plyo_level FROM athletes WHERE team_id = :teamId AND (:athleteId IS NULL OR id = :athleteId)",
+  team: `SELECT t.time_zone, t.week_start_day, s.id AS settings_id, s.hsr_speed_ms, s.near_max_pct, s.acwr_method, s.acwr_metric, s.spike_ratio,
+    s.rising_ratio, s.low_ratio, s.weekly_change_limit_pct, s.recovery_hours
+    FROM teams t LEFT JOIN team_load_settings s ON s.team_id = t.id WHERE t.id = :teamId`,
+  athletes: `SELECT a.id, a.name, a.group_id, g.name AS group_name, g.sort_order AS group_order, a.vmax_ms, a.tau_s, a.step_length_m, a.plyo_level
+    FROM athletes a LEFT JOIN training_groups g ON g.id = a.group_id
+    WHERE a.team_id = :teamId AND (:athleteId IS NULL OR a.id = :athleteId)`,
   sessions: `SELECT s.id, s.athlete_id, s.date, s.start_time, s.duration_min, s.planned_rpe, s.status FROM planned_sessions s WHERE ${SESSION_FILTER} ORDER BY s.date, s.start_time, s.id`,
   blocks: `SELECT b.id, b.session_id, b.kind, b.title, b.running, b.drills, b.notes FROM session_blocks b JOIN planned_sessions s ON s.id = b.session_id WHERE ${SESSION_FILTER} ORDER BY b.session_id, b.position, b.id`,
   logs: `SELECT l.session_id, l.athlete_id, l.completion, l.rpe, l.minutes, l.completed_reps FROM session_logs l JOIN planned_sessions s ON s.id = l.session_id WHERE ${SESSION_FILTER}`,
@@ -125,17 +156,30 @@ async function loadInputs({ teamId, athleteId, from, to, transaction }: Range & 
   const { sequelize } = await db();
   const replacements = { teamId, athleteId: athleteId ?? null, from, to };
   const select = <T extends object>(sql: string) => sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements, transaction });
-  // A constant seven queries whatever the squad size: no query per athlete or per session.
-  const [[team], settings, groups, athletes, sessions, blocks, logs] = await Promise.all([
+  // A constant five queries whatever the squad size: no query per athlete or per session.
+  const [[team], athletes, sessions, blocks, logs] = await Promise.all([
     select<TeamRow>(SQL.team),
-    getTeamLoadSettings({ teamId, transaction }),
-    select<GroupRow>(SQL.groups),
     select<AthleteRow>(SQL.athletes),
     select<SessionRow>(SQL.sessions),
     select<BlockRow>(SQL.blocks),
     select<LogRow>(SQL.logs),
   ]);
   if (!team) throw new AppError("not_found", "Not found");
+  const settings = toEngineSettings(
+    team.settings_id === null
+      ? null
+      : {
+          hsrSpeedMs: team.hsr_speed_ms,
+          nearMaxPct: team.near_max_pct,
+          acwrMethod: team.acwr_method as AcwrMethod,
+          acwrMetric: team.acwr_metric,
+          spikeRatio: team.spike_ratio,
+          risingRatio: team.rising_ratio,
+          lowRatio: team.low_ratio,
+          weeklyChangeLimitPct: team.weekly_change_limit_pct,
+          recoveryHours: team.recovery_hours,
+        },
+  );
 
   const blocksBySession = new Map<number, BlockInput[]>();
   for (const b of blocks) {
@@ -143,14 +187,13 @@ async function loadInputs({ teamId, athleteId, from, to, transaction }: Range & 
     if (list) list.push(toBlock(b));
     else blocksBySession.set(b.session_id, [toBlock(b)]);
   }
-  const groupById = new Map(groups.map((g) => [g.id, g]));
   const byAthlete = new Map<number, LoadAthleteInputs>();
   for (const a of athletes) {
     byAthlete.set(a.id, {
       id: a.id,
       name: a.name,
       groupId: a.group_id,
-      groupName: a.group_id !== null ? (groupById.get(a.group_id)?.name ?? null) : null,
+      groupName: a.group_name,
       profile: { vmax: num(a.vmax_ms), tau: num(a.tau_s), stepLengthM: num(a.step_length_m), plyoLevel: a.plyo_level },
       sessions: [],
       logs: [],
@@ -176,8 +219,8 @@ async function loadInputs({ teamId, athleteId, from, to, transaction }: Range & 
       completedReps: json<Record<string, number>>(l.completed_reps),
     });
   }
-  const sortOrder = (groupId: number | null) => (groupId !== null && groupById.has(groupId) ? groupById.get(groupId)!.sort_order : 1e9);
-  const list = [...byAthlete.values()].sort((x, y) => sortOrder(x.groupId) - sortOrder(y.groupId) || x.name.localeCompare(y.name));
+  const order = new Map(athletes.map((a) => [a.id, a.group_order ?? 1e9]));
+  const list = [...byAthlete.values()].sort((x, y) => order.get(x.id)! - order.get(y.id)! || x.name.localeCompare(y.name));
   return { teamId, settings, timeZone: team.time_zone, weekStartDay: engineWeekStartDay(team.week_start_day), athletes: list };
 }
 

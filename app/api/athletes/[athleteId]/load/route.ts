@@ -1,4 +1,5 @@
 import { requireAthlete } from "@/lib/auth/access";
+import { viewerClock } from "@/lib/data/load";
 import { getAthleteLoad } from "@/lib/data/load-views";
 import { parseParams, parseQuery, route } from "@/lib/http";
 import { athleteLoadQuerySchema, athleteParamsSchema } from "@/lib/validations/load";
@@ -10,5 +11,5 @@ export const GET = route<{ athleteId: string }>(async (req, { params }) => {
   const { athleteId } = parseParams(await params, athleteParamsSchema);
   const viewer = await requireAthlete({ athleteId, can: "load:view" });
   const query = parseQuery(req, athleteLoadQuerySchema);
-  return Response.json(await getAthleteLoad({ teamId: viewer.athlete.teamId, athleteId, ...query }));
+  return Response.json(await getAthleteLoad({ teamId: viewer.athlete.teamId, athleteId, ...query, clock: viewerClock(viewer) }));
 });

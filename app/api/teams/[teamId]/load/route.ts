@@ -1,4 +1,5 @@
 import { requireMember } from "@/lib/auth/access";
+import { viewerClock } from "@/lib/data/load";
 import { getSquadWeekLoad } from "@/lib/data/load-views";
 import { parseParams, parseQuery, route } from "@/lib/http";
 import { squadLoadQuerySchema } from "@/lib/validations/load";
@@ -9,7 +10,7 @@ export const runtime = "nodejs";
 /** The squad's week: totals, ACWR and flags per athlete (staff with squad-wide load access). */
 export const GET = route<{ teamId: string }>(async (req, { params }) => {
   const { teamId } = parseParams(await params, teamParamsSchema);
-  await requireMember({ teamId, can: "load:view" });
+  const viewer = await requireMember({ teamId, can: "load:view" });
   const query = parseQuery(req, squadLoadQuerySchema);
-  return Response.json(await getSquadWeekLoad({ teamId, ...query }));
+  return Response.json(await getSquadWeekLoad({ teamId, ...query, clock: viewerClock(viewer) }));
 });
