@@ -55,9 +55,11 @@ export async function syncWeekAlerts(args: {
   const { Alert } = await db();
   const { transaction, teamId, athleteId, weekStart, basis } = args;
   const created: Array<{ id: number } & AlertCandidate> = [];
+  // One read for the week; the newest row of each kind decides.
+  const rows = await Alert.findAll({ where: { athleteId, weekStart, kind: { [Op.in]: [...args.kinds] } }, order: [["id", "DESC"]], transaction });
   for (const kind of args.kinds) {
     const candidate = args.candidates.find((c) => c.kind === kind);
-    const latest = await Alert.findOne({ where: { athleteId, kind, weekStart }, order: [["id", "DESC"]], transaction });
+    const latest = rows.find((r) => r.kind === kind) ?? null;
     if (!candidate) {
       if (latest?.flagged) await latest.update({ flagged: false }, { transaction });
       continue;
