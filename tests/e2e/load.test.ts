@@ -51,6 +51,21 @@ describeBrowser("load screens", () => {
     expect(new Set(asc).size).toBeGreaterThan(1);
   });
 
+  it("hides a column and exports the rows as shown to CSV", async () => {
+    await page.getByTestId("choose-columns").click();
+    await page.getByRole("checkbox", { name: "Group" }).uncheck();
+    await page.getByTestId("choose-columns").click();
+    expect(await page.getByTestId("sort-group").count()).toBe(0);
+    const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("export-csv").click()]);
+    const csv = await (await download.createReadStream()).toArray().then((chunks) => Buffer.concat(chunks).toString("utf8"));
+    const lines = csv.trim().split(/\r?\n/);
+    expect(lines[0]).toBe("Athlete,ACWR,Flags,HSR m,Near-max m,Sprint steps (est.),Plyo contacts,sRPE (AU),Weekly change");
+    expect(lines).toHaveLength(DEMO_ATHLETES.length + 1);
+    await page.getByTestId("choose-columns").click();
+    await page.getByRole("checkbox", { name: "Group" }).check();
+    await page.getByTestId("choose-columns").click();
+  });
+
   it("filters by group and shows the demo's spike in next week's plan", async () => {
     await page.getByTestId("filter-group").selectOption("Senior sprint");
     const seniors = DEMO_ATHLETES.filter((a) => a.group === "Senior sprint").length;
