@@ -45,13 +45,13 @@ export function isLoopbackHost(host: string): boolean {
 }
 
 /** The mailbox folder the fake writes and the app reads: MAILBOX_DIR, else data/mailbox. */
-export function defaultMailboxDir(env: NodeJS.ProcessEnv = process.env): string {
+export function defaultMailboxDir(env: Readonly<Record<string, string | undefined>> = process.env): string {
   const dir = env.MAILBOX_DIR?.trim();
   return path.resolve(dir || path.join("data", "mailbox"));
 }
 
 /** Reads the SMTP settings from the environment; throws naming the wrong variable. */
-export function readMailConfig(env: NodeJS.ProcessEnv = process.env): MailConfig {
+export function readMailConfig(env: Readonly<Record<string, string | undefined>> = process.env): MailConfig {
   const parsed = schema.safeParse(env);
   if (!parsed.success) {
     const fields = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ");
