@@ -122,9 +122,21 @@ type AthleteRow = {
   step_length_m: number | null;
   plyo_level: PlyoLevel;
 };
-type SessionRow = { id: number; athlete_id: number; date: string; start_time: string; duration_min: number; planned_rpe: number; status: SessionStatus };
+type SessionRow = {
+  id: number;
+  athlete_id: number;
+  date: string;
+  start_time: string;
+  duration_min: number;
+  planned_rpe: number;
+  status: SessionStatus;
+  /** The session's log (one at most: session_logs.session_id is unique); null columns when unlogged. */
+  completion: Completion | null;
+  rpe: unknown;
+  minutes: unknown;
+  completed_reps: unknown;
+};
 type BlockRow = { id: number; session_id: number; kind: BlockKind; title: string; running: unknown; drills: unknown; notes: string | null };
-type LogRow = { session_id: number; athlete_id: number; completion: Completion; rpe: unknown; minutes: unknown; completed_reps: unknown };
 
 // Plain SQL, not model finders: the squad-week handler has a 50 ms budget and Sequelize's row handling costs
 // about twice the query itself. Values go in as escaped replacements; table names are the migrations'.
@@ -136,9 +148,10 @@ const SQL = {
   athletes: `SELECT a.id, a.name, a.group_id, g.name AS group_name, g.sort_order AS group_order, a.vmax_ms, a.tau_s, a.step_length_m, a.plyo_level
     FROM athletes a LEFT JOIN training_groups g ON g.id = a.group_id
     WHERE a.team_id = :teamId AND (:athleteId IS NULL OR a.id = :athleteId)`,
-  sessions: `SELECT s.id, s.athlete_id, s.date, s.start_time, s.duration_min, s.planned_rpe, s.status FROM planned_sessions s WHERE ${SESSION_FILTER} ORDER BY s.date, s.start_time, s.id`,
+  sessions: `SELECT s.id, s.athlete_id, s.date, s.start_time, s.duration_min, s.planned_rpe, s.status, l.completion, l.rpe, l.minutes, l.completed_reps
+    FROM planned_sessions s LEFT JOIN session_logs l ON l.session_id = s.id
+    WHERE ${SESSION_FILTER} ORDER BY s.date, s.start_time, s.id`,
   blocks: `SELECT b.id, b.session_id, b.kind, b.title, b.running, b.drills, b.notes FROM session_blocks b JOIN planned_sessions s ON s.id = b.session_id WHERE ${SESSION_FILTER} ORDER BY b.session_id, b.position, b.id`,
-  logs: `SELECT l.session_id, l.athlete_id, l.completion, l.rpe, l.minutes, l.completed_reps FROM session_logs l JOIN planned_sessions s ON s.id = l.session_id WHERE ${SESSION_FILTER}`,
 };
 
 function toBlock(b: BlockRow): BlockInput {
@@ -156,13 +169,12 @@ async function loadInputs({ teamId, athleteId, from, to, transaction }: Range & 
   const { sequelize } = await db();
   const replacements = { teamId, athleteId: athleteId ?? null, from, to };
   const select = <T extends object>(sql: string) => sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements, transaction });
-  // A constant five queries whatever the squad size: no query per athlete or per session.
-  const [[team], athletes, sessions, blocks, logs] = await Promise.all([
+  // A constant four queries whatever the squad size: no query per athlete or per session.
+  const [[team], athletes, sessions, blocks] = await Promise.all([
     select<TeamRow>(SQL.team),
     select<AthleteRow>(SQL.athletes),
     select<SessionRow>(SQL.sessions),
     select<BlockRow>(SQL.blocks),
-    select<LogRow>(SQL.logs),
   ]);
   if (!team) throw new AppError("not_found", "Not found");
   const settings = toEngineSettings(
@@ -200,7 +212,9 @@ async function loadInputs({ teamId, athleteId, from, to, transaction }: Range & 
     });
   }
   for (const s of sessions) {
-    byAthlete.get(s.athlete_id)?.sessions.push({
+    const athlete = byAthlete.get(s.athlete_id);
+    if (!athlete) continue;
+    athlete.sessions.push({
       id: String(s.id),
       date: s.date.slice(0, 10),
       startTime: s.start_time,
@@ -209,15 +223,9 @@ async function loadInputs({ teamId, athleteId, from, to, transaction }: Range & 
       status: s.status,
       blocks: blocksBySession.get(s.id) ?? [],
     });
-  }
-  for (const l of logs) {
-    byAthlete.get(l.athlete_id)?.logs.push({
-      sessionId: String(l.session_id),
-      completion: l.completion,
-      rpe: num(l.rpe),
-      minutes: num(l.minutes),
-      completedReps: json<Record<string, number>>(l.completed_reps),
-    });
+    if (s.completion !== null) {
+      athlete.logs.push({ sessionId: String(s.id), completion: s.completion, rpe: num(s.rpe), minutes: num(s.minutes), completedReps: json<Record<string, number>>(s.completed_reps) });
+    }
   }
   const order = new Map(athletes.map((a) => [a.id, a.group_order ?? 1e9]));
   const list = [...byAthlete.values()].sort((x, y) => order.get(x.id)! - order.get(y.id)! || x.name.localeCompare(y.name));

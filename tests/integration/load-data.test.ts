@@ -62,7 +62,7 @@ describe("getSquadLoadInputs", () => {
     } finally {
       opts.logging = before;
     }
-    expect(count).toBe(5);
+    expect(count).toBe(4);
   });
 });
 
