@@ -47,7 +47,7 @@ export function SquadLoadTable({ teamId, initial }: { teamId: number; initial: S
   return (
     <div className="space-y-4">
       <div className="flex flex-col gap-3 lg:flex-row lg:items-center lg:justify-between">
-        <WeekNav week={week} today={data?.today ?? initial.today} onChange={setWeek} />
+        <WeekNav week={week} today={data?.today ?? initial.today} weekStartDay={initial.weekStartDay} onChange={setWeek} />
         <Segmented label="Which sessions count" value={view} onChange={setView} options={[["projected", "Logged + plan"], ["actual", "Logged only"]]} />
       </div>
       <SquadToolbar table={table} groups={data?.groups ?? []} week={week} />

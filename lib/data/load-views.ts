@@ -47,6 +47,8 @@ export type SquadWeekDto = {
   previousWeek: string;
   nextWeek: string;
   today: string;
+  /** Engine convention: 0 = Sunday, 1 = Monday … */
+  weekStartDay: number;
   view: LoadView;
   settings: TeamLoadSettings;
   groups: { id: number; name: string }[];
@@ -75,6 +77,7 @@ export async function getSquadWeekLoad({ teamId, week, view, today, clock }: { t
     previousWeek: addDays(weekStart, -7),
     nextWeek: addDays(weekStart, 7),
     today: now,
+    weekStartDay: probe.weekStartDay,
     view,
     settings: inputs.settings,
     groups: [...groups].map(([id, name]) => ({ id, name })),
