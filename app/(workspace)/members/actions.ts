@@ -19,7 +19,7 @@ export async function addMemberAction(input: AddMemberInput) {
   return runAction(async () => {
     const viewer = await headCoach();
     const parsed = addMemberSchema.parse(input);
-    const result = await addMember({ teamId: viewer.teamId, input: parsed });
+    const result = await addMember({ teamId: viewer.teamId, input: parsed, invitedBy: viewer.userId });
     revalidatePath("/members");
     return { ...result, inviteUrl: result.inviteToken ? `${appUrl()}/invite/${result.inviteToken}` : null };
   });

@@ -2,9 +2,11 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Card, PageHeader } from "@/components/ui/card";
 import { pageAthlete } from "@/lib/auth/page-access";
+import { FeedCard } from "@/components/calendar/feed-card";
 import { AthleteForm } from "@/components/squad/athlete-form";
 import { scopeOf } from "@/lib/auth/permissions";
 import { getAthlete, listGroups } from "@/lib/data/athletes";
+import { getCalendarFeedStatus } from "@/lib/data/calendar-tokens";
 import { PLYO_LEVEL_LABEL, formatSpeed } from "@/lib/format/athlete";
 
 export default async function AthleteProfilePage({ params }: { params: Promise<{ athleteId: string }> }) {
@@ -14,6 +16,8 @@ export default async function AthleteProfilePage({ params }: { params: Promise<{
   if (!athlete) notFound();
   const canEdit = scopeOf(viewer.role, "athletes:edit") === "team";
   const groups = canEdit ? await listGroups({ teamId: viewer.teamId }) : [];
+  const canManageFeed = scopeOf(viewer.role, "calendar:manage") === "team";
+  const feed = canManageFeed ? await getCalendarFeedStatus({ athleteId: athlete.id }) : null;
   const facts: [string, string][] = [
     ["Training group", athlete.groupName ?? "None"],
     ["Max velocity", formatSpeed(athlete.vmaxMs)],
@@ -45,6 +49,11 @@ export default async function AthleteProfilePage({ params }: { params: Promise<{
           ))}
         </dl>
       </Card>
+      {feed ? (
+        <div className="mt-6">
+          <FeedCard athleteId={athlete.id} initial={feed} />
+        </div>
+      ) : null}
       {canEdit ? (
         <Card className="mt-6 p-5">
           <h2 className="mb-4 font-semibold text-ink-950">Edit profile and test values</h2>
