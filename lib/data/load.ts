@@ -15,6 +15,7 @@ import type {
   TeamLoadSettings,
   AcwrMethod,
 } from "@/lib/load/types";
+import { addDays } from "@/lib/load/dates";
 import { AppError } from "@/lib/errors";
 import { db } from "@/models";
 import { toEngineSettings } from "./team-settings";
@@ -51,7 +52,7 @@ export const LOAD_HISTORY_DAYS = 168;
 
 /** The date range to load for answers about [from, to]: LOAD_HISTORY_DAYS of history before it. */
 export function historyRange({ from, to }: { from: string; to: string }): { from: string; to: string } {
-  return { from: DateTime.fromISO(from).minus({ days: LOAD_HISTORY_DAYS }).toISODate()!, to };
+  return { from: addDays(from, -LOAD_HISTORY_DAYS), to };
 }
 
 /** Today's local date in the team's time zone: the one place the load feature reads the clock. */
@@ -80,17 +81,20 @@ export async function getTeamClock({ teamId, transaction }: { teamId: number; tr
   return { teamId, timeZone: team.timeZone, weekStartDay: engineWeekStartDay(team.weekStartDay) };
 }
 
-// JSON columns come back from SQLite as text.
-function json<T>(value: unknown): T | null {
+// JSON columns come back from SQLite as text. Blocks copied from one template share the same text, so one
+// load parses each distinct text once (the engine never mutates its inputs, so sharing is safe).
+function json<T>(value: unknown, cache?: Map<string, unknown>): T | null {
   if (value === null || value === undefined) return null;
-  if (typeof value === "string") {
-    try {
-      return JSON.parse(value) as T;
-    } catch {
-      return null;
-    }
+  if (typeof value !== "string") return value as T;
+  if (cache?.has(value)) return cache.get(value) as T;
+  let parsed: T | null = null;
+  try {
+    parsed = JSON.parse(value) as T;
+  } catch {
+    parsed = null;
   }
-  return value as T;
+  cache?.set(value, parsed);
+  return parsed;
 }
 
 function num(value: unknown): number | null {
@@ -154,13 +158,13 @@ const SQL = {
   blocks: `SELECT b.id, b.session_id, b.kind, b.title, b.running, b.drills, b.notes FROM session_blocks b JOIN planned_sessions s ON s.id = b.session_id WHERE ${SESSION_FILTER} ORDER BY b.session_id, b.position, b.id`,
 };
 
-function toBlock(b: BlockRow): BlockInput {
+function toBlock(b: BlockRow, cache: Map<string, unknown>): BlockInput {
   return {
     id: String(b.id),
     kind: b.kind,
     title: b.title,
-    running: json<RunningPrescription>(b.running),
-    drills: json<PlyoDrill[]>(b.drills),
+    running: json<RunningPrescription>(b.running, cache),
+    drills: json<PlyoDrill[]>(b.drills, cache),
     ...(b.notes ? { notes: b.notes } : {}),
   };
 }
@@ -193,11 +197,12 @@ async function loadInputs({ teamId, athleteId, from, to, transaction }: Range & 
         },
   );
 
+  const parsed = new Map<string, unknown>();
   const blocksBySession = new Map<number, BlockInput[]>();
   for (const b of blocks) {
     const list = blocksBySession.get(b.session_id);
-    if (list) list.push(toBlock(b));
-    else blocksBySession.set(b.session_id, [toBlock(b)]);
+    if (list) list.push(toBlock(b, parsed));
+    else blocksBySession.set(b.session_id, [toBlock(b, parsed)]);
   }
   const byAthlete = new Map<number, LoadAthleteInputs>();
   for (const a of athletes) {
