@@ -28,10 +28,12 @@ export const SLOT_SRPE = 8;
 export const SLOT_MAX_PCT = 9;
 /** 1 when a max_velocity block or high-intensity contacts were done. */
 export const SLOT_HIGH_INTENSITY = 10;
-export const ACC_SIZE = 11;
+/** Input, not output: the share of the prescription being added (passed in the array so it stays unboxed). */
+const SLOT_SCALE = 11;
+export const ACC_SIZE = 12;
 
-/** intensityPct on a 0.1% grid (0–100%) has its distance-to-threshold memoised per athlete. */
-const GRID = 1001;
+/** intensityPct on a 0.5% grid (0–100%) has its distance-to-threshold memoised per athlete. */
+const GRID = 201;
 
 /** Profile with defaults filled in and the two speed thresholds precomputed (m/s). */
 export interface ResolvedProfile {
@@ -41,13 +43,14 @@ export interface ResolvedProfile {
   plyoLevel: PlyoLevel;
   hsrSpeed: number;
   nearMaxSpeed: number;
-  /** Lazily built memo: [0, GRID) HSR, [GRID, 2·GRID) near-max; NaN = not computed yet. */
+  /** Lazily built memo: [0, GRID) HSR, [GRID, 2·GRID) near-max, then two scratch cells; NaN = not computed yet. */
   reach: Float64Array | null;
 }
 
 /** Non-negative finite number, else 0: stored data should be validated, but the maths never sees NaN. */
 export function nonNeg(value: number | null | undefined): number {
-  return typeof value === "number" && value > 0 && value < Number.POSITIVE_INFINITY ? value : 0;
+  const v = value ?? 0;
+  return v > 0 && v < Number.POSITIVE_INFINITY ? v : 0;
 }
 
 function positive(value: number | null | undefined, fallback: number): number {
@@ -67,22 +70,9 @@ export function resolveProfile(profile: AthleteProfile, settings: TeamLoadSettin
   };
 }
 
-/** Metres from rest to reach the HSR (offset 0) or near-max (offset GRID) speed in a rep at `pct` % of vmax. */
-function reachFor(rp: ResolvedProfile, pct: number, offset: number): number {
-  const speed = offset === 0 ? rp.hsrSpeed : rp.nearMaxSpeed;
-  const key = pct * 10;
-  if (key > 1000 || key !== Math.floor(key)) return distanceToReach(speed, (pct / 100) * rp.vmax, rp.tau);
-  let memo = rp.reach;
-  if (memo === null) {
-    memo = new Float64Array(2 * GRID).fill(Number.NaN);
-    rp.reach = memo;
-  }
-  let d = memo[offset + key];
-  if (d !== d) {
-    d = distanceToReach(speed, (pct / 100) * rp.vmax, rp.tau);
-    memo[offset + key] = d;
-  }
-  return d;
+function memoOf(rp: ResolvedProfile): Float64Array {
+  if (rp.reach === null) rp.reach = new Float64Array(2 * GRID + 2).fill(Number.NaN);
+  return rp.reach;
 }
 
 function isRunningKind(kind: BlockInput["kind"]): boolean {
@@ -110,6 +100,13 @@ export function prescribedReps(block: BlockInput): number {
  * plyometric blocks, so form state left over from a kind change never leaks into the numbers.
  */
 export function addBlockInto(acc: Float64Array, block: BlockInput, rp: ResolvedProfile, scale: number): void {
+  acc[SLOT_SCALE] = scale;
+  addScaledBlock(acc, block, rp);
+}
+
+/** addBlockInto with the scale read from acc[SLOT_SCALE]: a double argument to a call that is not inlined is boxed. */
+function addScaledBlock(acc: Float64Array, block: BlockInput, rp: ResolvedProfile): void {
+  const scale = acc[SLOT_SCALE];
   if (!(scale > 0)) return;
   const kind = block.kind;
   if (isRunningKind(kind)) {
@@ -122,9 +119,26 @@ export function addBlockInto(acc: Float64Array, block: BlockInput, rp: ResolvedP
     const run = total * reps;
     acc[SLOT_RUN] += run;
     if (pct > 0) {
-      const hsr = reachFor(rp, pct, 0);
+      // Metres from rest to reach each threshold, memoised per athlete for pct on a 0.5% grid (other pcts use
+      // the memo's two scratch cells). Both are read back from the Float64Array so they stay unboxed doubles:
+      // merging a call's result with an array load would box a number on every block.
+      const target = (pct / 100) * rp.vmax;
+      const memo = memoOf(rp);
+      const grid = pct * 2;
+      const g = grid | 0;
+      let hsrAt = 2 * GRID;
+      let nearAt = 2 * GRID + 1;
+      if (g === grid && g < GRID) {
+        hsrAt = g;
+        nearAt = GRID + g;
+      }
+      if (hsrAt === 2 * GRID || memo[hsrAt] !== memo[hsrAt]) {
+        memo[hsrAt] = distanceToReach(rp.hsrSpeed, target, rp.tau);
+        memo[nearAt] = distanceToReach(rp.nearMaxSpeed, target, rp.tau);
+      }
+      const hsr = memo[hsrAt];
+      const near = memo[nearAt];
       if (hsr < total) acc[SLOT_HSR] += (total - hsr) * reps;
-      const near = reachFor(rp, pct, GRID);
       if (near < total) acc[SLOT_NEAR_MAX] += (total - near) * reps;
     }
     if (kind !== "tempo") {
@@ -171,7 +185,7 @@ export function evaluateSessionInto(
   log: LogInput | undefined,
   rp: ResolvedProfile,
 ): void {
-  for (let k = 0; k < ACC_SIZE; k++) acc[k] = 0;
+  for (let k = 0; k < SLOT_SCALE; k++) acc[k] = 0;
   let factor = 1;
   if (log) {
     const c = log.completion;
@@ -182,12 +196,12 @@ export function evaluateSessionInto(
   const blocks = session.blocks;
   for (let b = 0; b < blocks.length; b++) {
     const block = blocks[b];
-    let scale = factor;
+    acc[SLOT_SCALE] = factor;
     if (done && block.id !== undefined && Object.prototype.hasOwnProperty.call(done, block.id)) {
       const prescribed = prescribedReps(block);
-      scale = prescribed > 0 ? nonNeg(done[block.id]) / prescribed : 0;
+      acc[SLOT_SCALE] = prescribed > 0 ? nonNeg(done[block.id]) / prescribed : 0;
     }
-    addBlockInto(acc, block, rp, scale);
+    addScaledBlock(acc, block, rp);
   }
   if (!log) {
     acc[SLOT_SRPE] = srpe(session.plannedRpe, session.durationMin);

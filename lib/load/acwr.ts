@@ -59,32 +59,45 @@ export function acwrInto(
 ): void {
   const n = values.length;
   const { acute, chronic, ratio } = out;
+  if (n === 0) return;
   if (method === "ewma") {
-    ewmaInto(values, ACUTE_DAYS, seed, acute);
-    ewmaInto(values, CHRONIC_DAYS, seed, chronic);
-  } else {
-    const s = prefix && prefix.length >= n + 1 ? prefix : new Float64Array(n + 1);
-    s[0] = 0;
-    for (let i = 0; i < n; i++) s[i + 1] = s[i] + values[i];
-    const coupled = method === "rolling_coupled";
+    // Both recurrences (Williams et al. 2017) and the ratio in one pass; the same arithmetic as ewmaInto.
+    const la = ewmaLambda(ACUTE_DAYS);
+    const lc = ewmaLambda(CHRONIC_DAYS);
+    let a = seed === "first" ? values[0] : la * values[0];
+    let c = seed === "first" ? values[0] : lc * values[0];
     for (let i = 0; i < n; i++) {
-      const a0 = i + 1 > ACUTE_DAYS ? i + 1 - ACUTE_DAYS : 0;
-      acute[i] = (s[i + 1] - s[a0]) / (i + 1 - a0);
-      if (coupled) {
-        // Hulin et al. 2016: chronic = mean of the last 28 days, this week included.
-        const c0 = i + 1 > CHRONIC_DAYS ? i + 1 - CHRONIC_DAYS : 0;
-        chronic[i] = (s[i + 1] - s[c0]) / (i + 1 - c0);
-      } else {
-        // Lolli 2019 / Gabbett 2019: chronic = mean of days t−27 … t−7 (the three weeks before the acute week).
-        const end = i - ACUTE_DAYS + 1; // exclusive index
-        const c0 = i + 1 > CHRONIC_DAYS ? i + 1 - CHRONIC_DAYS : 0;
-        chronic[i] = end > c0 ? (s[end] - s[c0]) / (end - c0) : 0;
+      if (i > 0) {
+        const x = values[i];
+        a = la * x + (1 - la) * a;
+        c = lc * x + (1 - lc) * c;
       }
+      acute[i] = a;
+      chronic[i] = c;
+      ratio[i] = c > 0 ? a / c : Number.NaN;
     }
+    return;
   }
+  const s = prefix && prefix.length >= n + 1 ? prefix : new Float64Array(n + 1);
+  s[0] = 0;
+  for (let i = 0; i < n; i++) s[i + 1] = s[i] + values[i];
+  const coupled = method === "rolling_coupled";
   for (let i = 0; i < n; i++) {
-    const c = chronic[i];
-    ratio[i] = c > 0 ? acute[i] / c : Number.NaN;
+    const a0 = i + 1 > ACUTE_DAYS ? i + 1 - ACUTE_DAYS : 0;
+    const a = (s[i + 1] - s[a0]) / (i + 1 - a0);
+    const c0 = i + 1 > CHRONIC_DAYS ? i + 1 - CHRONIC_DAYS : 0;
+    let c: number;
+    if (coupled) {
+      // Hulin et al. 2016: chronic = mean of the last 28 days, this week included.
+      c = (s[i + 1] - s[c0]) / (i + 1 - c0);
+    } else {
+      // Lolli 2019 / Gabbett 2019: chronic = mean of days t−27 … t−7 (the three weeks before the acute week).
+      const end = i - ACUTE_DAYS + 1; // exclusive index
+      c = end > c0 ? (s[end] - s[c0]) / (end - c0) : 0;
+    }
+    acute[i] = a;
+    chronic[i] = c;
+    ratio[i] = c > 0 ? a / c : Number.NaN;
   }
 }
 

@@ -2,7 +2,7 @@ import { acwrInto, markProvisional, type AcwrColumns } from "./acwr";
 import { resolveProfile, type ResolvedProfile } from "./accumulate";
 import { dateFromDayIndex, dayIndex, startOfWeek } from "./dates";
 import { computeFlags, type Flag } from "./flags";
-import { buildDailyColumns, effectiveSessions, indexLogs, sessionDayNumbers, type DailyColumns } from "./series";
+import { alignLogs, buildDailyColumns, effectiveSessions, sessionDayNumbers, type AlignedLogs, type DailyColumns } from "./series";
 import {
   METRICS,
   type AthleteProfile,
@@ -13,6 +13,7 @@ import {
   type SessionInput,
   type TeamLoadSettings,
 } from "./types";
+import { metricRecord } from "./metric-record";
 import { summariseWeek, type WeekSummary } from "./week-summary";
 import { reserve, type EngineWorkspace } from "./workspace";
 
@@ -49,7 +50,8 @@ export interface ColumnsRequest {
   profile: AthleteProfile;
   settings: TeamLoadSettings;
   sessions: readonly SessionInput[];
-  logsById: ReadonlyMap<string, LogInput>;
+  /** alignLogs(sessions, logs). */
+  logFor: AlignedLogs;
   view: LoadView;
   todayDay: number;
   /** The series covers [min(earliest session, fromDay − 56), toDay]. */
@@ -82,7 +84,7 @@ export function computeAthleteColumns(req: ColumnsRequest, ws?: EngineWorkspace)
     length: n,
     sessions: req.sessions,
     sessionDays,
-    logsById: req.logsById,
+    logFor: req.logFor,
     rp,
     view: req.view,
     todayDay: req.todayDay,
@@ -121,7 +123,7 @@ export function weekFromColumns(
   const lookBack = Math.ceil(req.settings.recoveryHours / 24) + 1;
   const sessions = effectiveSessions(
     req.sessions,
-    req.logsById,
+    req.logFor,
     cols.rp,
     req.view,
     req.todayDay,
@@ -166,7 +168,7 @@ function normaliseWeekStart(weekStart: string, weekStartDay?: number): number {
 }
 
 /** Request + columns covering [from, to] and the summarised week: the shared first half of the orchestrators. */
-export function prepareAthleteLoad(input: AthleteLoadInput): {
+function prepareAthleteLoad(input: AthleteLoadInput): {
   req: ColumnsRequest;
   cols: AthleteColumns;
   weekStartDay: number;
@@ -176,19 +178,13 @@ export function prepareAthleteLoad(input: AthleteLoadInput): {
     profile: input.profile,
     settings: input.settings,
     sessions: input.sessions,
-    logsById: indexLogs(input.logs),
+    logFor: alignLogs(input.sessions, input.logs),
     view: input.view,
     todayDay: dayIndex(input.today),
     fromDay: Math.min(dayIndex(input.from), weekStartDay - 7),
     toDay: Math.max(dayIndex(input.to), weekStartDay + 6),
   };
   return { req, cols: computeAthleteColumns(req), weekStartDay };
-}
-
-function record(fn: (m: Metric) => number): MetricValues {
-  const out = {} as MetricValues;
-  for (const m of METRICS) out[m] = fn(m);
-  return out;
 }
 
 /** The orchestrator for one athlete: daily rows for [from, to], the chosen week's summary and its flags. */
@@ -199,17 +195,15 @@ export function computeAthleteLoad(input: AthleteLoadInput): AthleteLoad {
   const to = dayIndex(input.to) - cols.startDay;
   const days: AthleteLoadDay[] = [];
   for (let i = from; i <= to; i++) {
-    const ratio = {} as Record<Metric, number | null>;
-    for (const m of METRICS) {
-      const r = cols.acwr[m].ratio[i];
-      ratio[m] = Number.isFinite(r) ? r : null;
-    }
     days.push({
       date: dateFromDayIndex(cols.startDay + i),
-      values: record((m) => cols.values[m][i]),
-      acute: record((m) => cols.acwr[m].acute[i]),
-      chronic: record((m) => cols.acwr[m].chronic[i]),
-      ratio,
+      values: metricRecord((m) => cols.values[m][i]),
+      acute: metricRecord((m) => cols.acwr[m].acute[i]),
+      chronic: metricRecord((m) => cols.acwr[m].chronic[i]),
+      ratio: metricRecord((m) => {
+        const r = cols.acwr[m].ratio[i];
+        return Number.isFinite(r) ? r : null;
+      }),
       provisional: cols.provisional[i] === 1,
       logged: cols.logged[i] === 1,
       missing: cols.missing[i] === 1,

@@ -27,9 +27,17 @@ export interface BlockMetrics {
   contacts: ContactsByIntensity;
 }
 
+/**
+ * Numeric fields start as a fractional placeholder so the literal's hidden class holds doubles from the
+ * start: widening it from small integers on the first fractional (partly logged) count deoptimised callers.
+ */
 export function contactsFromAcc(acc: Float64Array): ContactsByIntensity {
-  const low = acc[SLOT_LOW], moderate = acc[SLOT_MODERATE], high = acc[SLOT_HIGH];
-  return { low, moderate, high, total: low + moderate + high };
+  const out = { low: 0.5, moderate: 0.5, high: 0.5, total: 0.5 };
+  out.low = acc[SLOT_LOW];
+  out.moderate = acc[SLOT_MODERATE];
+  out.high = acc[SLOT_HIGH];
+  out.total = out.low + out.moderate + out.high;
+  return out;
 }
 
 /** Whole-block metrics (all sets × reps) as prescribed. */

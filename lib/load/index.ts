@@ -33,6 +33,7 @@ export {
   distanceAt,
   timeToDistance,
   metresAtOrAbove,
+  distanceToReach,
   msToKmh,
   kmhToMs,
   averageSpeed,
@@ -52,11 +53,13 @@ export {
   weeklyTotals,
   sessionUse,
   indexLogs,
+  alignLogs,
   effectiveSessions,
   type DailySeries,
   type DailySeriesInput,
   type WeeklyTotals,
   type SessionUse,
+  type AlignedLogs,
   type EffectiveSession,
 } from "./series";
 export {
@@ -74,7 +77,7 @@ export {
   type AcwrSeries,
   type AcwrOptions,
 } from "./acwr";
-export { monotony, strain, DEFAULT_SD_TYPE, type SdType } from "./monotony";
+export { monotony, monotonyOfWindow, strain, DEFAULT_SD_TYPE, type SdType } from "./monotony";
 export { weeklyChangePct, exceedsWeeklyLimit } from "./weekly-change";
 export { contactBand, aboveContactBand, drillContacts, PLYO_CONTACT_BANDS, type ContactBand } from "./plyo";
 export { computeFlags, topFlagLevel, type Flag, type FlagKind, type FlagLevel, type FlagInput, type FlagSession } from "./flags";

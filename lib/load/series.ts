@@ -44,6 +44,29 @@ export function indexLogs(logs: readonly LogInput[]): Map<string, LogInput> {
   return map;
 }
 
+/** Each session's log, aligned by index with `sessions` (undefined = not logged). */
+export type AlignedLogs = readonly (LogInput | undefined)[];
+
+/**
+ * Pairs sessions with their logs. The data layer hands logs over in session order, so one merge pass usually
+ * does it: if every log is matched in order, no session was skipped that had one (ids are unique). Otherwise
+ * (another order, or two logs for one session) a Map decides, where a later log replaces an earlier one.
+ */
+export function alignLogs(sessions: readonly SessionInput[], logs: readonly LogInput[]): AlignedLogs {
+  const out: (LogInput | undefined)[] = [];
+  let j = 0;
+  for (let k = 0; k < sessions.length; k++) {
+    const log = logs[j];
+    if (log !== undefined && log.sessionId === sessions[k].id) {
+      out.push(log);
+      j++;
+    } else out.push(undefined);
+  }
+  if (j === logs.length) return out;
+  const byId = indexLogs(logs);
+  return sessions.map((s) => byId.get(s.id));
+}
+
 /** Daily columns over [startDay, startDay + length): one Float64Array per metric, views of one buffer. */
 export interface DailyColumns {
   startDay: number;
@@ -85,7 +108,8 @@ export interface ColumnsInput {
   sessions: readonly SessionInput[];
   /** sessionDayNumbers(sessions), when the caller already has it. */
   sessionDays?: Int32Array;
-  logsById: ReadonlyMap<string, LogInput>;
+  /** alignLogs(sessions, logs). */
+  logFor: AlignedLogs;
   rp: ResolvedProfile;
   view: LoadView;
   todayDay: number;
@@ -95,7 +119,7 @@ export interface ColumnsInput {
 
 /** Hot path: no per-day or per-session allocation; one scratch accumulator for all sessions. */
 export function buildDailyColumns(input: ColumnsInput): DailyColumns {
-  const { startDay, length, sessions, logsById, rp, view, todayDay } = input;
+  const { startDay, length, sessions, logFor, rp, view, todayDay } = input;
   const days = input.sessionDays ?? sessionDayNumbers(sessions);
   const { buffer, values } = metricColumns(length, input.scratch?.f64);
   const logged = input.scratch ? input.scratch.u8.subarray(0, length) : new Uint8Array(length);
@@ -106,7 +130,7 @@ export function buildDailyColumns(input: ColumnsInput): DailyColumns {
     const i = days[k] - startDay;
     if (i < 0 || i >= length) continue;
     const session = sessions[k];
-    const log = logsById.get(session.id);
+    const log = logFor[k];
     if ((log || session.status !== "cancelled") && (firstDataIndex < 0 || i < firstDataIndex)) firstDataIndex = i;
     const use = sessionUse(session.status, log !== undefined, days[k], todayDay, view);
     if (use === "none") continue;
@@ -132,7 +156,7 @@ export interface EffectiveSession extends SessionMetrics {
 /** Sessions dated in [fromDay, toDay] that count in the view, with their metrics. */
 export function effectiveSessions(
   sessions: readonly SessionInput[],
-  logsById: ReadonlyMap<string, LogInput>,
+  logFor: AlignedLogs,
   rp: ResolvedProfile,
   view: LoadView,
   todayDay: number,
@@ -146,7 +170,7 @@ export function effectiveSessions(
     const s = sessions[k];
     const day = sessionDays ? sessionDays[k] : parseDay(s.date);
     if (day < fromDay || day > toDay) continue;
-    const log = logsById.get(s.id);
+    const log = logFor[k];
     const use = sessionUse(s.status, log !== undefined, day, todayDay, view);
     if (use !== "logged" && use !== "planned") continue;
     evaluate(acc, s, use === "logged" ? log : undefined, rp);
@@ -184,7 +208,7 @@ export function dailySeries(input: DailySeriesInput): DailySeries {
     startDay,
     length,
     sessions: input.sessions,
-    logsById: indexLogs(input.logs),
+    logFor: alignLogs(input.sessions, input.logs),
     rp: resolveProfile(input.profile, input.settings),
     view: input.view,
     todayDay: dayIndex(input.today),

@@ -1,17 +1,10 @@
 import { computeAthleteColumns, weekFromColumns, type ColumnsRequest } from "./athlete-load";
 import { dayIndex } from "./dates";
 import { topFlagLevel, type Flag, type FlagLevel } from "./flags";
-import { indexLogs } from "./series";
+import { metricRecord } from "./metric-record";
+import { alignLogs } from "./series";
 import { createWorkspace } from "./workspace";
-import {
-  METRICS,
-  type AthleteProfile,
-  type LoadView,
-  type LogInput,
-  type Metric,
-  type SessionInput,
-  type TeamLoadSettings,
-} from "./types";
+import type { AthleteProfile, LoadView, LogInput, Metric, SessionInput, TeamLoadSettings } from "./types";
 import { peakRatioIn, type WeekSummary } from "./week-summary";
 
 export interface SquadAthleteInput {
@@ -51,7 +44,7 @@ export function computeSquadWeek(
       profile: a.profile,
       settings,
       sessions: a.sessions,
-      logsById: indexLogs(a.logs),
+      logFor: alignLogs(a.sessions, a.logs),
       view,
       todayDay,
       fromDay: ws - 7,
@@ -60,8 +53,7 @@ export function computeSquadWeek(
     const cols = computeAthleteColumns(req, scratch);
     const { week, flags } = weekFromColumns(cols, req, ws);
     const w = ws - cols.startDay;
-    const peakRatios = {} as Record<Metric, number | null>;
-    for (const m of METRICS) peakRatios[m] = peakRatioIn(cols.acwr[m].ratio, w, w + 7)?.value ?? null;
+    const peakRatios = metricRecord((m) => peakRatioIn(cols.acwr[m].ratio, w, w + 7)?.value ?? null);
     return { id: a.id, name: a.name, group: a.group, week, peakRatios, flags, topLevel: topFlagLevel(flags) };
   });
 }

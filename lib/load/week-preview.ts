@@ -3,7 +3,7 @@ import { computeAthleteColumns } from "./athlete-load";
 import { resolveProfile } from "./accumulate";
 import { dateFromDayIndex, dayIndex } from "./dates";
 import { computeFlags, type Flag, type FlagSession } from "./flags";
-import { buildDailyColumns, effectiveSessions, indexLogs } from "./series";
+import { alignLogs, buildDailyColumns, effectiveSessions } from "./series";
 import {
   METRICS,
   type AthleteProfile,
@@ -48,8 +48,8 @@ export function computeWeekPreview(input: WeekPreviewInput): { week: WeekSummary
   const offset = Math.max(0, ws - historyStart);
   const length = offset + 7;
   const rp = resolveProfile(input.profile, settings);
-  const logsById = indexLogs(input.weekLogs);
-  const week = buildDailyColumns({ startDay: ws, length: 7, sessions: input.weekSessions, logsById, rp, view, todayDay });
+  const logFor = alignLogs(input.weekSessions, input.weekLogs);
+  const week = buildDailyColumns({ startDay: ws, length: 7, sessions: input.weekSessions, logFor, rp, view, todayDay });
   const values = {} as Record<Metric, Float64Array>;
   for (const m of METRICS) {
     const col = new Float64Array(length);
@@ -81,7 +81,7 @@ export function computeWeekPreview(input: WeekPreviewInput): { week: WeekSummary
   });
   const sessions: FlagSession[] = [
     ...(input.priorSessions ?? []),
-    ...effectiveSessions(input.weekSessions, logsById, rp, view, todayDay, ws, ws + 6),
+    ...effectiveSessions(input.weekSessions, logFor, rp, view, todayDay, ws, ws + 6),
   ];
   const flags = computeFlags({
     firstDate,
@@ -121,12 +121,12 @@ export interface WeekPreviewContext {
 export function buildWeekPreviewContext(input: WeekPreviewContextInput): WeekPreviewContext {
   const view = input.view ?? "projected";
   const ws = dayIndex(input.weekStart);
-  const logsById = indexLogs(input.logs);
+  const logFor = alignLogs(input.sessions, input.logs);
   const req = {
     profile: input.profile,
     settings: input.settings,
     sessions: input.sessions,
-    logsById,
+    logFor,
     view,
     todayDay: dayIndex(input.today),
     fromDay: ws - 7,
@@ -140,13 +140,13 @@ export function buildWeekPreviewContext(input: WeekPreviewContextInput): WeekPre
   const historyValues = {} as Record<Metric, number[]>;
   for (const m of METRICS) historyValues[m] = Array.from(cols.values[m].subarray(from));
   let firstDataDay = cols.firstDataIndex >= 0 ? cols.startDay + cols.firstDataIndex : Number.POSITIVE_INFINITY;
-  for (const s of input.sessions) {
+  input.sessions.forEach((s, k) => {
     const d = dayIndex(s.date);
-    if (d >= ws && d < firstDataDay && (logsById.has(s.id) || s.status !== "cancelled")) firstDataDay = d;
-  }
+    if (d >= ws && d < firstDataDay && (logFor[k] !== undefined || s.status !== "cancelled")) firstDataDay = d;
+  });
   const lookBack = Math.ceil(input.settings.recoveryHours / 24) + 1;
   const rp = resolveProfile(input.profile, input.settings);
-  const priorSessions = effectiveSessions(input.sessions, logsById, rp, view, req.todayDay, ws - lookBack, ws - 1)
+  const priorSessions = effectiveSessions(input.sessions, logFor, rp, view, req.todayDay, ws - lookBack, ws - 1)
     .filter((s) => s.highIntensity)
     .map((s) => ({ id: s.id, date: s.date, startTime: s.startTime, contactsByIntensity: s.contactsByIntensity, highIntensity: true }));
   return {

@@ -1,6 +1,7 @@
 import { dateFromDayIndex, dayIndex } from "./dates";
 import { DEFAULT_SD_TYPE, monotonyOfWindow, type SdType } from "./monotony";
-import { METRICS, type AcwrMethod, type Metric, type MetricValues, type TeamLoadSettings } from "./types";
+import { metricRecord } from "./metric-record";
+import type { AcwrMethod, Metric, MetricValues, TeamLoadSettings } from "./types";
 import { weeklyChangePct } from "./weekly-change";
 
 export interface WeekSummary {
@@ -62,12 +63,6 @@ export interface WeekSummaryInput {
   settings: TeamLoadSettings;
   weekStart: string;
   sdType?: SdType;
-}
-
-function metricRecord<T>(fn: (m: Metric) => T): Record<Metric, T> {
-  const out = {} as Record<Metric, T>;
-  for (const m of METRICS) out[m] = fn(m);
-  return out;
 }
 
 export function summariseWeek(input: WeekSummaryInput): WeekSummary {

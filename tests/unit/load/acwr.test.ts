@@ -69,6 +69,15 @@ describe("EWMA check values (methods.md §2 [C], recurrence of Williams et al. 2
     expect(s.ratio[27]).toBeCloseTo(1.483019, 6);
   });
 
+  it("acwrSeries' fused EWMA pass equals ewma() exactly, for both seeds", () => {
+    const xs = [0, 310, 0, 0, 455.5, 120, 0, 610, 90, 0, 0, 333];
+    for (const seed of ["first", "zero"] as const) {
+      const s = acwrSeries(xs, "ewma", { seed });
+      expect(Array.from(s.acute)).toEqual(Array.from(ewma(xs, 7, seed)));
+      expect(Array.from(s.chronic)).toEqual(Array.from(ewma(xs, 28, seed)));
+    }
+  });
+
   it("E3: a constant load seeded with itself keeps both EWMAs at L and the ratio at exactly 1", () => {
     const s = acwrSeries(rep(420, 60), "ewma");
     expect(s.acute.every((v) => v === 420)).toBe(true);

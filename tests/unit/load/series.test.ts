@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { dailySeries, sessionUse, weeklyTotals } from "@/lib/load/series";
+import { alignLogs, dailySeries, sessionUse, weeklyTotals } from "@/lib/load/series";
 import { PROFILE, SETTINGS, log, session } from "./fixtures";
 
 const TODAY = "2026-03-11"; // Wednesday
@@ -82,5 +82,26 @@ describe("weeklyTotals", () => {
 
   it("handles an empty series", () => {
     expect(weeklyTotals([], { hsrM: [], nearMaxM: [], sprintM: [], sprintSteps: [], contacts: [], srpe: [] }).weekStarts).toEqual([]);
+  });
+});
+
+describe("alignLogs", () => {
+  const s1 = session("2026-03-09");
+  const s2 = session("2026-03-10");
+  const s3 = session("2026-03-11");
+
+  it("pairs logs given in session order in one pass, skipping unlogged sessions", () => {
+    const l1 = log(s1.id);
+    const l3 = log(s3.id);
+    expect(alignLogs([s1, s2, s3], [l1, l3])).toEqual([l1, undefined, l3]);
+  });
+
+  it("falls back to matching by id for any other order; a later log for a session wins", () => {
+    const l3 = log(s3.id);
+    const l1a = log(s1.id, { rpe: 4 });
+    const l1b = log(s1.id, { rpe: 6 });
+    expect(alignLogs([s1, s2, s3], [l3, l1a])).toEqual([l1a, undefined, l3]);
+    expect(alignLogs([s1, s2, s3], [l1a, l1b])).toEqual([l1b, undefined, undefined]);
+    expect(alignLogs([s1], [log("elsewhere"), log(s1.id)])[0]?.sessionId).toBe(s1.id);
   });
 });

@@ -9,7 +9,12 @@ function pick<T>(rng: () => number, items: readonly T[]): T {
   return items[Math.floor(rng() * items.length)];
 }
 
+// Every block carries both `running` and `drills` (null when unused), as rows from the data layer do.
 function blockFor(rng: () => number, id: string): BlockInput {
+  return { running: null, drills: null, ...blockBody(rng, id) };
+}
+
+function blockBody(rng: () => number, id: string): BlockInput {
   const r = rng();
   if (r < 0.22) {
     return { id, kind: "acceleration", title: "Starts", running: { sets: 2, reps: 3 + Math.floor(rng() * 3), distanceM: pick(rng, [10, 20, 30]), intensityPct: 95, start: pick(rng, ["crouch", "blocks", "standing"] as const), runInM: 0, restSec: 180 } };
