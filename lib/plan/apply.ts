@@ -102,7 +102,13 @@ export function applyChange(week: PlanWeek, change: PlanChange, tempId: TempIds,
 }
 
 /** Puts saved sessions in place of what the grid showed (after a write answers), removing `removedIds`. */
-export function mergeSaved(week: PlanWeek, saved: readonly PlanSession[], removedIds: readonly number[], replacedIds: readonly number[] = []): PlanWeek {
+export function mergeSaved(
+  week: PlanWeek,
+  saved: readonly PlanSession[],
+  removedIds: readonly number[],
+  replacedIds: readonly number[] = [],
+  load?: (a: PlanAthlete, sessions: PlanSession[]) => PlanAthlete["load"],
+): PlanWeek {
   const drop = new Set([...removedIds, ...replacedIds, ...saved.map((s) => s.id)]);
   const changed = new Map<number, PlanSession[]>();
   for (const a of week.athletes) {
@@ -110,5 +116,5 @@ export function mergeSaved(week: PlanWeek, saved: readonly PlanSession[], remove
     const added = saved.filter((s) => s.athleteId === a.id && week.days.includes(s.date));
     if (kept.length !== a.sessions.length || added.length > 0) changed.set(a.id, sortSessions([...kept, ...added]));
   }
-  return withSessions(week, changed);
+  return withSessions(week, changed, load);
 }

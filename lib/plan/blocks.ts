@@ -31,8 +31,9 @@ export function sessionFieldsFromTemplate(t: PlanTemplate) {
   return { title: t.title, durationMin: t.durationMin, plannedRpe: t.plannedRpe, startTime: DEFAULT_START_TIME };
 }
 
-export function toBlockInput(b: Pick<PlanBlock, "id" | "kind" | "title" | "running" | "drills" | "notes">): BlockInput {
-  return { id: String(b.id), kind: b.kind, title: b.title, running: b.running, drills: b.drills, ...(b.notes ? { notes: b.notes } : {}) };
+/** The engine's (and blockSummary's) view of a block, a template or a form's block; the id only when stored. */
+export function toBlockInput(b: Pick<PlanBlock, "kind" | "title" | "running" | "drills" | "notes"> & { id?: number }): BlockInput {
+  return { ...(b.id !== undefined ? { id: String(b.id) } : {}), kind: b.kind, title: b.title, running: b.running, drills: b.drills, ...(b.notes ? { notes: b.notes } : {}) };
 }
 
 /** The engine's view of a planned session (ids as strings, as lib/data/load.ts gives them). */

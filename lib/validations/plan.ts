@@ -24,7 +24,8 @@ export const weekQuerySchema = z.object({ week: localDateSchema.optional() });
 /** Body of the week tools (copy to next, clear, publish). */
 export const weekToolSchema = z.object({ week: localDateSchema });
 
-export const sessionBlockSchema = blockSchema.and(z.object({ templateId: idSchema.nullable().optional() }));
+/** A block inside a session; `templateId` says which shelf template it was copied from (JSON body: a number). */
+export const sessionBlockSchema = blockSchema.and(z.object({ templateId: z.number().int().positive().nullable().optional() }));
 export type SessionBlockBody = z.infer<typeof sessionBlockSchema>;
 
 /** POST /api/teams/[teamId]/sessions: what the grid or the editor asks for. */
@@ -65,18 +66,24 @@ export const createSessionSchema = z
   });
 export type CreateSessionInput = z.infer<typeof createSessionSchema>;
 
+/** What the session editor edits (the form and the PATCH share it). */
+export const sessionEditSchema = z.object({
+  title: titleSchema,
+  startTime: startTimeSchema,
+  durationMin: durationSchema,
+  plannedRpe: rpeSchema,
+  notes: notesSchema,
+  blocks: z.array(sessionBlockSchema).max(20, "At most 20 blocks"),
+});
+export type SessionEditValues = z.infer<typeof sessionEditSchema>;
+
 /** PATCH /api/sessions/[id]: any subset of the session; `blocks` replaces the whole list. */
-export const updateSessionSchema = z
-  .object({
+export const updateSessionSchema = sessionEditSchema
+  .partial()
+  .extend({
     version: versionSchema,
     athleteId: idSchema.optional(),
     date: localDateSchema.optional(),
-    startTime: startTimeSchema.optional(),
-    durationMin: durationSchema.optional(),
-    title: titleSchema.optional(),
-    plannedRpe: rpeSchema.optional(),
-    notes: notesSchema.optional(),
-    blocks: z.array(sessionBlockSchema).max(20, "At most 20 blocks").optional(),
     /** Only "published": publishes a draft, or brings back a cancelled session. */
     status: z.literal("published", { error: "Only published can be set here; delete a session to cancel it" }).optional(),
   })

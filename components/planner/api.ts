@@ -1,0 +1,42 @@
+import type { PlanSession, PlanWeek, PlanWriteResult } from "@/lib/plan/types";
+
+/** A refusal from the server, with the per-field messages and, on 409 "stale", the session as it now is. */
+export class PlanApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields: Record<string, string[]> = {},
+    readonly current: PlanSession | null = null,
+  ) {
+    super(message);
+    this.name = "PlanApiError";
+  }
+  get stale() {
+    return this.code === "stale";
+  }
+}
+
+type ErrorBody = { error?: { code?: string; message?: string; fields?: Record<string, string[]>; current?: PlanSession } };
+
+export async function requestJson<T>(method: "GET" | "POST" | "PATCH" | "PUT" | "DELETE", url: string, body?: unknown): Promise<T> {
+  let res: Response;
+  try {
+    res = await fetch(url, {
+      method,
+      headers: body === undefined ? undefined : { "content-type": "application/json" },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+  } catch {
+    throw new PlanApiError(0, "offline", "The server could not be reached. Check the connection and try again.");
+  }
+  const data = (await res.json().catch(() => ({}))) as T & ErrorBody;
+  if (!res.ok) {
+    const e = data.error ?? {};
+    throw new PlanApiError(res.status, e.code ?? "error", e.message ?? `The server answered ${res.status}`, e.fields, e.current ?? null);
+  }
+  return data;
+}
+
+export const fetchWeek = (url: string) => requestJson<PlanWeek>("GET", url);
+export const write = (method: "POST" | "PATCH" | "DELETE", url: string, body?: unknown) => requestJson<PlanWriteResult>(method, url, body);

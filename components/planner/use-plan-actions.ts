@@ -1,0 +1,231 @@
+"use client";
+
+import { useCallback, useRef, useState } from "react";
+import { useSWRConfig } from "swr";
+import { applyChange, mergeSaved, type TempIds } from "@/lib/plan/apply";
+import { findSession, type PlanChange } from "@/lib/plan/drop";
+import { sessionBlockPath, sessionBlocksPath, sessionPath, teamSessionsPath, teamTemplatesPath, templatePath, weekToolPath } from "@/lib/plan/keys";
+import { rowLoad } from "@/lib/plan/preview";
+import type { PlanSession, PlanWeek, PlanWriteResult } from "@/lib/plan/types";
+import { popUndo, pushUndo, undoForChange, undoForDelete, undoForEdit, type UndoEntry, type UndoOp } from "@/lib/plan/undo";
+import type { SessionEditValues } from "@/lib/validations/plan";
+import type { TemplateInput } from "@/lib/validations/template";
+import { PlanApiError, requestJson, write } from "./api";
+import { describeChange } from "./describe";
+
+export type Notice = { tone: "saved" | "info" | "refused"; text: string; at: number };
+
+// Temporary ids of optimistic sessions, unique across the page's life.
+let tempSeq = -1;
+const tempId: TempIds = () => tempSeq--;
+
+function request(week: PlanWeek, change: PlanChange): Promise<PlanWriteResult> {
+  const version = (id: number) => findSession(week, id)?.version ?? 0;
+  switch (change.kind) {
+    case "create":
+      return write("POST", teamSessionsPath(week.teamId), { from: "template", templateId: change.templateId, athleteId: change.athleteId, date: change.date });
+    case "group":
+      return write("POST", teamSessionsPath(week.teamId), { from: "template", templateId: change.templateId, groupId: change.groupId, date: change.date });
+    case "copy":
+      return write("POST", teamSessionsPath(week.teamId), { from: "copy", sessionId: change.sessionId, athleteId: change.athleteId, date: change.date });
+    case "add-block":
+      return write("POST", sessionBlocksPath(change.sessionId), { version: version(change.sessionId), templateId: change.templateId });
+    case "move":
+      return write("PATCH", sessionPath(change.sessionId), { version: version(change.sessionId), athleteId: change.athleteId, date: change.date });
+  }
+}
+
+const blockBodies = (s: Pick<PlanSession, "blocks">) => s.blocks.map(({ templateId, kind, title, running, drills, notes }) => ({ templateId, kind, title, running, drills, notes }));
+
+/**
+ * Every write the planner makes: optimistic in the grid (numbers from lib/load), then confirmed by the server's
+ * answer and a refetch. A refusal rolls back with the server's reason; a 409 refetches and says what happened.
+ */
+export function usePlanActions({ swrKey, current }: { swrKey: string; current: () => PlanWeek | undefined }) {
+  const { mutate } = useSWRConfig();
+  const [notice, setNoticeState] = useState<Notice | null>(null);
+  const [undoStack, setUndoStack] = useState<UndoEntry[]>([]);
+  const [saving, setSaving] = useState(0);
+  const undoRef = useRef(undoStack);
+  undoRef.current = undoStack;
+
+  const say = useCallback((tone: Notice["tone"], text: string) => setNoticeState({ tone, text, at: Date.now() }), []);
+  const refetch = useCallback(() => mutate(swrKey), [mutate, swrKey]);
+
+  const explain = useCallback(
+    async (e: unknown, what: string) => {
+      if (e instanceof PlanApiError && e.stale) {
+        await refetch();
+        const s = e.current;
+        say("refused", `${what} was not saved: someone else changed ${s ? `"${s.title}"` : "this session"} a moment ago. The grid now shows the latest plan; try again if it is still needed.`);
+      } else if (e instanceof PlanApiError && e.status === 404) {
+        await refetch();
+        say("refused", `${what} was not saved: it is no longer in the plan. The grid has been refreshed.`);
+      } else {
+        say("refused", `${what} was not saved: ${e instanceof Error ? e.message : "unknown error"}`);
+      }
+    },
+    [refetch, say],
+  );
+
+  const track = useCallback(async <T,>(fn: () => Promise<T>): Promise<T> => {
+    setSaving((n) => n + 1);
+    try {
+      return await fn();
+    } finally {
+      setSaving((n) => n - 1);
+    }
+  }, []);
+
+  /** A drop: shown at once, saved, then confirmed. */
+  const saveChange = useCallback(
+    async (change: PlanChange) => {
+      const before = current();
+      if (!before) return;
+      const what = describeChange(before, change);
+      let temps: number[] = [];
+      try {
+        const result = await track(() =>
+          mutate<PlanWeek, PlanWriteResult>(swrKey, request(before, change), {
+            optimisticData: (data) => {
+              const base = data ?? before;
+              const next = applyChange(base, change, tempId, (a, s) => rowLoad(base, a, s));
+              const had = new Set(base.athletes.flatMap((a) => a.sessions.map((s) => s.id)));
+              temps = next.athletes.flatMap((a) => a.sessions.map((s) => s.id)).filter((id) => id < 0 && !had.has(id));
+              return next;
+            },
+            // SWR hands populateCache the data from before the optimistic step, so the touched rows are
+            // recomputed here (the same numbers); the refetch then brings the server's own.
+            populateCache: (res, data) => {
+              const base = data ?? before;
+              return mergeSaved(base, res.sessions, res.removedIds, temps, (a, s) => rowLoad(base, a, s));
+            },
+            rollbackOnError: true,
+            revalidate: true,
+          }),
+        );
+        if (!result) return;
+        setUndoStack((st) => pushUndo(st, undoForChange(change, (id) => findSession(before, id) ?? undefined, result)));
+        say("saved", `Saved: ${what}.`);
+      } catch (e) {
+        await explain(e, what);
+      }
+    },
+    [current, explain, mutate, say, swrKey, track],
+  );
+
+  /** Writes the server's answer into the grid and refetches the numbers. */
+  const settle = useCallback(
+    (res: PlanWriteResult) => mutate<PlanWeek, PlanWriteResult>(swrKey, Promise.resolve(res), { populateCache: (r, data) => (data ? mergeSaved(data, r.sessions, r.removedIds, [], (a, s) => rowLoad(data, a, s)) : data!), revalidate: true }),
+    [mutate, swrKey],
+  );
+
+  const runOp = useCallback(async (op: UndoOp, versions: Map<number, number>, week: PlanWeek): Promise<PlanWriteResult> => {
+    const v = (id: number) => versions.get(id) ?? findSession(week, id)?.version ?? 0;
+    switch (op.op) {
+      case "remove":
+        return write("DELETE", `${sessionPath(op.sessionId)}?version=${v(op.sessionId)}`);
+      case "move":
+        return write("PATCH", sessionPath(op.sessionId), { version: v(op.sessionId), athleteId: op.athleteId, date: op.date });
+      case "remove-block":
+        return write("DELETE", `${sessionBlockPath(op.sessionId, op.blockId)}?version=${v(op.sessionId)}`);
+      case "reinstate":
+        return write("PATCH", sessionPath(op.sessionId), { version: v(op.sessionId), status: "published" });
+      case "restore-fields": {
+        const { blocks, ...fields } = op.fields;
+        return write("PATCH", sessionPath(op.sessionId), { version: v(op.sessionId), ...fields, blocks: blockBodies({ blocks }) });
+      }
+      case "recreate": {
+        const s = op.session;
+        return write("POST", teamSessionsPath(week.teamId), { from: "blank", athleteId: s.athleteId, date: s.date, startTime: s.startTime, durationMin: s.durationMin, title: s.title, plannedRpe: s.plannedRpe, notes: s.notes, blocks: blockBodies(s) });
+      }
+    }
+  }, []);
+
+  const undo = useCallback(async () => {
+    const { entry, rest } = popUndo(undoRef.current);
+    const week = current();
+    if (!entry || !week) return;
+    setUndoStack(rest);
+    const versions = new Map<number, number>();
+    try {
+      await track(async () => {
+        for (const op of entry.ops) {
+          const res = await runOp(op, versions, week);
+          for (const s of res.sessions) versions.set(s.id, s.version);
+          await settle(res);
+        }
+      });
+      say("saved", `Undone: ${entry.label}.`);
+    } catch (e) {
+      await explain(e, `Undo of the ${entry.label}`);
+    }
+  }, [current, explain, runOp, say, settle, track]);
+
+  const saveSession = useCallback(
+    async (before: PlanSession, values: SessionEditValues, version: number) => {
+      const res = await track(() => write("PATCH", sessionPath(before.id), { version, ...values, notes: values.notes?.trim() ? values.notes : null }));
+      await settle(res);
+      setUndoStack((st) => pushUndo(st, undoForEdit(before)));
+      say("saved", `Saved "${values.title}".`);
+    },
+    [say, settle, track],
+  );
+
+  const deleteSession = useCallback(
+    async (s: PlanSession, version = s.version) => {
+      const res = await track(() => write("DELETE", `${sessionPath(s.id)}?version=${version}`));
+      await settle(res);
+      setUndoStack((st) => pushUndo(st, undoForDelete(s, res)));
+      say("saved", res.removedIds.includes(s.id) ? `Deleted "${s.title}".` : `Cancelled "${s.title}"; athletes will see it cancelled.`);
+    },
+    [say, settle, track],
+  );
+
+  const runTool = useCallback(
+    async (tool: "copy-to-next" | "clear" | "publish") => {
+      const week = current();
+      if (!week) return;
+      try {
+        const res = await track(() => write("POST", weekToolPath(week.teamId, tool), { week: week.weekStart }));
+        await refetch();
+        if (tool === "clear") setUndoStack([]);
+        const n = res.sessions.length;
+        const text =
+          tool === "publish"
+            ? n === 0 ? "Nothing to publish: the week has no drafts." : `Published ${n} session${n === 1 ? "" : "s"}; athletes will get them in their calendars.`
+            : tool === "copy-to-next"
+              ? `Copied ${n} session${n === 1 ? "" : "s"} to next week as drafts.`
+              : `Cleared the week: ${res.removedIds.length} draft${res.removedIds.length === 1 ? "" : "s"} removed, ${n} published session${n === 1 ? "" : "s"} cancelled.`;
+        say("saved", text);
+      } catch (e) {
+        await explain(e, "The week tool");
+      }
+    },
+    [current, explain, refetch, say, track],
+  );
+
+  const saveTemplate = useCallback(
+    async (values: TemplateInput, id: number | null) => {
+      const week = current();
+      if (!week) return;
+      await track(() => (id === null ? requestJson("POST", teamTemplatesPath(week.teamId), values) : requestJson("PUT", templatePath(id), values)));
+      await refetch();
+      say("saved", `Saved the block "${values.title}".`);
+    },
+    [current, refetch, say, track],
+  );
+
+  const deleteTemplate = useCallback(
+    async (id: number, title: string) => {
+      await track(() => requestJson("DELETE", templatePath(id)));
+      await refetch();
+      say("saved", `Deleted the block "${title}".`);
+    },
+    [refetch, say, track],
+  );
+
+  const clearUndo = useCallback(() => setUndoStack([]), []);
+
+  return { notice, say, saving, undoStack, undo, clearUndo, saveChange, saveSession, deleteSession, runTool, saveTemplate, deleteTemplate, refetch };
+}

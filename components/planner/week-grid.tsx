@@ -1,0 +1,72 @@
+"use client";
+
+import { clsx } from "clsx";
+import type { RowPreview } from "@/lib/plan/preview";
+import type { PlanWeek } from "@/lib/plan/types";
+import { dayHeading } from "@/lib/plan/week";
+import { AthleteRow } from "./athlete-row";
+import { GroupRow, groupKey } from "./group-row";
+import type { CardActions } from "./session-card";
+
+type Props = {
+  week: PlanWeek;
+  collapsed: ReadonlySet<string>;
+  onToggleGroup: (key: string) => void;
+  previews: ReadonlyMap<number, RowPreview>;
+  templateDrag: boolean;
+  copyArmedId: number | null;
+  actions: CardActions;
+};
+
+/** Rows = athletes grouped by training group; columns = the days of the team's week. */
+export function WeekGrid({ week, collapsed, onToggleGroup, previews, templateDrag, copyArmedId, actions }: Props) {
+  const byId = new Map(week.athletes.map((a) => [a.id, a]));
+  return (
+    <div className="overflow-x-auto rounded-card bg-paper-raised shadow-card ring-1 ring-ink-100">
+      <table data-testid="plan-grid" className="w-full min-w-[52rem] table-fixed border-collapse text-sm">
+        <colgroup>
+          <col className="w-56" />
+          {week.days.map((d) => (
+            <col key={d} />
+          ))}
+        </colgroup>
+        <thead>
+          <tr className="text-left">
+            <th scope="col" className="sticky left-0 z-10 bg-paper-raised px-3 py-2 text-xs font-medium text-ink-500">
+              Athlete · week load
+            </th>
+            {week.days.map((date) => {
+              const h = dayHeading(date);
+              const today = date === week.today;
+              return (
+                <th key={date} scope="col" data-testid="day-heading" className={clsx("border-l border-ink-100 px-2 py-2 text-xs font-medium", today ? "text-clay-700" : "text-ink-500")}>
+                  <span className="block uppercase tracking-wider">{h.weekday}</span>
+                  <span className={clsx("tabular-nums", today ? "font-semibold" : "text-ink-800")}>{h.date}</span>
+                  {today ? <span className="ml-1 rounded bg-clay-100 px-1 text-2xs text-clay-700">today</span> : null}
+                </th>
+              );
+            })}
+          </tr>
+        </thead>
+        {week.groups.map((g) => {
+          const folded = collapsed.has(groupKey(g));
+          return (
+            <tbody key={groupKey(g)} data-testid="group-body">
+              {week.scope === "team" ? (
+                <GroupRow group={g} days={week.days} today={week.today} collapsed={folded} onToggle={onToggleGroup} templateDrag={templateDrag} canEdit={week.canEdit} />
+              ) : null}
+              {folded
+                ? null
+                : g.athleteIds.map((id) => {
+                    const athlete = byId.get(id);
+                    return athlete ? (
+                      <AthleteRow key={id} athlete={athlete} days={week.days} today={week.today} canEdit={week.canEdit} preview={previews.get(id) ?? null} copyArmedId={copyArmedId} actions={actions} />
+                    ) : null;
+                  })}
+            </tbody>
+          );
+        })}
+      </table>
+    </div>
+  );
+}

@@ -1,0 +1,93 @@
+"use client";
+
+import { useState } from "react";
+import type { PlanWeek } from "@/lib/plan/types";
+import { shiftWeek, weekRangeLabel } from "@/lib/plan/week";
+import { Button } from "@/components/ui/button";
+import { Input } from "@/components/ui/field";
+import type { UndoEntry } from "@/lib/plan/undo";
+
+type Tool = "copy-to-next" | "clear" | "publish";
+
+type Props = {
+  week: PlanWeek | undefined;
+  weekStart: string;
+  onGo: (date: string) => void;
+  onToday: () => void;
+  undo: UndoEntry | null;
+  onUndo: () => void;
+  onTool: (tool: Tool) => void;
+  busy: boolean;
+};
+
+const CONFIRM: Record<Tool, (w: PlanWeek) => string> = {
+  "copy-to-next": () => "Copy every session of this week to the same days next week, as drafts?",
+  clear: () => "Clear this week? Drafts are removed; published sessions are cancelled and athletes see them cancelled. Logged sessions stay.",
+  publish: (w) => `Publish ${draftCount(w)} draft session${draftCount(w) === 1 ? "" : "s"}? Athletes get them in their calendars.`,
+};
+
+function draftCount(w: PlanWeek) {
+  return w.athletes.reduce((n, a) => n + a.sessions.filter((s) => s.status === "draft").length, 0);
+}
+
+/** Week navigation (previous, next, this week, pick a date), the ISO week number, undo and the week tools. */
+export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onTool, busy }: Props) {
+  const [picked, setPicked] = useState("");
+  const iso = week ? `Week ${week.isoWeek}` : "Week";
+  const drafts = week ? draftCount(week) : 0;
+  return (
+    <div className="mb-4 flex flex-col gap-3 xl:flex-row xl:items-end xl:justify-between">
+      <div>
+        <p className="text-xs font-medium uppercase tracking-wider text-clay-700" data-testid="iso-week">
+          {iso}
+          {week ? <span className="text-ink-400"> · {week.isoYear}</span> : null}
+        </p>
+        <h1 className="text-2xl font-semibold text-ink-950" data-testid="week-range">
+          {weekRangeLabel(weekStart)}
+        </h1>
+        {week ? <p className="text-xs text-ink-500">Days in {week.timeZone.replace(/_/g, " ")} time</p> : null}
+      </div>
+      <div className="flex flex-wrap items-center gap-2">
+        <nav aria-label="Weeks" className="flex items-center gap-1 rounded-lg bg-paper-raised p-1 ring-1 ring-ink-100">
+          <Button variant="ghost" size="sm" onClick={() => onGo(shiftWeek(weekStart, -1))} aria-label="Previous week" data-testid="prev-week">
+            ‹ Prev
+          </Button>
+          <Button variant="ghost" size="sm" onClick={onToday} data-testid="this-week">
+            This week
+          </Button>
+          <Button variant="ghost" size="sm" onClick={() => onGo(shiftWeek(weekStart, 1))} aria-label="Next week" data-testid="next-week">
+            Next ›
+          </Button>
+          <form
+            className="flex items-center gap-1 border-l border-ink-100 pl-1"
+            onSubmit={(e) => {
+              e.preventDefault();
+              if (picked) onGo(picked);
+            }}
+          >
+            <Input type="date" aria-label="Go to the week of a date" value={picked} onChange={(e) => setPicked(e.target.value)} className="h-8 w-36 py-1" data-testid="pick-date" />
+            <Button type="submit" variant="ghost" size="sm" disabled={!picked}>
+              Go
+            </Button>
+          </form>
+        </nav>
+        {week?.canEdit ? (
+          <div className="flex flex-wrap items-center gap-1">
+            <Button variant="secondary" size="sm" onClick={onUndo} disabled={!undo || busy} data-testid="undo" title="Ctrl+Z">
+              {undo ? `Undo ${undo.label}` : "Undo"}
+            </Button>
+            <Button variant="secondary" size="sm" disabled={busy} onClick={() => week && window.confirm(CONFIRM["copy-to-next"](week)) && onTool("copy-to-next")} data-testid="copy-week">
+              Copy to next week
+            </Button>
+            <Button variant="secondary" size="sm" disabled={busy} onClick={() => week && window.confirm(CONFIRM.clear(week)) && onTool("clear")} data-testid="clear-week">
+              Clear week
+            </Button>
+            <Button variant="accent" size="sm" disabled={busy || drafts === 0} onClick={() => week && window.confirm(CONFIRM.publish(week)) && onTool("publish")} data-testid="publish-week">
+              Publish week{drafts > 0 ? ` (${drafts})` : ""}
+            </Button>
+          </div>
+        ) : null}
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,251 @@
+import { DateTime } from "luxon";
+import type { Browser, Locator, Page } from "playwright-core";
+import { afterAll, beforeAll, expect, it } from "vitest";
+import { DEMO_ATHLETES, DEMO_STAFF } from "@/lib/seed/demo-club";
+import { addDaysTo, teamWeekStart } from "@/lib/plan/week";
+import type { PlanWeek } from "@/lib/plan/types";
+import { join } from "node:path";
+import { ARTIFACTS, apiSession, describeBrowser, launchBrowser, screenshot, signIn, startApp, type App } from "./harness";
+
+const coach = DEMO_STAFF.find((s) => s.role === "coach")!;
+const headCoach = DEMO_STAFF.find((s) => s.role === "head_coach")!;
+const athlete = DEMO_ATHLETES.find((a) => a.email)!;
+
+// Two weeks ahead of the demo's plan: an empty week, so every card in it comes from this test.
+const thisWeek = teamWeekStart(DateTime.now().setZone("Europe/London").toISODate()!, 1);
+const week = addDaysTo(thisWeek, 14);
+const day = (i: number) => addDaysTo(week, i);
+
+/** Pointer drag the way a person does it: press, move in steps (past dnd-kit's 5 px threshold), release. */
+async function drag(page: Page, from: Locator, to: Locator, { alt = false, hold }: { alt?: boolean; hold?: () => Promise<void> } = {}) {
+  await from.scrollIntoViewIfNeeded();
+  const a = (await from.boundingBox())!;
+  await page.mouse.move(a.x + a.width / 2, a.y + a.height / 2);
+  await page.mouse.down();
+  await page.mouse.move(a.x + a.width / 2 + 8, a.y + a.height / 2 + 8, { steps: 3 });
+  const b = (await to.boundingBox())!;
+  await page.mouse.move(b.x + b.width / 2, b.y + Math.min(b.height / 2, 30), { steps: 12 });
+  if (alt) await page.keyboard.down("Alt");
+  await page.mouse.move(b.x + b.width / 2 + 2, b.y + Math.min(b.height / 2, 30) + 1, { steps: 2 });
+  if (hold) await hold();
+  await page.mouse.up();
+  if (alt) await page.keyboard.up("Alt");
+}
+
+const row = (page: Page, athleteId: number) => page.locator(`[data-testid="athlete-row"][data-athlete-id="${athleteId}"]`);
+const cell = (page: Page, athleteId: number, date: string) => page.locator(`[data-testid="day-cell"][data-athlete-id="${athleteId}"][data-date="${date}"]`);
+const cards = (page: Page, athleteId: number, date: string) => cell(page, athleteId, date).getByTestId("session-card");
+const template = (page: Page, kind: string) => page.locator(`[data-testid="template-card"][data-kind="${kind}"]`).first();
+const srpe = async (page: Page, athleteId: number) => Number(await row(page, athleteId).getByTestId("total-srpe").getAttribute("data-value"));
+
+/** A viewport-only shot: a full-page one resizes the window, and dnd-kit cancels a drag on resize. */
+const shotDuringDrag = (page: Page, name: string) => page.screenshot({ path: join(ARTIFACTS, `${name}.png`) });
+
+/** Waits until no optimistic card is left and the grid is idle (saved and confirmed by the server). */
+async function settled(page: Page) {
+  await page.waitForFunction(() => !document.querySelector('[data-pending="true"]') && document.querySelector('[data-testid="planner"]')?.getAttribute("data-save-state") === "idle");
+}
+
+describeBrowser("planner journeys", () => {
+  let app: App;
+  let browser: Browser;
+  let plan: PlanWeek;
+  let page: Page;
+  const ids = (name: string) => plan.athletes.find((a) => a.name === name)!.id;
+
+  beforeAll(async () => {
+    app = await startApp();
+    browser = await launchBrowser();
+    page = await browser.newPage({ viewport: { width: 1440, height: 1800 } });
+    page.on("dialog", (d) => void d.accept());
+    await signIn(page, app, coach.email);
+    await page.goto(`${app.url}/plan?week=${week}`);
+    await page.getByTestId("plan-grid").waitFor();
+    const teamId = await page.getByTestId("planner").getAttribute("data-team-id");
+    plan = await page.evaluate(async (url) => (await fetch(url)).json() as Promise<PlanWeek>, `/api/teams/${teamId}/plan?week=${week}`);
+  });
+  afterAll(async () => {
+    await page?.close();
+    await browser?.close();
+    await app?.stop();
+  });
+
+  it("shows the week: ISO week number, days, groups, rows with totals, the shelf and the caution", async () => {
+    expect(await page.getByTestId("iso-week").textContent()).toMatch(/^Week \d+/);
+    expect(await page.getByTestId("day-heading").count()).toBe(7);
+    expect(await page.getByTestId("group-row").count()).toBe(3);
+    expect(await page.getByTestId("athlete-row").count()).toBe(DEMO_ATHLETES.length);
+    expect(await page.getByTestId("template-card").count()).toBeGreaterThan(5);
+    await page.getByTestId("load-caution").waitFor();
+    await screenshot(page, "planner-empty-week");
+  });
+
+  it("drags a max-velocity template onto Maya's Tuesday and shows the card and the new totals", async () => {
+    const maya = ids("Maya Okafor");
+    const before = await srpe(page, maya);
+    await drag(page, template(page, "max_velocity"), cell(page, maya, day(1)), {
+      hold: async () => {
+        await row(page, maya).locator('[data-testid="row-load"][data-previewing="true"]').waitFor({ timeout: 5000 });
+        await shotDuringDrag(page, "planner-drag-preview");
+      },
+    });
+    await cards(page, maya, day(1)).first().waitFor();
+    await settled(page);
+    expect(await cards(page, maya, day(1)).count()).toBe(1);
+    expect(await cards(page, maya, day(1)).first().textContent()).toMatch(/Flying 30s/);
+    // sRPE = RPE × minutes (Foster et al. 2001): the template's 8 × 70 = 560 AU.
+    expect((await srpe(page, maya)) - before).toBe(560);
+    await screenshot(page, "planner-after-drop");
+  });
+
+  it("moves it to Thursday", async () => {
+    const maya = ids("Maya Okafor");
+    await drag(page, cards(page, maya, day(1)).first().locator("button").first(), cell(page, maya, day(3)));
+    await cards(page, maya, day(3)).first().waitFor();
+    await settled(page);
+    expect(await cards(page, maya, day(1)).count()).toBe(0);
+    expect(await cards(page, maya, day(3)).count()).toBe(1);
+  });
+
+  it("copies with Alt held, and undoes the copy", async () => {
+    const maya = ids("Maya Okafor");
+    await drag(page, cards(page, maya, day(3)).first().locator("button").first(), cell(page, maya, day(5)), { alt: true });
+    await cards(page, maya, day(5)).first().waitFor();
+    await settled(page);
+    expect(await cards(page, maya, day(3)).count()).toBe(1);
+    expect(await cards(page, maya, day(5)).count()).toBe(1);
+    await page.getByTestId("undo").click();
+    await page.waitForFunction((sel) => document.querySelectorAll(sel).length === 0, `[data-testid="day-cell"][data-athlete-id="${maya}"][data-date="${day(5)}"] [data-testid="session-card"]`);
+    await settled(page);
+    expect(await cards(page, maya, day(3)).count()).toBe(1);
+  });
+
+  it("drags a template onto a group's day: every athlete of the group gets it", async () => {
+    const group = plan.groups.find((g) => g.name === "Junior sprint")!;
+    await drag(page, template(page, "tempo"), page.locator(`[data-testid="group-cell"][data-group-id="${group.id}"][data-date="${day(2)}"]`));
+    await settled(page);
+    for (const id of group.athleteIds) expect(await cards(page, id, day(2)).count()).toBe(1);
+    await page.evaluate(() => window.scrollTo(0, 0));
+    await screenshot(page, "planner-group-drop");
+  });
+
+  it("marks a drop that pushes ACWR over the spike threshold, before and after the drop", async () => {
+    // A deliberately heavy block (RPE 10 × 180 min = 1,800 AU) on an athlete coming off an empty week.
+    const api = await apiSession(app, coach.email);
+    const made = await api.fetch(`/api/teams/${plan.teamId}/templates`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ kind: "speed_endurance", title: "Double speed endurance", running: { sets: 2, reps: 3, distanceM: 150, intensityPct: 90, start: "standing", runInM: 0, restSec: 600 }, drills: null, notes: null, durationMin: 180, plannedRpe: 10 }),
+    });
+    expect(made.status).toBe(201);
+    const { template: heavy } = (await made.json()) as { template: { id: number } };
+    await page.reload();
+    await page.getByTestId("plan-grid").waitFor();
+    const callum = ids("Callum Strettin");
+    const source = page.locator(`[data-testid="template-card"][data-template-id="${heavy.id}"]`);
+    const warning = page.locator(`[data-testid="drop-warnings"][data-athlete-id="${callum}"] [data-kind="spike"]`);
+    let warned = false;
+    for (let i = 1; i < 7 && !warned; i++) {
+      await drag(page, source, cell(page, callum, day(i)), {
+        hold: async () => {
+          await row(page, callum).locator('[data-testid="row-load"][data-previewing="true"]').waitFor({ timeout: 5000 });
+          warned = (await warning.count()) > 0;
+          if (warned) {
+            expect(await warning.textContent()).toMatch(/at or above the spike threshold/);
+            await shotDuringDrag(page, "planner-spike-warning");
+          }
+        },
+      });
+      await settled(page);
+    }
+    expect(warned).toBe(true);
+    expect(await warning.count()).toBe(0);
+    expect(await row(page, callum).getByTestId("acwr-badge").getAttribute("data-kind")).toBe("spike");
+    await page.evaluate(() => window.scrollTo(0, 0));
+    await screenshot(page, "planner-spike-after");
+  });
+
+  it("drags with the keyboard, and announces the drop's effect", async () => {
+    const first = plan.groups[0].athleteIds[0];
+    const handle = template(page, "acceleration").locator("button").first();
+    await handle.focus();
+    await page.keyboard.press("Space");
+    await page.getByTestId("drag-hint").waitFor(); // the sensor listens for arrows once the drag has started
+    await page.keyboard.press("ArrowDown"); // from the shelf, the first press lands on the first athlete's first day
+    await page.keyboard.press("ArrowRight");
+    await page.keyboard.press("ArrowRight");
+    await page.waitForTimeout(100);
+    const live = await page.locator('[id^="DndLiveRegion"]').textContent();
+    expect(live).toMatch(/Dropping makes/);
+    await shotDuringDrag(page, "planner-keyboard-drag");
+    await page.keyboard.press("Space");
+    await cards(page, first, day(2)).first().waitFor();
+    await settled(page);
+    expect(await cards(page, first, day(2)).first().textContent()).toMatch(/Block starts|Crouch/);
+  });
+
+  it("opens a card in the editor, saves a new start time, and says when someone else changed it (409)", async () => {
+    const maya = ids("Maya Okafor");
+    await cards(page, maya, day(3)).first().locator("button").first().click();
+    await page.getByTestId("session-editor").waitFor();
+    await screenshot(page, "planner-session-editor");
+    await page.locator("#s-start").fill("09:15");
+    await page.getByTestId("save-session").click();
+    await page.getByTestId("session-editor").waitFor({ state: "hidden" });
+    await settled(page);
+    expect(await cards(page, maya, day(3)).first().textContent()).toMatch(/09:15/);
+
+    // Another coach moves the same session; this page still holds the old version.
+    const id = Number(await cards(page, maya, day(3)).first().getAttribute("data-session-id"));
+    const other = await apiSession(app, headCoach.email);
+    const current = (await (await other.fetch(`/api/sessions/${id}`)).json()) as { session: { version: number } };
+    const res = await other.fetch(`/api/sessions/${id}`, { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify({ version: current.session.version, startTime: "07:00" }) });
+    expect(res.status).toBe(200);
+    await drag(page, cards(page, maya, day(3)).first().locator("button").first(), cell(page, maya, day(4)));
+    await page.locator('[data-testid="plan-notice"][data-tone="refused"]').waitFor();
+    expect(await page.getByTestId("plan-notice").textContent()).toMatch(/someone else changed/);
+    await settled(page);
+    expect(await cards(page, maya, day(4)).count()).toBe(0);
+    expect(await cards(page, maya, day(3)).first().textContent()).toMatch(/07:00/);
+  });
+
+  it("edits a template with a live load preview", async () => {
+    await page.getByTestId("new-template").click();
+    await page.getByTestId("template-editor").waitFor();
+    await page.getByLabel("Title").fill("Flying 20s");
+    await page.getByLabel("Distance (m)").fill("20");
+    await page.getByTestId("template-preview").waitFor();
+    expect(await page.getByTestId("preview-hsr").textContent()).toMatch(/\d+ m/);
+    await screenshot(page, "planner-template-editor");
+    await page.getByTestId("save-template").click();
+    await page.getByTestId("template-editor").waitFor({ state: "hidden" });
+    await page.getByTestId("shelf-search").fill("flying 20");
+    expect(await page.getByTestId("template-card").count()).toBe(1);
+    await page.getByTestId("shelf-search").fill("");
+  });
+
+  it("does not let an athlete drag: one read-only row, and the API refuses writes", async () => {
+    const p = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+    await signIn(p, app, athlete.email!);
+    await p.goto(`${app.url}/plan?week=${thisWeek}`);
+    await p.getByTestId("plan-grid").waitFor();
+    expect(await p.getByTestId("athlete-row").count()).toBe(1);
+    expect(await p.getByTestId("block-shelf").count()).toBe(0);
+    await p.getByTestId("read-only").waitFor();
+    const card = p.getByTestId("session-card").first();
+    await card.waitFor();
+    expect(await card.locator("button").first().getAttribute("aria-disabled")).toBe("true");
+    const before = await p.getByTestId("session-card").evaluateAll((els) => els.map((e) => `${e.getAttribute("data-session-id")}@${e.closest("td")?.getAttribute("data-date")}`));
+    const target = p.locator('[data-testid="day-cell"]').last();
+    await drag(p, card.locator("button").first(), target);
+    await p.waitForTimeout(300);
+    const after = await p.getByTestId("session-card").evaluateAll((els) => els.map((e) => `${e.getAttribute("data-session-id")}@${e.closest("td")?.getAttribute("data-date")}`));
+    expect(after).toEqual(before);
+    await screenshot(p, "planner-athlete");
+    const api = await apiSession(app, athlete.email!);
+    const id = Number(await card.getAttribute("data-session-id"));
+    const res = await api.fetch(`/api/sessions/${id}`, { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify({ version: 1, date: thisWeek }) });
+    expect(res.status).toBe(403);
+    await p.close();
+  });
+});
