@@ -62,7 +62,7 @@ describe("getSquadLoadInputs", () => {
     } finally {
       opts.logging = before;
     }
-    expect(count).toBe(4);
+    expect(count).toBe(3);
   });
 });
 
