@@ -103,8 +103,11 @@ export function acwrInto(
 
 export interface AcwrOptions {
   seed?: EwmaSeed;
-  /** Index of the first day with data on record; history counts from here (default 0). */
-  firstDataIndex?: number;
+  /**
+   * Index of the first day with data on record; history counts from here (default 0). May be negative when
+   * the data began before the series; null when there is no data at all (everything provisional).
+   */
+  firstDataIndex?: number | null;
   minHistoryDays?: number;
 }
 
@@ -117,12 +120,13 @@ export interface AcwrSeries {
   provisional: boolean[];
 }
 
-export function isProvisional(i: number, firstDataIndex: number, minHistoryDays = ACWR_MIN_HISTORY_DAYS): boolean {
-  return firstDataIndex < 0 || i - firstDataIndex + 1 < minHistoryDays;
+/** Fewer than minHistoryDays of history behind day i; firstDataIndex null = no data on record. */
+export function isProvisional(i: number, firstDataIndex: number | null, minHistoryDays = ACWR_MIN_HISTORY_DAYS): boolean {
+  return firstDataIndex === null || i - firstDataIndex + 1 < minHistoryDays;
 }
 
 /** Fills out[i] with 1 where day i's ratio is provisional. */
-export function markProvisional(out: Uint8Array, firstDataIndex: number, minHistoryDays = ACWR_MIN_HISTORY_DAYS): void {
+export function markProvisional(out: Uint8Array, firstDataIndex: number | null, minHistoryDays = ACWR_MIN_HISTORY_DAYS): void {
   for (let i = 0; i < out.length; i++) out[i] = isProvisional(i, firstDataIndex, minHistoryDays) ? 1 : 0;
 }
 
@@ -130,7 +134,7 @@ export function acwrSeries(values: ArrayLike<number>, method: AcwrMethod, option
   const n = values.length;
   const cols = allocAcwrColumns(n);
   acwrInto(values, method, cols, options.seed ?? "first");
-  const first = options.firstDataIndex ?? 0;
+  const first = options.firstDataIndex === undefined ? 0 : options.firstDataIndex;
   const minDays = options.minHistoryDays ?? ACWR_MIN_HISTORY_DAYS;
   const ratio: (number | null)[] = new Array(n);
   const provisional: boolean[] = new Array(n);

@@ -74,8 +74,8 @@ export interface DailyColumns {
   values: Record<Metric, Float64Array>;
   logged: Uint8Array;
   missing: Uint8Array;
-  /** Index of the first day holding any session on record (not cancelled, or logged); -1 when none. */
-  firstDataIndex: number;
+  /** Index of the first day holding any session on record (not cancelled, or logged); null when none. */
+  firstDataIndex: number | null;
 }
 
 /** One Float64Array per metric (METRICS order), all views of one buffer (a zeroed `into` is used when given). */
@@ -125,13 +125,13 @@ export function buildDailyColumns(input: ColumnsInput): DailyColumns {
   const logged = input.scratch ? input.scratch.u8.subarray(0, length) : new Uint8Array(length);
   const missing = input.scratch ? input.scratch.u8.subarray(length, 2 * length) : new Uint8Array(length);
   const acc = new Float64Array(ACC_SIZE);
-  let firstDataIndex = -1;
+  let firstDataIndex: number | null = null;
   for (let k = 0; k < sessions.length; k++) {
     const i = days[k] - startDay;
     if (i < 0 || i >= length) continue;
     const session = sessions[k];
     const log = logFor[k];
-    if ((log || session.status !== "cancelled") && (firstDataIndex < 0 || i < firstDataIndex)) firstDataIndex = i;
+    if ((log || session.status !== "cancelled") && (firstDataIndex === null || i < firstDataIndex)) firstDataIndex = i;
     const use = sessionUse(session.status, log !== undefined, days[k], todayDay, view);
     if (use === "none") continue;
     if (use === "missing") {
@@ -197,7 +197,8 @@ export interface DailySeries {
   logged: Uint8Array;
   /** 1 where a published session before today has no log: unknown, not a rest day (its value is 0). */
   missing: Uint8Array;
-  firstDataIndex: number;
+  /** First day with a session on record (for acwrSeries' firstDataIndex); null when none. */
+  firstDataIndex: number | null;
 }
 
 /** Daily load per metric from `from` to `to` inclusive; rest days are 0. */

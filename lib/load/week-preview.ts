@@ -61,8 +61,13 @@ export function computeWeekPreview(input: WeekPreviewInput): { week: WeekSummary
   }
   const missing = new Uint8Array(length);
   missing.set(week.missing, offset);
-  let firstData = input.firstDataDate ? dayIndex(input.firstDataDate) - historyStart : input.historyDates.length > 0 ? 0 : -1;
-  if (week.firstDataIndex >= 0 && (firstData < 0 || offset + week.firstDataIndex < firstData)) {
+  // Index of the first day with data (negative when it predates the history sent); null = none at all.
+  let firstData: number | null = input.firstDataDate
+    ? dayIndex(input.firstDataDate) - historyStart
+    : input.historyDates.length > 0
+      ? 0
+      : null;
+  if (week.firstDataIndex !== null && (firstData === null || offset + week.firstDataIndex < firstData)) {
     firstData = offset + week.firstDataIndex;
   }
   const acwr = allocAcwrColumns(length);
@@ -139,7 +144,7 @@ export function buildWeekPreviewContext(input: WeekPreviewContextInput): WeekPre
   for (let i = from; i < cols.length; i++) historyDates.push(dateFromDayIndex(cols.startDay + i));
   const historyValues = {} as Record<Metric, number[]>;
   for (const m of METRICS) historyValues[m] = Array.from(cols.values[m].subarray(from));
-  let firstDataDay = cols.firstDataIndex >= 0 ? cols.startDay + cols.firstDataIndex : Number.POSITIVE_INFINITY;
+  let firstDataDay = cols.firstDataIndex !== null ? cols.startDay + cols.firstDataIndex : Number.POSITIVE_INFINITY;
   input.sessions.forEach((s, k) => {
     const d = dayIndex(s.date);
     if (d >= ws && d < firstDataDay && (logFor[k] !== undefined || s.status !== "cancelled")) firstDataDay = d;

@@ -162,3 +162,35 @@ describe("computeSquadWeek", () => {
     expect(rows[2].week.ratioProvisional).toBe(true);
   });
 });
+
+describe("computeWeekPreview with a shortened history", () => {
+  it("a first-data date before the history sent still counts as long history (not provisional)", () => {
+    const ctx = buildWeekPreviewContext({ profile: ath.profile, settings: SETTINGS, sessions: ath.sessions, logs: ath.logs, weekStart: WEEK, today: TODAY, historyDays: 84 });
+    expect(ctx.historyDates).toHaveLength(84);
+    expect(ctx.firstDataDate! < ctx.historyDates[0]).toBe(true);
+    const weekSessions = ath.sessions.filter((s) => s.date >= WEEK && s.date <= addDays(WEEK, 6));
+    const ids = new Set(weekSessions.map((s) => s.id));
+    const weekLogs = ath.logs.filter((l) => ids.has(l.sessionId));
+    const preview = computeWeekPreview({ ...ctx, weekSessions, weekLogs, profile: ath.profile, settings: SETTINGS, weekStart: WEEK, today: TODAY });
+    const full = computeAthleteLoad({ profile: ath.profile, settings: SETTINGS, sessions: ath.sessions, logs: ath.logs, from: WEEK, to: WEEK, today: TODAY, view: "projected", weekStart: WEEK });
+    expect(preview.week.ratioProvisional).toBe(false);
+    // 84 days of history leave (27/29)^84 ≈ 0.25% of the chronic seed error (methods.md §2): close, not equal.
+    expect(preview.week.peakRatio!).toBeCloseTo(full.week.peakRatio!, 2);
+  });
+
+  it("no history and no data: everything provisional, no ratio", () => {
+    const preview = computeWeekPreview({
+      historyDates: [],
+      historyValues: { hsrM: [], nearMaxM: [], sprintM: [], sprintSteps: [], contacts: [], srpe: [] },
+      weekSessions: [],
+      weekLogs: [],
+      profile: PROFILE,
+      settings: SETTINGS,
+      weekStart: WEEK,
+      today: TODAY,
+    });
+    expect(preview.week.peakRatio).toBeNull();
+    expect(preview.week.ratioProvisional).toBe(true);
+    expect(preview.flags).toEqual([]);
+  });
+});
