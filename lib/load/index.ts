@@ -11,17 +11,20 @@
  * - Sprint metres = acceleration + max-velocity + speed-endurance metres (tempo is not sprinting);
  *   sprint steps = sprint metres ÷ step length (an estimate).
  * - sRPE = RPE × minutes (Foster 2001). Logs: completion yes/partly/no = 1/0.5/0 unless per-block reps are
- *   logged; "no" is a logged 0. A published session before today without a log is "missing", not a rest day.
+ *   logged; "no" is a logged 0; a null RPE or minutes falls back to the plan × completion. A published session
+ *   before today without a log is "missing", not a rest day (its day counts 0 and is marked).
  * - "projected" = logged work + the plan from today on (drafts included, cancelled excluded).
  * - ACWR: EWMA (Williams 2017, λ = 2/(N+1), N = 7 and 28) seeded with the first day's load (pandas
  *   ewm(adjust=False)); rolling coupled = mean of 7 ÷ mean of 28 days (Hulin 2016); rolling uncoupled =
  *   mean of 7 ÷ mean of days t−27…t−7 (Lolli 2019, Gabbett 2019). History runs from the athlete's first session
- *   (at least 56 days before the range). Ratios with < 28 days of history are provisional; chronic 0 → null.
+ *   (at least 56 days before the range; days without sessions are 0). Ratios with < 28 days since the first
+ *   session on record are provisional (a provisional spike is a caution, not an alert); chronic 0 → null.
  * - Monotony = mean ÷ SD with the population SD by default (Foster 1998); SD 0 → null.
  * - Boundaries: ACWR ≥ spike (1.5) is a spike, [rising 1.3, spike) climbing, < low (0.8) underloaded, judged on
- *   the week's peak ratio (Gabbett 2016 zones); weekly change strictly > 15% is a jump (so exactly 15% passes);
- *   contacts strictly above the NSCA band's top are an overload; high-intensity sessions less than 48 h apart
- *   are a short recovery (exactly 48 h passes). Threshold comparisons allow 1e-9 of float noise.
+ *   the week's peak ratio (Gabbett 2016 zones); weekly change strictly > 15% is a jump (so exactly 15% passes),
+ *   checked on settings.jumpMetrics (default sRPE, HSR, near-max, contacts); contacts strictly above the NSCA
+ *   band's top are an overload; high-intensity sessions (max-velocity block or high plyometrics) less than 48 h
+ *   apart by wall clock are a short recovery (exactly 48 h passes). Comparisons allow 1e-9 of float noise.
  * - Flags are monitoring aids, not diagnoses: show LOAD_CAUTION with them.
  */
 export * from "./types";
