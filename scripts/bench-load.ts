@@ -210,11 +210,11 @@ function main(): void {
   console.log(`computeWeekPreview, one athlete, ${ctx.historyDates.length} history days (drag preview): ${(preview.wall * 1000).toFixed(1)} µs wall (target < 1 ms: ${preview.wall < 1 ? "met" : "NOT met"})`);
 
   // ---------------------------------------------------------------------------------------------
-  // HOOK (another engineer): HTTP measurement of the squad-week route handler goes here.
-  // Start the app on a random free port, time GET of the squad-week endpoint for an equivalent squad,
-  // print its median next to `engineMs`, and stop the server by its PID.
+  // HOOK: HTTP measurement of the squad-week route handler. It lives in scripts/bench-load-http.ts (owned by
+  // another engineer), which `npm run bench:load` runs right after this script; compare its timings with
+  // `engine` above. Anything that must share this process's squad data can be added here.
   // ---------------------------------------------------------------------------------------------
-  console.log("\nHTTP squad-week handler: not measured here (hook at the end of main() in scripts/bench-load.ts).");
+  console.log("\nHTTP squad-week handler: measured next by scripts/bench-load-http.ts (npm run bench:load runs both).");
 }
 
 main();
