@@ -14,6 +14,7 @@ export const NAV: NavItem[] = [
   { href: "/alerts", label: "Alerts", can: "alerts:view", scope: "team" },
   { href: "/squad", label: "Squad", can: "athletes:view", scope: "team" },
   { href: "/me", label: "My training", can: "log:write", scope: "own" },
+  { href: "/load", label: "My load", can: "load:view", scope: "own" },
   { href: "/members", label: "Members", can: "members:manage", scope: "team" },
   { href: "/settings", label: "Thresholds", can: "settings:edit", scope: "team" },
 ];

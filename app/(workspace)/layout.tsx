@@ -39,7 +39,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
           </div>
         </div>
       </aside>
-      <main className="mx-auto w-full max-w-7xl px-4 py-6 md:px-8 md:py-8">{children}</main>
+      <main className="mx-auto w-full min-w-0 max-w-7xl px-4 py-6 md:px-8 md:py-8">{children}</main>
     </div>
   );
 }

@@ -32,7 +32,8 @@ describe("permission table", () => {
 describe("navigation", () => {
   it("never shows an athlete a squad screen", () => {
     const hrefs = navFor("athlete").map((n) => n.href);
-    expect(hrefs).toEqual(["/home", "/me"]);
+    expect(hrefs).toEqual(["/home", "/me", "/load"]);
+    expect(navFor("athlete").find((n) => n.href === "/load")?.label).toBe("My load");
   });
 
   it("shows the head coach members and thresholds, not the athlete's own screen", () => {
@@ -40,6 +41,7 @@ describe("navigation", () => {
     expect(hrefs).toContain("/members");
     expect(hrefs).toContain("/settings");
     expect(hrefs).not.toContain("/me");
+    expect(navFor("head_coach").filter((n) => n.href === "/load").map((n) => n.label)).toEqual(["Squad load"]);
   });
 
   it("shows the physio load and alerts but not members", () => {
