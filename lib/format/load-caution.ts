@@ -1,3 +1,2 @@
-/** Shown next to every load flag (UI and e-mail): flags support people, they do not decide for them. */
-export const LOAD_FLAG_CAUTION =
-  "Load flags are monitoring aids, not diagnoses. Decide with the athlete's medical staff and follow local rules.";
+/** Shown next to every load flag (UI and e-mail): one wording, kept with the flags themselves. */
+export { LOAD_CAUTION as LOAD_FLAG_CAUTION } from "@/lib/load/flag-display";

@@ -2,8 +2,8 @@ import type { FlagKind, FlagLevel } from "./flags";
 
 /** Shown wherever flags are shown. */
 export const LOAD_CAUTION =
-  "Load flags are monitoring aids, not diagnoses. They describe training numbers only; decisions about an " +
-  "athlete's health, injury or availability belong to the athlete's medical staff.";
+  "Load flags are monitoring aids, not diagnoses. They describe training numbers only; decide with the athlete's " +
+  "medical staff and follow your local rules.";
 
 export type FlagColour = "rose" | "amber" | "sky" | "orange" | "violet" | "teal";
 

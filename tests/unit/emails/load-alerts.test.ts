@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { alertDigestEmail } from "@/emails/alert-digest";
 import { loadAlertEmail } from "@/emails/load-alert";
+import { LOAD_CAUTION } from "@/lib/load/flag-display";
 
 // Product safety rule: every mail that shows a load flag carries this caution (html and text).
-const CAUTION =
-  "Load flags are monitoring aids, not diagnoses. Decide with the athlete's medical staff and follow local rules.";
+const CAUTION = LOAD_CAUTION;
 const CAUTION_HTML = CAUTION.replace("'", "&#39;");
 
 const base = {
