@@ -2,7 +2,6 @@
 
 import { clsx } from "clsx";
 import { memo } from "react";
-import { FLAG_DISPLAY, flagClasses } from "@/lib/load/flag-display";
 import type { Flag } from "@/lib/load/flags";
 import { formatDayShort } from "@/lib/format/dates";
 import type { RowPreview } from "@/lib/plan/preview";
@@ -21,6 +20,8 @@ type Props = {
   actions: CardActions;
 };
 
+const NO_FLAGS: Flag[] = [];
+
 function flagsBySession(flags: readonly Flag[]): Map<string, Flag[]> {
   const out = new Map<string, Flag[]>();
   for (const f of flags) if (f.sessionId) out.set(f.sessionId, [...(out.get(f.sessionId) ?? []), f]);
@@ -30,13 +31,12 @@ function flagsBySession(flags: readonly Flag[]): Map<string, Flag[]> {
 /** One athlete: name and week numbers, then a cell per day holding that day's session cards. */
 export const AthleteRow = memo(function AthleteRow({ athlete, days, today, canEdit, preview, copyArmedId, actions }: Props) {
   const bySession = flagsBySession(athlete.load.flags);
-  const warnings = preview?.warnings ?? [];
   return (
     <>
       <tr data-testid="athlete-row" data-athlete-id={athlete.id} className={clsx("border-t border-ink-100", preview && "bg-lane-50/30")}>
         <th scope="row" className="sticky left-0 z-10 w-56 min-w-56 bg-paper-raised px-3 py-2 text-left align-top font-normal">
           <span className="block truncate text-sm font-medium text-ink-900">{athlete.name}</span>
-          <RowLoadSummary load={athlete.load} preview={preview?.after ?? null} />
+          <RowLoadSummary load={athlete.load} preview={preview?.after ?? null} raised={preview?.warnings ?? NO_FLAGS} />
         </th>
         {days.map((date) => (
           <DropCell
@@ -50,26 +50,12 @@ export const AthleteRow = memo(function AthleteRow({ athlete, days, today, canEd
               {athlete.sessions
                 .filter((s) => s.date === date)
                 .map((s) => (
-                  <SessionCard key={s.id} session={s} athleteName={athlete.name} canEdit={canEdit} copyArmed={copyArmedId === s.id} flags={bySession.get(String(s.id)) ?? []} actions={actions} />
+                  <SessionCard key={s.id} session={s} athleteName={athlete.name} canEdit={canEdit} copyArmed={copyArmedId === s.id} flags={bySession.get(String(s.id)) ?? NO_FLAGS} actions={actions} />
                 ))}
             </div>
           </DropCell>
         ))}
       </tr>
-      {warnings.length > 0 ? (
-        <tr data-testid="drop-warnings" data-athlete-id={athlete.id} className="bg-lane-50/30">
-          <td colSpan={days.length + 1} className="px-3 pb-2">
-            <ul className="space-y-1" aria-live="polite">
-              {warnings.map((f) => (
-                <li key={`${f.kind}${f.date}${f.metric ?? ""}`} data-testid="drop-warning" data-kind={f.kind} className={clsx("flex gap-2 rounded-md border px-2 py-1 text-xs", flagClasses(f.kind).badge)}>
-                  <span className="font-semibold">If dropped: {FLAG_DISPLAY[f.kind].label}.</span>
-                  <span>{f.reason} The drop is allowed; check it with the athlete&apos;s medical staff if in doubt.</span>
-                </li>
-              ))}
-            </ul>
-          </td>
-        </tr>
-      ) : null}
     </>
   );
 });

@@ -1,7 +1,7 @@
 "use client";
 
 import { clsx } from "clsx";
-import { useMemo, useState } from "react";
+import { memo, useMemo, useState } from "react";
 import { BLOCK_KIND_LABEL } from "@/lib/format/block-summary";
 import { BLOCK_KINDS, type BlockKind } from "@/lib/load/types";
 import type { PlanTemplate } from "@/lib/plan/types";
@@ -10,7 +10,7 @@ import { Input } from "@/components/ui/field";
 import { TemplateCard } from "./template-card";
 
 /** The team's block templates: search, filter by kind, drag onto the grid, or open one in the editor. */
-export function BlockShelf({ templates, canEdit, onEdit, onNew }: { templates: PlanTemplate[]; canEdit: boolean; onEdit: (t: PlanTemplate) => void; onNew: () => void }) {
+export const BlockShelf = memo(function BlockShelf({ templates, canEdit, onEdit, onNew }: { templates: PlanTemplate[]; canEdit: boolean; onEdit: (t: PlanTemplate) => void; onNew: () => void }) {
   const [query, setQuery] = useState("");
   const [kind, setKind] = useState<BlockKind | "all">("all");
   const present = useMemo(() => BLOCK_KINDS.filter((k) => templates.some((t) => t.kind === k)), [templates]);
@@ -52,4 +52,4 @@ export function BlockShelf({ templates, canEdit, onEdit, onNew }: { templates: P
       {canEdit ? <p className="text-2xs leading-4 text-ink-400">Drag a block onto a day. On a group&apos;s row it goes to every athlete in the group.</p> : null}
     </aside>
   );
-}
+});

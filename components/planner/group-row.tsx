@@ -41,7 +41,7 @@ export const GroupRow = memo(function GroupRow({ group, days, today, collapsed, 
             hint={`All ${count} athletes`}
             className="h-8"
           >
-            {templateDrag && droppable ? <span className="pointer-events-none block px-1 py-1.5 text-center text-2xs text-ink-400">whole group</span> : null}
+            {templateDrag && droppable ? <span aria-hidden className="pointer-events-none absolute inset-1 rounded border border-dashed border-ink-200" /> : null}
           </DropCell>
         ) : (
           <td key={date} className="border-l border-ink-100" />

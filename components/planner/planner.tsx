@@ -16,7 +16,7 @@ import type { PlanSession, PlanTemplate, PlanWeek } from "@/lib/plan/types";
 import { teamWeekStart } from "@/lib/plan/week";
 import { fetchWeek } from "./api";
 import { BlockShelf } from "./block-shelf";
-import { announcements, gridKeyboardCoordinates, plannerCollision, SCREEN_READER_INSTRUCTIONS, type DragData, type DropData, type GridLayout } from "./dnd";
+import { announcements, dragId, dropId, gridKeyboardCoordinates, plannerCollision, SCREEN_READER_INSTRUCTIONS, type DragData, type DropData, type GridLayout } from "./dnd";
 import { describeChange, targetLabel } from "./describe";
 import { groupKey } from "./group-row";
 import { SessionCard, type CardActions } from "./session-card";
@@ -25,9 +25,12 @@ import { TemplateCard } from "./template-card";
 import { TemplateEditor } from "./template-editor";
 import { usePlanActions } from "./use-plan-actions";
 import { WeekGrid } from "./week-grid";
+import { DropPreviewPanel } from "./drop-preview-panel";
+import { NoticeToast } from "./notice-toast";
 import { WeekHeader } from "./week-header";
 
-type PerfLog = { previews: number[] };
+/** Set by scripts/bench-planner.ts (addInitScript); the page records its own timings into it. */
+type PerfLog = { previews: number[]; compute?: number[]; saved?: number[]; confirmed?: number[] };
 declare global {
   interface Window {
     __plannerPerf?: PerfLog;
@@ -35,6 +38,9 @@ declare global {
 }
 
 type Hover = { source: DragSource; target: DropTarget; rows: Map<number, RowPreview>; refusal: string | null; text: string };
+
+// Only the page scrolls while dragging (vertically); watching the grid's own scroll box costs frames.
+const AUTO_SCROLL = { threshold: { x: 0, y: 0.12 }, canScroll: (el: Element) => el === document.scrollingElement };
 
 const NO_PREVIEWS: ReadonlyMap<number, RowPreview> = new Map();
 
@@ -62,6 +68,9 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
   const [editing, setEditing] = useState<number | null>(null);
   const [templateEditor, setTemplateEditor] = useState<{ open: boolean; template: PlanTemplate | null }>({ open: false, template: null });
   const perfStart = useRef<number | null>(null);
+  const [ready, setReady] = useState(false);
+  const dropStart = useRef<number | null>(null);
+  useEffect(() => setReady(true), []);
 
   const go = useCallback(
     (date: string) => {
@@ -134,17 +143,27 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
     useSensor(KeyboardSensor, { coordinateGetter: gridKeyboardCoordinates(layout, startTarget) }),
   );
 
+  // dnd-kit asks twice per new target (the grid's onDragOver and the screen-reader announcement): compute once.
+  const lastPreview = useRef<{ week: PlanWeek; key: string; outcome: ReturnType<typeof resolveDrop>; rows: RowPreview[] } | null>(null);
+  const previewFor = useCallback((w: PlanWeek, source: DragSource, target: DropTarget, copy: boolean) => {
+    const key = `${dragId(source)}>${dropId(target)}:${copy}`;
+    if (lastPreview.current?.week === w && lastPreview.current.key === key) return lastPreview.current;
+    const outcome = resolveDrop({ week: w, source, target, copy });
+    const rows = outcome?.ok ? previewChange(w, outcome.change) : [];
+    lastPreview.current = { week: w, key, outcome, rows };
+    return lastPreview.current;
+  }, []);
+
   const isCopy = useCallback((src: DragSource) => altRef.current || (src.type === "session" && copyArmedId === src.sessionId), [copyArmedId]);
 
   const describeOver = useCallback(
     (source: DragSource, target: DropTarget): string => {
       const w = weekRef.current;
       if (!w) return "";
-      const outcome = resolveDrop({ week: w, source, target, copy: isCopy(source) });
+      const { outcome, rows } = previewFor(w, source, target, isCopy(source));
       const where = targetLabel(w, target);
       if (!outcome) return `Over ${where}, where it already is.`;
       if (!outcome.ok) return `Over ${where}. Cannot drop here: ${outcome.reason}`;
-      const rows = previewChange(w, outcome.change);
       const parts = rows.map((r) => {
         const name = w.athletes.find((a) => a.id === r.athleteId)?.name ?? "";
         const warn = r.warnings.map((f) => `${FLAG_DISPLAY[f.kind].label}: ${f.reason}`).join(" ");
@@ -152,7 +171,7 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
       });
       return `Over ${where}. Dropping makes ${describeChange(w, outcome.change)}. ${parts.join(" ")}`;
     },
-    [isCopy],
+    [isCopy, previewFor],
   );
   const accessibility = useMemo(() => ({ announcements: announcements(describeOver), screenReaderInstructions: { draggable: SCREEN_READER_INSTRUCTIONS } }), [describeOver]);
 
@@ -173,12 +192,12 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
         return;
       }
       perfStart.current = performance.now();
-      const outcome = resolveDrop({ week: w, source: data.source, target, copy: isCopy(data.source) });
-      const rows = new Map<number, RowPreview>();
-      if (outcome?.ok) for (const r of previewChange(w, outcome.change)) rows.set(r.athleteId, r);
+      const { outcome, rows: list } = previewFor(w, data.source, target, isCopy(data.source));
+      window.__plannerPerf?.compute?.push(performance.now() - perfStart.current);
+      const rows = new Map<number, RowPreview>(list.map((r) => [r.athleteId, r]));
       setHover({ source: data.source, target, rows, refusal: outcome && !outcome.ok ? outcome.reason : null, text: outcome?.ok ? describeChange(w, outcome.change) : "" });
     },
-    [isCopy],
+    [isCopy, previewFor],
   );
 
   useLayoutEffect(() => {
@@ -187,6 +206,14 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
     perfStart.current = null;
     window.__plannerPerf?.previews.push(ms);
   }, [hover]);
+
+  // Benchmark only: from a drop to the server's numbers on screen (the refetch after the save has landed).
+  useEffect(() => {
+    if (isValidating || dropStart.current === null || act.saving > 0) return;
+    const t0 = dropStart.current;
+    dropStart.current = null;
+    requestAnimationFrame(() => window.__plannerPerf?.confirmed?.push(performance.now() - t0));
+  }, [isValidating, act.saving]);
 
   const endDrag = useCallback(() => {
     activeRef.current = null;
@@ -209,7 +236,9 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
         act.say("refused", outcome.reason);
         return;
       }
-      void act.saveChange(outcome.change);
+      const t0 = performance.now();
+      dropStart.current = t0;
+      void act.saveChange(outcome.change).then(() => requestAnimationFrame(() => window.__plannerPerf?.saved?.push(performance.now() - t0)));
     },
     [act, copyArmedId, endDrag, isCopy],
   );
@@ -238,6 +267,8 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
     [deleteSession, say],
   );
 
+  const editTemplate = useCallback((t: PlanTemplate) => setTemplateEditor({ open: true, template: t }), []);
+  const newTemplate = useCallback(() => setTemplateEditor({ open: true, template: null }), []);
   const profiles = useMemo(() => shown?.athletes.map((a) => a.profile) ?? [], [shown]);
   const typical = useMemo(() => typicalProfile(profiles), [profiles]);
   const editingSession = shown && editing !== null ? findSession(shown, editing) : null;
@@ -249,41 +280,30 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
   void restrictionsFor; // Seam: physio restrictions are checked here once that feature exists (none today).
 
   return (
-    <div data-testid="planner" data-team-id={teamId} data-save-state={act.saving > 0 ? "saving" : isValidating ? "confirming" : "idle"} data-week={weekStart}>
+    <div data-testid="planner" data-team-id={teamId} data-save-state={act.saving > 0 ? "saving" : isValidating ? "confirming" : "idle"} data-week={weekStart} data-ready={ready || undefined}>
       <WeekHeader week={shown} weekStart={weekStart} onGo={go} onToday={() => go(shown?.today ?? weekStart)} undo={act.undoStack.at(-1) ?? null} onUndo={() => void act.undo()} onTool={(t) => void act.runTool(t)} busy={act.saving > 0} />
-      <div aria-live="polite" className="min-h-9">
-        {act.notice ? (
-          <p
-            key={act.notice.at}
-            data-testid="plan-notice"
-            data-tone={act.notice.tone}
-            className={clsx(
-              "mb-3 rounded-lg px-3 py-2 text-sm",
-              act.notice.tone === "refused" ? "bg-flag-climb-soft text-flag-climb" : act.notice.tone === "saved" ? "bg-flag-steady-soft text-flag-steady" : "bg-lane-50 text-lane-800",
-            )}
-          >
-            {act.notice.text}
-          </p>
-        ) : null}
-      </div>
+      {active ? null : <NoticeToast notice={act.notice} />}
       {error && !shown ? <p className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">The plan could not be loaded: {error instanceof Error ? error.message : "unknown error"}.</p> : null}
       {!shown && isLoading ? <div className="h-96 animate-pulse rounded-card bg-paper-sunk" data-testid="plan-loading" /> : null}
       {shown ? (
-        <DndContext sensors={sensors} collisionDetection={plannerCollision} accessibility={accessibility} onDragStart={onDragStart} onDragOver={onDragOver} onDragEnd={onDragEnd} onDragCancel={endDrag} autoScroll={{ threshold: { x: 0, y: 0.12 } }}>
+        <DndContext sensors={sensors} collisionDetection={plannerCollision} accessibility={accessibility} onDragStart={onDragStart} onDragOver={onDragOver} onDragEnd={onDragEnd} onDragCancel={endDrag} autoScroll={AUTO_SCROLL}>
           {!shown.canEdit ? (
             <p className="mb-3 rounded-lg bg-paper-sunk px-3 py-2 text-xs text-ink-600" data-testid="read-only">
               {shown.scope === "own" ? "Your published sessions this week. Coaches plan them; open a card to see what it asks." : "Read-only: coaches and the head coach change the plan. Open a card to see its blocks."}
             </p>
           ) : null}
           {hover && (hover.refusal || hover.text) ? (
-            <p data-testid="drag-hint" className={clsx("mb-2 text-xs", hover.refusal ? "text-flag-climb" : "text-ink-600")}>
-              {hover.refusal ?? `Drop to make: ${hover.text}.`} {copying ? <strong className="text-lane-700">Copy</strong> : null}
-            </p>
-          ) : active ? (
-            <p data-testid="drag-hint" className="mb-2 text-xs text-ink-500">
-              {active.source.type === "session" ? (copying ? "Copying: drop on a day." : "Moving: drop on a day. Hold Alt to copy.") : "Drop on an athlete's day, or on a group's row for the whole group."}
-            </p>
+            <DropPreviewPanel week={shown} text={hover.text} refusal={hover.refusal} rows={[...hover.rows.values()]} copying={copying} />
           ) : null}
+          <p data-testid="drag-hint" aria-hidden={!active} className={clsx("mb-2 h-4 text-xs text-ink-500", !active && "invisible")}>
+            {active
+              ? active.source.type === "session"
+                ? copying
+                  ? "Copying: drop on a day."
+                  : "Moving: drop on a day. Hold Alt to copy."
+                : "Drop on an athlete's day, or on a group's row for the whole group."
+              : "·"}
+          </p>
           <div className={clsx("grid gap-4", shown.canEdit ? "lg:grid-cols-[minmax(0,1fr)_15rem]" : "")}>
             <div className="min-w-0 space-y-3">
               {shown.athletes.length === 0 ? (
@@ -296,7 +316,7 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
                 Totals are for the week as planned (logged work up to today, the plan after). HSR and near-max metres and sprint steps are model estimates from each athlete&apos;s tested max velocity.
               </p>
             </div>
-            {shown.canEdit ? <BlockShelf templates={shown.templates} canEdit onEdit={(t) => setTemplateEditor({ open: true, template: t })} onNew={() => setTemplateEditor({ open: true, template: null })} /> : null}
+            {shown.canEdit ? <BlockShelf templates={shown.templates} canEdit onEdit={editTemplate} onNew={newTemplate} /> : null}
           </div>
           <DragOverlay dropAnimation={null}>
             {overlaySession ? (

@@ -24,7 +24,8 @@ export function zoneFlag(flags: readonly Flag[]): Flag | null {
 }
 
 /** Week totals and the ACWR badge of a row; while a drop is previewed, "now → would be". */
-export function RowLoadSummary({ load, preview }: { load: RowLoad; preview: RowLoad | null }) {
+export function RowLoadSummary({ load, preview, raised = [] }: { load: RowLoad; preview: RowLoad | null; raised?: readonly Flag[] }) {
+  const isNew = (kind: Flag["kind"]) => raised.some((f) => f.kind === kind);
   const shown = preview ?? load;
   const zone = zoneFlag(shown.flags);
   // One badge per kind; its tooltip carries every reason of that kind.
@@ -62,6 +63,7 @@ export function RowLoadSummary({ load, preview }: { load: RowLoad; preview: RowL
           className={clsx(
             "inline-flex items-center gap-1 rounded-full border px-1.5 py-px text-2xs font-medium",
             zone ? flagClasses(zone.kind).badge : "border-flag-steady/20 bg-flag-steady-soft text-flag-steady",
+            zone && isNew(zone.kind) && "ring-2 ring-offset-1 ring-flag-spike/50",
           )}
         >
           ACWR {ratioText(shown)}
@@ -69,7 +71,7 @@ export function RowLoadSummary({ load, preview }: { load: RowLoad; preview: RowL
           {shown.week.ratioProvisional && shown.week.peakRatio !== null ? <span className="font-normal">· provisional</span> : null}
         </span>
         {[...others].map(([kind, list]) => (
-          <span key={kind} title={list.map((f) => f.reason).join("\n")} data-testid="row-flag" data-kind={kind} className={clsx("rounded-full border px-1.5 py-px text-2xs", flagClasses(kind).badge)}>
+          <span key={kind} title={list.map((f) => f.reason).join("\n")} data-testid="row-flag" data-kind={kind} className={clsx("rounded-full border px-1.5 py-px text-2xs", flagClasses(kind).badge, isNew(kind) && "ring-2 ring-offset-1 ring-flag-spike/50")}>
             {FLAG_DISPLAY[kind].label}
             {list.length > 1 ? ` ×${list.length}` : ""}
             <span className="sr-only">: {list.map((f) => f.reason).join(" ")}</span>

@@ -45,16 +45,14 @@ type Props = { session: PlanSession; athleteName: string; canEdit: boolean; copy
 export const SessionCard = memo(function SessionCard({ session: s, athleteName, canEdit, copyArmed, flags, actions, overlay = false }: Props) {
   const label = sessionLabel(s, athleteName);
   const pending = s.id < 0;
+  const cancelled = s.status === "cancelled";
   const data: DragData = { source: { type: "session", sessionId: s.id }, label };
+  // The drag hook re-renders on every move over the grid; everything below it is memoised on the session.
   const { attributes, listeners, setNodeRef, isDragging } = useDraggable({
     id: overlay ? `overlay:${s.id}` : dragId(data.source),
     data,
-    disabled: overlay || !canEdit || pending || s.status === "cancelled",
+    disabled: overlay || !canEdit || pending || cancelled,
   });
-  const kind = mainBlockKind(s.blocks);
-  const first = s.blocks[0];
-  const more = s.blocks.length - 1;
-  const cancelled = s.status === "cancelled";
   return (
     <div
       data-testid="session-card"
@@ -71,7 +69,6 @@ export const SessionCard = memo(function SessionCard({ session: s, athleteName, 
         overlay && "w-40 rotate-1 shadow-lift",
       )}
     >
-      <span aria-hidden className={clsx("w-1 shrink-0", kind ? KIND_STYLE[kind].bar : "bg-ink-100")} />
       <button
         type="button"
         ref={setNodeRef}
@@ -79,37 +76,62 @@ export const SessionCard = memo(function SessionCard({ session: s, athleteName, 
         {...listeners}
         aria-label={label}
         onClick={() => !overlay && actions.open(s)}
-        className={clsx("min-w-0 flex-1 px-1.5 py-1 text-left", canEdit && !cancelled ? "cursor-grab active:cursor-grabbing" : "cursor-pointer")}
+        className={clsx("flex min-w-0 flex-1 text-left", canEdit && !cancelled ? "cursor-grab active:cursor-grabbing" : "cursor-pointer")}
       >
+        <CardBody session={s} />
+      </button>
+      {flags.length > 0 ? <CardFlags flags={flags} /> : null}
+      {canEdit && !overlay && !pending ? <CardActionsMenu session={s} label={label} actions={actions} /> : null}
+    </div>
+  );
+});
+
+const CardBody = memo(function CardBody({ session: s }: { session: PlanSession }) {
+  const kind = mainBlockKind(s.blocks);
+  const first = s.blocks[0];
+  const more = s.blocks.length - 1;
+  return (
+    <>
+      <span aria-hidden className={clsx("w-1 shrink-0", kind ? KIND_STYLE[kind].bar : "bg-ink-100")} />
+      <span className="block min-w-0 flex-1 px-1.5 py-1">
         <span className="flex items-center gap-1 text-2xs text-ink-500">
           <span className="tabular-nums">{s.startTime}</span>
           <StatusMark status={s.status} />
         </span>
-        <span className={clsx("line-clamp-2 text-xs font-medium leading-4 text-ink-900", cancelled && "line-through")}>{s.title}</span>
+        <span className={clsx("line-clamp-2 text-xs font-medium leading-4 text-ink-900", s.status === "cancelled" && "line-through")}>{s.title}</span>
         {first ? <span className="mt-0.5 line-clamp-2 text-2xs leading-[0.95rem] text-ink-600">{blockSummary(toBlockInput(first))}</span> : null}
         {more > 0 ? <span className="text-2xs text-ink-400">+{more} more</span> : null}
-      </button>
-      {flags.length > 0 ? (
-        <span className="absolute bottom-1 right-1 flex gap-0.5">
-          {flags.map((f) => (
-            <span key={`${f.kind}${f.date}`} title={f.reason} data-testid="card-flag" data-kind={f.kind} className={clsx("h-2 w-2 rounded-full", flagClasses(f.kind).dot)}>
-              <span className="sr-only">{FLAG_DISPLAY[f.kind].label}: {f.reason}</span>
-            </span>
-          ))}
+      </span>
+    </>
+  );
+});
+
+const CardFlags = memo(function CardFlags({ flags }: { flags: Flag[] }) {
+  return (
+    <span className="absolute bottom-1 right-1 flex gap-0.5">
+      {flags.map((f) => (
+        <span key={`${f.kind}${f.date}`} title={f.reason} data-testid="card-flag" data-kind={f.kind} className={clsx("h-2 w-2 rounded-full", flagClasses(f.kind).dot)}>
+          <span className="sr-only">
+            {FLAG_DISPLAY[f.kind].label}: {f.reason}
+          </span>
         </span>
-      ) : null}
-      {canEdit && !overlay && !pending ? (
-        <div className="absolute right-0.5 top-0.5 opacity-0 focus-within:opacity-100 group-hover:opacity-100">
-          <CardMenu
-            label={`More for ${label}`}
-            items={[
-              { label: "Edit", onSelect: () => actions.open(s), testId: "menu-edit" },
-              ...(cancelled ? [] : [{ label: "Copy to another day…", onSelect: () => actions.armCopy(s), testId: "menu-copy" }]),
-              ...(cancelled ? [] : [{ label: s.status === "published" ? "Cancel session" : "Delete", onSelect: () => actions.remove(s), danger: true, testId: "menu-delete" }]),
-            ]}
-          />
-        </div>
-      ) : null}
+      ))}
+    </span>
+  );
+});
+
+const CardActionsMenu = memo(function CardActionsMenu({ session: s, label, actions }: { session: PlanSession; label: string; actions: CardActions }) {
+  const cancelled = s.status === "cancelled";
+  return (
+    <div className="absolute right-0.5 top-0.5 opacity-0 focus-within:opacity-100 group-hover:opacity-100">
+      <CardMenu
+        label={`More for ${label}`}
+        items={[
+          { label: "Edit", onSelect: () => actions.open(s), testId: "menu-edit" },
+          ...(cancelled ? [] : [{ label: "Copy to another day…", onSelect: () => actions.armCopy(s), testId: "menu-copy" }]),
+          ...(cancelled ? [] : [{ label: s.status === "published" ? "Cancel session" : "Delete", onSelect: () => actions.remove(s), danger: true, testId: "menu-delete" }]),
+        ]}
+      />
     </div>
   );
 });

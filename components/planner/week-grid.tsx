@@ -1,6 +1,7 @@
 "use client";
 
 import { clsx } from "clsx";
+import { memo } from "react";
 import type { RowPreview } from "@/lib/plan/preview";
 import type { PlanWeek } from "@/lib/plan/types";
 import { dayHeading } from "@/lib/plan/week";
@@ -19,7 +20,7 @@ type Props = {
 };
 
 /** Rows = athletes grouped by training group; columns = the days of the team's week. */
-export function WeekGrid({ week, collapsed, onToggleGroup, previews, templateDrag, copyArmedId, actions }: Props) {
+export const WeekGrid = memo(function WeekGrid({ week, collapsed, onToggleGroup, previews, templateDrag, copyArmedId, actions }: Props) {
   const byId = new Map(week.athletes.map((a) => [a.id, a]));
   return (
     <div className="overflow-x-auto rounded-card bg-paper-raised shadow-card ring-1 ring-ink-100">
@@ -69,4 +70,4 @@ export function WeekGrid({ week, collapsed, onToggleGroup, previews, templateDra
       </table>
     </div>
   );
-}
+});

@@ -36,19 +36,18 @@ export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onToo
   const iso = week ? `Week ${week.isoWeek}` : "Week";
   const drafts = week ? draftCount(week) : 0;
   return (
-    <div className="mb-4 flex flex-col gap-3 xl:flex-row xl:items-end xl:justify-between">
-      <div>
-        <p className="text-xs font-medium uppercase tracking-wider text-clay-700" data-testid="iso-week">
-          {iso}
-          {week ? <span className="text-ink-400"> · {week.isoYear}</span> : null}
-        </p>
-        <h1 className="text-2xl font-semibold text-ink-950" data-testid="week-range">
-          {weekRangeLabel(weekStart)}
-        </h1>
-        {week ? <p className="text-xs text-ink-500">Days in {week.timeZone.replace(/_/g, " ")} time</p> : null}
-      </div>
-      <div className="flex flex-wrap items-center gap-2">
-        <nav aria-label="Weeks" className="flex items-center gap-1 rounded-lg bg-paper-raised p-1 ring-1 ring-ink-100">
+    <header className="mb-4 space-y-3">
+      <div className="flex flex-col gap-3 md:flex-row md:items-end md:justify-between">
+        <div>
+          <p className="text-xs font-medium uppercase tracking-wider text-clay-700" data-testid="iso-week">
+            {iso}
+            {week ? <span className="text-ink-400"> · {week.isoYear}</span> : null}
+          </p>
+          <h1 className="text-2xl font-semibold text-ink-950" data-testid="week-range">
+            {weekRangeLabel(weekStart)}
+          </h1>
+        </div>
+        <nav aria-label="Weeks" className="flex items-center gap-1 self-start rounded-lg bg-paper-raised p-1 ring-1 ring-ink-100 md:self-auto">
           <Button variant="ghost" size="sm" onClick={() => onGo(shiftWeek(weekStart, -1))} aria-label="Previous week" data-testid="prev-week">
             ‹ Prev
           </Button>
@@ -71,23 +70,37 @@ export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onToo
             </Button>
           </form>
         </nav>
+      </div>
+      <div className="flex flex-wrap items-center justify-between gap-2 border-y border-ink-100 py-2">
         {week?.canEdit ? (
-          <div className="flex flex-wrap items-center gap-1">
+          <div className="flex flex-wrap items-center gap-1.5" role="toolbar" aria-label="Week tools">
             <Button variant="secondary" size="sm" onClick={onUndo} disabled={!undo || busy} data-testid="undo" title="Ctrl+Z">
-              {undo ? `Undo ${undo.label}` : "Undo"}
+              ↶ {undo ? `Undo ${undo.label}` : "Undo"}
             </Button>
-            <Button variant="secondary" size="sm" disabled={busy} onClick={() => week && window.confirm(CONFIRM["copy-to-next"](week)) && onTool("copy-to-next")} data-testid="copy-week">
+            <span aria-hidden className="mx-1 h-5 w-px bg-ink-100" />
+            <Button variant="ghost" size="sm" disabled={busy} onClick={() => week && window.confirm(CONFIRM["copy-to-next"](week)) && onTool("copy-to-next")} data-testid="copy-week">
               Copy to next week
             </Button>
-            <Button variant="secondary" size="sm" disabled={busy} onClick={() => week && window.confirm(CONFIRM.clear(week)) && onTool("clear")} data-testid="clear-week">
+            <Button variant="ghost" size="sm" disabled={busy} onClick={() => week && window.confirm(CONFIRM.clear(week)) && onTool("clear")} data-testid="clear-week">
               Clear week
             </Button>
             <Button variant="accent" size="sm" disabled={busy || drafts === 0} onClick={() => week && window.confirm(CONFIRM.publish(week)) && onTool("publish")} data-testid="publish-week">
-              Publish week{drafts > 0 ? ` (${drafts})` : ""}
+              Publish week{drafts > 0 ? ` · ${drafts} draft${drafts === 1 ? "" : "s"}` : ""}
             </Button>
           </div>
-        ) : null}
+        ) : (
+          <span />
+        )}
+        <p className="flex items-center gap-3 text-2xs text-ink-500">
+          <span className="inline-flex items-center gap-1">
+            <span aria-hidden className="h-1.5 w-1.5 rounded-full bg-lane-600" /> published
+          </span>
+          <span className="inline-flex items-center gap-1">
+            <span aria-hidden className="h-1.5 w-1.5 rounded-full ring-1 ring-inset ring-ink-400" /> draft
+          </span>
+          {week ? <span>Days in {week.timeZone.replace(/_/g, " ")} time</span> : null}
+        </p>
       </div>
-    </div>
+    </header>
   );
 }

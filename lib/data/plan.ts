@@ -4,6 +4,7 @@ import { AppError } from "@/lib/errors";
 import { buildWeekPreviewContext } from "@/lib/load/week-preview";
 import { computeSquadWeek, type SquadAthleteInput } from "@/lib/load/squad";
 import { logsFor } from "@/lib/plan/blocks";
+import { compactContext } from "@/lib/plan/context";
 import type { PlanAthlete, PlanGroup, PlanSession, PlanWeek, PlanWriteResult } from "@/lib/plan/types";
 import { addDaysTo, isoWeekOf, teamWeekStart, weekDays } from "@/lib/plan/week";
 import { db } from "@/models";
@@ -60,7 +61,7 @@ export async function getPlanWeek({ teamId, date, today, audience }: { teamId: n
       profile: a.profile,
       sessions,
       logs: logsFor(a.logs, sessions),
-      context: buildWeekPreviewContext({ profile: a.profile, settings: inputs.settings, sessions: a.sessions, logs: a.logs, weekStart, today }),
+      context: compactContext(buildWeekPreviewContext({ profile: a.profile, settings: inputs.settings, sessions: a.sessions, logs: a.logs, weekStart, today }), inputs.settings.acwrMetric),
       load: { week: rows[i].week, flags: rows[i].flags, topLevel: rows[i].topLevel },
     };
   });

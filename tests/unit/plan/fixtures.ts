@@ -3,6 +3,7 @@ import { computeSquadWeek } from "@/lib/load/squad";
 import { DEFAULT_TEAM_LOAD_SETTINGS, type AthleteProfile, type LogInput, type SessionInput } from "@/lib/load/types";
 import { buildWeekPreviewContext } from "@/lib/load/week-preview";
 import { toSessionInput } from "@/lib/plan/blocks";
+import { compactContext } from "@/lib/plan/context";
 import type { PlanAthlete, PlanBlock, PlanSession, PlanTemplate, PlanWeek } from "@/lib/plan/types";
 import { addDaysTo, weekDays } from "@/lib/plan/week";
 
@@ -62,7 +63,8 @@ export function planWeek(specs: AthleteSpec[]): PlanWeek {
     profile,
     sessions: a.sessions,
     logs: [],
-    context: buildWeekPreviewContext({ profile, settings, sessions: all(a, a.sessions), logs: logsOf(a), weekStart: WEEK, today: TODAY }),
+    // Compacted exactly as lib/data/plan.ts sends it, so the equality tests cover the compaction too.
+    context: compactContext(buildWeekPreviewContext({ profile, settings, sessions: all(a, a.sessions), logs: logsOf(a), weekStart: WEEK, today: TODAY }), settings.acwrMetric),
     load: { week: rows[i].week, flags: rows[i].flags, topLevel: topFlagLevel(rows[i].flags) },
   }));
   const groupIds = [...new Set(specs.map((a) => a.groupId))];
