@@ -34,7 +34,7 @@ export const AthleteRow = memo(function AthleteRow({ athlete, days, today, canEd
   return (
     <>
       <tr data-testid="athlete-row" data-athlete-id={athlete.id} className={clsx("border-t border-ink-100", preview && "bg-lane-50/30")}>
-        <th scope="row" className="sticky left-0 z-10 w-56 min-w-56 bg-paper-raised px-3 py-2 text-left align-top font-normal">
+        <th scope="row" className="sticky left-0 z-10 w-52 min-w-52 bg-paper-raised px-3 py-2 text-left align-top font-normal">
           <span className="block truncate text-sm font-medium text-ink-900">{athlete.name}</span>
           <RowLoadSummary load={athlete.load} preview={preview?.after ?? null} raised={preview?.warnings ?? NO_FLAGS} />
         </th>
@@ -46,7 +46,7 @@ export const AthleteRow = memo(function AthleteRow({ athlete, days, today, canEd
             enabled={canEdit}
             today={date === today}
           >
-            <div className="flex min-h-16 flex-col gap-1 p-1">
+            <div className="flex min-h-16 flex-col gap-1 p-0.5">
               {athlete.sessions
                 .filter((s) => s.date === date)
                 .map((s) => (

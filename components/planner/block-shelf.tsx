@@ -19,7 +19,7 @@ export const BlockShelf = memo(function BlockShelf({ templates, canEdit, onEdit,
     return templates.filter((t) => (kind === "all" || t.kind === kind) && (!q || `${t.title} ${BLOCK_KIND_LABEL[t.kind]} ${t.notes ?? ""}`.toLowerCase().includes(q)));
   }, [templates, query, kind]);
   return (
-    <aside aria-label="Block shelf" data-testid="block-shelf" className="flex flex-col gap-3 rounded-card bg-paper-raised p-3 shadow-card ring-1 ring-ink-100 lg:sticky lg:top-4 lg:max-h-[calc(100dvh-2rem)]">
+    <aside id="block-shelf" aria-label="Block shelf" data-testid="block-shelf" className="flex flex-col gap-3 rounded-card bg-paper-raised p-3 shadow-card ring-1 ring-ink-100 lg:sticky lg:top-4 lg:max-h-[calc(100dvh-2rem)]">
       <div className="flex items-center justify-between">
         <h2 className="text-sm font-semibold text-ink-900">Block shelf</h2>
         {canEdit ? (

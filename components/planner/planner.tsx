@@ -60,6 +60,7 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
   const shown = week && week.weekStart === weekStart ? week : undefined;
 
   const [collapsed, setCollapsed] = useState<Set<string>>(new Set());
+  const [shelfOpen, setShelfOpen] = useState(true);
   const [hover, setHover] = useState<Hover | null>(null);
   const [active, setActive] = useState<DragData | null>(null);
   const [altDown, setAltDown] = useState(false);
@@ -295,16 +296,25 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
           {hover && (hover.refusal || hover.text) ? (
             <DropPreviewPanel week={shown} text={hover.text} refusal={hover.refusal} rows={[...hover.rows.values()]} copying={copying} />
           ) : null}
-          <p data-testid="drag-hint" aria-hidden={!active} className={clsx("mb-2 h-4 text-xs text-ink-500", !active && "invisible")}>
-            {active
-              ? active.source.type === "session"
-                ? copying
-                  ? "Copying: drop on a day."
-                  : "Moving: drop on a day. Hold Alt to copy."
-                : "Drop on an athlete's day, or on a group's row for the whole group."
-              : "·"}
-          </p>
-          <div className={clsx("grid gap-4", shown.canEdit ? "lg:grid-cols-[minmax(0,1fr)_15rem]" : "")}>
+          <div className="mb-2 flex items-center justify-between gap-3">
+            <p data-testid="drag-hint" data-active={active ? "true" : undefined} className={clsx("min-h-4 text-xs", active ? "text-ink-600" : "text-ink-400")}>
+              {active
+                ? active.source.type === "session"
+                  ? copying
+                    ? "Copying: drop on a day."
+                    : "Moving: drop on a day. Hold Alt to copy instead."
+                  : "Drop on an athlete's day, or on a group's row for the whole group."
+                : shown.canEdit
+                  ? "Drag a block onto a day · drag a card to move it (Alt copies) · Ctrl+Z undoes"
+                  : ""}
+            </p>
+            {shown.canEdit ? (
+              <button type="button" aria-expanded={shelfOpen} aria-controls="block-shelf" onClick={() => setShelfOpen((o) => !o)} data-testid="toggle-shelf" className="shrink-0 text-xs font-medium text-ink-500 hover:text-ink-900">
+                {shelfOpen ? "Hide block shelf ›" : "‹ Show block shelf"}
+              </button>
+            ) : null}
+          </div>
+          <div className={clsx("grid gap-4", shown.canEdit && shelfOpen ? "lg:grid-cols-[minmax(0,1fr)_13.5rem]" : "")}>
             <div className="min-w-0 space-y-3">
               {shown.athletes.length === 0 ? (
                 <p className="rounded-card border border-dashed border-ink-200 px-6 py-10 text-center text-sm text-ink-500">No athletes in the team yet. Add them on the squad screen.</p>
@@ -316,7 +326,7 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
                 Totals are for the week as planned (logged work up to today, the plan after). HSR and near-max metres and sprint steps are model estimates from each athlete&apos;s tested max velocity.
               </p>
             </div>
-            {shown.canEdit ? <BlockShelf templates={shown.templates} canEdit onEdit={editTemplate} onNew={newTemplate} /> : null}
+            {shown.canEdit && shelfOpen ? <BlockShelf templates={shown.templates} canEdit onEdit={editTemplate} onNew={newTemplate} /> : null}
           </div>
           <DragOverlay dropAnimation={null}>
             {overlaySession ? (

@@ -48,11 +48,10 @@ export const SessionCard = memo(function SessionCard({ session: s, athleteName, 
   const cancelled = s.status === "cancelled";
   const data: DragData = { source: { type: "session", sessionId: s.id }, label };
   // The drag hook re-renders on every move over the grid; everything below it is memoised on the session.
-  const { attributes, listeners, setNodeRef, isDragging } = useDraggable({
-    id: overlay ? `overlay:${s.id}` : dragId(data.source),
-    data,
-    disabled: overlay || !canEdit || pending || cancelled,
-  });
+  const draggable = !overlay && canEdit && !pending && !cancelled;
+  const { attributes, listeners, setNodeRef, isDragging } = useDraggable({ id: overlay ? `overlay:${s.id}` : dragId(data.source), data, disabled: !draggable });
+  // Only a card that can move says so; the others are plain buttons that open the session.
+  const dragProps = draggable ? { ...attributes, ...listeners } : {};
   return (
     <div
       data-testid="session-card"
@@ -72,8 +71,7 @@ export const SessionCard = memo(function SessionCard({ session: s, athleteName, 
       <button
         type="button"
         ref={setNodeRef}
-        {...attributes}
-        {...listeners}
+        {...dragProps}
         aria-label={label}
         onClick={() => !overlay && actions.open(s)}
         className={clsx("flex min-w-0 flex-1 text-left", canEdit && !cancelled ? "cursor-grab active:cursor-grabbing" : "cursor-pointer")}
@@ -98,7 +96,7 @@ const CardBody = memo(function CardBody({ session: s }: { session: PlanSession }
           <span className="tabular-nums">{s.startTime}</span>
           <StatusMark status={s.status} />
         </span>
-        <span className={clsx("line-clamp-2 text-xs font-medium leading-4 text-ink-900", s.status === "cancelled" && "line-through")}>{s.title}</span>
+        <span className={clsx("line-clamp-2 hyphens-auto break-words text-xs font-medium leading-4 text-ink-900", s.status === "cancelled" && "line-through")}>{s.title}</span>
         {first ? <span className="mt-0.5 line-clamp-2 text-2xs leading-[0.95rem] text-ink-600">{blockSummary(toBlockInput(first))}</span> : null}
         {more > 0 ? <span className="text-2xs text-ink-400">+{more} more</span> : null}
       </span>

@@ -28,8 +28,7 @@ export const TemplateCard = memo(function TemplateCard({ template: t, canEdit, o
       <button
         type="button"
         ref={setNodeRef}
-        {...attributes}
-        {...listeners}
+        {...(canEdit && !overlay ? { ...attributes, ...listeners } : {})}
         aria-label={`Drag ${templateLabel(t)}: ${blockSummary(toBlockInput(t))}`}
         className={clsx("min-w-0 flex-1 px-2.5 py-2 text-left", canEdit ? "cursor-grab active:cursor-grabbing" : "cursor-default")}
       >

@@ -26,7 +26,7 @@ export const WeekGrid = memo(function WeekGrid({ week, collapsed, onToggleGroup,
     <div className="overflow-x-auto rounded-card bg-paper-raised shadow-card ring-1 ring-ink-100">
       <table data-testid="plan-grid" className="w-full min-w-[52rem] table-fixed border-collapse text-sm">
         <colgroup>
-          <col className="w-56" />
+          <col className="w-52" />
           {week.days.map((d) => (
             <col key={d} />
           ))}

@@ -8,6 +8,7 @@ import { join } from "node:path";
 import { ARTIFACTS, apiSession, describeBrowser, launchBrowser, screenshot, signIn, startApp, type App } from "./harness";
 
 const coach = DEMO_STAFF.find((s) => s.role === "coach")!;
+const physio = DEMO_STAFF.find((s) => s.role === "physio")!;
 const headCoach = DEMO_STAFF.find((s) => s.role === "head_coach")!;
 const athlete = DEMO_ATHLETES.find((a) => a.email)!;
 
@@ -78,6 +79,13 @@ describeBrowser("planner journeys", () => {
     expect(await page.getByTestId("template-card").count()).toBeGreaterThan(5);
     await page.getByTestId("load-caution").waitFor();
     await screenshot(page, "planner-empty-week");
+    const current = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    await signIn(current, app, coach.email);
+    await current.goto(`${app.url}/plan`);
+    await current.getByTestId("plan-grid").waitFor();
+    expect(await current.getByTestId("session-card").count()).toBeGreaterThan(20);
+    await screenshot(current, "planner-coach-week");
+    await current.close();
   });
 
   it("drags a max-velocity template onto Maya's Tuesday and shows the card and the new totals", async () => {
@@ -170,7 +178,7 @@ describeBrowser("planner journeys", () => {
     const handle = template(page, "acceleration").locator("button").first();
     await handle.focus();
     await page.keyboard.press("Space");
-    await page.getByTestId("drag-hint").waitFor(); // the sensor listens for arrows once the drag has started
+    await page.locator('[data-testid="drag-hint"][data-active="true"]').waitFor(); // the sensor listens for arrows once the drag has started
     await page.keyboard.press("ArrowDown"); // from the shelf, the first press lands on the first athlete's first day
     await page.keyboard.press("ArrowRight");
     await page.keyboard.press("ArrowRight");
@@ -224,6 +232,23 @@ describeBrowser("planner journeys", () => {
     await page.getByTestId("shelf-search").fill("");
   });
 
+  it("lets a physio read the whole squad's week without changing it", async () => {
+    const p = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    await signIn(p, app, physio.email);
+    await p.goto(`${app.url}/plan?week=${thisWeek}`);
+    await p.getByTestId("plan-grid").waitFor();
+    expect(await p.getByTestId("athlete-row").count()).toBe(DEMO_ATHLETES.length);
+    expect(await p.getByTestId("block-shelf").count()).toBe(0);
+    expect(await p.getByTestId("undo").count()).toBe(0);
+    // Cards are plain buttons that open the details: nothing says "draggable" to a reader or a screen reader.
+    expect(await p.locator('[aria-roledescription="draggable"]').count()).toBe(0);
+    await p.getByTestId("load-caution").waitFor();
+    await p.getByTestId("session-card").first().locator("button").first().click();
+    await p.getByTestId("session-details").waitFor();
+    await screenshot(p, "planner-physio-details");
+    await p.close();
+  });
+
   it("does not let an athlete drag: one read-only row, and the API refuses writes", async () => {
     const p = await browser.newPage({ viewport: { width: 1280, height: 800 } });
     await signIn(p, app, athlete.email!);
@@ -234,7 +259,7 @@ describeBrowser("planner journeys", () => {
     await p.getByTestId("read-only").waitFor();
     const card = p.getByTestId("session-card").first();
     await card.waitFor();
-    expect(await card.locator("button").first().getAttribute("aria-disabled")).toBe("true");
+    expect(await p.locator('[aria-roledescription="draggable"]').count()).toBe(0);
     const before = await p.getByTestId("session-card").evaluateAll((els) => els.map((e) => `${e.getAttribute("data-session-id")}@${e.closest("td")?.getAttribute("data-date")}`));
     const target = p.locator('[data-testid="day-cell"]').last();
     await drag(p, card.locator("button").first(), target);

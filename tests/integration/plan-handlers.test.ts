@@ -14,8 +14,15 @@ vi.mock("next-auth", async (orig) => ({
   getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
 }));
 const told: SessionChange[][] = [];
+const failNotice = { next: false };
 vi.mock("@/lib/notices/hooks", () => ({
-  afterPlanChange: async ({ changes }: { changes: SessionChange[] }) => void told.push(changes),
+  afterPlanChange: async ({ changes }: { changes: SessionChange[] }) => {
+    if (failNotice.next) {
+      failNotice.next = false;
+      throw new Error("notices unavailable");
+    }
+    told.push(changes);
+  },
   afterLogChange: async () => {},
 }));
 
@@ -150,6 +157,17 @@ describe("dropping templates", () => {
     expect(byAthlete.get(ben.athleteId!)).toMatchObject({ title: "Pogo hops", version: 1 });
     expect(told).toHaveLength(1);
     expect(told[0].map((c) => c.kind).sort()).toEqual(["created", "updated"]);
+  });
+
+  it("writes a group drop in one transaction: when anything in it fails, no athlete gets a session", async () => {
+    const day = addDaysTo(week, 5);
+    const before = await d.PlannedSession.count({ where: { teamId: a.teamId, date: day } });
+    failNotice.next = true;
+    const spy = vi.spyOn(console, "error").mockImplementation(() => {});
+    const res = await create({ from: "template", templateId: maxV, groupId: a.groupId, date: day });
+    spy.mockRestore();
+    expect(res.status).toBe(500);
+    expect(await d.PlannedSession.count({ where: { teamId: a.teamId, date: day } })).toBe(before);
   });
 
   it("answers 404 for another team's template, athlete or group, and 400 for a drop with neither", async () => {
