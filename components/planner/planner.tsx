@@ -107,6 +107,7 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
   undoRef.current = act.undo;
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
+      if (e.key === "Escape" && !activeRef.current) setCopyArmedId(null);
       const typing = e.target instanceof HTMLElement && /^(INPUT|TEXTAREA|SELECT)$/.test(e.target.tagName);
       if ((e.ctrlKey || e.metaKey) && e.key.toLowerCase() === "z" && !typing && !document.querySelector("dialog[open]")) {
         e.preventDefault();

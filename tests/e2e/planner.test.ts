@@ -232,6 +232,41 @@ describeBrowser("planner journeys", () => {
     await page.getByTestId("shelf-search").fill("");
   });
 
+  it("folds a group, walks the weeks, and runs the week tools: publish, copy to next week, clear", async () => {
+    const group = plan.groups[0];
+    const before = await page.getByTestId("athlete-row").count();
+    await page.locator(`[data-testid="group-row"][data-group-id="${group.id}"] button`).first().click();
+    expect(await page.getByTestId("athlete-row").count()).toBe(before - group.athleteIds.length);
+    await page.locator(`[data-testid="group-row"][data-group-id="${group.id}"] button`).first().click();
+    expect(await page.getByTestId("athlete-row").count()).toBe(before);
+
+    const drafts = await page.locator('[data-testid="session-card"][data-status="draft"]').count();
+    expect(drafts).toBeGreaterThan(0);
+    await page.getByTestId("publish-week").click();
+    await page.locator('[data-testid="plan-notice"]').filter({ hasText: `Published ${drafts} session` }).waitFor();
+    await settled(page);
+    expect(await page.locator('[data-testid="session-card"][data-status="draft"]').count()).toBe(0);
+
+    const total = await page.getByTestId("session-card").count();
+    await page.getByTestId("copy-week").click();
+    await page.locator('[data-testid="plan-notice"]').filter({ hasText: "to next week as drafts" }).waitFor();
+    await page.getByTestId("next-week").click();
+    await page.waitForFunction((w) => document.querySelector('[data-testid="planner"]')?.getAttribute("data-week") === w, day(7));
+    await page.getByTestId("plan-grid").waitFor();
+    await settled(page);
+    expect(await page.locator('[data-testid="session-card"][data-status="draft"]').count()).toBe(total);
+    await page.getByTestId("clear-week").click();
+    await page.locator('[data-testid="plan-notice"]').filter({ hasText: "Cleared the week" }).waitFor();
+    await settled(page);
+    expect(await page.getByTestId("session-card").count()).toBe(0);
+
+    await page.getByTestId("pick-date").fill(day(2));
+    await page.getByRole("button", { name: "Go", exact: true }).click();
+    await page.waitForFunction((w) => document.querySelector('[data-testid="planner"]')?.getAttribute("data-week") === w, week);
+    await settled(page);
+    expect(await page.locator('[data-testid="session-card"][data-status="published"]').count()).toBe(total);
+  });
+
   it("lets a physio read the whole squad's week without changing it", async () => {
     const p = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
     await signIn(p, app, physio.email);
