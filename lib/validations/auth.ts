@@ -14,3 +14,8 @@ export const setPasswordSchema = z
   })
   .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ" });
 export type SetPasswordInput = z.infer<typeof setPasswordSchema>;
+
+export const forgotPasswordSchema = z.object({
+  email: z.string().trim().toLowerCase().pipe(z.email("Enter a valid e-mail address")),
+});
+export type ForgotPasswordInput = z.infer<typeof forgotPasswordSchema>;

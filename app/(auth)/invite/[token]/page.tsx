@@ -21,9 +21,11 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
   }
   return (
     <>
-      <h1 className="text-xl font-semibold text-ink-950">Welcome, {invitation.name}</h1>
+      <h1 className="text-xl font-semibold text-ink-950">{invitation.purpose === "reset" ? "Choose a new password" : `Welcome, ${invitation.name}`}</h1>
       <p className="mt-1 text-sm text-ink-500">
-        Choose a password for {invitation.email} to join {invitation.teamName}.
+        {invitation.purpose === "reset"
+          ? `For ${invitation.email}. The link works once.`
+          : `Choose a password for ${invitation.email} to join ${invitation.teamName}.`}
       </p>
       <SetPasswordForm token={token} email={invitation.email} />
     </>
