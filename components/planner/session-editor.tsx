@@ -2,7 +2,7 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { FormProvider, useFieldArray, useForm, type Path } from "react-hook-form";
+import { FormProvider, useFieldArray, useForm, useWatch, type Path } from "react-hook-form";
 import { BLOCK_KIND_LABEL, blockDescription, blockSummary } from "@/lib/format/block-summary";
 import { formatDayLong } from "@/lib/format/dates";
 import { formatMinutes } from "@/lib/format/duration";
@@ -96,7 +96,7 @@ function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { s
     }
   });
   const err = form.formState.errors;
-  const watched = form.watch("blocks");
+  const watched = useWatch({ control: form.control, name: "blocks" });
   return (
     <FormProvider {...form}>
       <form onSubmit={submit} noValidate className="space-y-4" data-testid="session-form">

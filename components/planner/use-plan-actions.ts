@@ -1,6 +1,6 @@
 "use client";
 
-import { useCallback, useRef, useState } from "react";
+import { useCallback, useState } from "react";
 import { useSWRConfig } from "swr";
 import { applyChange, mergeSaved, type TempIds } from "@/lib/plan/apply";
 import { findSession, type PlanChange } from "@/lib/plan/drop";
@@ -12,6 +12,7 @@ import type { SessionEditValues } from "@/lib/validations/plan";
 import type { TemplateInput } from "@/lib/validations/template";
 import { PlanApiError, requestJson, write } from "./api";
 import { describeChange } from "./describe";
+import { useLatest } from "./latest";
 
 export type Notice = { tone: "saved" | "info" | "refused"; text: string; at: number };
 
@@ -35,6 +36,17 @@ function request(week: PlanWeek, change: PlanChange): Promise<PlanWriteResult> {
   }
 }
 
+/** The saved sessions in place, with the server's week numbers where the answer has them. */
+function withServerRows(week: PlanWeek, res: PlanWriteResult, temps: readonly number[]): PlanWeek {
+  const server = new Map((res.rows ?? []).filter((r) => r.weekStart === week.weekStart).map((r) => [r.athleteId, r.load]));
+  const merged = mergeSaved(week, res.sessions, res.removedIds, temps, (a, s) => server.get(a.id) ?? rowLoad(week, a, s));
+  const stale = (res.touched ?? []).some((t) => week.days.includes(t.date) && !server.has(t.athleteId));
+  return stale || !res.rows ? { ...merged, unconfirmed: true } : merged;
+}
+
+/** A week whose numbers were only computed in the browser is refetched to confirm them. */
+const needsRefetch = (week: PlanWeek | undefined) => Boolean(week?.unconfirmed);
+
 const blockBodies = (s: Pick<PlanSession, "blocks">) => s.blocks.map(({ templateId, kind, title, running, drills, notes }) => ({ templateId, kind, title, running, drills, notes }));
 
 /**
@@ -46,8 +58,7 @@ export function usePlanActions({ swrKey, current }: { swrKey: string; current: (
   const [notice, setNoticeState] = useState<Notice | null>(null);
   const [undoStack, setUndoStack] = useState<UndoEntry[]>([]);
   const [saving, setSaving] = useState(0);
-  const undoRef = useRef(undoStack);
-  undoRef.current = undoStack;
+  const undoBox = useLatest(undoStack);
 
   const say = useCallback((tone: Notice["tone"], text: string) => setNoticeState({ tone, text, at: Date.now() }), []);
   const refetch = useCallback(() => mutate(swrKey), [mutate, swrKey]);
@@ -94,14 +105,11 @@ export function usePlanActions({ swrKey, current }: { swrKey: string; current: (
               temps = next.athletes.flatMap((a) => a.sessions.map((s) => s.id)).filter((id) => id < 0 && !had.has(id));
               return next;
             },
-            // SWR hands populateCache the data from before the optimistic step, so the touched rows are
-            // recomputed here (the same numbers); the refetch then brings the server's own.
-            populateCache: (res, data) => {
-              const base = data ?? before;
-              return mergeSaved(base, res.sessions, res.removedIds, temps, (a, s) => rowLoad(base, a, s));
-            },
+            // SWR hands populateCache the data from before the optimistic step; the answer carries the
+            // server's numbers for the touched rows (recomputed locally only if it did not).
+            populateCache: (res, data) => withServerRows(data ?? before, res, temps),
             rollbackOnError: true,
-            revalidate: true,
+            revalidate: (data) => needsRefetch(data),
           }),
         );
         if (!result) return;
@@ -116,7 +124,7 @@ export function usePlanActions({ swrKey, current }: { swrKey: string; current: (
 
   /** Writes the server's answer into the grid and refetches the numbers. */
   const settle = useCallback(
-    (res: PlanWriteResult) => mutate<PlanWeek, PlanWriteResult>(swrKey, Promise.resolve(res), { populateCache: (r, data) => (data ? mergeSaved(data, r.sessions, r.removedIds, [], (a, s) => rowLoad(data, a, s)) : data!), revalidate: true }),
+    (res: PlanWriteResult) => mutate<PlanWeek, PlanWriteResult>(swrKey, Promise.resolve(res), { populateCache: (r, data) => (data ? withServerRows(data, r, []) : data!), revalidate: (data) => needsRefetch(data) }),
     [mutate, swrKey],
   );
 
@@ -143,7 +151,7 @@ export function usePlanActions({ swrKey, current }: { swrKey: string; current: (
   }, []);
 
   const undo = useCallback(async () => {
-    const { entry, rest } = popUndo(undoRef.current);
+    const { entry, rest } = popUndo(undoBox.get());
     const week = current();
     if (!entry || !week) return;
     setUndoStack(rest);
@@ -160,7 +168,7 @@ export function usePlanActions({ swrKey, current }: { swrKey: string; current: (
     } catch (e) {
       await explain(e, `Undo of the ${entry.label}`);
     }
-  }, [current, explain, runOp, say, settle, track]);
+  }, [current, explain, runOp, say, settle, track, undoBox]);
 
   const saveSession = useCallback(
     async (before: PlanSession, values: SessionEditValues, version: number) => {

@@ -4,7 +4,7 @@ import { AppError } from "@/lib/errors";
 import { afterPlanChange, type SessionChange } from "@/lib/notices/hooks";
 import { normaliseBlock, type BlockContent } from "@/lib/plan/blocks";
 import { toPlanSession, toSnapshot, type SessionRow } from "@/lib/plan/dto";
-import type { PlanSession } from "@/lib/plan/types";
+import type { PlanSession, PlanWriteResult, Touched } from "@/lib/plan/types";
 import { db, type PlannedSession } from "@/models";
 
 // Internals shared by the plan readers and writers (lib/data/plan.ts, lib/data/plan-sessions.ts).
@@ -108,4 +108,17 @@ export function change(kind: SessionChange["kind"], before: Loaded | null, after
 /** Hands the changes to notices inside the transaction, so a notice exists exactly when the change commits. */
 export async function notify({ transaction, teamId, actorUserId, changes }: { transaction: Transaction; teamId: number; actorUserId: number; changes: SessionChange[] }) {
   if (changes.length > 0) await afterPlanChange({ transaction, teamId, actorUserId, changes });
+}
+
+/** The athletes' days a list of changes touched, each once. */
+export function touchedBy(changes: readonly SessionChange[]): Touched[] {
+  const seen = new Map<string, Touched>();
+  for (const c of changes) {
+    for (const s of [c.before, c.after]) if (s) seen.set(`${s.athleteId}:${s.date}`, { athleteId: s.athleteId, date: s.date });
+  }
+  return [...seen.values()];
+}
+
+export function writeResult(after: Iterable<Loaded>, changes: readonly SessionChange[], removedIds: number[] = []): PlanWriteResult {
+  return { sessions: [...after].map((l) => l.dto), removedIds, touched: touchedBy(changes) };
 }

@@ -8,13 +8,9 @@ import type { PlanWriteResult } from "@/lib/plan/types";
 import type { AddBlockInput, CreateSessionInput, SessionBlockBody, UpdateSessionInput } from "@/lib/validations/plan";
 import { db } from "@/models";
 import { getTemplate } from "./templates";
-import { assertAthletes, assertTemplateLinks, blockValues, bumped, change, insertBlocks, loadById, loadSessions, lockSession, notCancelled, notify, type Loaded } from "./plan-rows";
+import { assertAthletes, assertTemplateLinks, blockValues, bumped, change, insertBlocks, loadById, loadSessions, lockSession, notCancelled, notify, writeResult, type Loaded } from "./plan-rows";
 
 type Actor = { teamId: number; actorUserId: number };
-
-function result(loaded: Iterable<Loaded>, removedIds: number[] = []): PlanWriteResult {
-  return { sessions: [...loaded].map((l) => l.dto), removedIds };
-}
 
 async function tx<T>(fn: (t: Transaction) => Promise<T>): Promise<T> {
   const { sequelize } = await db();
@@ -83,7 +79,7 @@ export async function createSessions({ teamId, actorUserId, input }: Actor & { i
       ...appended.map((before) => change("updated", before, after.get(before.dto.id)!)),
     ];
     await notify({ transaction, teamId, actorUserId, changes });
-    return result(after.values());
+    return writeResult(after.values(), changes);
   });
 }
 
@@ -117,8 +113,9 @@ export async function updateSession({ teamId, actorUserId, sessionId, input }: A
     const statusFields = publish ? { status: "published" as const, publishedAt: new Date() } : reinstate ? { status: "published" as const } : {};
     await row.update({ ...fields, ...statusFields, ...bumped(row) }, { transaction });
     const after = (await loadById([sessionId], transaction)).get(sessionId)!;
-    await notify({ transaction, teamId, actorUserId, changes: [change(publish ? "published" : "updated", loaded, after)] });
-    return result([after]);
+    const changes = [change(publish ? "published" : "updated", loaded, after)];
+    await notify({ transaction, teamId, actorUserId, changes });
+    return writeResult([after], changes);
   });
 }
 
@@ -129,16 +126,18 @@ export async function updateSession({ teamId, actorUserId, sessionId, input }: A
 export async function deleteSession({ teamId, actorUserId, sessionId, version }: Actor & { sessionId: number; version: number }): Promise<PlanWriteResult> {
   return tx(async (transaction) => {
     const { row, loaded } = await lockSession({ teamId, sessionId, version, transaction });
-    if (loaded.dto.status === "cancelled") return result([loaded]);
+    if (loaded.dto.status === "cancelled") return writeResult([loaded], []);
     if (loaded.dto.status === "draft" && !loaded.dto.logged) {
       await row.destroy({ transaction });
-      await notify({ transaction, teamId, actorUserId, changes: [change("deleted", loaded, null)] });
-      return result([], [sessionId]);
+      const changes = [change("deleted", loaded, null)];
+      await notify({ transaction, teamId, actorUserId, changes });
+      return writeResult([], changes, [sessionId]);
     }
     await row.update({ status: "cancelled", ...bumped(row) }, { transaction });
     const after = (await loadById([sessionId], transaction)).get(sessionId)!;
-    await notify({ transaction, teamId, actorUserId, changes: [change("deleted", loaded, after)] });
-    return result([after]);
+    const changes = [change("deleted", loaded, after)];
+    await notify({ transaction, teamId, actorUserId, changes });
+    return writeResult([after], changes);
   });
 }
 
@@ -148,8 +147,9 @@ export async function addBlock({ teamId, actorUserId, sessionId, input }: Actor 
     const block = input.templateId !== undefined ? blockFromTemplate(await getTemplate({ teamId, templateId: input.templateId, transaction })) : input.block!;
     const before = await appendBlocks(teamId, sessionId, [block], input.version, transaction);
     const after = (await loadById([sessionId], transaction)).get(sessionId)!;
-    await notify({ transaction, teamId, actorUserId, changes: [change("updated", before, after)] });
-    return result([after]);
+    const changes = [change("updated", before, after)];
+    await notify({ transaction, teamId, actorUserId, changes });
+    return writeResult([after], changes);
   });
 }
 
@@ -169,7 +169,8 @@ export async function changeBlock({ teamId, actorUserId, sessionId, blockId, ver
     }
     await row.update(bumped(row), { transaction });
     const after = (await loadById([sessionId], transaction)).get(sessionId)!;
-    await notify({ transaction, teamId, actorUserId, changes: [change("updated", loaded, after)] });
-    return result([after]);
+    const changes = [change("updated", loaded, after)];
+    await notify({ transaction, teamId, actorUserId, changes });
+    return writeResult([after], changes);
   });
 }

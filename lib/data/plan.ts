@@ -5,7 +5,7 @@ import { buildWeekPreviewContext } from "@/lib/load/week-preview";
 import { computeSquadWeek, type SquadAthleteInput } from "@/lib/load/squad";
 import { logsFor } from "@/lib/plan/blocks";
 import { compactContext } from "@/lib/plan/context";
-import type { PlanAthlete, PlanGroup, PlanSession, PlanWeek, PlanWriteResult } from "@/lib/plan/types";
+import type { PlanAthlete, PlanGroup, PlanSession, PlanWeek, PlanWriteResult, WeekRow } from "@/lib/plan/types";
 import { addDaysTo, isoWeekOf, teamWeekStart, weekDays } from "@/lib/plan/week";
 import { db } from "@/models";
 import { listGroups } from "./athletes";
@@ -86,6 +86,35 @@ export async function getPlanWeek({ teamId, date, today, audience }: { teamId: n
     canEdit: audience.canEdit,
     scope: audience.scope,
   };
+}
+
+/**
+ * Adds the server's week numbers for every athlete a write touched (the team week of each touched day), so
+ * the grid confirms a drop without refetching the whole week. The same engine call as getPlanWeek.
+ */
+export async function withWeekRows({ teamId, today, result }: { teamId: number; today: string; result: PlanWriteResult }): Promise<PlanWriteResult> {
+  const touched = result.touched ?? [];
+  if (touched.length === 0) return { ...result, rows: [] };
+  const { weekStartDay } = await teamWeek({ teamId, date: touched[0].date });
+  const weeks = new Map<string, Set<number>>();
+  for (const t of touched) {
+    const ws = teamWeekStart(t.date, weekStartDay);
+    weeks.set(ws, (weeks.get(ws) ?? new Set()).add(t.athleteId));
+  }
+  const rows: WeekRow[] = [];
+  for (const [weekStart, ids] of weeks) {
+    const inputs = await getSquadLoadInputs({ teamId, ...historyRange({ from: weekStart, to: addDaysTo(weekStart, 6) }) });
+    const squad = inputs.athletes.filter((a) => ids.has(a.id));
+    const computed = computeSquadWeek(
+      squad.map((a) => ({ id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions: a.sessions, logs: a.logs })),
+      inputs.settings,
+      weekStart,
+      today,
+      "projected",
+    );
+    computed.forEach((r, i) => rows.push({ athleteId: squad[i].id, weekStart, load: { week: r.week, flags: r.flags, topLevel: r.topLevel } }));
+  }
+  return { ...result, rows };
 }
 
 /** Team and athlete of a session, for the permission check before anything else is read. */

@@ -85,10 +85,21 @@ export type PlanWeek = {
   canEdit: boolean;
   /** "own": an athlete seeing only their own row. */
   scope: "team" | "own";
+  /** Browser only: some rows hold numbers computed locally after a save; refetch to confirm them. */
+  unconfirmed?: boolean;
 };
 
-/** What each write answers: the sessions as they now are, and those that are gone. */
-export type PlanWriteResult = { sessions: PlanSession[]; removedIds: number[] };
+/** An athlete's day a write changed (before or after), so the week numbers can be recomputed for it. */
+export type Touched = { athleteId: number; date: string };
+
+/** The server's week numbers of one athlete after a write. */
+export type WeekRow = { athleteId: number; weekStart: string; load: RowLoad };
+
+/**
+ * What each write answers: the sessions as they now are, those that are gone, the days it touched and, from
+ * the session handlers, the server's week numbers for the touched athletes (so no refetch is needed).
+ */
+export type PlanWriteResult = { sessions: PlanSession[]; removedIds: number[]; touched?: Touched[]; rows?: WeekRow[] };
 
 /** The body of a 409 "stale" answer. */
 export type StaleError = { code: "stale"; message: string; current: PlanSession | null };

@@ -135,6 +135,18 @@ describe("dropping templates", () => {
     expect(told).toEqual([[expect.objectContaining({ kind: "created", sessionId: s.id, before: null, after: expect.objectContaining({ id: s.id, status: "draft" }) })]]);
   });
 
+  it("answers each write with the server's week numbers for the touched athletes, equal to a fresh GET", async () => {
+    const res = await create({ from: "template", templateId: plyo, athleteId: ben.athleteId, date: addDaysTo(week, 6) });
+    expect(res.body.touched).toEqual([{ athleteId: ben.athleteId, date: addDaysTo(week, 6) }]);
+    expect(res.body.rows?.map((r) => [r.athleteId, r.weekStart])).toEqual([[ben.athleteId, week]]);
+    const fresh = (await getWeek()).body.athletes.find((x) => x.id === ben.athleteId)!;
+    expect(res.body.rows![0].load).toEqual(fresh.load);
+    const [s] = res.body.sessions;
+    const gone = await del(s.id, 1);
+    expect(gone.body.touched).toEqual([{ athleteId: ben.athleteId, date: addDaysTo(week, 6) }]);
+    expect(gone.body.rows![0].load).toEqual((await getWeek()).body.athletes.find((x) => x.id === ben.athleteId)!.load);
+  });
+
   it("appends the template as a block to a session, bumping its version", async () => {
     const [s] = (await create({ from: "template", templateId: maxV, athleteId: ben.athleteId, date: tue })).body.sessions;
     const res = await blocks.POST(send(`/api/sessions/${s.id}/blocks`, "POST", { version: 1, templateId: plyo }), p({ sessionId: String(s.id) })).then(json<PlanWriteResult>);
@@ -253,7 +265,7 @@ describe("deleting and the week tools", () => {
     const [draft] = (await create({ from: "template", templateId: plyo, athleteId: ben.athleteId, date: day })).body.sessions;
     expect((await del(draft.id)).body.error?.fields).toHaveProperty("version");
     const gone = await del(draft.id, 1);
-    expect(gone.body).toEqual({ sessions: [], removedIds: [draft.id] });
+    expect(gone.body).toMatchObject({ sessions: [], removedIds: [draft.id] });
     expect(told.at(-1)).toEqual([expect.objectContaining({ kind: "deleted", before: expect.objectContaining({ id: draft.id }), after: null })]);
 
     const [s] = (await create({ from: "template", templateId: maxV, athleteId: ben.athleteId, date: day })).body.sessions;

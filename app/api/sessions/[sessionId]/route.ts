@@ -4,7 +4,7 @@ import { deleteSession, findSessionRef, getSession, updateSession } from "@/lib/
 import { AppError } from "@/lib/errors";
 import { parseJson, parseParams, parseQuery, route } from "@/lib/http";
 import { sessionParamsSchema, updateSessionSchema, versionQuerySchema } from "@/lib/validations/plan";
-import { sessionEditor } from "./session-access";
+import { answer, sessionEditor } from "./session-access";
 
 export const runtime = "nodejs";
 
@@ -24,12 +24,12 @@ export const GET = route<Params>(async (_req, { params }) => {
 export const PATCH = route<Params>(async (req, { params }) => {
   const ctx = await sessionEditor(params);
   const input = await parseJson(req, updateSessionSchema);
-  return Response.json(await updateSession({ ...ctx, input }));
+  return answer(ctx, await updateSession({ ...ctx, input }));
 });
 
 /** DELETE ?version=: a draft is removed; a published session is kept as cancelled. */
 export const DELETE = route<Params>(async (req, { params }) => {
   const ctx = await sessionEditor(params);
   const { version } = parseQuery(req, versionQuerySchema);
-  return Response.json(await deleteSession({ ...ctx, version }));
+  return answer(ctx, await deleteSession({ ...ctx, version }));
 });

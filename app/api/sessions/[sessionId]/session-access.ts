@@ -1,6 +1,8 @@
 import "server-only";
 import { requireMember } from "@/lib/auth/access";
-import { findSessionRef } from "@/lib/data/plan";
+import { teamToday } from "@/lib/data/load";
+import { findSessionRef, withWeekRows } from "@/lib/data/plan";
+import type { PlanWriteResult } from "@/lib/plan/types";
 import { AppError } from "@/lib/errors";
 import { parseParams } from "@/lib/http";
 import { sessionParamsSchema } from "@/lib/validations/plan";
@@ -11,5 +13,10 @@ export async function sessionEditor(params: Promise<{ sessionId: string }>) {
   const ref = await findSessionRef({ sessionId });
   if (!ref) throw new AppError("not_found", "Not found");
   const viewer = await requireMember({ teamId: ref.teamId, can: "plan:edit" });
-  return { sessionId, teamId: ref.teamId, actorUserId: viewer.userId };
+  return { sessionId, teamId: ref.teamId, actorUserId: viewer.userId, timeZone: viewer.timeZone };
+}
+
+/** The write's answer with the server's week numbers for the athletes it touched. */
+export async function answer(ctx: { teamId: number; timeZone: string }, result: PlanWriteResult, status = 200) {
+  return Response.json(await withWeekRows({ teamId: ctx.teamId, today: teamToday({ timeZone: ctx.timeZone }), result }), { status });
 }

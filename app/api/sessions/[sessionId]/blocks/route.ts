@@ -1,7 +1,7 @@
 import { addBlock } from "@/lib/data/plan";
 import { parseJson, route } from "@/lib/http";
 import { addBlockSchema } from "@/lib/validations/plan";
-import { sessionEditor } from "../session-access";
+import { answer, sessionEditor } from "../session-access";
 
 export const runtime = "nodejs";
 
@@ -9,5 +9,5 @@ export const runtime = "nodejs";
 export const POST = route<{ sessionId: string }>(async (req, { params }) => {
   const ctx = await sessionEditor(params);
   const input = await parseJson(req, addBlockSchema);
-  return Response.json(await addBlock({ ...ctx, input }), { status: 201 });
+  return answer(ctx, await addBlock({ ...ctx, input }), 201);
 });

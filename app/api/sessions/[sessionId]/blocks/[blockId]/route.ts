@@ -1,7 +1,7 @@
 import { changeBlock } from "@/lib/data/plan";
 import { parseJson, parseParams, parseQuery, route } from "@/lib/http";
 import { blockParamsSchema, updateBlockSchema, versionQuerySchema } from "@/lib/validations/plan";
-import { sessionEditor } from "../../session-access";
+import { answer, sessionEditor } from "../../session-access";
 
 export const runtime = "nodejs";
 
@@ -11,7 +11,7 @@ export const PATCH = route<Params>(async (req, { params }) => {
   const { blockId } = parseParams(await params, blockParamsSchema);
   const ctx = await sessionEditor(params);
   const { version, block } = await parseJson(req, updateBlockSchema);
-  return Response.json(await changeBlock({ ...ctx, blockId, version, block }));
+  return answer(ctx, await changeBlock({ ...ctx, blockId, version, block }));
 });
 
 /** DELETE ?version= */
@@ -19,5 +19,5 @@ export const DELETE = route<Params>(async (req, { params }) => {
   const { blockId } = parseParams(await params, blockParamsSchema);
   const ctx = await sessionEditor(params);
   const { version } = parseQuery(req, versionQuerySchema);
-  return Response.json(await changeBlock({ ...ctx, blockId, version, block: null }));
+  return answer(ctx, await changeBlock({ ...ctx, blockId, version, block: null }));
 });

@@ -1,0 +1,201 @@
+"use client";
+
+import { KeyboardSensor, PointerSensor, useSensor, useSensors, type DragEndEvent, type DragOverEvent, type DragStartEvent } from "@dnd-kit/core";
+import { useCallback, useEffect, useLayoutEffect, useMemo, useState } from "react";
+import { FLAG_DISPLAY } from "@/lib/load/flag-display";
+import { formatNumber } from "@/lib/format/number";
+import { findSession, resolveDrop, type DragSource, type DropTarget, type PlanChange } from "@/lib/plan/drop";
+import { previewChange, type RowPreview } from "@/lib/plan/preview";
+import { restrictionsHit } from "@/lib/plan/restrictions";
+import type { PlanWeek } from "@/lib/plan/types";
+import { announcements, dragId, dropId, gridKeyboardCoordinates, SCREEN_READER_INSTRUCTIONS, type DragData, type DropData, type GridLayout } from "./dnd";
+import { describeChange, targetLabel } from "./describe";
+import { groupKey } from "./group-row";
+import { useBox, type Latest } from "./latest";
+
+/** Set by scripts/bench-planner.ts (addInitScript); the page records its own timings into it. */
+type PerfLog = { previews: number[]; compute?: number[]; saved?: number[]; confirmed?: number[] };
+declare global {
+  interface Window {
+    __plannerPerf?: PerfLog;
+  }
+}
+
+export type Hover = { source: DragSource; target: DropTarget; rows: Map<number, RowPreview>; refusal: string | null; text: string };
+type Preview = { week: PlanWeek; key: string; outcome: ReturnType<typeof resolveDrop>; rows: RowPreview[] };
+
+type Args = {
+  week: Latest<PlanWeek | undefined>;
+  collapsed: Latest<ReadonlySet<string>>;
+  onDrop: (change: PlanChange) => void;
+  onRefused: (reason: string) => void;
+};
+
+/**
+ * Everything about dragging: sensors (pointer, and keyboard moving cell by cell), the copy modifier, the
+ * in-browser load preview of the cell under the item, screen-reader announcements, and the drop itself.
+ */
+export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
+  const [active, setActive] = useState<DragData | null>(null);
+  const [hover, setHover] = useState<Hover | null>(null);
+  const [altDown, setAltDown] = useState(false);
+  const [copyArmedId, setCopyArmedId] = useState<number | null>(null);
+  const alt = useBox(false);
+  const armed = useBox<number | null>(null);
+  const dragging = useBox<DragData | null>(null);
+  const keyMoves = useBox(0);
+  const cache = useBox<Preview | null>(null);
+  const perfStart = useBox<number | null>(null);
+
+  // Alt held while dropping copies instead of moving; Escape leaves the card menu's copy mode.
+  useEffect(() => {
+    const on = (e: KeyboardEvent | PointerEvent) => {
+      if (e.altKey !== alt.get()) {
+        alt.set(e.altKey);
+        setAltDown(e.altKey);
+      }
+      if (e instanceof KeyboardEvent && e.key === "Escape" && !dragging.get()) {
+        armed.set(null);
+        setCopyArmedId(null);
+      }
+    };
+    window.addEventListener("keydown", on);
+    window.addEventListener("keyup", on);
+    window.addEventListener("pointermove", on);
+    return () => {
+      window.removeEventListener("keydown", on);
+      window.removeEventListener("keyup", on);
+      window.removeEventListener("pointermove", on);
+    };
+  }, [alt, armed, dragging]);
+
+  const armCopy = useCallback((sessionId: number | null) => {
+    armed.set(sessionId);
+    setCopyArmedId(sessionId);
+  }, [armed]);
+
+  const copies = useCallback((src: DragSource) => alt.get() || (src.type === "session" && armed.get() === src.sessionId), [alt, armed]);
+
+  // dnd-kit asks twice per new target (onDragOver and the announcement): compute the preview once.
+  const previewFor = useCallback(
+    (w: PlanWeek, source: DragSource, target: DropTarget): Preview => {
+      const copy = copies(source);
+      const key = `${dragId(source)}>${dropId(target)}:${copy}`;
+      const last = cache.get();
+      if (last?.week === w && last.key === key) return last;
+      const outcome = resolveDrop({ week: w, source, target, copy });
+      const next = { week: w, key, outcome, rows: outcome?.ok ? previewChange(w, outcome.change) : [] };
+      cache.set(next);
+      return next;
+    },
+    [cache, copies],
+  );
+
+  const layout = useCallback((): GridLayout => {
+    const w = week.get();
+    if (!w) return { rows: [], days: [] };
+    const rows: GridLayout["rows"] = [];
+    for (const g of w.groups) {
+      if (g.id !== null && w.scope === "team") rows.push({ key: `group:${g.id}`, target: (date) => ({ type: "group", groupId: g.id!, date }) });
+      if (collapsed.get().has(groupKey(g))) continue;
+      for (const id of g.athleteIds) rows.push({ key: `athlete:${id}`, target: (date) => ({ type: "cell", athleteId: id, date }) });
+    }
+    return { rows, days: w.days };
+  }, [week, collapsed]);
+
+  const keyboardStart = useCallback(() => {
+    const src = dragging.get()?.source;
+    const w = week.get();
+    const s = src?.type === "session" && w ? findSession(w, src.sessionId) : null;
+    const origin: DropTarget | null = s ? { type: "cell", athleteId: s.athleteId, date: s.date } : null;
+    const moves = keyMoves.get();
+    keyMoves.set(moves + 1);
+    return { origin, moves };
+  }, [dragging, keyMoves, week]);
+
+  const coordinateGetter = useMemo(() => gridKeyboardCoordinates(layout, keyboardStart), [layout, keyboardStart]);
+  const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 5 } }), useSensor(KeyboardSensor, { coordinateGetter }));
+
+  const describeOver = useCallback(
+    (source: DragSource, target: DropTarget): string => {
+      const w = week.get();
+      if (!w) return "";
+      const { outcome, rows } = previewFor(w, source, target);
+      const where = targetLabel(w, target);
+      if (!outcome) return `Over ${where}, where it already is.`;
+      if (!outcome.ok) return `Over ${where}. Cannot drop here: ${outcome.reason}`;
+      const parts = rows.map((r) => {
+        const name = w.athletes.find((a) => a.id === r.athleteId)?.name ?? "";
+        const warn = r.warnings.map((f) => `${FLAG_DISPLAY[f.kind].label}: ${f.reason}`).join(" ");
+        return `${name}: sRPE ${formatNumber(r.before.week.totals.srpe, 0)} to ${formatNumber(r.after.week.totals.srpe, 0)} AU.${warn ? ` ${warn}` : ""}`;
+      });
+      return `Over ${where}. Dropping makes ${describeChange(w, outcome.change)}. ${parts.join(" ")}`;
+    },
+    [previewFor, week],
+  );
+  const accessibility = useMemo(() => ({ announcements: announcements(describeOver), screenReaderInstructions: { draggable: SCREEN_READER_INSTRUCTIONS } }), [describeOver]);
+
+  const onDragStart = useCallback(
+    (e: DragStartEvent) => {
+      const data = (e.active.data.current as DragData | undefined) ?? null;
+      dragging.set(data);
+      keyMoves.set(0);
+      setActive(data);
+    },
+    [dragging, keyMoves],
+  );
+
+  const onDragOver = useCallback(
+    (e: DragOverEvent) => {
+      const w = week.get();
+      const data = e.active.data.current as DragData | undefined;
+      const target = (e.over?.data.current as DropData | undefined)?.target;
+      if (!w || !data || !target) {
+        setHover(null);
+        return;
+      }
+      const t0 = performance.now();
+      perfStart.set(t0);
+      const { outcome, rows } = previewFor(w, data.source, target);
+      window.__plannerPerf?.compute?.push(performance.now() - t0);
+      setHover({ source: data.source, target, rows: new Map(rows.map((r) => [r.athleteId, r])), refusal: outcome && !outcome.ok ? outcome.reason : null, text: outcome?.ok ? describeChange(w, outcome.change) : "" });
+    },
+    [perfStart, previewFor, week],
+  );
+
+  // Benchmark: script time from the "over" event to the committed preview.
+  useLayoutEffect(() => {
+    const t0 = perfStart.get();
+    if (t0 === null) return;
+    perfStart.set(null);
+    window.__plannerPerf?.previews.push(performance.now() - t0);
+  }, [hover, perfStart]);
+
+  const onDragCancel = useCallback(() => {
+    dragging.set(null);
+    setActive(null);
+    setHover(null);
+  }, [dragging]);
+
+  const onDragEnd = useCallback(
+    (e: DragEndEvent) => {
+      const w = week.get();
+      const data = e.active.data.current as DragData | undefined;
+      const target = (e.over?.data.current as DropData | undefined)?.target ?? null;
+      const copy = data ? copies(data.source) : false;
+      onDragCancel();
+      if (!w || !data) return;
+      if (data.source.type === "session" && armed.get() === data.source.sessionId) armCopy(null);
+      const outcome = resolveDrop({ week: w, source: data.source, target, copy });
+      if (!outcome) return;
+      if (!outcome.ok) return onRefused(outcome.reason);
+      // Seam for physio restrictions: none exist yet, so nothing is hit and no override is asked for.
+      if (restrictionsHit(outcome.change).length > 0) return;
+      onDrop(outcome.change);
+    },
+    [armCopy, armed, copies, onDragCancel, onDrop, onRefused, week],
+  );
+
+  const copying = active?.source.type === "session" && (altDown || copyArmedId === active.source.sessionId);
+  return { sensors, accessibility, onDragStart, onDragOver, onDragEnd, onDragCancel, active, hover, altDown, copying, copyArmedId, armCopy };
+}
