@@ -13,6 +13,7 @@ import type { PlanSession, PlanTemplate, PlanWeek } from "@/lib/plan/types";
 import { teamWeekStart } from "@/lib/plan/week";
 import { fetchWeek } from "./api";
 import { BlockShelf } from "./block-shelf";
+import { ConfirmProvider, removeQuestion, useConfirm } from "./confirm";
 import { plannerCollision } from "./dnd";
 import { DropPreviewPanel } from "./drop-preview-panel";
 import { useBox, useLatest } from "./latest";
@@ -36,7 +37,17 @@ function useHydrated() {
   return useSyncExternalStore(subscribeNothing, () => true, () => false);
 }
 
-export function Planner({ teamId, initialWeek, initial }: { teamId: number; initialWeek: string; initial: PlanWeek | null }) {
+type PlannerProps = { teamId: number; initialWeek: string; initial: PlanWeek | null };
+
+export function Planner(props: PlannerProps) {
+  return (
+    <ConfirmProvider>
+      <PlannerScreen {...props} />
+    </ConfirmProvider>
+  );
+}
+
+function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
   const [weekStart, setWeekStart] = useState(initialWeek);
   const key = planWeekKey(teamId, weekStart);
   const seeded = initial !== null && initial.weekStart === weekStart;
@@ -115,6 +126,7 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
   );
 
   const { armCopy } = dnd;
+  const confirm = useConfirm();
   const actions: CardActions = useMemo(
     () => ({
       open: (s: PlanSession) => setEditing(s.id),
@@ -122,13 +134,12 @@ export function Planner({ teamId, initialWeek, initial }: { teamId: number; init
         armCopy(s.id);
         say("info", `Copy mode for "${s.title}": drag the card (or focus it, press Space and use the arrow keys) to where the copy goes. Escape leaves copy mode.`);
       },
-      remove: (s: PlanSession) => {
-        const published = s.status === "published";
-        if (!window.confirm(published ? `Cancel "${s.title}"? Athletes will see it cancelled.` : `Delete the draft "${s.title}"?`)) return;
-        void deleteSession(s).catch((err: unknown) => say("refused", err instanceof Error ? err.message : "Could not delete"));
+      remove: async (s: PlanSession) => {
+        if (!(await confirm(removeQuestion(s)))) return;
+        await deleteSession(s).catch((err: unknown) => say("refused", err instanceof Error ? err.message : "Could not delete"));
       },
     }),
-    [armCopy, deleteSession, say],
+    [armCopy, confirm, deleteSession, say],
   );
 
   const editTemplate = useCallback((t: PlanTemplate) => setTemplateEditor({ open: true, template: t }), []);

@@ -36,7 +36,7 @@ export function StatusMark({ status }: { status: PlanSession["status"] }) {
 export type CardActions = {
   open: (s: PlanSession) => void;
   armCopy: (s: PlanSession) => void;
-  remove: (s: PlanSession) => void;
+  remove: (s: PlanSession) => void | Promise<void>;
 };
 
 type Props = { session: PlanSession; athleteName: string; canEdit: boolean; copyArmed: boolean; flags: Flag[]; actions: CardActions; overlay?: boolean };
@@ -127,7 +127,7 @@ const CardActionsMenu = memo(function CardActionsMenu({ session: s, label, actio
         items={[
           { label: "Edit", onSelect: () => actions.open(s), testId: "menu-edit" },
           ...(cancelled ? [] : [{ label: "Copy to another day…", onSelect: () => actions.armCopy(s), testId: "menu-copy" }]),
-          ...(cancelled ? [] : [{ label: s.status === "published" ? "Cancel session" : "Delete", onSelect: () => actions.remove(s), danger: true, testId: "menu-delete" }]),
+          ...(cancelled ? [] : [{ label: s.status === "published" ? "Cancel session" : "Delete", onSelect: () => void actions.remove(s), danger: true, testId: "menu-delete" }]),
         ]}
       />
     </div>

@@ -13,6 +13,7 @@ import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { PlanApiError } from "./api";
 import { BlockFields } from "./block-fields";
+import { removeQuestion, useConfirm } from "./confirm";
 import { Dialog } from "./dialog";
 import { FormFooter } from "./form-footer";
 
@@ -70,6 +71,7 @@ function SessionDetails({ session: s }: { session: PlanSession }) {
 }
 
 function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { session: PlanSession }) {
+  const confirm = useConfirm();
   const form = useForm<SessionEditValues>({ resolver: zodResolver(sessionEditSchema), defaultValues: toEditValues(session) });
   const blocks = useFieldArray({ control: form.control, name: "blocks" });
   const [open, setOpen] = useState<number | null>(session.blocks.length === 1 ? 0 : null);
@@ -188,8 +190,7 @@ function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { s
                 variant="danger"
                 data-testid="delete-session"
                 onClick={async () => {
-                  const published = session.status === "published";
-                  if (!window.confirm(published ? "Cancel this session? Athletes who have it in their calendar will see it cancelled." : "Delete this draft session?")) return;
+                  if (!(await confirm(removeQuestion(session)))) return;
                   try {
                     await onDelete(session, version);
                     onClose();

@@ -11,6 +11,7 @@ import { Field, Input } from "@/components/ui/field";
 import { PlanApiError } from "./api";
 import { BlockFields } from "./block-fields";
 import { BlockLoadPreview } from "./block-preview";
+import { useConfirm } from "./confirm";
 import { Dialog } from "./dialog";
 import { FormFooter } from "./form-footer";
 
@@ -44,6 +45,7 @@ export function TemplateEditor({ template, open, onClose, onSave, onDelete, prof
 }
 
 function TemplateForm({ template, onClose, onSave, onDelete, profile, settings }: Omit<Props, "open">) {
+  const confirm = useConfirm();
   const form = useForm<TemplateInput>({
     resolver: zodResolver(templateSchema),
     defaultValues: template ? { ...template, notes: template.notes ?? "" } : BLANK,
@@ -91,7 +93,8 @@ function TemplateForm({ template, onClose, onSave, onDelete, profile, settings }
                 <Button
                   variant="danger"
                   onClick={async () => {
-                    if (!window.confirm(`Delete the block "${template.title}"? Sessions that already use it keep their copy.`)) return;
+                    const ok = await confirm({ title: `Delete the block "${template.title}"?`, body: "It leaves the shelf. Sessions that already use it keep their copy.", confirmLabel: "Delete block", danger: true });
+                    if (!ok) return;
                     await onDelete(template);
                     onClose();
                   }}

@@ -6,6 +6,7 @@ import { shiftWeek, weekRangeLabel } from "@/lib/plan/week";
 import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/field";
 import type { UndoEntry } from "@/lib/plan/undo";
+import { useConfirm, type ConfirmRequest } from "./confirm";
 
 type Tool = "copy-to-next" | "clear" | "publish";
 
@@ -20,10 +21,14 @@ type Props = {
   busy: boolean;
 };
 
-const CONFIRM: Record<Tool, (w: PlanWeek) => string> = {
-  "copy-to-next": () => "Copy every session of this week to the same days next week, as drafts?",
-  clear: () => "Clear this week? Drafts are removed; published sessions are cancelled and athletes see them cancelled. Logged sessions stay.",
-  publish: (w) => `Publish ${draftCount(w)} draft session${draftCount(w) === 1 ? "" : "s"}? Athletes get them in their calendars.`,
+const QUESTION: Record<Tool, (w: PlanWeek) => ConfirmRequest> = {
+  "copy-to-next": () => ({ title: "Copy this week to next week?", body: "Every session that is not cancelled is copied to the same day next week, as a draft.", confirmLabel: "Copy week" }),
+  clear: () => ({ title: "Clear this week?", body: "Drafts are removed. Published sessions are cancelled, and athletes see them cancelled in their calendars. Sessions an athlete has logged stay.", confirmLabel: "Clear week", danger: true }),
+  publish: (w) => ({
+    title: `Publish ${draftCount(w)} draft session${draftCount(w) === 1 ? "" : "s"}?`,
+    body: "Athletes get them in their calendars. Later changes to a published session reach them as updates.",
+    confirmLabel: "Publish",
+  }),
 };
 
 function draftCount(w: PlanWeek) {
@@ -33,6 +38,10 @@ function draftCount(w: PlanWeek) {
 /** Week navigation (previous, next, this week, pick a date), the ISO week number, undo and the week tools. */
 export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onTool, busy }: Props) {
   const [picked, setPicked] = useState("");
+  const confirm = useConfirm();
+  const ask = async (tool: Tool) => {
+    if (week && (await confirm(QUESTION[tool](week)))) onTool(tool);
+  };
   const iso = week ? `Week ${week.isoWeek}` : "Week";
   const drafts = week ? draftCount(week) : 0;
   return (
@@ -78,13 +87,13 @@ export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onToo
               ↶ {undo ? `Undo ${undo.label}` : "Undo"}
             </Button>
             <span aria-hidden className="mx-1 h-5 w-px bg-ink-100" />
-            <Button variant="ghost" size="sm" disabled={busy} onClick={() => week && window.confirm(CONFIRM["copy-to-next"](week)) && onTool("copy-to-next")} data-testid="copy-week">
+            <Button variant="ghost" size="sm" disabled={busy} onClick={() => void ask("copy-to-next")} data-testid="copy-week">
               Copy to next week
             </Button>
-            <Button variant="ghost" size="sm" disabled={busy} onClick={() => week && window.confirm(CONFIRM.clear(week)) && onTool("clear")} data-testid="clear-week">
+            <Button variant="ghost" size="sm" disabled={busy} onClick={() => void ask("clear")} data-testid="clear-week">
               Clear week
             </Button>
-            <Button variant="accent" size="sm" disabled={busy || drafts === 0} onClick={() => week && window.confirm(CONFIRM.publish(week)) && onTool("publish")} data-testid="publish-week">
+            <Button variant="accent" size="sm" disabled={busy || drafts === 0} onClick={() => void ask("publish")} data-testid="publish-week">
               Publish week{drafts > 0 ? ` · ${drafts} draft${drafts === 1 ? "" : "s"}` : ""}
             </Button>
           </div>

@@ -243,12 +243,17 @@ describeBrowser("planner journeys", () => {
     const drafts = await page.locator('[data-testid="session-card"][data-status="draft"]').count();
     expect(drafts).toBeGreaterThan(0);
     await page.getByTestId("publish-week").click();
+    await page.getByTestId("confirm-dialog").waitFor();
+    await page.evaluate(() => window.scrollTo(0, 0));
+    await page.screenshot({ path: join(ARTIFACTS, "planner-confirm-publish.png") });
+    await page.getByTestId("confirm-yes").click();
     await page.locator('[data-testid="plan-notice"]').filter({ hasText: `Published ${drafts} session` }).waitFor();
     await settled(page);
     expect(await page.locator('[data-testid="session-card"][data-status="draft"]').count()).toBe(0);
 
     const total = await page.getByTestId("session-card").count();
     await page.getByTestId("copy-week").click();
+    await page.getByTestId("confirm-yes").click();
     await page.locator('[data-testid="plan-notice"]').filter({ hasText: "to next week as drafts" }).waitFor();
     await page.getByTestId("next-week").click();
     await page.waitForFunction((w) => document.querySelector('[data-testid="planner"]')?.getAttribute("data-week") === w, day(7));
@@ -256,6 +261,7 @@ describeBrowser("planner journeys", () => {
     await settled(page);
     expect(await page.locator('[data-testid="session-card"][data-status="draft"]').count()).toBe(total);
     await page.getByTestId("clear-week").click();
+    await page.getByTestId("confirm-yes").click();
     await page.locator('[data-testid="plan-notice"]').filter({ hasText: "Cleared the week" }).waitFor();
     await settled(page);
     expect(await page.getByTestId("session-card").count()).toBe(0);
