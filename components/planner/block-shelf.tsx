@@ -19,7 +19,7 @@ export const BlockShelf = memo(function BlockShelf({ templates, canEdit, onEdit,
     return templates.filter((t) => (kind === "all" || t.kind === kind) && (!q || `${t.title} ${BLOCK_KIND_LABEL[t.kind]} ${t.notes ?? ""}`.toLowerCase().includes(q)));
   }, [templates, query, kind]);
   return (
-    <aside id="block-shelf" aria-label="Block shelf" data-testid="block-shelf" className="flex flex-col gap-3 rounded-card bg-paper-raised p-3 shadow-card ring-1 ring-ink-100 lg:sticky lg:top-4 lg:max-h-[calc(100dvh-2rem)]">
+    <aside id="block-shelf" aria-label="Block shelf" data-testid="block-shelf" className="order-first flex min-w-0 flex-col gap-3 rounded-card bg-paper-raised p-3 shadow-card ring-1 ring-ink-100 xl:order-none xl:sticky xl:top-4 xl:max-h-[calc(100dvh-2rem)]">
       <div className="flex items-center justify-between">
         <h2 className="text-sm font-semibold text-ink-900">Block shelf</h2>
         {canEdit ? (
@@ -43,7 +43,8 @@ export const BlockShelf = memo(function BlockShelf({ templates, canEdit, onEdit,
           </button>
         ))}
       </div>
-      <ul className="-mr-1 flex flex-col gap-1.5 overflow-y-auto pr-1">
+      {/* A row that scrolls sideways above the grid on narrower screens; a column beside it on wide ones. */}
+      <ul className="-mb-1 flex gap-1.5 overflow-x-auto pb-1 xl:-mr-1 xl:mb-0 xl:flex-col xl:overflow-y-auto xl:overflow-x-visible xl:pb-0 xl:pr-1">
         {shown.map((t) => (
           <TemplateCard key={t.id} template={t} canEdit={canEdit} onEdit={onEdit} />
         ))}

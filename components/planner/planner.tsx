@@ -175,7 +175,7 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
               </button>
             ) : null}
           </div>
-          <div className={clsx("grid gap-4", shown.canEdit && shelfOpen ? "lg:grid-cols-[minmax(0,1fr)_13.5rem]" : "")}>
+          <div className={clsx("grid gap-4", shown.canEdit && shelfOpen ? "xl:grid-cols-[minmax(0,1fr)_13.5rem]" : "")}>
             <div className="min-w-0 space-y-3">
               {shown.athletes.length === 0 ? (
                 <p className="rounded-card border border-dashed border-ink-200 px-6 py-10 text-center text-sm text-ink-500">No athletes in the team yet. Add them on the squad screen.</p>

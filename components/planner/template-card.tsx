@@ -22,7 +22,7 @@ export const TemplateCard = memo(function TemplateCard({ template: t, canEdit, o
       data-testid="template-card"
       data-template-id={t.id}
       data-kind={t.kind}
-      className={clsx("group flex shrink-0 overflow-hidden rounded-lg bg-paper-raised ring-1 ring-ink-100", isDragging && "opacity-40", overlay && "w-56 shadow-lift")}
+      className={clsx("group flex shrink-0 overflow-hidden rounded-lg bg-paper-raised ring-1 ring-ink-100", overlay ? "w-56 shadow-lift" : "w-52 xl:w-auto", isDragging && "opacity-40")}
     >
       <span aria-hidden className={clsx("w-1 shrink-0", KIND_STYLE[t.kind].bar)} />
       <button

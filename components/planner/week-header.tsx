@@ -46,7 +46,7 @@ export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onToo
   const drafts = week ? draftCount(week) : 0;
   return (
     <header className="mb-4 space-y-3">
-      <div className="flex flex-col gap-3 md:flex-row md:items-end md:justify-between">
+      <div className="flex flex-col gap-3 xl:flex-row xl:items-end xl:justify-between">
         <div>
           <p className="text-xs font-medium uppercase tracking-wider text-clay-700" data-testid="iso-week">
             {iso}
@@ -56,7 +56,7 @@ export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onToo
             {weekRangeLabel(weekStart)}
           </h1>
         </div>
-        <nav aria-label="Weeks" className="flex items-center gap-1 self-start rounded-lg bg-paper-raised p-1 ring-1 ring-ink-100 md:self-auto">
+        <nav aria-label="Weeks" className="flex flex-wrap items-center gap-1 self-start whitespace-nowrap rounded-lg bg-paper-raised p-1 ring-1 ring-ink-100 xl:self-auto">
           <Button variant="ghost" size="sm" onClick={() => onGo(shiftWeek(weekStart, -1))} aria-label="Previous week" data-testid="prev-week">
             ‹ Prev
           </Button>
