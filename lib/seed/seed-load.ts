@@ -1,3 +1,4 @@
+import { mulberry32 } from "@/lib/random";
 import { engineWeekStartDay, teamToday } from "@/lib/data/load";
 import { addDays, startOfWeek } from "@/lib/load/dates";
 import type { PlyoDrill, RunningPrescription } from "@/lib/load/types";
@@ -41,17 +42,6 @@ const WEEKS: Record<string, Day[]> = {
 // Volume by week, oldest first: build, deload, build, then steady into the current (index HISTORY_WEEKS) and next week.
 const WAVE = [0.8, 0.85, 0.9, 0.75, 0.85, 0.9, 0.95, 0.92, 0.96, 1.0, 1.0, 1.0];
 
-/** Small deterministic PRNG (mulberry32) so the demo is the same on every machine. */
-function rng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const half = (x: number) => Math.round(x * 2) / 2;
 const scaleRun = (r: RunningPrescription | null, s: number): RunningPrescription | null => (r ? { ...r, reps: Math.max(1, Math.round(r.reps * s)) } : null);
@@ -77,7 +67,7 @@ export async function seedLoad(d: Db, club: SeededClub, options: { today?: strin
   const today = options.today ?? teamToday({ timeZone: DEMO_TEAM.timeZone });
   const currentWeek = startOfWeek(today, engineWeekStartDay(DEMO_TEAM.weekStartDay));
   const firstWeek = addDays(currentWeek, -7 * HISTORY_WEEKS);
-  const random = rng(20261201);
+  const random = mulberry32(20261201);
   const { sequelize, BlockTemplate } = d;
   return sequelize.transaction(async (transaction) => {
     await BlockTemplate.bulkCreate(

@@ -49,18 +49,4 @@ export function log(sessionId: string, overrides: Partial<LogInput> = {}): LogIn
   return { sessionId, completion: "yes", rpe: null, minutes: null, ...overrides };
 }
 
-/** Deterministic PRNG (mulberry32) so random fixtures are reproducible. */
-export function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-export function relClose(actual: number, expected: number, rel = 1e-6): boolean {
-  return Math.abs(actual - expected) <= rel * Math.max(1, Math.abs(expected));
-}
+export { mulberry32 } from "@/lib/random";
