@@ -4,6 +4,7 @@ import type { BlockInput } from "@/lib/load/types";
 import { getAthleteSessionDate } from "@/lib/data/alerts";
 import { queueCalendarNotices } from "./calendar-notices";
 import { evaluateLoadAlerts } from "./load-alerts";
+import { splitAthleteMoves } from "./session-changes";
 import { kickOutbox } from "./outbox-worker";
 
 /**
@@ -42,7 +43,8 @@ function wakeOutboxOnCommit(transaction: Transaction) {
 
 /** Alerts for every athlete whose load the change moved, then calendar invitations/updates/cancellations. */
 export async function afterPlanChange(args: { transaction: Transaction; teamId: number; actorUserId: number; changes: SessionChange[] }): Promise<void> {
-  const { transaction, teamId, actorUserId, changes } = args;
+  const { transaction, teamId, actorUserId } = args;
+  const changes = splitAthleteMoves(args.changes);
   if (changes.length === 0) return;
   const datesByAthlete = new Map<number, Set<string>>();
   for (const c of changes) {

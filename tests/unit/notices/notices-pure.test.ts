@@ -5,6 +5,7 @@ import { lastDigestSlot } from "@/lib/notices/digests";
 import { feedUrl, tokenFromSegment, webcalUrl } from "@/lib/notices/feed-url";
 import type { SessionChange, SessionSnapshot } from "@/lib/notices/hooks";
 import { strongestByKind } from "@/lib/notices/load-alerts";
+import { splitAthleteMoves } from "@/lib/notices/session-changes";
 import { sealToken, unsealToken } from "@/lib/notices/token-seal";
 
 const snap = (over: Partial<SessionSnapshot> = {}): SessionSnapshot => ({
@@ -80,5 +81,24 @@ describe("lastDigestSlot (07:00 in the team's zone)", () => {
     expect(lastDigestSlot(new Date("2026-03-28T08:00:00Z"), "Europe/London").toISOString()).toBe("2026-03-28T07:00:00.000Z");
     expect(lastDigestSlot(new Date("2026-03-30T06:30:00Z"), "Europe/London").toISOString()).toBe("2026-03-30T06:00:00.000Z");
     expect(lastDigestSlot(new Date("2026-03-30T05:59:00Z"), "Europe/London").toISOString()).toBe("2026-03-29T06:00:00.000Z");
+  });
+});
+
+describe("splitAthleteMoves", () => {
+  it("turns a move to another athlete into a cancellation for one and an invitation for the other (RFC 5546 §3.2)", () => {
+    const before = snap({ athleteId: 1, sequence: 2 });
+    const after = snap({ athleteId: 2, sequence: 3 });
+    const split = splitAthleteMoves([{ kind: "updated", athleteId: 2, sessionId: before.id, before, after }]);
+    expect(split.map((c) => [c.kind, c.athleteId])).toEqual([
+      ["deleted", 1],
+      ["created", 2],
+    ]);
+    expect(calendarActionFor(split[0]!)).toMatchObject({ method: "CANCEL", session: { status: "cancelled" } });
+    expect(calendarActionFor(split[1]!)).toMatchObject({ method: "REQUEST", update: false });
+  });
+
+  it("leaves changes within one athlete alone", () => {
+    const c = change("updated", snap({ startTime: "09:00" }), snap({ startTime: "10:00" }));
+    expect(splitAthleteMoves([c])).toEqual([c]);
   });
 });
