@@ -30,7 +30,11 @@ export function AddMemberForm({ unlinkedAthletes }: { unlinkedAthletes: { id: nu
     reset({ name: "", email: "", role: values.role });
     setMessage({
       tone: "ok",
-      text: result.data.inviteUrl ? `Added ${values.name}. Send them this one-time link to set a password (valid 7 days):` : `Added ${values.name}; they already have a password.`,
+      text: !result.data.invited
+        ? `Added ${values.name}; they already have a password.`
+        : result.data.inviteUrl
+          ? `Added ${values.name} and e-mailed them a one-time link to set a password (valid 7 days). Mail stays on this machine, so here it is:`
+          : `Added ${values.name} and e-mailed them a one-time link to set a password (valid 7 days).`,
       link: result.data.inviteUrl,
     });
   });

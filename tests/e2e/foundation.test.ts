@@ -1,18 +1,19 @@
 import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser } from "playwright-core";
 import { DEMO_ATHLETES, DEMO_STAFF } from "@/lib/seed/demo-club";
-import { apiSession, describeBrowser, launchBrowser, screenshot, signIn, startApp, type App } from "./harness";
+import { apiSession, describeBrowser, launchBrowser, screenshot, signIn } from "./harness";
+import { startMailApp, type MailApp } from "./notices-app";
 
 const headCoach = DEMO_STAFF.find((s) => s.role === "head_coach")!;
 const physio = DEMO_STAFF.find((s) => s.role === "physio")!;
 const athlete = DEMO_ATHLETES.find((a) => a.email)!;
 
 describeBrowser("foundation journeys", () => {
-  let app: App;
+  let app: MailApp;
   let browser: Browser;
 
   beforeAll(async () => {
-    app = await startApp();
+    app = await startMailApp();
     browser = await launchBrowser();
   });
   afterAll(async () => {
@@ -94,6 +95,9 @@ describeBrowser("foundation journeys", () => {
     await form.getByRole("button", { name: "Add member" }).click();
     const link = (await page.getByTestId("invite-link").textContent())!;
     expect(link).toContain("/invite/");
+    // The same one-time link goes out by e-mail through the outbox.
+    const mail = await app.waitForMail("lior@harbourvale.test", (m) => m.text.includes(link));
+    expect(mail.subject).toMatch(/Harbour Vale/);
     await screenshot(page, "members");
 
     const guest = await browser.newContext();

@@ -5,6 +5,7 @@ import { z } from "zod";
 import { runAction } from "@/lib/action-result";
 import { requireViewer, requireMember } from "@/lib/auth/access";
 import { appUrl } from "@/lib/env";
+import { isFakeMailbox } from "@/lib/mail/transport";
 import { addMember, changeMemberRole, removeMember } from "@/lib/data/members";
 import { addMemberSchema, changeRoleSchema, type AddMemberInput } from "@/lib/validations/members";
 
@@ -21,7 +22,9 @@ export async function addMemberAction(input: AddMemberInput) {
     const parsed = addMemberSchema.parse(input);
     const result = await addMember({ teamId: viewer.teamId, input: parsed, invitedBy: viewer.userId });
     revalidatePath("/members");
-    return { ...result, inviteUrl: result.inviteToken ? `${appUrl()}/invite/${result.inviteToken}` : null };
+    // The invitation goes out by e-mail; the link itself is shown only while mail stays on this machine.
+    const showLink = result.inviteToken !== null && isFakeMailbox();
+    return { ...result, inviteToken: null, invited: result.inviteToken !== null, inviteUrl: showLink ? `${appUrl()}/invite/${result.inviteToken}` : null };
   });
 }
 
