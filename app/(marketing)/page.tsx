@@ -16,7 +16,7 @@ const ROLES = [
   },
   {
     who: "Physios",
-    what: "See the whole squad's load, get an e-mail and an in-app alert the moment a spike is planned or happens, and set the limits the plan must respect.",
+    what: "See the whole squad's load, get an e-mail and an in-app alert the moment a spike is planned or happens, and follow up on each alert with a note.",
   },
 ];
 
