@@ -12,6 +12,8 @@ import { Membership } from "./membership";
 import { NotificationSetting } from "./notification-setting";
 import { OutboxMessage } from "./outbox-message";
 import { PlannedSession } from "./planned-session";
+import { Restriction } from "./restriction";
+import { RestrictionOverride } from "./restriction-override";
 import { SessionBlock } from "./session-block";
 import { SessionLog } from "./session-log";
 import { Team } from "./team";
@@ -19,10 +21,10 @@ import { TeamLoadSettings } from "./team-load-settings";
 import { TrainingGroup } from "./training-group";
 import { User } from "./user";
 
-export { Alert, CalendarToken, NotificationSetting, OutboxMessage };
+export { Alert, CalendarToken, NotificationSetting, OutboxMessage, Restriction, RestrictionOverride };
 export { Athlete, BlockTemplate, Invitation, Membership, PlannedSession, SessionBlock, SessionLog, Team, TeamLoadSettings, TrainingGroup, User };
 
-const models = { Alert, CalendarToken, NotificationSetting, OutboxMessage, Athlete, BlockTemplate, Invitation, Membership, PlannedSession, SessionBlock, SessionLog, Team, TeamLoadSettings, TrainingGroup, User };
+const models = { Alert, CalendarToken, NotificationSetting, OutboxMessage, Restriction, RestrictionOverride, Athlete, BlockTemplate, Invitation, Membership, PlannedSession, SessionBlock, SessionLog, Team, TeamLoadSettings, TrainingGroup, User };
 export type Models = typeof models;
 export type Db = Models & { sequelize: Sequelize };
 
@@ -86,6 +88,18 @@ function associate() {
   NotificationSetting.belongsTo(User, { foreignKey: "userId", as: "user" });
   Team.hasMany(NotificationSetting, { foreignKey: "teamId", as: "notificationSettings", ...cascade });
   NotificationSetting.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+
+  // Restrictions (migration 004).
+  Athlete.hasMany(Restriction, { foreignKey: "athleteId", as: "restrictions", ...cascade });
+  Restriction.belongsTo(Athlete, { foreignKey: "athleteId", as: "athlete" });
+  Team.hasMany(Restriction, { foreignKey: "teamId", as: "restrictions", ...cascade });
+  Restriction.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+  Restriction.hasMany(RestrictionOverride, { foreignKey: "restrictionId", as: "overrides", ...cascade });
+  RestrictionOverride.belongsTo(Restriction, { foreignKey: "restrictionId", as: "restriction" });
+  Athlete.hasMany(RestrictionOverride, { foreignKey: "athleteId", as: "restrictionOverrides", ...cascade });
+  RestrictionOverride.belongsTo(Athlete, { foreignKey: "athleteId", as: "athlete" });
+  Team.hasMany(RestrictionOverride, { foreignKey: "teamId", as: "restrictionOverrides", ...cascade });
+  RestrictionOverride.belongsTo(Team, { foreignKey: "teamId", as: "team" });
 }
 
 /** Builds a Sequelize instance on an SQLite file with the pragmas the app relies on. */

@@ -1,0 +1,36 @@
+import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import type { Athlete } from "./athlete";
+import type { Restriction } from "./restriction";
+import type { Team } from "./team";
+
+/** A coach planned a session against a restriction, and said why: kept for the medical staff. */
+export class RestrictionOverride extends Model<InferAttributes<RestrictionOverride>, InferCreationAttributes<RestrictionOverride>> {
+  declare id: CreationOptional<number>;
+  declare teamId: ForeignKey<Team["id"]>;
+  declare restrictionId: ForeignKey<Restriction["id"]>;
+  declare athleteId: ForeignKey<Athlete["id"]>;
+  declare sessionId: number | null;
+  declare sessionDate: string;
+  /** What in the session broke the rule, as shown to the coach. */
+  declare detail: string;
+  declare reason: string;
+  declare userId: number | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    RestrictionOverride.init(
+      {
+        id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+        sessionId: { type: DataTypes.INTEGER, allowNull: true },
+        sessionDate: { type: DataTypes.DATEONLY, allowNull: false },
+        detail: { type: DataTypes.TEXT, allowNull: false },
+        reason: { type: DataTypes.TEXT, allowNull: false },
+        userId: { type: DataTypes.INTEGER, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: "restriction_overrides", underscored: true },
+    );
+  }
+}
