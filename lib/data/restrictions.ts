@@ -1,8 +1,10 @@
 import "server-only";
 import { Op, type Transaction, type WhereOptions } from "sequelize";
 import type { BlockKind } from "@/lib/load/types";
-import type { Restriction } from "@/lib/restrictions/rules";
-import { db, type Restriction as RestrictionRow } from "@/models";
+import { AppError } from "@/lib/errors";
+import { describeRestriction, isCurrent, type Restriction } from "@/lib/restrictions/rules";
+import type { CreateRestrictionInput } from "@/lib/validations/restrictions";
+import { db, type Restriction as RestrictionRow, type RestrictionOverride as RestrictionOverrideRow } from "@/models";
 
 async function userNames(ids: Array<number | null>, transaction?: Transaction): Promise<Map<number, string>> {
   const { User } = await db();
@@ -44,4 +46,97 @@ export async function listRestrictions({ teamId, athleteIds, from, transaction }
   const rows = await Restriction.findAll({ where, order: [["startsOn", "ASC"], ["id", "ASC"]], transaction });
   const names = await userNames(rows.map((r) => r.createdBy), transaction);
   return rows.map((r) => toRestriction(r, names));
+}
+
+/** Every restriction ever set for one athlete, newest start first (the athlete page's history). */
+export async function listAthleteRestrictions({ teamId, athleteId }: { teamId: number; athleteId: number }): Promise<Restriction[]> {
+  return (await listRestrictions({ teamId, athleteIds: [athleteId] })).reverse();
+}
+
+/** What still applies to one athlete on `today` or later (their own page). */
+export async function listCurrentRestrictions({ teamId, athleteId, today }: { teamId: number; athleteId: number; today: string }): Promise<Restriction[]> {
+  return (await listRestrictions({ teamId, athleteIds: [athleteId], from: today })).filter((r) => isCurrent(r, today));
+}
+
+/** A physio sets a restriction on an athlete of their team (404 for an athlete elsewhere). */
+export async function createRestriction({ teamId, athleteId, actorUserId, input }: { teamId: number; athleteId: number; actorUserId: number; input: CreateRestrictionInput }): Promise<Restriction> {
+  const { Athlete, Restriction } = await db();
+  const athlete = await Athlete.findOne({ where: { id: athleteId, teamId }, attributes: ["id"] });
+  if (!athlete) throw new AppError("not_found", "No such athlete");
+  const row = await Restriction.create({
+    teamId,
+    athleteId,
+    rule: input.rule,
+    blockKinds: input.rule === "no_kind" ? JSON.stringify(input.blockKinds) : null,
+    limitValue: input.rule === "max_intensity" ? input.maxPct : input.rule === "contact_cap" ? input.maxContacts : null,
+    startsOn: input.startsOn,
+    endsOn: input.endsOn ?? null,
+    liftedOn: null,
+    note: input.note,
+    createdBy: actorUserId,
+    liftedBy: null,
+  });
+  return toRestriction(row, await userNames([actorUserId]));
+}
+
+/**
+ * Lifts a restriction from `today`: days from today on are free again. One that has not begun is lifted on its
+ * first day, so it never applies. Lifting again, or lifting one that already ended, changes nothing.
+ */
+export async function liftRestriction({ teamId, restrictionId, actorUserId, today }: { teamId: number; restrictionId: number; actorUserId: number; today: string }): Promise<Restriction> {
+  const { Restriction } = await db();
+  const row = await Restriction.findOne({ where: { id: restrictionId, teamId } });
+  if (!row) throw new AppError("not_found", "No such restriction");
+  const ended = row.endsOn !== null && row.endsOn < today;
+  if (row.liftedOn === null && !ended) {
+    await row.update({ liftedOn: today < row.startsOn ? row.startsOn : today, liftedBy: actorUserId });
+  }
+  return toRestriction(row, await userNames([row.createdBy]));
+}
+
+/** The team id of a restriction's athlete, so a handler can check the asker against it; null when unknown. */
+export async function restrictionTeam({ restrictionId }: { restrictionId: number }): Promise<{ teamId: number; athleteId: number } | null> {
+  const { Restriction } = await db();
+  const row = await Restriction.findByPk(restrictionId, { attributes: ["teamId", "athleteId"] });
+  return row ? { teamId: row.teamId, athleteId: row.athleteId } : null;
+}
+
+export type OverrideRow = {
+  id: number;
+  restrictionId: number;
+  /** The restriction it went past, in words ("No max velocity, Mon 7 Dec – Sun 13 Dec"). */
+  restriction: string;
+  sessionDate: string;
+  detail: string;
+  reason: string;
+  who: string;
+  createdAt: string;
+};
+
+/** Every time a coach planned past one of the athlete's restrictions, newest first. */
+export async function listOverrides({ teamId, athleteId }: { teamId: number; athleteId: number }): Promise<OverrideRow[]> {
+  const { RestrictionOverride, Restriction } = await db();
+  const rows = await RestrictionOverride.findAll({
+    where: { teamId, athleteId },
+    include: [{ model: Restriction, as: "restriction" }],
+    order: [["createdAt", "DESC"], ["id", "DESC"]],
+  });
+  const names = await userNames(rows.flatMap((r) => [r.userId, restrictionOf(r)?.createdBy ?? null]));
+  return rows.map((r) => {
+    const restriction = restrictionOf(r);
+    return {
+      id: r.id,
+      restrictionId: r.restrictionId,
+      restriction: restriction ? describeRestriction(toRestriction(restriction, names)) : "A restriction since removed",
+      sessionDate: r.sessionDate,
+      detail: r.detail,
+      reason: r.reason,
+      who: r.userId ? (names.get(r.userId) ?? "A former member") : "A former member",
+      createdAt: r.createdAt.toISOString(),
+    };
+  });
+}
+
+function restrictionOf(row: RestrictionOverrideRow): RestrictionRow | null {
+  return (row.get("restriction") as RestrictionRow | undefined) ?? null;
 }

@@ -1,0 +1,28 @@
+import { requireAthlete } from "@/lib/auth/access";
+import { createRestriction, listAthleteRestrictions, listOverrides } from "@/lib/data/restrictions";
+import { parseJson, parseParams, route } from "@/lib/http";
+import { athleteParamsSchema, createRestrictionSchema } from "@/lib/validations/restrictions";
+
+export const runtime = "nodejs";
+
+type Params = { athleteId: string };
+
+/** Every restriction ever set for the athlete (newest start first) and the coaches' overrides of them. */
+export const GET = route<Params>(async (_req, { params }) => {
+  const { athleteId } = parseParams(await params, athleteParamsSchema);
+  const viewer = await requireAthlete({ athleteId, can: "athletes:view" });
+  const [restrictions, overrides] = await Promise.all([
+    listAthleteRestrictions({ teamId: viewer.teamId, athleteId }),
+    listOverrides({ teamId: viewer.teamId, athleteId }),
+  ]);
+  return Response.json({ restrictions, overrides });
+});
+
+/** The medical staff set a new restriction. */
+export const POST = route<Params>(async (req, { params }) => {
+  const { athleteId } = parseParams(await params, athleteParamsSchema);
+  const viewer = await requireAthlete({ athleteId, can: "restrictions:edit" });
+  const input = await parseJson(req, createRestrictionSchema);
+  const restriction = await createRestriction({ teamId: viewer.teamId, athleteId, actorUserId: viewer.userId, input });
+  return Response.json({ restriction }, { status: 201 });
+});
