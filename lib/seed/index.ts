@@ -1,6 +1,7 @@
 import type { Db } from "@/models";
 import { seedClub, type SeededClub } from "./seed-club";
 import { seedLoad } from "./seed-load";
+import { seedRestrictions } from "./seed-restrictions";
 import { seedNotices } from "@/lib/notices/seed";
 
 export type SeedOptions = {
@@ -16,6 +17,7 @@ export async function seedDemo(d: Db, options: SeedOptions = {}): Promise<Seeded
   const club = await seedClub(d);
   await seedLoad(d, club, options);
   await seedNotices(d, club);
+  await seedRestrictions(d, club, options);
   void options;
   return club;
 }
