@@ -7,6 +7,8 @@ export type ErrorCode =
   | "invalid"
   | "conflict"
   | "stale"
+  /** The change goes past a physio restriction and came without a reason to override it. */
+  | "restricted"
   | "internal";
 
 const STATUS: Record<ErrorCode, number> = {
@@ -16,6 +18,7 @@ const STATUS: Record<ErrorCode, number> = {
   invalid: 400,
   conflict: 409,
   stale: 409,
+  restricted: 409,
   internal: 500,
 };
 

@@ -1,4 +1,5 @@
 import type { PlanSession, PlanWeek, PlanWriteResult } from "@/lib/plan/types";
+import type { RestrictionHit } from "@/lib/restrictions/rules";
 
 /** A refusal from the server, with the per-field messages and, on 409 "stale", the session as it now is. */
 export class PlanApiError extends Error {
@@ -8,6 +9,8 @@ export class PlanApiError extends Error {
     message: string,
     readonly fields: Record<string, string[]> = {},
     readonly current: PlanSession | null = null,
+    /** On 409 "restricted": what the change would break; sending a reason overrides it. */
+    readonly hits: RestrictionHit[] = [],
   ) {
     super(message);
     this.name = "PlanApiError";
@@ -15,9 +18,12 @@ export class PlanApiError extends Error {
   get stale() {
     return this.code === "stale";
   }
+  get restricted() {
+    return this.code === "restricted";
+  }
 }
 
-type ErrorBody = { error?: { code?: string; message?: string; fields?: Record<string, string[]>; current?: PlanSession } };
+type ErrorBody = { error?: { code?: string; message?: string; fields?: Record<string, string[]>; current?: PlanSession; hits?: RestrictionHit[] } };
 
 export async function requestJson<T>(method: "GET" | "POST" | "PATCH" | "PUT" | "DELETE", url: string, body?: unknown): Promise<T> {
   let res: Response;
@@ -33,7 +39,7 @@ export async function requestJson<T>(method: "GET" | "POST" | "PATCH" | "PUT" | 
   const data = (await res.json().catch(() => ({}))) as T & ErrorBody;
   if (!res.ok) {
     const e = data.error ?? {};
-    throw new PlanApiError(res.status, e.code ?? "error", e.message ?? `The server answered ${res.status}`, e.fields, e.current ?? null);
+    throw new PlanApiError(res.status, e.code ?? "error", e.message ?? `The server answered ${res.status}`, e.fields, e.current ?? null, e.hits ?? []);
   }
   return data;
 }

@@ -5,13 +5,17 @@ import { memo } from "react";
 import type { Flag } from "@/lib/load/flags";
 import { formatDayShort } from "@/lib/format/dates";
 import type { RowPreview } from "@/lib/plan/preview";
+import { sessionHits } from "@/lib/plan/restrictions";
 import type { PlanAthlete } from "@/lib/plan/types";
+import { describeRestriction, type Restriction } from "@/lib/restrictions/rules";
 import { DropCell } from "./day-cell";
 import { RowLoadSummary } from "./row-load";
 import { SessionCard, type CardActions } from "./session-card";
 
 type Props = {
   athlete: PlanAthlete;
+  /** The athlete's physio restrictions that touch this week. */
+  restrictions: readonly Restriction[];
   days: string[];
   today: string;
   canEdit: boolean;
@@ -29,13 +33,25 @@ function flagsBySession(flags: readonly Flag[]): Map<string, Flag[]> {
 }
 
 /** One athlete: name and week numbers, then a cell per day holding that day's session cards. */
-export const AthleteRow = memo(function AthleteRow({ athlete, days, today, canEdit, preview, copyArmedId, actions }: Props) {
+export const AthleteRow = memo(function AthleteRow({ athlete, restrictions, days, today, canEdit, preview, copyArmedId, actions }: Props) {
   const bySession = flagsBySession(athlete.load.flags);
+  const limitsText = restrictions.map((r) => `${describeRestriction(r)} (${r.setByName}): ${r.note}`).join("\n");
+  const restrictedText = (s: PlanAthlete["sessions"][number]) => {
+    const hits = sessionHits({ restrictions }, s);
+    return hits.length > 0 ? hits.map((h) => `${h.rule}. ${h.detail}`).join("\n") : null;
+  };
   return (
     <>
       <tr data-testid="athlete-row" data-athlete-id={athlete.id} className={clsx("border-t border-ink-100", preview && "bg-lane-50/30")}>
         <th scope="row" className="sticky left-0 z-10 w-52 min-w-52 bg-paper-raised px-3 py-2 text-left align-top font-normal">
           <span className="block truncate text-sm font-medium text-ink-900">{athlete.name}</span>
+          {restrictions.length > 0 ? (
+            <span data-testid="row-restriction" title={limitsText} className="mt-0.5 inline-flex max-w-full items-center gap-1 truncate rounded-full border border-flag-climb/30 bg-flag-climb-soft px-1.5 py-px text-2xs font-medium text-flag-climb">
+              <span aria-hidden>⚕</span>
+              {restrictions.length === 1 ? "Physio restriction" : `${restrictions.length} physio restrictions`}
+              <span className="sr-only">: {limitsText}</span>
+            </span>
+          ) : null}
           <RowLoadSummary load={athlete.load} preview={preview?.after ?? null} raised={preview?.warnings ?? NO_FLAGS} />
         </th>
         {days.map((date) => (
@@ -50,7 +66,7 @@ export const AthleteRow = memo(function AthleteRow({ athlete, days, today, canEd
               {athlete.sessions
                 .filter((s) => s.date === date)
                 .map((s) => (
-                  <SessionCard key={s.id} session={s} athleteName={athlete.name} canEdit={canEdit} copyArmed={copyArmedId === s.id} flags={bySession.get(String(s.id)) ?? NO_FLAGS} actions={actions} />
+                  <SessionCard key={s.id} session={s} athleteName={athlete.name} canEdit={canEdit} copyArmed={copyArmedId === s.id} flags={bySession.get(String(s.id)) ?? NO_FLAGS} restricted={restrictions.length > 0 ? restrictedText(s) : null} actions={actions} />
                 ))}
             </div>
           </DropCell>

@@ -5,17 +5,19 @@ import { FLAG_DISPLAY, flagClasses } from "@/lib/load/flag-display";
 import { formatNumber } from "@/lib/format/number";
 import type { RowPreview } from "@/lib/plan/preview";
 import type { PlanWeek } from "@/lib/plan/types";
+import type { RestrictionHit } from "@/lib/restrictions/rules";
 
 /**
  * While something is dragged over a day: what the drop would do and which flags it would raise, with the
  * reasons. It floats at the bottom of the screen so the grid never shifts under the pointer.
  */
-export function DropPreviewPanel({ week, text, refusal, rows, copying }: { week: PlanWeek; text: string; refusal: string | null; rows: RowPreview[]; copying: boolean }) {
+export function DropPreviewPanel({ week, text, refusal, rows, hits, copying }: { week: PlanWeek; text: string; refusal: string | null; rows: RowPreview[]; hits: readonly RestrictionHit[]; copying: boolean }) {
   const name = (id: number) => week.athletes.find((a) => a.id === id)?.name ?? "";
   const warned = rows.filter((r) => r.warnings.length > 0);
+  const flagged = warned.length > 0 || hits.length > 0;
   return (
     <div className="pointer-events-none fixed inset-x-0 bottom-4 z-40 flex justify-center px-4">
-      <div data-testid="drop-preview" className={clsx("w-full max-w-2xl rounded-lg bg-paper-raised px-4 py-3 text-sm shadow-lift ring-1", warned.length > 0 ? "ring-flag-spike/30" : "ring-ink-100")}>
+      <div data-testid="drop-preview" className={clsx("w-full max-w-2xl rounded-lg bg-paper-raised px-4 py-3 text-sm shadow-lift ring-1", flagged ? "ring-flag-spike/30" : "ring-ink-100")}>
         {refusal ? (
           <p className="text-flag-climb">{refusal}</p>
         ) : (
@@ -24,6 +26,16 @@ export function DropPreviewPanel({ week, text, refusal, rows, copying }: { week:
               {copying ? <strong className="mr-1 text-lane-700">Copy:</strong> : null}
               Drop to make {text}.
             </p>
+            {hits.length > 0 ? (
+              <ul data-testid="drop-restrictions" className="mt-2 space-y-1">
+                {hits.map((h) => (
+                  <li key={`${h.restrictionId}:${h.date}`} data-testid="drop-restriction" className="rounded-md border border-flag-climb/30 bg-flag-climb-soft px-2 py-1 text-xs text-ink-800">
+                    <span className="font-semibold">{name(h.athleteId)} · Physio restriction:</span> {h.rule}. {h.detail}.
+                  </li>
+                ))}
+                <li className="text-2xs text-ink-500">Dropping asks you for a reason, which goes to the medical staff.</li>
+              </ul>
+            ) : null}
             {rows.length === 1 && warned.length === 0 ? (
               <p className="mt-0.5 text-xs text-ink-500">
                 sRPE {formatNumber(rows[0].before.week.totals.srpe, 0)} → {formatNumber(rows[0].after.week.totals.srpe, 0)} AU · no new flags.

@@ -8,16 +8,19 @@ import { LoadCaution } from "@/components/ui/caution";
 import { findSession, type PlanChange } from "@/lib/plan/drop";
 import { planWeekKey } from "@/lib/plan/keys";
 import type { RowPreview } from "@/lib/plan/preview";
+import type { RestrictionHit } from "@/lib/restrictions/rules";
 import { typicalProfile } from "@/lib/plan/typical";
 import type { PlanSession, PlanTemplate, PlanWeek } from "@/lib/plan/types";
 import { teamWeekStart } from "@/lib/plan/week";
 import { fetchWeek } from "./api";
 import { BlockShelf } from "./block-shelf";
 import { ConfirmProvider, removeQuestion, useConfirm } from "./confirm";
+import { describeChange } from "./describe";
 import { plannerCollision } from "./dnd";
 import { DropPreviewPanel } from "./drop-preview-panel";
 import { useBox, useLatest } from "./latest";
 import { NoticeToast } from "./notice-toast";
+import { OverrideProvider, useOverrideReason } from "./override-dialog";
 import { SessionCard, type CardActions } from "./session-card";
 import { SessionEditor } from "./session-editor";
 import { TemplateCard } from "./template-card";
@@ -42,7 +45,9 @@ type PlannerProps = { teamId: number; initialWeek: string; initial: PlanWeek | n
 export function Planner(props: PlannerProps) {
   return (
     <ConfirmProvider>
-      <PlannerScreen {...props} />
+      <OverrideProvider>
+        <PlannerScreen {...props} />
+      </OverrideProvider>
     </ConfirmProvider>
   );
 }
@@ -59,7 +64,12 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
   });
   const weekBox = useLatest(week);
   const current = useCallback(() => weekBox.get(), [weekBox]);
-  const act = usePlanActions({ swrKey: key, current });
+  const askReason = useOverrideReason();
+  const askOverride = useCallback(
+    (hits: RestrictionHit[], what: string) => askReason({ hits, what, athleteName: (id) => weekBox.get()?.athletes.find((a) => a.id === id)?.name ?? "The athlete" }),
+    [askReason, weekBox],
+  );
+  const act = usePlanActions({ swrKey: key, current, askOverride });
   const shown = week && week.weekStart === weekStart ? week : undefined;
   const hydrated = useHydrated();
 
@@ -72,12 +82,19 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
   const { say, saveChange, deleteSession, clearUndo } = act;
 
   const onDrop = useCallback(
-    (change: PlanChange) => {
-      const t0 = performance.now();
-      dropStart.set(t0);
-      void saveChange(change).then(() => requestAnimationFrame(() => window.__plannerPerf?.saved?.push(performance.now() - t0)));
+    (change: PlanChange, hits: RestrictionHit[]) => {
+      const save = (override?: { reason: string }) => {
+        const t0 = performance.now();
+        dropStart.set(t0);
+        void saveChange(change, override).then(() => requestAnimationFrame(() => window.__plannerPerf?.saved?.push(performance.now() - t0)));
+      };
+      if (hits.length === 0) return save();
+      // Warned while hovering; the drop itself asks why before anything is saved.
+      const w = weekBox.get();
+      const what = w ? describeChange(w, change) : "this session";
+      void askOverride(hits, what).then((reason) => (reason === null ? say("info", `Not planned: ${what}. The restriction stands.`) : save({ reason })));
     },
-    [dropStart, saveChange],
+    [askOverride, dropStart, saveChange, say, weekBox],
   );
   const onRefused = useCallback((reason: string) => say("refused", reason), [say]);
   const dnd = usePlannerDnd({ week: weekBox, collapsed: collapsedBox, onDrop, onRefused });
@@ -166,7 +183,7 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
               {shown.scope === "own" ? "Your published sessions this week. Coaches plan them; open a card to see what it asks." : "Read-only: coaches and the head coach change the plan. Open a card to see its blocks."}
             </p>
           ) : null}
-          {hover && (hover.refusal || hover.text) ? <DropPreviewPanel week={shown} text={hover.text} refusal={hover.refusal} rows={[...hover.rows.values()]} copying={copying} /> : null}
+          {hover && (hover.refusal || hover.text) ? <DropPreviewPanel week={shown} text={hover.text} refusal={hover.refusal} rows={[...hover.rows.values()]} hits={hover.hits} copying={copying} /> : null}
           <div className="mb-2 flex items-center justify-between gap-3">
             <DragHint active={active?.source.type ?? null} copying={copying} canEdit={shown.canEdit} />
             {shown.canEdit ? (

@@ -39,10 +39,20 @@ export type CardActions = {
   remove: (s: PlanSession) => void | Promise<void>;
 };
 
-type Props = { session: PlanSession; athleteName: string; canEdit: boolean; copyArmed: boolean; flags: Flag[]; actions: CardActions; overlay?: boolean };
+type Props = {
+  session: PlanSession;
+  athleteName: string;
+  canEdit: boolean;
+  copyArmed: boolean;
+  flags: Flag[];
+  actions: CardActions;
+  overlay?: boolean;
+  /** The physio restrictions this session goes past, in words (it was let through with a reason, or predates them). */
+  restricted?: string | null;
+};
 
 /** One session in a day cell: kind stripe, time and state, title, the first block's key numbers. */
-export const SessionCard = memo(function SessionCard({ session: s, athleteName, canEdit, copyArmed, flags, actions, overlay = false }: Props) {
+export const SessionCard = memo(function SessionCard({ session: s, athleteName, canEdit, copyArmed, flags, actions, overlay = false, restricted = null }: Props) {
   const label = sessionLabel(s, athleteName);
   const pending = s.id < 0;
   const cancelled = s.status === "cancelled";
@@ -79,6 +89,12 @@ export const SessionCard = memo(function SessionCard({ session: s, athleteName, 
         <CardBody session={s} />
       </button>
       {flags.length > 0 ? <CardFlags flags={flags} /> : null}
+      {restricted ? (
+        <span data-testid="card-restricted" title={restricted} className="absolute left-1.5 top-0.5 text-2xs font-semibold text-flag-climb">
+          <span aria-hidden>⚕</span>
+          <span className="sr-only">Goes past a physio restriction: {restricted}</span>
+        </span>
+      ) : null}
       {canEdit && !overlay && !pending ? <CardActionsMenu session={s} label={label} actions={actions} /> : null}
     </div>
   );

@@ -10,6 +10,7 @@ import type { PlanSession, PlanWeek, PlanWriteResult } from "@/lib/plan/types";
 import { popUndo, pushUndo, undoForChange, undoForDelete, undoForEdit, type UndoEntry, type UndoOp } from "@/lib/plan/undo";
 import type { SessionEditValues } from "@/lib/validations/plan";
 import type { TemplateInput } from "@/lib/validations/template";
+import type { RestrictionHit } from "@/lib/restrictions/rules";
 import { PlanApiError, requestJson, write } from "./api";
 import { describeChange } from "./describe";
 import { useLatest } from "./latest";
@@ -20,21 +21,29 @@ export type Notice = { tone: "saved" | "info" | "refused"; text: string; at: num
 let tempSeq = -1;
 const tempId: TempIds = () => tempSeq--;
 
-function request(week: PlanWeek, change: PlanChange): Promise<PlanWriteResult> {
+function request(week: PlanWeek, change: PlanChange, override?: Override): Promise<PlanWriteResult> {
   const version = (id: number) => findSession(week, id)?.version ?? 0;
+  const o = override ? { override } : {};
   switch (change.kind) {
     case "create":
-      return write("POST", teamSessionsPath(week.teamId), { from: "template", templateId: change.templateId, athleteId: change.athleteId, date: change.date });
+      return write("POST", teamSessionsPath(week.teamId), { from: "template", templateId: change.templateId, athleteId: change.athleteId, date: change.date, ...o });
     case "group":
-      return write("POST", teamSessionsPath(week.teamId), { from: "template", templateId: change.templateId, groupId: change.groupId, date: change.date });
+      return write("POST", teamSessionsPath(week.teamId), { from: "template", templateId: change.templateId, groupId: change.groupId, date: change.date, ...o });
     case "copy":
-      return write("POST", teamSessionsPath(week.teamId), { from: "copy", sessionId: change.sessionId, athleteId: change.athleteId, date: change.date });
+      return write("POST", teamSessionsPath(week.teamId), { from: "copy", sessionId: change.sessionId, athleteId: change.athleteId, date: change.date, ...o });
     case "add-block":
-      return write("POST", sessionBlocksPath(change.sessionId), { version: version(change.sessionId), templateId: change.templateId });
+      return write("POST", sessionBlocksPath(change.sessionId), { version: version(change.sessionId), templateId: change.templateId, ...o });
     case "move":
-      return write("PATCH", sessionPath(change.sessionId), { version: version(change.sessionId), athleteId: change.athleteId, date: change.date });
+      return write("PATCH", sessionPath(change.sessionId), { version: version(change.sessionId), athleteId: change.athleteId, date: change.date, ...o });
   }
 }
+
+type Override = { reason: string };
+/** Asks the coach for a reason to go past restrictions the server found; null = keep the plan as it was. */
+export type AskOverride = (hits: RestrictionHit[], what: string) => Promise<string | null>;
+
+/** Thrown when the coach chose not to override: nothing was saved, and nothing more needs saying. */
+class KeptAsItWas extends Error {}
 
 /** The saved sessions in place, with the server's week numbers where the answer has them. */
 function withServerRows(week: PlanWeek, res: PlanWriteResult, temps: readonly number[]): PlanWeek {
@@ -53,7 +62,7 @@ const blockBodies = (s: Pick<PlanSession, "blocks">) => s.blocks.map(({ template
  * Every write the planner makes: optimistic in the grid (numbers from lib/load), then confirmed by the server's
  * answer and a refetch. A refusal rolls back with the server's reason; a 409 refetches and says what happened.
  */
-export function usePlanActions({ swrKey, current }: { swrKey: string; current: () => PlanWeek | undefined }) {
+export function usePlanActions({ swrKey, current, askOverride }: { swrKey: string; current: () => PlanWeek | undefined; askOverride: AskOverride }) {
   const { mutate } = useSWRConfig();
   const [notice, setNoticeState] = useState<Notice | null>(null);
   const [undoStack, setUndoStack] = useState<UndoEntry[]>([]);
@@ -65,7 +74,9 @@ export function usePlanActions({ swrKey, current }: { swrKey: string; current: (
 
   const explain = useCallback(
     async (e: unknown, what: string) => {
-      if (e instanceof PlanApiError && e.stale) {
+      if (e instanceof KeptAsItWas) {
+        say("info", `Not planned: ${what}. The restriction stands.`);
+      } else if (e instanceof PlanApiError && e.stale) {
         await refetch();
         const s = e.current;
         say("refused", `${what} was not saved: someone else changed ${s ? `"${s.title}"` : "this session"} a moment ago. The grid now shows the latest plan; try again if it is still needed.`);
@@ -88,16 +99,31 @@ export function usePlanActions({ swrKey, current }: { swrKey: string; current: (
     }
   }, []);
 
-  /** A drop: shown at once, saved, then confirmed. */
+  /** Runs a write; when the server says it goes past a restriction, asks for a reason and sends it again. */
+  const withOverride = useCallback(
+    async <T,>(what: string, fn: (override?: Override) => Promise<T>, override?: Override): Promise<T> => {
+      try {
+        return await fn(override);
+      } catch (e) {
+        if (!(e instanceof PlanApiError && e.restricted) || override) throw e;
+        const reason = await askOverride(e.hits, what);
+        if (reason === null) throw new KeptAsItWas();
+        return fn({ reason });
+      }
+    },
+    [askOverride],
+  );
+
+  /** A drop: shown at once, saved, then confirmed. `override` carries the reason the coach gave before the drop. */
   const saveChange = useCallback(
-    async (change: PlanChange) => {
+    async (change: PlanChange, override?: Override) => {
       const before = current();
       if (!before) return;
       const what = describeChange(before, change);
       let temps: number[] = [];
       try {
-        const result = await track(() =>
-          mutate<PlanWeek, PlanWriteResult>(swrKey, request(before, change), {
+        const save = (o?: Override) =>
+          mutate<PlanWeek, PlanWriteResult>(swrKey, request(before, change, o), {
             optimisticData: (data) => {
               const base = data ?? before;
               const next = applyChange(base, change, tempId, (a, s) => rowLoad(base, a, s));
@@ -110,8 +136,8 @@ export function usePlanActions({ swrKey, current }: { swrKey: string; current: (
             populateCache: (res, data) => withServerRows(data ?? before, res, temps),
             rollbackOnError: true,
             revalidate: (data) => needsRefetch(data),
-          }),
-        );
+          });
+        const result = await track(() => withOverride(what, save, override));
         if (!result) return;
         setUndoStack((st) => pushUndo(st, undoForChange(change, (id) => findSession(before, id) ?? undefined, result)));
         say("saved", `Saved: ${what}.`);
@@ -119,7 +145,7 @@ export function usePlanActions({ swrKey, current }: { swrKey: string; current: (
         await explain(e, what);
       }
     },
-    [current, explain, mutate, say, swrKey, track],
+    [current, explain, mutate, say, swrKey, track, withOverride],
   );
 
   /** Writes the server's answer into the grid and refetches the numbers. */
@@ -128,24 +154,25 @@ export function usePlanActions({ swrKey, current }: { swrKey: string; current: (
     [mutate, swrKey],
   );
 
-  const runOp = useCallback(async (op: UndoOp, versions: Map<number, number>, week: PlanWeek): Promise<PlanWriteResult> => {
+  const runOp = useCallback(async (op: UndoOp, versions: Map<number, number>, week: PlanWeek, override?: Override): Promise<PlanWriteResult> => {
     const v = (id: number) => versions.get(id) ?? findSession(week, id)?.version ?? 0;
+    const o = override ? { override } : {};
     switch (op.op) {
       case "remove":
         return write("DELETE", `${sessionPath(op.sessionId)}?version=${v(op.sessionId)}`);
       case "move":
-        return write("PATCH", sessionPath(op.sessionId), { version: v(op.sessionId), athleteId: op.athleteId, date: op.date });
+        return write("PATCH", sessionPath(op.sessionId), { version: v(op.sessionId), athleteId: op.athleteId, date: op.date, ...o });
       case "remove-block":
         return write("DELETE", `${sessionBlockPath(op.sessionId, op.blockId)}?version=${v(op.sessionId)}`);
       case "reinstate":
-        return write("PATCH", sessionPath(op.sessionId), { version: v(op.sessionId), status: "published" });
+        return write("PATCH", sessionPath(op.sessionId), { version: v(op.sessionId), status: "published", ...o });
       case "restore-fields": {
         const { blocks, ...fields } = op.fields;
-        return write("PATCH", sessionPath(op.sessionId), { version: v(op.sessionId), ...fields, blocks: blockBodies({ blocks }) });
+        return write("PATCH", sessionPath(op.sessionId), { version: v(op.sessionId), ...fields, blocks: blockBodies({ blocks }), ...o });
       }
       case "recreate": {
         const s = op.session;
-        return write("POST", teamSessionsPath(week.teamId), { from: "blank", athleteId: s.athleteId, date: s.date, startTime: s.startTime, durationMin: s.durationMin, title: s.title, plannedRpe: s.plannedRpe, notes: s.notes, blocks: blockBodies(s) });
+        return write("POST", teamSessionsPath(week.teamId), { from: "blank", athleteId: s.athleteId, date: s.date, startTime: s.startTime, durationMin: s.durationMin, title: s.title, plannedRpe: s.plannedRpe, notes: s.notes, blocks: blockBodies(s), ...o });
       }
     }
   }, []);
@@ -159,7 +186,7 @@ export function usePlanActions({ swrKey, current }: { swrKey: string; current: (
     try {
       await track(async () => {
         for (const op of entry.ops) {
-          const res = await runOp(op, versions, week);
+          const res = await withOverride(`the undo of the ${entry.label}`, (o) => runOp(op, versions, week, o));
           for (const s of res.sessions) versions.set(s.id, s.version);
           await settle(res);
         }
@@ -168,16 +195,17 @@ export function usePlanActions({ swrKey, current }: { swrKey: string; current: (
     } catch (e) {
       await explain(e, `Undo of the ${entry.label}`);
     }
-  }, [current, explain, runOp, say, settle, track, undoBox]);
+  }, [current, explain, runOp, say, settle, track, undoBox, withOverride]);
 
   const saveSession = useCallback(
     async (before: PlanSession, values: SessionEditValues, version: number) => {
-      const res = await track(() => write("PATCH", sessionPath(before.id), { version, ...values, notes: values.notes?.trim() ? values.notes : null }));
+      const body = { version, ...values, notes: values.notes?.trim() ? values.notes : null };
+      const res = await track(() => withOverride(`the changes to "${values.title}"`, (o) => write("PATCH", sessionPath(before.id), o ? { ...body, override: o } : body)));
       await settle(res);
       setUndoStack((st) => pushUndo(st, undoForEdit(before)));
       say("saved", `Saved "${values.title}".`);
     },
-    [say, settle, track],
+    [say, settle, track, withOverride],
   );
 
   const deleteSession = useCallback(
@@ -195,7 +223,7 @@ export function usePlanActions({ swrKey, current }: { swrKey: string; current: (
       const week = current();
       if (!week) return;
       try {
-        const res = await track(() => write("POST", weekToolPath(week.teamId, tool), { week: week.weekStart }));
+        const res = await track(() => withOverride("this copy of the week", (o) => write("POST", weekToolPath(week.teamId, tool), { week: week.weekStart, ...(o ? { override: o } : {}) })));
         await refetch();
         if (tool === "clear") setUndoStack([]);
         const n = res.sessions.length;
@@ -210,7 +238,7 @@ export function usePlanActions({ swrKey, current }: { swrKey: string; current: (
         await explain(e, "The week tool");
       }
     },
-    [current, explain, refetch, say, track],
+    [current, explain, refetch, say, track, withOverride],
   );
 
   const saveTemplate = useCallback(

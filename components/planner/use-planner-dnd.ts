@@ -6,7 +6,8 @@ import { FLAG_DISPLAY } from "@/lib/load/flag-display";
 import { formatNumber } from "@/lib/format/number";
 import { findSession, resolveDrop, type DragSource, type DropTarget, type PlanChange } from "@/lib/plan/drop";
 import { previewChange, type RowPreview } from "@/lib/plan/preview";
-import { restrictionsHit } from "@/lib/plan/restrictions";
+import { changeHits } from "@/lib/plan/restrictions";
+import type { RestrictionHit } from "@/lib/restrictions/rules";
 import type { PlanWeek } from "@/lib/plan/types";
 import { announcements, dragId, dropId, gridKeyboardCoordinates, SCREEN_READER_INSTRUCTIONS, type DragData, type DropData, type GridLayout } from "./dnd";
 import { describeChange, targetLabel } from "./describe";
@@ -21,13 +22,14 @@ declare global {
   }
 }
 
-export type Hover = { source: DragSource; target: DropTarget; rows: Map<number, RowPreview>; refusal: string | null; text: string };
-type Preview = { week: PlanWeek; key: string; outcome: ReturnType<typeof resolveDrop>; rows: RowPreview[] };
+export type Hover = { source: DragSource; target: DropTarget; rows: Map<number, RowPreview>; refusal: string | null; text: string; hits: RestrictionHit[] };
+type Preview = { week: PlanWeek; key: string; outcome: ReturnType<typeof resolveDrop>; rows: RowPreview[]; hits: RestrictionHit[] };
 
 type Args = {
   week: Latest<PlanWeek | undefined>;
   collapsed: Latest<ReadonlySet<string>>;
-  onDrop: (change: PlanChange) => void;
+  /** `hits`: the physio restrictions the change would go past (the caller asks for a reason first). */
+  onDrop: (change: PlanChange, hits: RestrictionHit[]) => void;
   onRefused: (reason: string) => void;
 };
 
@@ -84,7 +86,7 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
       const last = cache.get();
       if (last?.week === w && last.key === key) return last;
       const outcome = resolveDrop({ week: w, source, target, copy });
-      const next = { week: w, key, outcome, rows: outcome?.ok ? previewChange(w, outcome.change) : [] };
+      const next = { week: w, key, outcome, rows: outcome?.ok ? previewChange(w, outcome.change) : [], hits: outcome?.ok ? changeHits(w, outcome.change) : [] };
       cache.set(next);
       return next;
     },
@@ -120,7 +122,7 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
     (source: DragSource, target: DropTarget): string => {
       const w = week.get();
       if (!w) return "";
-      const { outcome, rows } = previewFor(w, source, target);
+      const { outcome, rows, hits } = previewFor(w, source, target);
       const where = targetLabel(w, target);
       if (!outcome) return `Over ${where}, where it already is.`;
       if (!outcome.ok) return `Over ${where}. Cannot drop here: ${outcome.reason}`;
@@ -129,7 +131,8 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
         const warn = r.warnings.map((f) => `${FLAG_DISPLAY[f.kind].label}: ${f.reason}`).join(" ");
         return `${name}: sRPE ${formatNumber(r.before.week.totals.srpe, 0)} to ${formatNumber(r.after.week.totals.srpe, 0)} AU.${warn ? ` ${warn}` : ""}`;
       });
-      return `Over ${where}. Dropping makes ${describeChange(w, outcome.change)}. ${parts.join(" ")}`;
+      const limits = hits.map((h) => `Physio restriction: ${h.rule}. ${h.detail}.`).join(" ");
+      return `Over ${where}. Dropping makes ${describeChange(w, outcome.change)}. ${parts.join(" ")}${limits ? ` ${limits} Dropping asks for a reason.` : ""}`;
     },
     [previewFor, week],
   );
@@ -156,9 +159,9 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
       }
       const t0 = performance.now();
       perfStart.set(t0);
-      const { outcome, rows } = previewFor(w, data.source, target);
+      const { outcome, rows, hits } = previewFor(w, data.source, target);
       window.__plannerPerf?.compute?.push(performance.now() - t0);
-      setHover({ source: data.source, target, rows: new Map(rows.map((r) => [r.athleteId, r])), refusal: outcome && !outcome.ok ? outcome.reason : null, text: outcome?.ok ? describeChange(w, outcome.change) : "" });
+      setHover({ source: data.source, target, rows: new Map(rows.map((r) => [r.athleteId, r])), refusal: outcome && !outcome.ok ? outcome.reason : null, text: outcome?.ok ? describeChange(w, outcome.change) : "", hits });
     },
     [perfStart, previewFor, week],
   );
@@ -189,9 +192,7 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
       const outcome = resolveDrop({ week: w, source: data.source, target, copy });
       if (!outcome) return;
       if (!outcome.ok) return onRefused(outcome.reason);
-      // Seam for physio restrictions: none exist yet, so nothing is hit and no override is asked for.
-      if (restrictionsHit(outcome.change).length > 0) return;
-      onDrop(outcome.change);
+      onDrop(outcome.change, changeHits(w, outcome.change));
     },
     [armCopy, armed, copies, onDragCancel, onDrop, onRefused, week],
   );

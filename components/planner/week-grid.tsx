@@ -1,9 +1,10 @@
 "use client";
 
 import { clsx } from "clsx";
-import { memo } from "react";
+import { memo, useMemo } from "react";
 import type { RowPreview } from "@/lib/plan/preview";
 import type { PlanWeek } from "@/lib/plan/types";
+import type { Restriction } from "@/lib/restrictions/rules";
 import { dayHeading } from "@/lib/plan/week";
 import { AthleteRow } from "./athlete-row";
 import { GroupRow, groupKey } from "./group-row";
@@ -19,9 +20,17 @@ type Props = {
   actions: CardActions;
 };
 
+const NO_RESTRICTIONS: Restriction[] = [];
+
 /** Rows = athletes grouped by training group; columns = the days of the team's week. */
 export const WeekGrid = memo(function WeekGrid({ week, collapsed, onToggleGroup, previews, templateDrag, copyArmedId, actions }: Props) {
   const byId = new Map(week.athletes.map((a) => [a.id, a]));
+  // One stable list per athlete, so rows stay memoised while something is dragged.
+  const limits = useMemo(() => {
+    const out = new Map<number, Restriction[]>();
+    for (const r of week.restrictions) out.set(r.athleteId, [...(out.get(r.athleteId) ?? []), r]);
+    return out;
+  }, [week.restrictions]);
   return (
     <div className="overflow-x-auto rounded-card bg-paper-raised shadow-card ring-1 ring-ink-100">
       <table data-testid="plan-grid" className="w-full min-w-[52rem] table-fixed border-collapse text-sm">
@@ -61,7 +70,7 @@ export const WeekGrid = memo(function WeekGrid({ week, collapsed, onToggleGroup,
                 : g.athleteIds.map((id) => {
                     const athlete = byId.get(id);
                     return athlete ? (
-                      <AthleteRow key={id} athlete={athlete} days={week.days} today={week.today} canEdit={week.canEdit} preview={previews.get(id) ?? null} copyArmedId={copyArmedId} actions={actions} />
+                      <AthleteRow key={id} athlete={athlete} restrictions={limits.get(id) ?? NO_RESTRICTIONS} days={week.days} today={week.today} canEdit={week.canEdit} preview={previews.get(id) ?? null} copyArmedId={copyArmedId} actions={actions} />
                     ) : null;
                   })}
             </tbody>

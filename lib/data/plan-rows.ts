@@ -6,6 +6,7 @@ import { normaliseBlock, type BlockContent } from "@/lib/plan/blocks";
 import { toPlanSession, toSnapshot, type SessionRow } from "@/lib/plan/dto";
 import type { PlanSession, PlanWriteResult, Touched } from "@/lib/plan/types";
 import { db, type PlannedSession } from "@/models";
+import { guardRestrictions, type Override } from "./restriction-guard";
 
 // Internals shared by the plan readers and writers (lib/data/plan.ts, lib/data/plan-sessions.ts).
 
@@ -105,9 +106,15 @@ export function change(kind: SessionChange["kind"], before: Loaded | null, after
   return { kind, athleteId: ref.athleteId, sessionId: ref.id, before: snapshotOf(before), after: snapshotOf(after) };
 }
 
-/** Hands the changes to notices inside the transaction, so a notice exists exactly when the change commits. */
-export async function notify({ transaction, teamId, actorUserId, changes }: { transaction: Transaction; teamId: number; actorUserId: number; changes: SessionChange[] }) {
-  if (changes.length > 0) await afterPlanChange({ transaction, teamId, actorUserId, changes });
+/**
+ * Every plan write ends here, inside its transaction: physio restrictions are checked first (a write that
+ * breaks one without a reason throws and rolls back), then notices are recorded, so a notice exists exactly
+ * when the change commits.
+ */
+export async function notify({ transaction, teamId, actorUserId, changes, override }: { transaction: Transaction; teamId: number; actorUserId: number; changes: SessionChange[]; override?: Override | null }) {
+  if (changes.length === 0) return;
+  await guardRestrictions({ transaction, teamId, actorUserId, changes, override });
+  await afterPlanChange({ transaction, teamId, actorUserId, changes });
 }
 
 /** The athletes' days a list of changes touched, each once. */

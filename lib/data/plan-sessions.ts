@@ -7,6 +7,7 @@ import { groupTargets } from "@/lib/plan/drop";
 import type { PlanWriteResult } from "@/lib/plan/types";
 import type { AddBlockInput, CreateSessionInput, SessionBlockBody, UpdateSessionInput } from "@/lib/validations/plan";
 import { db } from "@/models";
+import type { Override } from "./restriction-guard";
 import { getTemplate } from "./templates";
 import { assertAthletes, assertTemplateLinks, blockValues, bumped, change, insertBlocks, loadById, loadSessions, lockSession, notCancelled, notify, writeResult, type Loaded } from "./plan-rows";
 
@@ -48,8 +49,9 @@ export async function createSessions({ teamId, actorUserId, input }: Actor & { i
     const appended: Loaded[] = [];
     if (input.from === "blank") {
       await assertAthletes({ teamId, athleteIds: [input.athleteId], transaction });
-      const { from, ...fields } = input;
+      const { from, override, ...fields } = input;
       void from;
+      void override;
       created.push(await insertSession(teamId, fields, transaction));
     } else if (input.from === "copy") {
       const { loaded } = await lockSession({ teamId, sessionId: input.sessionId, transaction });
@@ -78,7 +80,7 @@ export async function createSessions({ teamId, actorUserId, input }: Actor & { i
       ...created.map((id) => change("created", null, after.get(id)!)),
       ...appended.map((before) => change("updated", before, after.get(before.dto.id)!)),
     ];
-    await notify({ transaction, teamId, actorUserId, changes });
+    await notify({ transaction, teamId, actorUserId, changes, override: input.override });
     return writeResult(after.values(), changes);
   });
 }
@@ -97,7 +99,7 @@ export async function updateSession({ teamId, actorUserId, sessionId, input }: A
   return tx(async (transaction) => {
     const { row, loaded } = await lockSession({ teamId, sessionId, version: input.version, transaction });
     const before = loaded.dto;
-    const { version, blocks, status, ...fields } = input;
+    const { version, blocks, status, override, ...fields } = input;
     void version;
     const reinstate = status === "published" && before.status === "cancelled";
     const publish = status === "published" && before.status === "draft";
@@ -114,7 +116,7 @@ export async function updateSession({ teamId, actorUserId, sessionId, input }: A
     await row.update({ ...fields, ...statusFields, ...bumped(row) }, { transaction });
     const after = (await loadById([sessionId], transaction)).get(sessionId)!;
     const changes = [change(publish ? "published" : "updated", loaded, after)];
-    await notify({ transaction, teamId, actorUserId, changes });
+    await notify({ transaction, teamId, actorUserId, changes, override });
     return writeResult([after], changes);
   });
 }
@@ -148,13 +150,13 @@ export async function addBlock({ teamId, actorUserId, sessionId, input }: Actor 
     const before = await appendBlocks(teamId, sessionId, [block], input.version, transaction);
     const after = (await loadById([sessionId], transaction)).get(sessionId)!;
     const changes = [change("updated", before, after)];
-    await notify({ transaction, teamId, actorUserId, changes });
+    await notify({ transaction, teamId, actorUserId, changes, override: input.override });
     return writeResult([after], changes);
   });
 }
 
 /** Rewrites or removes one block of a session (`block` null removes it). */
-export async function changeBlock({ teamId, actorUserId, sessionId, blockId, version, block }: Actor & { sessionId: number; blockId: number; version: number; block: SessionBlockBody | null }): Promise<PlanWriteResult> {
+export async function changeBlock({ teamId, actorUserId, sessionId, blockId, version, block, override }: Actor & { sessionId: number; blockId: number; version: number; block: SessionBlockBody | null; override?: Override }): Promise<PlanWriteResult> {
   return tx(async (transaction) => {
     const { row, loaded } = await lockSession({ teamId, sessionId, version, transaction });
     notCancelled(loaded.dto);
@@ -170,7 +172,7 @@ export async function changeBlock({ teamId, actorUserId, sessionId, blockId, ver
     await row.update(bumped(row), { transaction });
     const after = (await loadById([sessionId], transaction)).get(sessionId)!;
     const changes = [change("updated", loaded, after)];
-    await notify({ transaction, teamId, actorUserId, changes });
+    await notify({ transaction, teamId, actorUserId, changes, override });
     return writeResult([after], changes);
   });
 }

@@ -11,6 +11,8 @@ import { db } from "@/models";
 import { listGroups } from "./athletes";
 import { getSquadLoadInputs, historyRange } from "./load";
 import { bumped, change, insertBlocks, loadById, loadSessions, notify, type Loaded } from "./plan-rows";
+import type { Override } from "./restriction-guard";
+import { listRestrictions } from "./restrictions";
 import { listTemplates } from "./templates";
 
 export { addBlock, changeBlock, createSessions, deleteSession, updateSession } from "./plan-sessions";
@@ -37,11 +39,12 @@ export async function getPlanWeek({ teamId, date, today, audience }: { teamId: n
   const own = audience.scope === "own";
   if (own && audience.ownAthleteId === null) throw new AppError("not_found", "No athlete profile is linked to your account");
   const visible = (s: { status: string }) => !own || s.status !== "draft";
-  const [inputs, groups, weekRows, templates] = await Promise.all([
+  const [inputs, groups, weekRows, templates, restrictions] = await Promise.all([
     getSquadLoadInputs({ teamId, ...historyRange({ from: weekStart, to: weekEnd }) }),
     listGroups({ teamId }),
     loadSessions({ teamId, date: { [Op.between]: [weekStart, weekEnd] }, ...(own ? { athleteId: audience.ownAthleteId! } : {}) }),
     own ? Promise.resolve([]) : listTemplates({ teamId }),
+    listRestrictions({ teamId, from: weekStart, ...(own ? { athleteIds: [audience.ownAthleteId!] } : {}) }),
   ]);
   const squad: SquadAthleteInput[] = inputs.athletes
     .filter((a) => !own || a.id === audience.ownAthleteId)
@@ -83,6 +86,7 @@ export async function getPlanWeek({ teamId, date, today, audience }: { teamId: n
     groups: planGroups,
     athletes,
     templates,
+    restrictions: restrictions.filter((r) => r.startsOn <= weekEnd),
     canEdit: audience.canEdit,
     scope: audience.scope,
   };
@@ -130,7 +134,7 @@ export async function getSession({ teamId, sessionId }: { teamId: number; sessio
   return loaded.dto;
 }
 
-type WeekTool = { teamId: number; actorUserId: number; date: string };
+type WeekTool = { teamId: number; actorUserId: number; date: string; override?: Override };
 
 async function weekTx<T>({ teamId, date }: WeekTool, fn: (t: Transaction, weekStart: string, inWeek: Loaded[]) => Promise<T>): Promise<T> {
   const { weekStart, weekEnd } = await teamWeek({ teamId, date });
@@ -152,7 +156,7 @@ export async function copyWeekToNext(tool: WeekTool): Promise<PlanWriteResult> {
       created.push(row.id);
     }
     const after = await loadById(created, transaction);
-    await notify({ transaction, teamId: tool.teamId, actorUserId: tool.actorUserId, changes: created.map((id) => change("created", null, after.get(id)!)) });
+    await notify({ transaction, teamId: tool.teamId, actorUserId: tool.actorUserId, changes: created.map((id) => change("created", null, after.get(id)!)), override: tool.override });
     return { sessions: [...after.values()].map((l) => l.dto), removedIds: [] };
   });
 }

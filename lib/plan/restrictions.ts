@@ -1,18 +1,34 @@
-import type { PlanChange } from "./drop";
+import { newHits, restrictionHits, type Restriction, type RestrictionHit } from "@/lib/restrictions/rules";
+import { sessionsAfter, tempIdCounter } from "./apply";
+import { toBlockInput } from "./blocks";
+import { findSession, type PlanChange } from "./drop";
+import type { PlanSession, PlanWeek } from "./types";
 
-/**
- * Seam for physio restrictions (e.g. "no max-velocity work until a date", "contact cap"). The physio feature
- * does not exist yet, so every athlete has none and no drop asks for an override. When it lands, the grid
- * calls these before saving a drop and asks for a reason when `restrictionsHit` is not empty.
- */
-export type Restriction = { id: number; athleteId: number; summary: string };
-
-export function restrictionsFor(athleteId: number): Restriction[] {
-  void athleteId;
-  return [];
+/** The physio restrictions a session in the grid breaks (same check as the server's). */
+export function sessionHits(week: { restrictions: readonly Restriction[] }, s: PlanSession): RestrictionHit[] {
+  if (week.restrictions.length === 0) return [];
+  return restrictionHits(week.restrictions, { athleteId: s.athleteId, date: s.date, status: s.status, blocks: s.blocks.map(toBlockInput) });
 }
 
-export function restrictionsHit(change: PlanChange): Restriction[] {
-  void change;
-  return [];
+/**
+ * What a drop would add against restrictions, computed in the browser before it is saved: the grid warns
+ * while hovering and asks for a reason on drop. The server runs the same rules on the saved result.
+ */
+export function changeHits(week: PlanWeek, change: PlanChange): RestrictionHit[] {
+  if (week.restrictions.length === 0) return [];
+  const seen = new Set<string>();
+  const out: RestrictionHit[] = [];
+  // Far from the optimistic sessions' temporary ids, so a new session never matches one already shown.
+  for (const list of sessionsAfter(week, change, tempIdCounter(-2_000_000_000)).values()) {
+    for (const s of list) {
+      const prev = findSession(week, s.id);
+      for (const h of newHits(prev ? sessionHits(week, prev) : [], sessionHits(week, s))) {
+        const key = `${h.restrictionId}:${h.athleteId}:${h.date}`;
+        if (seen.has(key)) continue;
+        seen.add(key);
+        out.push(h);
+      }
+    }
+  }
+  return out;
 }

@@ -3,6 +3,7 @@ import type { Flag, FlagLevel } from "@/lib/load/flags";
 import type { AthleteProfile, BlockKind, LogInput, PlyoDrill, RunningPrescription, SessionStatus, TeamLoadSettings } from "@/lib/load/types";
 import type { WeekPreviewContext } from "@/lib/load/week-preview";
 import type { WeekSummary } from "@/lib/load/week-summary";
+import type { Restriction } from "@/lib/restrictions/rules";
 
 export type PlanBlock = {
   id: number;
@@ -81,6 +82,8 @@ export type PlanWeek = {
   groups: PlanGroup[];
   athletes: PlanAthlete[];
   templates: PlanTemplate[];
+  /** Physio restrictions that apply on some day of the week, for the athletes shown. */
+  restrictions: Restriction[];
   /** The viewer may change the plan (head coach, coach). */
   canEdit: boolean;
   /** "own": an athlete seeing only their own row. */

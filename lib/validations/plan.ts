@@ -13,6 +13,13 @@ const rpeSchema = z.number({ error: "Enter an RPE from 0 to 10" }).min(0, "CR-10
 const titleSchema = z.string({ error: "Give it a title" }).trim().min(1, "Give it a title").max(120, "Keep the title under 120 characters");
 const notesSchema = z.string().trim().max(2000, "Keep notes under 2000 characters").nullable();
 
+/** A coach's reason to plan past a physio restriction; recorded and sent to the medical staff. */
+export const overrideSchema = z.object({
+  reason: z.string({ error: "Say why the session should go ahead" }).trim().min(3, "Say why the session should go ahead (3 characters or more)").max(500, "Keep the reason under 500 characters"),
+});
+export type OverrideInput = z.infer<typeof overrideSchema>;
+const overrideField = { override: overrideSchema.optional() };
+
 export const teamParamsSchema = z.object({ teamId: idSchema });
 export const sessionParamsSchema = z.object({ sessionId: idSchema });
 export const blockParamsSchema = z.object({ sessionId: idSchema, blockId: idSchema });
@@ -22,7 +29,7 @@ export const templateParamsSchema = z.object({ templateId: idSchema });
 export const weekQuerySchema = z.object({ week: localDateSchema.optional() });
 
 /** Body of the week tools (copy to next, clear, publish). */
-export const weekToolSchema = z.object({ week: localDateSchema });
+export const weekToolSchema = z.object({ week: localDateSchema, ...overrideField });
 
 /** A block inside a session; `templateId` says which shelf template it was copied from (JSON body: a number). */
 export const sessionBlockSchema = blockSchema.and(z.object({ templateId: z.number().int().positive().nullable().optional() }));
@@ -42,6 +49,7 @@ export const createSessionSchema = z
     plannedRpe: rpeSchema,
     notes: notesSchema.default(null),
     blocks: z.array(sessionBlockSchema).max(20, "At most 20 blocks"),
+    ...overrideField,
   }),
   /** A template dropped on an athlete's day or on a group's day. */
   z.object({
@@ -50,6 +58,7 @@ export const createSessionSchema = z
     date: localDateSchema,
     athleteId: idSchema.optional(),
     groupId: idSchema.optional(),
+    ...overrideField,
   }),
   /** A copy of an existing session onto another day or athlete (always a new draft). */
   z.object({
@@ -57,6 +66,7 @@ export const createSessionSchema = z
     sessionId: idSchema,
     athleteId: idSchema,
     date: localDateSchema,
+    ...overrideField,
   }),
   ], { error: 'Say where the session comes from: "blank", "template" or "copy"' })
   .superRefine((v, ctx) => {
@@ -86,6 +96,7 @@ export const updateSessionSchema = sessionEditSchema
     date: localDateSchema.optional(),
     /** Only "published": publishes a draft, or brings back a cancelled session. */
     status: z.literal("published", { error: "Only published can be set here; delete a session to cancel it" }).optional(),
+    ...overrideField,
   })
   .strict();
 export type UpdateSessionInput = z.infer<typeof updateSessionSchema>;
@@ -95,7 +106,7 @@ export const versionQuerySchema = z.object({ version: z.coerce.number({ error: "
 
 /** POST /api/sessions/[id]/blocks: append a template's content or a written block. */
 export const addBlockSchema = z
-  .object({ version: versionSchema, templateId: idSchema.optional(), block: sessionBlockSchema.optional() })
+  .object({ version: versionSchema, templateId: idSchema.optional(), block: sessionBlockSchema.optional(), ...overrideField })
   .strict()
   .superRefine((v, ctx) => {
     if ((v.templateId === undefined) === (v.block === undefined)) {
@@ -105,4 +116,4 @@ export const addBlockSchema = z
 export type AddBlockInput = z.infer<typeof addBlockSchema>;
 
 /** PATCH /api/sessions/[id]/blocks/[blockId] */
-export const updateBlockSchema = z.object({ version: versionSchema, block: sessionBlockSchema });
+export const updateBlockSchema = z.object({ version: versionSchema, block: sessionBlockSchema, ...overrideField });

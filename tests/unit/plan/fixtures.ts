@@ -82,6 +82,7 @@ export function planWeek(specs: AthleteSpec[]): PlanWeek {
     groups: groupIds.map((g) => ({ id: g, name: g === null ? "No group" : `Group ${g}`, athleteIds: specs.filter((a) => a.groupId === g).map((a) => a.id) })),
     athletes,
     templates,
+    restrictions: [],
     canEdit: true,
     scope: "team",
   };
