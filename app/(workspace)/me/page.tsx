@@ -1,4 +1,5 @@
 import { FeedCard } from "@/components/calendar/feed-card";
+import { MyRestrictions } from "@/components/restrictions/my-restrictions";
 import { EmptyState, PageHeader } from "@/components/ui/card";
 import { pageViewer } from "@/lib/auth/page-access";
 import { getCalendarFeedStatus, listAthleteSessions, type AthleteSession } from "@/lib/data/calendar-tokens";
@@ -51,6 +52,7 @@ export default async function MyTrainingPage() {
       <PageHeader title="My training" lead="This week and next, as your coach published them. Log each session after you did it." />
       <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
         <div className="space-y-6">
+          <MyRestrictions teamId={viewer.teamId} athleteId={viewer.athleteId} today={today} />
           <Week title="This week" from={thisWeek} sessions={sessions.filter((s) => s.date < nextWeek)} today={today} testId="week-this" />
           <Week title="Next week" from={nextWeek} sessions={sessions.filter((s) => s.date >= nextWeek)} today={today} testId="week-next" />
         </div>

@@ -3,6 +3,7 @@ import { notFound } from "next/navigation";
 import { Card, PageHeader } from "@/components/ui/card";
 import { pageAthlete } from "@/lib/auth/page-access";
 import { FeedCard } from "@/components/calendar/feed-card";
+import { AthleteRestrictions } from "@/components/restrictions/athlete-restrictions";
 import { AthleteForm } from "@/components/squad/athlete-form";
 import { scopeOf } from "@/lib/auth/permissions";
 import { getAthlete, listGroups } from "@/lib/data/athletes";
@@ -49,6 +50,9 @@ export default async function AthleteProfilePage({ params }: { params: Promise<{
           ))}
         </dl>
       </Card>
+      <div className="mt-6">
+        <AthleteRestrictions viewer={viewer} athleteId={athlete.id} />
+      </div>
       {feed ? (
         <div className="mt-6">
           <FeedCard athleteId={athlete.id} initial={feed} />
