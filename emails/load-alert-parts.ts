@@ -11,8 +11,8 @@ export interface LoadAlertItem {
   value: number;
   threshold: number;
   unit?: string | null;
-  /** Whether the value went over (default) or under the threshold. */
-  direction?: "above" | "below";
+  /** Whether the value went over (default) or under the threshold; "count" = a tally with no threshold. */
+  direction?: "above" | "below" | "count";
   /** The day the flag concerns, YYYY-MM-DD. */
   date: string;
   /** Flags on the plan warn ahead; flags on logged sessions report what happened. */
@@ -32,6 +32,14 @@ export function basisLabel(basis: LoadAlertItem["basis"]): string {
 
 export function alertFacts(alert: LoadAlertItem): Array<readonly [string, string]> {
   const side = alert.direction === "below" ? "below" : "above";
+  if (alert.direction === "count") {
+    return [
+      ["Flag", alert.flagLabel],
+      [alert.metricLabel, formatMetricValue(alert.value, alert.unit)],
+      ["Day", formatDayLong(alert.date)],
+      ["Based on", basisLabel(alert.basis)],
+    ];
+  }
   return [
     ["Flag", alert.flagLabel],
     ["Metric", alert.metricLabel],

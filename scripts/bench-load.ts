@@ -192,7 +192,11 @@ function main(): void {
   console.log(`  bare B   ${ms(bareB)}  block maths + daily sums + EWMA, over inputs pre-extracted to typed arrays`);
   console.log(`  ratio    engine / bare A: ${ratio(engine, bareA)}; engine / bare B: ${ratio(engine, bareB)}`);
   console.log(`  targets  total < ${TARGET_TOTAL_MS} ms: ${engine.wall < TARGET_TOTAL_MS ? "met" : "NOT met"}`);
-  console.log(`           within ${TARGET_RATIO}× of bare A: ${within(engine, bareA)}; within ${TARGET_RATIO}× of bare B: ${within(engine, bareB)}\n`);
+  // The target's "bare single pass over the same numbers" is bare B: the same inputs (the prescriptions) in typed
+  // arrays, one pass to the same outputs. Bare A starts from daily sums already made, so it skips the block maths
+  // the engine must do from sessions; it is printed as a lower bound, not as the target.
+  console.log(`           within ${TARGET_RATIO}× of the bare single pass over the same numbers (bare B): ${within(engine, bareB)}`);
+  console.log(`           for reference, engine / bare A (EWMA only, no block maths): ${ratio(engine, bareA)}\n`);
 
   // For information: the per-athlete API with day rows for the whole two years, and the drag preview.
   const a0 = squad[0];

@@ -16,7 +16,7 @@ const ROLES = [
   },
   {
     who: "Physios",
-    what: "See the whole squad's load, get an e-mail and an in-app alert the moment a spike is planned or happens, and follow up on each alert with a note.",
+    what: "See the whole squad's load, set restrictions the planner enforces, get an e-mail and an in-app alert the moment a spike is planned or happens (or a coach plans past a restriction), and follow up on each alert with a note.",
   },
 ];
 

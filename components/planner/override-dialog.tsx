@@ -40,10 +40,12 @@ export function OverrideProvider({ children }: { children: ReactNode }) {
 
 function OverrideForm({ request, onDone }: { request: OverrideRequest; onDone: (reason: string | null) => void }) {
   const { register, handleSubmit, formState } = useForm<OverrideInput>({ resolver: zodResolver(overrideSchema), defaultValues: { reason: "" } });
+  const people = [...new Set(request.hits.map((h) => request.athleteName(h.athleteId)))];
+  const whom = people.length === 1 ? people[0] : "these athletes";
   return (
     <form onSubmit={handleSubmit((v) => onDone(v.reason))} noValidate className="space-y-4">
       <p className="text-sm text-ink-600">
-        The medical staff limited what these athletes should do. You can still plan {request.what}; your reason is kept with the session and sent to the medical staff.
+        The medical staff limited what {whom} should do. You can still plan {request.what}; your reason is kept with the session and sent to the medical staff.
       </p>
       <ul className="space-y-2">
         {request.hits.map((h) => (
@@ -53,6 +55,11 @@ function OverrideForm({ request, onDone }: { request: OverrideRequest; onDone: (
             </span>
             <span className="block text-ink-700">{h.rule}</span>
             <span className="block text-xs text-ink-600">In the session: {h.detail}</span>
+            {h.note ? (
+              <span className="mt-1 block text-xs italic text-ink-600">
+                “{h.note}” · {h.setByName}
+              </span>
+            ) : null}
           </li>
         ))}
       </ul>

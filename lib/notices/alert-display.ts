@@ -27,7 +27,7 @@ function isMetric(value: string | null): value is Metric {
 export type AlertFacts = { kind: AlertKind; metric: string | null };
 
 /** What was measured, its unit, and whether the threshold is a ceiling or a floor. */
-export function alertMeasure(alert: AlertFacts): { metricLabel: string; unit: string | null; direction: "above" | "below" } {
+export function alertMeasure(alert: AlertFacts): { metricLabel: string; unit: string | null; direction: "above" | "below" | "count" } {
   switch (alert.kind) {
     case "spike":
       return { metricLabel: `ACWR (${isMetric(alert.metric) ? METRIC_INFO[alert.metric].short : "load"})`, unit: null, direction: "above" };
@@ -38,7 +38,7 @@ export function alertMeasure(alert: AlertFacts): { metricLabel: string; unit: st
     case "recovery":
       return { metricLabel: "Time between high-intensity sessions", unit: "h", direction: "below" };
     case "restriction_override":
-      return { metricLabel: isMetric(alert.metric) ? METRIC_INFO[alert.metric].label : "Restriction", unit: null, direction: "above" };
+      return { metricLabel: "Overrides that week", unit: null, direction: "count" };
   }
 }
 

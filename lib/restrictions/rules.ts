@@ -45,6 +45,9 @@ export type RestrictionHit = {
   rule: string;
   /** What in the session breaks it ("Flying 30s: max velocity"). */
   detail: string;
+  /** The medical staff's note and who set it, so the coach reads why before overriding. */
+  note: string;
+  setByName: string;
 };
 
 export const RESTRICTION_RULE_LABEL: Record<RestrictionRuleKind, string> = {
@@ -127,7 +130,7 @@ export function restrictionHits(restrictions: readonly Restriction[], session: R
     if (r.athleteId !== session.athleteId || !isActiveOn(r, session.date)) continue;
     const breaches = ruleBreaches(r, session.blocks);
     if (breaches.length === 0) continue;
-    hits.push({ restrictionId: r.id, athleteId: r.athleteId, date: session.date, rule: describeRestriction(r), detail: breaches.join("; ") });
+    hits.push({ restrictionId: r.id, athleteId: r.athleteId, date: session.date, rule: describeRestriction(r), detail: breaches.join("; "), note: r.note, setByName: r.setByName });
   }
   return hits;
 }

@@ -173,6 +173,55 @@ describeBrowser("planner journeys", () => {
     await screenshot(page, "planner-spike-after");
   });
 
+  it("warns before a drop past a physio restriction, asks for a reason, and records the override", async () => {
+    // The physio (through the API) rules out max-velocity running for Ruben for the whole test week.
+    const ruben = ids("Ruben Astley");
+    const staff = await apiSession(app, physio.email);
+    const set = await staff.fetch(`/api/athletes/${ruben}/restrictions`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ rule: "no_kind", blockKinds: ["max_velocity"], startsOn: day(0), endsOn: day(6), note: "Calf strain, grade 1: no flying sprints this week" }),
+    });
+    expect(set.status).toBe(201);
+    await page.reload();
+    await page.getByTestId("plan-grid").waitFor();
+    expect(await row(page, ruben).getByTestId("row-restriction").textContent()).toMatch(/Physio restriction/);
+
+    // Hovering says so before the drop; dropping asks why; "keep the plan" saves nothing.
+    const target = cell(page, ruben, day(2));
+    await drag(page, template(page, "max_velocity"), target, {
+      hold: async () => {
+        await page.getByTestId("drop-restriction").waitFor({ timeout: 5000 });
+        expect(await page.getByTestId("drop-restriction").textContent()).toMatch(/No max velocity/);
+        await shotDuringDrag(page, "planner-restriction-warning");
+      },
+    });
+    const dialog = page.getByTestId("override-dialog");
+    await dialog.getByTestId("override-hit").waitFor();
+    expect(await dialog.getByTestId("override-hit").textContent()).toMatch(/Ruben Astley.*No max velocity/s);
+    await dialog.getByTestId("override-cancel").click();
+    await settled(page);
+    expect(await cards(page, ruben, day(2)).count()).toBe(0);
+
+    // Again, with a reason (a too-short one is refused in the form first).
+    await drag(page, template(page, "max_velocity"), target);
+    await dialog.getByTestId("override-reason").fill("ok");
+    await dialog.getByTestId("override-confirm").click();
+    await dialog.locator('[role="alert"]').waitFor();
+    await dialog.getByTestId("override-reason").fill("Cleared by the physio at today's check; flys capped at 20 m");
+    await screenshot(page, "planner-override-dialog");
+    await dialog.getByTestId("override-confirm").click();
+    await cards(page, ruben, day(2)).first().waitFor();
+    await settled(page);
+    expect(await cards(page, ruben, day(2)).first().getByTestId("card-restricted").count()).toBe(1);
+
+    // The medical staff see the override with its reason, and have an alert for it.
+    const list = (await (await staff.fetch(`/api/athletes/${ruben}/restrictions`)).json()) as { overrides: { reason: string; sessionDate: string }[] };
+    expect(list.overrides).toEqual([expect.objectContaining({ reason: "Cleared by the physio at today's check; flys capped at 20 m", sessionDate: day(2) })]);
+    const alerts = (await (await staff.fetch(`/api/alerts?status=all&athleteId=${ruben}`)).json()) as { alerts: { kind: string }[] };
+    expect(alerts.alerts.map((a) => a.kind)).toContain("restriction_override");
+  });
+
   it("drags with the keyboard, and announces the drop's effect", async () => {
     const first = plan.groups[0].athleteIds[0];
     const handle = template(page, "acceleration").locator("button").first();
