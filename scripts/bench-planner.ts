@@ -67,8 +67,12 @@ async function main() {
 
     // Drops: the page records drop → saved (the server's answer painted) and drop → server numbers (refetch painted).
     await page.evaluate(() => Object.assign(window.__plannerPerf!, { saved: [], confirmed: [] }));
+    // Rows under a physio restriction ask for a reason on drop (a person typing); the timed drops avoid them.
+    const free = await page.evaluate(() =>
+      [...document.querySelectorAll('[data-testid="day-cell"]')].flatMap((c, i) => (c.closest("tr")?.querySelector('[data-testid="row-restriction"]') ? [] : [i])),
+    );
     for (let i = 0; i < DROPS; i++) {
-      const target = cells.nth((i * 9) % n);
+      const target = cells.nth(free[(i * 9) % free.length]!);
       const from = await centre(template);
       await page.mouse.move(from.x, from.y);
       await page.mouse.down();
