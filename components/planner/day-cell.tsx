@@ -1,29 +1,42 @@
 "use client";
 
-import { useDroppable } from "@dnd-kit/core";
 import { clsx } from "clsx";
-import type { ReactNode } from "react";
+import { useSyncExternalStore, type ReactNode } from "react";
 import type { DropTarget } from "@/lib/plan/drop";
-import { dropId, type DropData } from "./dnd";
+import { dropId } from "./dnd";
+import type { HoverStore } from "./hover-store";
 
-/** A drop zone in the grid: one athlete's day, or a group's day (templates only). */
-export function DropCell({ target, label, enabled, today, hint, children, className }: { target: DropTarget; label: string; enabled: boolean; today: boolean; hint?: string; children?: ReactNode; className?: string }) {
-  const data: DropData = { target, label };
-  const { setNodeRef, isOver, active } = useDroppable({ id: dropId(target), data, disabled: !enabled });
-  const dragging = enabled && active !== null;
+const never = () => false;
+
+/** Whether the dragged item points at this cell; only the cells that flip re-render. */
+function useIsOver(store: HoverStore, target: DropTarget): boolean {
+  const id = dropId(target);
+  return useSyncExternalStore(
+    store.subscribe,
+    () => {
+      const t = store.get()?.target;
+      return t !== undefined && dropId(t) === id;
+    },
+    never,
+  );
+}
+
+/** One day of a row: one athlete's day, or a group's day (templates only). `enabled`: items can be dropped here. */
+export function DropCell({ store, target, label, enabled, today, hint, children, className }: { store: HoverStore; target: DropTarget; label: string; enabled: boolean; today: boolean; hint?: string; children?: ReactNode; className?: string }) {
+  const isOver = useIsOver(store, target);
   return (
     <td
-      ref={setNodeRef}
       data-testid={target.type === "cell" ? "day-cell" : "group-cell"}
       data-athlete-id={target.type === "cell" ? target.athleteId : undefined}
       data-group-id={target.type === "group" ? target.groupId : undefined}
       data-date={target.date}
+      data-drop={enabled ? "on" : undefined}
       data-over={isOver || undefined}
       aria-label={label}
       className={clsx(
         "relative border-l border-ink-100 align-top transition-colors",
         today && "bg-clay-50/40",
-        dragging && "bg-ink-50/40",
+        "group-data-[dragging=true]/grid:bg-ink-50/40",
         isOver && "!bg-lane-50 outline-2 -outline-offset-2 outline-lane-400 outline-dashed",
         className,
       )}

@@ -6,12 +6,20 @@ import { formatNumber } from "@/lib/format/number";
 import type { RowPreview } from "@/lib/plan/preview";
 import type { PlanWeek } from "@/lib/plan/types";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
+import { useHover, usePreviewTiming, type HoverStore } from "./hover-store";
 
 /**
  * While something is dragged over a day: what the drop would do and which flags it would raise, with the
  * reasons. It floats at the bottom of the screen so the grid never shifts under the pointer.
  */
-export function DropPreviewPanel({ week, text, refusal, rows, hits, copying }: { week: PlanWeek; text: string; refusal: string | null; rows: RowPreview[]; hits: readonly RestrictionHit[]; copying: boolean }) {
+export function DropPreviewPanel({ store, week, copying }: { store: HoverStore; week: PlanWeek; copying: boolean }) {
+  const hover = useHover(store);
+  usePreviewTiming(store, hover);
+  if (!hover || (!hover.refusal && !hover.text)) return null;
+  return <PreviewCard week={week} text={hover.text} refusal={hover.refusal} rows={[...hover.rows.values()]} hits={hover.hits} copying={copying} />;
+}
+
+function PreviewCard({ week, text, refusal, rows, hits, copying }: { week: PlanWeek; text: string; refusal: string | null; rows: RowPreview[]; hits: readonly RestrictionHit[]; copying: boolean }) {
   const name = (id: number) => week.athletes.find((a) => a.id === id)?.name ?? "";
   const warned = rows.filter((r) => r.warnings.length > 0);
   const flagged = warned.length > 0 || hits.length > 0;

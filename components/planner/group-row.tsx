@@ -4,14 +4,15 @@ import { clsx } from "clsx";
 import { memo } from "react";
 import type { PlanGroup } from "@/lib/plan/types";
 import { DropCell } from "./day-cell";
+import type { HoverStore } from "./hover-store";
 import { formatDayShort } from "@/lib/format/dates";
 
-type Props = { group: PlanGroup; days: string[]; today: string; collapsed: boolean; onToggle: (key: string) => void; templateDrag: boolean; canEdit: boolean };
+type Props = { group: PlanGroup; days: string[]; today: string; collapsed: boolean; onToggle: (key: string) => void; templateDrag: boolean; canEdit: boolean; hoverStore: HoverStore };
 
 export const groupKey = (g: PlanGroup) => `group:${g.id ?? "none"}`;
 
 /** A training group's header: folds its athletes away, and takes a template on a day for the whole group. */
-export const GroupRow = memo(function GroupRow({ group, days, today, collapsed, onToggle, templateDrag, canEdit }: Props) {
+export const GroupRow = memo(function GroupRow({ group, days, today, collapsed, onToggle, templateDrag, canEdit, hoverStore }: Props) {
   const count = group.athleteIds.length;
   const droppable = canEdit && group.id !== null;
   return (
@@ -34,6 +35,7 @@ export const GroupRow = memo(function GroupRow({ group, days, today, collapsed, 
         group.id !== null ? (
           <DropCell
             key={date}
+            store={hoverStore}
             target={{ type: "group", groupId: group.id, date }}
             label={`Whole group ${group.name}, ${formatDayShort(date)}`}
             enabled={droppable}

@@ -7,7 +7,6 @@ import useSWR from "swr";
 import { LoadCaution } from "@/components/ui/caution";
 import { findSession, type PlanChange } from "@/lib/plan/drop";
 import { planWeekKey } from "@/lib/plan/keys";
-import type { RowPreview } from "@/lib/plan/preview";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
 import { typicalProfile } from "@/lib/plan/typical";
 import type { PlanSession, PlanTemplate, PlanWeek } from "@/lib/plan/types";
@@ -16,7 +15,6 @@ import { fetchWeek } from "./api";
 import { BlockShelf } from "./block-shelf";
 import { ConfirmProvider, removeQuestion, useConfirm } from "./confirm";
 import { describeChange } from "./describe";
-import { plannerCollision } from "./dnd";
 import { DropPreviewPanel } from "./drop-preview-panel";
 import { useBox, useLatest } from "./latest";
 import { NoticeToast } from "./notice-toast";
@@ -32,7 +30,6 @@ import { WeekHeader } from "./week-header";
 
 // Only the page scrolls while dragging (vertically); watching the grid's own scroll box costs frames.
 const AUTO_SCROLL = { threshold: { x: 0, y: 0.12 }, canScroll: (el: Element) => el === document.scrollingElement };
-const NO_PREVIEWS: ReadonlyMap<number, RowPreview> = new Map();
 const noop = () => {};
 const subscribeNothing = () => noop;
 
@@ -165,7 +162,7 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
   const typical = useMemo(() => typicalProfile(profiles), [profiles]);
   const editingSession = shown && editing !== null ? findSession(shown, editing) : null;
   const editingAthlete = editingSession ? shown?.athletes.find((a) => a.id === editingSession.athleteId) : undefined;
-  const { active, hover, copying } = dnd;
+  const { active, hoverStore, copying } = dnd;
   const overlaySession = active?.source.type === "session" && shown ? findSession(shown, active.source.sessionId) : null;
   const overlayTemplateId = active?.source.type === "template" ? active.source.templateId : null;
   const overlayTemplate = shown?.templates.find((t) => t.id === overlayTemplateId);
@@ -177,13 +174,13 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
       {error && !shown ? <p className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">The plan could not be loaded: {error instanceof Error ? error.message : "unknown error"}.</p> : null}
       {!shown && isLoading ? <div className="h-96 animate-pulse rounded-card bg-paper-sunk" data-testid="plan-loading" /> : null}
       {shown ? (
-        <DndContext sensors={dnd.sensors} collisionDetection={plannerCollision} accessibility={dnd.accessibility} onDragStart={dnd.onDragStart} onDragOver={dnd.onDragOver} onDragEnd={dnd.onDragEnd} onDragCancel={dnd.onDragCancel} autoScroll={AUTO_SCROLL}>
+        <DndContext sensors={dnd.sensors} accessibility={dnd.accessibility} onDragStart={dnd.onDragStart} onDragMove={dnd.onDragMove} onDragEnd={dnd.onDragEnd} onDragCancel={dnd.onDragCancel} autoScroll={AUTO_SCROLL}>
           {!shown.canEdit ? (
             <p className="mb-3 rounded-lg bg-paper-sunk px-3 py-2 text-xs text-ink-600" data-testid="read-only">
               {shown.scope === "own" ? "Your published sessions this week. Coaches plan them; open a card to see what it asks." : "Read-only: coaches and the head coach change the plan. Open a card to see its blocks."}
             </p>
           ) : null}
-          {hover && (hover.refusal || hover.text) ? <DropPreviewPanel week={shown} text={hover.text} refusal={hover.refusal} rows={[...hover.rows.values()]} hits={hover.hits} copying={copying} /> : null}
+          <DropPreviewPanel store={hoverStore} week={shown} copying={copying} />
           <div className="mb-2 flex items-center justify-between gap-3">
             <DragHint active={active?.source.type ?? null} copying={copying} canEdit={shown.canEdit} />
             {shown.canEdit ? (
@@ -197,7 +194,7 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
               {shown.athletes.length === 0 ? (
                 <p className="rounded-card border border-dashed border-ink-200 px-6 py-10 text-center text-sm text-ink-500">No athletes in the team yet. Add them on the squad screen.</p>
               ) : (
-                <WeekGrid week={shown} collapsed={collapsed} onToggleGroup={toggleGroup} previews={hover?.rows ?? NO_PREVIEWS} templateDrag={active?.source.type === "template"} copyArmedId={dnd.copyArmedId} actions={actions} />
+                <WeekGrid week={shown} collapsed={collapsed} onToggleGroup={toggleGroup} hoverStore={hoverStore} templateDrag={active?.source.type === "template"} dragging={active !== null && shown.canEdit} copyArmedId={dnd.copyArmedId} actions={actions} />
               )}
               <LoadCaution />
               <p className="text-2xs text-ink-400">
@@ -206,7 +203,7 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
             </div>
             {shown.canEdit && shelfOpen ? <BlockShelf templates={shown.templates} canEdit onEdit={editTemplate} onNew={newTemplate} /> : null}
           </div>
-          <DragOverlay dropAnimation={null}>
+          <DragOverlay dropAnimation={null} className="pointer-events-none">
             {overlaySession ? (
               <div className="relative">
                 <SessionCard session={overlaySession} athleteName="" canEdit={false} copyArmed={false} flags={[]} actions={actions} overlay />

@@ -1,6 +1,7 @@
 "use client";
 
 import { clsx } from "clsx";
+import { memo } from "react";
 import { FLAG_DISPLAY, flagClasses } from "@/lib/load/flag-display";
 import type { Flag } from "@/lib/load/flags";
 import { formatNumber } from "@/lib/format/number";
@@ -24,7 +25,7 @@ export function zoneFlag(flags: readonly Flag[]): Flag | null {
 }
 
 /** Week totals and the ACWR badge of a row; while a drop is previewed, "now → would be". */
-export function RowLoadSummary({ load, preview, raised = [] }: { load: RowLoad; preview: RowLoad | null; raised?: readonly Flag[] }) {
+export const RowLoadSummary = memo(function RowLoadSummary({ load, preview, raised = [] }: { load: RowLoad; preview: RowLoad | null; raised?: readonly Flag[] }) {
   const isNew = (kind: Flag["kind"]) => raised.some((f) => f.kind === kind);
   const shown = preview ?? load;
   const zone = zoneFlag(shown.flags);
@@ -80,4 +81,4 @@ export function RowLoadSummary({ load, preview, raised = [] }: { load: RowLoad; 
       </div>
     </div>
   );
-}
+});

@@ -1,7 +1,7 @@
 "use client";
 
-import { KeyboardSensor, PointerSensor, useSensor, useSensors, type DragEndEvent, type DragOverEvent, type DragStartEvent } from "@dnd-kit/core";
-import { useCallback, useEffect, useLayoutEffect, useMemo, useState } from "react";
+import { KeyboardSensor, PointerSensor, useSensor, useSensors, type DragEndEvent, type DragMoveEvent, type DragStartEvent } from "@dnd-kit/core";
+import { useCallback, useEffect, useMemo, useState } from "react";
 import { FLAG_DISPLAY } from "@/lib/load/flag-display";
 import { formatNumber } from "@/lib/format/number";
 import { findSession, resolveDrop, type DragSource, type DropTarget, type PlanChange } from "@/lib/plan/drop";
@@ -9,9 +9,10 @@ import { previewChange, type RowPreview } from "@/lib/plan/preview";
 import { changeHits } from "@/lib/plan/restrictions";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
 import type { PlanWeek } from "@/lib/plan/types";
-import { announcements, dragId, dropId, gridKeyboardCoordinates, SCREEN_READER_INSTRUCTIONS, type DragData, type DropData, type GridLayout } from "./dnd";
+import { announcements, cellAtPoint, dragId, dropId, gridKeyboardCoordinates, SCREEN_READER_INSTRUCTIONS, type DragData, type GridLayout } from "./dnd";
 import { describeChange, targetLabel } from "./describe";
 import { groupKey } from "./group-row";
+import { useHoverStore } from "./hover-store";
 import { useBox, type Latest } from "./latest";
 
 /** Set by scripts/bench-planner.ts (addInitScript); the page records its own timings into it. */
@@ -22,7 +23,6 @@ declare global {
   }
 }
 
-export type Hover = { source: DragSource; target: DropTarget; rows: Map<number, RowPreview>; refusal: string | null; text: string; hits: RestrictionHit[] };
 type Preview = { week: PlanWeek; key: string; outcome: ReturnType<typeof resolveDrop>; rows: RowPreview[]; hits: RestrictionHit[] };
 
 type Args = {
@@ -39,7 +39,8 @@ type Args = {
  */
 export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
   const [active, setActive] = useState<DragData | null>(null);
-  const [hover, setHover] = useState<Hover | null>(null);
+  const hoverStore = useHoverStore();
+  const setHover = hoverStore.set;
   const [altDown, setAltDown] = useState(false);
   const [copyArmedId, setCopyArmedId] = useState<number | null>(null);
   const alt = useBox(false);
@@ -47,7 +48,13 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
   const dragging = useBox<DragData | null>(null);
   const keyMoves = useBox(0);
   const cache = useBox<Preview | null>(null);
-  const perfStart = useBox<number | null>(null);
+  /** The pointer in viewport coordinates, and whether the drag is a keyboard one (then `aimed` is the cell). */
+  const pointer = useBox<{ x: number; y: number } | null>(null);
+  const byKeyboard = useBox(false);
+  const aimed = useBox<DropTarget | null>(null);
+  /** The cell the item points at (kept after the drop, for the announcement), and the last one previewed. */
+  const pointed = useBox<DropTarget | null>(null);
+  const previewed = useBox<string | null>(null);
 
   // Alt held while dropping copies instead of moving; Escape leaves the card menu's copy mode.
   useEffect(() => {
@@ -61,15 +68,20 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
         setCopyArmedId(null);
       }
     };
+    // Capture phase: the position is known before dnd-kit's own listener turns the move into a render.
+    const move = (e: PointerEvent) => {
+      pointer.set({ x: e.clientX, y: e.clientY });
+      on(e);
+    };
     window.addEventListener("keydown", on);
     window.addEventListener("keyup", on);
-    window.addEventListener("pointermove", on);
+    window.addEventListener("pointermove", move, { capture: true });
     return () => {
       window.removeEventListener("keydown", on);
       window.removeEventListener("keyup", on);
-      window.removeEventListener("pointermove", on);
+      window.removeEventListener("pointermove", move, { capture: true });
     };
-  }, [alt, armed, dragging]);
+  }, [alt, armed, dragging, pointer]);
 
   const armCopy = useCallback((sessionId: number | null) => {
     armed.set(sessionId);
@@ -115,7 +127,7 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
     return { origin, moves };
   }, [dragging, keyMoves, week]);
 
-  const coordinateGetter = useMemo(() => gridKeyboardCoordinates(layout, keyboardStart), [layout, keyboardStart]);
+  const coordinateGetter = useMemo(() => gridKeyboardCoordinates(layout, keyboardStart, aimed), [layout, keyboardStart, aimed]);
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 5 } }), useSensor(KeyboardSensor, { coordinateGetter }));
 
   const describeOver = useCallback(
@@ -136,55 +148,68 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
     },
     [previewFor, week],
   );
-  const accessibility = useMemo(() => ({ announcements: announcements(describeOver), screenReaderInstructions: { draggable: SCREEN_READER_INSTRUCTIONS } }), [describeOver]);
+  const pointedAt = useCallback(() => {
+    const target = pointed.get();
+    const w = week.get();
+    return { target, label: target && w ? targetLabel(w, target) : null };
+  }, [pointed, week]);
+  const accessibility = useMemo(() => ({ announcements: announcements(describeOver, pointedAt), screenReaderInstructions: { draggable: SCREEN_READER_INSTRUCTIONS } }), [describeOver, pointedAt]);
 
   const onDragStart = useCallback(
     (e: DragStartEvent) => {
       const data = (e.active.data.current as DragData | undefined) ?? null;
       dragging.set(data);
       keyMoves.set(0);
+      byKeyboard.set(e.activatorEvent instanceof KeyboardEvent);
+      aimed.set(null);
+      pointed.set(null);
+      previewed.set(null);
       setActive(data);
     },
-    [dragging, keyMoves],
+    [aimed, byKeyboard, dragging, keyMoves, pointed, previewed],
   );
 
-  const onDragOver = useCallback(
-    (e: DragOverEvent) => {
+  /** The cell under the item now: the one the arrow keys aimed at, or the one under the pointer. */
+  const cellNow = useCallback((): DropTarget | null => {
+    if (byKeyboard.get()) return aimed.get();
+    const p = pointer.get();
+    return p ? cellAtPoint(p.x, p.y) : null;
+  }, [aimed, byKeyboard, pointer]);
+
+  // Called on every move: only a new cell, or a flip of the copy key, previews again.
+  const onDragMove = useCallback(
+    (e: DragMoveEvent) => {
+      const t0 = performance.now();
       const w = week.get();
       const data = e.active.data.current as DragData | undefined;
-      const target = (e.over?.data.current as DropData | undefined)?.target;
+      const target = cellNow();
+      pointed.set(target);
+      const key = target && data ? `${dropId(target)}:${copies(data.source)}` : null;
+      if (key === previewed.get()) return;
+      previewed.set(key);
       if (!w || !data || !target) {
         setHover(null);
         return;
       }
-      const t0 = performance.now();
-      perfStart.set(t0);
       const { outcome, rows, hits } = previewFor(w, data.source, target);
       window.__plannerPerf?.compute?.push(performance.now() - t0);
-      setHover({ source: data.source, target, rows: new Map(rows.map((r) => [r.athleteId, r])), refusal: outcome && !outcome.ok ? outcome.reason : null, text: outcome?.ok ? describeChange(w, outcome.change) : "", hits });
+      setHover({ source: data.source, target, rows: new Map(rows.map((r) => [r.athleteId, r])), refusal: outcome && !outcome.ok ? outcome.reason : null, text: outcome?.ok ? describeChange(w, outcome.change) : "", hits }, t0);
     },
-    [perfStart, previewFor, week],
+    [cellNow, copies, pointed, previewFor, previewed, setHover, week],
   );
-
-  // Benchmark: script time from the "over" event to the committed preview.
-  useLayoutEffect(() => {
-    const t0 = perfStart.get();
-    if (t0 === null) return;
-    perfStart.set(null);
-    window.__plannerPerf?.previews.push(performance.now() - t0);
-  }, [hover, perfStart]);
 
   const onDragCancel = useCallback(() => {
     dragging.set(null);
     setActive(null);
     setHover(null);
-  }, [dragging]);
+  }, [dragging, setHover]);
 
   const onDragEnd = useCallback(
     (e: DragEndEvent) => {
       const w = week.get();
       const data = e.active.data.current as DragData | undefined;
-      const target = (e.over?.data.current as DropData | undefined)?.target ?? null;
+      const target = cellNow();
+      pointed.set(target);
       const copy = data ? copies(data.source) : false;
       onDragCancel();
       if (!w || !data) return;
@@ -194,9 +219,9 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
       if (!outcome.ok) return onRefused(outcome.reason);
       onDrop(outcome.change, changeHits(w, outcome.change));
     },
-    [armCopy, armed, copies, onDragCancel, onDrop, onRefused, week],
+    [armCopy, armed, cellNow, copies, onDragCancel, onDrop, onRefused, pointed, week],
   );
 
   const copying = active?.source.type === "session" && (altDown || copyArmedId === active.source.sessionId);
-  return { sensors, accessibility, onDragStart, onDragOver, onDragEnd, onDragCancel, active, hover, altDown, copying, copyArmedId, armCopy };
+  return { sensors, accessibility, onDragStart, onDragMove, onDragEnd, onDragCancel, active, hoverStore, altDown, copying, copyArmedId, armCopy };
 }

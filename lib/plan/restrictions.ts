@@ -1,5 +1,5 @@
 import { newHits, restrictionHits, type Restriction, type RestrictionHit } from "@/lib/restrictions/rules";
-import { sessionsAfter, tempIdCounter } from "./apply";
+import { affectedAthletes, sessionsAfter, tempIdCounter } from "./apply";
 import { toBlockInput } from "./blocks";
 import { findSession, type PlanChange } from "./drop";
 import type { PlanSession, PlanWeek } from "./types";
@@ -16,6 +16,8 @@ export function sessionHits(week: { restrictions: readonly Restriction[] }, s: P
  */
 export function changeHits(week: PlanWeek, change: PlanChange): RestrictionHit[] {
   if (week.restrictions.length === 0) return [];
+  const limited = new Set(week.restrictions.map((r) => r.athleteId));
+  if (!affectedAthletes(week, change).some((id) => limited.has(id))) return [];
   const seen = new Set<string>();
   const out: RestrictionHit[] = [];
   // Far from the optimistic sessions' temporary ids, so a new session never matches one already shown.

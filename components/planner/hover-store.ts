@@ -1,0 +1,67 @@
+"use client";
+
+import { useLayoutEffect, useState, useSyncExternalStore } from "react";
+import type { DragSource, DropTarget } from "@/lib/plan/drop";
+import type { RowPreview } from "@/lib/plan/preview";
+import type { RestrictionHit } from "@/lib/restrictions/rules";
+
+/** What the item being dragged would do to the cell under it. */
+export type Hover = { source: DragSource; target: DropTarget; rows: Map<number, RowPreview>; refusal: string | null; text: string; hits: RestrictionHit[] };
+
+/**
+ * The drag preview lives outside React state on purpose: a new cell under the pointer re-renders only what
+ * shows the preview (the panel and the one or two rows whose numbers change), never the whole planner.
+ */
+export class HoverStore {
+  private hover: Hover | null = null;
+  private listeners = new Set<() => void>();
+  /** performance.now() of the last change, for the benchmark's script timing. */
+  private changedAt: number | null = null;
+
+  /** The time of the last change, once: the probe reads it after the change has rendered. */
+  takeChangedAt = (): number | null => {
+    const t = this.changedAt;
+    this.changedAt = null;
+    return t;
+  };
+
+  get = (): Hover | null => this.hover;
+
+  /** `startedAt`: when the work for this hover began (the "over" event), for the timing. */
+  set = (hover: Hover | null, startedAt = performance.now()): void => {
+    if (hover === this.hover) return;
+    this.hover = hover;
+    this.changedAt = startedAt;
+    for (const l of this.listeners) l();
+  };
+
+  subscribe = (listener: () => void): (() => void) => {
+    this.listeners.add(listener);
+    return () => this.listeners.delete(listener);
+  };
+}
+
+const none = () => null;
+
+export function useHoverStore(): HoverStore {
+  const [store] = useState(() => new HoverStore());
+  return store;
+}
+
+export function useHover(store: HoverStore): Hover | null {
+  return useSyncExternalStore(store.subscribe, store.get, none);
+}
+
+/** One row's preview; the same object while the pointer stays over cells that leave this row alone. */
+export function useRowPreview(store: HoverStore, athleteId: number): RowPreview | null {
+  return useSyncExternalStore(store.subscribe, () => store.get()?.rows.get(athleteId) ?? null, none);
+}
+
+/** Benchmark probe: script time from a new hover to its committed render (scripts/bench-planner.ts). */
+export function usePreviewTiming(store: HoverStore, hover: Hover | null): void {
+  useLayoutEffect(() => {
+    const t0 = store.takeChangedAt();
+    if (t0 === null || hover === null) return;
+    window.__plannerPerf?.previews.push(performance.now() - t0);
+  }, [hover, store]);
+}
