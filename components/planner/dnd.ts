@@ -88,7 +88,8 @@ export function announcements(describeOver: (source: DragSource, target: DropTar
   const over = (active: Active) => {
     const { target } = current();
     const key = target ? dropId(target) : "none";
-    if (key === said) return undefined;
+    // Nothing new; and before the item first reaches a day, "Picked up …" stays the last word.
+    if (key === said || (said === null && !target)) return undefined;
     said = key;
     const s = (active.data.current as DragData | undefined)?.source;
     return target && s ? describeOver(s, target) : `${label(active.data.current)} is not over a day.`;
