@@ -2,6 +2,7 @@ import { DateTime } from "luxon";
 import type { Browser, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, expect, it } from "vitest";
 import { DEMO_ATHLETES, DEMO_STAFF } from "@/lib/seed/demo-club";
+import { formatDayShort } from "@/lib/format/dates";
 import { addDaysTo, teamWeekStart } from "@/lib/plan/week";
 import type { PlanWeek } from "@/lib/plan/types";
 import { join } from "node:path";
@@ -227,14 +228,28 @@ describeBrowser("planner journeys", () => {
     const handle = template(page, "acceleration").locator("button").first();
     await handle.focus();
     await page.keyboard.press("Space");
-    await page.locator('[data-testid="drag-hint"][data-active="true"]').waitFor(); // the sensor listens for arrows once the drag has started
-    await page.keyboard.press("ArrowDown"); // from the shelf, the first press lands on the first athlete's first day
-    await page.keyboard.press("ArrowRight");
-    await page.keyboard.press("ArrowRight");
-    // The live region follows the item from cell to cell; on a busy machine the last press may still be on its way.
-    const region = page.locator('[id^="DndLiveRegion"]');
-    await page.waitForFunction((el) => /Dropping makes/.test(el?.textContent ?? ""), await region.elementHandle(), { timeout: 5000 }).catch(() => {});
-    expect(await region.textContent()).toMatch(/Dropping makes/);
+    await page.locator('[data-testid="drag-hint"][data-active="true"]').waitFor();
+    // Each press moves one cell; the drop preview names the cell. dnd-kit's keyboard sensor starts listening a
+    // moment after the drag begins (a timer), so a press that came too early is pressed again.
+    const name = plan.athletes.find((a) => a.id === first)!.name;
+    const pressTo = async (key: string, i: number) => {
+      const where = `${name}'s ${formatDayShort(day(i))}`;
+      for (let attempt = 0; attempt < 3; attempt++) {
+        await page.keyboard.press(key);
+        const reached = await page
+          .getByTestId("drop-preview")
+          .filter({ hasText: where })
+          .waitFor({ timeout: 2000 })
+          .then(() => true, () => false);
+        if (reached) return;
+        console.warn(`keyboard drag: ${key} did not reach ${where} yet; pressing again (live region: ${await page.locator('[id^="DndLiveRegion"]').textContent()})`);
+      }
+      throw new Error(`the keyboard drag did not reach ${where}`);
+    };
+    await pressTo("ArrowDown", 0); // from the shelf, the first press lands on the first athlete's first day
+    await pressTo("ArrowRight", 1);
+    await pressTo("ArrowRight", 2);
+    expect(await page.locator('[id^="DndLiveRegion"]').textContent()).toMatch(/Dropping makes/);
     await shotDuringDrag(page, "planner-keyboard-drag");
     await page.keyboard.press("Space");
     await cards(page, first, day(2)).first().waitFor();
