@@ -4,6 +4,7 @@ import {
   computeAthleteLoad,
   computeSquadWeek,
   dayIndex,
+  packSessions,
   startOfWeek,
   type AthleteProfile,
   type Flag,
@@ -63,7 +64,8 @@ export async function getSquadWeekLoad({ teamId, week, view, today, clock }: { t
   const weekEnd = addDays(weekStart, 6);
   const inputs = await getSquadLoadInputs({ teamId, ...historyRange({ from: addDays(weekStart, -7), to: weekEnd }) });
   const rows = computeSquadWeek(
-    inputs.athletes.map((a) => ({ id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions: a.sessions, logs: a.logs })),
+    // Packed into columns once here, the two years of history are summed from typed arrays (lib/load/packed.ts).
+    inputs.athletes.map((a) => ({ id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions: a.sessions, logs: a.logs, packed: packSessions(a.sessions, a.logs) })),
     inputs.settings,
     weekStart,
     now,

@@ -2,6 +2,7 @@ import "server-only";
 import { Op, type Transaction } from "sequelize";
 import { AppError } from "@/lib/errors";
 import { buildWeekPreviewContext } from "@/lib/load/week-preview";
+import { packSessions } from "@/lib/load/packed";
 import { computeSquadWeek, type SquadAthleteInput } from "@/lib/load/squad";
 import { logsFor } from "@/lib/plan/blocks";
 import { compactContext } from "@/lib/plan/context";
@@ -48,7 +49,10 @@ export async function getPlanWeek({ teamId, date, today, audience }: { teamId: n
   ]);
   const squad: SquadAthleteInput[] = inputs.athletes
     .filter((a) => !own || a.id === audience.ownAthleteId)
-    .map((a) => ({ id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions: a.sessions.filter(visible), logs: a.logs }));
+    .map((a) => {
+      const sessions = a.sessions.filter(visible);
+      return { id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions, logs: a.logs, packed: packSessions(sessions, a.logs) };
+    });
   const rows = computeSquadWeek(squad, inputs.settings, weekStart, today, "projected");
   const weekSessions = new Map<number, PlanSession[]>();
   for (const { dto } of weekRows) if (visible(dto)) weekSessions.set(dto.athleteId, [...(weekSessions.get(dto.athleteId) ?? []), dto]);
@@ -110,7 +114,7 @@ export async function withWeekRows({ teamId, today, result }: { teamId: number; 
     const inputs = await getSquadLoadInputs({ teamId, ...historyRange({ from: weekStart, to: addDaysTo(weekStart, 6) }) });
     const squad = inputs.athletes.filter((a) => ids.has(a.id));
     const computed = computeSquadWeek(
-      squad.map((a) => ({ id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions: a.sessions, logs: a.logs })),
+      squad.map((a) => ({ id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions: a.sessions, logs: a.logs, packed: packSessions(a.sessions, a.logs) })),
       inputs.settings,
       weekStart,
       today,

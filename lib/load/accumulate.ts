@@ -70,9 +70,32 @@ export function resolveProfile(profile: AthleteProfile, settings: TeamLoadSettin
   };
 }
 
-function memoOf(rp: ResolvedProfile): Float64Array {
+export function memoOf(rp: ResolvedProfile): Float64Array {
   if (rp.reach === null) rp.reach = new Float64Array(2 * GRID + 2).fill(Number.NaN);
   return rp.reach;
+}
+
+/**
+ * Metres from rest to reach each threshold for a rep at pct% of vmax, memoised per athlete for pct on a 0.5%
+ * grid (other pcts use the memo's two scratch cells). Returns the HSR cell; the near-max one is nearCell(at).
+ * Callers read both back from the Float64Array so they stay unboxed doubles (merging a call's result with
+ * an array load would box a number on every block).
+ */
+export function reachCell(rp: ResolvedProfile, memo: Float64Array, pct: number): number {
+  const grid = pct * 2;
+  const g = grid | 0;
+  const onGrid = g === grid && g < GRID;
+  const hsrAt = onGrid ? g : 2 * GRID;
+  if (!onGrid || memo[hsrAt] !== memo[hsrAt]) {
+    const target = (pct / 100) * rp.vmax;
+    memo[hsrAt] = distanceToReach(rp.hsrSpeed, target, rp.tau);
+    memo[nearCell(hsrAt)] = distanceToReach(rp.nearMaxSpeed, target, rp.tau);
+  }
+  return hsrAt;
+}
+
+export function nearCell(hsrAt: number): number {
+  return hsrAt === 2 * GRID ? 2 * GRID + 1 : GRID + hsrAt;
 }
 
 function isRunningKind(kind: BlockInput["kind"]): boolean {
@@ -119,25 +142,10 @@ function addScaledBlock(acc: Float64Array, block: BlockInput, rp: ResolvedProfil
     const run = total * reps;
     acc[SLOT_RUN] += run;
     if (pct > 0) {
-      // Metres from rest to reach each threshold, memoised per athlete for pct on a 0.5% grid (other pcts use
-      // the memo's two scratch cells). Both are read back from the Float64Array so they stay unboxed doubles:
-      // merging a call's result with an array load would box a number on every block.
-      const target = (pct / 100) * rp.vmax;
       const memo = memoOf(rp);
-      const grid = pct * 2;
-      const g = grid | 0;
-      let hsrAt = 2 * GRID;
-      let nearAt = 2 * GRID + 1;
-      if (g === grid && g < GRID) {
-        hsrAt = g;
-        nearAt = GRID + g;
-      }
-      if (hsrAt === 2 * GRID || memo[hsrAt] !== memo[hsrAt]) {
-        memo[hsrAt] = distanceToReach(rp.hsrSpeed, target, rp.tau);
-        memo[nearAt] = distanceToReach(rp.nearMaxSpeed, target, rp.tau);
-      }
+      const hsrAt = reachCell(rp, memo, pct);
       const hsr = memo[hsrAt];
-      const near = memo[nearAt];
+      const near = memo[nearCell(hsrAt)];
       if (hsr < total) acc[SLOT_HSR] += (total - hsr) * reps;
       if (near < total) acc[SLOT_NEAR_MAX] += (total - near) * reps;
     }

@@ -14,6 +14,7 @@ import {
   type TeamLoadSettings,
 } from "./types";
 import { metricRecord } from "./metric-record";
+import type { PackedSessions } from "./packed";
 import { summariseWeek, type WeekSummary } from "./week-summary";
 import { reserve, type EngineWorkspace } from "./workspace";
 
@@ -57,6 +58,8 @@ export interface ColumnsRequest {
   /** The series covers [min(earliest session, fromDay − 56), toDay]. */
   fromDay: number;
   toDay: number;
+  /** packSessions(sessions, logs) when the caller has it (same sessions, same order). */
+  packed?: PackedSessions;
 }
 
 /**
@@ -64,7 +67,7 @@ export interface ColumnsRequest {
  * workspace the columns are views into it (no allocation per athlete) and the next call overwrites them.
  */
 export function computeAthleteColumns(req: ColumnsRequest, ws?: EngineWorkspace): AthleteColumns {
-  const sessionDays = sessionDayNumbers(req.sessions);
+  const sessionDays = req.packed ? req.packed.day : sessionDayNumbers(req.sessions);
   let startDay = req.fromDay - HISTORY_LEAD_DAYS;
   for (let k = 0; k < sessionDays.length; k++) if (sessionDays[k] < startDay) startDay = sessionDays[k];
   const n = Math.max(0, req.toDay - startDay + 1);
@@ -89,6 +92,7 @@ export function computeAthleteColumns(req: ColumnsRequest, ws?: EngineWorkspace)
     view: req.view,
     todayDay: req.todayDay,
     scratch: { f64, u8 },
+    packed: req.packed,
   });
   const prefix = f64.subarray(4 * nm * n, f64Size);
   const acwr = {} as Record<Metric, AcwrColumns>;
@@ -99,7 +103,8 @@ export function computeAthleteColumns(req: ColumnsRequest, ws?: EngineWorkspace)
   });
   const provisional = u8.subarray(2 * n, 3 * n);
   markProvisional(provisional, cols.firstDataIndex);
-  return { ...cols, acwr, provisional, firstDate: dateFromDayIndex(startDay), sessionDays, rp };
+  const { length, values, logged, missing, firstDataIndex } = cols;
+  return { startDay, length, values, logged, missing, firstDataIndex, acwr, provisional, firstDate: dateFromDayIndex(startDay), sessionDays, rp };
 }
 
 /** Week summary and flags for the week starting at weekStartDay (a day number) from precomputed columns. */

@@ -26,6 +26,9 @@
  *   band's top are an overload; high-intensity sessions (max-velocity block or high plyometrics) less than 48 h
  *   apart by wall clock are a short recovery (exactly 48 h passes). Comparisons allow 1e-9 of float noise.
  * - Flags are monitoring aids, not diagnoses: show LOAD_CAUTION with them.
+ * - Input: sessions and logs as plain objects; for whole-history work the data layer also hands over
+ *   packSessions(sessions, logs) (packed.ts), the same numbers in typed-array columns, which the daily sums
+ *   read instead of the objects (identical results; tests/unit/load/packed.test.ts).
  */
 export * from "./types";
 export * from "./dates";
@@ -110,3 +113,4 @@ export {
   type WeekPreviewContextInput,
 } from "./week-preview";
 export { computeSquadWeek, type SquadAthleteInput, type SquadWeekRow } from "./squad";
+export { packSessions, type PackedSessions } from "./packed";

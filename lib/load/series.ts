@@ -1,5 +1,7 @@
 import { ACC_SIZE, addAccToColumns, evaluateSessionInto, resolveProfile, type ResolvedProfile } from "./accumulate";
+import { alignLogs, type AlignedLogs } from "./align-logs";
 import { dateFromDayIndex, dayIndex, weekdayOfDay } from "./dates";
+import { addPackedToColumns, PACKED_ACC_SIZE, PACKED_CANCELLED, PACKED_PUBLISHED, sumPackedSession, type PackedSessions } from "./packed";
 import { toSessionMetrics, type SessionMetrics } from "./session-metrics";
 import {
   METRICS,
@@ -38,34 +40,7 @@ export function sessionUse(
   return view === "projected" && status !== "cancelled" ? "planned" : "none";
 }
 
-export function indexLogs(logs: readonly LogInput[]): Map<string, LogInput> {
-  const map = new Map<string, LogInput>();
-  for (const log of logs) map.set(log.sessionId, log); // a later log for the same session replaces an earlier one
-  return map;
-}
-
-/** Each session's log, aligned by index with `sessions` (undefined = not logged). */
-export type AlignedLogs = readonly (LogInput | undefined)[];
-
-/**
- * Pairs sessions with their logs. The data layer hands logs over in session order, so one merge pass usually
- * does it: if every log is matched in order, no session was skipped that had one (ids are unique). Otherwise
- * (another order, or two logs for one session) a Map decides, where a later log replaces an earlier one.
- */
-export function alignLogs(sessions: readonly SessionInput[], logs: readonly LogInput[]): AlignedLogs {
-  const out: (LogInput | undefined)[] = [];
-  let j = 0;
-  for (let k = 0; k < sessions.length; k++) {
-    const log = logs[j];
-    if (log !== undefined && log.sessionId === sessions[k].id) {
-      out.push(log);
-      j++;
-    } else out.push(undefined);
-  }
-  if (j === logs.length) return out;
-  const byId = indexLogs(logs);
-  return sessions.map((s) => byId.get(s.id));
-}
+export { alignLogs, indexLogs, type AlignedLogs } from "./align-logs";
 
 /** Daily columns over [startDay, startDay + length): one Float64Array per metric, views of one buffer. */
 export interface DailyColumns {
@@ -115,15 +90,21 @@ export interface ColumnsInput {
   todayDay: number;
   /** Zeroed scratch to use instead of allocating: ≥ 6·length doubles and ≥ 2·length bytes. */
   scratch?: { f64: Float64Array; u8: Uint8Array };
+  /** packSessions(sessions, logs): the same sessions as columns; the sums then run over typed arrays. */
+  packed?: PackedSessions;
 }
 
 /** Hot path: no per-day or per-session allocation; one scratch accumulator for all sessions. */
 export function buildDailyColumns(input: ColumnsInput): DailyColumns {
   const { startDay, length, sessions, logFor, rp, view, todayDay } = input;
-  const days = input.sessionDays ?? sessionDayNumbers(sessions);
   const { buffer, values } = metricColumns(length, input.scratch?.f64);
   const logged = input.scratch ? input.scratch.u8.subarray(0, length) : new Uint8Array(length);
   const missing = input.scratch ? input.scratch.u8.subarray(length, 2 * length) : new Uint8Array(length);
+  if (input.packed) {
+    const firstDataIndex = packedIntoColumns(input.packed, { startDay, length, rp, view, todayDay, buffer, logged, missing });
+    return { startDay, length, values, logged, missing, firstDataIndex };
+  }
+  const days = input.sessionDays ?? sessionDayNumbers(sessions);
   const acc = new Float64Array(ACC_SIZE);
   let firstDataIndex: number | null = null;
   for (let k = 0; k < sessions.length; k++) {
@@ -143,6 +124,39 @@ export function buildDailyColumns(input: ColumnsInput): DailyColumns {
     addToColumns(acc, buffer, length, i);
   }
   return { startDay, length, values, logged, missing, firstDataIndex };
+}
+
+/** buildDailyColumns over packed sessions: the same rules, reading typed arrays. Returns firstDataIndex. */
+function packedIntoColumns(
+  p: PackedSessions,
+  o: { startDay: number; length: number; rp: ResolvedProfile; view: LoadView; todayDay: number; buffer: Float64Array; logged: Uint8Array; missing: Uint8Array },
+): number | null {
+  const { startDay, length, rp, view, todayDay, buffer, logged, missing } = o;
+  const acc = new Float64Array(PACKED_ACC_SIZE);
+  const n = p.day.length;
+  let firstDataIndex: number | null = null;
+  for (let k = 0; k < n; k++) {
+    const day = p.day[k];
+    const i = day - startDay;
+    if (i < 0 || i >= length) continue;
+    const hasLog = p.hasLog[k] === 1;
+    const status = p.status[k];
+    if ((hasLog || status !== PACKED_CANCELLED) && (firstDataIndex === null || i < firstDataIndex)) firstDataIndex = i;
+    // sessionUse, spelt out on the status codes.
+    let use: SessionUse;
+    if (hasLog) use = view === "actual" && day > todayDay ? "none" : "logged";
+    else if (day < todayDay) use = status === PACKED_PUBLISHED ? "missing" : "none";
+    else use = view === "projected" && status !== PACKED_CANCELLED ? "planned" : "none";
+    if (use === "none") continue;
+    if (use === "missing") {
+      missing[i] = 1;
+      continue;
+    }
+    sumPackedSession(acc, p, k, use === "logged", rp);
+    if (use === "logged") logged[i] = 1;
+    addPackedToColumns(acc, buffer, length, i);
+  }
+  return firstDataIndex;
 }
 
 /** A session as it enters a view, with its numbers: what the flags look at. */

@@ -2,6 +2,7 @@ import { computeAthleteColumns, weekFromColumns, type ColumnsRequest } from "./a
 import { dayIndex } from "./dates";
 import { topFlagLevel, type Flag, type FlagLevel } from "./flags";
 import { metricRecord } from "./metric-record";
+import type { PackedSessions } from "./packed";
 import { alignLogs } from "./series";
 import { createWorkspace } from "./workspace";
 import type { AthleteProfile, LoadView, LogInput, Metric, SessionInput, TeamLoadSettings } from "./types";
@@ -14,6 +15,8 @@ export interface SquadAthleteInput {
   profile: AthleteProfile;
   sessions: readonly SessionInput[];
   logs: readonly LogInput[];
+  /** packSessions(sessions, logs), as the data layer hands it over: the history's sums then read columns. */
+  packed?: PackedSessions;
 }
 
 export interface SquadWeekRow {
@@ -44,7 +47,8 @@ export function computeSquadWeek(
       profile: a.profile,
       settings,
       sessions: a.sessions,
-      logFor: alignLogs(a.sessions, a.logs),
+      logFor: a.packed?.logFor ?? alignLogs(a.sessions, a.logs),
+      packed: a.packed,
       view,
       todayDay,
       fromDay: ws - 7,

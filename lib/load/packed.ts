@@ -1,0 +1,230 @@
+// An athlete's sessions as columns of numbers: the form the data layer hands the engine for whole-history
+// work (the squad table, an athlete's two years). The daily series then runs over typed arrays instead of
+// walking tens of thousands of session and block objects, which is what made it slow (cache misses, not
+// arithmetic). The numbers are the prescription and the log as stored; all the load maths stays in the
+// engine (sumPackedSession), with the same operations in the same order as evaluateSessionInto, so both
+// paths give identical numbers (tests/unit/load/packed.test.ts checks it on an invented squad).
+import { memoOf, nearCell, nonNeg, reachCell, srpe, type ResolvedProfile } from "./accumulate";
+import { dayIndex } from "./dates";
+import { alignLogs, type AlignedLogs } from "./align-logs";
+import type { BlockInput, LogInput, SessionInput } from "./types";
+
+const STATUS = { draft: 0, published: 1, cancelled: 2 } as const;
+export const PACKED_CANCELLED = STATUS.cancelled;
+export const PACKED_PUBLISHED = STATUS.published;
+
+/** Block kinds as the daily sums see them. */
+const K_NONE = 0;
+const K_SPRINT = 1; // acceleration, max velocity, speed endurance: sprint metres and steps
+const K_TEMPO = 2; // running metres but not sprint metres
+const K_PLYO = 3;
+
+/** Log completion: 0 = no log; else the share of the prescription (yes 1, partly 0.5, no 0) in logFactor. */
+export interface PackedSessions {
+  /** The sessions and their aligned logs, as given (flags and per-session views still read these). */
+  sessions: readonly SessionInput[];
+  logFor: AlignedLogs;
+  day: Int32Array;
+  status: Uint8Array;
+  plannedRpe: Float64Array;
+  durationMin: Float64Array;
+  hasLog: Uint8Array;
+  logFactor: Float64Array;
+  /** Log RPE and minutes; used only where hasLogRpe / hasLogMinutes is 1 (null falls back to the plan). */
+  logRpe: Float64Array;
+  hasLogRpe: Uint8Array;
+  logMinutes: Float64Array;
+  hasLogMinutes: Uint8Array;
+  /** Blocks of session k: [blockStart[k], blockStart[k + 1]). */
+  blockStart: Int32Array;
+  kind: Uint8Array;
+  /** Running: sets × reps, run-in + distance (m), intensity (% vmax). */
+  runReps: Float64Array;
+  runMetres: Float64Array;
+  runPct: Float64Array;
+  /** Reps the block prescribes (for completed-reps logs) and the reps logged (NaN = not listed). */
+  prescribed: Float64Array;
+  doneReps: Float64Array;
+  /** Drills of block b: [drillStart[b], drillStart[b + 1]): contacts (sets × reps × contacts per rep) and intensity. */
+  drillStart: Int32Array;
+  drillContacts: Float64Array;
+  /** 0 low, 1 moderate, 2 high. */
+  drillLevel: Uint8Array;
+}
+
+function kindCode(b: BlockInput): number {
+  switch (b.kind) {
+    case "acceleration":
+    case "max_velocity":
+    case "speed_endurance":
+      return b.running ? K_SPRINT : K_NONE;
+    case "tempo":
+      return b.running ? K_TEMPO : K_NONE;
+    case "plyometric":
+      return b.drills ? K_PLYO : K_NONE;
+    default:
+      return K_NONE;
+  }
+}
+
+/** Packs sessions (and their logs) into columns; `logs` may come in any order (alignLogs pairs them). */
+export function packSessions(sessions: readonly SessionInput[], logs: readonly LogInput[]): PackedSessions {
+  const n = sessions.length;
+  const logFor = alignLogs(sessions, logs);
+  let nb = 0;
+  let nd = 0;
+  for (const s of sessions) {
+    nb += s.blocks.length;
+    for (const b of s.blocks) if (b.kind === "plyometric" && b.drills) nd += b.drills.length;
+  }
+  const p: PackedSessions = {
+    sessions,
+    logFor,
+    day: new Int32Array(n),
+    status: new Uint8Array(n),
+    plannedRpe: new Float64Array(n),
+    durationMin: new Float64Array(n),
+    hasLog: new Uint8Array(n),
+    logFactor: new Float64Array(n),
+    logRpe: new Float64Array(n),
+    hasLogRpe: new Uint8Array(n),
+    logMinutes: new Float64Array(n),
+    hasLogMinutes: new Uint8Array(n),
+    blockStart: new Int32Array(n + 1),
+    kind: new Uint8Array(nb),
+    runReps: new Float64Array(nb),
+    runMetres: new Float64Array(nb),
+    runPct: new Float64Array(nb),
+    prescribed: new Float64Array(nb),
+    doneReps: new Float64Array(nb).fill(Number.NaN),
+    drillStart: new Int32Array(nb + 1),
+    drillContacts: new Float64Array(nd),
+    drillLevel: new Uint8Array(nd),
+  };
+  let b = 0;
+  let d = 0;
+  for (let k = 0; k < n; k++) {
+    const s = sessions[k];
+    const log = logFor[k];
+    p.day[k] = dayIndex(s.date);
+    p.status[k] = STATUS[s.status] ?? STATUS.draft;
+    p.plannedRpe[k] = s.plannedRpe;
+    p.durationMin[k] = s.durationMin;
+    p.blockStart[k] = b;
+    if (log) {
+      p.hasLog[k] = 1;
+      p.logFactor[k] = log.completion === "yes" ? 1 : log.completion === "partly" ? 0.5 : 0;
+      if (log.rpe !== null && log.rpe !== undefined) {
+        p.hasLogRpe[k] = 1;
+        p.logRpe[k] = log.rpe;
+      }
+      if (log.minutes !== null && log.minutes !== undefined) {
+        p.hasLogMinutes[k] = 1;
+        p.logMinutes[k] = log.minutes;
+      }
+    }
+    const done = log ? log.completedReps : null;
+    for (const block of s.blocks) {
+      const code = kindCode(block);
+      p.kind[b] = code;
+      p.drillStart[b] = d;
+      const r = block.running;
+      if ((code === K_SPRINT || code === K_TEMPO) && r) {
+        p.runReps[b] = nonNeg(r.sets) * nonNeg(r.reps);
+        p.runMetres[b] = nonNeg(r.runInM) + nonNeg(r.distanceM);
+        p.runPct[b] = nonNeg(r.intensityPct);
+        p.prescribed[b] = p.runReps[b];
+      } else if (code === K_PLYO && block.drills) {
+        let reps = 0;
+        for (const dr of block.drills) {
+          reps += nonNeg(dr.sets) * nonNeg(dr.reps);
+          p.drillContacts[d] = nonNeg(dr.sets) * nonNeg(dr.reps) * nonNeg(dr.contactsPerRep);
+          p.drillLevel[d] = dr.intensity === "high" ? 2 : dr.intensity === "moderate" ? 1 : 0;
+          d++;
+        }
+        p.prescribed[b] = reps;
+      }
+      if (done && block.id !== undefined && Object.prototype.hasOwnProperty.call(done, block.id)) p.doneReps[b] = nonNeg(done[block.id]);
+      b++;
+    }
+  }
+  p.blockStart[n] = b;
+  p.drillStart[nb] = d;
+  return p;
+}
+
+const S_HSR = 0, S_NEAR = 1, S_SPRINT = 2, S_STEPS = 3, S_LOW = 4, S_MOD = 5, S_HIGH = 6, S_SRPE = 7;
+export const PACKED_ACC_SIZE = 8;
+
+/**
+ * Sums session k into `acc` (HSR, near-max, sprint metres, steps, low/moderate/high contacts, sRPE) as
+ * planned (`logged` false) or as logged. The rules, and the order of every operation, are those of
+ * evaluateSessionInto and addScaledBlock in accumulate.ts.
+ */
+export function sumPackedSession(acc: Float64Array, p: PackedSessions, k: number, logged: boolean, rp: ResolvedProfile): void {
+  // Eight stores beat TypedArray#fill's call for so short an array.
+  acc[0] = 0;
+  acc[1] = 0;
+  acc[2] = 0;
+  acc[3] = 0;
+  acc[4] = 0;
+  acc[5] = 0;
+  acc[6] = 0;
+  acc[7] = 0;
+  const factor = logged ? p.logFactor[k] : 1;
+  if (logged && factor === 0) return;
+  const memo = memoOf(rp);
+  const end = p.blockStart[k + 1];
+  for (let b = p.blockStart[k]; b < end; b++) {
+    let scale = factor;
+    const done = p.doneReps[b];
+    if (logged && done === done) {
+      const prescribed = p.prescribed[b];
+      scale = prescribed > 0 ? done / prescribed : 0;
+    }
+    if (!(scale > 0)) continue;
+    const kind = p.kind[b];
+    if (kind === K_SPRINT || kind === K_TEMPO) {
+      const reps = p.runReps[b] * scale;
+      const total = p.runMetres[b];
+      if (reps === 0 || total === 0) continue;
+      const pct = p.runPct[b];
+      const run = total * reps;
+      if (pct > 0) {
+        const hsrAt = reachCell(rp, memo, pct);
+        const hsr = memo[hsrAt];
+        const near = memo[nearCell(hsrAt)];
+        if (hsr < total) acc[S_HSR] += (total - hsr) * reps;
+        if (near < total) acc[S_NEAR] += (total - near) * reps;
+      }
+      if (kind === K_SPRINT) {
+        acc[S_SPRINT] += run;
+        acc[S_STEPS] += run / rp.stepLengthM;
+      }
+    } else if (kind === K_PLYO) {
+      const dEnd = p.drillStart[b + 1];
+      for (let d = p.drillStart[b]; d < dEnd; d++) {
+        const contacts = p.drillContacts[d] * scale;
+        if (contacts === 0) continue;
+        acc[S_LOW + p.drillLevel[d]] += contacts;
+      }
+    }
+  }
+  if (!logged) {
+    acc[S_SRPE] = srpe(p.plannedRpe[k], p.durationMin[k]);
+    return;
+  }
+  const rpe = p.hasLogRpe[k] ? p.logRpe[k] : p.plannedRpe[k];
+  const minutes = p.hasLogMinutes[k] ? p.logMinutes[k] : nonNeg(p.durationMin[k]) * factor;
+  acc[S_SRPE] = srpe(rpe, minutes);
+}
+
+/** Adds a summed session into day i of the metric columns (METRICS order), like addAccToColumns. */
+export function addPackedToColumns(acc: Float64Array, cols: Float64Array, n: number, i: number): void {
+  cols[i] += acc[S_HSR];
+  cols[n + i] += acc[S_NEAR];
+  cols[2 * n + i] += acc[S_SPRINT];
+  cols[3 * n + i] += acc[S_STEPS];
+  cols[4 * n + i] += acc[S_LOW] + acc[S_MOD] + acc[S_HIGH];
+  cols[5 * n + i] += acc[S_SRPE];
+}
