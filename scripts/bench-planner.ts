@@ -6,17 +6,19 @@ import type { Locator, Page } from "playwright-core";
 import { launchBrowser, signIn, startApp } from "../tests/e2e/app-server";
 
 const LOADS = 7;
-const DROPS = 12;
+const DROPS = 30;
 const TARGETS = { loadMs: 1000, previewMs: 16, dropMs: 300 };
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 const pct = (xs: number[], p: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor(xs.length * p))];
 const fmt = (ms: number) => `${ms.toFixed(1)} ms`;
+const verdict = (xs: number[], target: number) => (pct(xs, 0.95) < target ? "ok (median and p95)" : median(xs) < target ? "median ok, p95 OVER" : "OVER");
 const line = (label: string, xs: number[], target: number) =>
-  console.log(`${label.padEnd(34)} median ${fmt(median(xs)).padStart(9)}   p95 ${fmt(pct(xs, 0.95)).padStart(9)}   max ${fmt(Math.max(...xs)).padStart(9)}   target < ${target} ms  ${median(xs) < target ? "ok" : "OVER"}`);
+  console.log(`${label.padEnd(34)} median ${fmt(median(xs)).padStart(9)}   p95 ${fmt(pct(xs, 0.95)).padStart(9)}   max ${fmt(Math.max(...xs)).padStart(9)}   target < ${target} ms  ${verdict(xs, target)}`);
 
+// The middle of the screen: near its top or bottom edge dnd-kit scrolls the page while the item hovers.
 async function centre(l: Locator) {
-  await l.scrollIntoViewIfNeeded();
+  await l.evaluate((el) => el.scrollIntoView({ block: "center", behavior: "instant" }));
   const b = (await l.boundingBox())!;
   return { x: b.x + b.width / 2, y: b.y + Math.min(b.height / 2, 30) };
 }
