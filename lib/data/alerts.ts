@@ -5,6 +5,7 @@ import type { AlertActionInput, AlertListQuery } from "@/lib/validations/alerts"
 import { db, type Alert } from "@/models";
 import type { AlertBasis, AlertKind, AlertStatus } from "@/models/alert";
 import { getAlertsSeenAt } from "./notification-settings";
+import { userNames } from "./users";
 
 /** One flag the engine raised, reduced to what an alert stores (the strongest flag per kind and week). */
 export type AlertCandidate = {
@@ -88,14 +89,6 @@ export async function syncWeekAlerts(args: {
   return created;
 }
 
-async function names(ids: Array<number | null>): Promise<Map<number, string>> {
-  const { User } = await db();
-  const wanted = [...new Set(ids.filter((id): id is number => id !== null))];
-  if (wanted.length === 0) return new Map();
-  const users = await User.findAll({ where: { id: { [Op.in]: wanted } }, attributes: ["id", "name"] });
-  return new Map(users.map((u) => [u.id, u.name]));
-}
-
 function statusWhere(status: AlertListQuery["status"]): WhereOptions {
   if (status === "all") return {};
   if (status === "unresolved") return { status: { [Op.in]: ["open", "acknowledged"] } };
@@ -106,7 +99,7 @@ async function toRows(rows: Alert[], seenAt: Date | null): Promise<AlertRow[]> {
   const { Athlete } = await db();
   const athletes = await Athlete.findAll({ where: { id: { [Op.in]: [...new Set(rows.map((r) => r.athleteId))] } }, attributes: ["id", "name"] });
   const athleteName = new Map(athletes.map((a) => [a.id, a.name]));
-  const people = await names(rows.flatMap((r) => [r.acknowledgedBy, r.resolvedBy]));
+  const people = await userNames(rows.flatMap((r) => [r.acknowledgedBy, r.resolvedBy]));
   return rows.map((r) => ({
     id: r.id,
     athleteId: r.athleteId,

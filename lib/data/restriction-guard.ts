@@ -52,10 +52,11 @@ async function recordOverrides({ transaction, teamId, actorUserId, hits, reason 
   const team = await getNoticeTeam({ teamId, transaction });
   const coach = await getPerson({ userId: actorUserId, transaction });
   const staff = (await listAlertRecipients({ teamId, transaction })).filter((r) => r.role === "physio" && r.alertEmail === "each" && r.userId !== actorUserId);
+  const athletes = await Athlete.findAll({ where: { id: [...new Set(hits.map((h) => h.athleteId))] }, attributes: ["id", "name"], transaction });
+  const nameOf = new Map(athletes.map((a) => [a.id, a.name]));
   for (const h of hits) {
     const row = await RestrictionOverride.create({ teamId, restrictionId: h.restrictionId, athleteId: h.athleteId, sessionId: h.sessionId, sessionDate: h.date, detail: h.detail, reason, userId: actorUserId }, { transaction });
-    const athlete = await Athlete.findByPk(h.athleteId, { attributes: ["name"], transaction });
-    const athleteName = athlete?.name ?? "An athlete";
+    const athleteName = nameOf.get(h.athleteId) ?? "An athlete";
     const text = `${coach?.name ?? "A coach"} planned ${h.detail} on this day against "${h.rule}". Reason: ${reason}`;
     // One unresolved alert per athlete × kind × week (a database rule): a second override that week joins it.
     const weekStart = startOfWeek(h.date, engineWeekStartDay(team?.weekStartDay ?? 1));

@@ -5,14 +5,7 @@ import { AppError } from "@/lib/errors";
 import { describeRestriction, isCurrent, type Restriction } from "@/lib/restrictions/rules";
 import type { CreateRestrictionInput } from "@/lib/validations/restrictions";
 import { db, type Restriction as RestrictionRow, type RestrictionOverride as RestrictionOverrideRow } from "@/models";
-
-async function userNames(ids: Array<number | null>, transaction?: Transaction): Promise<Map<number, string>> {
-  const { User } = await db();
-  const wanted = [...new Set(ids.filter((id): id is number => id !== null))];
-  if (wanted.length === 0) return new Map();
-  const users = await User.findAll({ where: { id: { [Op.in]: wanted } }, attributes: ["id", "name"], transaction });
-  return new Map(users.map((u) => [u.id, u.name]));
-}
+import { userNames } from "./users";
 
 /** A stored row in the shape lib/restrictions/rules.ts checks. */
 export function toRestriction(row: RestrictionRow, names: ReadonlyMap<number, string>): Restriction {

@@ -1,5 +1,6 @@
 import "server-only";
 import bcrypt from "bcryptjs";
+import { Op, type Transaction } from "sequelize";
 import { db } from "@/models";
 import type { Role } from "@/lib/auth/roles";
 
@@ -40,4 +41,13 @@ export async function listMembershipsOfUser({ userId }: { userId: number }): Pro
 
 export async function hashPassword(password: string): Promise<string> {
   return bcrypt.hash(password, 10);
+}
+
+/** Display names of users by id (ids may repeat or be null), for "set by" and "acknowledged by" lines. */
+export async function userNames(ids: ReadonlyArray<number | null>, transaction?: Transaction): Promise<Map<number, string>> {
+  const { User } = await db();
+  const wanted = [...new Set(ids.filter((id): id is number => id !== null))];
+  if (wanted.length === 0) return new Map();
+  const users = await User.findAll({ where: { id: { [Op.in]: wanted } }, attributes: ["id", "name"], transaction });
+  return new Map(users.map((u) => [u.id, u.name]));
 }

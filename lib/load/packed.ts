@@ -11,7 +11,8 @@ import type { BlockInput, LogInput, SessionInput } from "./types";
 
 const STATUS = { draft: 0, published: 1, cancelled: 2 } as const;
 export const PACKED_CANCELLED = STATUS.cancelled;
-export const PACKED_PUBLISHED = STATUS.published;
+/** Status code → status, indexed by the codes above. */
+export const PACKED_STATUS: readonly SessionInput["status"][] = ["draft", "published", "cancelled"];
 
 /** Block kinds as the daily sums see them. */
 const K_NONE = 0;

@@ -1,7 +1,7 @@
 import { ACC_SIZE, addAccToColumns, evaluateSessionInto, resolveProfile, type ResolvedProfile } from "./accumulate";
 import { alignLogs, type AlignedLogs } from "./align-logs";
 import { dateFromDayIndex, dayIndex, weekdayOfDay } from "./dates";
-import { addPackedToColumns, PACKED_ACC_SIZE, PACKED_CANCELLED, PACKED_PUBLISHED, sumPackedSession, type PackedSessions } from "./packed";
+import { addPackedToColumns, PACKED_ACC_SIZE, PACKED_CANCELLED, PACKED_STATUS, sumPackedSession, type PackedSessions } from "./packed";
 import { toSessionMetrics, type SessionMetrics } from "./session-metrics";
 import {
   METRICS,
@@ -142,11 +142,7 @@ function packedIntoColumns(
     const hasLog = p.hasLog[k] === 1;
     const status = p.status[k];
     if ((hasLog || status !== PACKED_CANCELLED) && (firstDataIndex === null || i < firstDataIndex)) firstDataIndex = i;
-    // sessionUse, spelt out on the status codes.
-    let use: SessionUse;
-    if (hasLog) use = view === "actual" && day > todayDay ? "none" : "logged";
-    else if (day < todayDay) use = status === PACKED_PUBLISHED ? "missing" : "none";
-    else use = view === "projected" && status !== PACKED_CANCELLED ? "planned" : "none";
+    const use = sessionUse(PACKED_STATUS[status], hasLog, day, todayDay, view);
     if (use === "none") continue;
     if (use === "missing") {
       missing[i] = 1;
