@@ -144,14 +144,14 @@ type PackedBlock = [number, BlockKind, string, RunningPrescription | null, PlyoD
 // Each session's blocks come packed into one JSON text: the sqlite3 driver pays per value it hands over, and
 // this cut the squad read by about a quarter. The text is built only from integer ids, json_quote()d strings
 // and the JSON columns as Sequelize stored them, so it is always valid JSON.
-const SESSION_FILTER = "s.team_id = :teamId AND s.date BETWEEN :from AND :to AND (:athleteId IS NULL OR s.athlete_id = :athleteId)";
+const SESSION_FILTER = "s.team_id = :teamId AND s.date BETWEEN :from AND :to AND (:everyone = 1 OR s.athlete_id IN (:athleteIds))";
 const SQL = {
   team: `SELECT t.time_zone, t.week_start_day, s.id AS settings_id, s.hsr_speed_ms, s.near_max_pct, s.acwr_method, s.acwr_metric, s.spike_ratio,
     s.rising_ratio, s.low_ratio, s.weekly_change_limit_pct, s.recovery_hours
     FROM teams t LEFT JOIN team_load_settings s ON s.team_id = t.id WHERE t.id = :teamId`,
   athletes: `SELECT a.id, a.name, a.group_id, g.name AS group_name, g.sort_order AS group_order, a.vmax_ms, a.tau_s, a.step_length_m, a.plyo_level
     FROM athletes a LEFT JOIN training_groups g ON g.id = a.group_id
-    WHERE a.team_id = :teamId AND (:athleteId IS NULL OR a.id = :athleteId)`,
+    WHERE a.team_id = :teamId AND (:everyone = 1 OR a.id IN (:athleteIds))`,
   sessions: `SELECT s.id, s.athlete_id, s.date, s.start_time, s.duration_min, s.planned_rpe, s.status, l.completion, l.rpe, l.minutes, l.completed_reps,
     (SELECT '[' || group_concat('[' || b.id || ',' || json_quote(b.kind) || ',' || json_quote(b.title) || ',' || coalesce(b.running, 'null') || ','
       || coalesce(b.drills, 'null') || ']', ',' ORDER BY b.position, b.id) || ']' FROM session_blocks b WHERE b.session_id = s.id) AS blocks
@@ -165,9 +165,10 @@ function toBlocks(packed: string | null): BlockInput[] {
   return list.map(([id, kind, title, running, drills]) => ({ id: String(id), kind, title, running, drills }));
 }
 
-async function loadInputs({ teamId, athleteId, from, to, transaction }: Range & { teamId: number; athleteId?: number }): Promise<LoadInputs> {
+async function loadInputs({ teamId, athleteIds, from, to, transaction }: Range & { teamId: number; athleteIds?: readonly number[] }): Promise<LoadInputs> {
   const { sequelize } = await db();
-  const replacements = { teamId, athleteId: athleteId ?? null, from, to };
+  // IN () is not SQL: an empty list becomes [0], which matches no row.
+  const replacements = { teamId, everyone: athleteIds ? 0 : 1, athleteIds: athleteIds && athleteIds.length > 0 ? [...athleteIds] : [0], from, to };
   const select = <T extends object>(sql: string) => sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements, transaction });
   // A constant three queries whatever the squad size: no query per athlete or per session.
   const [[team], athletes, sessions] = await Promise.all([select<TeamRow>(SQL.team), select<AthleteRow>(SQL.athletes), select<SessionRow>(SQL.sessions)]);
@@ -221,9 +222,9 @@ async function loadInputs({ teamId, athleteId, from, to, transaction }: Range & 
   return { teamId, settings, timeZone: team.time_zone, weekStartDay: engineWeekStartDay(team.week_start_day), athletes: list };
 }
 
-/** Every athlete of the team with sessions (and blocks) and logs dated in [from, to], as engine inputs. */
-export async function getSquadLoadInputs({ teamId, from, to, transaction }: Range & { teamId: number }): Promise<LoadInputs> {
-  return loadInputs({ teamId, from, to, transaction });
+/** Every athlete of the team (or only `athleteIds`) with sessions (and blocks) and logs dated in [from, to], as engine inputs. */
+export async function getSquadLoadInputs({ teamId, athleteIds, from, to, transaction }: Range & { teamId: number; athleteIds?: readonly number[] }): Promise<LoadInputs> {
+  return loadInputs({ teamId, athleteIds, from, to, transaction });
 }
 
 /** One athlete's engine inputs for [from, to]; 404 when the athlete does not exist. */
@@ -231,7 +232,7 @@ export async function getAthleteLoadInputs({ athleteId, from, to, transaction }:
   const { Athlete } = await db();
   const row = await Athlete.findByPk(athleteId, { attributes: ["teamId"], raw: true, transaction });
   if (!row) throw new AppError("not_found", "Not found");
-  const inputs = await loadInputs({ teamId: row.teamId, athleteId, from, to, transaction });
+  const inputs = await loadInputs({ teamId: row.teamId, athleteIds: [athleteId], from, to, transaction });
   const athlete = inputs.athletes[0];
   if (!athlete) throw new AppError("not_found", "Not found");
   return { ...inputs, athlete };

@@ -10,7 +10,7 @@ import type { PlanAthlete, PlanGroup, PlanSession, PlanWeek, PlanWriteResult, We
 import { addDaysTo, isoWeekOf, teamWeekStart, weekDays } from "@/lib/plan/week";
 import { db } from "@/models";
 import { listGroups } from "./athletes";
-import { getAthleteLoadInputs, getSquadLoadInputs, historyRange } from "./load";
+import { getSquadLoadInputs, historyRange } from "./load";
 import { bumped, change, insertBlocks, loadById, loadSessions, notify, type Loaded } from "./plan-rows";
 import type { Override } from "./restriction-guard";
 import { listRestrictions } from "./restrictions";
@@ -111,13 +111,9 @@ export async function withWeekRows({ teamId, today, result }: { teamId: number; 
   }
   const rows: WeekRow[] = [];
   for (const [weekStart, ids] of weeks) {
-    const range = historyRange({ from: weekStart, to: addDaysTo(weekStart, 6) });
     // A drop touches one or two athletes: read just their history, not the whole squad's.
-    const inputs =
-      ids.size <= 3
-        ? await Promise.all([...ids].map((athleteId) => getAthleteLoadInputs({ athleteId, ...range }))).then((each) => ({ settings: each[0]!.settings, athletes: each.map((e) => e.athlete) }))
-        : await getSquadLoadInputs({ teamId, ...range });
-    const squad = inputs.athletes.filter((a) => ids.has(a.id));
+    const inputs = await getSquadLoadInputs({ teamId, athleteIds: [...ids], ...historyRange({ from: weekStart, to: addDaysTo(weekStart, 6) }) });
+    const squad = inputs.athletes;
     const computed = computeSquadWeek(
       squad.map((a) => ({ id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions: a.sessions, logs: a.logs, packed: packSessions(a.sessions, a.logs) })),
       inputs.settings,
