@@ -43,6 +43,8 @@ export async function getLogTarget({ sessionId }: { sessionId: number }): Promis
 
 /** Rules that need the stored session; each failure names its field (400). */
 function checkLog(target: LogTarget, input: SessionLogInput, today: string): void {
+  // A draft was never sent to the athlete: logging it would pin a session the coach is still shaping.
+  if (target.status === "draft") throw new AppError("invalid", "This session is still a draft", { fields: { session: ["Publish the session before it is logged"] } });
   if (target.status === "cancelled") throw new AppError("invalid", "This session was cancelled", { fields: { session: ["A cancelled session cannot be logged"] } });
   if (target.date > today) throw new AppError("invalid", "This session is still ahead", { fields: { session: [`Log it on ${target.date} or later`] } });
   const fields: FieldErrors = {};

@@ -240,6 +240,21 @@ describe("PUT/DELETE /api/sessions/[sessionId]/log", () => {
     expect(future.body.error?.fields).toHaveProperty("session");
   });
 
+  it("answers an athlete's log of a draft exactly like a missing id, and refuses staff a draft too", async () => {
+    const draft = await d.PlannedSession.create({ teamId: a.teamId, athleteId: ada.athleteId!, date: addDays(today, -1), startTime: "17:00", durationMin: 60, title: "Speed", plannedRpe: 6, status: "draft", notes: null, publishedAt: null });
+    as(ada.userId);
+    const missing = await put(999999, { completion: "yes" });
+    const onDraft = await put(draft.id, { completion: "yes" });
+    expect(onDraft).toEqual(missing);
+    expect(missing.status).toBe(404);
+    expect(await del(draft.id)).toEqual(await del(999999));
+    as(a.users.coach.userId);
+    const staff = await put(draft.id, { completion: "yes" });
+    expect(staff.status).toBe(400);
+    expect(staff.body.error?.fields).toHaveProperty("session");
+    expect(await d.SessionLog.count({ where: { sessionId: draft.id } })).toBe(0);
+  });
+
   it("deletes a log", async () => {
     as(a.users.coach.userId);
     expect((await del(adaPast.id)).body).toEqual({ deleted: true });

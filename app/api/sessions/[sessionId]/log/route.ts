@@ -1,4 +1,5 @@
 import { requireAthlete } from "@/lib/auth/access";
+import { scopeOf } from "@/lib/auth/permissions";
 import { teamToday } from "@/lib/data/load";
 import { deleteSessionLog, getLogTarget, saveSessionLog } from "@/lib/data/logs";
 import { AppError } from "@/lib/errors";
@@ -10,12 +11,16 @@ export const runtime = "nodejs";
 
 type Params = { sessionId: string };
 
-/** The session and a viewer allowed to log it (an athlete only their own sessions); 404 reveals nothing. */
+/**
+ * The session and a viewer allowed to log it (an athlete only their own published or cancelled sessions).
+ * A draft answers an athlete exactly like a missing id, so nobody learns which ids are the coach's drafts.
+ */
 async function authorized(params: Promise<Params>) {
   const { sessionId } = parseParams(await params, sessionParamsSchema);
   const target = await getLogTarget({ sessionId });
   if (!target) throw new AppError("not_found", "Not found");
   const viewer = await requireAthlete({ athleteId: target.athleteId, can: "log:write" });
+  if (target.status === "draft" && scopeOf(viewer.role, "plan:view") !== "team") throw new AppError("not_found", "Not found");
   return { target, viewer };
 }
 
