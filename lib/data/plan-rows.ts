@@ -85,10 +85,9 @@ export async function insertBlocks({ teamId, sessionId, blocks, start = 0, trans
   if (blocks.length === 0) return;
   await assertTemplateLinks({ teamId, blocks, transaction });
   const { SessionBlock } = await db();
-  await SessionBlock.bulkCreate(
-    blocks.map((raw, i) => ({ sessionId, position: start + i, ...blockValues(raw) })),
-    { transaction },
-  );
+  // One create per block, not bulkCreate: Sequelize's SQLite bulkCreate writes the values into the SQL text,
+  // where a NUL ends the statement; create() binds them. A session holds at most 20 blocks.
+  for (const [i, raw] of blocks.entries()) await SessionBlock.create({ sessionId, position: start + i, ...blockValues(raw) }, { transaction });
 }
 
 /** The stored columns of a block, normalised. */

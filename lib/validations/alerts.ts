@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { noteText } from "./text";
 
 export const ALERT_STATUS_FILTERS = ["open", "acknowledged", "resolved", "unresolved", "all"] as const;
 
@@ -12,7 +13,7 @@ export type AlertListQuery = z.infer<typeof alertListQuerySchema>;
 
 export const alertIdParamsSchema = z.object({ alertId: z.coerce.number().int().positive() });
 
-const note = z.string().trim().max(2000, "Keep the note under 2000 characters");
+const note = noteText().max(2000, "Keep the note under 2000 characters");
 
 /** acknowledge: "I have seen it"; resolve: handled, with a note saying how; reopen: look again. */
 export const alertActionSchema = z.discriminatedUnion("action", [

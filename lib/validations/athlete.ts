@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { lineText } from "./text";
 
 const optionalNumber = (min: number, max: number, label: string) =>
   z.preprocess(
@@ -13,7 +14,7 @@ const optionalDate = z.preprocess(
 
 /** An athlete's profile and test values; ranges are generous bounds for sprinting humans, not norms. */
 export const athleteSchema = z.object({
-  name: z.string().trim().min(2, "Enter the athlete's name").max(120),
+  name: lineText().min(2, "Enter the athlete's name").max(120),
   groupId: z.preprocess((v) => (v === "" || v === undefined ? null : v), z.coerce.number().int().positive().nullable()),
   sex: z.preprocess((v) => (v === "" || v === undefined ? null : v), z.enum(["female", "male"]).nullable()),
   birthDate: optionalDate,

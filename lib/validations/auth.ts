@@ -1,14 +1,15 @@
 import { z } from "zod";
+import { emailText, lineText } from "./text";
 
 export const signInSchema = z.object({
-  email: z.string().trim().toLowerCase().pipe(z.email("Enter a valid e-mail address")),
+  email: emailText(),
   password: z.string().min(1, "Enter your password").max(200),
 });
 export type SignInInput = z.infer<typeof signInSchema>;
 
 export const setPasswordSchema = z
   .object({
-    token: z.string().min(20, "This link is not valid").max(200),
+    token: lineText().min(20, "This link is not valid").max(200),
     password: z.string().min(10, "Use at least 10 characters").max(200),
     confirm: z.string(),
   })
@@ -16,6 +17,6 @@ export const setPasswordSchema = z
 export type SetPasswordInput = z.infer<typeof setPasswordSchema>;
 
 export const forgotPasswordSchema = z.object({
-  email: z.string().trim().toLowerCase().pipe(z.email("Enter a valid e-mail address")),
+  email: emailText(),
 });
 export type ForgotPasswordInput = z.infer<typeof forgotPasswordSchema>;

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { lineText } from "./text";
 import { dayIndex } from "@/lib/load/dates";
 import { METRICS } from "@/lib/load/types";
 import { idSchema, localDateSchema, startTimeSchema } from "./plan";
@@ -37,7 +38,7 @@ export type SquadLoadQuery = z.infer<typeof squadLoadQuerySchema>;
 
 /** A session as the planner holds it while dragging; id is the saved session's id when it already exists. */
 export const previewSessionSchema = z.object({
-  id: z.union([idSchema, z.string().trim().min(1).max(40)]).optional(),
+  id: z.union([idSchema, lineText().min(1).max(40)]).optional(),
   date: localDateSchema,
   startTime: startTimeSchema.default("16:00"),
   durationMin: z.number({ error: "Enter minutes" }).int("Whole minutes").min(5, "At least 5 min").max(300, "At most 300 min"),

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { noteText } from "./text";
 
 // Kept literal (not imported from models/) so the browser bundle never pulls in Sequelize.
 export const LOG_COMPLETIONS = ["yes", "partly", "no"] as const;
@@ -17,7 +18,7 @@ export const sessionLogSchema = z
       )
       .nullable()
       .default(null),
-    notes: z.string().trim().max(2000, "Keep notes under 2000 characters").nullable().default(null),
+    notes: noteText().max(2000, "Keep notes under 2000 characters").nullable().default(null),
   })
   .strict();
 export type SessionLogInput = z.infer<typeof sessionLogSchema>;

@@ -1,11 +1,12 @@
 import { z } from "zod";
+import { emailText, lineText } from "./text";
 import { ROLES } from "@/lib/auth/roles";
 
 export const roleSchema = z.enum(ROLES, { message: "Choose a role" });
 
 export const addMemberSchema = z.object({
-  name: z.string().trim().min(2, "Enter the member's name").max(120, "Keep the name under 120 characters"),
-  email: z.string().trim().toLowerCase().pipe(z.email("Enter a valid e-mail address")),
+  name: lineText().min(2, "Enter the member's name").max(120, "Keep the name under 120 characters"),
+  email: emailText(),
   role: roleSchema,
   /** For an athlete: link an existing athlete profile instead of creating one. */
   athleteId: z.coerce.number().int().positive().optional(),

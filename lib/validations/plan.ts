@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { lineText, noteText } from "./text";
 import { isLocalDate } from "@/lib/load/dates";
 import { blockSchema } from "./template";
 
@@ -10,12 +11,12 @@ export const startTimeSchema = z.string({ error: "Enter a time as HH:MM" }).rege
 const versionSchema = z.number({ error: "Send the version you read" }).int().min(1, "Send the version you read");
 const durationSchema = z.number({ error: "Enter minutes" }).int("Whole minutes").min(5, "At least 5 min").max(300, "At most 300 min");
 const rpeSchema = z.number({ error: "Enter an RPE from 0 to 10" }).min(0, "CR-10: 0 to 10").max(10, "CR-10: 0 to 10");
-const titleSchema = z.string({ error: "Give it a title" }).trim().min(1, "Give it a title").max(120, "Keep the title under 120 characters");
-const notesSchema = z.string().trim().max(2000, "Keep notes under 2000 characters").nullable();
+const titleSchema = lineText({ error: "Give it a title" }).min(1, "Give it a title").max(120, "Keep the title under 120 characters");
+const notesSchema = noteText().max(2000, "Keep notes under 2000 characters").nullable();
 
 /** A coach's reason to plan past a physio restriction; recorded and sent to the medical staff. */
 export const overrideSchema = z.object({
-  reason: z.string({ error: "Say why the session should go ahead" }).trim().min(3, "Say why the session should go ahead (3 characters or more)").max(500, "Keep the reason under 500 characters"),
+  reason: noteText({ error: "Say why the session should go ahead" }).min(3, "Say why the session should go ahead (3 characters or more)").max(500, "Keep the reason under 500 characters"),
 });
 export type OverrideInput = z.infer<typeof overrideSchema>;
 const overrideField = { override: overrideSchema.optional() };

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { noteText } from "./text";
 import { BLOCK_KINDS, RUNNING_KINDS, type BlockKind } from "@/lib/load/types";
 import { idSchema, localDateSchema } from "./plan";
 
@@ -12,9 +13,7 @@ const dates = {
   startsOn: localDateSchema,
   // Open-ended ("until lifted") when absent or null; the form sends null for an empty date field.
   endsOn: localDateSchema.nullable().optional(),
-  note: z
-    .string({ error: "Say why, and what is still fine" })
-    .trim()
+  note: noteText({ error: "Say why, and what is still fine" })
     .min(3, "Say why, and what is still fine (at least 3 characters)")
     .max(500, "Keep the note under 500 characters"),
 };

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { lineText, noteText } from "./text";
 import { BLOCK_KINDS, RUNNING_KINDS } from "@/lib/load/types";
 
 // One schema per input, parsed by the handlers and used by the template editor through zodResolver.
@@ -31,15 +32,15 @@ export const runningSchema = z
   });
 
 export const drillSchema = z.object({
-  name: z.string({ error: "Name the drill" }).trim().min(1, "Name the drill").max(80, "Keep it under 80 characters"),
+  name: lineText({ error: "Name the drill" }).min(1, "Name the drill").max(80, "Keep it under 80 characters"),
   sets: count("sets", 10),
   reps: count("reps", 30),
   contactsPerRep: count("contacts per rep", 10),
   intensity: plyoIntensitySchema,
 });
 
-const title = z.string({ error: "Give it a title" }).trim().min(1, "Give it a title").max(120, "Keep the title under 120 characters");
-const notes = z.string().trim().max(1000, "Keep notes under 1000 characters").nullable();
+const title = lineText({ error: "Give it a title" }).min(1, "Give it a title").max(120, "Keep the title under 120 characters");
+const notes = noteText().max(1000, "Keep notes under 1000 characters").nullable();
 
 const blockFields = {
   kind: blockKindSchema,
