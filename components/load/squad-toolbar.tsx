@@ -1,9 +1,9 @@
 "use client";
 
-import Papa from "papaparse";
 import type { ReactTable } from "@tanstack/react-table";
 import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/field";
+import { toCsv } from "@/lib/format/csv";
 import { FLAG_DISPLAY } from "@/lib/load/flag-display";
 import type { FlagKind } from "@/lib/load/flags";
 import { COLUMN_LABELS, csvValue, type FlagFilter, type SquadRow, type squadFeatures } from "./squad-load-columns";
@@ -16,7 +16,7 @@ const FLAG_KINDS = Object.keys(FLAG_DISPLAY) as FlagKind[];
 function exportCsv(table: Table, week: string) {
   const columns = table.getVisibleLeafColumns().map((c) => c.id);
   const data = table.getRowModel().rows.map((r) => columns.map((id) => csvValue(r.original, id)));
-  const csv = Papa.unparse({ fields: columns.map((id) => COLUMN_LABELS[id] ?? id), data });
+  const csv = toCsv(columns.map((id) => COLUMN_LABELS[id] ?? id), data);
   const url = URL.createObjectURL(new Blob([csv], { type: "text/csv;charset=utf-8" }));
   const a = document.createElement("a");
   a.href = url;

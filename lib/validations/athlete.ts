@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { pastDateSchema } from "./dates";
 import { lineText } from "./text";
 
 const optionalNumber = (min: number, max: number, label: string) =>
@@ -9,7 +10,7 @@ const optionalNumber = (min: number, max: number, label: string) =>
 
 const optionalDate = z.preprocess(
   (v) => (v === "" || v === undefined ? null : v),
-  z.iso.date({ message: "Use a date like 2026-10-06" }).nullable(),
+  pastDateSchema.nullable(),
 );
 
 /** An athlete's profile and test values; ranges are generous bounds for sprinting humans, not norms. */

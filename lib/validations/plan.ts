@@ -1,12 +1,11 @@
 import { z } from "zod";
 import { lineText, noteText } from "./text";
-import { isLocalDate } from "@/lib/load/dates";
+import { localDateSchema } from "./dates";
 import { blockSchema } from "./template";
 
 export const idSchema = z.coerce.number().int().positive();
-export const localDateSchema = z
-  .string({ error: "Enter a date as YYYY-MM-DD" })
-  .refine((v) => /^\d{4}-\d{2}-\d{2}$/.test(v) && isLocalDate(v), "Enter a date as YYYY-MM-DD");
+// Kept exported from here for the schemas that import it alongside idSchema.
+export { localDateSchema };
 export const startTimeSchema = z.string({ error: "Enter a time as HH:MM" }).regex(/^([01]\d|2[0-3]):[0-5]\d$/, "Enter a time as HH:MM");
 const versionSchema = z.number({ error: "Send the version you read" }).int().min(1, "Send the version you read");
 const durationSchema = z.number({ error: "Enter minutes" }).int("Whole minutes").min(5, "At least 5 min").max(300, "At most 300 min");
