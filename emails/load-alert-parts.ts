@@ -19,6 +19,8 @@ export interface LoadAlertItem {
   basis: "planned" | "actual";
   /** The athlete's load page in the app. */
   loadUrl: string;
+  /** The section of "How figures are worked out" that explains this flag. */
+  explainUrl?: string | null;
 }
 
 export function formatMetricValue(value: number, unit?: string | null): string {

@@ -17,6 +17,7 @@ export const NAV: NavItem[] = [
   { href: "/load", label: "My load", can: "load:view", scope: "own" },
   { href: "/members", label: "Members", can: "members:manage", scope: "team" },
   { href: "/settings", label: "Thresholds", can: "settings:edit", scope: "team" },
+  { href: "/figures", label: "How figures work", can: "team:view", scope: "own" },
 ];
 
 export function navFor(role: Role): NavItem[] {

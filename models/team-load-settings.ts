@@ -1,7 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 import type { Team } from "./team";
 
-/** Per-team thresholds the load engine reads; defaults follow ../shared/methods.md. */
+/** Per-team thresholds the load engine reads; defaults and sources: lib/load/README.md. */
 export class TeamLoadSettings extends Model<InferAttributes<TeamLoadSettings>, InferCreationAttributes<TeamLoadSettings>> {
   declare id: CreationOptional<number>;
   declare teamId: ForeignKey<Team["id"]>;

@@ -1,4 +1,6 @@
 import { clsx } from "clsx";
+import Link from "next/link";
+import { figuresHref } from "@/lib/load/figures-link";
 import { FLAG_DISPLAY, flagClasses } from "@/lib/load/flag-display";
 import type { Flag } from "@/lib/load/flags";
 import { formatRatio } from "@/lib/load/format";
@@ -13,13 +15,13 @@ export function AcwrCell({ row }: { row: { ratio: number | null; ratioProvisiona
   const label = zone ? FLAG_DISPLAY[zone.kind].label : "In range";
   return (
     <span className="flex items-center justify-end gap-2" data-testid="acwr-cell" data-ratio={row.ratio.toFixed(3)}>
-      <span className="tabular-nums font-medium text-ink-900">
+      <Link href={figuresHref("acwr")} className="tabular-nums font-medium text-ink-900 hover:underline" title="How the ratio is worked out">
         {formatRatio(row.ratio)}
         {row.ratioProvisional ? <sup title="Provisional: under 28 days of history" className="ml-0.5 text-ink-400">*</sup> : null}
-      </span>
-      <span className={clsx("whitespace-nowrap rounded-full border px-1.5 py-0.5 text-2xs font-medium", tone)} title={zone?.reason}>
+      </Link>
+      <Link href={figuresHref("zones")} className={clsx("whitespace-nowrap rounded-full border px-1.5 py-0.5 text-2xs font-medium", tone)} title={zone?.reason}>
         {label}
-      </span>
+      </Link>
     </span>
   );
 }

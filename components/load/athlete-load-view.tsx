@@ -1,6 +1,7 @@
 "use client";
 
 import { clsx } from "clsx";
+import Link from "next/link";
 import { useState } from "react";
 import useSWR from "swr";
 import { Card } from "@/components/ui/card";
@@ -8,6 +9,7 @@ import { LoadCaution } from "@/components/ui/caution";
 import { Select } from "@/components/ui/field";
 import type { AthleteLoadDto } from "@/lib/data/load-views";
 import { addDays } from "@/lib/load/dates";
+import { figuresHref } from "@/lib/load/figures-link";
 import { METRIC_INFO, METRICS, type LoadView, type Metric } from "@/lib/load/types";
 import { FlagList } from "./flag-list";
 import { LoadChart } from "./load-chart";
@@ -74,7 +76,12 @@ export function AthleteLoadView({ initial }: { initial: AthleteLoadDto }) {
         </div>
         <LoadChart days={data.days} unit={info.unit} today={data.today} showPlan={showPlan} />
         <div className="mb-2 mt-6 flex flex-wrap items-baseline justify-between gap-2">
-          <h2 className="text-base font-semibold text-ink-900">Acute:chronic ratio</h2>
+          <h2 className="text-base font-semibold text-ink-900">
+            Acute:chronic ratio{" "}
+            <Link href={figuresHref("acwr")} className="text-xs font-normal text-lane-700 underline">
+              how it is worked out
+            </Link>
+          </h2>
           <p className="text-xs text-ink-500">
             {data.settings.acwrMethod === "ewma" ? "EWMA, 7 and 28 days" : data.settings.acwrMethod === "rolling_coupled" ? "Rolling, coupled" : "Rolling, uncoupled"} · shaded: under{" "}
             {data.settings.lowRatio}, comfortable, climbing from {data.settings.risingRatio}, spike from {data.settings.spikeRatio}

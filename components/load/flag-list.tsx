@@ -1,4 +1,6 @@
+import Link from "next/link";
 import { formatDayLabel } from "@/lib/load/dates";
+import { FLAG_TOPIC, figuresHref } from "@/lib/load/figures-link";
 import type { Flag } from "@/lib/load/flags";
 import { FlagBadge } from "./flag-badge";
 
@@ -13,7 +15,12 @@ export function FlagList({ flags, empty = "No flags this week." }: { flags: read
             <FlagBadge kind={f.kind} provisional={f.provisional} />
             <span className="text-2xs text-ink-400">{formatDayLabel(f.date)}</span>
           </span>
-          <span className="text-sm text-ink-700">{f.reason}</span>
+          <span className="text-sm text-ink-700">
+            {f.reason}{" "}
+            <Link href={figuresHref(f.provisional ? "provisional" : FLAG_TOPIC[f.kind])} className="text-xs text-lane-700 underline" data-testid="flag-explain">
+              How this is worked out
+            </Link>
+          </span>
         </li>
       ))}
     </ul>

@@ -7,7 +7,8 @@ import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import type { AlertRow } from "@/lib/data/alerts";
 import { formatDayLong } from "@/lib/format/dates";
-import { ALERT_KIND_HINT, ALERT_KIND_LABEL } from "@/lib/notices/alert-display";
+import { figuresHref } from "@/lib/load/figures-link";
+import { ALERT_KIND_HINT, ALERT_KIND_LABEL, ALERT_KIND_TOPIC } from "@/lib/notices/alert-display";
 import { AlertActionForm } from "./alert-action-form";
 import { AlertFacts } from "./alert-facts";
 
@@ -47,7 +48,14 @@ export function AlertCard({ alert, canManage, onChange }: { alert: AlertRow; can
       </div>
 
       <p className="mt-3 text-sm text-ink-700">{alert.reason}</p>
-      <p className="mt-1 text-xs text-ink-500">{ALERT_KIND_HINT[alert.kind]}</p>
+      <p className="mt-1 text-xs text-ink-500">
+        {ALERT_KIND_HINT[alert.kind]}{" "}
+        {ALERT_KIND_TOPIC[alert.kind] ? (
+          <Link href={figuresHref(alert.provisional ? "provisional" : ALERT_KIND_TOPIC[alert.kind]!)} className="text-lane-700 underline" data-testid="alert-explain">
+            How this is worked out
+          </Link>
+        ) : null}
+      </p>
       <div className="mt-3">
         <AlertFacts alert={alert} />
       </div>

@@ -1,5 +1,7 @@
 "use client";
 
+import Link from "next/link";
+import { figuresHref } from "@/lib/load/figures-link";
 import { clsx } from "clsx";
 import { memo } from "react";
 import { FLAG_DISPLAY, flagClasses } from "@/lib/load/flag-display";
@@ -71,6 +73,9 @@ export const RowLoadSummary = memo(function RowLoadSummary({ load, preview, rais
           {zone ? <span>· {FLAG_DISPLAY[zone.kind].label}</span> : null}
           {shown.week.ratioProvisional && shown.week.peakRatio !== null ? <span className="font-normal">· provisional</span> : null}
         </span>
+        <Link href={figuresHref(zone ? "zones" : "acwr")} className="text-2xs text-ink-400 underline hover:text-lane-700" data-testid="row-figures-link" aria-label="How these figures are worked out">
+          how?
+        </Link>
         {[...others].map(([kind, list]) => (
           <span key={kind} title={list.map((f) => f.reason).join("\n")} data-testid="row-flag" data-kind={kind} className={clsx("rounded-full border px-1.5 py-px text-2xs", flagClasses(kind).badge, isNew(kind) && "ring-2 ring-offset-1 ring-flag-spike/50")}>
             {FLAG_DISPLAY[kind].label}

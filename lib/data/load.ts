@@ -45,7 +45,7 @@ type Range = { from: string; to: string; transaction?: Transaction };
 
 /**
  * Days of history to load before the first day a caller shows. The engine seeds the EWMA with the first day's
- * load; a seed error decays as (27/29)^t (methods.md §2), so after 168 days it is below 1e-5 and answers do
+ * load; a seed error decays as (27/29)^t (lib/load/README.md §6), so after 168 days it is below 1e-5 and answers do
  * not depend on where loading started. Rolling windows need only 28 days.
  */
 export const LOAD_HISTORY_DAYS = 168;

@@ -4,7 +4,7 @@ export type EwmaSeed = "first" | "zero";
 
 export const ACUTE_DAYS = 7;
 export const CHRONIC_DAYS = 28;
-/** Ratios from fewer days of history than this are provisional (a design choice; no published rule, methods.md §2). */
+/** Ratios from fewer days of history than this are provisional (a design choice; no published rule, lib/load/README.md §6). */
 export const ACWR_MIN_HISTORY_DAYS = 28;
 
 /** λ = 2 / (N + 1), Williams et al. 2017, BJSM 51:209. */
@@ -161,7 +161,7 @@ export function uncoupledRatio(acute: number, w1: number, w2: number, w3: number
   return safeRatio(acute, (w1 + w2 + w3) / 3);
 }
 
-/** Exact link between the two weekly forms: U = 3C / (4 − C) (derived, methods.md §1). */
+/** Exact link between the two weekly forms: U = 3C / (4 − C) (derived, lib/load/README.md §6). */
 export function uncoupledFromCoupled(c: number): number | null {
   return c < 4 ? (3 * c) / (4 - c) : null;
 }

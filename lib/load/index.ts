@@ -2,7 +2,7 @@
  * Sprintwright load engine: pure, isomorphic maths (no I/O, no clock, no React). Route handlers and the
  * planner's drag preview call the same functions, so the number a coach sees while dragging is the number stored.
  *
- * Model choices (sources and check values: shared/methods.md; pinned by tests/unit/load):
+ * Model choices (sources and check values: lib/load/README.md; pinned by tests/unit/load):
  * - Dates are local calendar dates "YYYY-MM-DD" handled as integer day numbers; "today" is always an input.
  * - Running reps follow the mono-exponential model v(t) = target·(1 − e^(−t/τ)) from rest (Furusawa, Hill &
  *   Parkinson 1927), target = intensityPct% of vmax; a flying rep's run-in is run and counted. HSR and near-max

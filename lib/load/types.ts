@@ -73,7 +73,7 @@ export interface AthleteProfile {
 // Defaults used while an athlete is untested. They only shape estimates; the UI should say "estimated".
 /** 9.0 m/s (32.4 km/h): a trained, non-elite sprinter; trained sprinters span about 9–11 m/s [from memory]. */
 export const DEFAULT_VMAX = 9.0;
-/** 1.2 s: mid-range for the Furusawa/Hill model in trained sprinters, about 1.0–1.4 s [from memory]; methods.md T5 uses 1.2. */
+/** 1.2 s: mid-range for the Furusawa/Hill model in trained sprinters, about 1.0–1.4 s [from memory]; lib/load/README.md §1. */
 export const DEFAULT_TAU = 1.2;
 /** 2.1 m: low end of max-velocity step length 2.0–2.6 m [from memory], because sprint metres include the acceleration, where steps are shorter. */
 export const DEFAULT_STEP_LENGTH = 2.1;

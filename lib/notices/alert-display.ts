@@ -1,4 +1,5 @@
 // Plain words for alerts, shared by the inbox (browser) and the alert e-mails (server).
+import { figuresHref, type FiguresTopic } from "@/lib/load/figures-link";
 import { FLAG_DISPLAY } from "@/lib/load/flag-display";
 import { METRIC_INFO, type Metric } from "@/lib/load/types";
 import type { LoadAlertItem } from "@/emails/load-alert-parts";
@@ -18,6 +19,15 @@ export const ALERT_KIND_HINT: Record<AlertKind, string> = {
   plyo_volume: FLAG_DISPLAY.plyo_volume.hint,
   recovery: FLAG_DISPLAY.recovery.hint,
   restriction_override: "A session was planned against a restriction the medical staff set.",
+};
+
+/** Where each alert kind is explained ("How figures are worked out"); overrides are not a load figure. */
+export const ALERT_KIND_TOPIC: Record<AlertKind, FiguresTopic | null> = {
+  spike: "zones",
+  weekly_jump: "weekly-change",
+  plyo_volume: "contacts",
+  recovery: "recovery",
+  restriction_override: null,
 };
 
 function isMetric(value: string | null): value is Metric {
@@ -69,5 +79,6 @@ export function toLoadAlertItem(alert: AlertForMail, appUrl: string): LoadAlertI
     date: alert.date,
     basis: alert.basis,
     loadUrl: loadPageUrl(appUrl, alert.athleteId),
+    explainUrl: ALERT_KIND_TOPIC[alert.kind] ? figuresHref(ALERT_KIND_TOPIC[alert.kind]!, appUrl) : null,
   };
 }

@@ -32,7 +32,7 @@ describe("permission table", () => {
 describe("navigation", () => {
   it("never shows an athlete a squad screen", () => {
     const hrefs = navFor("athlete").map((n) => n.href);
-    expect(hrefs).toEqual(["/home", "/me", "/load"]);
+    expect(hrefs).toEqual(["/home", "/me", "/load", "/figures"]);
     expect(navFor("athlete").find((n) => n.href === "/load")?.label).toBe("My load");
   });
 

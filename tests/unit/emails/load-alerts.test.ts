@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { alertDigestEmail } from "@/emails/alert-digest";
 import { loadAlertEmail } from "@/emails/load-alert";
 import { LOAD_CAUTION } from "@/lib/load/flag-display";
+import { toLoadAlertItem } from "@/lib/notices/alert-display";
 
 // Product safety rule: every mail that shows a load flag carries this caution (html and text).
 const CAUTION = LOAD_CAUTION;
@@ -34,6 +35,17 @@ describe("load alert mails", () => {
     }
     expect(mail.text).toContain(CAUTION);
     expect(mail.html).toContain(CAUTION_HTML);
+  });
+
+  it("links each load flag to its section of the explanation page; an override has none", () => {
+    const alert = { athleteId: 7, athleteName: "Maya Okafor", metric: "srpe", value: 1.7, threshold: 1.5, date: "2026-03-31", basis: "planned" as const };
+    const item = toLoadAlertItem({ ...alert, kind: "spike" }, "https://sprintwright.test/");
+    expect(item.explainUrl).toBe("https://sprintwright.test/figures#zones");
+    const mail = loadAlertEmail({ ...item, teamName: "Harbour Vale Sprint Club" });
+    expect(mail.text).toContain("https://sprintwright.test/figures#zones");
+    expect(mail.html).toContain("https://sprintwright.test/figures#zones");
+    expect(toLoadAlertItem({ ...alert, kind: "weekly_jump" }, "https://x.test").explainUrl).toBe("https://x.test/figures#weekly-change");
+    expect(toLoadAlertItem({ ...alert, kind: "restriction_override" }, "https://x.test").explainUrl).toBeNull();
   });
 
   it("logged-session alerts say so", () => {

@@ -11,7 +11,7 @@ import {
 
 const rep = (value: number, n: number): number[] => Array.from({ length: n }, () => value);
 
-describe("EWMA constants (Williams et al. 2017, BJSM 51:209: λ = 2/(N+1); methods.md §2 [C])", () => {
+describe("EWMA constants (Williams et al. 2017, BJSM 51:209: λ = 2/(N+1); lib/load/README.md §6 [C])", () => {
   it("λ7 = 0.25 and λ28 = 2/29", () => {
     expect(ewmaLambda(7)).toBe(0.25);
     expect(ewmaLambda(28)).toBeCloseTo(0.0689655172, 10);
@@ -36,7 +36,7 @@ describe("EWMA constants (Williams et al. 2017, BJSM 51:209: λ = 2/(N+1); metho
   });
 });
 
-describe("EWMA check values (methods.md §2 [C], recurrence of Williams et al. 2017)", () => {
+describe("EWMA check values (lib/load/README.md §6 [C], recurrence of Williams et al. 2017)", () => {
   it("E1: loads [100, 200] seeded with day 1 → acute 125, chronic 106.896552, ratio 1.169355", () => {
     const s = acwrSeries([100, 200], "ewma");
     expect(s.acute[1]).toBe(125);
@@ -86,13 +86,13 @@ describe("EWMA check values (methods.md §2 [C], recurrence of Williams et al. 2
   });
 });
 
-describe("rolling ACWR (Hulin 2016 coupled; Lolli 2019 / Gabbett 2019 uncoupled; methods.md §1 [C])", () => {
+describe("rolling ACWR (Hulin 2016 coupled; Lolli 2019 / Gabbett 2019 uncoupled; lib/load/README.md §6 [C])", () => {
   it("R1 weekly form: A 1800, W 1200/1100/1000 → C = 1.411765, U = 1.636364", () => {
     const c = coupledRatio(1800, 1200, 1100, 1000)!;
     const u = uncoupledRatio(1800, 1200, 1100, 1000)!;
     expect(c).toBeCloseTo(1.411765, 6);
     expect(u).toBeCloseTo(1.636364, 6);
-    // Exact link U = 3C / (4 − C) and back (derived, methods.md §1).
+    // Exact link U = 3C / (4 − C) and back (derived, lib/load/README.md §6).
     expect(uncoupledFromCoupled(c)).toBeCloseTo(u, 12);
     expect(coupledFromUncoupled(u)).toBeCloseTo(c, 12);
   });
@@ -128,7 +128,7 @@ describe("rolling ACWR (Hulin 2016 coupled; Lolli 2019 / Gabbett 2019 uncoupled;
   });
 });
 
-describe("provisional ratios and zero chronic (design choices, methods.md §2 and §9)", () => {
+describe("provisional ratios and zero chronic (design choices, lib/load/README.md §6)", () => {
   it("ratios with fewer than 28 days of history are provisional", () => {
     const s = acwrSeries(rep(100, 40), "ewma");
     expect(s.provisional[26]).toBe(true);

@@ -73,7 +73,7 @@ describe("computeAthleteLoad", () => {
       view: "projected",
       weekStart: "2026-02-23",
     });
-    // Coupled: acute 600, chronic (21·300 + 7·600)/28 = 375 → 1.6 on the Sunday (as R3, methods.md §1 [C]).
+    // Coupled: acute 600, chronic (21·300 + 7·600)/28 = 375 → 1.6 on the Sunday (as R3, lib/load/README.md §6 [C]).
     const spike = res.flags.find((f) => f.kind === "spike");
     expect(spike?.value).toBeCloseTo(1.6, 9);
     expect(spike?.reason).toBe("ACWR (sRPE, rolling, coupled) 1.60 on Sun 1 Mar is at or above the spike threshold 1.50.");
@@ -174,7 +174,7 @@ describe("computeWeekPreview with a shortened history", () => {
     const preview = computeWeekPreview({ ...ctx, weekSessions, weekLogs, profile: ath.profile, settings: SETTINGS, weekStart: WEEK, today: TODAY });
     const full = computeAthleteLoad({ profile: ath.profile, settings: SETTINGS, sessions: ath.sessions, logs: ath.logs, from: WEEK, to: WEEK, today: TODAY, view: "projected", weekStart: WEEK });
     expect(preview.week.ratioProvisional).toBe(false);
-    // 84 days of history leave (27/29)^84 ≈ 0.25% of the chronic seed error (methods.md §2): close, not equal.
+    // 84 days of history leave (27/29)^84 ≈ 0.25% of the chronic seed error (lib/load/README.md §6): close, not equal.
     expect(preview.week.peakRatio!).toBeCloseTo(full.week.peakRatio!, 2);
   });
 

@@ -28,13 +28,13 @@ describe("running blocks", () => {
     expect(flying.nearMaxM).toBeCloseTo(4 * metresAtOrAbove(9, rep), 12);
   });
 
-  it("H2 boundary: a rep at 93.75% earns near-max metres at a 90% threshold but none at 95% (methods.md §6 [C])", () => {
+  it("H2 boundary: a rep at 93.75% earns near-max metres at a 90% threshold but none at 95% (lib/load/README.md §1 B3 [C])", () => {
     const block = runBlock("max_velocity", { start: "flying", runInM: 30, distanceM: 30, intensityPct: 93.75 });
     expect(blockMetrics(block, PROFILE, SETTINGS).nearMaxM).toBeGreaterThan(0);
     expect(blockMetrics(block, PROFILE, { ...SETTINGS, nearMaxPct: 95 }).nearMaxM).toBe(0);
   });
 
-  it("H3 boundary: 94.92% of vmax 9.8 stays under a 95% threshold (methods.md §6 [C])", () => {
+  it("H3 boundary: 94.92% of vmax 9.8 stays under a 95% threshold (lib/load/README.md §1 B3 [C])", () => {
     const block = runBlock("max_velocity", { start: "flying", runInM: 30, distanceM: 20, intensityPct: 94.92 });
     expect(blockMetrics(block, { ...PROFILE, vmax: 9.8 }, { ...SETTINGS, nearMaxPct: 95 }).nearMaxM).toBe(0);
   });
@@ -67,7 +67,7 @@ describe("running blocks", () => {
   });
 });
 
-describe("plyometric contacts (NSCA: one contact per landing of one foot or both feet; methods.md §5 [C])", () => {
+describe("plyometric contacts (NSCA: one contact per landing of one foot or both feet; lib/load/README.md §2 [C])", () => {
   it("P1: 2×10 pogo + 3×8 box jumps + 4×6 bounds = 68 contacts", () => {
     const m = blockMetrics(
       plyoBlock([drill(2, 10, 1, "low", "pogo hops"), drill(3, 8, 1, "moderate", "box jumps"), drill(4, 6, 1, "high", "alternate-leg bounds")]),

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { DEFAULT_SD_TYPE, monotony, strain } from "@/lib/load/monotony";
 
-// Foster 1998, MSSE 30:1164: monotony = daily mean ÷ SD, strain = weekly load × monotony. Check values: methods.md §3 [C].
+// Foster 1998, MSSE 30:1164: monotony = daily mean ÷ SD, strain = weekly load × monotony. Check values: lib/load/README.md §9 [C].
 // Which SD Foster meant is not stated [from memory]; both are pinned, population is the app default.
 
 describe("monotony and strain", () => {

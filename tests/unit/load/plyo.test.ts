@@ -5,7 +5,7 @@ import { emptyMetricColumns } from "@/lib/load/series";
 import { SETTINGS, drill } from "./fixtures";
 
 // NSCA contact ranges per session: Potach & Chu, Essentials of Strength Training and Conditioning, 4th ed. (2016)
-// [from memory; beginner 80–100 confirmed by a secondary page citing NSCA]. Check values: methods.md §5 [C].
+// [from memory; beginner 80–100 confirmed by a secondary page citing NSCA]. Check values: lib/load/README.md §2 [C].
 
 describe("NSCA contact bands", () => {
   it("beginner 80–100, intermediate 100–120, advanced 120–140 [from memory]", () => {

@@ -5,7 +5,7 @@ import { blockMetrics } from "@/lib/load/block-metrics";
 import { metresAtOrAbove } from "@/lib/load/sprint-model";
 import { ACWR_METHODS, DEFAULT_TEAM_LOAD_SETTINGS, type AthleteProfile, type BlockInput } from "@/lib/load/types";
 
-// Properties that follow from the definitions (methods.md §1, §2, §6): checked on random inputs with fast-check.
+// Properties that follow from the definitions (lib/load/README.md §1, §6): checked on random inputs with fast-check.
 
 const load = fc.oneof(fc.constant(0), fc.double({ min: 1, max: 2000, noNaN: true }));
 const loads = (minLength: number) => fc.array(load, { minLength, maxLength: 160 });

@@ -32,7 +32,7 @@ describe("dailySeries", () => {
     expect(Array.from(s.missing)).toEqual([0, 0, 0, 1, 0, 0, 0]);
   });
 
-  it("S1: RPE 7 × 60 (420 AU) and RPE 5 × 45 (225 AU) on one day give 645 AU (Foster et al. 2001; methods.md §3 [C])", () => {
+  it("S1: RPE 7 × 60 (420 AU) and RPE 5 × 45 (225 AU) on one day give 645 AU (Foster et al. 2001; lib/load/README.md §3 [C])", () => {
     const am = session("2026-03-09");
     const pm = session("2026-03-09", { startTime: "17:00" });
     const s = dailySeries({

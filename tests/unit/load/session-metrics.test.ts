@@ -5,7 +5,7 @@ import { actualSessionMetrics, metricsFromAcc, sessionMetrics, srpe } from "@/li
 import { METRICS } from "@/lib/load/types";
 import { PROFILE, SETTINGS, drill, log, plyoBlock, runBlock, session } from "./fixtures";
 
-describe("sRPE (Foster et al. 2001, JSCR 15:109; methods.md §3 S1 [C])", () => {
+describe("sRPE (Foster et al. 2001, JSCR 15:109; lib/load/README.md §3 S1 [C])", () => {
   it("S1: RPE 7 × 60 min = 420 AU; RPE 5 × 45 min = 225 AU", () => {
     expect(srpe(7, 60)).toBe(420);
     expect(srpe(5, 45)).toBe(225);

@@ -11,9 +11,9 @@ import {
   velocityAt,
 } from "@/lib/load/sprint-model";
 
-// Model: Furusawa, Hill & Parkinson 1927, Proc R Soc B 102:29–42. Check values: methods.md §8 [C].
+// Model: Furusawa, Hill & Parkinson 1927, Proc R Soc B 102:29–42. Check values: lib/load/README.md §1 [C].
 
-describe("T1: average speed between gates (methods.md §8 [C])", () => {
+describe("T1: average speed between gates (lib/load/README.md §1 [C])", () => {
   it("a flying 20 m in 2.000 s = 10 m/s = 36 km/h; 10 m in 1.05 s = 9.523810 m/s = 34.285714 km/h", () => {
     expect(averageSpeed(20, 2)).toBe(10);
     expect(msToKmh(averageSpeed(20, 2))).toBeCloseTo(36, 12);
@@ -22,7 +22,7 @@ describe("T1: average speed between gates (methods.md §8 [C])", () => {
   });
 });
 
-describe("T2: vmax 10 m/s, τ 1.0 s (methods.md §8 [C])", () => {
+describe("T2: vmax 10 m/s, τ 1.0 s (lib/load/README.md §1 [C])", () => {
   it("speeds", () => {
     expect(velocityAt(1, 10, 1)).toBeCloseTo(6.321206, 6);
     expect(velocityAt(2, 10, 1)).toBeCloseTo(8.646647, 6);
@@ -43,7 +43,7 @@ describe("T2: vmax 10 m/s, τ 1.0 s (methods.md §8 [C])", () => {
   });
 });
 
-describe("T3: time to distance, vmax 10, τ 1 (methods.md §8 [C])", () => {
+describe("T3: time to distance, vmax 10, τ 1 (lib/load/README.md §1 [C])", () => {
   const cases: [number, number][] = [
     [5, 1.19829],
     [10, 1.841406],
@@ -68,7 +68,7 @@ describe("T3: time to distance, vmax 10, τ 1 (methods.md §8 [C])", () => {
   });
 });
 
-describe("T4: vmax 9.5 m/s, τ 1.1 s splits and flying averages (methods.md §8 [C])", () => {
+describe("T4: vmax 9.5 m/s, τ 1.1 s splits and flying averages (lib/load/README.md §1 [C])", () => {
   const split = (d: number) => timeToDistance(d, 9.5, 1.1);
   it("splits 10/20/30/40 m = 1.9690 / 3.1420 / 4.2345 / 5.3017 s", () => {
     expect(split(10)).toBeCloseTo(1.969, 4);
@@ -85,7 +85,7 @@ describe("T4: vmax 9.5 m/s, τ 1.1 s splits and flying averages (methods.md §8 
   });
 });
 
-describe("HSR thresholds and %vmax (Bradley et al. 2009 bands [from memory]; methods.md §6 [C])", () => {
+describe("HSR thresholds and %vmax (Bradley et al. 2009 bands [from memory]; lib/load/README.md §1 [C])", () => {
   it("19.8 km/h = 5.5 m/s and 25.2 km/h = 7.0 m/s (compared with a tolerance)", () => {
     expect(kmhToMs(19.8)).toBeCloseTo(5.5, 12);
     expect(kmhToMs(25.2)).toBeCloseTo(7, 12);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { exceedsWeeklyLimit, weeklyChangePct } from "@/lib/load/weekly-change";
 
-// Δ% = (W_t − W_{t−1}) / W_{t−1} × 100. Check values: methods.md §4 [C]. The 10% rule of thumb is Gabbett 2016
+// Δ% = (W_t − W_{t−1}) / W_{t−1} × 100. Check values: lib/load/README.md §8 [C]. The 10% rule of thumb is Gabbett 2016
 // [from memory]; the 15–49% spike band is Harrison & Johnston 2017, JSCR 31:2686 [confirmed abstract].
 
 describe("weeklyChangePct", () => {

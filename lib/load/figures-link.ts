@@ -1,0 +1,35 @@
+import type { FlagKind } from "./flags";
+
+/** The signed-in page that explains every figure ("How figures are worked out"). */
+export const FIGURES_PATH = "/figures";
+
+/** Sections of the explanation page; each is an anchor id on it. */
+export type FiguresTopic =
+  | "running"
+  | "contacts"
+  | "srpe"
+  | "logs"
+  | "series"
+  | "acwr"
+  | "provisional"
+  | "zones"
+  | "weekly-change"
+  | "monotony"
+  | "recovery"
+  | "thresholds"
+  | "caution";
+
+/** Where a flag of each kind is explained. */
+export const FLAG_TOPIC: Record<FlagKind, FiguresTopic> = {
+  spike: "zones",
+  rising: "zones",
+  low: "zones",
+  weekly_jump: "weekly-change",
+  plyo_volume: "contacts",
+  recovery: "recovery",
+};
+
+/** Link to the explanation page, at a section when given; `base` makes it absolute (e-mails). */
+export function figuresHref(topic?: FiguresTopic, base = ""): string {
+  return `${base.replace(/\/$/, "")}${FIGURES_PATH}${topic ? `#${topic}` : ""}`;
+}
