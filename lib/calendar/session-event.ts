@@ -20,14 +20,25 @@ export function defaultSessionUrl(appUrl: string): SessionUrlFn {
   return (s) => `${base}/sessions/${encodeURIComponent(String(s.id))}`;
 }
 
-/** TEXT values are escaped by ical-generator, except the calendar NAME: do it here (RFC 5545 §3.3.11). */
+// RFC 5545 §3.3.11: a TEXT value holds no CONTROL character but HTAB; a line break is written as "\n".
+// C1 controls go too (U+0085 is a line break to some readers). Stored text is checked at the schema
+// (lib/validations/text.ts), but rows written before that, and names from elsewhere, pass through here.
+const LINE_BREAK = /\r\n|\r|\n|\u2028|\u2029/g;
+const CONTROL = /[\u0000-\u0008\u000B-\u001F\u007F-\u009F]/g;
+
+/** Text with every line break as "\n" and no other control character: safe for ical-generator to escape. */
+export function plainText(value: string): string {
+  return value.replace(LINE_BREAK, "\n").replace(CONTROL, "");
+}
+
+/** An escaped TEXT value for the properties ical-generator writes as given (NAME, X-WR-CALNAME, X-WR-CALDESC). */
 export function escapeText(value: string): string {
-  return value.replace(/[\\;,]/g, (ch) => `\\${ch}`).replace(/\r?\n/g, "\\n");
+  return plainText(value).replace(/[\\;,]/g, (ch) => `\\${ch}`).replace(/\n/g, "\\n");
 }
 
 /** A parameter value (CN) may not hold DQUOTE or control characters (RFC 5545 §3.1 param-value). */
 export function paramSafe(value: string): string {
-  return value.replace(/[\u0000-\u001f\u007f"\\]+/g, " ").replace(/\s{2,}/g, " ").trim();
+  return value.replace(/[\u0000-\u001f\u007f-\u009f"\\]+/g, " ").replace(/\s{2,}/g, " ").trim();
 }
 
 /** A calendar whose VTIMEZONE blocks come from @touch4it/ical-timezones for every zone its events use. */
@@ -97,9 +108,10 @@ export function addSessionEvent(cal: ICalCalendar, session: CalendarSession, opt
     start,
     end,
     timezone: opts.team.timeZone,
-    summary: session.status === "cancelled" ? `Cancelled: ${headline}` : headline,
-    description: sessionDescription(session, url),
-    location: session.location?.trim() || null,
+    // ical-generator escapes these three (RFC 5545 §3.3.11) but passes other control characters through.
+    summary: plainText(session.status === "cancelled" ? `Cancelled: ${headline}` : headline),
+    description: plainText(sessionDescription(session, url)),
+    location: plainText(session.location?.trim() ?? "") || null,
     url,
     status: STATUS[session.status],
     lastModified: session.updatedAt,
