@@ -7,9 +7,9 @@ function received(iso: string): string {
   return new Date(iso).toLocaleString("en-GB", { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit", second: "2-digit" });
 }
 
-/** The local mailbox, newest first. */
+/** The signed-in member's own mail in the local mailbox, newest first. */
 export function MailList({ mails }: { mails: MailSummary[] }) {
-  if (mails.length === 0) return <EmptyState title="No mail yet">Mail the app sends (alerts, invitations, calendar invites) lands here.</EmptyState>;
+  if (mails.length === 0) return <EmptyState title="No mail for you yet">Mail the app sends to you (alerts, invitations, calendar invites, password resets) lands here.</EmptyState>;
   return (
     <Card className="divide-y divide-ink-100" data-testid="mail-list">
       {mails.map((m) => (

@@ -18,7 +18,11 @@ export type Action =
   | "alerts:view"
   | "alerts:manage"
   | "restrictions:edit"
-  | "calendar:manage";
+  | "calendar:manage"
+  /** The local mailbox: "own" is mail delivered to the member's own address, nothing else. */
+  | "mailbox:view"
+  /** The team's delivery queue (recipient, kind, status; never a body or link). */
+  | "mailbox:queue";
 
 export type Scope = "team" | "own";
 
@@ -36,6 +40,8 @@ export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
     "alerts:view": "team",
     "alerts:manage": "team",
     "calendar:manage": "team",
+    "mailbox:view": "own",
+    "mailbox:queue": "team",
   },
   coach: {
     "team:view": "team",
@@ -48,6 +54,7 @@ export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
     "alerts:view": "team",
     "alerts:manage": "team",
     "calendar:manage": "team",
+    "mailbox:view": "own",
   },
   physio: {
     "team:view": "team",
@@ -57,6 +64,7 @@ export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
     "alerts:view": "team",
     "alerts:manage": "team",
     "restrictions:edit": "team",
+    "mailbox:view": "own",
   },
   athlete: {
     "team:view": "team",
@@ -65,6 +73,7 @@ export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
     "load:view": "own",
     "log:write": "own",
     "calendar:manage": "own",
+    "mailbox:view": "own",
   },
 };
 

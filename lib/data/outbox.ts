@@ -189,6 +189,15 @@ export async function listOutbox({ teamId, limit = 50, status }: { teamId?: numb
   }));
 }
 
+/** One line of the team's delivery queue: who, what kind, how far it got. No subject, body or link. */
+export type DeliveryRow = Pick<OutboxRow, "id" | "kind" | "toEmail" | "status" | "attempts" | "nextAttemptAt" | "sentAt" | "createdAt">;
+
+/** The team's recent outbox rows for the head coach's mailbox screen; only the team's own rows. */
+export async function listDeliveryQueue({ teamId, limit = 30 }: { teamId: number; limit?: number }): Promise<DeliveryRow[]> {
+  const rows = await listOutbox({ teamId, limit });
+  return rows.map(({ id, kind, toEmail, status, attempts, nextAttemptAt, sentAt, createdAt }) => ({ id, kind, toEmail, status, attempts, nextAttemptAt, sentAt, createdAt }));
+}
+
 /** Puts a message that failed for good back in the queue (one more round of attempts). */
 export async function retryFailedMessage({ id, teamId, now = new Date() }: { id: number; teamId?: number; now?: Date }): Promise<boolean> {
   const { OutboxMessage } = await db();

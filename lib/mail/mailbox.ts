@@ -90,12 +90,16 @@ function isCalendar(a: StoredAttachment): boolean {
   return /^(text\/calendar|application\/ics)\b/i.test(a.contentType);
 }
 
-function matchesRecipient(mail: StoredMail, to: string): boolean {
-  const wanted = to.trim().toLowerCase();
-  return [...mail.to, ...mail.envelope.rcptTo].some((addr) => addr.toLowerCase() === wanted);
+/**
+ * Whether the message was delivered to this address. Only the SMTP envelope counts: the To header is
+ * whatever the sender wrote, the envelope is where the server actually put the message.
+ */
+export function isDeliveredTo(mail: Pick<StoredMail, "envelope">, address: string): boolean {
+  const wanted = address.trim().toLowerCase();
+  return wanted !== "" && mail.envelope.rcptTo.some((addr) => addr.trim().toLowerCase() === wanted);
 }
 
-/** Newest first; `to` keeps only mail addressed to that address (header or envelope). */
+/** Newest first; `to` keeps only mail delivered to that address. */
 export async function listMail({ dir, to, limit }: { dir?: string; to?: string; limit?: number } = {}): Promise<MailSummary[]> {
   const base = resolveDir(dir);
   const ids = (await storedIds(base)).sort().reverse();
@@ -103,7 +107,7 @@ export async function listMail({ dir, to, limit }: { dir?: string; to?: string; 
   for (const id of ids) {
     if (limit !== undefined && out.length >= limit) break;
     const mail = await readStored(base, id);
-    if (!mail || (to && !matchesRecipient(mail, to))) continue;
+    if (!mail || (to !== undefined && !isDeliveredTo(mail, to))) continue;
     out.push({
       id: mail.id,
       receivedAt: mail.receivedAt,
@@ -144,9 +148,17 @@ export async function readRawMail({ dir, id }: { dir?: string; id: string }): Pr
   }
 }
 
-/** Deletes the stored messages (only files this store wrote, never the folder itself); returns how many. */
-export async function clearMailbox({ dir }: { dir?: string } = {}): Promise<number> {
+/**
+ * Deletes the stored messages (only files this store wrote, never the folder itself); returns how many.
+ * With `to`, only the messages delivered to that address go.
+ */
+export async function clearMailbox({ dir, to }: { dir?: string; to?: string } = {}): Promise<number> {
   const base = resolveDir(dir);
+  if (to !== undefined) {
+    const mine = (await listMail({ dir: base, to })).map((m) => m.id);
+    await Promise.all(mine.flatMap((id) => [".json", ".eml"].map((ext) => fs.rm(path.join(base, `${id}${ext}`), { force: true }))));
+    return mine.length;
+  }
   const ids = await storedIds(base);
   let names: string[] = [];
   try {

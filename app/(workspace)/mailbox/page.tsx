@@ -1,38 +1,38 @@
-import Link from "next/link";
 import { notFound } from "next/navigation";
 import { DeliveryQueue } from "@/components/notices/delivery-queue";
 import { MailList } from "@/components/notices/mail-list";
 import { PageHeader } from "@/components/ui/card";
-import { buttonClass } from "@/components/ui/button";
 import { pageViewer } from "@/lib/auth/page-access";
-import { listOutbox } from "@/lib/data/outbox";
-import { listMail } from "@/lib/mail/mailbox";
+import { listDeliveryQueue } from "@/lib/data/outbox";
 import { isFakeMailbox } from "@/lib/mail/transport";
+import { canSeeDeliveryQueue, listViewerMail } from "@/lib/notices/mailbox-access";
 
 export const metadata = { title: "Mailbox" };
 export const dynamic = "force-dynamic";
 
-export default async function MailboxPage({ searchParams }: { searchParams: Promise<{ mine?: string }> }) {
+export default async function MailboxPage() {
   if (!isFakeMailbox()) notFound();
-  const viewer = await pageViewer();
-  const mine = (await searchParams).mine === "1";
-  const [mails, outbox] = await Promise.all([listMail({ to: mine ? viewer.email : undefined, limit: 200 }), listOutbox({ teamId: viewer.teamId, limit: 30 })]);
+  const viewer = await pageViewer("mailbox:view", "own");
+  const queue = canSeeDeliveryQueue(viewer);
+  const [mails, outbox] = await Promise.all([listViewerMail({ viewer, limit: 200 }), queue ? listDeliveryQueue({ teamId: viewer.teamId, limit: 30 }) : null]);
   return (
     <>
       <PageHeader
         title="Mailbox"
-        lead="Development only: the local mail server keeps every message the app sends on this machine, so you can read alerts, invitations and calendar invites without a real inbox."
-        actions={
-          <Link href={mine ? "/mailbox" : "/mailbox?mine=1"} className={buttonClass({ variant: "secondary", size: "sm" })} data-testid="mailbox-filter">
-            {mine ? "Show all mail" : `Only mail to ${viewer.email}`}
-          </Link>
+        lead={
+          <span data-testid="mailbox-local-note">
+            This screen exists only while mail stays on this machine: the app sends to a local test mail server, not to real inboxes. You see
+            the mail sent to {viewer.email} and nobody else&apos;s. Once a real mail server is set up, this screen goes away.
+          </span>
         }
       />
-      <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
+      <div className={outbox ? "grid items-start gap-6 lg:grid-cols-[1fr_20rem]" : undefined}>
         <MailList mails={mails} />
-        <aside>
-          <DeliveryQueue rows={outbox} />
-        </aside>
+        {outbox ? (
+          <aside>
+            <DeliveryQueue rows={outbox} />
+          </aside>
+        ) : null}
       </div>
     </>
   );

@@ -3,8 +3,8 @@ import { notFound } from "next/navigation";
 import { Badge } from "@/components/ui/badge";
 import { Card, PageHeader } from "@/components/ui/card";
 import { pageViewer } from "@/lib/auth/page-access";
-import { isMailId, readMail } from "@/lib/mail/mailbox";
 import { isFakeMailbox } from "@/lib/mail/transport";
+import { readViewerMail } from "@/lib/notices/mailbox-access";
 
 export const metadata = { title: "Mail" };
 export const dynamic = "force-dynamic";
@@ -13,10 +13,9 @@ const isCalendar = (contentType: string) => /^(text\/calendar|application\/ics)\
 
 export default async function MailPage({ params }: { params: Promise<{ mailId: string }> }) {
   if (!isFakeMailbox()) notFound();
-  await pageViewer();
+  const viewer = await pageViewer("mailbox:view", "own");
   const { mailId } = await params;
-  if (!isMailId(mailId)) notFound();
-  const mail = await readMail({ id: mailId });
+  const mail = await readViewerMail({ viewer, id: mailId });
   if (!mail) notFound();
   return (
     <>

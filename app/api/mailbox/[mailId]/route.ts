@@ -3,8 +3,8 @@ import { mailFromParams, requireMailbox } from "@/lib/notices/mailbox-access";
 
 export const runtime = "nodejs";
 
-/** One stored mail: headers, HTML and text parts, attachments (calendar parts as text). */
+/** One mail delivered to the signed-in member: headers, HTML and text parts, attachments (calendar parts as text). */
 export const GET = route<{ mailId: string }>(async (_req, { params }) => {
-  await requireMailbox();
-  return Response.json({ mail: await mailFromParams(params) });
+  const viewer = await requireMailbox();
+  return Response.json({ mail: await mailFromParams(viewer, params) });
 });

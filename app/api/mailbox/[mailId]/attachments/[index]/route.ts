@@ -14,10 +14,10 @@ function safeName(name: string | null, index: number, contentType: string): stri
 
 /** One attachment of a stored mail, e.g. the invitation's .ics, as a download. */
 export const GET = route<{ mailId: string; index: string }>(async (_req, { params }) => {
-  await requireMailbox();
+  const viewer = await requireMailbox();
   const p = await params;
   const { index } = parseParams(p, indexSchema);
-  const mail = await mailFromParams(Promise.resolve({ mailId: p.mailId }));
+  const mail = await mailFromParams(viewer, Promise.resolve({ mailId: p.mailId }));
   const attachment = mail.attachments[index];
   if (!attachment) throw new AppError("not_found", "No such attachment");
   const body = attachment.encoding === "base64" ? Buffer.from(attachment.content, "base64") : Buffer.from(attachment.content, "utf8");
@@ -27,6 +27,7 @@ export const GET = route<{ mailId: string; index: string }>(async (_req, { param
       "content-type": /^(text\/calendar|application\/ics)\b/i.test(attachment.contentType) ? "text/calendar; charset=utf-8" : "application/octet-stream",
       "content-disposition": `attachment; filename="${safeName(attachment.filename, index, attachment.contentType)}"`,
       "x-content-type-options": "nosniff",
+      "cache-control": "private, no-store",
     },
   });
 });
