@@ -1,0 +1,118 @@
+// How the matrix asks each question: for every row of authz-expected.ts, the request a caller sends. Targets
+// are fresh for every cell that writes, so one caller's success never changes what the next caller sees.
+import type { Subject, World } from "./authz-fixtures";
+import { STRENGTH_BLOCK } from "./authz-fixtures";
+
+export type Req =
+  | { kind: "api"; method: string; path: string; body?: unknown }
+  | { kind: "page"; path: string }
+  | { kind: "action"; args: unknown[] };
+
+type Build = (w: World, s: Subject) => Promise<Req>;
+const api = (method: string, path: string, body?: unknown): Req => ({ kind: "api", method, path, body });
+const page = (path: string): Req => ({ kind: "page", path });
+const action = (...args: unknown[]): Req => ({ kind: "action", args });
+
+const athlete = (w: World, s: Subject) => w.target(s).id;
+const template = { ...STRENGTH_BLOCK, title: "Matrix template (edited)", durationMin: 30, plannedRpe: 4 };
+const farWeek = "2027-11-15"; // an empty week: the week tools change nothing else the matrix reads
+const athleteForm = { name: "Jonah Pell", groupId: null, sex: "male", birthDate: "2000-09-03", bodyMassKg: 78.2, vmaxMs: 10.86, vmaxTestedOn: null, tauS: 1.24, stepLengthM: 2.46, plyoLevel: "advanced" };
+
+export const REQUESTS: Record<string, Build> = {
+  "GET /api/alerts": async () => api("GET", "/api/alerts"),
+  "GET /api/alerts/[alertId]": async (w, s) => api("GET", `/api/alerts/${await w.alert(athlete(w, s))}`),
+  "PATCH /api/alerts/[alertId]": async (w, s) => api("PATCH", `/api/alerts/${await w.alert(athlete(w, s))}`, { action: "acknowledge" }),
+  "POST /api/alerts/seen": async () => api("POST", "/api/alerts/seen"),
+  "GET /api/athletes/[athleteId]/calendar-token": async (w, s) => api("GET", `/api/athletes/${athlete(w, s)}/calendar-token`),
+  "POST /api/athletes/[athleteId]/calendar-token": async (w, s) => api("POST", `/api/athletes/${athlete(w, s)}/calendar-token`),
+  "DELETE /api/athletes/[athleteId]/calendar-token": async (w, s) => api("DELETE", `/api/athletes/${athlete(w, s)}/calendar-token`),
+  "GET /api/athletes/[athleteId]/load": async (w, s) => api("GET", `/api/athletes/${athlete(w, s)}/load`),
+  "GET /api/athletes/[athleteId]/restrictions": async (w, s) => api("GET", `/api/athletes/${athlete(w, s)}/restrictions`),
+  "POST /api/athletes/[athleteId]/restrictions": async (w, s) =>
+    api("POST", `/api/athletes/${athlete(w, s)}/restrictions`, { rule: "contact_cap", maxContacts: 450, startsOn: w.today(), endsOn: null, note: "Matrix check" }),
+  "GET /api/auth/[...nextauth]": async () => api("GET", "/api/auth/session"),
+  // Without the CSRF token next-auth only points at its confirmation page; nobody is signed out.
+  "POST /api/auth/[...nextauth]": async () => api("POST", "/api/auth/signout"),
+  // The long random token in the URL is the credential (calendar apps cannot sign in).
+  "GET /api/calendar/[token]": async (w, s) => api("GET", await w.feedPath(athlete(w, s))),
+  "GET /api/health": async () => api("GET", "/api/health"),
+  "POST /api/load/preview": async (w, s) =>
+    api("POST", "/api/load/preview", { teamId: w.teamId, athleteId: athlete(w, s), week: w.today(), sessions: [{ date: w.today(), durationMin: 40, plannedRpe: 5, blocks: [STRENGTH_BLOCK] }] }),
+  "GET /api/mailbox": async (w) => {
+    await Promise.all([w.mail(w.athletes.maya.email), w.mail(w.athletes.jonah.email)]);
+    return api("GET", "/api/mailbox");
+  },
+  "DELETE /api/mailbox": async () => api("DELETE", "/api/mailbox"),
+  "GET /api/mailbox/[mailId]": async (w, s) => api("GET", `/api/mailbox/${await w.mail(w.target(s).email)}`),
+  "GET /api/mailbox/[mailId]/attachments/[index]": async (w, s) => api("GET", `/api/mailbox/${await w.mail(w.target(s).email)}/attachments/0`),
+  "GET /api/mailbox/[mailId]/raw": async (w, s) => api("GET", `/api/mailbox/${await w.mail(w.target(s).email)}/raw`),
+  "GET /api/me/notification-settings": async () => api("GET", "/api/me/notification-settings"),
+  "PUT /api/me/notification-settings": async () => api("PUT", "/api/me/notification-settings", { alertEmail: "digest" }),
+  "PATCH /api/restrictions/[restrictionId]": async (w, s) => api("PATCH", `/api/restrictions/${await w.restriction(athlete(w, s))}`, { action: "lift" }),
+  "GET /api/sessions/[sessionId]": async (w, s) => api("GET", `/api/sessions/${(await w.session(athlete(w, s))).id}`),
+  "PATCH /api/sessions/[sessionId]": async (w, s) => {
+    const { id, version } = await w.session(athlete(w, s));
+    return api("PATCH", `/api/sessions/${id}`, { version, title: "Matrix session (moved)" });
+  },
+  "DELETE /api/sessions/[sessionId]": async (w, s) => {
+    const { id, version } = await w.session(athlete(w, s));
+    return api("DELETE", `/api/sessions/${id}?version=${version}`);
+  },
+  "POST /api/sessions/[sessionId]/blocks": async (w, s) => {
+    const { id, version } = await w.session(athlete(w, s));
+    return api("POST", `/api/sessions/${id}/blocks`, { version, block: STRENGTH_BLOCK });
+  },
+  "PATCH /api/sessions/[sessionId]/blocks/[blockId]": async (w, s) => {
+    const { id, version, blockId } = await w.session(athlete(w, s));
+    return api("PATCH", `/api/sessions/${id}/blocks/${blockId}`, { version, block: { ...STRENGTH_BLOCK, title: "Split squats" } });
+  },
+  "DELETE /api/sessions/[sessionId]/blocks/[blockId]": async (w, s) => {
+    const { id, version, blockId } = await w.session(athlete(w, s));
+    return api("DELETE", `/api/sessions/${id}/blocks/${blockId}?version=${version}`);
+  },
+  "PUT /api/sessions/[sessionId]/log": async (w, s) => api("PUT", `/api/sessions/${(await w.session(athlete(w, s))).id}/log`, { completion: "yes", rpe: 6, minutes: 45 }),
+  "DELETE /api/sessions/[sessionId]/log": async (w, s) => {
+    const { id } = await w.session(athlete(w, s));
+    const logged = await w.as("head", "PUT", `/api/sessions/${id}/log`, { completion: "partly", rpe: 5, minutes: 30 });
+    if (logged.status !== 200) throw new Error(`fixture log answered ${logged.status}`);
+    return api("DELETE", `/api/sessions/${id}/log`);
+  },
+  "GET /api/teams/[teamId]/load": async (w) => api("GET", `/api/teams/${w.teamId}/load`),
+  "GET /api/teams/[teamId]/plan": async (w) => api("GET", `/api/teams/${w.teamId}/plan`),
+  "POST /api/teams/[teamId]/plan/[tool]": async (w) => api("POST", `/api/teams/${w.teamId}/plan/publish`, { week: farWeek }),
+  "POST /api/teams/[teamId]/sessions": async (w, s) =>
+    api("POST", `/api/teams/${w.teamId}/sessions`, { from: "blank", athleteId: athlete(w, s), date: farWeek, durationMin: 40, title: "Matrix new session", plannedRpe: 4, notes: null, blocks: [] }),
+  "GET /api/teams/[teamId]/settings": async (w) => api("GET", `/api/teams/${w.teamId}/settings`),
+  "PATCH /api/teams/[teamId]/settings": async (w) => api("PATCH", `/api/teams/${w.teamId}/settings`, { recoveryHours: 48 }),
+  "GET /api/teams/[teamId]/templates": async (w) => api("GET", `/api/teams/${w.teamId}/templates`),
+  "POST /api/teams/[teamId]/templates": async (w) => api("POST", `/api/teams/${w.teamId}/templates`, template),
+  "GET /api/templates/[templateId]": async (w) => api("GET", `/api/templates/${await w.template()}`),
+  "PUT /api/templates/[templateId]": async (w) => api("PUT", `/api/templates/${await w.template()}`, template),
+  "DELETE /api/templates/[templateId]": async (w) => api("DELETE", `/api/templates/${await w.template()}`),
+
+  "PAGE /": async () => page("/"),
+  "PAGE /forgot-password": async () => page("/forgot-password"),
+  "PAGE /invite/[token]": async () => page("/invite/no-such-invitation-token-0123456789"),
+  "PAGE /sign-in": async () => page("/sign-in"),
+  "PAGE /alerts": async () => page("/alerts"),
+  "PAGE /home": async () => page("/home"),
+  "PAGE /load": async () => page("/load"),
+  "PAGE /load/[athleteId]": async (w, s) => page(`/load/${athlete(w, s)}`),
+  "PAGE /mailbox": async () => page("/mailbox"),
+  "PAGE /mailbox/[mailId]": async (w, s) => page(`/mailbox/${await w.mail(w.target(s).email)}`),
+  "PAGE /me": async () => page("/me"),
+  "PAGE /members": async () => page("/members"),
+  "PAGE /not-allowed": async () => page("/not-allowed"),
+  "PAGE /plan": async () => page("/plan"),
+  "PAGE /settings": async () => page("/settings"),
+  "PAGE /squad": async () => page("/squad"),
+  "PAGE /squad/[athleteId]": async (w, s) => page(`/squad/${athlete(w, s)}`),
+  "PAGE /squad/new": async () => page("/squad/new"),
+
+  "ACTION /forgot-password#forgotPasswordAction": async () => action({ email: "nobody-here@nowhere.test" }),
+  "ACTION /invite#setPasswordAction": async () => action({ token: "no-such-invitation-token-0123456789", password: "a long enough passphrase 77", confirm: "a long enough passphrase 77" }),
+  "ACTION /members#addMemberAction": async () => action({ name: "Matrix Newcomer", email: `new-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 8)}@elsewhere.test`, role: "coach" }),
+  "ACTION /members#changeRoleAction": async (w) => action(await w.membership(), { role: "physio" }),
+  "ACTION /members#removeMemberAction": async (w) => action(await w.membership()),
+  "ACTION /squad#saveAthleteAction": async (w, s) => action(athlete(w, s), athleteForm),
+};
