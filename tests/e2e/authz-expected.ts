@@ -63,6 +63,7 @@ const TABLE: Line[] = [
   ["PAGE /invite/[token]",                             "ok",      "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
   ["PAGE /sign-in",                                    "ok",      "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
   ["PAGE /alerts",                                     "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "ok"],
+  ["PAGE /figures",                                    "sign-in", "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
   ["PAGE /home",                                       "sign-in", "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
   ["PAGE /load",                                       "sign-in", "redirect:/load/[own]", "redirect:/load/[own]", "ok", "ok",   "ok",          "ok"],
   ["PAGE /load/[athleteId]",                           "sign-in", "ok",          "not-found",   "ok",          "ok",          "ok",          "not-found"],

@@ -49,7 +49,7 @@ describe("authorization matrix", () => {
           const outcome = await call(world, subject, key, await REQUESTS[key](world, subject), actions);
           expect(outcome.status, outcome.body.slice(0, 300)).toBeLessThan(500);
           expect(outcome.answer, `${key} as ${subject}: ${outcome.body.slice(0, 300)}`).toBe(expected);
-          const isPublicPage = key.startsWith("PAGE /") && !/^PAGE \/(alerts|home|load|mailbox|me|members|plan|settings|squad|not-allowed)/.test(key);
+          const isPublicPage = key.startsWith("PAGE /") && !/^PAGE \/(alerts|figures|home|load|mailbox|me|members|plan|settings|squad|not-allowed)/.test(key);
           if (subject === "outsider" && (expected === 200 || expected === "ok") && !LEAK_CHECK_SKIPS.has(key) && !isPublicPage && !key.startsWith("ACTION")) {
             const leaked = TEAM_A_WORDS.filter((word) => outcome.body.toLowerCase().includes(word.toLowerCase()));
             expect(leaked, `${key} shows another team's names to an outsider`).toEqual([]);

@@ -95,6 +95,7 @@ export const REQUESTS: Record<string, Build> = {
   "PAGE /invite/[token]": async () => page("/invite/no-such-invitation-token-0123456789"),
   "PAGE /sign-in": async () => page("/sign-in"),
   "PAGE /alerts": async () => page("/alerts"),
+  "PAGE /figures": async () => page("/figures"),
   "PAGE /home": async () => page("/home"),
   "PAGE /load": async () => page("/load"),
   "PAGE /load/[athleteId]": async (w, s) => page(`/load/${athlete(w, s)}`),
