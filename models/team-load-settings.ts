@@ -14,6 +14,14 @@ export class TeamLoadSettings extends Model<InferAttributes<TeamLoadSettings>, I
   declare lowRatio: CreationOptional<number>;
   declare weeklyChangeLimitPct: CreationOptional<number>;
   declare recoveryHours: CreationOptional<number>;
+  declare speedZones: CreationOptional<string>;
+  declare hsrPct: CreationOptional<number>;
+  declare sprintSpeedMs: CreationOptional<number>;
+  declare maximalPct: CreationOptional<number>;
+  /** JSON array text of RecoveryWork values. */
+  declare recoveryWork: CreationOptional<string>;
+  declare missingLogs: CreationOptional<string>;
+  declare monotonyLimit: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -30,6 +38,14 @@ export class TeamLoadSettings extends Model<InferAttributes<TeamLoadSettings>, I
         lowRatio: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 0.8 },
         weeklyChangeLimitPct: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 15 },
         recoveryHours: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 48 },
+        // Migration 009: the sprint-specific model's team choices.
+        speedZones: { type: DataTypes.STRING(10), allowNull: false, defaultValue: "absolute" },
+        hsrPct: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 75 },
+        sprintSpeedMs: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 7 },
+        maximalPct: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 95 },
+        recoveryWork: { type: DataTypes.TEXT, allowNull: false, defaultValue: '["max_velocity","max_acceleration","speed_endurance","high_plyo"]' },
+        missingLogs: { type: DataTypes.STRING(10), allowNull: false, defaultValue: "estimate" },
+        monotonyLimit: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 2 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -13,12 +13,11 @@ import type {
   SessionInput,
   SessionStatus,
   TeamLoadSettings,
-  AcwrMethod,
 } from "@/lib/load/types";
 import { addDays } from "@/lib/load/dates";
 import { AppError } from "@/lib/errors";
 import { db } from "@/models";
-import { toEngineSettings } from "./team-settings";
+import { SETTINGS_SQL_COLUMNS, toEngineSettings, type SettingsRow } from "./team-settings";
 
 export type LoadAthleteInputs = {
   id: number;
@@ -96,19 +95,10 @@ function num(value: unknown): number | null {
   return value === null || value === undefined ? null : Number(value);
 }
 
-type TeamRow = {
+type TeamRow = SettingsRow & {
   time_zone: string;
   week_start_day: number;
   settings_id: number | null;
-  hsr_speed_ms: number;
-  near_max_pct: number;
-  acwr_method: string;
-  acwr_metric: string;
-  spike_ratio: number;
-  rising_ratio: number;
-  low_ratio: number;
-  weekly_change_limit_pct: number;
-  recovery_hours: number;
 };
 type AthleteRow = {
   id: number;
@@ -146,8 +136,7 @@ type PackedBlock = [number, BlockKind, string, RunningPrescription | null, PlyoD
 // and the JSON columns as Sequelize stored them, so it is always valid JSON.
 const SESSION_FILTER = "s.team_id = :teamId AND s.date BETWEEN :from AND :to AND (:everyone = 1 OR s.athlete_id IN (:athleteIds))";
 const SQL = {
-  team: `SELECT t.time_zone, t.week_start_day, s.id AS settings_id, s.hsr_speed_ms, s.near_max_pct, s.acwr_method, s.acwr_metric, s.spike_ratio,
-    s.rising_ratio, s.low_ratio, s.weekly_change_limit_pct, s.recovery_hours
+  team: `SELECT t.time_zone, t.week_start_day, ${SETTINGS_SQL_COLUMNS}
     FROM teams t LEFT JOIN team_load_settings s ON s.team_id = t.id WHERE t.id = :teamId`,
   athletes: `SELECT a.id, a.name, a.group_id, g.name AS group_name, g.sort_order AS group_order, a.vmax_ms, a.tau_s, a.step_length_m, a.plyo_level
     FROM athletes a LEFT JOIN training_groups g ON g.id = a.group_id
@@ -173,21 +162,7 @@ async function loadInputs({ teamId, athleteIds, from, to, transaction }: Range &
   // A constant three queries whatever the squad size: no query per athlete or per session.
   const [[team], athletes, sessions] = await Promise.all([select<TeamRow>(SQL.team), select<AthleteRow>(SQL.athletes), select<SessionRow>(SQL.sessions)]);
   if (!team) throw new AppError("not_found", "Not found");
-  const settings = toEngineSettings(
-    team.settings_id === null
-      ? null
-      : {
-          hsrSpeedMs: team.hsr_speed_ms,
-          nearMaxPct: team.near_max_pct,
-          acwrMethod: team.acwr_method as AcwrMethod,
-          acwrMetric: team.acwr_metric,
-          spikeRatio: team.spike_ratio,
-          risingRatio: team.rising_ratio,
-          lowRatio: team.low_ratio,
-          weeklyChangeLimitPct: team.weekly_change_limit_pct,
-          recoveryHours: team.recovery_hours,
-        },
-  );
+  const settings = toEngineSettings(team.settings_id === null ? null : team);
 
   const byAthlete = new Map<number, LoadAthleteInputs>();
   for (const a of athletes) {

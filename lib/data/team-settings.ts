@@ -1,10 +1,50 @@
 import "server-only";
 import type { Transaction } from "sequelize";
-import { ACWR_METHODS, DEFAULT_TEAM_LOAD_SETTINGS, METRICS, type AcwrMethod, type Metric, type TeamLoadSettings } from "@/lib/load/types";
+import {
+  ACWR_METHODS,
+  DEFAULT_TEAM_LOAD_SETTINGS,
+  METRICS,
+  MISSING_LOGS,
+  RECOVERY_WORK,
+  SPEED_ZONES,
+  type AcwrMethod,
+  type Metric,
+  type MissingLogs,
+  type RecoveryWork,
+  type SpeedZones,
+  type TeamLoadSettings,
+} from "@/lib/load/types";
 import { teamSettingsSchema, type TeamSettingsPatch } from "@/lib/validations/team-settings";
 import { db, type TeamLoadSettings as SettingsModel } from "@/models";
 
-const FIELDS = ["hsrSpeedMs", "nearMaxPct", "acwrMethod", "acwrMetric", "spikeRatio", "risingRatio", "lowRatio", "weeklyChangeLimitPct", "recoveryHours"] as const;
+const FIELDS = [
+  "hsrSpeedMs",
+  "nearMaxPct",
+  "acwrMethod",
+  "acwrMetric",
+  "spikeRatio",
+  "risingRatio",
+  "lowRatio",
+  "weeklyChangeLimitPct",
+  "recoveryHours",
+  "speedZones",
+  "hsrPct",
+  "sprintSpeedMs",
+  "maximalPct",
+  "recoveryWork",
+  "missingLogs",
+  "monotonyLimit",
+] as const;
+
+/** The settings columns for a raw query over team_load_settings aliased `s` (lib/data/load.ts). */
+export const SETTINGS_SQL_COLUMNS = `s.id AS settings_id, s.hsr_speed_ms AS hsrSpeedMs, s.near_max_pct AS nearMaxPct, s.acwr_method AS acwrMethod,
+  s.acwr_metric AS acwrMetric, s.spike_ratio AS spikeRatio, s.rising_ratio AS risingRatio, s.low_ratio AS lowRatio,
+  s.weekly_change_limit_pct AS weeklyChangeLimitPct, s.recovery_hours AS recoveryHours, s.speed_zones AS speedZones, s.hsr_pct AS hsrPct,
+  s.sprint_speed_ms AS sprintSpeedMs, s.maximal_pct AS maximalPct, s.recovery_work AS recoveryWork, s.missing_logs AS missingLogs,
+  s.monotony_limit AS monotonyLimit`;
+
+export type SettingsRow = { [K in (typeof FIELDS)[number]]: K extends "recoveryWork" ? string : K extends "acwrMethod" | "acwrMetric" | "speedZones" | "missingLogs" ? string : number };
+type StoredSettings = Pick<SettingsModel, (typeof FIELDS)[number]>;
 
 function isMethod(v: unknown): v is AcwrMethod {
   return (ACWR_METHODS as readonly unknown[]).includes(v);
@@ -13,10 +53,36 @@ function isMetric(v: unknown): v is Metric {
   return (METRICS as readonly unknown[]).includes(v);
 }
 
+function oneOf<T extends string>(list: readonly T[], v: unknown, fallback: T): T {
+  return (list as readonly unknown[]).includes(v) ? (v as T) : fallback;
+}
+
+/** Stored JSON text (or an array) of recovery work; anything unreadable falls back to the default. */
+function toRecoveryWork(v: unknown): RecoveryWork[] {
+  let list: unknown = v;
+  if (typeof v === "string") {
+    try {
+      list = JSON.parse(v);
+    } catch {
+      list = null;
+    }
+  }
+  return Array.isArray(list) ? RECOVERY_WORK.filter((w) => list.includes(w)) : [...DEFAULT_TEAM_LOAD_SETTINGS.recoveryWork];
+}
+
 /** Engine shape from a stored row; unknown stored strings fall back to the defaults. */
-export function toEngineSettings(row: Pick<SettingsModel, (typeof FIELDS)[number]> | null): TeamLoadSettings {
-  if (!row) return { ...DEFAULT_TEAM_LOAD_SETTINGS };
+export function toEngineSettings(row: StoredSettings | SettingsRow | (Omit<StoredSettings, "recoveryWork"> & { recoveryWork: readonly string[] }) | null): TeamLoadSettings {
+  if (!row) return { ...DEFAULT_TEAM_LOAD_SETTINGS, recoveryWork: [...DEFAULT_TEAM_LOAD_SETTINGS.recoveryWork] };
+  const d = DEFAULT_TEAM_LOAD_SETTINGS;
+  const n = (v: number | null | undefined, fallback: number) => (v === null || v === undefined ? fallback : Number(v));
   return {
+    speedZones: oneOf<SpeedZones>(SPEED_ZONES, row.speedZones, d.speedZones),
+    hsrPct: n(row.hsrPct, d.hsrPct),
+    sprintSpeedMs: n(row.sprintSpeedMs, d.sprintSpeedMs),
+    maximalPct: n(row.maximalPct, d.maximalPct),
+    recoveryWork: toRecoveryWork(row.recoveryWork),
+    missingLogs: oneOf<MissingLogs>(MISSING_LOGS, row.missingLogs, d.missingLogs),
+    monotonyLimit: n(row.monotonyLimit, d.monotonyLimit),
     hsrSpeedMs: row.hsrSpeedMs,
     nearMaxPct: row.nearMaxPct,
     acwrMethod: isMethod(row.acwrMethod) ? row.acwrMethod : DEFAULT_TEAM_LOAD_SETTINGS.acwrMethod,
@@ -42,8 +108,9 @@ export async function updateTeamLoadSettings({ teamId, input }: { teamId: number
   return sequelize.transaction(async (transaction) => {
     const row = await TeamLoadSettings.findOne({ where: { teamId }, transaction });
     const merged = teamSettingsSchema.parse({ ...toEngineSettings(row), ...input });
-    if (row) await row.update(merged, { transaction });
-    else await TeamLoadSettings.create({ teamId, ...merged }, { transaction });
-    return toEngineSettings({ ...merged });
+    const stored = { ...merged, recoveryWork: JSON.stringify(merged.recoveryWork) };
+    if (row) await row.update(stored, { transaction });
+    else await TeamLoadSettings.create({ teamId, ...stored }, { transaction });
+    return toEngineSettings(merged);
   });
 }

@@ -28,22 +28,54 @@ export const SLOT_SRPE = 8;
 export const SLOT_MAX_PCT = 9;
 /** 1 when a max_velocity block or high-intensity contacts were done. */
 export const SLOT_HIGH_INTENSITY = 10;
+/** Speed bands, metres at or above: absolute HSR and sprint lines, relative HSR, near-max and maximal lines. */
+export const SLOT_ABS_HSR = 11;
+export const SLOT_ABS_SPRINT = 12;
+export const SLOT_REL_HSR = 13;
+export const SLOT_REL_NEAR = 14;
+export const SLOT_REL_MAX = 15;
 /** Input, not output: the share of the prescription being added (passed in the array so it stays unboxed). */
-const SLOT_SCALE = 11;
-export const ACC_SIZE = 12;
+const SLOT_SCALE = 16;
+export const ACC_SIZE = 17;
 
 /** intensityPct on a 0.5% grid (0–100%) has its distance-to-threshold memoised per athlete. */
 const GRID = 201;
+/** Thresholds per memo cell, in this order: absolute HSR, absolute sprint, relative HSR, near-max, maximal. */
+const BANDS = 5;
+export const BAND_ABS_HSR = 0;
+export const BAND_NEAR = 3;
+/** Memo cells per start class: GRID grid cells and one scratch cell, BANDS thresholds each. */
+const CLASS_CELLS = (GRID + 1) * BANDS;
 
-/** Profile with defaults filled in and the two speed thresholds precomputed (m/s). */
+/**
+ * τ multiplier per start (lib/load/README.md, "Starts and run-ins"): blocks 0.95 (a trained sprinter leaves
+ * blocks with more horizontal push: common practice, from memory); crouch and standing 1.0, the start τ is
+ * fitted from (Salo & Bezodis 2004, Sports Biomech 3:43, found no speed difference between them by 10 m).
+ * Start class 1 = blocks, 0 = everything else.
+ */
+export const BLOCKS_TAU_FACTOR = 0.95;
+
+/** Profile with defaults filled in and the speed thresholds precomputed (m/s). */
 export interface ResolvedProfile {
   vmax: number;
   tau: number;
   stepLengthM: number;
   plyoLevel: PlyoLevel;
+  /** The HSR line that drives hsrM (absolute or relative, per team): its band index. */
+  hsrBand: number;
   hsrSpeed: number;
   nearMaxSpeed: number;
-  /** Lazily built memo: [0, GRID) HSR, [GRID, 2·GRID) near-max, then two scratch cells; NaN = not computed yet. */
+  /** Band thresholds in BANDS order, m/s. */
+  bandSpeeds: Float64Array;
+  /** Recovery rule: which work makes a session high-intensity; maximal acceleration from maximalPct. */
+  hiMaxVelocity: boolean;
+  hiMaxAcceleration: boolean;
+  hiSpeedEndurance: boolean;
+  hiPlyo: boolean;
+  maximalPct: number;
+  /** Missing logs: true = the plan stands in as an estimate (default); false = the day is left out. */
+  estimateMissing: boolean;
+  /** Lazily built memo: per start class, [cell · BANDS + band]; NaN = not computed yet. */
   reach: Float64Array | null;
 }
 
@@ -57,45 +89,72 @@ function positive(value: number | null | undefined, fallback: number): number {
   return typeof value === "number" && value > 0 && Number.isFinite(value) ? value : fallback;
 }
 
+const DEFAULT_RECOVERY_WORK = ["max_velocity", "max_acceleration", "speed_endurance", "high_plyo"];
+
 export function resolveProfile(profile: AthleteProfile, settings: TeamLoadSettings): ResolvedProfile {
   const vmax = positive(profile.vmax, DEFAULT_VMAX);
+  const share = (pct: number | undefined, fallback: number) => (nonNeg(pct ?? fallback) / 100) * vmax;
+  const nearMaxSpeed = share(settings.nearMaxPct, 90);
+  const bandSpeeds = new Float64Array(BANDS);
+  bandSpeeds[0] = nonNeg(settings.hsrSpeedMs);
+  bandSpeeds[1] = nonNeg(settings.sprintSpeedMs ?? 7);
+  bandSpeeds[2] = share(settings.hsrPct, 75);
+  bandSpeeds[3] = nearMaxSpeed;
+  bandSpeeds[4] = share(settings.maximalPct, 95);
+  const hsrBand = settings.speedZones === "relative" ? 2 : BAND_ABS_HSR;
+  const work: readonly string[] = settings.recoveryWork ?? DEFAULT_RECOVERY_WORK;
   return {
     vmax,
     tau: positive(profile.tau, DEFAULT_TAU),
     stepLengthM: positive(profile.stepLengthM, DEFAULT_STEP_LENGTH),
     plyoLevel: profile.plyoLevel,
-    hsrSpeed: nonNeg(settings.hsrSpeedMs),
-    nearMaxSpeed: (nonNeg(settings.nearMaxPct) / 100) * vmax,
+    hsrBand,
+    hsrSpeed: bandSpeeds[hsrBand],
+    nearMaxSpeed,
+    bandSpeeds,
+    hiMaxVelocity: work.includes("max_velocity"),
+    hiMaxAcceleration: work.includes("max_acceleration"),
+    hiSpeedEndurance: work.includes("speed_endurance"),
+    hiPlyo: work.includes("high_plyo"),
+    maximalPct: nonNeg(settings.maximalPct ?? 95),
+    estimateMissing: settings.missingLogs !== "exclude",
     reach: null,
   };
 }
 
 export function memoOf(rp: ResolvedProfile): Float64Array {
-  if (rp.reach === null) rp.reach = new Float64Array(2 * GRID + 2).fill(Number.NaN);
+  if (rp.reach === null) rp.reach = new Float64Array(2 * CLASS_CELLS).fill(Number.NaN);
   return rp.reach;
 }
 
 /**
- * Metres from rest to reach each threshold for a rep at pct% of vmax, memoised per athlete for pct on a 0.5%
- * grid (other pcts use the memo's two scratch cells). Returns the HSR cell; the near-max one is nearCell(at).
- * Callers read both back from the Float64Array so they stay unboxed doubles (merging a call's result with
- * an array load would box a number on every block).
+ * Metres from rest to reach each band threshold for a rep at pct% of vmax from a start of class `cls`,
+ * memoised per athlete for pct on a 0.5% grid (other pcts use the class's scratch cell). Returns the cell's
+ * base; band j is at base + j. Callers read the cells back from the Float64Array so they stay unboxed
+ * doubles (merging a call's result with an array load would box a number on every block).
  */
-export function reachCell(rp: ResolvedProfile, memo: Float64Array, pct: number): number {
+export function reachCell(rp: ResolvedProfile, memo: Float64Array, pct: number, cls: number): number {
   const grid = pct * 2;
   const g = grid | 0;
   const onGrid = g === grid && g < GRID;
-  const hsrAt = onGrid ? g : 2 * GRID;
-  if (!onGrid || memo[hsrAt] !== memo[hsrAt]) {
+  const base = cls * CLASS_CELLS + (onGrid ? g : GRID) * BANDS;
+  if (!onGrid || memo[base] !== memo[base]) {
     const target = (pct / 100) * rp.vmax;
-    memo[hsrAt] = distanceToReach(rp.hsrSpeed, target, rp.tau);
-    memo[nearCell(hsrAt)] = distanceToReach(rp.nearMaxSpeed, target, rp.tau);
+    const tau = cls === 1 ? rp.tau * BLOCKS_TAU_FACTOR : rp.tau;
+    for (let j = 0; j < BANDS; j++) memo[base + j] = distanceToReach(rp.bandSpeeds[j], target, tau);
   }
-  return hsrAt;
+  return base;
 }
 
-export function nearCell(hsrAt: number): number {
-  return hsrAt === 2 * GRID ? 2 * GRID + 1 : GRID + hsrAt;
+/**
+ * Where a flying rep reaches `speed`: the run-in is a build-up that would reach the target at the end of the
+ * run-in at constant acceleration (v² = 2·a·x, so x = runIn·(speed/target)²), but never faster than the
+ * athlete's all-out acceleration allows (`allOut`, from rest): the later of the two.
+ */
+export function buildUpReach(allOut: number, runIn: number, speed: number, target: number): number {
+  const ratio = speed / target;
+  const gentle = runIn * ratio * ratio;
+  return gentle > allOut ? gentle : allOut;
 }
 
 function isRunningKind(kind: BlockInput["kind"]): boolean {
@@ -117,9 +176,11 @@ export function prescribedReps(block: BlockInput): number {
 }
 
 /**
- * Adds `scale` × the block's prescription into `acc`. Each rep is run from rest over run-in + distance,
- * approaching pct% of vmax (a flying rep counts its run-in); metres at or above a threshold are the metres
- * after reaching it (sprint-model.ts). Running data counts only on running kinds and drills only on
+ * Adds `scale` × the block's prescription into `acc`. Each rep is run from rest approaching pct% of vmax
+ * (τ by start type, BLOCKS_TAU_FACTOR); a flying rep's run-in is a build-up (buildUpReach) counted in running
+ * and band metres but not in sprint metres; metres at or above a threshold are the metres after reaching it
+ * (sprint-model.ts). Recovery: max-velocity blocks, accelerations at ≥ maximalPct, speed-endurance blocks and
+ * high plyometrics make the session high-intensity, each as the team chose (recoveryWork). Running data counts only on running kinds and drills only on
  * plyometric blocks, so form state left over from a kind change never leaks into the numbers.
  */
 export function addBlockInto(acc: Float64Array, block: BlockInput, rp: ResolvedProfile, scale: number): void {
@@ -136,25 +197,39 @@ function addScaledBlock(acc: Float64Array, block: BlockInput, rp: ResolvedProfil
     const r = block.running;
     if (!r) return;
     const reps = nonNeg(r.sets) * nonNeg(r.reps) * scale;
-    const total = nonNeg(r.runInM) + nonNeg(r.distanceM);
+    const flying = r.start === "flying";
+    // Only a flying rep has a run-in (the plan validation enforces it; a stray value elsewhere is ignored).
+    const runIn = flying ? nonNeg(r.runInM) : 0;
+    const distance = nonNeg(r.distanceM);
+    const total = runIn + distance;
     if (reps === 0 || total === 0) return;
     const pct = nonNeg(r.intensityPct);
-    const run = total * reps;
-    acc[SLOT_RUN] += run;
+    acc[SLOT_RUN] += total * reps;
     if (pct > 0) {
       const memo = memoOf(rp);
-      const hsrAt = reachCell(rp, memo, pct);
-      const hsr = memo[hsrAt];
-      const near = memo[nearCell(hsrAt)];
-      if (hsr < total) acc[SLOT_HSR] += (total - hsr) * reps;
-      if (near < total) acc[SLOT_NEAR_MAX] += (total - near) * reps;
+      const base = reachCell(rp, memo, pct, r.start === "blocks" ? 1 : 0);
+      const target = (pct / 100) * rp.vmax;
+      for (let j = 0; j < 5; j++) {
+        let reach = memo[base + j];
+        if (flying && runIn > 0) reach = buildUpReach(reach, runIn, rp.bandSpeeds[j], target);
+        if (reach < total) acc[SLOT_ABS_HSR + j] += (total - reach) * reps;
+      }
+      // hsrM and near-max are the team's driving bands (same sums, so identical to packed.ts).
+      acc[SLOT_HSR] = acc[SLOT_ABS_HSR + rp.hsrBand];
+      acc[SLOT_NEAR_MAX] = acc[SLOT_ABS_HSR + BAND_NEAR];
     }
     if (kind !== "tempo") {
-      acc[SLOT_SPRINT] += run;
-      acc[SLOT_STEPS] += run / rp.stepLengthM;
+      // The run-in is a build-up, not sprinting: sprint metres and steps count the timed distance.
+      acc[SLOT_SPRINT] += distance * reps;
+      acc[SLOT_STEPS] += (distance * reps) / rp.stepLengthM;
     }
     if (pct > acc[SLOT_MAX_PCT]) acc[SLOT_MAX_PCT] = pct;
-    if (kind === "max_velocity") acc[SLOT_HIGH_INTENSITY] = 1;
+    if (
+      (kind === "max_velocity" && rp.hiMaxVelocity) ||
+      (kind === "acceleration" && rp.hiMaxAcceleration && pct >= rp.maximalPct - 1e-9) ||
+      (kind === "speed_endurance" && rp.hiSpeedEndurance)
+    )
+      acc[SLOT_HIGH_INTENSITY] = 1;
     return;
   }
   if (kind !== "plyometric" || !block.drills) return;
@@ -164,7 +239,7 @@ function addScaledBlock(acc: Float64Array, block: BlockInput, rp: ResolvedProfil
     if (contacts === 0) continue;
     if (d.intensity === "high") {
       acc[SLOT_HIGH] += contacts;
-      acc[SLOT_HIGH_INTENSITY] = 1;
+      if (rp.hiPlyo) acc[SLOT_HIGH_INTENSITY] = 1;
     } else if (d.intensity === "moderate") acc[SLOT_MODERATE] += contacts;
     else acc[SLOT_LOW] += contacts;
   }

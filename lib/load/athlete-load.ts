@@ -141,6 +141,7 @@ export function weekFromColumns(
     values: cols.values,
     ratio,
     provisional: cols.provisional,
+    missing: cols.missing,
     sessions,
     profile: req.profile,
     settings: req.settings,

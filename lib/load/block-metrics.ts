@@ -1,5 +1,10 @@
 import {
   ACC_SIZE,
+  SLOT_ABS_HSR,
+  SLOT_ABS_SPRINT,
+  SLOT_REL_HSR,
+  SLOT_REL_MAX,
+  SLOT_REL_NEAR,
   SLOT_HIGH,
   SLOT_HSR,
   SLOT_LOW,
@@ -11,7 +16,8 @@ import {
   addBlockInto,
   resolveProfile,
 } from "./accumulate";
-import type { AthleteProfile, BlockInput, ContactsByIntensity, TeamLoadSettings } from "./types";
+import { weightedContacts } from "./plyo";
+import type { AthleteProfile, BlockInput, ContactsByIntensity, SpeedBands, TeamLoadSettings } from "./types";
 
 export { nonNeg, prescribedReps, resolveProfile, type ResolvedProfile } from "./accumulate";
 
@@ -25,6 +31,7 @@ export interface BlockMetrics {
   /** Estimate: sprintM ÷ step length (steps in the acceleration are shorter, so this undercounts a little). */
   sprintSteps: number;
   contacts: ContactsByIntensity;
+  bands: SpeedBands;
 }
 
 /**
@@ -32,12 +39,23 @@ export interface BlockMetrics {
  * start: widening it from small integers on the first fractional (partly logged) count deoptimised callers.
  */
 export function contactsFromAcc(acc: Float64Array): ContactsByIntensity {
-  const out = { low: 0.5, moderate: 0.5, high: 0.5, total: 0.5 };
+  const out = { low: 0.5, moderate: 0.5, high: 0.5, total: 0.5, weighted: 0.5 };
   out.low = acc[SLOT_LOW];
   out.moderate = acc[SLOT_MODERATE];
   out.high = acc[SLOT_HIGH];
   out.total = out.low + out.moderate + out.high;
+  out.weighted = weightedContacts(out.low, out.moderate, out.high);
   return out;
+}
+
+export function bandsFromAcc(acc: Float64Array): SpeedBands {
+  return {
+    absHsrM: acc[SLOT_ABS_HSR],
+    absSprintM: acc[SLOT_ABS_SPRINT],
+    relHsrM: acc[SLOT_REL_HSR],
+    relNearMaxM: acc[SLOT_REL_NEAR],
+    relMaximalM: acc[SLOT_REL_MAX],
+  };
 }
 
 /** Whole-block metrics (all sets × reps) as prescribed. */
@@ -51,5 +69,6 @@ export function blockMetrics(block: BlockInput, profile: AthleteProfile, setting
     sprintM: acc[SLOT_SPRINT],
     sprintSteps: acc[SLOT_STEPS],
     contacts: contactsFromAcc(acc),
+    bands: bandsFromAcc(acc),
   };
 }

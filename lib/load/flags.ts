@@ -1,5 +1,6 @@
 import { dateFromDayIndex, dayIndex, formatDayLabel, minutesOfDay } from "./dates";
 import { formatNumber, formatRatio } from "./format";
+import { DEFAULT_SD_TYPE, monotonyOfWindow } from "./monotony";
 import { aboveContactBand, contactBand } from "./plyo";
 import {
   DEFAULT_JUMP_METRICS,
@@ -12,7 +13,7 @@ import {
 import { peakRatioIn, sumWindow } from "./week-summary";
 import { atOrAbove, exceedsWeeklyLimit, weeklyChangePct } from "./weekly-change";
 
-export type FlagKind = "spike" | "rising" | "low" | "weekly_jump" | "plyo_volume" | "recovery";
+export type FlagKind = "spike" | "rising" | "low" | "weekly_jump" | "monotony" | "plyo_volume" | "recovery";
 export type FlagLevel = "alert" | "caution" | "info";
 
 /** A monitoring aid, not a diagnosis (see LOAD_CAUTION). */
@@ -34,7 +35,7 @@ export interface FlagSession {
   id: string;
   date: string;
   startTime: string;
-  contactsByIntensity: { total: number };
+  contactsByIntensity: { total: number; weighted?: number };
   highIntensity: boolean;
 }
 
@@ -45,6 +46,8 @@ export interface FlagInput {
   /** ACWR of settings.acwrMetric; NaN or null = no ratio. */
   ratio: ArrayLike<number | null>;
   provisional: ArrayLike<number | boolean>;
+  /** 1 where a published past session has no log (its plan stands in as an estimate, or the day is left out). */
+  missing?: ArrayLike<number>;
   /** Sessions that count in the view: the week's, plus those up to recoveryHours before it. */
   sessions: readonly FlagSession[];
   profile: { plyoLevel: PlyoLevel };
@@ -62,7 +65,7 @@ const METHOD_WORDS: Record<AcwrMethod, string> = {
 
 const PROVISIONAL_NOTE = " Provisional: fewer than 28 days of training history stand behind this ratio.";
 
-const KIND_ORDER: Record<FlagKind, number> = { spike: 0, rising: 1, low: 2, weekly_jump: 3, plyo_volume: 4, recovery: 5 };
+const KIND_ORDER: Record<FlagKind, number> = { spike: 0, rising: 1, low: 2, weekly_jump: 3, monotony: 4, plyo_volume: 5, recovery: 6 };
 
 function acwrFlag(input: FlagInput, from: number, to: number, first: number): Flag | null {
   const { settings } = input;
@@ -96,7 +99,9 @@ function acwrFlag(input: FlagInput, from: number, to: number, first: number): Fl
       reason: `${name} peaks at ${r} on ${on}, at or above the climbing threshold ${formatRatio(settings.risingRatio)} and below the spike threshold ${formatRatio(settings.spikeRatio)}.${note}`,
     };
   }
-  if (peak.value < settings.lowRatio - 1e-9) {
+  // A light week is never raised from missing logs alone: with unlogged sessions in the week the low ratio may
+  // just be the athlete not logging (lib/load/README.md, "Missing logs").
+  if (peak.value < settings.lowRatio - 1e-9 && !hasMissing(input, from, to)) {
     return {
       ...base,
       kind: "low",
@@ -106,6 +111,33 @@ function acwrFlag(input: FlagInput, from: number, to: number, first: number): Fl
     };
   }
   return null;
+}
+
+function hasMissing(input: FlagInput, from: number, to: number): boolean {
+  const missing = input.missing;
+  if (!missing) return false;
+  for (let i = Math.max(0, from); i < Math.min(missing.length, to); i++) if (missing[i]) return true;
+  return false;
+}
+
+/** Foster 1998 (MSSE 30:1164): monotony = daily mean ÷ SD of the week's sRPE loads; strain = weekly load × monotony. */
+function monotonyFlag(input: FlagInput, w: number): Flag | null {
+  const limit = input.settings.monotonyLimit ?? 2;
+  const col = input.values.srpe;
+  const m = monotonyOfWindow(col, w, 7, DEFAULT_SD_TYPE);
+  // Strictly above the limit ("above 2.0"); SD 0 (identical days) has no monotony and no flag.
+  if (m === null || !(m > limit + 1e-9)) return null;
+  const load = sumWindow(col, w, w + 7);
+  const strain = load * m;
+  return {
+    kind: "monotony",
+    level: "caution",
+    date: input.weekStart,
+    metric: "srpe",
+    value: m,
+    threshold: limit,
+    reason: `Training monotony (sRPE, Foster) is ${formatNumber(m, 2)} this week, above ${formatNumber(limit, 1)}: the days are too alike to recover between them. Weekly load ${formatNumber(load)} AU, strain ${formatNumber(strain)}.`,
+  };
 }
 
 function jumpFlags(input: FlagInput, w: number): Flag[] {
@@ -192,6 +224,8 @@ export function computeFlags(input: FlagInput): Flag[] {
   const acwr = acwrFlag(input, w, we - first + 1, first);
   if (acwr) flags.push(acwr);
   flags.push(...jumpFlags(input, w), ...plyoFlags(input, ws, we), ...recoveryFlags(input, ws, we));
+  const mono = monotonyFlag(input, w);
+  if (mono) flags.push(mono);
   return flags.sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : KIND_ORDER[a.kind] - KIND_ORDER[b.kind]));
 }
 

@@ -4,7 +4,7 @@
 // arithmetic). The numbers are the prescription and the log as stored; all the load maths stays in the
 // engine (sumPackedSession), with the same operations in the same order as evaluateSessionInto, so both
 // paths give identical numbers (tests/unit/load/packed.test.ts checks it on an invented squad).
-import { memoOf, nearCell, nonNeg, reachCell, srpe, type ResolvedProfile } from "./accumulate";
+import { BAND_NEAR, buildUpReach, memoOf, nonNeg, reachCell, srpe, type ResolvedProfile } from "./accumulate";
 import { dayIndex } from "./dates";
 import { alignLogs, type AlignedLogs } from "./align-logs";
 import type { BlockInput, LogInput, SessionInput } from "./types";
@@ -39,10 +39,12 @@ export interface PackedSessions {
   /** Blocks of session k: [blockStart[k], blockStart[k + 1]). */
   blockStart: Int32Array;
   kind: Uint8Array;
-  /** Running: sets × reps, run-in + distance (m), intensity (% vmax). */
+  /** Running: sets × reps, run-in (flying only) and distance (m), intensity (% vmax), start class (1 = blocks). */
   runReps: Float64Array;
-  runMetres: Float64Array;
+  runIn: Float64Array;
+  runDistance: Float64Array;
   runPct: Float64Array;
+  runClass: Uint8Array;
   /** Reps the block prescribes (for completed-reps logs) and the reps logged (NaN = not listed). */
   prescribed: Float64Array;
   doneReps: Float64Array;
@@ -94,8 +96,10 @@ export function packSessions(sessions: readonly SessionInput[], logs: readonly L
     blockStart: new Int32Array(n + 1),
     kind: new Uint8Array(nb),
     runReps: new Float64Array(nb),
-    runMetres: new Float64Array(nb),
+    runIn: new Float64Array(nb),
+    runDistance: new Float64Array(nb),
     runPct: new Float64Array(nb),
+    runClass: new Uint8Array(nb),
     prescribed: new Float64Array(nb),
     doneReps: new Float64Array(nb).fill(Number.NaN),
     drillStart: new Int32Array(nb + 1),
@@ -132,8 +136,10 @@ export function packSessions(sessions: readonly SessionInput[], logs: readonly L
       const r = block.running;
       if ((code === K_SPRINT || code === K_TEMPO) && r) {
         p.runReps[b] = nonNeg(r.sets) * nonNeg(r.reps);
-        p.runMetres[b] = nonNeg(r.runInM) + nonNeg(r.distanceM);
+        p.runIn[b] = r.start === "flying" ? nonNeg(r.runInM) : 0;
+        p.runDistance[b] = nonNeg(r.distanceM);
         p.runPct[b] = nonNeg(r.intensityPct);
+        p.runClass[b] = r.start === "blocks" ? 1 : 0;
         p.prescribed[b] = p.runReps[b];
       } else if (code === K_PLYO && block.drills) {
         let reps = 0;
@@ -187,20 +193,26 @@ export function sumPackedSession(acc: Float64Array, p: PackedSessions, k: number
     const kind = p.kind[b];
     if (kind === K_SPRINT || kind === K_TEMPO) {
       const reps = p.runReps[b] * scale;
-      const total = p.runMetres[b];
+      const runIn = p.runIn[b];
+      const distance = p.runDistance[b];
+      const total = runIn + distance;
       if (reps === 0 || total === 0) continue;
       const pct = p.runPct[b];
-      const run = total * reps;
       if (pct > 0) {
-        const hsrAt = reachCell(rp, memo, pct);
-        const hsr = memo[hsrAt];
-        const near = memo[nearCell(hsrAt)];
+        const base = reachCell(rp, memo, pct, p.runClass[b]);
+        let hsr = memo[base + rp.hsrBand];
+        let near = memo[base + BAND_NEAR];
+        if (runIn > 0) {
+          const target = (pct / 100) * rp.vmax;
+          hsr = buildUpReach(hsr, runIn, rp.hsrSpeed, target);
+          near = buildUpReach(near, runIn, rp.nearMaxSpeed, target);
+        }
         if (hsr < total) acc[S_HSR] += (total - hsr) * reps;
         if (near < total) acc[S_NEAR] += (total - near) * reps;
       }
       if (kind === K_SPRINT) {
-        acc[S_SPRINT] += run;
-        acc[S_STEPS] += run / rp.stepLengthM;
+        acc[S_SPRINT] += distance * reps;
+        acc[S_STEPS] += (distance * reps) / rp.stepLengthM;
       }
     } else if (kind === K_PLYO) {
       const dEnd = p.drillStart[b + 1];

@@ -117,7 +117,8 @@ export function buildDailyColumns(input: ColumnsInput): DailyColumns {
     if (use === "none") continue;
     if (use === "missing") {
       missing[i] = 1;
-      continue;
+      // Missing logs (lib/load/README.md): by default the plan stands in as an estimate.
+      if (!rp.estimateMissing) continue;
     }
     evaluate(acc, session, use === "logged" ? log : undefined, rp);
     if (use === "logged") logged[i] = 1;
@@ -146,7 +147,7 @@ function packedIntoColumns(
     if (use === "none") continue;
     if (use === "missing") {
       missing[i] = 1;
-      continue;
+      if (!rp.estimateMissing) continue;
     }
     sumPackedSession(acc, p, k, use === "logged", rp);
     if (use === "logged") logged[i] = 1;
@@ -160,7 +161,8 @@ export interface EffectiveSession extends SessionMetrics {
   id: string;
   date: string;
   startTime: string;
-  use: "logged" | "planned";
+  /** "estimated": a published past session without a log, counted at its plan (settings.missingLogs "estimate"). */
+  use: "logged" | "planned" | "estimated";
 }
 
 /** Sessions dated in [fromDay, toDay] that count in the view, with their metrics. */
@@ -181,8 +183,9 @@ export function effectiveSessions(
     const day = sessionDays ? sessionDays[k] : parseDay(s.date);
     if (day < fromDay || day > toDay) continue;
     const log = logFor[k];
-    const use = sessionUse(s.status, log !== undefined, day, todayDay, view);
-    if (use !== "logged" && use !== "planned") continue;
+    const found = sessionUse(s.status, log !== undefined, day, todayDay, view);
+    const use = found === "missing" ? (rp.estimateMissing ? "estimated" : "none") : found;
+    if (use === "none") continue;
     evaluate(acc, s, use === "logged" ? log : undefined, rp);
     out.push({ id: s.id, date: s.date, startTime: s.startTime, use, ...toSessionMetrics(acc) });
   }
@@ -205,7 +208,7 @@ export interface DailySeries {
   values: Record<Metric, Float64Array>;
   /** 1 when the day's value came from at least one log. */
   logged: Uint8Array;
-  /** 1 where a published session before today has no log: unknown, not a rest day (its value is 0). */
+  /** 1 where a published session before today has no log: unknown, not a rest day (its plan stands in as an estimate, or 0 with the day left out). */
   missing: Uint8Array;
   /** First day with a session on record (for acwrSeries' firstDataIndex); null when none. */
   firstDataIndex: number | null;

@@ -14,20 +14,22 @@ import {
   evaluateSessionInto,
   resolveProfile,
 } from "./accumulate";
-import { contactsFromAcc } from "./block-metrics";
-import type { AthleteProfile, ContactsByIntensity, LogInput, MetricValues, SessionInput, TeamLoadSettings } from "./types";
+import { bandsFromAcc, contactsFromAcc } from "./block-metrics";
+import type { AthleteProfile, ContactsByIntensity, LogInput, MetricValues, SessionInput, SpeedBands, TeamLoadSettings } from "./types";
 
 export { COMPLETION_FACTOR, evaluateSessionInto, srpe } from "./accumulate";
 
 export interface SessionMetrics {
   metrics: MetricValues;
   contactsByIntensity: ContactsByIntensity;
-  /** Has a max_velocity block or high-intensity plyometric contacts (the recovery-window rule applies). */
+  /** Has work the team counts as high-intensity (settings.recoveryWork; the recovery-window rule applies). */
   highIntensity: boolean;
   /** Highest intensityPct among running blocks (0 when none). */
   maxIntensityPct: number;
   /** All running metres, tempo and run-ins included. */
   runM: number;
+  /** Metres in every speed band, absolute and relative. */
+  bands: SpeedBands;
 }
 
 export function metricsFromAcc(acc: Float64Array): MetricValues {
@@ -48,6 +50,7 @@ export function toSessionMetrics(acc: Float64Array): SessionMetrics {
     highIntensity: acc[SLOT_HIGH_INTENSITY] > 0,
     maxIntensityPct: acc[SLOT_MAX_PCT],
     runM: acc[SLOT_RUN],
+    bands: bandsFromAcc(acc),
   };
 }
 

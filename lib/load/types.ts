@@ -140,11 +140,31 @@ export const METRIC_INFO: Record<Metric, MetricInfo> = {
   },
 };
 
+/** "absolute": HSR from a fixed speed (m/s); "relative": from a share of each athlete's own tested vmax. */
+export type SpeedZones = "absolute" | "relative";
+export const SPEED_ZONES: readonly SpeedZones[] = ["absolute", "relative"];
+
+/** Work that makes a session high-intensity for the recovery rule. */
+export type RecoveryWork = "max_velocity" | "max_acceleration" | "speed_endurance" | "high_plyo";
+export const RECOVERY_WORK: readonly RecoveryWork[] = ["max_velocity", "max_acceleration", "speed_endurance", "high_plyo"];
+
+/** How a published past session without a log enters the series: the plan as an estimate, or left out. */
+export type MissingLogs = "estimate" | "exclude";
+export const MISSING_LOGS: readonly MissingLogs[] = ["estimate", "exclude"];
+
 export interface TeamLoadSettings {
-  /** HSR threshold, m/s; 5.5 m/s = 19.8 km/h (Bradley et al. 2009). */
+  /** Absolute HSR line, m/s; 5.5 m/s = 19.8 km/h (Bradley et al. 2009). Drives hsrM when speedZones is "absolute". */
   hsrSpeedMs: number;
   /** Near-max threshold as % of the athlete's vmax. */
   nearMaxPct: number;
+  /** Which HSR line drives hsrM and so the flags (lib/load/README.md, "Speed zones"). */
+  speedZones: SpeedZones;
+  /** Relative HSR line, % of the athlete's vmax; drives hsrM when speedZones is "relative". */
+  hsrPct: number;
+  /** Absolute sprint line, m/s; 7.0 m/s = 25.2 km/h (Bradley et al. 2009). Shown, never a flag by itself. */
+  sprintSpeedMs: number;
+  /** Maximal-speed line, % of vmax (Malone et al. 2017: > 95 %): maximal accelerations for the recovery rule. */
+  maximalPct: number;
   acwrMethod: AcwrMethod;
   /** ACWR at or above this is a spike (Gabbett 2016: ≥1.5 "danger zone"). */
   spikeRatio: number;
@@ -156,6 +176,12 @@ export interface TeamLoadSettings {
   weeklyChangeLimitPct: number;
   /** Minimum hours between high-intensity sessions; exactly this many hours passes. */
   recoveryHours: number;
+  /** What makes a session high-intensity for the recovery rule. */
+  recoveryWork: RecoveryWork[];
+  /** How a published past session without a log counts. */
+  missingLogs: MissingLogs;
+  /** Foster 1998: weekly sRPE monotony strictly above this is flagged (with the week's strain). */
+  monotonyLimit: number;
   /** Metric the ACWR zones are judged on. */
   acwrMetric: Metric;
   /** Metrics checked for a weekly jump; defaults to DEFAULT_JUMP_METRICS. */
@@ -168,12 +194,19 @@ export const DEFAULT_JUMP_METRICS: readonly Metric[] = ["srpe", "hsrM", "nearMax
 export const DEFAULT_TEAM_LOAD_SETTINGS: TeamLoadSettings = {
   hsrSpeedMs: 5.5,
   nearMaxPct: 90,
+  speedZones: "absolute",
+  hsrPct: 75,
+  sprintSpeedMs: 7,
+  maximalPct: 95,
   acwrMethod: "ewma",
   spikeRatio: 1.5,
   risingRatio: 1.3,
   lowRatio: 0.8,
   weeklyChangeLimitPct: 15,
   recoveryHours: 48,
+  recoveryWork: [...RECOVERY_WORK],
+  missingLogs: "estimate",
+  monotonyLimit: 2,
   acwrMetric: "srpe",
 };
 
@@ -210,4 +243,17 @@ export interface ContactsByIntensity {
   moderate: number;
   high: number;
   total: number;
+  /** Contacts weighted by intensity (PLYO_INTENSITY_WEIGHT, plyo.ts). */
+  weighted: number;
+}
+
+/** Metres of running at or above each speed band (lib/load/README.md, "Speed zones"). */
+export interface SpeedBands {
+  /** ≥ hsrSpeedMs (5.5 m/s) and ≥ sprintSpeedMs (7.0 m/s). */
+  absHsrM: number;
+  absSprintM: number;
+  /** ≥ hsrPct (75 %), ≥ nearMaxPct (90 %) and ≥ maximalPct (95 %) of the athlete's own vmax. */
+  relHsrM: number;
+  relNearMaxM: number;
+  relMaximalM: number;
 }

@@ -93,6 +93,7 @@ export function computeWeekPreview(input: WeekPreviewInput): { week: WeekSummary
     values,
     ratio: acwr.ratio,
     provisional,
+    missing,
     sessions,
     profile: input.profile,
     settings,

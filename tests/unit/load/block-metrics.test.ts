@@ -1,31 +1,67 @@
 import { describe, expect, it } from "vitest";
 import { blockMetrics, resolveProfile } from "@/lib/load/block-metrics";
-import { metresAtOrAbove } from "@/lib/load/sprint-model";
 import { DEFAULT_STEP_LENGTH, DEFAULT_TAU, DEFAULT_VMAX } from "@/lib/load/types";
 import { PROFILE, SETTINGS, drill, plyoBlock, runBlock } from "./fixtures";
 
 describe("running blocks", () => {
-  it("scales one rep by sets × reps, with HSR ≥ 5.5 m/s and near-max ≥ 90% vmax from the model", () => {
+  // Hand-computed (lib/load/README.md, "Sprint model"): a rep from rest towards target T = 95% × 10 = 9.5 m/s with
+  // τ = 1 s reaches speed s after t* = −τ·ln(1 − s/T) and x* = T·t* − τ·s metres (Furusawa, Hill & Parkinson 1927).
+  // s = 5.5: t* = −ln(4/9.5) = 0.865098, x* = 2.717476 m, so 30 − x* = 27.282524 m a rep, × 6 reps = 163.695146 m.
+  // s = 9.0: t* = −ln(0.5/9.5) = 2.944439, x* = 18.972170 m, so 11.027830 m a rep, × 6 = 66.166978 m.
+  it("2 × 3 × 30 m at 95% from a crouch (vmax 10, τ 1): HSR 163.695 m above 5.5 m/s, 66.167 m above 9.0 m/s", () => {
     const m = blockMetrics(runBlock("acceleration", { sets: 2, reps: 3, distanceM: 30, intensityPct: 95 }), PROFILE, SETTINGS);
-    const rep = { targetSpeed: 9.5, tau: 1, totalDistance: 30 };
     expect(m.runM).toBe(180);
     expect(m.sprintM).toBe(180);
-    expect(m.hsrM).toBeCloseTo(6 * metresAtOrAbove(5.5, rep), 12);
-    expect(m.nearMaxM).toBeCloseTo(6 * metresAtOrAbove(9, rep), 12);
-    expect(m.nearMaxM).toBeLessThan(m.hsrM);
+    expect(m.hsrM).toBeCloseTo(163.695146, 5);
+    expect(m.nearMaxM).toBeCloseTo(66.166978, 5);
     expect(m.contacts.total).toBe(0);
   });
 
-  it("a flying rep is run from rest over run-in + distance, so the run-in counts", () => {
+  // Blocks: τ × 0.95 (accumulate.ts BLOCKS_TAU_FACTOR, common practice / from memory). x* is proportional to τ, so
+  // x*(5.5) = 0.95 × 2.717476 = 2.581602 m and x*(9.0) = 0.95 × 18.972170 = 18.023562 m:
+  // HSR = 6 × (30 − 2.581602) = 164.510389 m; near-max = 6 × (30 − 18.023562) = 71.858629 m.
+  it("a block start reaches each line sooner than a crouch start (τ × 0.95)", () => {
+    const m = blockMetrics(runBlock("acceleration", { sets: 2, reps: 3, distanceM: 30, intensityPct: 95, start: "blocks" }), PROFILE, SETTINGS);
+    expect(m.hsrM).toBeCloseTo(164.510389, 5);
+    expect(m.nearMaxM).toBeCloseTo(71.858629, 5);
+    const standing = blockMetrics(runBlock("acceleration", { sets: 2, reps: 3, distanceM: 30, intensityPct: 95, start: "standing" }), PROFILE, SETTINGS);
+    expect(standing.hsrM).toBeCloseTo(163.695146, 5);
+  });
+
+  // Flying 4 × (20 m run-in + 30 m) at 97% (T = 9.7 m/s), vmax 10, τ 1. The run-in is a build-up that would reach T at
+  // the end of the run-in at constant acceleration (v² = 2ax, so speed s at x = 20·(s/T)²), never faster than all-out:
+  // s = 5.5: build-up 20 × (5.5/9.7)² = 6.430014 m; all-out x* = 9.7 × 0.837032 − 5.5 = 2.619301 m; later = 6.430014 m,
+  //   so 50 − 6.430014 = 43.569986 m a rep, × 4 = 174.279945 m (all-out from rest gave 189.52 m before).
+  // s = 9.0: build-up 20 × (9/9.7)² = 17.217558 m; all-out 9.7 × 2.628826 − 9 = 16.499368 m; later = 17.217558 m,
+  //   so 32.782442 m a rep, × 4 = 131.129769 m.
+  // Sprint metres count the timed 30 m only (4 × 30 = 120 m); running metres count the run-in too (200 m).
+  it("a flying rep's run-in is a build-up: counted in running and band metres, not in sprint metres", () => {
     const flying = blockMetrics(
       runBlock("max_velocity", { start: "flying", runInM: 20, distanceM: 30, intensityPct: 97, reps: 4 }),
       PROFILE,
       SETTINGS,
     );
-    const rep = { targetSpeed: 9.7, tau: 1, totalDistance: 50 };
     expect(flying.runM).toBe(200);
-    expect(flying.hsrM).toBeCloseTo(4 * metresAtOrAbove(5.5, rep), 12);
-    expect(flying.nearMaxM).toBeCloseTo(4 * metresAtOrAbove(9, rep), 12);
+    expect(flying.sprintM).toBe(120);
+    expect(flying.sprintSteps).toBeCloseTo(120 / 2.2, 12);
+    expect(flying.hsrM).toBeCloseTo(174.279945, 5);
+    expect(flying.nearMaxM).toBeCloseTo(131.129769, 5);
+  });
+
+  // Relative zones (team setting speedZones "relative", hsrPct 75): the HSR line is 75% × 10 = 7.5 m/s.
+  // Same rep as above (T = 9.5, τ 1): t* = −ln(2/9.5) = 1.558145, x* = 9.5 × 1.558145 − 7.5 = 7.302375 m,
+  // so 6 × (30 − 7.302375) = 136.185757 m. Absolute sprint band 7.0 m/s: t* = −ln(2.5/9.5) = 1.335001,
+  // x* = 5.682508 m, 6 × 24.317492 = 145.904939 m. The ≥ 95% band is 0 (the model only approaches T = 9.5).
+  it("relative speed zones: HSR from 75% of the athlete's vmax, and every band shown", () => {
+    const block = runBlock("acceleration", { sets: 2, reps: 3, distanceM: 30, intensityPct: 95 });
+    const rel = blockMetrics(block, PROFILE, { ...SETTINGS, speedZones: "relative" });
+    expect(rel.hsrM).toBeCloseTo(136.185757, 5);
+    expect(rel.bands.absHsrM).toBeCloseTo(163.695146, 5);
+    expect(rel.bands.absSprintM).toBeCloseTo(145.904939, 5);
+    expect(rel.bands.relHsrM).toBeCloseTo(136.185757, 5);
+    expect(rel.bands.relNearMaxM).toBeCloseTo(66.166978, 5);
+    expect(rel.bands.relMaximalM).toBe(0);
+    expect(blockMetrics(block, PROFILE, SETTINGS).bands).toEqual(rel.bands);
   });
 
   it("H2 boundary: a rep at 93.75% earns near-max metres at a 90% threshold but none at 95% (lib/load/README.md §1 B3 [C])", () => {
@@ -74,7 +110,8 @@ describe("plyometric contacts (NSCA: one contact per landing of one foot or both
       PROFILE,
       SETTINGS,
     );
-    expect(m.contacts).toEqual({ low: 20, moderate: 24, high: 24, total: 68 });
+    // Weighted by intensity (plyo.ts PLYO_INTENSITY_WEIGHT 1/2/3, a design choice): 20 + 2 × 24 + 3 × 24 = 140.
+    expect(m.contacts).toEqual({ low: 20, moderate: 24, high: 24, total: 68, weighted: 140 });
   });
 
   it("P2: 3×10 hurdle hops + 4×10 ankle hops + 5×8 bounds = 110 contacts", () => {

@@ -19,9 +19,9 @@ const VIEWS: LoadView[] = ["projected", "actual"];
 
 describe("packed sessions give the object path's numbers exactly", () => {
   for (const view of VIEWS) {
-    for (const acwrMethod of ACWR_METHODS) {
-      it(`daily columns and ACWR, ${view} view, ${acwrMethod}`, () => {
-        const settings = { ...DEFAULT_TEAM_LOAD_SETTINGS, acwrMethod };
+    for (const [acwrMethod, speedZones] of [...ACWR_METHODS.map((m) => [m, "absolute"] as const), ["ewma", "relative"] as const]) {
+      it(`daily columns and ACWR, ${view} view, ${acwrMethod}, ${speedZones} speed zones`, () => {
+        const settings = { ...DEFAULT_TEAM_LOAD_SETTINGS, acwrMethod, speedZones };
         for (const a of squad) {
           const req = { profile: a.profile, settings, sessions: a.sessions, logFor: alignLogs(a.sessions, a.logs), view, todayDay: dayIndex(TODAY), fromDay: dayIndex(WEEK) - 7, toDay: dayIndex(WEEK) + 13 };
           const plain = computeAthleteColumns(req);

@@ -24,17 +24,27 @@ describe("sessionMetrics (as planned)", () => {
     const m = sessionMetrics(s, PROFILE, SETTINGS);
     const byBlock = blocks.map((b) => blockMetrics(b, PROFILE, SETTINGS));
     expect(m.metrics.hsrM).toBeCloseTo(byBlock[0].hsrM + byBlock[1].hsrM, 12);
-    expect(m.metrics.sprintM).toBe(160 + 200);
+    // Acceleration 2 × 4 × 20 = 160 m; flying 4 × 30 m timed = 120 m (the 20 m run-ins are a build-up, not sprinting).
+    expect(m.metrics.sprintM).toBe(160 + 120);
     expect(m.metrics.contacts).toBe(50);
-    expect(m.contactsByIntensity).toEqual({ low: 0, moderate: 30, high: 20, total: 50 });
+    expect(m.contactsByIntensity).toEqual({ low: 0, moderate: 30, high: 20, total: 50, weighted: 2 * 30 + 3 * 20 });
     expect(m.metrics.srpe).toBe(420);
     expect(m.highIntensity).toBe(true);
     expect(m.maxIntensityPct).toBe(98);
   });
 
-  it("is high-intensity only with a max_velocity block or high-intensity plyometrics", () => {
+  it("is high-intensity with max velocity, maximal accelerations (≥ 95%), speed endurance or high plyometrics, as the team chose", () => {
     const acc = session("2026-03-10", { blocks: [blocks[0]] });
-    expect(sessionMetrics(acc, PROFILE, SETTINGS).highIntensity).toBe(false);
+    expect(sessionMetrics(acc, PROFILE, SETTINGS).highIntensity).toBe(true);
+    const noAccel = { ...SETTINGS, recoveryWork: SETTINGS.recoveryWork.filter((w) => w !== "max_acceleration") };
+    expect(sessionMetrics(acc, PROFILE, noAccel).highIntensity).toBe(false);
+    const sub = session("2026-03-10", { blocks: [runBlock("acceleration", { intensityPct: 94.5 })] });
+    expect(sessionMetrics(sub, PROFILE, SETTINGS).highIntensity).toBe(false);
+    const se = session("2026-03-10", { blocks: [runBlock("speed_endurance", { distanceM: 150, intensityPct: 90 })] });
+    expect(sessionMetrics(se, PROFILE, SETTINGS).highIntensity).toBe(true);
+    expect(sessionMetrics(se, PROFILE, { ...SETTINGS, recoveryWork: ["max_velocity"] }).highIntensity).toBe(false);
+    const tempo = session("2026-03-10", { blocks: [runBlock("tempo", { distanceM: 100, intensityPct: 70 })] });
+    expect(sessionMetrics(tempo, PROFILE, SETTINGS).highIntensity).toBe(false);
     const hiPlyo = session("2026-03-10", { blocks: [plyoBlock([drill(1, 5, 1, "high")])] });
     expect(sessionMetrics(hiPlyo, PROFILE, SETTINGS).highIntensity).toBe(true);
   });

@@ -1,0 +1,157 @@
+import { describe, expect, it, vi } from "vitest";
+import { addDays, startOfWeek } from "@/lib/load/dates";
+import { setupTestDb } from "../helpers/db";
+import { createTestTeam } from "../helpers/fixtures";
+
+// The sprint-specific modelling choices (lib/load/README.md) checked end to end through the route handlers, with
+// hand-computed values. Only next-auth's session lookup is replaced by "who is asking".
+const who: { userId: number | null } = { userId: null };
+vi.mock("next-auth", async (orig) => ({
+  ...(await orig<typeof import("next-auth")>()),
+  getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
+}));
+vi.mock("@/lib/notices/hooks", () => ({ afterLogChange: async () => {}, afterPlanChange: async () => {} }));
+
+const d = await setupTestDb();
+const { teamToday } = await import("@/lib/data/load");
+const athleteLoad = await import("@/app/api/athletes/[athleteId]/load/route");
+const squadLoad = await import("@/app/api/teams/[teamId]/load/route");
+const settingsRoute = await import("@/app/api/teams/[teamId]/settings/route");
+
+const today = teamToday({ timeZone: "Europe/London" });
+const lastWeek = addDays(startOfWeek(today, 1), -7);
+const p = <T>(v: T) => ({ params: Promise.resolve(v) });
+const send = (path: string, method: string, body: unknown) => new Request(`http://test${path}`, { method, headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
+
+type Running = { sets: number; reps: number; distanceM: number; intensityPct: number; start: "standing" | "crouch" | "blocks" | "flying"; runInM: number; restSec: number };
+const run = (r: Partial<Running>): Running => ({ sets: 1, reps: 1, distanceM: 30, intensityPct: 95, start: "crouch", runInM: 0, restSec: 180, ...r });
+
+/** A team whose athlete Ada has vmax 10 m/s and τ 1 s (invented), and helpers to plan and read. */
+async function team(name: string) {
+  const t = await createTestTeam(d, { name });
+  const ada = t.users[`ada@${name.toLowerCase().replace(/[^a-z]+/g, "")}.test`];
+  await d.Athlete.update({ vmaxMs: 10, tauS: 1, stepLengthM: 2.2 }, { where: { id: ada.athleteId! } });
+  const head = t.users.head_coach.userId;
+  async function plan(date: string, blocks: { kind: string; running?: Running | null; drills?: unknown }[], o: { rpe?: number; minutes?: number; startTime?: string; status?: "published" | "draft"; log?: { completion: "yes" | "partly" | "no"; rpe: number | null; minutes: number | null } } = {}) {
+    const s = await d.PlannedSession.create({ teamId: t.teamId, athleteId: ada.athleteId!, date, startTime: o.startTime ?? "17:00", durationMin: o.minutes ?? 60, title: "Speed", plannedRpe: o.rpe ?? 6, status: o.status ?? "published", notes: null, publishedAt: new Date() });
+    let position = 0;
+    for (const b of blocks) await d.SessionBlock.create({ sessionId: s.id, templateId: null, position: position++, kind: b.kind as "acceleration", title: b.kind, running: b.running ?? null, drills: (b.drills as null) ?? null, notes: null });
+    if (o.log) await d.SessionLog.create({ sessionId: s.id, athleteId: ada.athleteId!, completedReps: null, notes: null, ...o.log });
+    return s.id;
+  }
+  async function days(metric: string, from: string, to: string) {
+    who.userId = head;
+    const res = await athleteLoad.GET(new Request(`http://test/api/athletes/${ada.athleteId}/load?view=actual&metric=${metric}&from=${from}&to=${to}`), p({ athleteId: String(ada.athleteId) }));
+    expect(res.status).toBe(200);
+    const body = (await res.json()) as { days: { date: string; value: number; missing: boolean; logged: boolean }[] };
+    return body.days;
+  }
+  async function squad(week: string) {
+    who.userId = head;
+    const res = await squadLoad.GET(new Request(`http://test/api/teams/${t.teamId}/load?week=${week}&view=actual`), p({ teamId: String(t.teamId) }));
+    expect(res.status).toBe(200);
+    return (await res.json()) as { rows: { totals: Record<string, number>; flags: { kind: string; value: number; reason: string }[]; bands?: Record<string, number>; missingDays: number }[] };
+  }
+  async function setSettings(body: unknown) {
+    who.userId = head;
+    const res = await settingsRoute.PATCH(send(`/api/teams/${t.teamId}/settings`, "PATCH", body), p({ teamId: String(t.teamId) }));
+    return { status: res.status, body: (await res.json()) as { settings?: Record<string, unknown>; error?: { fields?: Record<string, string[]> } } };
+  }
+  return { ...t, ada, plan, days, squad, setSettings };
+}
+
+const yes = { completion: "yes" as const, rpe: 6, minutes: 60 };
+
+describe("speed zones, starts and run-ins through GET /api/athletes/[id]/load", () => {
+  // vmax 10, τ 1, 2 × 3 × 30 m at 95% (T = 9.5 m/s): x* = T·t* − τ·s with t* = −τ·ln(1 − s/T) (Furusawa et al. 1927).
+  // 5.5 m/s: x* = 2.717476 m → 6 × 27.282524 = 163.695146 m. 75% line 7.5 m/s: x* = 7.302375 m → 136.185757 m.
+  // 90% line 9.0 m/s: x* = 18.972170 m → 66.166978 m. Blocks (τ × 0.95): 5.5 m/s x* = 2.581602 m → 164.510389 m.
+  it("absolute HSR 163.695 m, relative HSR 136.186 m, near-max 66.167 m; a block start 164.510 m", async () => {
+    const t = await team("Zone Track");
+    const day = addDays(today, -3);
+    const dayBlocks = addDays(today, -2);
+    await t.plan(day, [{ kind: "acceleration", running: run({ sets: 2, reps: 3 }) }], { log: yes });
+    await t.plan(dayBlocks, [{ kind: "acceleration", running: run({ sets: 2, reps: 3, start: "blocks" }) }], { log: yes });
+    const abs = await t.days("hsrM", day, dayBlocks);
+    expect(abs[0].value).toBeCloseTo(163.695146, 4);
+    expect(abs[1].value).toBeCloseTo(164.510389, 4);
+    expect((await t.days("nearMaxM", day, day))[0].value).toBeCloseTo(66.166978, 4);
+    expect((await t.setSettings({ speedZones: "relative" })).status).toBe(200);
+    expect((await t.days("hsrM", day, day))[0].value).toBeCloseTo(136.185757, 4);
+    // Sprint metres: 6 × 30 = 180 m, whatever the start.
+    expect((await t.days("sprintM", day, day))[0].value).toBe(180);
+  });
+
+  // Flying 4 × (20 m run-in + 30 m) at 97% (T = 9.7): the run-in builds up to T by its end (x = 20·(s/T)²) but never
+  // faster than all-out. 5.5 m/s: max(6.430014, 2.619301) = 6.430014 m → 4 × 43.569986 = 174.279945 m.
+  // 9.0 m/s: max(17.217558, 16.499368) → 4 × 32.782442 = 131.129769 m. Sprint metres: the timed 4 × 30 = 120 m.
+  it("a flying rep's run-in is a build-up, counted in band metres but not as sprint metres", async () => {
+    const t = await team("Flying Track");
+    const day = addDays(today, -2);
+    await t.plan(day, [{ kind: "max_velocity", running: run({ reps: 4, intensityPct: 97, start: "flying", runInM: 20, restSec: 300 }) }], { log: yes });
+    expect((await t.days("hsrM", day, day))[0].value).toBeCloseTo(174.279945, 4);
+    expect((await t.days("nearMaxM", day, day))[0].value).toBeCloseTo(131.129769, 4);
+    expect((await t.days("sprintM", day, day))[0].value).toBe(120);
+  });
+});
+
+describe("missing logs are not zero", () => {
+  // A published past session without a log: by default its plan stands in (RPE 6 × 60 min = 360 AU, Foster 2001)
+  // and the day is marked missing; with "exclude" it carries no load (0) and stays marked.
+  it("counts the plan as an estimate by default, marks the day, and leaves it out on request", async () => {
+    const t = await team("Missing Track");
+    const day = addDays(today, -2);
+    await t.plan(day, [{ kind: "acceleration", running: run({}) }]);
+    const [est] = await t.days("srpe", day, day);
+    expect(est).toMatchObject({ value: 360, missing: true, logged: false });
+    expect((await t.setSettings({ missingLogs: "exclude" })).status).toBe(200);
+    expect((await t.days("srpe", day, day))[0]).toMatchObject({ value: 0, missing: true });
+  });
+});
+
+describe("flags through GET /api/teams/[id]/load", () => {
+  // Foster 1998: six days of 300 AU (RPE 5 × 60) and a rest day give monotony √6 = 2.449 (population SD), strain
+  // 1800 × √6 = 4409 (hand-derived: mean 6a/7, SD a·√6/7).
+  it("raises a monotony caution above 2.0 with the strain", async () => {
+    const t = await team("Same Track");
+    for (let i = 0; i < 6; i++) await t.plan(addDays(lastWeek, i), [], { rpe: 5, log: { completion: "yes", rpe: 5, minutes: 60 } });
+    const { rows } = await t.squad(lastWeek);
+    const ada = rows.find((r) => r.totals.srpe === 1800)!;
+    const mono = ada.flags.find((f) => f.kind === "monotony");
+    expect(mono?.value).toBeCloseTo(2.44949, 5);
+    expect(mono?.reason).toContain("strain 4,409");
+  });
+
+  // Two sessions 24 h apart, each with 6 × 20 m accelerations at 95% (maximal, Malone et al. 2017): short recovery
+  // under the default 48 h (NSCA 48–72 h); not when the team counts only max-velocity blocks.
+  it("counts maximal accelerations and speed endurance for the recovery window, as the team chose", async () => {
+    const t = await team("Rest Track");
+    await t.plan(addDays(lastWeek, 1), [{ kind: "acceleration", running: run({ reps: 6, distanceM: 20 }) }], { log: yes });
+    await t.plan(addDays(lastWeek, 2), [{ kind: "speed_endurance", running: run({ reps: 2, distanceM: 150, intensityPct: 90, start: "standing" }) }], { log: yes });
+    const kinds = async () => (await t.squad(lastWeek)).rows.flatMap((r) => r.flags.map((f) => f.kind));
+    expect(await kinds()).toContain("recovery");
+    expect((await t.setSettings({ recoveryWork: ["max_velocity", "high_plyo"] })).status).toBe(200);
+    expect(await kinds()).not.toContain("recovery");
+  });
+});
+
+describe("PATCH /api/teams/[id]/settings: the new choices", () => {
+  it("stores them and names a bad field", async () => {
+    const t = await team("Settings Track");
+    const ok = await t.setSettings({ speedZones: "relative", hsrPct: 80, maximalPct: 96, sprintSpeedMs: 7.5, monotonyLimit: 2.5, missingLogs: "exclude", recoveryWork: ["speed_endurance"] });
+    expect(ok.status).toBe(200);
+    expect(ok.body.settings).toMatchObject({ speedZones: "relative", hsrPct: 80, maximalPct: 96, sprintSpeedMs: 7.5, monotonyLimit: 2.5, missingLogs: "exclude", recoveryWork: ["speed_endurance"] });
+    for (const [body, field] of [
+      [{ speedZones: "fast" }, "speedZones"],
+      [{ hsrPct: 20 }, "hsrPct"],
+      [{ missingLogs: "zero" }, "missingLogs"],
+      [{ monotonyLimit: 9 }, "monotonyLimit"],
+      [{ recoveryWork: ["nap"] }, "recoveryWork.0"],
+      [{ recoveryWork: "max_velocity" }, "recoveryWork"],
+    ] as const) {
+      const res = await t.setSettings(body);
+      expect(res.status, JSON.stringify(body)).toBe(400);
+      expect(res.body.error?.fields, JSON.stringify(body)).toHaveProperty([field]);
+    }
+  });
+});
