@@ -25,6 +25,7 @@ export const FLAG_TOPIC: Record<FlagKind, FiguresTopic> = {
   rising: "zones",
   low: "zones",
   weekly_jump: "weekly-change",
+  monotony: "monotony",
   plyo_volume: "contacts",
   recovery: "recovery",
 };
