@@ -1,6 +1,7 @@
 import "server-only";
 import { z } from "zod";
 import { UniqueConstraintError, ValidationError } from "sequelize";
+import { busyResponse, isDatabaseBusy } from "@/lib/db/busy";
 import { AppError, type FieldErrors } from "@/lib/errors";
 
 export function zodFields(error: z.ZodError): FieldErrors {
@@ -38,6 +39,7 @@ export function errorResponse(err: unknown): Response {
     for (const e of err.errors) (fields[e.path ?? "_"] ??= []).push(e.message);
     return Response.json({ error: { code: "invalid", message: "Invalid input", fields } }, { status: 400 });
   }
+  if (isDatabaseBusy(err)) return busyResponse();
   console.error("[sprintwright] unexpected error", err);
   return Response.json({ error: { code: "internal", message: "Something went wrong on our side" } }, { status: 500 });
 }

@@ -14,6 +14,8 @@ export class BlockTemplate extends Model<InferAttributes<BlockTemplate>, InferCr
   /** Suggested session duration and RPE when the template starts a new session. */
   declare durationMin: number;
   declare plannedRpe: number;
+  /** Optimistic-locking counter, as on sessions: every edit must send the version it read. */
+  declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -28,6 +30,7 @@ export class BlockTemplate extends Model<InferAttributes<BlockTemplate>, InferCr
         notes: { type: DataTypes.TEXT, allowNull: true },
         durationMin: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 60 },
         plannedRpe: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 5 },
+        version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -1,7 +1,7 @@
 import { mkdirSync } from "node:fs";
 import { dirname } from "node:path";
 import { Sequelize, Transaction } from "sequelize";
-import sqlite3 from "sqlite3";
+import { queueWrites, sqliteDriver, writeQueue } from "@/lib/db/sqlite";
 import { databaseStorage } from "@/lib/env";
 import { Alert } from "./alert";
 import { Athlete } from "./athlete";
@@ -102,25 +102,21 @@ function associate() {
   RestrictionOverride.belongsTo(Team, { foreignKey: "teamId", as: "team" });
 }
 
-/** Builds a Sequelize instance on an SQLite file with the pragmas the app relies on. */
+/** Builds a Sequelize instance on an SQLite file with the pragmas the app relies on; its writes queue (lib/db/sqlite.ts). */
 export async function openDatabase(storage: string): Promise<Sequelize> {
   if (storage !== ":memory:") mkdirSync(dirname(storage), { recursive: true });
   const sequelize = new Sequelize({
     dialect: "sqlite",
     storage,
-    dialectModule: sqlite3,
+    dialectModule: sqliteDriver,
     logging: false,
-    // IMMEDIATE takes the write lock at BEGIN, so two writers queue on busy_timeout instead of deadlocking.
+    // IMMEDIATE takes the write lock at BEGIN, so a transaction never fails halfway on a lock upgrade.
     transactionType: Transaction.TYPES.IMMEDIATE,
-    hooks: {
-      // Each transaction gets its own sqlite3 connection; pragmas are per connection.
-      afterConnect(connection) {
-        (connection as sqlite3.Database).configure("busyTimeout", 5000);
-      },
-    },
+    // busy_timeout already waited; Sequelize's default retries SQLITE_BUSY 5 more times (25 s in all).
+    retry: { max: 1 },
   });
+  queueWrites(sequelize, writeQueue(storage));
   await sequelize.query("PRAGMA foreign_keys = ON");
-  await sequelize.query("PRAGMA busy_timeout = 5000");
   if (storage !== ":memory:") await sequelize.query("PRAGMA journal_mode = WAL");
   return sequelize;
 }

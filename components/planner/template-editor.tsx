@@ -29,7 +29,7 @@ type Props = {
   template: PlanTemplate | null;
   open: boolean;
   onClose: () => void;
-  onSave: (values: TemplateInput, id: number | null) => Promise<void>;
+  onSave: (values: TemplateInput, template: Pick<PlanTemplate, "id" | "version"> | null) => Promise<void>;
   onDelete: (t: PlanTemplate) => Promise<void>;
   profile: AthleteProfile & { tested: boolean };
   settings: TeamLoadSettings;
@@ -55,7 +55,7 @@ function TemplateForm({ template, onClose, onSave, onDelete, profile, settings }
   const submit = form.handleSubmit(async (values) => {
     setFailure(null);
     try {
-      await onSave(values, template?.id ?? null);
+      await onSave(values, template);
       onClose();
     } catch (e) {
       if (e instanceof PlanApiError) {

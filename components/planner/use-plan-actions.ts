@@ -6,7 +6,7 @@ import { applyChange, mergeSaved, type TempIds } from "@/lib/plan/apply";
 import { findSession, type PlanChange } from "@/lib/plan/drop";
 import { sessionBlockPath, sessionBlocksPath, sessionPath, teamSessionsPath, teamTemplatesPath, templatePath, weekToolPath } from "@/lib/plan/keys";
 import { rowLoad } from "@/lib/plan/preview";
-import type { PlanSession, PlanWeek, PlanWriteResult } from "@/lib/plan/types";
+import type { PlanSession, PlanTemplate, PlanWeek, PlanWriteResult } from "@/lib/plan/types";
 import { popUndo, pushUndo, undoForChange, undoForDelete, undoForEdit, type UndoEntry, type UndoOp } from "@/lib/plan/undo";
 import type { SessionEditValues } from "@/lib/validations/plan";
 import type { TemplateInput } from "@/lib/validations/template";
@@ -242,10 +242,16 @@ export function usePlanActions({ swrKey, current, askOverride }: { swrKey: strin
   );
 
   const saveTemplate = useCallback(
-    async (values: TemplateInput, id: number | null) => {
+    async (values: TemplateInput, template: Pick<PlanTemplate, "id" | "version"> | null) => {
       const week = current();
       if (!week) return;
-      await track(() => (id === null ? requestJson("POST", teamTemplatesPath(week.teamId), values) : requestJson("PUT", templatePath(id), values)));
+      try {
+        await track(() => (template === null ? requestJson("POST", teamTemplatesPath(week.teamId), values) : requestJson("PUT", templatePath(template.id), { ...values, version: template.version })));
+      } catch (e) {
+        // Someone else saved the block first: show their version on the shelf; the editor shows why.
+        if (e instanceof PlanApiError && e.stale) await refetch();
+        throw e;
+      }
       await refetch();
       say("saved", `Saved the block "${values.title}".`);
     },

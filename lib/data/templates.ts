@@ -7,7 +7,7 @@ import type { PlanTemplate } from "@/lib/plan/types";
 import type { TemplateInput } from "@/lib/validations/template";
 import { db } from "@/models";
 
-const FIELDS = ["id", "kind", "title", "running", "drills", "notes", "durationMin", "plannedRpe"] as const;
+const FIELDS = ["id", "kind", "title", "running", "drills", "notes", "durationMin", "plannedRpe", "version"] as const;
 
 /** The team's block templates, by kind then title. */
 export async function listTemplates({ teamId, transaction }: { teamId: number; transaction?: Transaction }): Promise<PlanTemplate[]> {
@@ -37,12 +37,19 @@ export async function createTemplate({ teamId, input }: { teamId: number; input:
   return getTemplate({ teamId, templateId: row.id });
 }
 
-export async function updateTemplate({ teamId, templateId, input }: { teamId: number; templateId: number; input: TemplateInput }): Promise<PlanTemplate> {
-  const { BlockTemplate } = await db();
-  const row = await BlockTemplate.findOne({ where: { id: templateId, teamId } });
-  if (!row) throw new AppError("not_found", "That template was not found");
-  await row.update(normaliseBlock(input));
-  return getTemplate({ teamId, templateId });
+/** Replaces a template's content when `version` is the stored one; 409 "stale" with the current template otherwise. */
+export async function updateTemplate({ teamId, templateId, version, input }: { teamId: number; templateId: number; version: number; input: TemplateInput }): Promise<PlanTemplate> {
+  const { BlockTemplate, sequelize } = await db();
+  return sequelize.transaction(async (transaction) => {
+    const row = await BlockTemplate.findOne({ where: { id: templateId, teamId }, attributes: [...FIELDS, "teamId"], transaction });
+    if (!row) throw new AppError("not_found", "That template was not found");
+    if (row.version !== version) {
+      const current = toPlanTemplate(row.get({ plain: true }) as TemplateRow);
+      throw new AppError("stale", "Someone changed this block after you opened it. Nothing was saved; reopen it to see the current version.", { details: { current } });
+    }
+    await row.update({ ...normaliseBlock(input), version: version + 1 }, { transaction });
+    return getTemplate({ teamId, templateId, transaction });
+  });
 }
 
 /** Removes a template; blocks already copied into sessions stay as they are (their link is cleared). */

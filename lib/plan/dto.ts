@@ -45,7 +45,7 @@ export type SessionRow = {
   log?: { id: number } | null;
 };
 
-export type TemplateRow = Omit<BlockRow, "templateId" | "position"> & { durationMin: number; plannedRpe: number };
+export type TemplateRow = Omit<BlockRow, "templateId" | "position"> & { durationMin: number; plannedRpe: number; version: number };
 
 export function toPlanBlock(b: BlockRow): PlanBlock {
   return {
@@ -92,6 +92,7 @@ export function toPlanTemplate(t: TemplateRow): PlanTemplate {
     notes: t.notes ?? null,
     durationMin: Number(t.durationMin),
     plannedRpe: Number(t.plannedRpe),
+    version: Number(t.version),
   };
 }
 

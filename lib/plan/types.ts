@@ -45,6 +45,8 @@ export type PlanTemplate = {
   notes: string | null;
   durationMin: number;
   plannedRpe: number;
+  /** Optimistic-locking counter: an edit sends the version it read. */
+  version: number;
 };
 
 /** The week's numbers for one row, exactly as computeWeekPreview answers. */

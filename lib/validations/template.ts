@@ -74,3 +74,6 @@ export const templateSchema = z
   })
   .superRefine(requirePrescription);
 export type TemplateInput = z.infer<typeof templateSchema>;
+
+/** PUT /api/templates/[id]: the whole form and the version it was read at (409 "stale" when it moved on). */
+export const updateTemplateSchema = templateSchema.and(z.object({ version: z.number({ error: "Send the version you read" }).int().min(1, "Send the version you read") }));

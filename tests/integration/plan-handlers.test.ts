@@ -97,8 +97,15 @@ describe("templates", () => {
     const id = made.body.template.id;
     const list = await templates.GET(new Request(url(`/api/teams/${T}/templates`)), p({ teamId: T })).then(json<{ templates: { title: string }[] }>);
     expect(list.body.templates.map((t) => t.title)).toEqual(expect.arrayContaining(["Flying 30s", "Pogo hops", "Skips"]));
-    const put = await template.PUT(send(`/api/templates/${id}`, "PUT", { ...pogo, title: "A skips" }), p({ templateId: String(id) })).then(json<{ template: { title: string } }>);
-    expect(put.body.template.title).toBe("A skips");
+    const put = await template.PUT(send(`/api/templates/${id}`, "PUT", { ...pogo, title: "A skips", version: 1 }), p({ templateId: String(id) })).then(json<{ template: { title: string; version: number } }>);
+    expect(put.body.template).toMatchObject({ title: "A skips", version: 2 });
+    // The same edit again carries a version that has moved on: 409 "stale" with the stored template, nothing written.
+    const stale = await template.PUT(send(`/api/templates/${id}`, "PUT", { ...pogo, title: "B skips", version: 1 }), p({ templateId: String(id) })).then(json<{ error: { code: string; current: { title: string } } }>);
+    expect(stale.status).toBe(409);
+    expect(stale.body.error).toMatchObject({ code: "stale", current: { title: "A skips" } });
+    const missing = await template.PUT(send(`/api/templates/${id}`, "PUT", { ...pogo, title: "C skips" }), p({ templateId: String(id) })).then(json<{ error: { fields: Record<string, string[]> } }>);
+    expect(missing.status).toBe(400);
+    expect(missing.body.error.fields).toHaveProperty("version");
     expect((await template.DELETE(send(`/api/templates/${id}`, "DELETE"), p({ templateId: String(id) }))).status).toBe(200);
     expect((await template.GET(new Request(url(`/api/templates/${id}`)), p({ templateId: String(id) }))).status).toBe(404);
   });
@@ -121,7 +128,7 @@ describe("templates", () => {
     as(physio);
     expect((await newTemplate(flying)).status).toBe(403);
     as(bravoCoach);
-    expect((await template.PUT(send(`/api/templates/${maxV}`, "PUT", flying), p({ templateId: String(maxV) }))).status).toBe(404);
+    expect((await template.PUT(send(`/api/templates/${maxV}`, "PUT", { ...flying, version: 1 }), p({ templateId: String(maxV) }))).status).toBe(404);
   });
 });
 

@@ -15,9 +15,9 @@ export const settings = { ...DEFAULT_TEAM_LOAD_SETTINGS };
 export const profile: AthleteProfile = { vmax: 9.6, tau: 1.15, stepLengthM: 2.15, plyoLevel: "intermediate" };
 
 export const templates: PlanTemplate[] = [
-  { id: 1, kind: "max_velocity", title: "Flying 30s", running: { sets: 1, reps: 4, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 }, drills: null, notes: null, durationMin: 50, plannedRpe: 7 },
-  { id: 2, kind: "plyometric", title: "Bounds", running: null, drills: [{ name: "Bounding", sets: 4, reps: 10, contactsPerRep: 4, intensity: "high" }], notes: null, durationMin: 30, plannedRpe: 6 },
-  { id: 3, kind: "speed_endurance", title: "Big 150s", running: { sets: 2, reps: 3, distanceM: 150, intensityPct: 92, start: "standing", runInM: 0, restSec: 600 }, drills: null, notes: null, durationMin: 100, plannedRpe: 9 },
+  { id: 1, kind: "max_velocity", title: "Flying 30s", running: { sets: 1, reps: 4, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 }, drills: null, notes: null, durationMin: 50, plannedRpe: 7, version: 1 },
+  { id: 2, kind: "plyometric", title: "Bounds", running: null, drills: [{ name: "Bounding", sets: 4, reps: 10, contactsPerRep: 4, intensity: "high" }], notes: null, durationMin: 30, plannedRpe: 6, version: 1 },
+  { id: 3, kind: "speed_endurance", title: "Big 150s", running: { sets: 2, reps: 3, distanceM: 150, intensityPct: 92, start: "standing", runInM: 0, restSec: 600 }, drills: null, notes: null, durationMin: 100, plannedRpe: 9, version: 1 },
 ];
 
 let nextId = 1000;

@@ -4,7 +4,7 @@ import { AppError } from "@/lib/errors";
 import { parseJson, parseParams, route } from "@/lib/http";
 import type { Action } from "@/lib/auth/permissions";
 import { templateParamsSchema } from "@/lib/validations/plan";
-import { templateSchema } from "@/lib/validations/template";
+import { updateTemplateSchema } from "@/lib/validations/template";
 
 export const runtime = "nodejs";
 
@@ -23,11 +23,11 @@ export const GET = route<Params>(async (_req, { params }) => {
   return Response.json({ template: await getTemplate(ids) });
 });
 
-/** Replaces the template's content (the editor sends the whole form). */
+/** Replaces the template's content (the editor sends the whole form) with the `version` read; 409 "stale" when it moved on. */
 export const PUT = route<Params>(async (req, { params }) => {
   const ids = await authorized(params, "plan:edit");
-  const input = await parseJson(req, templateSchema);
-  return Response.json({ template: await updateTemplate({ ...ids, input }) });
+  const { version, ...input } = await parseJson(req, updateTemplateSchema);
+  return Response.json({ template: await updateTemplate({ ...ids, version, input }) });
 });
 
 export const DELETE = route<Params>(async (_req, { params }) => {

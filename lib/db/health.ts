@@ -1,0 +1,59 @@
+import { QueryTypes, type Sequelize } from "sequelize";
+import sqlite3 from "sqlite3";
+import { writeQueue } from "./sqlite";
+
+export type DatabaseState = "ok" | "busy" | "down";
+
+/** The probe waits this long for a lock another process holds before calling the database busy. */
+const PROBE_WAIT_MS = 200;
+/** Our own writer holding its turn longer than this (or one giving up lately) means writes are stuck. */
+const STUCK_MS = 2000;
+
+const probes = globalThis as typeof globalThis & { __sprintwrightProbes?: Map<string, Promise<sqlite3.Database>> };
+
+function probeConnection(storage: string): Promise<sqlite3.Database> {
+  const map = (probes.__sprintwrightProbes ??= new Map());
+  let conn = map.get(storage);
+  if (!conn) {
+    conn = new Promise((resolve, reject) => {
+      const c = new sqlite3.Database(storage, sqlite3.OPEN_READWRITE, (err) => (err ? reject(err) : resolve(c)));
+      c.configure("busyTimeout", PROBE_WAIT_MS);
+    });
+    conn.catch(() => map.delete(storage));
+    map.set(storage, conn);
+  }
+  return conn;
+}
+
+const exec = (c: sqlite3.Database, sql: string) => new Promise<void>((resolve, reject) => c.exec(sql, (err) => (err ? reject(err) : resolve())));
+
+/** Takes SQLite's write lock for an instant, so a lock held by another process shows as busy. */
+async function canWrite(storage: string): Promise<boolean> {
+  const c = await probeConnection(storage);
+  try {
+    await exec(c, "BEGIN IMMEDIATE");
+  } catch {
+    return false;
+  }
+  await exec(c, "ROLLBACK");
+  return true;
+}
+
+/**
+ * Whether the database answers reads and could take a write now. Never waits behind this process's writers:
+ * while one of them holds its turn the answer comes from how long it has held it.
+ */
+export async function databaseState({ sequelize, storage }: { sequelize: Sequelize; storage: string }): Promise<DatabaseState> {
+  try {
+    await sequelize.query("SELECT 1", { type: QueryTypes.SELECT });
+  } catch {
+    return "down";
+  }
+  if (storage === ":memory:") return "ok";
+  const queue = writeQueue(storage);
+  const free = await queue.tryRun(() => canWrite(storage)).catch(() => false);
+  if (free !== undefined) return free ? "ok" : "busy";
+  const now = Date.now();
+  const stuck = (queue.heldSince !== null && now - queue.heldSince > STUCK_MS) || (queue.lastBusyAt !== null && now - queue.lastBusyAt < STUCK_MS);
+  return stuck ? "busy" : "ok";
+}

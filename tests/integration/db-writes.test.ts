@@ -1,0 +1,76 @@
+// SQLite writes on a real file: busy_timeout reaches every connection Sequelize opens, writes from one process
+// queue instead of starving each other, and a lock held by another connection ends in 503 with Retry-After.
+import sqlite3 from "sqlite3";
+import { QueryTypes, type Transaction } from "sequelize";
+import { describe, expect, it } from "vitest";
+import { BUSY_TIMEOUT_MS } from "@/lib/db/sqlite";
+import { databaseState } from "@/lib/db/health";
+import { errorResponse } from "@/lib/http";
+import { createTestTeam } from "../helpers/fixtures";
+import { setupTestDb } from "../helpers/db";
+
+const d = await setupTestDb();
+const { teamId } = await createTestTeam(d, { name: "Queue Club" });
+
+const busyTimeout = async (transaction?: Transaction) => {
+  const [row] = await d.sequelize.query<{ timeout: number }>("PRAGMA busy_timeout", { type: QueryTypes.SELECT, transaction });
+  return row!.timeout;
+};
+const newTemplate = (title: string, transaction?: Transaction) =>
+  d.BlockTemplate.create({ teamId, kind: "strength", title, running: null, drills: null, notes: null, durationMin: 30, plannedRpe: 5 }, { transaction });
+
+function otherConnection(): Promise<sqlite3.Database> {
+  return new Promise((resolve, reject) => {
+    const c = new sqlite3.Database(d.storage, (err) => (err ? reject(err) : resolve(c)));
+  });
+}
+const exec = (c: sqlite3.Database, sql: string) => new Promise<void>((resolve, reject) => c.exec(sql, (err) => (err ? reject(err) : resolve())));
+
+describe("SQLite writes", () => {
+  it("sets busy_timeout on the shared connection and on each transaction's own connection", async () => {
+    expect(await busyTimeout()).toBe(BUSY_TIMEOUT_MS);
+    await d.sequelize.transaction(async (t) => expect(await busyTimeout(t)).toBe(BUSY_TIMEOUT_MS));
+  });
+
+  it("commits 60 parallel transactions and 60 parallel plain writes, none lost", async () => {
+    const before = await d.BlockTemplate.count({ where: { teamId } });
+    await Promise.all([
+      ...Array.from({ length: 60 }, (_, i) =>
+        d.sequelize.transaction(async (t) => {
+          const row = await newTemplate(`In a transaction ${i}`, t);
+          await row.update({ notes: "checked" }, { transaction: t });
+        }),
+      ),
+      ...Array.from({ length: 60 }, (_, i) => newTemplate(`On its own ${i}`)),
+    ]);
+    expect(await d.BlockTemplate.count({ where: { teamId } })).toBe(before + 120);
+  });
+
+  it("a lock another connection holds: the first write waits busy_timeout, the ones queued behind it give up with it, all answer 503", async () => {
+    const other = await otherConnection();
+    await exec(other, "BEGIN IMMEDIATE");
+    try {
+      expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("busy");
+      const started = Date.now();
+      const results = await Promise.allSettled(Array.from({ length: 5 }, (_, i) => newTemplate(`Blocked ${i}`)));
+      const elapsed = Date.now() - started;
+      expect(results.every((r) => r.status === "rejected")).toBe(true);
+      // One busy_timeout in all, not one per queued write (nor Sequelize's five retries of each).
+      expect(elapsed).toBeGreaterThanOrEqual(BUSY_TIMEOUT_MS - 100);
+      expect(elapsed).toBeLessThan(2 * BUSY_TIMEOUT_MS);
+      for (const r of results) {
+        const res = errorResponse((r as PromiseRejectedResult).reason);
+        expect(res.status).toBe(503);
+        expect(res.headers.get("retry-after")).toMatch(/^[1-9]\d*$/);
+        expect(((await res.json()) as { error: { code: string } }).error.code).toBe("busy");
+      }
+    } finally {
+      await exec(other, "ROLLBACK");
+      await new Promise((r) => other.close(r));
+    }
+    expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("ok");
+    await newTemplate("After the lock");
+    expect(await d.BlockTemplate.count({ where: { teamId, title: "After the lock" } })).toBe(1);
+    expect(await d.BlockTemplate.count({ where: { teamId, title: "Blocked 0" } })).toBe(0);
+  }, 30_000);
+});
