@@ -297,6 +297,34 @@ describeBrowser("planner journeys", () => {
     await page.getByTestId("shelf-search").fill("");
   });
 
+  it("saves an edit of a template, and says so when another coach saved it first (409)", async () => {
+    const editor = page.getByTestId("template-editor");
+    await page.getByTestId("shelf-search").fill("flying 20");
+    const card = page.getByTestId("template-card").first();
+    const id = Number(await card.getAttribute("data-template-id"));
+    await card.getByTestId("edit-template").click();
+    await editor.waitFor();
+    await page.getByLabel("Title").fill("Flying 20s, relaxed");
+    await page.getByTestId("save-template").click();
+    await editor.waitFor({ state: "hidden" });
+    await page.getByTestId("shelf-search").fill("relaxed");
+    expect(await page.getByTestId("template-card").count()).toBe(1);
+
+    await page.getByTestId("template-card").first().getByTestId("edit-template").click();
+    await editor.waitFor();
+    const other = await apiSession(app, coach.email);
+    const { template: read } = (await (await other.fetch(`/api/templates/${id}`)).json()) as { template: Record<string, unknown> };
+    const saved = await other.fetch(`/api/templates/${id}`, { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify({ ...read, title: "Flying 20s, the other coach's" }) });
+    expect(saved.status).toBe(200);
+    await page.getByLabel("Title").fill("Flying 20s, mine");
+    await page.getByTestId("save-template").click();
+    await editor.getByText("Someone changed this block").waitFor();
+    await editor.getByRole("button", { name: "Cancel" }).click();
+    await page.getByTestId("shelf-search").fill("flying 20");
+    await page.getByTestId("template-card").getByText("Flying 20s, the other coach's").waitFor();
+    await page.getByTestId("shelf-search").fill("");
+  });
+
   it("folds a group, walks the weeks, and runs the week tools: publish, copy to next week, clear", async () => {
     const group = plan.groups[0];
     const before = await page.getByTestId("athlete-row").count();
