@@ -87,7 +87,7 @@ export const REQUESTS: Record<string, Build> = {
   "GET /api/teams/[teamId]/templates": async (w) => api("GET", `/api/teams/${w.teamId}/templates`),
   "POST /api/teams/[teamId]/templates": async (w) => api("POST", `/api/teams/${w.teamId}/templates`, template),
   "GET /api/templates/[templateId]": async (w) => api("GET", `/api/templates/${await w.template()}`),
-  "PUT /api/templates/[templateId]": async (w) => api("PUT", `/api/templates/${await w.template()}`, template),
+  "PUT /api/templates/[templateId]": async (w) => api("PUT", `/api/templates/${await w.template()}`, { ...template, version: 1 }),
   "DELETE /api/templates/[templateId]": async (w) => api("DELETE", `/api/templates/${await w.template()}`),
 
   "PAGE /": async () => page("/"),
