@@ -1,5 +1,6 @@
 import { QueryTypes, type Sequelize } from "sequelize";
 import sqlite3 from "sqlite3";
+import { exec, openRaw } from "./raw";
 import { writeQueue } from "./sqlite";
 
 export type DatabaseState = "ok" | "busy" | "down";
@@ -15,17 +16,12 @@ function probeConnection(storage: string): Promise<sqlite3.Database> {
   const map = (probes.__sprintwrightProbes ??= new Map());
   let conn = map.get(storage);
   if (!conn) {
-    conn = new Promise((resolve, reject) => {
-      const c = new sqlite3.Database(storage, sqlite3.OPEN_READWRITE, (err) => (err ? reject(err) : resolve(c)));
-      c.configure("busyTimeout", PROBE_WAIT_MS);
-    });
+    conn = openRaw(storage, sqlite3.OPEN_READWRITE, PROBE_WAIT_MS);
     conn.catch(() => map.delete(storage));
     map.set(storage, conn);
   }
   return conn;
 }
-
-const exec = (c: sqlite3.Database, sql: string) => new Promise<void>((resolve, reject) => c.exec(sql, (err) => (err ? reject(err) : resolve())));
 
 /** Takes SQLite's write lock for an instant, so a lock held by another process shows as busy. */
 async function canWrite(storage: string): Promise<boolean> {

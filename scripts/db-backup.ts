@@ -1,0 +1,14 @@
+// Usage: npm run db:backup   (BACKUP_DIR chooses the folder; default backups/ beside the database file)
+// Safe while the app runs: an online, consistent copy, checked with PRAGMA integrity_check.
+import { backupDatabase } from "@/lib/db/backup";
+import { databaseStorage } from "@/lib/env";
+
+async function main() {
+  const { file, bytes } = await backupDatabase({ storage: databaseStorage() });
+  console.log(`backup: ${file} (${Math.ceil(bytes / 1024)} KiB), integrity_check ok`);
+}
+
+main().catch((err) => {
+  console.error(`backup failed: ${err instanceof Error ? err.message : String(err)}`);
+  process.exit(1);
+});
