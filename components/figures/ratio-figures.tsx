@@ -54,8 +54,9 @@ export function ZoneFigures({ settings }: { settings: TeamLoadSettings }) {
     <FigureSection id="zones" title="Spike, climbing and underloaded">
       <p>
         A week is judged on its days with a full history: the highest ratio among them at or above {formatRatio(settings.spikeRatio)} is a spike
-        (an alert); at or above {formatRatio(settings.risingRatio)} it is climbing (a caution). Underloaded needs every such day below{" "}
-        {formatRatio(settings.lowRatio)}. Early days are judged on their own and give at most a caution, marked early.
+        (an alert); at or above {formatRatio(settings.risingRatio)} it is climbing (a caution). Underloaded needs a whole week with a full
+        history and every day below {formatRatio(settings.lowRatio)}. Early days are judged on their own and give at most a caution, marked early,
+        never an underloaded note. The ratio shown for a week is that judged value.
       </p>
       <Source>
         Zones after Gabbett 2016 (Br J Sports Med 50:273): 0.8–1.3 &quot;sweet spot&quot;, 1.5 and above &quot;danger zone&quot;. The ratio

@@ -18,7 +18,7 @@ import {
 } from "@/lib/load";
 import { AppError } from "@/lib/errors";
 import type { LoadPreviewInput } from "@/lib/validations/load";
-import { getAthleteLoadInputs, getSquadLoadInputs, getTeamClock, historyRange, teamToday, type TeamClock } from "./load";
+import { getAthleteLoadInputs, getLoadSeriesInputs, getTeamClock, teamToday, type TeamClock } from "./load";
 
 /** The caller's already-known team clock (e.g. from the authorized viewer) saves a query on hot paths. */
 type Clock = Omit<TeamClock, "teamId">;
@@ -33,9 +33,13 @@ export type SquadWeekRowDto = {
   totals: MetricValues;
   previousTotals: MetricValues;
   changePct: Record<Metric, number | null>;
-  /** Highest ACWR of the team metric this week (team method); null when none. */
+  /** The week's judged ACWR of the team metric (highest on days with 28+ days on record, else the highest early one); null when none. */
   ratio: number | null;
+  ratioDate: string | null;
   ratioProvisional: boolean;
+  /** The team metric's ACWR on each day of the week, and whether each is provisional. */
+  dailyRatio: (number | null)[];
+  dailyProvisional: boolean[];
   peakRatios: Record<Metric, number | null>;
   missingDays: number;
   flags: Flag[];
@@ -62,7 +66,7 @@ export async function getSquadWeekLoad({ teamId, week, view, today, clock }: { t
   const now = today ?? teamToday({ timeZone: probe.timeZone });
   const weekStart = startOfWeek(week ?? now, probe.weekStartDay);
   const weekEnd = addDays(weekStart, 6);
-  const inputs = await getSquadLoadInputs({ teamId, ...historyRange({ from: addDays(weekStart, -7), to: weekEnd }) });
+  const inputs = await getLoadSeriesInputs({ teamId, through: weekEnd });
   const rows = computeSquadWeek(
     // Packed into columns once here, the two years of history are summed from typed arrays (lib/load/packed.ts).
     inputs.athletes.map((a) => ({ id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions: a.sessions, logs: a.logs, packed: packSessions(a.sessions, a.logs) })),
@@ -94,7 +98,10 @@ export async function getSquadWeekLoad({ teamId, week, view, today, clock }: { t
         previousTotals: r.week.previousTotals,
         changePct: r.week.changePct,
         ratio: r.week.peakRatio,
+        ratioDate: r.week.peakRatioDate,
         ratioProvisional: r.week.ratioProvisional,
+        dailyRatio: r.week.dailyRatio,
+        dailyProvisional: r.week.dailyProvisional,
         peakRatios: r.peakRatios,
         missingDays: r.week.missingDays,
         flags: r.flags,
@@ -147,11 +154,13 @@ export async function getAthleteLoad({ teamId, athleteId, from, to, view, metric
   const fallback = defaultRange(now, probe.weekStartDay);
   const range = { from: from ?? (to ? addDays(to, -69) : fallback.from), to: to ?? (from ? addDays(from, 69) : fallback.to) };
   if (dayIndex(range.to) < dayIndex(range.from)) throw new AppError("invalid", "Invalid to", { fields: { to: ["Must be on or after from"] } });
-  const inputs = await getAthleteLoadInputs({ athleteId, ...historyRange(range) });
+  const weekStart = startOfWeek(now <= range.to ? now : range.to, probe.weekStartDay);
+  // Through the end of next week as well: the "upcoming" summary reads it.
+  const nextWeekEnd = addDays(weekStart, 13);
+  const inputs = await getAthleteLoadInputs({ athleteId, through: range.to > nextWeekEnd ? range.to : nextWeekEnd });
   if (inputs.teamId !== teamId) throw new AppError("not_found", "Not found");
   const { athlete, settings } = inputs;
   const chosen = metric ?? settings.acwrMetric;
-  const weekStart = startOfWeek(now <= range.to ? now : range.to, inputs.weekStartDay);
   const base = { profile: athlete.profile, settings: { ...settings, acwrMetric: chosen }, sessions: athlete.sessions, from: range.from, to: range.to, weekStart };
   const load = computeAthleteLoad({ ...base, logs: athlete.logs, today: now, view });
   // "Planned": the engine's projected view with today before every session and no logs counts the whole plan.
@@ -205,7 +214,7 @@ export async function previewAthleteWeek({ input, today }: { input: LoadPreviewI
   });
   if (Object.keys(fields).length > 0) throw new AppError("invalid", `Invalid ${Object.keys(fields).join(", ")}`, { fields });
   const now = today ?? teamToday({ timeZone: probe.timeZone });
-  const inputs = await getAthleteLoadInputs({ athleteId: input.athleteId, ...historyRange({ from: addDays(weekStart, -7), to: weekEnd }) });
+  const inputs = await getAthleteLoadInputs({ athleteId: input.athleteId, through: weekEnd });
   // An athlete of another team is "not found", whatever the caller may do in its own team.
   if (inputs.teamId !== input.teamId) throw new AppError("not_found", "Not found");
   const { athlete, settings } = inputs;
@@ -216,14 +225,14 @@ export async function previewAthleteWeek({ input, today }: { input: LoadPreviewI
     durationMin: s.durationMin,
     plannedRpe: s.plannedRpe,
     status: s.status,
-    blocks: s.blocks.map((b) => ({ kind: b.kind, title: b.title, running: b.running, drills: b.drills })),
+    blocks: s.blocks.map((b) => ({ id: b.id === undefined ? undefined : String(b.id), kind: b.kind, title: b.title, running: b.running, drills: b.drills })),
   }));
   const outside = athlete.sessions.filter((s) => s.date < weekStart || s.date > weekEnd);
-  // Logs carry over only to proposed sessions that are the same saved session (same id); block ids are not kept.
+  // Logs carry over to proposed sessions that are the same saved session (same id), per-block reps included:
+  // reps logged against a block id the proposal still holds count as logged (lib/load/README.md §4).
   const proposedIds = new Set(proposed.map((s) => s.id));
-  const keptLogs = athlete.logs
-    .filter((l) => outside.some((s) => s.id === l.sessionId) || proposedIds.has(l.sessionId))
-    .map((l) => (proposedIds.has(l.sessionId) ? { ...l, completedReps: null } : l));
+  const outsideIds = new Set(outside.map((s) => s.id));
+  const keptLogs = athlete.logs.filter((l) => outsideIds.has(l.sessionId) || proposedIds.has(l.sessionId));
   const base = { profile: athlete.profile, settings, from: weekStart, to: weekEnd, today: now, view: "projected" as const, weekStart };
   const next = computeAthleteLoad({ ...base, sessions: [...outside, ...proposed], logs: keptLogs });
   const saved = computeAthleteLoad({ ...base, sessions: athlete.sessions, logs: athlete.logs });

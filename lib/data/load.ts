@@ -14,7 +14,6 @@ import type {
   SessionStatus,
   TeamLoadSettings,
 } from "@/lib/load/types";
-import { addDays } from "@/lib/load/dates";
 import { AppError } from "@/lib/errors";
 import { db } from "@/models";
 import { SETTINGS_SQL_COLUMNS, toEngineSettings, type SettingsRow } from "./team-settings";
@@ -25,7 +24,7 @@ export type LoadAthleteInputs = {
   groupId: number | null;
   groupName: string | null;
   profile: AthleteProfile;
-  /** Every session (any status) dated in [from, to], blocks in position order; ids as strings. */
+  /** Every session (any status) from the athlete's first to `through`, blocks in position order; ids as strings. */
   sessions: SessionInput[];
   /** Logs of those sessions. */
   logs: LogInput[];
@@ -40,19 +39,12 @@ export type LoadInputs = {
   athletes: LoadAthleteInputs[];
 };
 
-type Range = { from: string; to: string; transaction?: Transaction };
-
 /**
- * Days of history to load before the first day a caller shows. The engine seeds the EWMA with the first day's
- * load; a seed error decays as (27/29)^t (lib/load/README.md §6), so after 168 days it is below 1e-5 and answers do
- * not depend on where loading started. Rolling windows need only 28 days.
+ * What every load figure is computed from: each athlete's whole history up to `through` (the last day the
+ * caller shows). Nothing is cut at the start, so the engine's one daily series per athlete × metric × view
+ * begins on the athlete's first day on record whichever screen asks (lib/load/README.md §5).
  */
-export const LOAD_HISTORY_DAYS = 168;
-
-/** The date range to load for answers about [from, to]: LOAD_HISTORY_DAYS of history before it. */
-export function historyRange({ from, to }: { from: string; to: string }): { from: string; to: string } {
-  return { from: addDays(from, -LOAD_HISTORY_DAYS), to };
-}
+type Through = { through: string; transaction?: Transaction };
 
 /** Today's local date in the team's time zone: the one place the load feature reads the clock. */
 export function teamToday({ timeZone, now }: { timeZone: string; now?: Date }): string {
@@ -134,7 +126,7 @@ type PackedBlock = [number, BlockKind, string, RunningPrescription | null, PlyoD
 // Each session's blocks come packed into one JSON text: the sqlite3 driver pays per value it hands over, and
 // this cut the squad read by about a quarter. The text is built only from integer ids, json_quote()d strings
 // and the JSON columns as Sequelize stored them, so it is always valid JSON.
-const SESSION_FILTER = "s.team_id = :teamId AND s.date BETWEEN :from AND :to AND (:everyone = 1 OR s.athlete_id IN (:athleteIds))";
+const SESSION_FILTER = "s.team_id = :teamId AND s.date <= :through AND (:everyone = 1 OR s.athlete_id IN (:athleteIds))";
 const SQL = {
   team: `SELECT t.time_zone, t.week_start_day, ${SETTINGS_SQL_COLUMNS}
     FROM teams t LEFT JOIN team_load_settings s ON s.team_id = t.id WHERE t.id = :teamId`,
@@ -154,10 +146,11 @@ function toBlocks(packed: string | null): BlockInput[] {
   return list.map(([id, kind, title, running, drills]) => ({ id: String(id), kind, title, running, drills }));
 }
 
-async function loadInputs({ teamId, athleteIds, from, to, transaction }: Range & { teamId: number; athleteIds?: readonly number[] }): Promise<LoadInputs> {
+/** The one reader of load inputs: every athlete of the team (or only `athleteIds`) with all sessions and logs up to `through`. */
+export async function getLoadSeriesInputs({ teamId, athleteIds, through, transaction }: Through & { teamId: number; athleteIds?: readonly number[] }): Promise<LoadInputs> {
   const { sequelize } = await db();
   // IN () is not SQL: an empty list becomes [0], which matches no row.
-  const replacements = { teamId, everyone: athleteIds ? 0 : 1, athleteIds: athleteIds && athleteIds.length > 0 ? [...athleteIds] : [0], from, to };
+  const replacements = { teamId, everyone: athleteIds ? 0 : 1, athleteIds: athleteIds && athleteIds.length > 0 ? [...athleteIds] : [0], through };
   const select = <T extends object>(sql: string) => sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements, transaction });
   // A constant three queries whatever the squad size: no query per athlete or per session.
   const [[team], athletes, sessions] = await Promise.all([select<TeamRow>(SQL.team), select<AthleteRow>(SQL.athletes), select<SessionRow>(SQL.sessions)]);
@@ -197,17 +190,12 @@ async function loadInputs({ teamId, athleteIds, from, to, transaction }: Range &
   return { teamId, settings, timeZone: team.time_zone, weekStartDay: engineWeekStartDay(team.week_start_day), athletes: list };
 }
 
-/** Every athlete of the team (or only `athleteIds`) with sessions (and blocks) and logs dated in [from, to], as engine inputs. */
-export async function getSquadLoadInputs({ teamId, athleteIds, from, to, transaction }: Range & { teamId: number; athleteIds?: readonly number[] }): Promise<LoadInputs> {
-  return loadInputs({ teamId, athleteIds, from, to, transaction });
-}
-
-/** One athlete's engine inputs for [from, to]; 404 when the athlete does not exist. */
-export async function getAthleteLoadInputs({ athleteId, from, to, transaction }: Range & { athleteId: number }): Promise<LoadInputs & { athlete: LoadAthleteInputs }> {
+/** One athlete's engine inputs (getLoadSeriesInputs for their team); 404 when the athlete does not exist. */
+export async function getAthleteLoadInputs({ athleteId, through, transaction }: Through & { athleteId: number }): Promise<LoadInputs & { athlete: LoadAthleteInputs }> {
   const { Athlete } = await db();
   const row = await Athlete.findByPk(athleteId, { attributes: ["teamId"], raw: true, transaction });
   if (!row) throw new AppError("not_found", "Not found");
-  const inputs = await loadInputs({ teamId: row.teamId, athleteIds: [athleteId], from, to, transaction });
+  const inputs = await getLoadSeriesInputs({ teamId: row.teamId, athleteIds: [athleteId], through, transaction });
   const athlete = inputs.athletes[0];
   if (!athlete) throw new AppError("not_found", "Not found");
   return { ...inputs, athlete };

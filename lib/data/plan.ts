@@ -10,7 +10,7 @@ import type { PlanAthlete, PlanGroup, PlanSession, PlanWeek, PlanWriteResult, We
 import { addDaysTo, isoWeekOf, teamWeekStart, weekDays } from "@/lib/plan/week";
 import { db } from "@/models";
 import { listGroups } from "./athletes";
-import { getSquadLoadInputs, historyRange } from "./load";
+import { getLoadSeriesInputs } from "./load";
 import { bumped, change, insertBlocks, loadById, loadSessions, notify, type Loaded } from "./plan-rows";
 import type { Override } from "./restriction-guard";
 import { listRestrictions } from "./restrictions";
@@ -41,7 +41,7 @@ export async function getPlanWeek({ teamId, date, today, audience }: { teamId: n
   if (own && audience.ownAthleteId === null) throw new AppError("not_found", "No athlete profile is linked to your account");
   const visible = (s: { status: string }) => !own || s.status !== "draft";
   const [inputs, groups, weekRows, templates, restrictions] = await Promise.all([
-    getSquadLoadInputs({ teamId, ...historyRange({ from: weekStart, to: weekEnd }) }),
+    getLoadSeriesInputs({ teamId, through: weekEnd }),
     listGroups({ teamId }),
     loadSessions({ teamId, date: { [Op.between]: [weekStart, weekEnd] }, ...(own ? { athleteId: audience.ownAthleteId! } : {}) }),
     own ? Promise.resolve([]) : listTemplates({ teamId }),
@@ -112,7 +112,7 @@ export async function withWeekRows({ teamId, today, result }: { teamId: number; 
   const rows: WeekRow[] = [];
   for (const [weekStart, ids] of weeks) {
     // A drop touches one or two athletes: read just their history, not the whole squad's.
-    const inputs = await getSquadLoadInputs({ teamId, athleteIds: [...ids], ...historyRange({ from: weekStart, to: addDaysTo(weekStart, 6) }) });
+    const inputs = await getLoadSeriesInputs({ teamId, athleteIds: [...ids], through: addDaysTo(weekStart, 6) });
     const squad = inputs.athletes;
     const computed = computeSquadWeek(
       squad.map((a) => ({ id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions: a.sessions, logs: a.logs, packed: packSessions(a.sessions, a.logs) })),

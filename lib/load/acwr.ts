@@ -4,7 +4,7 @@ export type EwmaSeed = "first" | "zero";
 
 export const ACUTE_DAYS = 7;
 export const CHRONIC_DAYS = 28;
-/** Ratios from fewer days of history than this are provisional (a design choice; no published rule, lib/load/README.md §6). */
+/** Ratios from fewer days on record than this are provisional (a design choice; no published rule, lib/load/README.md §6). */
 export const ACWR_MIN_HISTORY_DAYS = 28;
 
 /** λ = 2 / (N + 1), Williams et al. 2017, BJSM 51:209. */
@@ -99,6 +99,34 @@ export function acwrInto(
     chronic[i] = c;
     ratio[i] = c > 0 ? a / c : Number.NaN;
   }
+}
+
+/**
+ * The ACWR of a series that starts on the athlete's first day on record (`first`, an index into values):
+ * days before it have no ratio (acute and chronic 0), and the EWMA is seeded with day `first`'s load
+ * (lib/load/README.md §5–§6). null = nothing on record, so no ratio anywhere. Every caller goes through here,
+ * so a day's ratio never depends on how far back the caller's columns reach.
+ */
+export function acwrFromFirstDay(
+  values: Float64Array,
+  method: AcwrMethod,
+  out: AcwrColumns,
+  first: number | null,
+  prefix?: Float64Array,
+): void {
+  const n = values.length;
+  const from = first === null ? n : Math.max(0, Math.min(n, first));
+  out.acute.fill(0, 0, from);
+  out.chronic.fill(0, 0, from);
+  out.ratio.fill(Number.NaN, 0, from);
+  if (from === n) return;
+  acwrInto(
+    values.subarray(from),
+    method,
+    { acute: out.acute.subarray(from), chronic: out.chronic.subarray(from), ratio: out.ratio.subarray(from) },
+    "first",
+    prefix,
+  );
 }
 
 export interface AcwrOptions {

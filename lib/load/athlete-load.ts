@@ -1,8 +1,8 @@
-import { acwrInto, markProvisional, type AcwrColumns } from "./acwr";
+import { acwrFromFirstDay, markProvisional, type AcwrColumns } from "./acwr";
 import { resolveProfile, type ResolvedProfile } from "./accumulate";
 import { dateFromDayIndex, dayIndex, startOfWeek } from "./dates";
 import { computeFlags, type Flag } from "./flags";
-import { alignLogs, buildDailyColumns, effectiveSessions, sessionDayNumbers, type AlignedLogs, type DailyColumns } from "./series";
+import { alignLogs, buildDailyColumns, effectiveSessions, firstDayOnRecord, sessionDayNumbers, type AlignedLogs, type DailyColumns } from "./series";
 import {
   METRICS,
   type AthleteProfile,
@@ -17,9 +17,6 @@ import { metricRecord } from "./metric-record";
 import type { PackedSessions } from "./packed";
 import { summariseWeek, type WeekSummary } from "./week-summary";
 import { reserve, type EngineWorkspace } from "./workspace";
-
-/** Days of history before the range that the ACWR always sees (two chronic windows). */
-export const HISTORY_LEAD_DAYS = 56;
 
 export interface AthleteLoadInput {
   profile: AthleteProfile;
@@ -39,7 +36,7 @@ export interface AthleteLoadInput {
 export interface AthleteColumns extends DailyColumns {
   /** ACWR per metric with the team's method; ratio NaN = none. */
   acwr: Record<Metric, AcwrColumns>;
-  /** 1 while fewer than 28 days of history stand behind the day's ratio. */
+  /** 1 while fewer than 28 days on record stand behind the day's ratio. */
   provisional: Uint8Array;
   firstDate: string;
   /** Day number of each input session (same order), parsed once. */
@@ -55,7 +52,10 @@ export interface ColumnsRequest {
   logFor: AlignedLogs;
   view: LoadView;
   todayDay: number;
-  /** The series covers [min(earliest session, fromDay − 56), toDay]. */
+  /**
+   * The columns cover [min(first day on record, fromDay), toDay]; the series itself (EWMA seed, provisional
+   * count) starts on the first day on record, whatever fromDay is. The sessions must reach back to it.
+   */
   fromDay: number;
   toDay: number;
   /** packSessions(sessions, logs) when the caller has it (same sessions, same order). */
@@ -63,13 +63,14 @@ export interface ColumnsRequest {
 }
 
 /**
- * The columnar engine: daily values and ACWR for every metric from the athlete's first session. With a
- * workspace the columns are views into it (no allocation per athlete) and the next call overwrites them.
+ * The columnar engine: daily values and ACWR for every metric from the athlete's first day on record
+ * (lib/load/README.md §5). With a workspace the columns are views into it (no allocation per athlete) and the
+ * next call overwrites them.
  */
 export function computeAthleteColumns(req: ColumnsRequest, ws?: EngineWorkspace): AthleteColumns {
   const sessionDays = req.packed ? req.packed.day : sessionDayNumbers(req.sessions);
-  let startDay = req.fromDay - HISTORY_LEAD_DAYS;
-  for (let k = 0; k < sessionDays.length; k++) if (sessionDays[k] < startDay) startDay = sessionDays[k];
+  const first = firstDayOnRecord({ sessions: req.sessions, sessionDays, logFor: req.logFor, packed: req.packed }, req.view, req.todayDay, req.toDay);
+  const startDay = first === null ? req.fromDay : Math.min(first, req.fromDay);
   const n = Math.max(0, req.toDay - startDay + 1);
   const nm = METRICS.length;
   // Doubles: values (6n) | acute, chronic, ratio per metric (18n) | prefix sums (n + 1). Bytes: logged, missing, provisional.
@@ -99,7 +100,7 @@ export function computeAthleteColumns(req: ColumnsRequest, ws?: EngineWorkspace)
   METRICS.forEach((m, k) => {
     const at = (j: number) => f64.subarray((nm + 3 * k + j) * n, (nm + 3 * k + j + 1) * n);
     acwr[m] = { acute: at(0), chronic: at(1), ratio: at(2) };
-    acwrInto(cols.values[m], req.settings.acwrMethod, acwr[m], "first", prefix);
+    acwrFromFirstDay(cols.values[m], req.settings.acwrMethod, acwr[m], cols.firstDataIndex, prefix);
   });
   const provisional = u8.subarray(2 * n, 3 * n);
   markProvisional(provisional, cols.firstDataIndex);

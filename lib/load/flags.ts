@@ -63,31 +63,33 @@ const METHOD_WORDS: Record<AcwrMethod, string> = {
   rolling_uncoupled: "rolling, uncoupled",
 };
 
-const PROVISIONAL_NOTE = " Provisional: fewer than 28 days of training history stand behind this ratio.";
+const PROVISIONAL_NOTE = " Provisional: fewer than 28 days on record stand behind this ratio.";
 
 const KIND_ORDER: Record<FlagKind, number> = { spike: 0, rising: 1, low: 2, weekly_jump: 3, monotony: 4, plyo_volume: 5, recovery: 6 };
 
-function acwrFlag(input: FlagInput, from: number, to: number, first: number): Flag | null {
+type Peak = { index: number; value: number };
+
+/**
+ * The zone flag one peak earns; early (provisional) peaks earn at most a caution. "Underloaded" only where
+ * `mayBeLow`: a whole week of settled days and no missing log in it.
+ */
+function zoneFlag(input: FlagInput, peak: Peak, first: number, early: boolean, mayBeLow: boolean): Flag | null {
   const { settings } = input;
-  const peak = peakRatioIn(input.ratio, from, to);
-  if (!peak) return null;
-  const provisional = Boolean(input.provisional[peak.index]);
   const date = dateFromDayIndex(first + peak.index);
   const name = `ACWR (${METRIC_INFO[settings.acwrMetric].short}, ${METHOD_WORDS[settings.acwrMethod]})`;
   const r = formatRatio(peak.value);
   const on = formatDayLabel(date);
-  const note = provisional ? PROVISIONAL_NOTE : "";
-  const base = { date, metric: settings.acwrMetric, value: peak.value, provisional };
+  const note = early ? PROVISIONAL_NOTE : "";
+  const base = { date, metric: settings.acwrMetric, value: peak.value, provisional: early };
   // Zones after Gabbett 2016 (BJSM 50:273): 0.8–1.3 "sweet spot", ≥1.5 "danger zone"; "≥" is the paper's own.
   if (atOrAbove(peak.value, settings.spikeRatio)) {
-    const threshold = formatRatio(settings.spikeRatio);
     return {
       ...base,
       kind: "spike",
       // A spike on a short history says more about missing history than about the athlete: caution, not alert.
-      level: provisional ? "caution" : "alert",
+      level: early ? "caution" : "alert",
       threshold: settings.spikeRatio,
-      reason: `${name} ${r} on ${on} is at or above the spike threshold ${threshold}.${note}`,
+      reason: `${name} ${r} on ${on} is at or above the spike threshold ${formatRatio(settings.spikeRatio)}.${note}`,
     };
   }
   if (atOrAbove(peak.value, settings.risingRatio)) {
@@ -99,15 +101,15 @@ function acwrFlag(input: FlagInput, from: number, to: number, first: number): Fl
       reason: `${name} peaks at ${r} on ${on}, at or above the climbing threshold ${formatRatio(settings.risingRatio)} and below the spike threshold ${formatRatio(settings.spikeRatio)}.${note}`,
     };
   }
-  // A light week is never raised from missing logs alone: with unlogged sessions in the week the low ratio may
-  // just be the athlete not logging (lib/load/README.md, "Missing logs").
-  if (peak.value < settings.lowRatio - 1e-9 && !hasMissing(input, from, to)) {
+  // No "underloaded" from early days (a short history compares with almost nothing), from a part-week (its
+  // lightest days would decide it), or from missing logs alone (lib/load/README.md §7 and "Missing logs").
+  if (!early && mayBeLow && peak.value < settings.lowRatio - 1e-9) {
     return {
       ...base,
       kind: "low",
       level: "info",
       threshold: settings.lowRatio,
-      reason: `${name} stays below ${formatRatio(settings.lowRatio)} all week (highest ${r} on ${on}): this week is light compared with recent training.${note}`,
+      reason: `${name} stays below ${formatRatio(settings.lowRatio)} all week (highest ${r} on ${on}): this week is light compared with recent training.`,
     };
   }
   return null;
@@ -138,6 +140,31 @@ function monotonyFlag(input: FlagInput, w: number): Flag | null {
     threshold: limit,
     reason: `Training monotony (sRPE, Foster) is ${formatNumber(m, 2)} this week, above ${formatNumber(limit, 1)}: the days are too alike to recover between them. Weekly load ${formatNumber(load)} AU, strain ${formatNumber(strain)}.`,
   };
+}
+
+function anyProvisional(provisional: ArrayLike<number | boolean>, from: number, to: number): boolean {
+  for (let i = Math.max(0, from); i < to; i++) if (i >= provisional.length || provisional[i]) return true;
+  return from < 0;
+}
+
+/** Settled spike, early spike, settled climbing, early climbing, underloaded: the week shows the first that applies. */
+function zoneRank(f: Flag): number {
+  if (f.kind === "spike") return f.provisional ? 4 : 5;
+  if (f.kind === "rising") return f.provisional ? 2 : 3;
+  return 1;
+}
+
+/**
+ * The week's one ACWR zone flag (lib/load/README.md §7): the days with a full history behind them decide the
+ * zone (their highest ratio; a spike there is an alert); the early days are judged on their own and give at
+ * most a caution, shown only when it says more than the settled days do.
+ */
+function acwrFlag(input: FlagInput, from: number, to: number, first: number): Flag | null {
+  const settled = peakRatioIn(input.ratio, from, to, input.provisional, false);
+  const early = peakRatioIn(input.ratio, from, to, input.provisional, true);
+  const mayBeLow = early === null && !anyProvisional(input.provisional, from, to) && !hasMissing(input, from, to);
+  const candidates = [settled && zoneFlag(input, settled, first, false, mayBeLow), early && zoneFlag(input, early, first, true, false)].filter((f): f is Flag => Boolean(f));
+  return candidates.sort((a, b) => zoneRank(b) - zoneRank(a))[0] ?? null;
 }
 
 function jumpFlags(input: FlagInput, w: number): Flag[] {

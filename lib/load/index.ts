@@ -16,12 +16,12 @@
  * - "projected" = logged work + the plan from today on (drafts included, cancelled excluded).
  * - ACWR: EWMA (Williams 2017, λ = 2/(N+1), N = 7 and 28) seeded with the first day's load (pandas
  *   ewm(adjust=False)); rolling coupled = mean of 7 ÷ mean of 28 days (Hulin 2016); rolling uncoupled =
- *   mean of 7 ÷ mean of days t−27…t−7 (Lolli 2019, Gabbett 2019). History runs from the athlete's first session
- *   (at least 56 days before the range; days without sessions are 0). Ratios with < 28 days since the first
- *   session on record are provisional (a provisional spike is a caution, not an alert); chronic 0 → null.
+ *   mean of 7 ÷ mean of days t−27…t−7 (Lolli 2019, Gabbett 2019). One series per athlete × metric × view,
+ *   from the athlete's first day on record (nothing padded before it; days without sessions are 0), whatever
+ *   range the caller shows (README §5). Ratios with < 28 days on record are provisional; chronic 0 → null.
  * - Monotony = mean ÷ SD with the population SD by default (Foster 1998); SD 0 → null.
  * - Boundaries: ACWR ≥ spike (1.5) is a spike, [rising 1.3, spike) climbing, < low (0.8) underloaded, judged on
- *   the week's peak ratio (Gabbett 2016 zones); weekly change strictly > 15% is a jump (so exactly 15% passes),
+ *   the week's settled (non-provisional) days, early days giving at most a caution (Gabbett 2016 zones; README §7); weekly change strictly > 15% is a jump (so exactly 15% passes),
  *   checked on settings.jumpMetrics (default sRPE, HSR, near-max, contacts); contacts strictly above the NSCA
  *   band's top are an overload; high-intensity sessions (max-velocity block or high plyometrics) less than 48 h
  *   apart by wall clock are a short recovery (exactly 48 h passes). Comparisons allow 1e-9 of float noise.
@@ -100,7 +100,6 @@ export {
 export { summariseWeek, type WeekSummary } from "./week-summary";
 export {
   computeAthleteLoad,
-  HISTORY_LEAD_DAYS,
   type AthleteLoad,
   type AthleteLoadDay,
   type AthleteLoadInput,

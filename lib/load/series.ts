@@ -1,7 +1,7 @@
 import { ACC_SIZE, addAccToColumns, evaluateSessionInto, resolveProfile, type ResolvedProfile } from "./accumulate";
 import { alignLogs, type AlignedLogs } from "./align-logs";
 import { dateFromDayIndex, dayIndex, weekdayOfDay } from "./dates";
-import { addPackedToColumns, PACKED_ACC_SIZE, PACKED_CANCELLED, PACKED_STATUS, sumPackedSession, type PackedSessions } from "./packed";
+import { addPackedToColumns, PACKED_ACC_SIZE, PACKED_STATUS, sumPackedSession, type PackedSessions } from "./packed";
 import { toSessionMetrics, type SessionMetrics } from "./session-metrics";
 import {
   METRICS,
@@ -49,8 +49,32 @@ export interface DailyColumns {
   values: Record<Metric, Float64Array>;
   logged: Uint8Array;
   missing: Uint8Array;
-  /** Index of the first day holding any session on record (not cancelled, or logged); null when none. */
+  /** Index of the first day on record in the view (a session that is logged, planned or missing); null when none. */
   firstDataIndex: number | null;
+}
+
+/**
+ * The athlete's first day on record in the view, up to toDay: the first day holding a session that counts
+ * (logged, planned or missing; lib/load/README.md §5). The daily series starts here; null when none.
+ */
+export function firstDayOnRecord(
+  input: { sessions: readonly SessionInput[]; sessionDays: Int32Array; logFor: AlignedLogs; packed?: PackedSessions },
+  view: LoadView,
+  todayDay: number,
+  toDay: number,
+): number | null {
+  let first: number | null = null;
+  const p = input.packed;
+  const n = p ? p.day.length : input.sessions.length;
+  for (let k = 0; k < n; k++) {
+    const day = p ? p.day[k] : input.sessionDays[k];
+    if (day > toDay || (first !== null && day >= first)) continue;
+    const use = p
+      ? sessionUse(PACKED_STATUS[p.status[k]], p.hasLog[k] === 1, day, todayDay, view)
+      : sessionUse(input.sessions[k].status, input.logFor[k] !== undefined, day, todayDay, view);
+    if (use !== "none") first = day;
+  }
+  return first;
 }
 
 /** One Float64Array per metric (METRICS order), all views of one buffer (a zeroed `into` is used when given). */
@@ -112,9 +136,9 @@ export function buildDailyColumns(input: ColumnsInput): DailyColumns {
     if (i < 0 || i >= length) continue;
     const session = sessions[k];
     const log = logFor[k];
-    if ((log || session.status !== "cancelled") && (firstDataIndex === null || i < firstDataIndex)) firstDataIndex = i;
     const use = sessionUse(session.status, log !== undefined, days[k], todayDay, view);
     if (use === "none") continue;
+    if (firstDataIndex === null || i < firstDataIndex) firstDataIndex = i;
     if (use === "missing") {
       missing[i] = 1;
       // Missing logs (lib/load/README.md): by default the plan stands in as an estimate.
@@ -141,10 +165,9 @@ function packedIntoColumns(
     const i = day - startDay;
     if (i < 0 || i >= length) continue;
     const hasLog = p.hasLog[k] === 1;
-    const status = p.status[k];
-    if ((hasLog || status !== PACKED_CANCELLED) && (firstDataIndex === null || i < firstDataIndex)) firstDataIndex = i;
-    const use = sessionUse(PACKED_STATUS[status], hasLog, day, todayDay, view);
+    const use = sessionUse(PACKED_STATUS[p.status[k]], hasLog, day, todayDay, view);
     if (use === "none") continue;
+    if (firstDataIndex === null || i < firstDataIndex) firstDataIndex = i;
     if (use === "missing") {
       missing[i] = 1;
       if (!rp.estimateMissing) continue;
@@ -210,7 +233,7 @@ export interface DailySeries {
   logged: Uint8Array;
   /** 1 where a published session before today has no log: unknown, not a rest day (its plan stands in as an estimate, or 0 with the day left out). */
   missing: Uint8Array;
-  /** First day with a session on record (for acwrSeries' firstDataIndex); null when none. */
+  /** First day on record in the view (for acwrSeries' firstDataIndex); null when none. */
   firstDataIndex: number | null;
 }
 

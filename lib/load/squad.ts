@@ -6,7 +6,7 @@ import type { PackedSessions } from "./packed";
 import { alignLogs } from "./series";
 import { createWorkspace } from "./workspace";
 import type { AthleteProfile, LoadView, LogInput, Metric, SessionInput, TeamLoadSettings } from "./types";
-import { peakRatioIn, type WeekSummary } from "./week-summary";
+import { judgedPeak, type WeekSummary } from "./week-summary";
 
 export interface SquadAthleteInput {
   id: string;
@@ -24,7 +24,7 @@ export interface SquadWeekRow {
   name: string;
   group: string | null;
   week: WeekSummary;
-  /** Highest ACWR in the week for every metric (team method); week.peakRatio is the team metric's. */
+  /** The week's judged ACWR for every metric (judgedPeak, team method); week.peakRatio is the team metric's. */
   peakRatios: Record<Metric, number | null>;
   flags: Flag[];
   topLevel: FlagLevel | null;
@@ -57,7 +57,7 @@ export function computeSquadWeek(
     const cols = computeAthleteColumns(req, scratch);
     const { week, flags } = weekFromColumns(cols, req, ws);
     const w = ws - cols.startDay;
-    const peakRatios = metricRecord((m) => peakRatioIn(cols.acwr[m].ratio, w, w + 7)?.value ?? null);
+    const peakRatios = metricRecord((m) => judgedPeak(cols.acwr[m].ratio, cols.provisional, w, w + 7)?.value ?? null);
     return { id: a.id, name: a.name, group: a.group, week, peakRatios, flags, topLevel: topFlagLevel(flags) };
   });
 }

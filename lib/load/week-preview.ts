@@ -1,4 +1,4 @@
-import { acwrInto, allocAcwrColumns, markProvisional } from "./acwr";
+import { acwrFromFirstDay, allocAcwrColumns, markProvisional } from "./acwr";
 import { computeAthleteColumns } from "./athlete-load";
 import { resolveProfile } from "./accumulate";
 import { dateFromDayIndex, dayIndex } from "./dates";
@@ -28,7 +28,7 @@ export interface WeekPreviewInput {
   today: string;
   /** Default "projected": the planner shows the plan. */
   view?: LoadView;
-  /** First day with data on record (for "provisional"); defaults to historyDates[0]. */
+  /** The athlete's first day on record before the week (the series starts there); null or absent = none. */
   firstDataDate?: string | null;
   /** Sessions counted in the view shortly before the week, for the recovery-window check. */
   priorSessions?: readonly FlagSession[];
@@ -61,17 +61,13 @@ export function computeWeekPreview(input: WeekPreviewInput): { week: WeekSummary
   }
   const missing = new Uint8Array(length);
   missing.set(week.missing, offset);
-  // Index of the first day with data (negative when it predates the history sent); null = none at all.
-  let firstData: number | null = input.firstDataDate
-    ? dayIndex(input.firstDataDate) - historyStart
-    : input.historyDates.length > 0
-      ? 0
-      : null;
+  // Index of the first day on record (negative when it predates a shortened history); null = none at all.
+  let firstData: number | null = input.firstDataDate ? dayIndex(input.firstDataDate) - historyStart : null;
   if (week.firstDataIndex !== null && (firstData === null || offset + week.firstDataIndex < firstData)) {
     firstData = offset + week.firstDataIndex;
   }
   const acwr = allocAcwrColumns(length);
-  acwrInto(values[settings.acwrMetric], settings.acwrMethod, acwr, "first");
+  acwrFromFirstDay(values[settings.acwrMetric], settings.acwrMethod, acwr, firstData);
   const provisional = new Uint8Array(length);
   markProvisional(provisional, firstData);
   const firstDate = dateFromDayIndex(historyStart);
@@ -145,11 +141,8 @@ export function buildWeekPreviewContext(input: WeekPreviewContextInput): WeekPre
   for (let i = from; i < cols.length; i++) historyDates.push(dateFromDayIndex(cols.startDay + i));
   const historyValues = {} as Record<Metric, number[]>;
   for (const m of METRICS) historyValues[m] = Array.from(cols.values[m].subarray(from));
-  let firstDataDay = cols.firstDataIndex !== null ? cols.startDay + cols.firstDataIndex : Number.POSITIVE_INFINITY;
-  input.sessions.forEach((s, k) => {
-    const d = dayIndex(s.date);
-    if (d >= ws && d < firstDataDay && (logFor[k] !== undefined || s.status !== "cancelled")) firstDataDay = d;
-  });
+  // History only: the week's own first day on record comes from the sessions being previewed.
+  const firstDataDay = cols.firstDataIndex !== null ? cols.startDay + cols.firstDataIndex : null;
   const lookBack = Math.ceil(input.settings.recoveryHours / 24) + 1;
   const rp = resolveProfile(input.profile, input.settings);
   const priorSessions = effectiveSessions(input.sessions, logFor, rp, view, req.todayDay, ws - lookBack, ws - 1)
@@ -158,7 +151,7 @@ export function buildWeekPreviewContext(input: WeekPreviewContextInput): WeekPre
   return {
     historyDates,
     historyValues,
-    firstDataDate: Number.isFinite(firstDataDay) ? dateFromDayIndex(firstDataDay) : null,
+    firstDataDate: firstDataDay !== null ? dateFromDayIndex(firstDataDay) : null,
     priorSessions,
   };
 }

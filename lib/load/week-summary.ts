@@ -16,10 +16,13 @@ export interface WeekSummary {
   sdType: SdType;
   acwrMetric: Metric;
   acwrMethod: AcwrMethod;
-  /** Highest ACWR of acwrMetric in the week; null when no day has a ratio. */
+  /** The week's judged ACWR of acwrMetric (judgedPeak: non-provisional days first); null when no day has a ratio. */
   peakRatio: number | null;
   peakRatioDate: string | null;
   ratioProvisional: boolean;
+  /** The ACWR of acwrMetric on each day of the week (null = none) and whether it is provisional. */
+  dailyRatio: (number | null)[];
+  dailyProvisional: boolean[];
   /** Days of the week with a published session before today and no log. */
   missingDays: number;
 }
@@ -38,18 +41,40 @@ export function ratioAt(ratio: ArrayLike<number | null>, i: number): number | nu
   return typeof r === "number" && Number.isFinite(r) ? r : null;
 }
 
-/** Day of the highest ratio in [from, to); null when none of those days has a ratio. */
+/**
+ * Day of the highest ratio in [from, to); null when none of those days has a ratio. With `provisional` and
+ * `early`, only days whose provisional mark equals `early` are looked at.
+ */
 export function peakRatioIn(
   ratio: ArrayLike<number | null>,
   from: number,
   to: number,
+  provisional?: ArrayLike<number | boolean>,
+  early?: boolean,
 ): { index: number; value: number } | null {
   let best: { index: number; value: number } | null = null;
   for (let i = Math.max(0, from); i < Math.min(ratio.length, to); i++) {
+    if (provisional && Boolean(provisional[i]) !== early) continue;
     const r = ratioAt(ratio, i);
     if (r !== null && (best === null || r > best.value)) best = { index: i, value: r };
   }
   return best;
+}
+
+/**
+ * The week's ratio as judged (lib/load/README.md §7): the highest on the days with a full history behind
+ * them; only when the week has none of those, the highest early (provisional) one.
+ */
+export function judgedPeak(
+  ratio: ArrayLike<number | null>,
+  provisional: ArrayLike<number | boolean>,
+  from: number,
+  to: number,
+): { index: number; value: number; provisional: boolean } | null {
+  const settled = peakRatioIn(ratio, from, to, provisional, false);
+  if (settled) return { ...settled, provisional: false };
+  const early = peakRatioIn(ratio, from, to, provisional, true);
+  return early ? { ...early, provisional: true } : null;
 }
 
 export interface WeekSummaryInput {
@@ -72,7 +97,7 @@ export function summariseWeek(input: WeekSummaryInput): WeekSummary {
   const totals = metricRecord((m) => sumWindow(values[m], w, w + 7));
   const previousTotals = metricRecord((m) => sumWindow(values[m], w - 7, w));
   const mono = metricRecord((m) => monotonyOfWindow(values[m], w, 7, sdType));
-  const peak = peakRatioIn(ratio, w, w + 7);
+  const peak = judgedPeak(ratio, provisional, w, w + 7);
   return {
     weekStart: input.weekStart,
     weekEnd: dateFromDayIndex(dayIndex(input.weekStart) + 6),
@@ -90,7 +115,9 @@ export function summariseWeek(input: WeekSummaryInput): WeekSummary {
     acwrMethod: settings.acwrMethod,
     peakRatio: peak ? peak.value : null,
     peakRatioDate: peak ? dateFromDayIndex(dayIndex(input.firstDate) + peak.index) : null,
-    ratioProvisional: peak ? Boolean(provisional[peak.index]) : true,
+    ratioProvisional: peak ? peak.provisional : true,
+    dailyRatio: Array.from({ length: 7 }, (_, i) => (w + i >= 0 ? ratioAt(ratio, w + i) : null)),
+    dailyProvisional: Array.from({ length: 7 }, (_, i) => (w + i >= 0 && w + i < provisional.length ? Boolean(provisional[w + i]) : true)),
     missingDays: missing ? sumWindow(missing, w, w + 7) : 0,
   };
 }

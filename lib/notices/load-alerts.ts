@@ -2,11 +2,11 @@ import "server-only";
 import type { Transaction } from "sequelize";
 import { loadAlertEmail } from "@/emails/load-alert";
 import { syncWeekAlerts, type AlertCandidate } from "@/lib/data/alerts";
-import { getAthleteLoadInputs, historyRange, teamToday } from "@/lib/data/load";
+import { getAthleteLoadInputs, teamToday, type LoadAthleteInputs, type LoadInputs } from "@/lib/data/load";
 import { enqueueMail } from "@/lib/data/outbox";
 import { getNoticeTeam, listAlertRecipients } from "@/lib/data/notification-settings";
 import { appUrl } from "@/lib/env";
-import { addDays, computeAthleteLoad, startOfWeek, type Flag } from "@/lib/load";
+import { addDays, computeAthleteLoad, startOfWeek, type AthleteLoad, type Flag } from "@/lib/load";
 import type { AlertBasis, AlertKind } from "@/models/alert";
 import { toLoadAlertItem } from "./alert-display";
 
@@ -47,6 +47,25 @@ export function strongestByKind(flags: readonly Flag[], kinds: readonly AlertKin
   }));
 }
 
+/**
+ * The week an alert is judged on: the athlete's one daily series (whole history from getAthleteLoadInputs) on
+ * the projected view, so the figures in alerts and their e-mails are the figures every screen shows.
+ */
+export function alertWeekLoad({ inputs, weekStart, today }: { inputs: LoadInputs & { athlete: LoadAthleteInputs }; weekStart: string; today: string }): AthleteLoad {
+  return computeAthleteLoad({
+    profile: inputs.athlete.profile,
+    settings: inputs.settings,
+    sessions: inputs.athlete.sessions,
+    logs: inputs.athlete.logs,
+    from: weekStart,
+    to: addDays(weekStart, 6),
+    today,
+    view: "projected",
+    weekStart,
+    weekStartDay: inputs.weekStartDay,
+  });
+}
+
 export type EvaluateArgs = {
   transaction: Transaction;
   teamId: number;
@@ -68,8 +87,7 @@ export async function evaluateLoadAlerts(args: EvaluateArgs): Promise<number[]> 
   if (args.dates.length === 0) return [];
   const sorted = [...args.dates].sort();
   // Wide enough for any week start day: the week before the first date to two weeks after the last.
-  const range = historyRange({ from: addDays(sorted[0]!, -7), to: addDays(sorted.at(-1)!, 14) });
-  const inputs = await getAthleteLoadInputs({ athleteId, from: range.from, to: range.to, transaction });
+  const inputs = await getAthleteLoadInputs({ athleteId, through: addDays(sorted.at(-1)!, 14), transaction });
   const weekStartDay = inputs.weekStartDay;
   const weeks = new Map<string, Set<AlertKind>>();
   for (const w of new Set(sorted.map((d) => startOfWeek(d, weekStartDay)))) {
@@ -82,18 +100,7 @@ export async function evaluateLoadAlerts(args: EvaluateArgs): Promise<number[]> 
   const created: Array<{ id: number } & AlertCandidate> = [];
   for (const [weekStart, kindSet] of [...weeks.entries()].sort(([a], [b]) => a.localeCompare(b))) {
     const kinds = WEEK_KINDS.filter((k) => kindSet.has(k));
-    const load = computeAthleteLoad({
-      profile: inputs.athlete.profile,
-      settings: inputs.settings,
-      sessions: inputs.athlete.sessions,
-      logs: inputs.athlete.logs,
-      from: weekStart,
-      to: addDays(weekStart, 6),
-      today,
-      view: "projected",
-      weekStart,
-      weekStartDay,
-    });
+    const load = alertWeekLoad({ inputs, weekStart, today });
     const candidates = strongestByKind(load.flags, kinds);
     const fresh = await syncWeekAlerts({ transaction, teamId, athleteId, weekStart, basis: args.basis, kinds, candidates });
     created.push(...fresh);

@@ -36,6 +36,9 @@ export const squadLoadQuerySchema = z.object({
 });
 export type SquadLoadQuery = z.infer<typeof squadLoadQuerySchema>;
 
+/** A block of a proposed session; id is the saved block's, so reps logged against it still count. */
+export const previewBlockSchema = z.intersection(blockSchema, z.object({ id: idSchema.optional() }));
+
 /** A session as the planner holds it while dragging; id is the saved session's id when it already exists. */
 export const previewSessionSchema = z.object({
   id: z.union([idSchema, lineText().min(1).max(40)]).optional(),
@@ -44,7 +47,7 @@ export const previewSessionSchema = z.object({
   durationMin: z.number({ error: "Enter minutes" }).int("Whole minutes").min(5, "At least 5 min").max(300, "At most 300 min"),
   plannedRpe: z.number({ error: "Enter an RPE from 0 to 10" }).min(0, "CR-10: 0 to 10").max(10, "CR-10: 0 to 10"),
   status: z.enum(["draft", "published", "cancelled"], { error: "Choose draft, published or cancelled" }).default("draft"),
-  blocks: z.array(blockSchema).max(20, "At most 20 blocks"),
+  blocks: z.array(previewBlockSchema).max(20, "At most 20 blocks"),
 });
 export type PreviewSession = z.infer<typeof previewSessionSchema>;
 

@@ -92,6 +92,16 @@ describeBrowser("load screens", () => {
     await screenshot(page, "load-athlete");
   });
 
+  it("a flag's link opens its section of the explanation page, with the team's lines and the caution", async () => {
+    await page.getByTestId("flag-explain").first().click();
+    await page.waitForURL(/\/figures#/);
+    await page.getByRole("heading", { name: "How figures are worked out" }).waitFor();
+    expect(await page.getByTestId("figures-team-thresholds").textContent()).toContain("ratio at or above 1.50");
+    expect(await page.getByTestId("figures-acwr").textContent()).toContain("first day on record");
+    expect(await page.getByTestId("load-caution").count()).toBe(1);
+    await screenshot(page, "figures");
+  });
+
   it("lets an athlete open only their own load", async () => {
     const mayaPage = await browser.newPage({ viewport: { width: 390, height: 844 } });
     await signIn(mayaPage, app, maya.email!);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { getAthleteLoadInputs, getSquadLoadInputs, historyRange, teamToday } from "@/lib/data/load";
+import { getAthleteLoadInputs, getLoadSeriesInputs, teamToday } from "@/lib/data/load";
 import { getTeamLoadSettings, updateTeamLoadSettings } from "@/lib/data/team-settings";
 import { DEFAULT_TEAM_LOAD_SETTINGS } from "@/lib/load/types";
 import { setupTestDb } from "../helpers/db";
@@ -22,13 +22,13 @@ async function session(teamId: number, athleteId: number, date: string, status: 
 const s1 = await session(a.teamId, ada, "2026-11-02");
 const s2 = await session(a.teamId, ada, "2026-11-04", "draft");
 await session(a.teamId, ben, "2026-11-03");
-await session(a.teamId, ada, "2026-12-20"); // outside the range below
+await session(a.teamId, ada, "2026-12-20"); // after `through` below
 await session(b.teamId, bravoAda, "2026-11-02");
 await d.SessionLog.create({ sessionId: s1.s.id, athleteId: ada, completion: "partly", rpe: 7, minutes: 50, completedReps: { [String(s1.b0.id)]: 4 }, notes: null });
 
-describe("getSquadLoadInputs", () => {
+describe("getLoadSeriesInputs", () => {
   it("returns the team's athletes with their sessions, blocks in position order and logs, as engine inputs", async () => {
-    const inputs = await getSquadLoadInputs({ teamId: a.teamId, from: "2026-10-01", to: "2026-11-30" });
+    const inputs = await getLoadSeriesInputs({ teamId: a.teamId, through: "2026-11-30" });
     expect(inputs.timeZone).toBe("Europe/London");
     expect(inputs.weekStartDay).toBe(1);
     expect(inputs.settings).toEqual(DEFAULT_TEAM_LOAD_SETTINGS);
@@ -47,7 +47,7 @@ describe("getSquadLoadInputs", () => {
   });
 
   it("never includes another team's athletes or sessions", async () => {
-    const inputs = await getSquadLoadInputs({ teamId: b.teamId, from: "2026-10-01", to: "2026-11-30" });
+    const inputs = await getLoadSeriesInputs({ teamId: b.teamId, through: "2026-11-30" });
     expect(inputs.athletes.map((x) => x.id)).toEqual([bravoAda, b.users["ben@bravotrack.test"].athleteId]);
     expect(inputs.athletes[0].sessions).toHaveLength(1);
   });
@@ -58,7 +58,7 @@ describe("getSquadLoadInputs", () => {
     const before = opts.logging;
     opts.logging = () => void count++;
     try {
-      await getSquadLoadInputs({ teamId: a.teamId, from: "2026-01-01", to: "2026-12-31" });
+      await getLoadSeriesInputs({ teamId: a.teamId, through: "2026-12-31" });
     } finally {
       opts.logging = before;
     }
@@ -68,22 +68,25 @@ describe("getSquadLoadInputs", () => {
 
 describe("getAthleteLoadInputs", () => {
   it("returns one athlete, 404 for an unknown id", async () => {
-    const inputs = await getAthleteLoadInputs({ athleteId: ben, from: "2026-10-01", to: "2026-11-30" });
+    const inputs = await getAthleteLoadInputs({ athleteId: ben, through: "2026-11-30" });
     expect(inputs.athletes).toHaveLength(1);
     expect(inputs.athlete.sessions).toHaveLength(1);
-    await expect(getAthleteLoadInputs({ athleteId: 999999, from: "2026-10-01", to: "2026-11-30" })).rejects.toMatchObject({ status: 404 });
+    await expect(getAthleteLoadInputs({ athleteId: 999999, through: "2026-11-30" })).rejects.toMatchObject({ status: 404 });
   });
 });
 
-describe("teamToday and historyRange", () => {
+describe("teamToday and the history read", () => {
   it("reads today in the team's zone", () => {
     // 23:30 UTC on 31 Dec is already 1 Jan in Auckland (UTC+13 in summer) and still 31 Dec in London.
     const now = new Date("2026-12-31T23:30:00Z");
     expect(teamToday({ timeZone: "Europe/London", now })).toBe("2026-12-31");
     expect(teamToday({ timeZone: "Pacific/Auckland", now })).toBe("2027-01-01");
   });
-  it("loads 168 days of history before the range", () => {
-    expect(historyRange({ from: "2026-11-02", to: "2026-11-08" })).toEqual({ from: "2026-05-18", to: "2026-11-08" });
+  it("reads every session from the athlete's first, however old, up to `through` (lib/load/README.md §5)", async () => {
+    const old = await session(a.teamId, ben, "2024-01-15");
+    const inputs = await getAthleteLoadInputs({ athleteId: ben, through: "2026-11-30" });
+    expect(inputs.athlete.sessions.map((s) => s.date)).toEqual(["2024-01-15", "2026-11-03"]);
+    await old.s.destroy();
   });
 });
 

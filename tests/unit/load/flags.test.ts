@@ -66,7 +66,33 @@ describe("ACWR flags use the week's peak ratio", () => {
   it("a provisional spike is marked, explained and lowered to a caution", () => {
     const [f] = computeFlags(input({ peak: [3, 2.4], provisionalAll: true }));
     expect(f).toMatchObject({ kind: "spike", level: "caution", provisional: true });
-    expect(f.reason).toContain("Provisional: fewer than 28 days of training history");
+    expect(f.reason).toContain("Provisional: fewer than 28 days on record");
+  });
+
+  // Zones are judged on the days with a full history (lib/load/README.md §7); early days give their own caution.
+  it("a provisional peak does not hide a later settled spike: the settled day decides, as an alert", () => {
+    const t = input({ peak: [5, 2.96] });
+    const prov = t.provisional as Uint8Array;
+    prov.fill(1, 0, W + 6); // only Sunday has 28 days on record
+    (t.ratio as Float64Array)[W + 6] = 2.38;
+    const [f] = computeFlags(t);
+    expect(f).toMatchObject({ kind: "spike", level: "alert", provisional: false, value: 2.38, date: "2026-03-15" });
+  });
+
+  it("early days give a caution when the settled days say less, never an underloaded note", () => {
+    const t = input({ peak: [0, 1.7] });
+    const prov = t.provisional as Uint8Array;
+    prov.fill(1, 0, W + 3);
+    const [f] = computeFlags(t);
+    expect(f).toMatchObject({ kind: "spike", level: "caution", provisional: true, value: 1.7 });
+    const low = input({ provisionalAll: true });
+    (low.ratio as Float64Array).fill(0.4, W);
+    expect(computeFlags(low)).toEqual([]);
+    // Underloaded needs a whole week of settled days: a week whose only settled day is its Sunday gets none.
+    const part = input();
+    (part.ratio as Float64Array).fill(0.4, W);
+    (part.provisional as Uint8Array).fill(1, 0, W + 6);
+    expect(computeFlags(part)).toEqual([]);
   });
 
   it("names the method and metric in use", () => {
