@@ -71,7 +71,7 @@ export function LogFigures() {
       </p>
       <p>
         A published session in the past without a log is <strong>missing</strong>: it is marked wherever it shows, because it is unknown rather
-        than a rest day.
+        than a rest day. By default its plan stands in as an estimate; the team can choose to leave such days out instead.
       </p>
       <p>
         &quot;Logged only&quot; counts logged work up to today. &quot;Logged + plan&quot; adds the plan from today on (drafts included, cancelled

@@ -15,19 +15,26 @@ describe("EWMA constants (Williams et al. 2017, BJSM 51:209: λ = 2/(N+1); lib/l
   it("λ7 = 0.25 and λ28 = 2/29", () => {
     expect(ewmaLambda(7)).toBe(0.25);
     expect(ewmaLambda(28)).toBeCloseTo(0.0689655172, 10);
-    expect(1 - ewmaLambda(28)).toBeCloseTo(0.9310344828, 10);
   });
 
-  it("weights λ(1−λ)^k, half-lives and the weight of the last N days", () => {
-    const l7 = ewmaLambda(7);
-    const l28 = ewmaLambda(28);
-    expect([0, 1, 2].map((k) => l7 * (1 - l7) ** k)).toEqual([0.25, 0.1875, 0.140625]);
-    expect(l28 * (1 - l28)).toBeCloseTo(0.064209, 6);
-    expect(l28 * (1 - l28) ** 2).toBeCloseTo(0.059781, 6);
-    expect(Math.log(0.5) / Math.log(1 - l7)).toBeCloseTo(2.4094, 4);
-    expect(Math.log(0.5) / Math.log(1 - l28)).toBeCloseTo(9.6999, 4);
-    expect(1 - 0.75 ** 7).toBeCloseTo(0.866516, 6);
-    expect(1 - (27 / 29) ** 28).toBeCloseTo(0.86478, 6);
+  // Hand values [C]: weights λ(1−λ)^k are 0.068966, 0.064209, 0.059781 (chronic); the last N days carry
+  // 1 − 0.75^7 = 0.866516 (acute) and 1 − (27/29)^28 = 0.864780 (chronic) of a constant load; acute half-life 2.4094 d.
+  it("a chronic impulse decays with weights 0.068966, 0.064209, 0.059781", () => {
+    const e = ewma([100, 0, 0], 28, "zero");
+    expect(e[0]).toBeCloseTo(6.896552, 6);
+    expect(e[1]).toBeCloseTo(6.420927, 6);
+    expect(e[2]).toBeCloseTo(5.978105, 6);
+  });
+
+  it("from 0, seven days of 100 reach 86.6516 (acute) and 28 days reach 86.4780 (chronic)", () => {
+    expect(ewma(rep(100, 7), 7, "zero")[6]).toBeCloseTo(86.651611, 6);
+    expect(ewma(rep(100, 28), 28, "zero")[27]).toBeCloseTo(86.478, 3);
+  });
+
+  it("an acute impulse is above half after 2 days and below half after 3 (half-life 2.4094 d)", () => {
+    const e = ewma([100, 0, 0, 0], 7, "first");
+    expect(e[2]).toBeGreaterThan(50);
+    expect(e[3]).toBeLessThan(50);
   });
 
   it("an impulse on day 1 (seed 0) decays with exactly these weights", () => {

@@ -95,15 +95,12 @@ describe("HSR thresholds and %vmax (Bradley et al. 2009 bands [from memory]; lib
   it("H2: vmax 10, flying 30 m in 3.20 s = 93.75% vmax: ≥90% but not ≥95%", () => {
     const pct = percentOfVmax(averageSpeed(30, 3.2), 10);
     expect(pct).toBeCloseTo(93.75, 9);
-    expect(pct >= 90).toBe(true);
-    expect(pct >= 95).toBe(false);
   });
 
   it("H3: vmax 9.8, flying 20 m in 2.15 s = 9.302326 m/s = 94.92%, just under 95%", () => {
     expect(averageSpeed(20, 2.15)).toBeCloseTo(9.302326, 6);
     const pct = percentOfVmax(averageSpeed(20, 2.15), 9.8);
     expect(pct).toBeCloseTo(94.92, 2);
-    expect(pct >= 95).toBe(false);
   });
 
   it("H4: 95% of 10.0 m/s = 9.5 m/s = 34.2 km/h", () => {

@@ -18,7 +18,6 @@ describe("weeklyChangePct", () => {
   });
 
   it("absolute change 1000 → 2300 = +1300 AU, above Rogalski et al. 2013's 1250 AU (JSMS 16:499)", () => {
-    expect(2300 - 1000).toBeGreaterThan(1250);
     expect(weeklyChangePct(1000, 2300)).toBe(130);
   });
 });
@@ -37,10 +36,8 @@ describe("exceedsWeeklyLimit: strictly greater than the limit (pinned > not ≥)
   });
 
   it("float noise at the boundary does not flag: (0.1 + 0.2) × 50 is 15.000000000000002 in float64", () => {
-    expect((0.1 + 0.2) * 50).not.toBe(15);
     expect(exceedsWeeklyLimit((0.1 + 0.2) * 50, 15)).toBe(false);
     // The naive form (cur/prev − 1)·100 gives 10.000000000000009 for 1000 → 1100; weeklyChangePct multiplies first.
-    expect((1100 / 1000 - 1) * 100).not.toBe(10);
     expect(exceedsWeeklyLimit((1100 / 1000 - 1) * 100, 10)).toBe(false);
   });
 });
