@@ -1,5 +1,6 @@
 import "server-only";
 import { z } from "zod";
+import { BUSY_MESSAGE, isDatabaseBusy } from "@/lib/db/busy";
 import { AppError, type FieldErrors } from "@/lib/errors";
 import { zodFields } from "@/lib/http";
 
@@ -15,6 +16,7 @@ export async function runAction<T>(fn: () => Promise<T>): Promise<ActionResult<T
       return { ok: false, message: err.message, fields: err.fields };
     }
     if (err instanceof z.ZodError) return { ok: false, message: "Check the highlighted fields", fields: zodFields(err) };
+    if (isDatabaseBusy(err)) return { ok: false, message: BUSY_MESSAGE };
     // Next's redirect()/notFound() signals must pass through untouched.
     throw err;
   }

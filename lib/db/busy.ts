@@ -3,6 +3,8 @@ import { TimeoutError } from "sequelize";
 /** Seconds a client should wait before trying a write again when the database stayed locked. */
 export const RETRY_AFTER_S = 5;
 
+export const BUSY_MESSAGE = `The database is busy right now. Nothing was saved; try again in ${RETRY_AFTER_S} seconds.`;
+
 /** A write gave up waiting for SQLite's write lock (another process held it, or the queue stood still). */
 export class DatabaseBusyError extends Error {
   constructor(message = "The database is busy") {
@@ -22,7 +24,7 @@ export function isDatabaseBusy(err: unknown): boolean {
 /** 503 with Retry-After: the write did not happen and can simply be sent again. */
 export function busyResponse(): Response {
   return Response.json(
-    { error: { code: "busy", message: `The database is busy right now. Nothing was saved; try again in ${RETRY_AFTER_S} seconds.` } },
+    { error: { code: "busy", message: BUSY_MESSAGE } },
     { status: 503, headers: { "Retry-After": String(RETRY_AFTER_S) } },
   );
 }

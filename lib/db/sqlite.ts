@@ -71,6 +71,10 @@ export function queueWrites(sequelize: Sequelize, queue: WriteQueue): void {
     return transaction(async (t: Transaction) => query(sql, { ...options, transaction: t }));
   };
   Object.assign(sequelize, { transaction, query: queued });
+  // A BEGIN that gave up on the lock makes Sequelize "destroy" the connection through a pool the SQLite
+  // dialect never uses, which leaves it open; releasing closes it (the shared :memory: one is kept).
+  const connections = sequelize.connectionManager as unknown as { destroyConnection: (c: unknown) => Promise<void>; releaseConnection: (c: unknown) => void };
+  connections.destroyConnection = async (c) => connections.releaseConnection(c);
 }
 
 /** `sequelize.transaction()` without a callback (e.g. findOrCreate): the turn ends when it commits or rolls back. */

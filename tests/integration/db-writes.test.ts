@@ -5,6 +5,7 @@ import { QueryTypes, type Transaction } from "sequelize";
 import { describe, expect, it } from "vitest";
 import { BUSY_TIMEOUT_MS } from "@/lib/db/sqlite";
 import { databaseState } from "@/lib/db/health";
+import { runAction } from "@/lib/action-result";
 import { errorResponse } from "@/lib/http";
 import { createTestTeam } from "../helpers/fixtures";
 import { setupTestDb } from "../helpers/db";
@@ -52,8 +53,10 @@ describe("SQLite writes", () => {
     try {
       expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("busy");
       const started = Date.now();
-      const results = await Promise.allSettled(Array.from({ length: 5 }, (_, i) => newTemplate(`Blocked ${i}`)));
+      const [results, action] = await Promise.all([Promise.allSettled(Array.from({ length: 5 }, (_, i) => newTemplate(`Blocked ${i}`))), runAction(() => newTemplate("Blocked in a form"))]);
       const elapsed = Date.now() - started;
+      // A server action's form shows the same plain message instead of failing.
+      expect(action).toEqual({ ok: false, message: expect.stringMatching(/busy.*Nothing was saved/) });
       expect(results.every((r) => r.status === "rejected")).toBe(true);
       // One busy_timeout in all, not one per queued write (nor Sequelize's five retries of each).
       expect(elapsed).toBeGreaterThanOrEqual(BUSY_TIMEOUT_MS - 100);
@@ -69,6 +72,8 @@ describe("SQLite writes", () => {
       await new Promise((r) => other.close(r));
     }
     expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("ok");
+    // The connection of the transaction that never began is closed, not left open.
+    expect(Object.keys((d.sequelize.connectionManager as unknown as { connections: Record<string, unknown> }).connections)).toEqual(["default"]);
     await newTemplate("After the lock");
     expect(await d.BlockTemplate.count({ where: { teamId, title: "After the lock" } })).toBe(1);
     expect(await d.BlockTemplate.count({ where: { teamId, title: "Blocked 0" } })).toBe(0);
