@@ -15,12 +15,12 @@ export function RunningFigures({ settings }: { settings: TeamLoadSettings }) {
       <Formula>speed after t seconds = target × (1 − e^(−t ÷ τ)), τ = the athlete&apos;s acceleration time constant</Formula>
       <p>
         The metres after the runner passes a speed line count as metres at or above it. High-speed running (HSR) is everything at or above{" "}
-        {formatNumber(settings.hsrSpeedMs, 1)} m/s; near-max is everything at or above {formatNumber(settings.nearMaxPct)} % of the athlete&apos;s own
+        {settings.speedZones === "relative" ? `${formatNumber(settings.hsrPct)} % of the athlete's vmax` : `${formatNumber(settings.hsrSpeedMs, 1)} m/s`}; near-max is everything at or above {formatNumber(settings.nearMaxPct)} % of the athlete&apos;s own
         vmax. A line at or above the rep&apos;s target earns nothing. Example: vmax 10 m/s, τ 1 s, 2 × 3 × 30 m at 95 % from rest gives 163.7 m of HSR
         above 5.5 m/s and 66.2 m above 9.0 m/s.
       </p>
       <p>
-        Sprint metres are all metres of acceleration, max-velocity and speed-endurance blocks (tempo is not counted as sprinting). Sprint steps are
+        Sprint metres are all metres of acceleration, max-velocity and speed-endurance blocks (tempo is not counted as sprinting; a flying rep&apos;s run-in is a build-up, see below). Sprint steps are
         sprint metres divided by the athlete&apos;s step length, an estimate. An athlete without test results is worked out with vmax 9.0 m/s, τ 1.2 s
         and a 2.1 m step, and the screens say so.
       </p>
@@ -71,7 +71,7 @@ export function LogFigures() {
       </p>
       <p>
         A published session in the past without a log is <strong>missing</strong>: it is marked wherever it shows, because it is unknown rather
-        than a rest day. By default its plan stands in as an estimate; the team can choose to leave such days out instead.
+        than a rest day. By default its plan stands in as an estimate; the team can choose to leave such days out instead (below).
       </p>
       <p>
         &quot;Logged only&quot; counts logged work up to today. &quot;Logged + plan&quot; adds the plan from today on (drafts included, cancelled

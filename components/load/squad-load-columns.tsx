@@ -42,6 +42,12 @@ export const COLUMN_LABELS: Record<string, string> = {
   nearMaxM: "Near-max m",
   sprintSteps: "Sprint steps (est.)",
   contacts: "Plyo contacts",
+  weightedContacts: "Contacts by intensity",
+  absHsrM: "≥ HSR speed m",
+  absSprintM: "≥ sprint speed m",
+  relHsrM: "≥ HSR % m",
+  relNearMaxM: "≥ near-max % m",
+  relMaximalM: "≥ maximal % m",
   srpe: "sRPE (AU)",
   ratio: "ACWR",
   change: "Weekly change",
@@ -49,12 +55,20 @@ export const COLUMN_LABELS: Record<string, string> = {
 };
 
 /** Right-aligned numeric columns, and the one-line explanation shown on each header. */
-export const NUMERIC_COLUMNS = new Set(["hsrM", "nearMaxM", "sprintSteps", "contacts", "srpe", "ratio", "change"]);
+const BAND_COLUMNS = ["absHsrM", "absSprintM", "relHsrM", "relNearMaxM", "relMaximalM"] as const;
+type BandColumn = (typeof BAND_COLUMNS)[number];
+export const NUMERIC_COLUMNS = new Set(["hsrM", "nearMaxM", "sprintSteps", "contacts", "weightedContacts", ...BAND_COLUMNS, "srpe", "ratio", "change"]);
 export const COLUMN_HINTS: Record<string, string> = {
   hsrM: METRIC_INFO.hsrM.description,
   nearMaxM: METRIC_INFO.nearMaxM.description,
   sprintSteps: `${METRIC_INFO.sprintSteps.description} An estimate.`,
-  contacts: METRIC_INFO.contacts.description,
+  contacts: `${METRIC_INFO.contacts.description} Judged per session against the NSCA's off-season ranges.`,
+  weightedContacts: "The week's contacts weighted by intensity: low × 1, moderate × 2, high × 3.",
+  absHsrM: "Metres at or above the team's absolute HSR speed (5.5 m/s unless changed), the same for everyone.",
+  absSprintM: "Metres at or above the team's absolute sprint speed (7.0 m/s unless changed).",
+  relHsrM: "Metres at or above the team's relative HSR share of each athlete's own vmax (75% unless changed).",
+  relNearMaxM: "Metres at or above the near-max share of each athlete's own vmax (90% unless changed).",
+  relMaximalM: "Metres at or above the maximal share of each athlete's own vmax (95% unless changed).",
   srpe: METRIC_INFO.srpe.description,
   ratio: "Highest acute:chronic workload ratio of the team metric this week (team method).",
   change: "Change of the team metric against last week.",
@@ -62,6 +76,15 @@ export const COLUMN_HINTS: Record<string, string> = {
 
 function metricColumn(metric: Metric, id: keyof typeof COLUMN_LABELS) {
   return helper.accessor((r) => r.totals[metric], {
+    id,
+    header: COLUMN_LABELS[id],
+    sortDescFirst: true,
+    cell: (c) => <span className="tabular-nums">{formatNumber(c.getValue(), 0)}</span>,
+  });
+}
+
+function bandColumn(id: BandColumn) {
+  return helper.accessor((r) => r.bands[id], {
     id,
     header: COLUMN_LABELS[id],
     sortDescFirst: true,
@@ -112,6 +135,13 @@ export const squadColumns = helper.columns([
   metricColumn("nearMaxM", "nearMaxM"),
   metricColumn("sprintSteps", "sprintSteps"),
   metricColumn("contacts", "contacts"),
+  helper.accessor((r) => r.contactsByIntensity.weighted, {
+    id: "weightedContacts",
+    header: COLUMN_LABELS.weightedContacts,
+    sortDescFirst: true,
+    cell: (c) => <span className="tabular-nums">{formatNumber(c.getValue(), 0)}</span>,
+  }),
+  ...BAND_COLUMNS.map(bandColumn),
   metricColumn("srpe", "srpe"),
   helper.accessor((r) => r.changePct[r.acwrMetric] ?? undefined, {
     id: "change",
@@ -149,6 +179,14 @@ export function csvValue(row: SquadRow, columnId: string): string | number {
     }
     case "flags":
       return row.flags.map((f) => f.reason).join(" | ");
+    case "weightedContacts":
+      return Number(row.contactsByIntensity.weighted.toFixed(1));
+    case "absHsrM":
+    case "absSprintM":
+    case "relHsrM":
+    case "relNearMaxM":
+    case "relMaximalM":
+      return Number(row.bands[columnId].toFixed(1));
     default:
       return Number((row.totals[columnId as Metric] ?? 0).toFixed(1));
   }

@@ -15,6 +15,8 @@ import {
   type SessionInput,
   type TeamLoadSettings,
   type WeekSummary,
+  type SpeedBands,
+  type ContactsByIntensity,
 } from "@/lib/load";
 import { AppError } from "@/lib/errors";
 import type { LoadPreviewInput } from "@/lib/validations/load";
@@ -42,6 +44,9 @@ export type SquadWeekRowDto = {
   dailyProvisional: boolean[];
   peakRatios: Record<Metric, number | null>;
   missingDays: number;
+  /** Metres in the absolute and relative speed bands, and contacts by intensity (lib/load/README.md §11). */
+  bands: SpeedBands;
+  contactsByIntensity: ContactsByIntensity;
   flags: Flag[];
   topLevel: FlagLevel | null;
 };
@@ -104,6 +109,8 @@ export async function getSquadWeekLoad({ teamId, week, view, today, clock }: { t
         dailyProvisional: r.week.dailyProvisional,
         peakRatios: r.peakRatios,
         missingDays: r.week.missingDays,
+        bands: r.week.bands ?? { absHsrM: 0, absSprintM: 0, relHsrM: 0, relNearMaxM: 0, relMaximalM: 0 },
+        contactsByIntensity: r.week.contactsByIntensity ?? { low: 0, moderate: 0, high: 0, total: 0, weighted: 0 },
         flags: r.flags,
         topLevel: r.topLevel,
       };

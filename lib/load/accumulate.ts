@@ -48,7 +48,7 @@ export const BAND_NEAR = 3;
 const CLASS_CELLS = (GRID + 1) * BANDS;
 
 /**
- * τ multiplier per start (lib/load/README.md, "Starts and run-ins"): blocks 0.95 (a trained sprinter leaves
+ * τ multiplier per start (lib/load/README.md §11.2): blocks 0.95 (a trained sprinter leaves
  * blocks with more horizontal push: common practice, from memory); crouch and standing 1.0, the start τ is
  * fitted from (Salo & Bezodis 2004, Sports Biomech 3:43, found no speed difference between them by 10 m).
  * Start class 1 = blocks, 0 = everything else.

@@ -15,6 +15,7 @@ import {
 } from "./types";
 import { metricRecord } from "./metric-record";
 import type { PackedSessions } from "./packed";
+import { weekExtras } from "./week-extras";
 import { summariseWeek, type WeekSummary } from "./week-summary";
 import { reserve, type EngineWorkspace } from "./workspace";
 
@@ -148,7 +149,7 @@ export function weekFromColumns(
     settings: req.settings,
     weekStart,
   });
-  return { week, flags };
+  return { week: { ...week, ...weekExtras(sessions, weekStartDay) }, flags };
 }
 
 export interface AthleteLoadDay {

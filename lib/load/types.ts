@@ -157,7 +157,7 @@ export interface TeamLoadSettings {
   hsrSpeedMs: number;
   /** Near-max threshold as % of the athlete's vmax. */
   nearMaxPct: number;
-  /** Which HSR line drives hsrM and so the flags (lib/load/README.md, "Speed zones"). */
+  /** Which HSR line drives hsrM and so the flags (lib/load/README.md §11.1). */
   speedZones: SpeedZones;
   /** Relative HSR line, % of the athlete's vmax; drives hsrM when speedZones is "relative". */
   hsrPct: number;
@@ -247,7 +247,7 @@ export interface ContactsByIntensity {
   weighted: number;
 }
 
-/** Metres of running at or above each speed band (lib/load/README.md, "Speed zones"). */
+/** Metres of running at or above each speed band (lib/load/README.md §11.1). */
 export interface SpeedBands {
   /** ≥ hsrSpeedMs (5.5 m/s) and ≥ sprintSpeedMs (7.0 m/s). */
   absHsrM: number;

@@ -1,7 +1,7 @@
 import { dateFromDayIndex, dayIndex } from "./dates";
 import { DEFAULT_SD_TYPE, monotonyOfWindow, type SdType } from "./monotony";
 import { metricRecord } from "./metric-record";
-import type { AcwrMethod, Metric, MetricValues, TeamLoadSettings } from "./types";
+import type { AcwrMethod, ContactsByIntensity, Metric, MetricValues, SpeedBands, TeamLoadSettings } from "./types";
 import { weeklyChangePct } from "./weekly-change";
 
 export interface WeekSummary {
@@ -25,6 +25,9 @@ export interface WeekSummary {
   dailyProvisional: boolean[];
   /** Days of the week with a published session before today and no log. */
   missingDays: number;
+  /** Speed bands and contacts by intensity of the week's sessions (week-extras.ts), where the caller sums them. */
+  bands?: SpeedBands;
+  contactsByIntensity?: ContactsByIntensity;
 }
 
 /** Sum of col[from..to) with indices outside the array counting as 0 (no data there). */

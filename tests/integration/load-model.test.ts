@@ -3,7 +3,7 @@ import { addDays, startOfWeek } from "@/lib/load/dates";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
 
-// The sprint-specific modelling choices (lib/load/README.md) checked end to end through the route handlers, with
+// The sprint-specific modelling choices (lib/load/README.md §11) checked end to end through the route handlers, with
 // hand-computed values. Only next-auth's session lookup is replaced by "who is asking".
 const who: { userId: number | null } = { userId: null };
 vi.mock("next-auth", async (orig) => ({
@@ -92,6 +92,30 @@ describe("speed zones, starts and run-ins through GET /api/athletes/[id]/load", 
     expect((await t.days("hsrM", day, day))[0].value).toBeCloseTo(174.279945, 4);
     expect((await t.days("nearMaxM", day, day))[0].value).toBeCloseTo(131.129769, 4);
     expect((await t.days("sprintM", day, day))[0].value).toBe(120);
+  });
+});
+
+describe("the squad table shows absolute and relative bands and the week's contacts (GET /api/teams/[id]/load)", () => {
+  // Same rep as above (lib/load/README.md §11.1 check values): ≥ 5.5 m/s 163.695 m, ≥ 7.0 m/s 145.905 m, ≥ 75 % 136.186 m,
+  // ≥ 90 % 66.167 m, ≥ 95 % 0 m. Plyometrics P1 (§2): 20 low + 24 moderate + 24 high = 68 contacts, weighted
+  // 20 × 1 + 24 × 2 + 24 × 3 = 140 (§11.5).
+  it("gives every band next to the driving one, and weighted contacts next to the count", async () => {
+    const t = await team("Band Track");
+    const drills = [
+      { name: "pogo hops", sets: 2, reps: 10, contactsPerRep: 1, intensity: "low" },
+      { name: "box jumps", sets: 3, reps: 8, contactsPerRep: 1, intensity: "moderate" },
+      { name: "bounds", sets: 4, reps: 6, contactsPerRep: 1, intensity: "high" },
+    ];
+    await t.plan(addDays(lastWeek, 2), [{ kind: "acceleration", running: run({ sets: 2, reps: 3 }) }, { kind: "plyometric", drills }], { log: yes });
+    const { rows } = await t.squad(lastWeek);
+    const row = rows.find((r) => r.totals.contacts === 68) as unknown as { bands: Record<string, number>; contactsByIntensity: { total: number; weighted: number }; totals: Record<string, number> };
+    expect(row.bands.absHsrM).toBeCloseTo(163.695146, 4);
+    expect(row.bands.absSprintM).toBeCloseTo(145.904939, 4);
+    expect(row.bands.relHsrM).toBeCloseTo(136.185757, 4);
+    expect(row.bands.relNearMaxM).toBeCloseTo(66.166978, 4);
+    expect(row.bands.relMaximalM).toBe(0);
+    expect(row.totals.hsrM).toBeCloseTo(163.695146, 4);
+    expect(row.contactsByIntensity).toMatchObject({ total: 68, weighted: 140 });
   });
 });
 

@@ -1,4 +1,5 @@
 import { FigureSection } from "@/components/figures/figure-section";
+import { MissingLogFigures, MonotonyFlagFigures, PlyoDoseFigures, RecoveryWorkFigures, SpeedZoneFigures, StartFigures } from "@/components/figures/model-figures";
 import { AcwrFigures, ProvisionalFigures, SeriesFigures, ZoneFigures } from "@/components/figures/ratio-figures";
 import { TeamThresholds } from "@/components/figures/team-thresholds";
 import { ContactFigures, LogFigures, MonotonyFigures, RecoveryFigures, RunningFigures, SrpeFigures, WeeklyChangeFigures } from "@/components/figures/volume-figures";
@@ -30,12 +31,18 @@ export default async function FiguresPage() {
         <ProvisionalFigures />
         <ZoneFigures settings={settings} />
         <RunningFigures settings={settings} />
+        <SpeedZoneFigures settings={settings} />
+        <StartFigures />
         <ContactFigures />
+        <PlyoDoseFigures />
         <SrpeFigures />
         <LogFigures />
+        <MissingLogFigures settings={settings} />
         <WeeklyChangeFigures settings={settings} />
         <MonotonyFigures />
+        <MonotonyFlagFigures settings={settings} />
         <RecoveryFigures settings={settings} />
+        <RecoveryWorkFigures settings={settings} />
       </div>
     </>
   );

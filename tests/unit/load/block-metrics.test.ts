@@ -4,7 +4,7 @@ import { DEFAULT_STEP_LENGTH, DEFAULT_TAU, DEFAULT_VMAX } from "@/lib/load/types
 import { PROFILE, SETTINGS, drill, plyoBlock, runBlock } from "./fixtures";
 
 describe("running blocks", () => {
-  // Hand-computed (lib/load/README.md, "Sprint model"): a rep from rest towards target T = 95% × 10 = 9.5 m/s with
+  // Hand-computed (lib/load/README.md §1 B1): a rep from rest towards target T = 95% × 10 = 9.5 m/s with
   // τ = 1 s reaches speed s after t* = −τ·ln(1 − s/T) and x* = T·t* − τ·s metres (Furusawa, Hill & Parkinson 1927).
   // s = 5.5: t* = −ln(4/9.5) = 0.865098, x* = 2.717476 m, so 30 − x* = 27.282524 m a rep, × 6 reps = 163.695146 m.
   // s = 9.0: t* = −ln(0.5/9.5) = 2.944439, x* = 18.972170 m, so 11.027830 m a rep, × 6 = 66.166978 m.
@@ -17,7 +17,7 @@ describe("running blocks", () => {
     expect(m.contacts.total).toBe(0);
   });
 
-  // Blocks: τ × 0.95 (accumulate.ts BLOCKS_TAU_FACTOR, common practice / from memory). x* is proportional to τ, so
+  // Blocks: τ × 0.95 (lib/load/README.md §11.2, common practice / from memory). x* is proportional to τ, so
   // x*(5.5) = 0.95 × 2.717476 = 2.581602 m and x*(9.0) = 0.95 × 18.972170 = 18.023562 m:
   // HSR = 6 × (30 − 2.581602) = 164.510389 m; near-max = 6 × (30 − 18.023562) = 71.858629 m.
   it("a block start reaches each line sooner than a crouch start (τ × 0.95)", () => {
@@ -48,7 +48,7 @@ describe("running blocks", () => {
     expect(flying.nearMaxM).toBeCloseTo(131.129769, 5);
   });
 
-  // Relative zones (team setting speedZones "relative", hsrPct 75): the HSR line is 75% × 10 = 7.5 m/s.
+  // Relative zones (lib/load/README.md §11.1; team setting speedZones "relative", hsrPct 75): the HSR line is 75% × 10 = 7.5 m/s.
   // Same rep as above (T = 9.5, τ 1): t* = −ln(2/9.5) = 1.558145, x* = 9.5 × 1.558145 − 7.5 = 7.302375 m,
   // so 6 × (30 − 7.302375) = 136.185757 m. Absolute sprint band 7.0 m/s: t* = −ln(2.5/9.5) = 1.335001,
   // x* = 5.682508 m, 6 × 24.317492 = 145.904939 m. The ≥ 95% band is 0 (the model only approaches T = 9.5).

@@ -19,7 +19,7 @@ const series = (view: "actual" | "projected", settings = SETTINGS) =>
 const EXCLUDE = { ...SETTINGS, missingLogs: "exclude" as const };
 
 describe("dailySeries", () => {
-  // Missing logs (lib/load/README.md): the default counts the plan of an unlogged published past session as an
+  // Missing logs (lib/load/README.md §11.3): the default counts the plan of an unlogged published past session as an
   // estimate (b: planned RPE 5 × 60 min = 300 AU, Foster 2001) and marks the day; "exclude" leaves it at 0, marked.
   it("actual: only logged work up to today; a past published session without a log is missing, not a rest day", () => {
     const s = series("actual");
