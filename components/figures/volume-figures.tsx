@@ -65,8 +65,9 @@ export function LogFigures() {
   return (
     <FigureSection id="logs" title="Logs, missing days and what counts">
       <p>
-        A logged session counts as logged. &quot;Did it all&quot; counts the whole plan, &quot;did part of it&quot; half of every block unless the
-        reps of a block were logged (then reps done ÷ reps planned), &quot;didn&apos;t do it&quot; counts as a rest. The sRPE uses the logged RPE and
+        A logged session counts as logged. &quot;Did it all&quot; counts the whole plan, &quot;did part of it&quot; lets the athlete tick the blocks
+        done and the reps of each (pre-filled from the plan), which count as reps done ÷ reps planned; a log without that falls back to half of
+        every block, &quot;didn&apos;t do it&quot; counts as a rest. The sRPE uses the logged RPE and
         minutes; a blank falls back to the plan.
       </p>
       <p>

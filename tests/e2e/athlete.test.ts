@@ -85,6 +85,22 @@ describeBrowser("athlete journey", () => {
     await card.waitFor();
     const sessionId = Number(await card.getAttribute("data-session-id"));
     await card.getByTestId("log-completion-partly").check();
+    // "Did part of it": the blocks appear ticked with the planned reps; untick the first, do 1 rep of the second.
+    const blocks = card.getByTestId("log-block");
+    await blocks.first().waitFor();
+    const expected: Record<string, number> = {};
+    for (let i = 0; i < (await blocks.count()); i++) {
+      const b = blocks.nth(i);
+      expect(await b.getByTestId("log-block-done").isChecked()).toBe(true);
+      expected[(await b.getAttribute("data-block-id"))!] = Number(await b.getByTestId("log-block-reps").inputValue());
+    }
+    const ids = Object.keys(expected);
+    await blocks.first().getByTestId("log-block-done").uncheck();
+    expected[ids[0]] = 0;
+    if (ids.length > 1) {
+      await blocks.nth(1).getByTestId("log-block-reps").fill("1");
+      expected[ids[1]] = 1;
+    }
     await card.getByTestId("log-rpe").fill("11");
     await card.getByTestId("log-save").click();
     await card.getByText("CR-10: 0 to 10").waitFor(); // the zod message, before anything is sent
@@ -97,6 +113,8 @@ describeBrowser("athlete journey", () => {
     await card.screenshot({ path: "tests/e2e/artifacts/athlete-log-card.png" });
     const [log] = await app.query<{ completion: string; rpe: number; minutes: number; notes: string }>("SELECT completion, rpe, minutes, notes FROM session_logs WHERE session_id = ?", [sessionId]);
     expect(log).toEqual({ completion: "partly", rpe: 6.5, minutes: 55, notes: "Legs heavy after the third rep." });
+    const [{ completed_reps: reps }] = await app.query<{ completed_reps: string }>("SELECT completed_reps FROM session_logs WHERE session_id = ?", [sessionId]);
+    expect(JSON.parse(reps)).toEqual(expected);
     await page.reload();
     await page.locator(`[data-session-id="${sessionId}"]`).getByTestId("my-log-summary").waitFor();
     await page.close();

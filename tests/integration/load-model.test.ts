@@ -17,6 +17,7 @@ const { teamToday } = await import("@/lib/data/load");
 const athleteLoad = await import("@/app/api/athletes/[athleteId]/load/route");
 const squadLoad = await import("@/app/api/teams/[teamId]/load/route");
 const settingsRoute = await import("@/app/api/teams/[teamId]/settings/route");
+const logRoute = await import("@/app/api/sessions/[sessionId]/log/route");
 
 const today = teamToday({ timeZone: "Europe/London" });
 const lastWeek = addDays(startOfWeek(today, 1), -7);
@@ -57,7 +58,12 @@ async function team(name: string) {
     const res = await settingsRoute.PATCH(send(`/api/teams/${t.teamId}/settings`, "PATCH", body), p({ teamId: String(t.teamId) }));
     return { status: res.status, body: (await res.json()) as { settings?: Record<string, unknown>; error?: { fields?: Record<string, string[]> } } };
   }
-  return { ...t, ada, plan, days, squad, setSettings };
+  async function putLog(sessionId: number, body: unknown) {
+    who.userId = ada.userId;
+    const res = await logRoute.PUT(send(`/api/sessions/${sessionId}/log`, "PUT", body), p({ sessionId: String(sessionId) }));
+    return { status: res.status, body: (await res.json()) as { error?: { fields?: Record<string, string[]> } } };
+  }
+  return { ...t, ada, plan, days, squad, setSettings, putLog };
 }
 
 const yes = { completion: "yes" as const, rpe: 6, minutes: 60 };
@@ -116,6 +122,33 @@ describe("the squad table shows absolute and relative bands and the week's conta
     expect(row.bands.relMaximalM).toBe(0);
     expect(row.totals.hsrM).toBeCloseTo(163.695146, 4);
     expect(row.contactsByIntensity).toMatchObject({ total: 68, weighted: 140 });
+  });
+});
+
+describe("partial sessions by block (PUT /api/sessions/[id]/log, then GET the load)", () => {
+  // Accelerations 2 × 3 × 30 m at 95% (27.282524 m of HSR a rep, as above) and tempo 6 × 100 m at 70% (T = 7.0 m/s:
+  // t* = −ln(1.5/7) = 1.540445 s, x* = 7 × 1.540445 − 5.5 = 5.283115 m, so 94.716885 m a rep).
+  // "Did part of it" without blocks: half of each = 0.5 × (6 × 27.282524 + 6 × 94.716885) = 365.998227 m.
+  // Ticked: 4 of 6 accelerations, tempo skipped: 4 × 27.282524 = 109.130097 m.
+  it("counts the blocks and reps the athlete ticked instead of half of everything", async () => {
+    const t = await team("Part Track");
+    const day = addDays(today, -1);
+    const id = await t.plan(day, [
+      { kind: "acceleration", running: run({ sets: 2, reps: 3 }) },
+      { kind: "tempo", running: run({ reps: 6, distanceM: 100, intensityPct: 70, start: "standing", restSec: 60 }) },
+    ]);
+    const [accel, tempo] = await d.SessionBlock.findAll({ where: { sessionId: id }, order: [["position", "ASC"]] });
+    expect((await t.putLog(id, { completion: "partly", rpe: 6, minutes: 40 })).status).toBe(200);
+    expect((await t.days("hsrM", day, day))[0].value).toBeCloseTo(365.998227, 4);
+    const ticked = await t.putLog(id, { completion: "partly", rpe: 6, minutes: 40, completedReps: { [String(accel.id)]: 4, [String(tempo.id)]: 0 } });
+    expect(ticked.status).toBe(200);
+    expect((await t.days("hsrM", day, day))[0].value).toBeCloseTo(109.130097, 4);
+    // Sprint metres: 4 × 30 = 120 m (tempo is not sprinting); sRPE 6 × 40 = 240 AU (Foster 2001).
+    expect((await t.days("sprintM", day, day))[0].value).toBe(120);
+    expect((await t.days("srpe", day, day))[0].value).toBe(240);
+    const tooMany = await t.putLog(id, { completion: "partly", completedReps: { [String(accel.id)]: 13 } });
+    expect(tooMany.status).toBe(400);
+    expect(tooMany.body.error?.fields).toHaveProperty([`completedReps.${accel.id}`]);
   });
 });
 

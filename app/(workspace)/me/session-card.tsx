@@ -50,7 +50,7 @@ export function SessionCard({ session, today }: { session: AthleteSession; today
         </p>
       ) : null}
       {canLog ? (
-        <SessionLogForm sessionId={session.sessionId} plannedMinutes={session.durationMin} log={session.log} />
+        <SessionLogForm sessionId={session.sessionId} plannedMinutes={session.durationMin} blocks={session.blocks} log={session.log} />
       ) : !cancelled ? (
         <p className="mt-3 text-xs text-ink-500">You can log this session from {formatDayShort(session.date)}.</p>
       ) : null}

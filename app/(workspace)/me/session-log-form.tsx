@@ -8,29 +8,39 @@ import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Textarea } from "@/components/ui/field";
 import { ApiError, sendJson } from "@/components/notices/fetch-json";
+import type { BlockInput } from "@/lib/load/types";
 import { LOG_COMPLETIONS, sessionLogSchema, type SessionLogInput } from "@/lib/validations/log";
+import { BlockChecklist, completedRepsOf, initialDone, type BlockDone } from "./block-checklist";
 
 type FormValues = z.input<typeof sessionLogSchema>;
-type Log = { completion: SessionLogInput["completion"]; rpe: number | null; minutes: number | null; notes: string | null };
+type Log = { completion: SessionLogInput["completion"]; rpe: number | null; minutes: number | null; completedReps?: Record<string, number> | null; notes: string | null };
 
 const COMPLETION_LABEL: Record<(typeof LOG_COMPLETIONS)[number], string> = { yes: "Did it all", partly: "Did part of it", no: "Did not train" };
 const blankToNull = (v: unknown) => (v === "" || v === null || v === undefined ? null : Number(v));
 
-/** What the athlete did in one session: completion, session RPE (CR-10), minutes and a note. */
-export function SessionLogForm({ sessionId, plannedMinutes, log }: { sessionId: number; plannedMinutes: number; log: Log | null }) {
+/**
+ * What the athlete did in one session: completion, the blocks (and reps) done when only part of it was done,
+ * session RPE (CR-10), minutes and a note. Per-block reps replace the engine's "half of every block" default.
+ */
+export function SessionLogForm({ sessionId, plannedMinutes, blocks = [], log }: { sessionId: number; plannedMinutes: number; blocks?: readonly BlockInput[]; log: Log | null }) {
   const router = useRouter();
   const [saved, setSaved] = useState<string | null>(null);
+  const [done, setDone] = useState<Record<string, BlockDone>>(() => initialDone(blocks, log?.completedReps));
+  const [blockErrors, setBlockErrors] = useState<Record<string, string>>({});
   const { register, handleSubmit, setError, formState, control } = useForm<FormValues, unknown, SessionLogInput>({
     resolver: zodResolver(sessionLogSchema),
     defaultValues: { completion: log?.completion ?? "yes", rpe: log?.rpe ?? null, minutes: log?.minutes ?? plannedMinutes, completedReps: null, notes: log?.notes ?? null },
   });
   const errors = formState.errors;
-  const didNotTrain = useWatch({ control, name: "completion" }) === "no";
+  const completion = useWatch({ control, name: "completion" });
+  const didNotTrain = completion === "no";
   const id = (name: string) => `log-${sessionId}-${name}`;
 
   const submit = handleSubmit(async (values) => {
     setSaved(null);
-    const body: SessionLogInput = didNotTrain ? { ...values, rpe: values.rpe ?? 0, minutes: null } : values;
+    setBlockErrors({});
+    const partly = values.completion === "partly" ? { completedReps: completedRepsOf(done) } : { completedReps: null };
+    const body: SessionLogInput = didNotTrain ? { ...values, rpe: values.rpe ?? 0, minutes: null } : { ...values, ...partly };
     try {
       await sendJson(`/api/sessions/${sessionId}/log`, "PUT", body);
       setSaved("Saved. Thank you!");
@@ -40,6 +50,7 @@ export function SessionLogForm({ sessionId, plannedMinutes, log }: { sessionId: 
         for (const [field, messages] of Object.entries(err.fields)) {
           if (field === "completion" || field === "rpe" || field === "minutes" || field === "notes") setError(field, { message: messages[0] });
         }
+        setBlockErrors(Object.fromEntries(Object.entries(err.fields).filter(([f]) => f.startsWith("completedReps")).map(([f, m]) => [f, m[0]])));
         setSaved(err.message);
       } else setSaved("Could not save; check your connection and try again.");
     }
@@ -59,6 +70,7 @@ export function SessionLogForm({ sessionId, plannedMinutes, log }: { sessionId: 
         </div>
         {errors.completion ? <p role="alert" className="mt-1 text-xs font-medium text-flag-spike">{errors.completion.message}</p> : null}
       </fieldset>
+      {completion === "partly" ? <BlockChecklist sessionId={sessionId} blocks={blocks} done={done} onChange={setDone} errors={blockErrors} /> : null}
       {didNotTrain ? null : (
         <div className="grid grid-cols-2 gap-3">
           <Field label="Effort (RPE 0–10)" htmlFor={id("rpe")} error={errors.rpe?.message} hint="How hard the whole session felt, about 30 min after.">
