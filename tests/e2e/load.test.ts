@@ -59,7 +59,7 @@ describeBrowser("load screens", () => {
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("export-csv").click()]);
     const csv = await (await download.createReadStream()).toArray().then((chunks) => Buffer.concat(chunks).toString("utf8"));
     const lines = csv.trim().split(/\r?\n/);
-    expect(lines[0]).toBe("Athlete,ACWR,Flags,HSR m,Near-max m,Sprint steps (est.),Plyo contacts,sRPE (AU),Weekly change");
+    expect(lines[0]).toBe("Athlete,ACWR,Flags,HSR m,Near-max m,Sprint steps (est.),Plyo contacts,Contacts by intensity,≥ HSR speed m,≥ sprint speed m,≥ HSR % m,≥ near-max % m,≥ maximal % m,sRPE (AU),Weekly change");
     expect(lines).toHaveLength(DEMO_ATHLETES.length + 1);
     await page.getByTestId("choose-columns").click();
     await page.getByRole("checkbox", { name: "Group" }).check();
