@@ -13,6 +13,7 @@ import {
   type SessionInput,
   type TeamLoadSettings,
 } from "./types";
+import { weekExtras } from "./week-extras";
 import { summariseWeek, type WeekSummary } from "./week-summary";
 
 export interface WeekPreviewInput {
@@ -80,10 +81,8 @@ export function computeWeekPreview(input: WeekPreviewInput): { week: WeekSummary
     settings,
     weekStart: input.weekStart,
   });
-  const sessions: FlagSession[] = [
-    ...(input.priorSessions ?? []),
-    ...effectiveSessions(input.weekSessions, logFor, rp, view, todayDay, ws, ws + 6),
-  ];
+  const weekSessions = effectiveSessions(input.weekSessions, logFor, rp, view, todayDay, ws, ws + 6);
+  const sessions: FlagSession[] = [...(input.priorSessions ?? []), ...weekSessions];
   const flags = computeFlags({
     firstDate,
     values,
@@ -95,7 +94,7 @@ export function computeWeekPreview(input: WeekPreviewInput): { week: WeekSummary
     settings,
     weekStart: input.weekStart,
   });
-  return { week: summary, flags };
+  return { week: { ...summary, ...weekExtras(weekSessions, ws) }, flags };
 }
 
 export interface WeekPreviewContextInput {
