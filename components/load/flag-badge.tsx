@@ -1,4 +1,6 @@
 import { clsx } from "clsx";
+import Link from "next/link";
+import { FLAG_TOPIC, figuresHref } from "@/lib/load/figures-link";
 import { FLAG_DISPLAY, flagClasses } from "@/lib/load/flag-display";
 import type { Flag, FlagKind } from "@/lib/load/flags";
 
@@ -38,7 +40,10 @@ export function FlagBadges({ flags, empty = "Steady" }: { flags: readonly Flag[]
   return (
     <span className="flex flex-wrap gap-1">
       {flagKinds(flags).map((k) => (
-        <FlagBadge key={k.kind} kind={k.kind} count={k.count} provisional={k.provisional} />
+        // Each badge opens its section of "How figures are worked out".
+        <Link key={k.kind} href={figuresHref(k.provisional ? "provisional" : FLAG_TOPIC[k.kind])}>
+          <FlagBadge kind={k.kind} count={k.count} provisional={k.provisional} />
+        </Link>
       ))}
     </span>
   );
