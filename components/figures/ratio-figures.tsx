@@ -9,8 +9,9 @@ export function SeriesFigures() {
     <FigureSection id="series" title="One daily series per athlete">
       <p>
         Every figure about an athlete (the squad table, the week plan, the athlete&apos;s page, the alerts and their e-mails) is read from the same
-        day-by-day series. It starts on the athlete&apos;s first day on record (the first session that was not cancelled, or any logged one) and has
-        one value per day; days without a session are 0. So a ratio for a given day is the same on every screen.
+        day-by-day series. It starts on the athlete&apos;s first day on record (the first logged session, published session without a log, or
+        session planned from today on) and has one value per day; days without a session are 0. Nothing before that day is counted as rest,
+        and a ratio for a given day is the same on every screen.
       </p>
     </FigureSection>
   );

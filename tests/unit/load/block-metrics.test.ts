@@ -6,7 +6,7 @@ import { PROFILE, SETTINGS, drill, plyoBlock, runBlock } from "./fixtures";
 describe("running blocks", () => {
   // Hand-computed (lib/load/README.md §1 B1): a rep from rest towards target T = 95% × 10 = 9.5 m/s with
   // τ = 1 s reaches speed s after t* = −τ·ln(1 − s/T) and x* = T·t* − τ·s metres (Furusawa, Hill & Parkinson 1927).
-  // s = 5.5: t* = −ln(4/9.5) = 0.865098, x* = 2.717476 m, so 30 − x* = 27.282524 m a rep, × 6 reps = 163.695146 m.
+  // s = 5.5: t* = −ln(4/9.5) = 0.864997, x* = 2.717476 m, so 30 − x* = 27.282524 m a rep, × 6 reps = 163.695146 m.
   // s = 9.0: t* = −ln(0.5/9.5) = 2.944439, x* = 18.972170 m, so 11.027830 m a rep, × 6 = 66.166978 m.
   it("2 × 3 × 30 m at 95% from a crouch (vmax 10, τ 1): HSR 163.695 m above 5.5 m/s, 66.167 m above 9.0 m/s", () => {
     const m = blockMetrics(runBlock("acceleration", { sets: 2, reps: 3, distanceM: 30, intensityPct: 95 }), PROFILE, SETTINGS);
