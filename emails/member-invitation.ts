@@ -11,6 +11,8 @@ export interface MemberInvitationEmailInput {
   expiresAt: Date;
   /** Zone used to show the expiry time (the team's zone). */
   timeZone?: string;
+  /** The address has an account already: its owner signs in to accept (no new password). */
+  existingAccount?: boolean;
 }
 
 function withArticle(word: string): string {
@@ -31,6 +33,9 @@ export function memberInvitationEmail(input: MemberInvitationEmailInput): Render
         kind: "paragraph",
         text: `${input.inviterName} invited you to join ${input.teamName} on Sprintwright as ${withArticle(role)}.`,
       },
+      ...(input.existingAccount
+        ? [{ kind: "paragraph" as const, text: "You already have a Sprintwright account with this address: sign in with it to accept. Nothing is shared with the team until you do." }]
+        : []),
       { kind: "button", label: "Accept the invitation", url: input.acceptUrl },
       { kind: "paragraph", text: `The link works until ${expires}. After that, ask ${input.inviterName} for a new one.` },
       { kind: "paragraph", text: "If you did not expect this invitation, you can ignore this e-mail." },

@@ -10,7 +10,7 @@ import { ROLES, ROLE_LABEL } from "@/lib/auth/roles";
 import { addMemberSchema, type AddMemberFormValues, type AddMemberInput } from "@/lib/validations/members";
 
 export function AddMemberForm({ unlinkedAthletes }: { unlinkedAthletes: { id: number; name: string }[] }) {
-  const [message, setMessage] = useState<{ tone: "error" | "ok"; text: string; link?: string | null }>();
+  const [message, setMessage] = useState<{ tone: "error" | "ok"; text: string }>();
   const { register, handleSubmit, control, reset, setError, formState } = useForm<AddMemberFormValues, unknown, AddMemberInput>({
     resolver: zodResolver(addMemberSchema),
     defaultValues: { name: "", email: "", role: "coach" },
@@ -30,12 +30,7 @@ export function AddMemberForm({ unlinkedAthletes }: { unlinkedAthletes: { id: nu
     reset({ name: "", email: "", role: values.role });
     setMessage({
       tone: "ok",
-      text: !result.data.invited
-        ? `Added ${values.name}; they already have a password.`
-        : result.data.inviteUrl
-          ? `Added ${values.name} and e-mailed them a one-time link to set a password (valid 7 days). Mail stays on this machine, so here it is:`
-          : `Added ${values.name} and e-mailed them a one-time link to set a password (valid 7 days).`,
-      link: result.data.inviteUrl,
+      text: `Invitation sent to ${result.data.email} (the link works for 7 days). They join the club when they accept it.`,
     });
   });
 
@@ -72,15 +67,10 @@ export function AddMemberForm({ unlinkedAthletes }: { unlinkedAthletes: { id: nu
       {message ? (
         <div role={message.tone === "error" ? "alert" : "status"} data-testid="add-member-message" className={message.tone === "error" ? "rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike" : "rounded-lg bg-lane-50 px-3 py-2 text-sm text-lane-800"}>
           <p>{message.text}</p>
-          {message.link ? (
-            <p className="mt-1 break-all font-mono text-xs" data-testid="invite-link">
-              {message.link}
-            </p>
-          ) : null}
         </div>
       ) : null}
       <Button type="submit" className="w-full" disabled={isSubmitting}>
-        {isSubmitting ? "Adding…" : "Add member"}
+        {isSubmitting ? "Sending…" : "Send invitation"}
       </Button>
     </form>
   );

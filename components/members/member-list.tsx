@@ -2,13 +2,12 @@
 
 import { useState, useTransition } from "react";
 import { changeRoleAction, removeMemberAction } from "@/app/(workspace)/members/actions";
-import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { Select } from "@/components/ui/field";
 import { ROLES, ROLE_LABEL, type Role } from "@/lib/auth/roles";
 
-type Member = { membershipId: number; userId: number; name: string; email: string; role: Role; status: "active" | "invited" };
+type Member = { membershipId: number; userId: number; name: string; email: string; role: Role };
 
 export function MemberList({ members, viewerUserId }: { members: Member[]; viewerUserId: number }) {
   const [error, setError] = useState<string>();
@@ -33,7 +32,7 @@ export function MemberList({ members, viewerUserId }: { members: Member[]; viewe
           <li key={m.membershipId} className="flex flex-col gap-3 px-4 py-3 sm:flex-row sm:items-center sm:justify-between" data-testid="member-row">
             <div className="min-w-0">
               <p className="truncate font-medium text-ink-900">
-                {m.name} {m.status === "invited" ? <Badge tone="climb">invited</Badge> : null}
+                {m.name}
               </p>
               <p className="truncate text-sm text-ink-500">{m.email}</p>
             </div>

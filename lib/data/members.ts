@@ -1,12 +1,13 @@
 import "server-only";
 import { Op } from "sequelize";
 import { AppError } from "@/lib/errors";
-import { hashToken, newToken } from "@/lib/auth/tokens";
+import { newToken } from "@/lib/auth/tokens";
 import type { Role } from "@/lib/auth/roles";
 import type { AddMemberInput } from "@/lib/validations/members";
 import { db } from "@/models";
 import { memberInvitationEmail } from "@/emails/member-invitation";
 import { appUrl } from "@/lib/env";
+import { grantMembership, openInvitationByToken, spendTeamInvitations } from "./invitations";
 import { enqueueMail } from "./outbox";
 import { hashPassword } from "./users";
 
@@ -19,79 +20,83 @@ export type MemberRow = {
   email: string;
   role: Role;
   athleteId: number | null;
-  status: "active" | "invited";
 };
 
+/** Members who accepted (invitations are listed apart, by the address the team typed: listInvitations). */
 export async function listMembers({ teamId }: { teamId: number }): Promise<MemberRow[]> {
   const { Membership, User, Athlete } = await db();
   const rows = await Membership.findAll({
     where: { teamId },
     attributes: ["id", "userId", "role"],
-    include: [{ model: User, as: "user", attributes: ["id", "name", "email", "passwordHash"] }],
+    include: [{ model: User, as: "user", attributes: ["id", "name", "email"] }],
     order: [["role", "ASC"], ["id", "ASC"]],
   });
   const athletes = await Athlete.findAll({ where: { teamId, userId: { [Op.ne]: null } }, attributes: ["id", "userId"] });
   return rows.map((m) => {
-    const user = (m as unknown as { user: { id: number; name: string; email: string; passwordHash: string | null } }).user;
-    return {
-      membershipId: m.id,
-      userId: user.id,
-      name: user.name,
-      email: user.email,
-      role: m.role,
-      athleteId: athletes.find((a) => a.userId === user.id)?.id ?? null,
-      // The hash itself never leaves this function; only whether one is set.
-      status: user.passwordHash ? "active" : "invited",
-    };
+    const user = (m as unknown as { user: { id: number; name: string; email: string } }).user;
+    return { membershipId: m.id, userId: user.id, name: user.name, email: user.email, role: m.role, athleteId: athletes.find((a) => a.userId === user.id)?.id ?? null };
   });
 }
 
 /**
- * Adds a member, creating the user account if needed. A new account also gets a one-time link for setting a
- * password, e-mailed through the outbox in the same transaction; the token is returned too (development shows it).
+ * Invites someone to the team: an invitation e-mailed through the outbox in the same transaction, never a
+ * membership. The membership exists only once the invitee accepts (a new account by choosing a password, an
+ * existing one by its signed-in owner), so until then the team sees only the address it typed and the account
+ * gets none of the team's data. The answer is the same whether or not the address has an account. For an
+ * athlete the team's profile is prepared now (typed name or an unlinked profile) and linked on acceptance.
+ * The token is returned for tests; the action never passes it on.
  */
-export async function addMember({ teamId, input, invitedBy }: { teamId: number; input: AddMemberInput; invitedBy?: number }) {
+export async function addMember({ teamId, input, invitedBy, now = new Date() }: { teamId: number; input: AddMemberInput; invitedBy?: number; now?: Date }) {
   const { sequelize, User, Membership, Athlete, Invitation, Team } = await db();
   return sequelize.transaction(async (transaction) => {
     const [user] = await User.findOrCreate({
       where: { email: input.email },
       defaults: { email: input.email, name: input.name, passwordHash: null },
+      attributes: ["id", "email", "passwordHash"],
       transaction,
     });
-    const existing = await Membership.findOne({ where: { teamId, userId: user.id }, transaction });
+    const existing = await Membership.findOne({ where: { teamId, userId: user.id }, attributes: ["id"], transaction });
     if (existing) throw new AppError("conflict", "This person is already a member", { fields: { email: ["Already a member of this team"] } });
-    const membership = await Membership.create({ teamId, userId: user.id, role: input.role }, { transaction });
 
     let athleteId: number | null = null;
     if (input.role === "athlete") {
       if (input.athleteId) {
-        const athlete = await Athlete.findOne({ where: { id: input.athleteId, teamId }, transaction });
+        const athlete = await Athlete.findOne({ where: { id: input.athleteId, teamId }, attributes: ["id", "userId"], transaction });
         if (!athlete) throw new AppError("invalid", "Choose an athlete of this team", { fields: { athleteId: ["Unknown athlete"] } });
         if (athlete.userId) throw new AppError("conflict", "That athlete already has an account", { fields: { athleteId: ["Already linked"] } });
-        await athlete.update({ userId: user.id }, { transaction });
         athleteId = athlete.id;
       } else {
-        athleteId = (await Athlete.create({ teamId, userId: user.id, name: input.name, groupId: null, sex: null, birthDate: null, bodyMassKg: null, vmaxMs: null, vmaxTestedOn: null, tauS: null, stepLengthM: null }, { transaction })).id;
+        athleteId = (await Athlete.create({ teamId, userId: null, name: input.name, groupId: null, sex: null, birthDate: null, bodyMassKg: null, vmaxMs: null, vmaxTestedOn: null, tauS: null, stepLengthM: null }, { transaction })).id;
       }
     }
 
-    let inviteToken: string | null = null;
-    if (!user.passwordHash) {
-      const { token, hash } = newToken();
-      const expiresAt = new Date(Date.now() + INVITE_DAYS * 86_400_000);
-      await Invitation.create({ teamId, userId: user.id, purpose: "invite", tokenHash: hash, expiresAt, usedAt: null }, { transaction });
-      inviteToken = token;
-      const team = await Team.findByPk(teamId, { attributes: ["name", "timeZone"], transaction });
-      const inviterName = await inviterNameFor({ teamId, invitedBy, transaction });
-      await enqueueMail({
-        transaction,
-        teamId,
-        kind: "invitation",
-        to: user.email,
-        mail: memberInvitationEmail({ inviteeName: user.name, teamName: team?.name ?? "your team", role: input.role, inviterName, acceptUrl: `${appUrl()}/invite/${token}`, expiresAt, timeZone: team?.timeZone }),
-      });
-    }
-    return { membershipId: membership.id, userId: user.id, athleteId, inviteToken };
+    // A new invitation replaces any earlier one to the same account (sending again after it expired, say).
+    await spendTeamInvitations({ teamId, userId: user.id, transaction, now });
+    const { token, hash } = newToken();
+    const expiresAt = new Date(now.getTime() + INVITE_DAYS * 86_400_000);
+    const invitation = await Invitation.create(
+      { teamId, userId: user.id, purpose: "invite", email: input.email, name: input.name, role: input.role, athleteId, tokenHash: hash, expiresAt, usedAt: null },
+      { transaction },
+    );
+    const team = await Team.findByPk(teamId, { attributes: ["name", "timeZone"], transaction });
+    const inviterName = await inviterNameFor({ teamId, invitedBy, transaction });
+    await enqueueMail({
+      transaction,
+      teamId,
+      kind: "invitation",
+      to: input.email,
+      mail: memberInvitationEmail({
+        inviteeName: input.name,
+        teamName: team?.name ?? "your team",
+        role: input.role,
+        inviterName,
+        acceptUrl: `${appUrl()}/invite/${token}`,
+        expiresAt,
+        timeZone: team?.timeZone,
+        existingAccount: user.passwordHash !== null,
+      }),
+    });
+    return { invitationId: invitation.id, userId: user.id, athleteId, inviteToken: token };
   });
 }
 
@@ -134,31 +139,44 @@ async function assertAnotherHeadCoach({ teamId, membershipId, transaction }: { t
   if (others === 0) throw new AppError("conflict", "A team needs at least one head coach", { fields: { role: ["Keep at least one head coach"] } });
 }
 
-/** Looks up an unused, unexpired invitation by its token (for the set-password page). */
+/** Looks up an unused, unexpired link by its token (for the invitation page). */
 export async function findOpenInvitation({ token }: { token: string }) {
-  const { Invitation, User, Team } = await db();
-  const invitation = await Invitation.findOne({
-    where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
-    attributes: ["id", "userId", "teamId", "purpose"],
-  });
+  const { User, Team } = await db();
+  const invitation = await openInvitationByToken({ token });
   if (!invitation) return null;
   const [user, team] = await Promise.all([
-    User.findByPk(invitation.userId, { attributes: ["name", "email"] }),
+    User.findByPk(invitation.userId, { attributes: ["name", "email", "passwordHash"] }),
     Team.findByPk(invitation.teamId, { attributes: ["name"] }),
   ]);
-  return { name: user?.name ?? "", email: user?.email ?? "", teamName: team?.name ?? "", purpose: invitation.purpose };
+  return {
+    userId: invitation.userId,
+    // An invitation greets with the name the inviting team typed, never the account's own.
+    name: invitation.purpose === "invite" ? (invitation.name ?? "") : (user?.name ?? ""),
+    email: user?.email ?? "",
+    teamName: team?.name ?? "",
+    role: (invitation.role ?? null) as Role | null,
+    purpose: invitation.purpose,
+    /** An invitation to an account that can sign in already: accepted by its signed-in owner (joinTeam). */
+    hasPassword: Boolean(user?.passwordHash),
+  };
 }
 
-/** Sets the password and spends the token, atomically, so a link works exactly once. */
+/**
+ * Sets the password and spends the token, atomically, so a link works exactly once. An invitation sets the
+ * first password of a new account and makes it a member; it never changes the password of an account that has
+ * one (that account's owner signs in and accepts instead).
+ */
 export async function acceptInvitation({ token, password }: { token: string; password: string }) {
-  const { sequelize, Invitation, User } = await db();
+  const { sequelize, User } = await db();
   const passwordHash = await hashPassword(password);
   return sequelize.transaction(async (transaction) => {
-    const invitation = await Invitation.findOne({
-      where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
-      transaction,
-    });
+    const invitation = await openInvitationByToken({ token, transaction });
     if (!invitation) throw new AppError("invalid", "This link has expired or was already used", { fields: { token: ["Expired or used"] } });
+    if (invitation.purpose === "invite") {
+      const user = await User.findByPk(invitation.userId, { attributes: ["passwordHash"], transaction });
+      if (user?.passwordHash) throw new AppError("invalid", "This account has a password already: sign in and accept the invitation", { fields: { token: ["Sign in to accept"] } });
+      await grantMembership({ invitation, transaction });
+    }
     await invitation.update({ usedAt: new Date() }, { transaction });
     await User.update({ passwordHash }, { where: { id: invitation.userId }, transaction });
     const user = await User.findByPk(invitation.userId, { attributes: ["email"], transaction });

@@ -33,13 +33,20 @@ export async function updateNotificationSettings({ userId, teamId, alertEmail, n
 
 export type AlertRecipient = { userId: number; name: string; email: string; role: Role; alertEmail: AlertEmailMode };
 
-/** Staff of the team with their alert e-mail choice (defaults applied). */
+/**
+ * Only people who joined get the team's mail: a membership exists once an invitation is accepted, and the
+ * account must be able to sign in. An invitation nobody accepted (expired, or sent to a mistyped address) is
+ * not a membership, so it never receives athletes' data.
+ */
+const JOINED = { passwordHash: { [Op.ne]: null } };
+
+/** Staff of the team who joined, with their alert e-mail choice (defaults applied). */
 export async function listAlertRecipients({ teamId, transaction }: { teamId: number; transaction?: Transaction }): Promise<AlertRecipient[]> {
   const { Membership, User, NotificationSetting } = await db();
   const memberships = await Membership.findAll({
     where: { teamId, role: { [Op.in]: STAFF_ROLES } },
     attributes: ["userId", "role"],
-    include: [{ model: User, as: "user", attributes: ["id", "name", "email"] }],
+    include: [{ model: User, as: "user", attributes: ["id", "name", "email"], where: JOINED, required: true }],
     order: [["id", "ASC"]],
     transaction,
   });
@@ -75,7 +82,7 @@ export async function listDigestSubscribers(): Promise<DigestSubscriber[]> {
     where: { alertEmail: "digest" },
     attributes: ["id", "userId", "teamId", "lastDigestAt"],
     include: [
-      { model: User, as: "user", attributes: ["name", "email"] },
+      { model: User, as: "user", attributes: ["name", "email"], where: JOINED, required: true },
       { model: Team, as: "team", attributes: ["name", "timeZone"] },
     ],
   });
@@ -120,18 +127,20 @@ export async function getPerson({ userId, transaction }: { userId: number; trans
 
 export type AthleteContact = { athleteId: number; name: string; email: string };
 
-/** Athletes of the team who have a login (only they can receive calendar invitations). */
+/** Athletes of the team who joined with their own login (only they receive calendar invitations). */
 export async function listAthleteContacts({ teamId, athleteIds, transaction }: { teamId: number; athleteIds: readonly number[]; transaction?: Transaction }): Promise<Map<number, AthleteContact>> {
-  const { Athlete, User } = await db();
+  const { Athlete, User, Membership } = await db();
   if (athleteIds.length === 0) return new Map();
   const rows = await Athlete.findAll({
     where: { teamId, id: { [Op.in]: [...athleteIds] }, userId: { [Op.ne]: null } },
-    attributes: ["id", "name"],
-    include: [{ model: User, as: "user", attributes: ["email"] }],
+    attributes: ["id", "name", "userId"],
+    include: [{ model: User, as: "user", attributes: ["email"], where: JOINED, required: true }],
     transaction,
   });
+  const members = await Membership.findAll({ where: { teamId, userId: { [Op.in]: rows.map((a) => a.userId as number) } }, attributes: ["userId"], transaction });
+  const joined = new Set(members.map((m) => m.userId));
   return new Map(
-    rows.map((a) => {
+    rows.filter((a) => joined.has(a.userId as number)).map((a) => {
       const user = (a as unknown as { user: { email: string } | null }).user;
       return [a.id, { athleteId: a.id, name: a.name, email: user?.email ?? "" }];
     }).filter(([, c]) => (c as AthleteContact).email !== "") as Array<[number, AthleteContact]>,

@@ -79,10 +79,12 @@ const TABLE: Line[] = [
   ["PAGE /squad/new",                                  "sign-in", "not-allowed", "not-allowed", "not-allowed", "ok",          "ok",          "ok"],
 
   ["ACTION /forgot-password#forgotPasswordAction",     "ok",      "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
+  ["ACTION /invite#joinTeamAction",                    401,       "refused",     "refused",     "refused",     "refused",     "refused",     "refused"],
   ["ACTION /invite#setPasswordAction",                 "refused", "refused",     "refused",     "refused",     "refused",     "refused",     "refused"],
   ["ACTION /members#addMemberAction",                  "sign-in", 403,           403,           403,           403,           "ok",          "ok"],
   ["ACTION /members#changeRoleAction",                 "sign-in", 403,           403,           403,           403,           "ok",          404],
   ["ACTION /members#removeMemberAction",               "sign-in", 403,           403,           403,           403,           "ok",          404],
+  ["ACTION /members#withdrawInvitationAction",         "sign-in", 403,           403,           403,           403,           "ok",          404],
   ["ACTION /squad#saveAthleteAction",                  "sign-in", 403,           403,           403,           "ok",          "ok",          404],
 ];
 

@@ -18,6 +18,20 @@ const template = { ...STRENGTH_BLOCK, title: "Matrix template (edited)", duratio
 const farWeek = "2027-11-15"; // an empty week: the week tools change nothing else the matrix reads
 const athleteForm = { name: "Jonah Pell", groupId: null, sex: "male", birthDate: "2000-09-03", bodyMassKg: 78.2, vmaxMs: 10.86, vmaxTestedOn: null, tauS: 1.24, stepLengthM: 2.46, plyoLevel: "advanced" };
 
+/** A fresh open invitation to team A, written straight to the table (nobody accepted it). */
+async function openInvitation(w: World): Promise<number> {
+  const now = new Date().toISOString().replace("T", " ").replace("Z", " +00:00");
+  const email = `invited-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 8)}@elsewhere.test`;
+  await w.app.query("INSERT INTO users (email, name, password_hash, created_at, updated_at) VALUES (?, 'Invited', NULL, ?, ?)", [email, now, now]);
+  const [user] = await w.app.query<{ id: number }>("SELECT id FROM users WHERE email = ?", [email]);
+  await w.app.query(
+    "INSERT INTO invitations (team_id, user_id, purpose, email, role, token_hash, expires_at, used_at, created_at, updated_at) VALUES (?, ?, 'invite', ?, 'coach', ?, '2099-01-01 00:00:00.000 +00:00', NULL, ?, ?)",
+    [w.teamId, user.id, email, `matrix-${email}`, now, now],
+  );
+  const [row] = await w.app.query<{ id: number }>("SELECT id FROM invitations WHERE email = ?", [email]);
+  return row.id;
+}
+
 export const REQUESTS: Record<string, Build> = {
   "GET /api/alerts": async () => api("GET", "/api/alerts"),
   "GET /api/alerts/[alertId]": async (w, s) => api("GET", `/api/alerts/${await w.alert(athlete(w, s))}`),
@@ -111,9 +125,11 @@ export const REQUESTS: Record<string, Build> = {
   "PAGE /squad/new": async () => page("/squad/new"),
 
   "ACTION /forgot-password#forgotPasswordAction": async () => action({ email: "nobody-here@nowhere.test" }),
+  "ACTION /invite#joinTeamAction": async () => action({ token: "no-such-invitation-token-0123456789" }),
   "ACTION /invite#setPasswordAction": async () => action({ token: "no-such-invitation-token-0123456789", password: "a long enough passphrase 77", confirm: "a long enough passphrase 77" }),
   "ACTION /members#addMemberAction": async () => action({ name: "Matrix Newcomer", email: `new-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 8)}@elsewhere.test`, role: "coach" }),
   "ACTION /members#changeRoleAction": async (w) => action(await w.membership(), { role: "physio" }),
   "ACTION /members#removeMemberAction": async (w) => action(await w.membership()),
+  "ACTION /members#withdrawInvitationAction": async (w) => action(await openInvitation(w)),
   "ACTION /squad#saveAthleteAction": async (w, s) => action(athlete(w, s), athleteForm),
 };

@@ -14,15 +14,16 @@ describe("members", () => {
     const members = await listMembers({ teamId: team.teamId });
     expect(members).toHaveLength(5);
     expect(JSON.stringify(members)).not.toMatch(/\$2[aby]\$/);
-    expect(Object.keys(members[0]).sort()).toEqual(["athleteId", "email", "membershipId", "name", "role", "status", "userId"]);
+    expect(Object.keys(members[0]).sort()).toEqual(["athleteId", "email", "membershipId", "name", "role", "userId"]);
   });
 
-  it("adds a member with a one-time link that sets the password exactly once", async () => {
+  it("invites a member with a one-time link that sets the password exactly once and makes them a member", async () => {
     const input = addMemberSchema.parse({ name: "Nia Newcomer", email: "NIA@members.test ", role: "coach" });
     const { inviteToken, userId } = await addMember({ teamId: team.teamId, input });
     expect(inviteToken).toMatch(/^[A-Za-z0-9_-]{40,}$/);
     expect(await findOpenInvitation({ token: inviteToken! })).toMatchObject({ email: "nia@members.test", teamName: "Members Club" });
     expect(await verifyCredentials({ email: "nia@members.test", password: "a-good-password" })).toBeNull();
+    expect(await listMembershipsOfUser({ userId })).toEqual([]);
     await acceptInvitation({ token: inviteToken!, password: "a-good-password" });
     expect(await verifyCredentials({ email: "nia@members.test", password: "a-good-password" })).toMatchObject({ id: userId });
     await expect(acceptInvitation({ token: inviteToken!, password: "another-password" })).rejects.toMatchObject({ status: 400 });

@@ -4,8 +4,7 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { runAction } from "@/lib/action-result";
 import { requireViewer, requireMember } from "@/lib/auth/access";
-import { appUrl } from "@/lib/env";
-import { isFakeMailbox } from "@/lib/mail/transport";
+import { withdrawInvitation } from "@/lib/data/invitations";
 import { addMember, changeMemberRole, removeMember } from "@/lib/data/members";
 import { addMemberSchema, changeRoleSchema, type AddMemberInput } from "@/lib/validations/members";
 
@@ -20,11 +19,10 @@ export async function addMemberAction(input: AddMemberInput) {
   return runAction(async () => {
     const viewer = await headCoach();
     const parsed = addMemberSchema.parse(input);
-    const result = await addMember({ teamId: viewer.teamId, input: parsed, invitedBy: viewer.userId });
+    await addMember({ teamId: viewer.teamId, input: parsed, invitedBy: viewer.userId });
     revalidatePath("/members");
-    // The invitation goes out by e-mail; the link itself is shown only while mail stays on this machine.
-    const showLink = result.inviteToken !== null && isFakeMailbox();
-    return { ...result, inviteToken: null, invited: result.inviteToken !== null, inviteUrl: showLink ? `${appUrl()}/invite/${result.inviteToken}` : null };
+    // The same answer whether or not the address has an account, and never the link: it belongs to the invitee.
+    return { invited: true, email: parsed.email };
   });
 }
 
@@ -42,6 +40,15 @@ export async function removeMemberAction(membershipId: number) {
   return runAction(async () => {
     const viewer = await headCoach();
     const result = await removeMember({ teamId: viewer.teamId, membershipId: idSchema.parse(membershipId) });
+    revalidatePath("/members");
+    return result;
+  });
+}
+
+export async function withdrawInvitationAction(invitationId: number) {
+  return runAction(async () => {
+    const viewer = await headCoach();
+    const result = await withdrawInvitation({ teamId: viewer.teamId, invitationId: idSchema.parse(invitationId) });
     revalidatePath("/members");
     return result;
   });
