@@ -56,7 +56,7 @@ export function MissingLogFigures({ settings }: { settings: TeamLoadSettings }) 
       <p>
         A published session in the past without a log is not a rest day. This team{" "}
         <strong data-testid="figures-missing-choice">
-          {settings.missingLogs === "estimate" ? "counts its plan as an estimate" : "leaves it out (it adds nothing)"}
+          {settings.missingLogs === "estimate" ? "counts its plan as an estimate" : "leaves the day out of the ratio and the monotony (it adds nothing to the totals)"}
         </strong>
         ; either way the day is marked wherever it shows, and a week with such a day never gets an &quot;underloaded&quot; flag, because the
         light week may only be missing logs.

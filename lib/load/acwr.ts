@@ -56,10 +56,15 @@ export function acwrInto(
   out: AcwrColumns,
   seed: EwmaSeed = "first",
   prefix?: Float64Array,
+  skip?: ArrayLike<number>,
 ): void {
   const n = values.length;
   const { acute, chronic, ratio } = out;
   if (n === 0) return;
+  if (skip) {
+    acwrSkipping(values, method, out, seed, skip);
+    return;
+  }
   if (method === "ewma") {
     // Both recurrences (Williams et al. 2017) and the ratio in one pass; the same arithmetic as ewmaInto.
     const la = ewmaLambda(ACUTE_DAYS);
@@ -102,6 +107,58 @@ export function acwrInto(
 }
 
 /**
+ * acwrInto with days left out (skip[i] = 1: a missing log under settings.missingLogs "exclude", lib/load/README.md
+ * §11.3): the EWMA carries over a left-out day unchanged (and is seeded on the first day kept); rolling means
+ * average the kept days of each window only. A window with no kept day has no ratio.
+ */
+function acwrSkipping(values: ArrayLike<number>, method: AcwrMethod, out: AcwrColumns, seed: EwmaSeed, skip: ArrayLike<number>): void {
+  const n = values.length;
+  const { acute, chronic, ratio } = out;
+  if (method === "ewma") {
+    const la = ewmaLambda(ACUTE_DAYS);
+    const lc = ewmaLambda(CHRONIC_DAYS);
+    let a = 0;
+    let c = 0;
+    let seeded = false;
+    for (let i = 0; i < n; i++) {
+      const x = values[i];
+      if (!skip[i]) {
+        if (!seeded) {
+          a = seed === "first" ? x : la * x;
+          c = seed === "first" ? x : lc * x;
+          seeded = true;
+        } else {
+          a = la * x + (1 - la) * a;
+          c = lc * x + (1 - lc) * c;
+        }
+      }
+      acute[i] = a;
+      chronic[i] = c;
+      ratio[i] = seeded && c > 0 ? a / c : Number.NaN;
+    }
+    return;
+  }
+  const s = new Float64Array(n + 1);
+  const k = new Float64Array(n + 1);
+  for (let i = 0; i < n; i++) {
+    const kept = skip[i] ? 0 : 1;
+    s[i + 1] = s[i] + kept * values[i];
+    k[i + 1] = k[i] + kept;
+  }
+  const mean = (from: number, to: number) => (k[to] - k[from] > 0 ? (s[to] - s[from]) / (k[to] - k[from]) : Number.NaN);
+  const coupled = method === "rolling_coupled";
+  for (let i = 0; i < n; i++) {
+    const a = mean(i + 1 > ACUTE_DAYS ? i + 1 - ACUTE_DAYS : 0, i + 1);
+    const c0 = i + 1 > CHRONIC_DAYS ? i + 1 - CHRONIC_DAYS : 0;
+    const end = i - ACUTE_DAYS + 1;
+    const c = coupled ? mean(c0, i + 1) : end > c0 ? mean(c0, end) : 0;
+    acute[i] = Number.isFinite(a) ? a : 0;
+    chronic[i] = Number.isFinite(c) ? c : 0;
+    ratio[i] = Number.isFinite(a) && c > 0 ? a / c : Number.NaN;
+  }
+}
+
+/**
  * The ACWR of a series that starts on the athlete's first day on record (`first`, an index into values):
  * days before it have no ratio (acute and chronic 0), and the EWMA is seeded with day `first`'s load
  * (lib/load/README.md §5–§6). null = nothing on record, so no ratio anywhere. Every caller goes through here,
@@ -113,6 +170,7 @@ export function acwrFromFirstDay(
   out: AcwrColumns,
   first: number | null,
   prefix?: Float64Array,
+  skip?: Uint8Array,
 ): void {
   const n = values.length;
   const from = first === null ? n : Math.max(0, Math.min(n, first));
@@ -126,6 +184,7 @@ export function acwrFromFirstDay(
     { acute: out.acute.subarray(from), chronic: out.chronic.subarray(from), ratio: out.ratio.subarray(from) },
     "first",
     prefix,
+    skip ? skip.subarray(from) : undefined,
   );
 }
 

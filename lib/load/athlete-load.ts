@@ -101,7 +101,7 @@ export function computeAthleteColumns(req: ColumnsRequest, ws?: EngineWorkspace)
   METRICS.forEach((m, k) => {
     const at = (j: number) => f64.subarray((nm + 3 * k + j) * n, (nm + 3 * k + j + 1) * n);
     acwr[m] = { acute: at(0), chronic: at(1), ratio: at(2) };
-    acwrFromFirstDay(cols.values[m], req.settings.acwrMethod, acwr[m], cols.firstDataIndex, prefix);
+    acwrFromFirstDay(cols.values[m], req.settings.acwrMethod, acwr[m], cols.firstDataIndex, prefix, rp.estimateMissing ? undefined : cols.missing);
   });
   const provisional = u8.subarray(2 * n, 3 * n);
   markProvisional(provisional, cols.firstDataIndex);

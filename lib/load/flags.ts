@@ -126,7 +126,7 @@ function hasMissing(input: FlagInput, from: number, to: number): boolean {
 function monotonyFlag(input: FlagInput, w: number): Flag | null {
   const limit = input.settings.monotonyLimit ?? 2;
   const col = input.values.srpe;
-  const m = monotonyOfWindow(col, w, 7, DEFAULT_SD_TYPE);
+  const m = monotonyOfWindow(col, w, 7, DEFAULT_SD_TYPE, input.settings.missingLogs === "exclude" ? input.missing : undefined);
   // Strictly above the limit ("above 2.0"); SD 0 (identical days) has no monotony and no flag.
   if (m === null || !(m > limit + 1e-9)) return null;
   const load = sumWindow(col, w, w + 7);

@@ -14,16 +14,21 @@ function at(col: ArrayLike<number>, i: number): number {
 
 /**
  * Monotony of the `days` values col[from … from + days − 1]; null when the SD is 0 (identical days,
- * e.g. a week of rest) or there are too few days for the SD type.
+ * e.g. a week of rest) or there are too few days for the SD type. Days with skip[i] = 1 are left out (a missing
+ * log under settings.missingLogs "exclude", lib/load/README.md §11.3): the mean and SD are over the days kept.
  */
-export function monotonyOfWindow(col: ArrayLike<number>, from: number, days: number, sd: SdType = DEFAULT_SD_TYPE): number | null {
-  const dof = sd === "sample" ? days - 1 : days;
-  if (days <= 0 || dof <= 0) return null;
+export function monotonyOfWindow(col: ArrayLike<number>, from: number, days: number, sd: SdType = DEFAULT_SD_TYPE, skip?: ArrayLike<number>): number | null {
+  const kept = (i: number) => !skip || !(from + i >= 0 && from + i < skip.length && skip[from + i]);
+  let count = 0;
+  for (let i = 0; i < days; i++) if (kept(i)) count++;
+  const dof = sd === "sample" ? count - 1 : count;
+  if (count <= 0 || dof <= 0) return null;
   let sum = 0;
-  for (let i = 0; i < days; i++) sum += at(col, from + i);
-  const mean = sum / days;
+  for (let i = 0; i < days; i++) if (kept(i)) sum += at(col, from + i);
+  const mean = sum / count;
   let ss = 0;
   for (let i = 0; i < days; i++) {
+    if (!kept(i)) continue;
     const d = at(col, from + i) - mean;
     ss += d * d;
   }

@@ -68,7 +68,7 @@ export function computeWeekPreview(input: WeekPreviewInput): { week: WeekSummary
     firstData = offset + week.firstDataIndex;
   }
   const acwr = allocAcwrColumns(length);
-  acwrFromFirstDay(values[settings.acwrMetric], settings.acwrMethod, acwr, firstData);
+  acwrFromFirstDay(values[settings.acwrMetric], settings.acwrMethod, acwr, firstData, undefined, rp.estimateMissing ? undefined : missing);
   const provisional = new Uint8Array(length);
   markProvisional(provisional, firstData);
   const firstDate = dateFromDayIndex(historyStart);

@@ -99,7 +99,9 @@ export function summariseWeek(input: WeekSummaryInput): WeekSummary {
   const w = dayIndex(input.weekStart) - dayIndex(input.firstDate);
   const totals = metricRecord((m) => sumWindow(values[m], w, w + 7));
   const previousTotals = metricRecord((m) => sumWindow(values[m], w - 7, w));
-  const mono = metricRecord((m) => monotonyOfWindow(values[m], w, 7, sdType));
+  // Missing logs left out (settings.missingLogs "exclude") are left out of the monotony too (README §11.3).
+  const skip = settings.missingLogs === "exclude" ? missing : undefined;
+  const mono = metricRecord((m) => monotonyOfWindow(values[m], w, 7, sdType, skip));
   const peak = judgedPeak(ratio, provisional, w, w + 7);
   return {
     weekStart: input.weekStart,

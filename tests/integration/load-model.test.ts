@@ -44,7 +44,7 @@ async function team(name: string) {
     who.userId = head;
     const res = await athleteLoad.GET(new Request(`http://test/api/athletes/${ada.athleteId}/load?view=actual&metric=${metric}&from=${from}&to=${to}`), p({ athleteId: String(ada.athleteId) }));
     expect(res.status).toBe(200);
-    const body = (await res.json()) as { days: { date: string; value: number; missing: boolean; logged: boolean }[] };
+    const body = (await res.json()) as { days: { date: string; value: number; ratio: number | null; missing: boolean; logged: boolean }[] };
     return body.days;
   }
   async function squad(week: string) {
@@ -163,6 +163,28 @@ describe("missing logs are not zero", () => {
     expect(est).toMatchObject({ value: 360, missing: true, logged: false });
     expect((await t.setSettings({ missingLogs: "exclude" })).status).toBe(200);
     expect((await t.days("srpe", day, day))[0]).toMatchObject({ value: 0, missing: true });
+  });
+});
+
+describe("the ACWR with a missing log (EWMA, first-day seed; lib/load/README.md §6 and §11.3)", () => {
+  // Logged 100 AU (RPE 5 × 20 min), then an unlogged published session planned at RPE 6 × 60 = 360 AU, then logged
+  // 200 AU (RPE 5 × 40). Estimate: acute 0.25·360 + 0.75·100 = 165 then 0.25·200 + 0.75·165 = 173.75; chronic
+  // (2/29)·360 + (27/29)·100 = 117.931034 then (2/29)·200 + (27/29)·117.931034 = 123.591320; ratio 1.405847.
+  // Left out: the middle day carries over, so day 3 is E1: acute 125, chronic 3100/29, ratio 1.169355.
+  it("counts the plan (1.405847) or leaves the day out of the EWMA (1.169355)", async () => {
+    const t = await team("Gap Track");
+    const [d1, d2, d3] = [addDays(today, -3), addDays(today, -2), addDays(today, -1)];
+    await t.plan(d1, [], { rpe: 5, minutes: 20, log: { completion: "yes", rpe: 5, minutes: 20 } });
+    await t.plan(d2, [], { rpe: 6, minutes: 60 });
+    await t.plan(d3, [], { rpe: 5, minutes: 40, log: { completion: "yes", rpe: 5, minutes: 40 } });
+    const est = await t.days("srpe", d1, d3);
+    expect(est.map((x) => x.value)).toEqual([100, 360, 200]);
+    expect(est[2].ratio).toBeCloseTo(1.405847, 6);
+    expect((await t.setSettings({ missingLogs: "exclude" })).status).toBe(200);
+    const left = await t.days("srpe", d1, d3);
+    expect(left.map((x) => x.missing)).toEqual([false, true, false]);
+    expect(left[1].ratio).toBe(1);
+    expect(left[2].ratio).toBeCloseTo(1.169355, 6);
   });
 });
 
