@@ -43,8 +43,14 @@ describe("SQLite writes", () => {
         }),
       ),
       ...Array.from({ length: 60 }, (_, i) => newTemplate(`On its own ${i}`)),
+      // Without a callback (as findOrCreate does): the turn ends at commit or rollback.
+      ...Array.from({ length: 5 }, async (_, i) => {
+        const t = await d.sequelize.transaction();
+        await newTemplate(`Unmanaged ${i}`, t);
+        await (i === 0 ? t.rollback() : t.commit());
+      }),
     ]);
-    expect(await d.BlockTemplate.count({ where: { teamId } })).toBe(before + 120);
+    expect(await d.BlockTemplate.count({ where: { teamId } })).toBe(before + 124);
   });
 
   it("a lock another connection holds: the first write waits busy_timeout, the ones queued behind it give up with it, all answer 503", async () => {
