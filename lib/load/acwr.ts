@@ -1,7 +1,5 @@
 import type { AcwrMethod } from "./types";
 
-export type EwmaSeed = "first" | "zero";
-
 export const ACUTE_DAYS = 7;
 export const CHRONIC_DAYS = 28;
 /** Ratios from fewer days on record than this are provisional (a design choice; no published rule, lib/load/README.md §6). */
@@ -13,15 +11,15 @@ export function ewmaLambda(n: number): number {
 }
 
 /**
- * EWMA_t = λ·load_t + (1 − λ)·EWMA_{t−1} (Williams et al. 2017). Seed "first" starts at day 1's load, matching
- * pandas `ewm(span=N, adjust=False)`; "zero" starts from 0 (the first day then gives λ·load).
+ * EWMA_t = λ·load_t + (1 − λ)·EWMA_{t−1} (Williams et al. 2017), seeded with the first value: the one seed the
+ * app uses (lib/load/README.md §6), the same as pandas `ewm(span=N, adjust=False)`.
  */
-export function ewmaInto(values: ArrayLike<number>, n: number, seed: EwmaSeed, out: Float64Array): Float64Array {
+export function ewmaInto(values: ArrayLike<number>, n: number, out: Float64Array): Float64Array {
   const len = values.length;
   if (len === 0) return out;
   const lambda = ewmaLambda(n);
   const keep = 1 - lambda;
-  let e = seed === "first" ? values[0] : lambda * values[0];
+  let e = values[0];
   out[0] = e;
   for (let i = 1; i < len; i++) {
     e = lambda * values[i] + keep * e;
@@ -30,8 +28,8 @@ export function ewmaInto(values: ArrayLike<number>, n: number, seed: EwmaSeed, o
   return out;
 }
 
-export function ewma(values: ArrayLike<number>, n: number, seed: EwmaSeed = "first"): Float64Array {
-  return ewmaInto(values, n, seed, new Float64Array(values.length));
+export function ewma(values: ArrayLike<number>, n: number): Float64Array {
+  return ewmaInto(values, n, new Float64Array(values.length));
 }
 
 export interface AcwrColumns {
@@ -54,7 +52,6 @@ export function acwrInto(
   values: ArrayLike<number>,
   method: AcwrMethod,
   out: AcwrColumns,
-  seed: EwmaSeed = "first",
   prefix?: Float64Array,
   skip?: ArrayLike<number>,
 ): void {
@@ -69,8 +66,9 @@ export function acwrInto(
     // Both recurrences (Williams et al. 2017) and the ratio in one pass; the same arithmetic as ewmaInto.
     const la = ewmaLambda(ACUTE_DAYS);
     const lc = ewmaLambda(CHRONIC_DAYS);
-    let a = seed === "first" ? values[0] : la * values[0];
-    let c = seed === "first" ? values[0] : lc * values[0];
+    // Seeded with the first day's load (lib/load/README.md §6).
+    let a = values[0];
+    let c = values[0];
     for (let i = 0; i < n; i++) {
       if (i > 0) {
         const x = values[i];
@@ -182,14 +180,12 @@ export function acwrFromFirstDay(
     values.subarray(from),
     method,
     { acute: out.acute.subarray(from), chronic: out.chronic.subarray(from), ratio: out.ratio.subarray(from) },
-    "first",
     prefix,
     skip ? skip.subarray(from) : undefined,
   );
 }
 
 export interface AcwrOptions {
-  seed?: EwmaSeed;
   /**
    * Index of the first day with data on record; history counts from here (default 0). May be negative when
    * the data began before the series; null when there is no data at all (everything provisional).
@@ -220,7 +216,7 @@ export function markProvisional(out: Uint8Array, firstDataIndex: number | null, 
 export function acwrSeries(values: ArrayLike<number>, method: AcwrMethod, options: AcwrOptions = {}): AcwrSeries {
   const n = values.length;
   const cols = allocAcwrColumns(n);
-  acwrInto(values, method, cols, options.seed ?? "first");
+  acwrInto(values, method, cols);
   const first = options.firstDataIndex === undefined ? 0 : options.firstDataIndex;
   const minDays = options.minHistoryDays ?? ACWR_MIN_HISTORY_DAYS;
   const ratio: (number | null)[] = new Array(n);

@@ -79,7 +79,6 @@ export {
   ACUTE_DAYS,
   CHRONIC_DAYS,
   ACWR_MIN_HISTORY_DAYS,
-  type EwmaSeed,
   type AcwrSeries,
   type AcwrOptions,
 } from "./acwr";
