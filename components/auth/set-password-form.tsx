@@ -7,13 +7,14 @@ import { useForm } from "react-hook-form";
 import { setPasswordAction } from "@/app/(auth)/invite/actions";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
-import { setPasswordSchema, type SetPasswordInput } from "@/lib/validations/auth";
+import { setPasswordSchemaFor, type SetPasswordInput } from "@/lib/validations/auth";
+import { PASSWORD_HINT } from "@/lib/validations/password";
 
 export function SetPasswordForm({ token, email }: { token: string; email: string }) {
   const router = useRouter();
   const [error, setError] = useState<string>();
   const { register, handleSubmit, setError: setFieldError, formState } = useForm<SetPasswordInput>({
-    resolver: zodResolver(setPasswordSchema),
+    resolver: zodResolver(setPasswordSchemaFor(email)),
     defaultValues: { token, password: "", confirm: "" },
   });
 
@@ -35,7 +36,7 @@ export function SetPasswordForm({ token, email }: { token: string; email: string
     <form onSubmit={onSubmit} noValidate className="mt-6 space-y-4">
       {error ? <p role="alert" className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">{error}</p> : null}
       <input type="hidden" {...register("token")} />
-      <Field label="New password" htmlFor="password" error={errors.password?.message} hint="At least 10 characters.">
+      <Field label="New password" htmlFor="password" error={errors.password?.message} hint={PASSWORD_HINT}>
         <Input id="password" type="password" autoComplete="new-password" aria-invalid={!!errors.password} {...register("password")} />
       </Field>
       <Field label="Repeat it" htmlFor="confirm" error={errors.confirm?.message}>

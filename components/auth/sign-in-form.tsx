@@ -7,6 +7,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
+import { safeCallbackPath } from "@/lib/auth/safe-redirect";
 import { signInSchema, type SignInInput } from "@/lib/validations/auth";
 
 export function SignInForm({ next, initialError, initialEmail }: { next: string; initialError?: string; initialEmail?: string }) {
@@ -24,7 +25,7 @@ export function SignInForm({ next, initialError, initialEmail }: { next: string;
       setError("E-mail or password is not right. Check both and try again.");
       return;
     }
-    router.replace(next);
+    router.replace(safeCallbackPath(next, { origin: window.location.origin }));
     router.refresh();
   });
 

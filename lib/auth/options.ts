@@ -1,6 +1,7 @@
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { authSecret } from "@/lib/env";
+import { safeCallbackPath } from "./safe-redirect";
 import { listMembershipsOfUser, verifyCredentials, type MembershipSummary } from "@/lib/data/users";
 import { signInSchema } from "@/lib/validations/auth";
 
@@ -34,6 +35,10 @@ export const authOptions: NextAuthOptions = {
     }),
   ],
   callbacks: {
+    // Stricter than next-auth's own prefix check: only a normalised path on this site (lib/auth/safe-redirect.ts).
+    redirect({ url, baseUrl }) {
+      return `${baseUrl}${safeCallbackPath(url, { origin: baseUrl, fallback: "/" })}`;
+    },
     async jwt({ token, user, trigger }) {
       if (user) token.uid = Number(user.id);
       // Memberships ride in the token for navigation only; every access check re-reads the database.

@@ -9,7 +9,7 @@ import { memberInvitationEmail } from "@/emails/member-invitation";
 import { appUrl } from "@/lib/env";
 import { grantMembership, openInvitationByToken, spendTeamInvitations } from "./invitations";
 import { enqueueMail } from "./outbox";
-import { hashPassword } from "./users";
+import { hashPassword, replacePassword } from "./users";
 
 const INVITE_DAYS = 7;
 
@@ -178,8 +178,6 @@ export async function acceptInvitation({ token, password }: { token: string; pas
       await grantMembership({ invitation, transaction });
     }
     await invitation.update({ usedAt: new Date() }, { transaction });
-    await User.update({ passwordHash }, { where: { id: invitation.userId }, transaction });
-    const user = await User.findByPk(invitation.userId, { attributes: ["email"], transaction });
-    return { email: user?.email ?? "" };
+    return replacePassword({ userId: invitation.userId, password, passwordHash, transaction });
   });
 }

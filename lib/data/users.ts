@@ -3,6 +3,8 @@ import bcrypt from "bcryptjs";
 import { Op, type Transaction } from "sequelize";
 import { db } from "@/models";
 import type { Role } from "@/lib/auth/roles";
+import { AppError } from "@/lib/errors";
+import { passwordFor } from "@/lib/validations/password";
 
 export type MembershipSummary = { teamId: number; teamName: string; role: Role; athleteId: number | null };
 
@@ -41,6 +43,31 @@ export async function listMembershipsOfUser({ userId }: { userId: number }): Pro
 
 export async function hashPassword(password: string): Promise<string> {
   return bcrypt.hash(password, 10);
+}
+
+/**
+ * Reset links can set this account's password, so spending one spends them all. Invitations are left alone: one
+ * never sets the password of an account that has one (acceptInvitation), and another team's may still be accepted.
+ */
+const PASSWORD_LINKS = ["reset"];
+
+/**
+ * Gives an account a new password, inside the transaction that spent the one-time link: checks the password rule
+ * against the account's e-mail, spends every other outstanding reset link, and ends every
+ * session of the account (a stolen cookie stops working). Hash the password before the transaction (bcrypt is slow).
+ */
+export async function replacePassword({ userId, password, passwordHash, transaction, now = new Date() }: { userId: number; password: string; passwordHash: string; transaction: Transaction; now?: Date }) {
+  const { User, Invitation } = await db();
+  const user = await User.findByPk(userId, { attributes: ["id", "email"], transaction });
+  if (!user) throw new AppError("invalid", "This link has expired or was already used", { fields: { token: ["Expired or used"] } });
+  const checked = passwordFor(user.email).safeParse(password);
+  if (!checked.success) {
+    const messages = checked.error.issues.map((i) => i.message);
+    throw new AppError("invalid", messages[0], { fields: { password: messages } });
+  }
+  await User.update({ passwordHash }, { where: { id: userId }, transaction });
+  await Invitation.update({ usedAt: now }, { where: { userId, usedAt: null, purpose: { [Op.in]: PASSWORD_LINKS } }, transaction });
+  return { email: user.email };
 }
 
 /** Display names of users by id (ids may repeat or be null), for "set by" and "acknowledged by" lines. */

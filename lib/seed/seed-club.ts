@@ -1,4 +1,5 @@
 import { hashPassword } from "@/lib/data/users";
+import { passwordSchema } from "@/lib/validations/password";
 import type { Db } from "@/models";
 import { DEMO_ATHLETES, DEMO_GROUPS, DEMO_PASSWORD, DEMO_STAFF, DEMO_TEAM } from "./demo-club";
 
@@ -7,7 +8,8 @@ export type SeededClub = { teamId: number; athleteIds: Record<string, number>; u
 /** Creates the demo club's team, groups, staff and athletes. Extra demo content (history, plans) seeds on top. */
 export async function seedClub(d: Db): Promise<SeededClub> {
   const { sequelize, Team, User, Membership, TrainingGroup, Athlete, TeamLoadSettings } = d;
-  const passwordHash = await hashPassword(DEMO_PASSWORD);
+  // The demo password obeys the rule every member's does; a weaker one fails the seed loudly.
+  const passwordHash = await hashPassword(passwordSchema.parse(DEMO_PASSWORD));
   return sequelize.transaction(async (transaction) => {
     const team = await Team.create(DEMO_TEAM, { transaction });
     await TeamLoadSettings.create({ teamId: team.id }, { transaction });

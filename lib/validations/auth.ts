@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { passwordFor, passwordSchema } from "./password";
 import { emailText, lineText } from "./text";
 
 export const signInSchema = z.object({
@@ -7,14 +8,18 @@ export const signInSchema = z.object({
 });
 export type SignInInput = z.infer<typeof signInSchema>;
 
-export const setPasswordSchema = z
-  .object({
-    token: lineText().min(20, "This link is not valid").max(200),
-    password: z.string().min(10, "Use at least 10 characters").max(200),
-    confirm: z.string(),
-  })
-  .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ" });
+const setPasswordFields = { token: lineText().min(20, "This link is not valid").max(200), confirm: z.string().max(200) };
+const sameTwice = (v: { password: string; confirm: string }) => v.password === v.confirm;
+const differ = { path: ["confirm"], message: "The two passwords differ" };
+
+/** A new password from a one-time link. The server checks it against the account's e-mail too (lib/data/users.ts). */
+export const setPasswordSchema = z.object({ ...setPasswordFields, password: passwordSchema }).refine(sameTwice, differ);
 export type SetPasswordInput = z.infer<typeof setPasswordSchema>;
+
+/** The same with the e-mail check, for a form that knows whose password it sets. */
+export function setPasswordSchemaFor(email: string) {
+  return z.object({ ...setPasswordFields, password: passwordFor(email) }).refine(sameTwice, differ);
+}
 
 export const forgotPasswordSchema = z.object({
   email: emailText(),

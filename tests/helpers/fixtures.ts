@@ -1,4 +1,5 @@
 import { hashPassword } from "@/lib/data/users";
+import { passwordSchema } from "@/lib/validations/password";
 import type { Role } from "@/lib/auth/roles";
 import type { Db } from "@/models";
 
@@ -8,7 +9,7 @@ type Person = { name: string; email: string; role: Role };
 
 /** A small invented team for tests, independent of the demo seed. */
 export async function createTestTeam(d: Db, { name = "Test Track Club", people = defaultPeople(name) }: { name?: string; people?: Person[] } = {}) {
-  const passwordHash = await hashPassword(TEST_PASSWORD);
+  const passwordHash = await hashPassword(passwordSchema.parse(TEST_PASSWORD));
   const team = await d.Team.create({ name, timeZone: "Europe/London", weekStartDay: 1 });
   await d.TeamLoadSettings.create({ teamId: team.id });
   const group = await d.TrainingGroup.create({ teamId: team.id, name: "Sprint", sortOrder: 0 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { acceptInvitation } from "@/lib/data/members";
+import { acceptInvitation, findOpenInvitation } from "@/lib/data/members";
 import { requestPasswordReset } from "@/lib/data/password-reset";
 import { verifyCredentials } from "@/lib/data/users";
 import { TEST_PASSWORD, createTestTeam } from "../helpers/fixtures";
@@ -30,5 +30,27 @@ describe("password reset", () => {
   it("sends another link once the resend window has passed", async () => {
     await requestPasswordReset({ email, now: new Date(Date.now() + 3 * 60_000) });
     expect(await outbox()).toHaveLength(2);
+  });
+
+  it("spends every outstanding link when one of them is used", async () => {
+    const before = (await outbox()).length;
+    await requestPasswordReset({ email, now: new Date(Date.now() + 10 * 60_000) });
+    await requestPasswordReset({ email, now: new Date(Date.now() + 20 * 60_000) });
+    const links = (await outbox()).slice(before).map((m) => m.text.match(/\/invite\/([A-Za-z0-9_-]{40,})/)![1]);
+    expect(links).toHaveLength(2);
+    await acceptInvitation({ token: links[1]!, password: "fourth-password-here" });
+    expect(await findOpenInvitation({ token: links[0]! })).toBeNull();
+    await expect(acceptInvitation({ token: links[0]!, password: "attacker-password-1" })).rejects.toMatchObject({ status: 400 });
+    expect(await verifyCredentials({ email, password: "fourth-password-here" })).not.toBeNull();
+  });
+
+  it("applies the password rule on the server, the e-mail check included, and keeps the link for a better try", async () => {
+    await requestPasswordReset({ email, now: new Date(Date.now() + 30 * 60_000) });
+    const token = (await outbox()).at(-1)!.text.match(/\/invite\/([A-Za-z0-9_-]{40,})/)![1];
+    for (const password of [" ".repeat(10), " ".repeat(12), "password1234", email, "coach@resetclub.test!"]) {
+      await expect(acceptInvitation({ token, password }), JSON.stringify(password)).rejects.toMatchObject({ status: 400, fields: { password: expect.any(Array) } });
+    }
+    expect(await findOpenInvitation({ token })).not.toBeNull();
+    await acceptInvitation({ token, password: "fifth-password-here" });
   });
 });

@@ -1,13 +1,15 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { SignInForm } from "@/components/auth/sign-in-form";
+import { safeCallbackPath } from "@/lib/auth/safe-redirect";
+import { appUrl } from "@/lib/env";
 
 export const metadata: Metadata = { title: "Sign in" };
 
 export default async function SignInPage({ searchParams }: { searchParams: Promise<{ callbackUrl?: string; error?: string; email?: string }> }) {
   const { callbackUrl, error, email } = await searchParams;
-  // Only same-site paths: an absolute callbackUrl could send a freshly signed-in user elsewhere.
-  const next = callbackUrl && callbackUrl.startsWith("/") && !callbackUrl.startsWith("//") ? callbackUrl : "/home";
+  // Only same-site paths: a crafted callbackUrl could send a freshly signed-in user elsewhere.
+  const next = safeCallbackPath(callbackUrl, { origin: appUrl() });
   return (
     <>
       <h1 className="text-xl font-semibold text-ink-950">Sign in</h1>
