@@ -7,6 +7,9 @@ const schema = z.object({
   NEXTAUTH_URL: z.url().default("http://localhost:3000"),
   NEXTAUTH_SECRET: z.string().min(16).optional(),
   APP_URL: z.url().optional(),
+  // Session lifetimes (lib/auth/session-policy.ts); fractions are allowed so tests can use seconds.
+  SESSION_IDLE_MINUTES: z.coerce.number().positive().optional(),
+  SESSION_MAX_HOURS: z.coerce.number().positive().optional(),
 });
 
 export type Env = z.infer<typeof schema>;

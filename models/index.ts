@@ -5,6 +5,7 @@ import { queueWrites, sqliteDriver, writeQueue } from "@/lib/db/sqlite";
 import { databaseStorage } from "@/lib/env";
 import { Alert } from "./alert";
 import { Athlete } from "./athlete";
+import { AuthSession } from "./auth-session";
 import { BlockTemplate } from "./block-template";
 import { CalendarToken } from "./calendar-token";
 import { Invitation } from "./invitation";
@@ -22,9 +23,10 @@ import { TrainingGroup } from "./training-group";
 import { User } from "./user";
 
 export { Alert, CalendarToken, NotificationSetting, OutboxMessage, Restriction, RestrictionOverride };
+export { AuthSession };
 export { Athlete, BlockTemplate, Invitation, Membership, PlannedSession, SessionBlock, SessionLog, Team, TeamLoadSettings, TrainingGroup, User };
 
-const models = { Alert, CalendarToken, NotificationSetting, OutboxMessage, Restriction, RestrictionOverride, Athlete, BlockTemplate, Invitation, Membership, PlannedSession, SessionBlock, SessionLog, Team, TeamLoadSettings, TrainingGroup, User };
+const models = { AuthSession, Alert, CalendarToken, NotificationSetting, OutboxMessage, Restriction, RestrictionOverride, Athlete, BlockTemplate, Invitation, Membership, PlannedSession, SessionBlock, SessionLog, Team, TeamLoadSettings, TrainingGroup, User };
 export type Models = typeof models;
 export type Db = Models & { sequelize: Sequelize };
 
@@ -100,6 +102,10 @@ function associate() {
   RestrictionOverride.belongsTo(Athlete, { foreignKey: "athleteId", as: "athlete" });
   Team.hasMany(RestrictionOverride, { foreignKey: "teamId", as: "restrictionOverrides", ...cascade });
   RestrictionOverride.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+
+  // Sign-in sessions (migration 006).
+  User.hasMany(AuthSession, { foreignKey: "userId", as: "sessions", ...cascade });
+  AuthSession.belongsTo(User, { foreignKey: "userId", as: "user" });
 }
 
 /** Builds a Sequelize instance on an SQLite file with the pragmas the app relies on; its writes queue (lib/db/sqlite.ts). */

@@ -8,6 +8,7 @@ import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import { safeCallbackPath } from "@/lib/auth/safe-redirect";
+import { WRONG_CREDENTIALS, signInErrorMessage } from "@/lib/auth/sign-in-messages";
 import { signInSchema, type SignInInput } from "@/lib/validations/auth";
 
 export function SignInForm({ next, initialError, initialEmail }: { next: string; initialError?: string; initialEmail?: string }) {
@@ -22,7 +23,7 @@ export function SignInForm({ next, initialError, initialEmail }: { next: string;
     setError(undefined);
     const res = await signIn("credentials", { ...values, redirect: false });
     if (!res || res.error) {
-      setError("E-mail or password is not right. Check both and try again.");
+      setError(signInErrorMessage(res?.error) ?? WRONG_CREDENTIALS);
       return;
     }
     router.replace(safeCallbackPath(next, { origin: window.location.origin }));

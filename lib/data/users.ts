@@ -5,6 +5,7 @@ import { db } from "@/models";
 import type { Role } from "@/lib/auth/roles";
 import { AppError } from "@/lib/errors";
 import { passwordFor } from "@/lib/validations/password";
+import { endAllSessions } from "./auth-sessions";
 
 export type MembershipSummary = { teamId: number; teamName: string; role: Role; athleteId: number | null };
 
@@ -67,6 +68,7 @@ export async function replacePassword({ userId, password, passwordHash, transact
   }
   await User.update({ passwordHash }, { where: { id: userId }, transaction });
   await Invitation.update({ usedAt: now }, { where: { userId, usedAt: null, purpose: { [Op.in]: PASSWORD_LINKS } }, transaction });
+  await endAllSessions({ userId, transaction });
   return { email: user.email };
 }
 

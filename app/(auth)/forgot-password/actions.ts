@@ -1,5 +1,6 @@
 "use server";
 
+import { after } from "next/server";
 import { runAction } from "@/lib/action-result";
 import { requestPasswordReset } from "@/lib/data/password-reset";
 import { forgotPasswordSchema, type ForgotPasswordInput } from "@/lib/validations/auth";
@@ -8,7 +9,9 @@ import { forgotPasswordSchema, type ForgotPasswordInput } from "@/lib/validation
 export async function forgotPasswordAction(input: ForgotPasswordInput) {
   return runAction(async () => {
     const { email } = forgotPasswordSchema.parse(input);
-    await requestPasswordReset({ email });
+    // The account lookup, the link and the mail run after the answer is sent, so a known address and an unknown
+    // one answer in the same time (the work differs, the answer does not wait for it).
+    after(() => requestPasswordReset({ email }).catch((err: unknown) => console.error("password reset request failed", err)));
     return { sent: true };
   });
 }
