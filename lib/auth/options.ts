@@ -8,7 +8,7 @@ import { signInSchema } from "@/lib/validations/auth";
 import { clientAddress } from "./client-address";
 import { safeCallbackPath } from "./safe-redirect";
 import { sessionPolicy } from "./session-policy";
-import { throttledCode } from "./sign-in-messages";
+import { BUSY_CODE, throttledCode } from "./sign-in-messages";
 
 declare module "next-auth" {
   interface Session {
@@ -53,7 +53,13 @@ export const authOptions: NextAuthOptions = {
         const user = await verifyCredentials(parsed.data);
         if (!user) return null;
         await signInSucceeded({ email: parsed.data.email, address });
-        return { id: String(user.id), name: user.name, email: user.email };
+        // The session row is written here, where a failure (database locked by another process) becomes a
+        // message on the form instead of a 500 from the jwt callback.
+        const sid = await startSession({ userId: user.id }).catch((err: unknown) => {
+          console.error("could not start a session", err);
+          throw new Error(BUSY_CODE);
+        });
+        return { id: String(user.id), name: user.name, email: user.email, sid };
       },
     }),
   ],
@@ -66,7 +72,7 @@ export const authOptions: NextAuthOptions = {
     async jwt({ token, user, trigger }) {
       if (user) {
         token.uid = Number(user.id);
-        token.sid = await startSession({ userId: token.uid });
+        token.sid = (user as { sid?: string }).sid;
       } else if (!token.uid || !token.sid || !(await touchSession({ sid: token.sid, userId: token.uid }))) {
         throw new SessionEnded();
       }

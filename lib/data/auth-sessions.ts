@@ -16,6 +16,26 @@ export async function startSession({ userId, now = new Date() }: { userId: numbe
   return token;
 }
 
+// Recording activity must never hold up or fail the request that shows it: while another process holds the
+// write lock, a page read would otherwise wait for it and then fail. So the write runs in the background, one
+// per session at a time, and a session whose write failed is not retried before the next touch is due.
+const pending = new Map<number, Promise<void>>();
+const quietUntil = new Map<number, number>();
+
+function inBackground(id: number, write: () => Promise<unknown>, retryAt: number) {
+  if (pending.has(id) || (quietUntil.get(id) ?? 0) > Date.now()) return;
+  const run = write()
+    .then(() => void quietUntil.delete(id))
+    .catch(() => void quietUntil.set(id, retryAt))
+    .finally(() => pending.delete(id));
+  pending.set(id, run);
+}
+
+/** Resolves once the background session writes started so far have finished (tests, shutdown). */
+export async function sessionWritesSettled(): Promise<void> {
+  await Promise.all([...pending.values()]);
+}
+
 /**
  * True while the session is alive: its row exists, the absolute lifetime has not run out and it was used within
  * the idle timeout. Records the activity (at most once per `touchMs`). A dead session's row is removed.
@@ -27,10 +47,12 @@ export async function touchSession({ sid, userId, now = new Date() }: { sid: str
   if (!row || row.userId !== userId) return false;
   const t = now.getTime();
   if (row.expiresAt.getTime() <= t || row.lastSeenAt.getTime() + idleMs <= t) {
-    await AuthSession.destroy({ where: { id: row.id } });
+    inBackground(row.id, () => AuthSession.destroy({ where: { id: row.id } }), Date.now() + touchMs);
     return false;
   }
-  if (t - row.lastSeenAt.getTime() >= touchMs) await AuthSession.update({ lastSeenAt: now }, { where: { id: row.id } });
+  if (t - row.lastSeenAt.getTime() >= touchMs) {
+    inBackground(row.id, () => AuthSession.update({ lastSeenAt: now }, { where: { id: row.id } }), Date.now() + touchMs);
+  }
   return true;
 }
 

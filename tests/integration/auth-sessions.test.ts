@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { IDLE_MINUTES, MAX_HOURS } from "@/lib/auth/session-policy";
-import { endSession, startSession, touchSession } from "@/lib/data/auth-sessions";
+import { endSession, sessionWritesSettled, startSession, touchSession as touchNow } from "@/lib/data/auth-sessions";
 import { acceptInvitation } from "@/lib/data/members";
 import { requestPasswordReset } from "@/lib/data/password-reset";
 import { createTestTeam } from "../helpers/fixtures";
@@ -10,6 +10,12 @@ const d = await setupTestDb();
 const { users } = await createTestTeam(d, { name: "Session Club" });
 const userId = users.coach!.userId;
 const minutes = (n: number, from: Date) => new Date(from.getTime() + n * 60_000);
+// Activity is recorded in the background; wait for it so the next check sees it.
+async function touchSession(input: Parameters<typeof touchNow>[0]) {
+  const alive = await touchNow(input);
+  await sessionWritesSettled();
+  return alive;
+}
 
 // OWASP ASVS 4.0 §3.3: sessions end on sign-out (3.3.1), after an idle period and an absolute lifetime (3.3.2),
 // and every session of the account ends when its password changes (3.3.3).
