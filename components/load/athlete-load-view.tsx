@@ -93,7 +93,7 @@ export function AthleteLoadView({ initial }: { initial: AthleteLoadDto }) {
         ) : null}
       </Card>
       <div className="grid gap-5 lg:grid-cols-[1fr_1.2fr]">
-        <WeekTotals week={data.week} />
+        <WeekTotals week={data.week} estimated={data.settings.missingLogs === "estimate"} />
         <Card className="p-4 sm:p-5">
           <h2 className="mb-3 text-base font-semibold text-ink-900">Worth a look this week</h2>
           <FlagList flags={data.flags} />

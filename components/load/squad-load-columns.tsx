@@ -29,7 +29,8 @@ export const squadFeatures = tableFeatures({
 });
 
 type Features = typeof squadFeatures;
-export type SquadRow = SquadWeekRowDto & { acwrMetric: Metric };
+/** `estimated`: the team counts a missing log's plan as an estimate (settings.missingLogs). */
+export type SquadRow = SquadWeekRowDto & { acwrMetric: Metric; estimated: boolean };
 export type FlagFilter = "any" | FlagKind;
 
 const helper = createColumnHelper<Features, SquadRow>();
@@ -112,7 +113,10 @@ export const squadColumns = helper.columns([
           {c.getValue()}
         </Link>
         {c.row.original.missingDays > 0 ? (
-          <span className="text-2xs text-flag-climb">{c.row.original.missingDays === 1 ? "1 session not logged" : `${c.row.original.missingDays} sessions not logged`}</span>
+          <span className="text-2xs text-flag-climb" data-testid="missing-note">
+            {c.row.original.missingDays === 1 ? "1 session not logged" : `${c.row.original.missingDays} sessions not logged`}
+            {c.row.original.estimated ? " (plan counted, estimate)" : ""}
+          </span>
         ) : null}
       </span>
     ),

@@ -30,7 +30,7 @@ export function SquadLoadTable({ teamId, initial }: { teamId: number; initial: S
   const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
   const [columnVisibility, setColumnVisibility] = useState<ColumnVisibilityState>({});
 
-  const rows = useMemo<SquadRow[]>(() => (data ? data.rows.map((r) => ({ ...r, acwrMetric: data.settings.acwrMetric })) : NO_ROWS), [data]);
+  const rows = useMemo<SquadRow[]>(() => (data ? data.rows.map((r) => ({ ...r, acwrMetric: data.settings.acwrMetric, estimated: data.settings.missingLogs === "estimate" })) : NO_ROWS), [data]);
   const table = useTable({
     features: squadFeatures,
     columns: squadColumns,

@@ -5,7 +5,7 @@ import { METRIC_INFO, METRICS } from "@/lib/load/types";
 import type { WeekSummary } from "@/lib/load/week-summary";
 
 /** The week's totals per metric with the change on last week, and the team metric's monotony and strain. */
-export function WeekTotals({ week }: { week: WeekSummary }) {
+export function WeekTotals({ week, estimated = true }: { week: WeekSummary; estimated?: boolean }) {
   const m = week.acwrMetric;
   return (
     <Card className="p-4 sm:p-5" data-testid="week-totals">
@@ -33,7 +33,9 @@ export function WeekTotals({ week }: { week: WeekSummary }) {
       <p className="mt-4 border-t border-ink-100 pt-3 text-xs text-ink-500">
         {METRIC_INFO[m].short} monotony {week.monotony[m] === null ? "–" : formatNumber(week.monotony[m]!, 2)} · strain{" "}
         {week.strain[m] === null ? "–" : formatNumber(week.strain[m]!, 0)} (Foster 1998; {week.sdType === "population" ? "population" : "sample"} SD)
-        {week.missingDays > 0 ? ` · ${week.missingDays} day${week.missingDays === 1 ? "" : "s"} with a session not logged` : ""}
+        {week.missingDays > 0
+          ? ` · ${week.missingDays} day${week.missingDays === 1 ? "" : "s"} with a session not logged (${estimated ? "counted from the plan, an estimate" : "left out"})`
+          : ""}
       </p>
     </Card>
   );

@@ -130,6 +130,8 @@ export type AthleteLoadDayDto = {
   provisional: boolean;
   logged: boolean;
   missing: boolean;
+  /** A missing day whose plan stands in as an estimate (settings.missingLogs "estimate"; README §11.3). */
+  estimated: boolean;
 };
 
 export type AthleteLoadDto = {
@@ -193,6 +195,7 @@ export async function getAthleteLoad({ teamId, athleteId, from, to, view, metric
       provisional: d.provisional,
       logged: d.logged,
       missing: d.missing,
+      estimated: d.missing && inputs.settings.missingLogs === "estimate",
     })),
     week: flagged.week,
     flags: flagged.flags,

@@ -194,6 +194,17 @@ function plyoFlags(input: FlagInput, weekStartDay: number, weekEndDay: number): 
   const level = input.profile.plyoLevel;
   const band = contactBand(level);
   const out: Flag[] = [];
+  // The week's total sits next to the per-session band (lib/load/README.md §11.5).
+  let weekTotal = 0;
+  let weekWeighted: number | null = 0;
+  for (const s of input.sessions) {
+    const day = dayIndex(s.date);
+    if (day < weekStartDay || day > weekEndDay) continue;
+    weekTotal += s.contactsByIntensity.total;
+    const w = s.contactsByIntensity.weighted;
+    weekWeighted = weekWeighted === null || w === undefined ? null : weekWeighted + w;
+  }
+  const week = ` This week: ${formatNumber(weekTotal)} contacts in all${weekWeighted === null ? "" : ` (${formatNumber(weekWeighted)} weighted by intensity)`}.`;
   for (const s of input.sessions) {
     const day = dayIndex(s.date);
     const contacts = s.contactsByIntensity.total;
@@ -207,7 +218,7 @@ function plyoFlags(input: FlagInput, weekStartDay: number, weekEndDay: number): 
       value: contacts,
       threshold: band.max,
       // NSCA per-session ranges (Potach & Chu, Essentials 4th ed.) [from memory].
-      reason: `The session on ${formatDayLabel(s.date)} has ${formatNumber(contacts)} ground contacts, above ${band.max}, the top of the ${level} range (${band.min}–${band.max} per session).`,
+      reason: `The session on ${formatDayLabel(s.date)} has ${formatNumber(contacts)} ground contacts, above ${band.max}, the top of the ${level} range (${band.min}–${band.max} per session, the NSCA's off-season guidance).${week}`,
     });
   }
   return out;

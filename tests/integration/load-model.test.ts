@@ -160,9 +160,9 @@ describe("missing logs are not zero", () => {
     const day = addDays(today, -2);
     await t.plan(day, [{ kind: "acceleration", running: run({}) }]);
     const [est] = await t.days("srpe", day, day);
-    expect(est).toMatchObject({ value: 360, missing: true, logged: false });
+    expect(est).toMatchObject({ value: 360, missing: true, estimated: true, logged: false });
     expect((await t.setSettings({ missingLogs: "exclude" })).status).toBe(200);
-    expect((await t.days("srpe", day, day))[0]).toMatchObject({ value: 0, missing: true });
+    expect((await t.days("srpe", day, day))[0]).toMatchObject({ value: 0, missing: true, estimated: false });
   });
 });
 
