@@ -59,7 +59,7 @@ export function acwrInto(
   const { acute, chronic, ratio } = out;
   if (n === 0) return;
   if (skip) {
-    acwrSkipping(values, method, out, seed, skip);
+    acwrSkipping(values, method, out, skip);
     return;
   }
   if (method === "ewma") {
@@ -109,7 +109,7 @@ export function acwrInto(
  * §11.3): the EWMA carries over a left-out day unchanged (and is seeded on the first day kept); rolling means
  * average the kept days of each window only. A window with no kept day has no ratio.
  */
-function acwrSkipping(values: ArrayLike<number>, method: AcwrMethod, out: AcwrColumns, seed: EwmaSeed, skip: ArrayLike<number>): void {
+function acwrSkipping(values: ArrayLike<number>, method: AcwrMethod, out: AcwrColumns, skip: ArrayLike<number>): void {
   const n = values.length;
   const { acute, chronic, ratio } = out;
   if (method === "ewma") {
@@ -122,8 +122,8 @@ function acwrSkipping(values: ArrayLike<number>, method: AcwrMethod, out: AcwrCo
       const x = values[i];
       if (!skip[i]) {
         if (!seeded) {
-          a = seed === "first" ? x : la * x;
-          c = seed === "first" ? x : lc * x;
+          a = x;
+          c = x;
           seeded = true;
         } else {
           a = la * x + (1 - la) * a;
