@@ -58,6 +58,16 @@ export async function listAlertRecipients({ teamId, transaction }: { teamId: num
   });
 }
 
+/** Whether the address belongs to a member of the team who joined (checked again when the mail goes out). */
+export async function isJoinedMember({ teamId, email }: { teamId: number; email: string }): Promise<boolean> {
+  const { Membership, User } = await db();
+  const count = await Membership.count({
+    where: { teamId },
+    include: [{ model: User, as: "user", attributes: [], where: { ...JOINED, email: email.trim().toLowerCase() }, required: true }],
+  });
+  return count > 0;
+}
+
 export async function getAlertsSeenAt({ userId, teamId }: { userId: number; teamId: number }): Promise<Date | null> {
   const { NotificationSetting } = await db();
   const row = await NotificationSetting.findOne({ where: { userId, teamId }, attributes: ["alertsSeenAt"] });

@@ -53,6 +53,8 @@ export async function enqueueMail(input: EnqueueMailInput): Promise<number | nul
 
 export type ClaimedMessage = {
   id: number;
+  teamId: number | null;
+  kind: OutboxKind;
   leaseToken: string;
   attempts: number;
   maxAttempts: number;
@@ -104,6 +106,8 @@ export async function claimDueMessages({ now, limit, leaseMs }: { now: Date; lim
 function toClaimed(row: OutboxMessage, leaseToken: string): ClaimedMessage {
   return {
     id: row.id,
+    teamId: row.teamId ?? null,
+    kind: row.kind,
     leaseToken,
     attempts: row.attempts,
     maxAttempts: row.maxAttempts,

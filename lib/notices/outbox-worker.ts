@@ -1,5 +1,7 @@
 import "server-only";
+import { isJoinedMember } from "@/lib/data/notification-settings";
 import { claimDueMessages, markMessageAttemptFailed, markMessageSent, nextOutboxDueAt, type ClaimedMessage } from "@/lib/data/outbox";
+import type { OutboxKind } from "@/models/outbox-message";
 import { readMailConfig, type MailConfig } from "@/lib/mail/mail-config";
 import { sendMail } from "@/lib/mail/transport";
 import { backoffDelayMs, DEFAULT_BACKOFF, type BackoffPolicy } from "./backoff";
@@ -38,6 +40,9 @@ function describeError(err: unknown): string {
   return parts.join(" · ");
 }
 
+/** Team mail that only members may read; invitations and reset links go to people who are not (yet) members. */
+const MEMBERS_ONLY: ReadonlySet<OutboxKind> = new Set(["alert", "digest", "calendar_request", "calendar_cancel"]);
+
 function domainOf(from: string): string {
   return /@([^>\s]+)>?\s*$/.exec(from)?.[1] ?? "sprintwright.local";
 }
@@ -55,8 +60,18 @@ export function createOutboxWorker(options: OutboxWorkerOptions = {}): OutboxWor
   let timer: NodeJS.Timeout | null = null;
   let started = false;
 
+  /** Someone removed between queueing and sending gets nothing of the team's: the row fails for good instead. */
+  async function stillMember(message: ClaimedMessage): Promise<boolean> {
+    if (!MEMBERS_ONLY.has(message.kind) || message.teamId === null) return true;
+    if (await isJoinedMember({ teamId: message.teamId, email: message.toEmail })) return true;
+    await markMessageAttemptFailed({ id: message.id, leaseToken: message.leaseToken, error: "Not sent: the recipient is not a member of the team", retryAt: null });
+    log(`message ${message.id} to ${message.toEmail}: not sent, no longer a member of team ${message.teamId}`);
+    return false;
+  }
+
   async function deliver(message: ClaimedMessage, config: MailConfig | Error): Promise<keyof RoundResult> {
     try {
+      if (!(await stillMember(message))) return "failed";
       if (config instanceof Error) throw config;
       const messageId = await sendMail(
         {

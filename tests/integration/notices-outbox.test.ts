@@ -18,8 +18,9 @@ const team = await createTestTeam(d, { name: "Outbox Club" });
 
 const note = (subject: string) => renderEmail({ subject, heading: subject, parts: [{ kind: "paragraph", text: "Hello" }], footer: "Test" });
 
+// Delivery mechanics only: an invitation may go to anyone (team mail to non-members is dropped, notices-recipients.test.ts).
 async function queue(to: string, subject: string, extra: { maxAttempts?: number } = {}) {
-  return d.sequelize.transaction((transaction) => enqueueMail({ transaction, teamId: team.teamId, kind: "alert", to, mail: note(subject), ...extra }));
+  return d.sequelize.transaction((transaction) => enqueueMail({ transaction, teamId: team.teamId, kind: "invitation", to, mail: note(subject), ...extra }));
 }
 
 describe("outbox", () => {
@@ -35,8 +36,8 @@ describe("outbox", () => {
 
   it("skips a second message with the same dedupe key", async () => {
     const key = { dedupeKey: "digest:1:1:2026-12-01" };
-    const first = await d.sequelize.transaction((transaction) => enqueueMail({ transaction, teamId: team.teamId, kind: "digest", to: "a@outbox.test", mail: note("Once"), ...key }));
-    const second = await d.sequelize.transaction((transaction) => enqueueMail({ transaction, teamId: team.teamId, kind: "digest", to: "a@outbox.test", mail: note("Once"), ...key }));
+    const first = await d.sequelize.transaction((transaction) => enqueueMail({ transaction, teamId: team.teamId, kind: "invitation", to: "a@outbox.test", mail: note("Once"), ...key }));
+    const second = await d.sequelize.transaction((transaction) => enqueueMail({ transaction, teamId: team.teamId, kind: "invitation", to: "a@outbox.test", mail: note("Once"), ...key }));
     expect(first).toBeTypeOf("number");
     expect(second).toBeNull();
     await n.worker.runOnce();

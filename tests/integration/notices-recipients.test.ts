@@ -2,9 +2,10 @@
 // invited physio whose invitation expired, or an invitation sent to a mistyped address, gets the invitation
 // and nothing else. Real path: planner data write → load engine → outbox → fake SMTP → mailbox folder.
 import { describe, expect, it } from "vitest";
-import { addMember } from "@/lib/data/members";
 import { teamToday } from "@/lib/data/load";
 import { listAlertRecipients, listAthleteContacts, listDigestSubscribers } from "@/lib/data/notification-settings";
+import { addMember, removeMember } from "@/lib/data/members";
+import { enqueueMail, listOutbox } from "@/lib/data/outbox";
 import { createSessions } from "@/lib/data/plan-sessions";
 import { addDays, startOfWeek } from "@/lib/load";
 import { addMemberSchema } from "@/lib/validations/members";
@@ -68,6 +69,18 @@ describe("who receives the team's mail", () => {
     await createSessions({ teamId: team.teamId, actorUserId: head, input });
     await n.worker.runOnce();
     expect((await n.mailTo("ria@recipientclub.test")).map((m) => m.subject)).toEqual(["Hana Head invited you to Recipient Club on Sprintwright"]);
+  });
+
+  it("mail queued for someone removed before it went out is not sent", async () => {
+    const coach = team.users.coach!;
+    await d.sequelize.transaction((transaction) =>
+      enqueueMail({ transaction, teamId: team.teamId, kind: "alert", to: "coach@recipientclub.test", mail: { subject: "Queued flag", html: "<p>Ada</p>", text: "Ada Athlete" } }),
+    );
+    await removeMember({ teamId: team.teamId, membershipId: coach.membershipId });
+    await n.worker.runOnce();
+    expect((await n.mailTo("coach@recipientclub.test")).map((m) => m.subject)).not.toContain("Queued flag");
+    const [row] = (await listOutbox({ teamId: team.teamId, status: "failed" })).filter((r) => r.toEmail === "coach@recipientclub.test");
+    expect(row!.lastError).toMatch(/not a member/);
   });
 
   it("a membership of an account that cannot sign in (older data) receives nothing either", async () => {
