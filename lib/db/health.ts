@@ -41,7 +41,7 @@ async function canWrite(storage: string): Promise<boolean> {
 
 /**
  * Whether the database answers reads and could take a write now. Never waits behind this process's writers:
- * while one of them holds its turn the answer comes from how long it has held it.
+ * while one of them holds its turn the answer comes from whether it is stuck at BEGIN, or has held it long.
  */
 export async function databaseState({ sequelize, storage }: { sequelize: Sequelize; storage: string }): Promise<DatabaseState> {
   try {
@@ -60,6 +60,12 @@ export async function databaseState({ sequelize, storage }: { sequelize: Sequeli
     const state = free ? "ok" : "busy";
     lastProbe.set(storage, { at: Date.now(), state });
     return state;
+  }
+  // Our own writer holds the turn. If it is still waiting at BEGIN after the probe's wait, another process has the lock.
+  if (queue.beginSince !== null) {
+    const waited = Date.now() - queue.beginSince;
+    if (waited < PROBE_WAIT_MS) await new Promise((r) => setTimeout(r, PROBE_WAIT_MS - waited));
+    if (queue.beginSince !== null && Date.now() - queue.beginSince >= PROBE_WAIT_MS) return "busy";
   }
   const stuck = (queue.heldSince !== null && now - queue.heldSince > STUCK_MS) || (queue.lastBusyAt !== null && now - queue.lastBusyAt < STUCK_MS);
   return stuck ? "busy" : "ok";

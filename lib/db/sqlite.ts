@@ -67,6 +67,15 @@ export function queueWrites(sequelize: Sequelize, queue: WriteQueue): void {
     return unmanaged(queue, () => begin(options) as Promise<Transaction>);
   };
   const queued = async (sql: unknown, options?: QueryOptions): Promise<unknown> => {
+    if (options?.transaction && typeof sql === "string" && /^BEGIN\b/i.test(sql.trim())) {
+      // Only another process can make BEGIN wait: the health probe reads this.
+      queue.beginSince = Date.now();
+      try {
+        return await query(sql, options);
+      } finally {
+        queue.beginSince = null;
+      }
+    }
     if (!isWrite(sql, options)) return query(sql, options);
     return transaction(async (t: Transaction) => query(sql, { ...options, transaction: t }));
   };

@@ -16,6 +16,8 @@ export class WriteQueue {
   heldSince: number | null = null;
   /** When a writer last gave up on SQLite's lock. */
   lastBusyAt: number | null = null;
+  /** When the current writer sent BEGIN, while it waits for SQLite's lock (null once it has it). */
+  beginSince: number | null = null;
 
   constructor(private readonly maxWaitMs: number) {}
 

@@ -59,7 +59,13 @@ describe("SQLite writes", () => {
     try {
       expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("busy");
       const started = Date.now();
-      const [results, action] = await Promise.all([Promise.allSettled(Array.from({ length: 5 }, (_, i) => newTemplate(`Blocked ${i}`))), runAction(() => newTemplate("Blocked in a form"))]);
+      const pending = Promise.all([Promise.allSettled(Array.from({ length: 5 }, (_, i) => newTemplate(`Blocked ${i}`))), runAction(() => newTemplate("Blocked in a form"))]);
+      // Now our own writer holds the turn, stuck at BEGIN: health still says busy, without waiting for it.
+      await new Promise((r) => setTimeout(r, 300));
+      const asked = Date.now();
+      expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("busy");
+      expect(Date.now() - asked).toBeLessThan(1000);
+      const [results, action] = await pending;
       const elapsed = Date.now() - started;
       // A server action's form shows the same plain message instead of failing.
       expect(action).toEqual({ ok: false, message: expect.stringMatching(/busy.*Nothing was saved/) });
