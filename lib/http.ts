@@ -3,6 +3,8 @@ import { z } from "zod";
 import { UniqueConstraintError, ValidationError } from "sequelize";
 import { busyResponse, isDatabaseBusy } from "@/lib/db/busy";
 import { AppError, type FieldErrors } from "@/lib/errors";
+import { JSON_BODY_LIMIT, readBodyText } from "@/lib/http-body";
+import { assertSameOrigin } from "@/lib/http-origin";
 
 export function zodFields(error: z.ZodError): FieldErrors {
   const fields: FieldErrors = {};
@@ -46,21 +48,30 @@ export function errorResponse(err: unknown): Response {
 
 type Ctx<P> = { params: Promise<P> };
 
-/** Wraps a route handler so every known error becomes a JSON answer with its status. */
+/**
+ * Wraps a route handler so every known error becomes a JSON answer with its status. Before the handler runs,
+ * a state-changing request from a browser page of another origin is refused (lib/http-origin.ts); every answer
+ * that has not chosen its own caching gets `Cache-Control: no-store` (they are per-user and often private).
+ */
 export function route<P = Record<string, string>>(fn: (req: Request, ctx: Ctx<P>) => Promise<Response>) {
   return async (req: Request, ctx: Ctx<P>): Promise<Response> => {
+    let res: Response;
     try {
-      return await fn(req, ctx);
+      assertSameOrigin(req);
+      res = await fn(req, ctx);
     } catch (err) {
-      return errorResponse(err);
+      res = errorResponse(err);
     }
+    if (!res.headers.has("cache-control")) res.headers.set("cache-control", "no-store");
+    return res;
   };
 }
 
 export async function parseJson<T extends z.ZodType>(req: Request, schema: T): Promise<z.infer<T>> {
+  const text = await readBodyText(req, JSON_BODY_LIMIT);
   let body: unknown;
   try {
-    body = await req.json();
+    body = JSON.parse(text);
   } catch {
     throw new AppError("invalid", "The request body must be JSON", { fields: { _: ["Not valid JSON"] } });
   }
