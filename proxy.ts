@@ -1,16 +1,32 @@
 import { getToken } from "next-auth/jwt";
 import { NextResponse, type NextRequest } from "next/server";
 import { authSecret } from "@/lib/env";
+import { contentSecurityPolicy, newNonce } from "@/lib/security/csp";
+
+// Screens a signed-out visitor is sent to sign in from.
+const SIGNED_IN_ONLY = /^\/(home|plan|load|alerts|squad|me|members|settings|mailbox)(\/|$)/;
 
 // Early redirect only: every page, action and handler still checks access through lib/auth.
-export async function proxy(req: NextRequest) {
+async function signInGate(req: NextRequest): Promise<NextResponse | null> {
   const token = await getToken({ req, secret: authSecret() });
-  if (token) return NextResponse.next();
+  if (token) return null;
   const url = new URL("/sign-in", req.url);
   url.searchParams.set("callbackUrl", req.nextUrl.pathname + req.nextUrl.search);
   return NextResponse.redirect(url);
 }
 
+export async function proxy(req: NextRequest) {
+  const csp = contentSecurityPolicy({ nonce: newNonce(), dev: process.env.NODE_ENV === "development" });
+  const gate = SIGNED_IN_ONLY.test(req.nextUrl.pathname) ? await signInGate(req) : null;
+  // Next.js takes the nonce for its scripts from the policy on the request.
+  const headers = new Headers(req.headers);
+  headers.set("content-security-policy", csp);
+  const res = gate ?? NextResponse.next({ request: { headers } });
+  res.headers.set("content-security-policy", csp);
+  return res;
+}
+
 export const config = {
-  matcher: ["/home/:path*", "/plan/:path*", "/load/:path*", "/alerts/:path*", "/squad/:path*", "/me/:path*", "/members/:path*", "/settings/:path*", "/mailbox/:path*"],
+  // Every page, for its nonce; not the API (its policy comes from next.config.mjs) nor build files.
+  matcher: ["/((?!api/|_next/static/|_next/image|favicon\\.ico|icon\\.svg).*)"],
 };

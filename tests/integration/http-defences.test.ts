@@ -66,7 +66,7 @@ describe("request size limit (1 MB of JSON)", () => {
 describe("Origin check on state-changing requests", () => {
   it("refuses a write from another site's page with 403 and writes nothing", async () => {
     const before = await count();
-    for (const headers of [{ origin: "https://evil.test" }, { origin: "null" }, { origin: "http://127.0.0.1:3000.evil.test" }, { "sec-fetch-site": "cross-site" }, { "sec-fetch-site": "same-site", origin: "http://127.0.0.1:3000" }]) {
+    for (const headers of <Record<string, string>[]>[{ origin: "https://evil.test" }, { origin: "null" }, { origin: "http://127.0.0.1:3000.evil.test" }, { "sec-fetch-site": "cross-site" }, { "sec-fetch-site": "same-site", origin: "http://127.0.0.1:3000" }]) {
       const res = await post(JSON.stringify(template), headers);
       expect(res.status, JSON.stringify(headers)).toBe(403);
     }
@@ -74,7 +74,7 @@ describe("Origin check on state-changing requests", () => {
   });
 
   it("accepts this server's own origin, the configured app URL, and clients that send no Origin", async () => {
-    for (const headers of [{ origin: "http://127.0.0.1:3000", "sec-fetch-site": "same-origin" }, { origin: "https://club.sprintwright.test" }, {}]) {
+    for (const headers of <Record<string, string>[]>[{ origin: "http://127.0.0.1:3000", "sec-fetch-site": "same-origin" }, { origin: "https://club.sprintwright.test" }, {}]) {
       expect((await post(JSON.stringify(template), headers)).status, JSON.stringify(headers)).toBe(201);
     }
     // Reads are not checked: a link from another site may open a page that then fetches its data.
