@@ -1,4 +1,5 @@
 import { z } from "zod";
+import "./jitless";
 import { isLocalDate } from "@/lib/load/dates";
 
 // Plans, logs, load views and restrictions live within these bounds: wide enough for any history a club keeps

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import "./jitless";
 
 export const ALERT_EMAIL_CHOICES = ["each", "digest", "off"] as const;
 

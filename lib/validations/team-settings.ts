@@ -1,4 +1,5 @@
 import { z } from "zod";
+import "./jitless";
 import { ACWR_METHODS, METRICS, MISSING_LOGS, RECOVERY_WORK, SPEED_ZONES } from "@/lib/load/types";
 
 // Ranges wide enough for any squad, narrow enough that a typo (55 instead of 5.5) is caught.

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import "./jitless";
 
 // Every text field of every schema starts from one of these two, so no control character reaches the
 // database, a calendar line, a CSV cell or an e-mail header. C0 (U+0000–U+001F), DEL and C1 (U+007F–U+009F)
