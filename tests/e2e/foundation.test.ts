@@ -73,6 +73,8 @@ describeBrowser("foundation journeys", () => {
     await page.getByText("Enter a valid e-mail address").waitFor();
     // The way out of a forgotten password answers the same for any address.
     await page.getByRole("link", { name: "Forgot your password?" }).click();
+    // Pages render per request (their CSP nonce), so wait for the new page before typing into its field.
+    await page.getByRole("button", { name: "Send reset link" }).waitFor();
     await page.getByLabel("E-mail").fill("someone@nowhere.test");
     await page.getByRole("button", { name: "Send reset link" }).click();
     await page.getByTestId("reset-sent").waitFor();
