@@ -15,7 +15,14 @@ async function signInGate(req: NextRequest): Promise<NextResponse | null> {
   return NextResponse.redirect(url);
 }
 
+// Same figure as next.config.mjs serverActions.bodySizeLimit: over it Next.js itself answers 500, so a
+// declared length over it is answered 413 here first.
+const ACTION_BODY_LIMIT = 200 * 1024;
+
 export async function proxy(req: NextRequest) {
+  if (req.headers.has("next-action") && Number(req.headers.get("content-length") ?? 0) > ACTION_BODY_LIMIT) {
+    return new NextResponse("The request body is over 200 kB", { status: 413, headers: { "content-type": "text/plain; charset=utf-8" } });
+  }
   const csp = contentSecurityPolicy({ nonce: newNonce(), dev: process.env.NODE_ENV === "development" });
   const gate = SIGNED_IN_ONLY.test(req.nextUrl.pathname) ? await signInGate(req) : null;
   // Next.js takes the nonce for its scripts from the policy on the request.

@@ -3,6 +3,7 @@
 // "securitypolicyviolation" event), and the HTTP answers carry the headers OWASP ASVS 4.0 §14.4 asks for.
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, expect, it } from "vitest";
+import { actionRefs } from "./authz-call";
 import { describeBrowser, launchBrowser, signIn, apiSession } from "./harness";
 import { startMailApp, type MailApp } from "./notices-app";
 
@@ -131,5 +132,17 @@ describeBrowser("security headers", () => {
     expect(evil.status).toBe(403);
     const own = await coach.fetch(`/api/teams/${teamId}/templates`, { method: "POST", headers: { "content-type": "application/json", origin: app.url }, body: template });
     expect(own.status).toBe(201);
+  }, 60_000);
+
+  it("a server action refuses a body over its 200 kB limit (next.config serverActions.bodySizeLimit)", async () => {
+    const coach = await apiSession(app, "coach@harbourvale.test");
+    const [key, ref] = [...actionRefs()].find(([k]) => k.startsWith("ACTION /squad#"))!;
+    const send = (size: number) =>
+      coach.fetch(ref.path, { method: "POST", headers: { "next-action": ref.id, accept: "text/x-component", "content-type": "text/plain;charset=UTF-8", origin: app.url }, body: JSON.stringify([null, { name: "x".repeat(size) }]) });
+    const small = await send(10);
+    expect(small.status, key).toBe(200);
+    const big = await send(300 * 1024);
+    expect(big.status, key).toBe(413);
+    expect((await fetch(`${app.url}/api/health`)).status).toBe(200);
   }, 60_000);
 });
