@@ -4,7 +4,7 @@ import { useCallback, useState } from "react";
 import { useSWRConfig } from "swr";
 import { applyChange, mergeSaved, type TempIds } from "@/lib/plan/apply";
 import { findSession, type PlanChange } from "@/lib/plan/drop";
-import { sessionBlockPath, sessionBlocksPath, sessionPath, teamSessionsPath, teamTemplatesPath, templatePath, weekToolPath } from "@/lib/plan/keys";
+import { planWeekKey, sessionBlockPath, sessionBlocksPath, sessionPath, teamSessionsPath, teamTemplatesPath, templatePath, weekToolPath } from "@/lib/plan/keys";
 import { rowLoad } from "@/lib/plan/preview";
 import type { PlanSession, PlanTemplate, PlanWeek, PlanWriteResult } from "@/lib/plan/types";
 import { popUndo, pushUndo, undoForChange, undoForDelete, undoForEdit, type UndoEntry, type UndoOp } from "@/lib/plan/undo";
@@ -148,10 +148,22 @@ export function usePlanActions({ swrKey, current, askOverride }: { swrKey: strin
     [current, explain, mutate, say, swrKey, track, withOverride],
   );
 
-  /** Writes the server's answer into the grid and refetches the numbers. */
+  /**
+   * Writes the server's answer into the grid and refetches the numbers. The week seeded from the server page
+   * is SWR fallback data, not cache, until the first write: then `data` is undefined and the week on screen
+   * (the same key) is the one to merge into, or the grid would keep the old card and versions.
+   */
   const settle = useCallback(
-    (res: PlanWriteResult) => mutate<PlanWeek, PlanWriteResult>(swrKey, Promise.resolve(res), { populateCache: (r, data) => (data ? withServerRows(data, r, []) : data!), revalidate: (data) => needsRefetch(data) }),
-    [mutate, swrKey],
+    (res: PlanWriteResult) =>
+      mutate<PlanWeek, PlanWriteResult>(swrKey, Promise.resolve(res), {
+        populateCache: (r, data) => {
+          const shown = current();
+          const base = data ?? (shown && planWeekKey(shown.teamId, shown.weekStart) === swrKey ? shown : undefined);
+          return base ? withServerRows(base, r, []) : data!;
+        },
+        revalidate: (data) => data === undefined || needsRefetch(data),
+      }),
+    [current, mutate, swrKey],
   );
 
   const runOp = useCallback(async (op: UndoOp, versions: Map<number, number>, week: PlanWeek, override?: Override): Promise<PlanWriteResult> => {

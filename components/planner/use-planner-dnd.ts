@@ -56,33 +56,6 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
   const pointed = useBox<DropTarget | null>(null);
   const previewed = useBox<string | null>(null);
 
-  // Alt held while dropping copies instead of moving; Escape leaves the card menu's copy mode.
-  useEffect(() => {
-    const on = (e: KeyboardEvent | PointerEvent) => {
-      if (e.altKey !== alt.get()) {
-        alt.set(e.altKey);
-        setAltDown(e.altKey);
-      }
-      if (e instanceof KeyboardEvent && e.key === "Escape" && !dragging.get()) {
-        armed.set(null);
-        setCopyArmedId(null);
-      }
-    };
-    // Capture phase: the position is known before dnd-kit's own listener turns the move into a render.
-    const move = (e: PointerEvent) => {
-      pointer.set({ x: e.clientX, y: e.clientY });
-      on(e);
-    };
-    window.addEventListener("keydown", on);
-    window.addEventListener("keyup", on);
-    window.addEventListener("pointermove", move, { capture: true });
-    return () => {
-      window.removeEventListener("keydown", on);
-      window.removeEventListener("keyup", on);
-      window.removeEventListener("pointermove", move, { capture: true });
-    };
-  }, [alt, armed, dragging, pointer]);
-
   const armCopy = useCallback((sessionId: number | null) => {
     armed.set(sessionId);
     setCopyArmedId(sessionId);
@@ -176,12 +149,10 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
     return p ? cellAtPoint(p.x, p.y) : null;
   }, [aimed, byKeyboard, pointer]);
 
-  // Called on every move: only a new cell, or a flip of the copy key, previews again.
-  const onDragMove = useCallback(
-    (e: DragMoveEvent) => {
-      const t0 = performance.now();
+  /** Previews the cell under the item now; only a new cell, or a flip of the copy key, previews again. */
+  const previewNow = useCallback(
+    (data: DragData | undefined, t0 = performance.now()) => {
       const w = week.get();
-      const data = e.active.data.current as DragData | undefined;
       const target = cellNow();
       pointed.set(target);
       const key = target && data ? `${dropId(target)}:${copies(data.source)}` : null;
@@ -197,6 +168,39 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
     },
     [cellNow, copies, pointed, previewFor, previewed, setHover, week],
   );
+
+  // Called on every move.
+  const onDragMove = useCallback((e: DragMoveEvent) => previewNow(e.active.data.current as DragData | undefined), [previewNow]);
+
+  // Alt held while dropping copies instead of moving; Escape leaves the card menu's copy mode.
+  useEffect(() => {
+    const on = (e: KeyboardEvent | PointerEvent) => {
+      if (e.altKey !== alt.get()) {
+        alt.set(e.altKey);
+        setAltDown(e.altKey);
+        // A keyboard drag or a still pointer sends no move: preview the same cell as a copy (or a move) now.
+        const d = dragging.get();
+        if (d) previewNow(d);
+      }
+      if (e instanceof KeyboardEvent && e.key === "Escape" && !dragging.get()) {
+        armed.set(null);
+        setCopyArmedId(null);
+      }
+    };
+    // Capture phase: the position is known before dnd-kit's own listener turns the move into a render.
+    const move = (e: PointerEvent) => {
+      pointer.set({ x: e.clientX, y: e.clientY });
+      on(e);
+    };
+    window.addEventListener("keydown", on);
+    window.addEventListener("keyup", on);
+    window.addEventListener("pointermove", move, { capture: true });
+    return () => {
+      window.removeEventListener("keydown", on);
+      window.removeEventListener("keyup", on);
+      window.removeEventListener("pointermove", move, { capture: true });
+    };
+  }, [alt, armed, dragging, pointer, previewNow]);
 
   const onDragCancel = useCallback(() => {
     dragging.set(null);
