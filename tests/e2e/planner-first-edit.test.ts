@@ -40,11 +40,13 @@ async function openPlan(page: Page, app: App) {
   await page.getByTestId("plan-grid").waitFor();
 }
 
-async function editMinutes(page: Page, athleteId: number, date: string, minutes: number) {
+/** Edits a card's minutes (and start time, which the card shows); returns the minutes the editor opened with. */
+async function editMinutes(page: Page, athleteId: number, date: string, minutes: number, startTime?: string) {
   await cards(page, athleteId, date).first().locator("button").first().click();
   await page.getByTestId("session-editor").waitFor();
   const before = Number(await page.locator("#s-duration").inputValue());
   await page.locator("#s-duration").fill(String(minutes));
+  if (startTime) await page.locator("#s-start").fill(startTime);
   await page.getByTestId("save-session").click();
   await page.getByTestId("session-editor").waitFor({ state: "hidden" });
   await settled(page);
@@ -82,15 +84,16 @@ describeBrowser("planner: the first edit after opening, and the copy preview", (
     const start = await srpe(page, athlete);
 
     // sRPE = RPE × minutes (Foster et al. 2001, J Strength Cond Res 15(1):109-115): 5 × 40 = 200 AU.
-    expect(await editMinutes(page, athlete, day(1), 70)).toBe(40);
+    expect(await editMinutes(page, athlete, day(1), 70, "17:30")).toBe(40);
     expect(await notice(page).getAttribute("data-tone")).toBe("saved");
     expect(await srpe(page, athlete)).toBe(start + 5 * 30);
-    expect(await cards(page, athlete, day(1)).first().textContent()).toMatch(/70/);
+    expect(await cards(page, athlete, day(1)).first().textContent()).toMatch(/17:30/);
 
     await page.getByTestId("undo").click();
     await page.locator('[data-testid="plan-notice"]', { hasText: "Undone" }).waitFor();
     await settled(page);
     expect(await srpe(page, athlete)).toBe(start);
+    expect(await cards(page, athlete, day(1)).first().textContent()).toMatch(/16:00/);
 
     // The editor opens the values the undo restored, and the save is not taken for someone else's change.
     expect(await editMinutes(page, athlete, day(1), 55)).toBe(40);
