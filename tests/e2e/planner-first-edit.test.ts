@@ -147,4 +147,28 @@ describeBrowser("planner: the first edit after opening, and the copy preview", (
     expect(await cards(page, athlete, day(2)).count()).toBe(1);
     expect(await cards(page, athlete, day(3)).count()).toBe(1);
   });
+  it("recomputes the copy preview when Alt is pressed over a cell with the mouse held still", async () => {
+    const athlete = plan.athletes[2].id;
+    await createSession(page, teamId, athlete, day(4), "Still mouse");
+    await openPlan(page, app);
+    const from = cards(page, athlete, day(4)).first().locator("button").first();
+    await from.scrollIntoViewIfNeeded();
+    const a = (await from.boundingBox())!;
+    await page.mouse.move(a.x + a.width / 2, a.y + a.height / 2);
+    await page.mouse.down();
+    await page.mouse.move(a.x + a.width / 2 + 8, a.y + a.height / 2 + 8, { steps: 3 });
+    const b = (await cell(page, athlete, day(5)).boundingBox())!;
+    await page.mouse.move(b.x + b.width / 2, b.y + Math.min(b.height / 2, 30), { steps: 12 });
+    const preview = page.getByTestId("drop-preview");
+    await preview.filter({ hasText: "moved to" }).waitFor();
+    // No pointer move from here on: only the key changes what a drop would do.
+    await page.keyboard.down("Alt");
+    await preview.filter({ hasText: "Copy:" }).filter({ hasText: "copy of" }).waitFor();
+    await page.keyboard.up("Alt");
+    await preview.filter({ hasText: "moved to" }).waitFor();
+    await page.mouse.up();
+    await settled(page);
+    expect(await cards(page, athlete, day(4)).count()).toBe(0);
+    expect(await cards(page, athlete, day(5)).count()).toBe(1);
+  });
 });
