@@ -70,6 +70,12 @@ describeBrowser("planner: the first edit after opening, and the copy preview", (
     teamId = (await page.getByTestId("planner").getAttribute("data-team-id"))!;
     plan = await page.evaluate(async (url) => (await fetch(url)).json() as Promise<PlanWeek>, `/api/teams/${teamId}/plan?week=${week}`);
   });
+  /** A new session's card on a freshly opened plan: its button, which opens the editor and starts a drag. */
+  const freshCard = async (athleteId: number, date: string, title: string) => {
+    await createSession(page, teamId, athleteId, date, title);
+    await openPlan(page, app);
+    return cards(page, athleteId, date).first().locator("button").first();
+  };
   afterAll(async () => {
     await page?.close();
     await browser?.close();
@@ -104,9 +110,7 @@ describeBrowser("planner: the first edit after opening, and the copy preview", (
 
   it("recomputes the copy preview when Alt is pressed and released during a keyboard drag", async () => {
     const athlete = plan.athletes[1].id;
-    await createSession(page, teamId, athlete, day(2), "Alt copy");
-    await openPlan(page, app);
-    const handle = cards(page, athlete, day(2)).first().locator("button").first();
+    const handle = await freshCard(athlete, day(2), "Alt copy");
     await handle.focus();
     await page.keyboard.press("Space");
     await page.locator('[data-testid="drag-hint"][data-active="true"]').waitFor();
@@ -147,11 +151,10 @@ describeBrowser("planner: the first edit after opening, and the copy preview", (
     expect(await cards(page, athlete, day(2)).count()).toBe(1);
     expect(await cards(page, athlete, day(3)).count()).toBe(1);
   });
+
   it("recomputes the copy preview when Alt is pressed over a cell with the mouse held still", async () => {
     const athlete = plan.athletes[2].id;
-    await createSession(page, teamId, athlete, day(4), "Still mouse");
-    await openPlan(page, app);
-    const from = cards(page, athlete, day(4)).first().locator("button").first();
+    const from = await freshCard(athlete, day(4), "Still mouse");
     await from.scrollIntoViewIfNeeded();
     const a = (await from.boundingBox())!;
     await page.mouse.move(a.x + a.width / 2, a.y + a.height / 2);
