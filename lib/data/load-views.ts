@@ -157,7 +157,11 @@ function defaultRange(today: string, weekStartDay: number): { from: string; to: 
 }
 
 /** One athlete's daily series, acute/chronic/ratio for one metric, planned alongside, and this week's flags. */
-export async function getAthleteLoad({ teamId, athleteId, from, to, view, metric, today, clock }: { teamId: number; athleteId: number; from?: string; to?: string; view: LoadView; metric?: Metric; today?: string; clock?: Clock }): Promise<AthleteLoadDto> {
+/**
+ * `withDrafts: false` is the athlete's own view: a coach's drafts are invisible to athletes, so their figures must
+ * not count (and so reveal) them; staff see the week being planned.
+ */
+export async function getAthleteLoad({ teamId, athleteId, from, to, view, metric, today, clock, withDrafts = true }: { teamId: number; athleteId: number; from?: string; to?: string; view: LoadView; metric?: Metric; today?: string; clock?: Clock; withDrafts?: boolean }): Promise<AthleteLoadDto> {
   const probe = clock ?? (await getTeamClock({ teamId }));
   const now = today ?? teamToday({ timeZone: probe.timeZone });
   const fallback = defaultRange(now, probe.weekStartDay);
@@ -170,7 +174,8 @@ export async function getAthleteLoad({ teamId, athleteId, from, to, view, metric
   if (inputs.teamId !== teamId) throw new AppError("not_found", "Not found");
   const { athlete, settings } = inputs;
   const chosen = metric ?? settings.acwrMetric;
-  const base = { profile: athlete.profile, settings: { ...settings, acwrMetric: chosen }, sessions: athlete.sessions, from: range.from, to: range.to, weekStart };
+  const sessions = withDrafts ? athlete.sessions : athlete.sessions.filter((s) => s.status !== "draft");
+  const base = { profile: athlete.profile, settings: { ...settings, acwrMetric: chosen }, sessions, from: range.from, to: range.to, weekStart };
   const load = computeAthleteLoad({ ...base, logs: athlete.logs, today: now, view });
   // "Planned": the engine's projected view with today before every session and no logs counts the whole plan.
   const plan = computeAthleteLoad({ ...base, logs: [], today: "1970-01-01", view: "projected" });

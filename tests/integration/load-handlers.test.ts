@@ -66,6 +66,27 @@ beforeEach(() => as(null));
 describe("GET /api/athletes/[athleteId]/load", () => {
   const call = (athleteId: number, q = "") => athleteLoad.GET(get(`/api/athletes/${athleteId}/load${q}`), p({ athleteId: String(athleteId) })).then(json);
 
+  it("leaves a coach's draft out of the athlete's own figures (drafts are invisible to athletes), not the coach's", async () => {
+    const date = addDays(today, 4);
+    as(ada.userId);
+    const before = await call(ada.athleteId!, "?view=projected&metric=hsrM");
+    as(a.users.coach.userId);
+    const coachBefore = await call(ada.athleteId!, "?view=projected&metric=hsrM");
+    const draft = await d.PlannedSession.create({ teamId: a.teamId, athleteId: ada.athleteId!, date, startTime: "17:00", durationMin: 60, title: "Speed", plannedRpe: 6, status: "draft", notes: null, publishedAt: null });
+    await d.SessionBlock.create({ sessionId: draft.id, templateId: null, position: 0, ...accel });
+    try {
+      as(ada.userId);
+      expect(await call(ada.athleteId!, "?view=projected&metric=hsrM")).toEqual(before);
+      as(a.users.coach.userId);
+      const coachAfter = await call(ada.athleteId!, "?view=projected&metric=hsrM");
+      const day = (r: typeof coachAfter) => (r.body.days as { date: string; planned: number }[]).find((x) => x.date === date)!;
+      expect(day(coachBefore).planned).toBe(0);
+      expect(day(coachAfter).planned).toBeGreaterThan(0);
+    } finally {
+      await draft.destroy();
+    }
+  });
+
   it("lets an athlete read their own load", async () => {
     as(ada.userId);
     const { status, body } = await call(ada.athleteId!, "?view=actual&metric=hsrM");
