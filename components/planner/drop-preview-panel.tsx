@@ -6,7 +6,7 @@ import { formatNumber } from "@/lib/format/number";
 import type { RowPreview } from "@/lib/plan/preview";
 import type { PlanWeek } from "@/lib/plan/types";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
-import { useHover, usePreviewTiming, type HoverStore } from "./hover-store";
+import { useHover, type HoverStore } from "./hover-store";
 
 /**
  * While something is dragged over a day: what the drop would do and which flags it would raise, with the
@@ -14,7 +14,6 @@ import { useHover, usePreviewTiming, type HoverStore } from "./hover-store";
  */
 export function DropPreviewPanel({ store, week, copying }: { store: HoverStore; week: PlanWeek; copying: boolean }) {
   const hover = useHover(store);
-  usePreviewTiming(store, hover);
   if (!hover || (!hover.refusal && !hover.text)) return null;
   return <PreviewCard week={week} text={hover.text} refusal={hover.refusal} rows={[...hover.rows.values()]} hits={hover.hits} copying={copying} />;
 }

@@ -1,6 +1,6 @@
 "use client";
 
-import { useLayoutEffect, useState, useSyncExternalStore } from "react";
+import { useState, useSyncExternalStore } from "react";
 import type { DragSource, DropTarget } from "@/lib/plan/drop";
 import type { RowPreview } from "@/lib/plan/preview";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
@@ -15,23 +15,11 @@ export type Hover = { source: DragSource; target: DropTarget; rows: Map<number, 
 export class HoverStore {
   private hover: Hover | null = null;
   private listeners = new Set<() => void>();
-  /** performance.now() of the last change, for the benchmark's script timing. */
-  private changedAt: number | null = null;
-
-  /** The time of the last change, once: the probe reads it after the change has rendered. */
-  takeChangedAt = (): number | null => {
-    const t = this.changedAt;
-    this.changedAt = null;
-    return t;
-  };
-
   get = (): Hover | null => this.hover;
 
-  /** `startedAt`: when the work for this hover began (the "over" event), for the timing. */
-  set = (hover: Hover | null, startedAt = performance.now()): void => {
+  set = (hover: Hover | null): void => {
     if (hover === this.hover) return;
     this.hover = hover;
-    this.changedAt = startedAt;
     for (const l of this.listeners) l();
   };
 
@@ -57,11 +45,3 @@ export function useRowPreview(store: HoverStore, athleteId: number): RowPreview 
   return useSyncExternalStore(store.subscribe, () => store.get()?.rows.get(athleteId) ?? null, none);
 }
 
-/** Benchmark probe: script time from a new hover to its committed render (scripts/bench-planner.ts). */
-export function usePreviewTiming(store: HoverStore, hover: Hover | null): void {
-  useLayoutEffect(() => {
-    const t0 = store.takeChangedAt();
-    if (t0 === null || hover === null) return;
-    window.__plannerPerf?.previews.push(performance.now() - t0);
-  }, [hover, store]);
-}

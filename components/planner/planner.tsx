@@ -16,7 +16,7 @@ import { BlockShelf } from "./block-shelf";
 import { ConfirmProvider, removeQuestion, useConfirm } from "./confirm";
 import { describeChange } from "./describe";
 import { DropPreviewPanel } from "./drop-preview-panel";
-import { useBox, useLatest } from "./latest";
+import { useLatest } from "./latest";
 import { NoticeToast } from "./notice-toast";
 import { OverrideProvider, useOverrideReason } from "./override-dialog";
 import { SessionCard, type CardActions } from "./session-card";
@@ -75,15 +75,12 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
   const [editing, setEditing] = useState<number | null>(null);
   const [templateEditor, setTemplateEditor] = useState<{ open: boolean; template: PlanTemplate | null }>({ open: false, template: null });
   const collapsedBox = useLatest(collapsed);
-  const dropStart = useBox<number | null>(null);
   const { say, saveChange, deleteSession, clearUndo } = act;
 
   const onDrop = useCallback(
     (change: PlanChange, hits: RestrictionHit[]) => {
       const save = (override?: { reason: string }) => {
-        const t0 = performance.now();
-        dropStart.set(t0);
-        void saveChange(change, override).then(() => requestAnimationFrame(() => window.__plannerPerf?.saved?.push(performance.now() - t0)));
+        void saveChange(change, override);
       };
       if (hits.length === 0) return save();
       // Warned while hovering; the drop itself asks why before anything is saved.
@@ -91,18 +88,11 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
       const what = w ? describeChange(w, change) : "this session";
       void askOverride(hits, what).then((reason) => (reason === null ? say("info", `Not planned: ${what}. The restriction stands.`) : save({ reason })));
     },
-    [askOverride, dropStart, saveChange, say, weekBox],
+    [askOverride, saveChange, say, weekBox],
   );
   const onRefused = useCallback((reason: string) => say("refused", reason), [say]);
   const dnd = usePlannerDnd({ week: weekBox, collapsed: collapsedBox, onDrop, onRefused });
 
-  // Benchmark: from a drop to the server's numbers on screen (the refetch after the save has landed).
-  useEffect(() => {
-    const t0 = dropStart.get();
-    if (isValidating || t0 === null || act.saving > 0) return;
-    dropStart.set(null);
-    requestAnimationFrame(() => window.__plannerPerf?.confirmed?.push(performance.now() - t0));
-  }, [isValidating, act.saving, dropStart]);
 
   // Ctrl/⌘+Z undoes the last change (not while typing in a field or in a dialog).
   const undoBox = useLatest(act.undo);

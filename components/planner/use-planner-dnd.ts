@@ -15,14 +15,6 @@ import { groupKey } from "./group-row";
 import { useHoverStore } from "./hover-store";
 import { useBox, type Latest } from "./latest";
 
-/** Set by scripts/bench-planner.ts (addInitScript); the page records its own timings into it. */
-type PerfLog = { previews: number[]; compute?: number[]; saved?: number[]; confirmed?: number[] };
-declare global {
-  interface Window {
-    __plannerPerf?: PerfLog;
-  }
-}
-
 type Preview = { week: PlanWeek; key: string; outcome: ReturnType<typeof resolveDrop>; rows: RowPreview[]; hits: RestrictionHit[] };
 
 type Args = {
@@ -151,7 +143,7 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
 
   /** Previews the cell under the item now; only a new cell, or a flip of the copy key, previews again. */
   const previewNow = useCallback(
-    (data: DragData | undefined, t0 = performance.now()) => {
+    (data: DragData | undefined) => {
       const w = week.get();
       const target = cellNow();
       pointed.set(target);
@@ -163,8 +155,7 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
         return;
       }
       const { outcome, rows, hits } = previewFor(w, data.source, target);
-      window.__plannerPerf?.compute?.push(performance.now() - t0);
-      setHover({ source: data.source, target, rows: new Map(rows.map((r) => [r.athleteId, r])), refusal: outcome && !outcome.ok ? outcome.reason : null, text: outcome?.ok ? describeChange(w, outcome.change) : "", hits }, t0);
+      setHover({ source: data.source, target, rows: new Map(rows.map((r) => [r.athleteId, r])), refusal: outcome && !outcome.ok ? outcome.reason : null, text: outcome?.ok ? describeChange(w, outcome.change) : "", hits });
     },
     [cellNow, copies, pointed, previewFor, previewed, setHover, week],
   );
