@@ -3,7 +3,10 @@
 const everywhere = [
   { key: "X-Content-Type-Options", value: "nosniff" },
   { key: "Referrer-Policy", value: "same-origin" },
-  { key: "Permissions-Policy", value: "camera=(), microphone=(), geolocation=(), payment=(), usb=(), browsing-topics=()" },
+  {
+    key: "Permissions-Policy",
+    value: "camera=(), microphone=(), geolocation=(), payment=(), usb=(), browsing-topics=()",
+  },
   { key: "X-Frame-Options", value: "DENY" },
   { key: "Cross-Origin-Opener-Policy", value: "same-origin" },
 ];
@@ -13,7 +16,10 @@ const nextConfig = {
   async headers() {
     return [
       { source: "/:path*", headers: everywhere },
-      { source: "/api/:path*", headers: [{ key: "Content-Security-Policy", value: "default-src 'none'; frame-ancestors 'none'" }] },
+      {
+        source: "/api/:path*",
+        headers: [{ key: "Content-Security-Policy", value: "default-src 'none'; frame-ancestors 'none'" }],
+      },
       // `next start` speaks plain HTTP; over HTTPS it sits behind a TLS proxy, which says so in X-Forwarded-Proto.
       // Browsers ignore HSTS received over plain HTTP (RFC 6797 §8.1), so a forged header does no harm.
       {

@@ -21,7 +21,10 @@ const ACTION_BODY_LIMIT = 200 * 1024;
 
 export async function proxy(req: NextRequest) {
   if (req.headers.has("next-action") && Number(req.headers.get("content-length") ?? 0) > ACTION_BODY_LIMIT) {
-    return new NextResponse("The request body is over 200 kB", { status: 413, headers: { "content-type": "text/plain; charset=utf-8" } });
+    return new NextResponse("The request body is over 200 kB", {
+      status: 413,
+      headers: { "content-type": "text/plain; charset=utf-8" },
+    });
   }
   const csp = contentSecurityPolicy({ nonce: newNonce(), dev: process.env.NODE_ENV === "development" });
   const gate = SIGNED_IN_ONLY.test(req.nextUrl.pathname) ? await signInGate(req) : null;

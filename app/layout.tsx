@@ -9,7 +9,8 @@ import type { ReactNode } from "react";
 
 export const metadata: Metadata = {
   title: { default: "Sprintwright", template: "%s · Sprintwright" },
-  description: "Plan speed training week by week, keep sprint and plyometric load progressive, and keep the physio in the loop.",
+  description:
+    "Plan speed training week by week, keep sprint and plyometric load progressive, and keep the physio in the loop.",
 };
 
 export const viewport: Viewport = { themeColor: "#121a25", width: "device-width", initialScale: 1 };

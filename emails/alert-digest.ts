@@ -22,7 +22,9 @@ export function alertDigestEmail(input: AlertDigestEmailInput): RenderedEmail {
     { kind: "subheading", text: `${alert.athleteName}: ${alert.flagLabel}` },
     { kind: "facts", rows: alertFacts(alert) },
     { kind: "link", label: `Open ${alert.athleteName}'s load page`, url: alert.loadUrl },
-    ...(alert.explainUrl ? [{ kind: "link", label: "How this figure is worked out", url: alert.explainUrl } as const] : []),
+    ...(alert.explainUrl
+      ? [{ kind: "link", label: "How this figure is worked out", url: alert.explainUrl } as const]
+      : []),
   ]);
   return renderEmail({
     subject: `${count} for ${input.teamName} · ${formatDayShort(input.date)}`,

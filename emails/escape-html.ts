@@ -27,5 +27,8 @@ export function assertWebUrl(url: string): string {
 
 /** Header values must stay on one line (no CR/LF header injection). */
 export function oneLine(value: string): string {
-  return value.replace(/[\r\n\t]+/g, " ").replace(/\s{2,}/g, " ").trim();
+  return value
+    .replace(/[\r\n\t]+/g, " ")
+    .replace(/\s{2,}/g, " ")
+    .trim();
 }

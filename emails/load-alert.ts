@@ -25,7 +25,9 @@ export function loadAlertEmail(input: LoadAlertEmailInput): RenderedEmail {
       { kind: "paragraph", text: what },
       { kind: "facts", rows: alertFacts(input) },
       { kind: "button", label: "Open the load page", url: input.loadUrl },
-      ...(input.explainUrl ? [{ kind: "link", label: "How this figure is worked out", url: input.explainUrl } as const] : []),
+      ...(input.explainUrl
+        ? [{ kind: "link", label: "How this figure is worked out", url: input.explainUrl } as const]
+        : []),
       { kind: "caution", text: LOAD_FLAG_CAUTION },
     ],
     footer: `You get load flags for ${input.teamName} because of your role in the team.`,

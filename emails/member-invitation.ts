@@ -34,10 +34,18 @@ export function memberInvitationEmail(input: MemberInvitationEmailInput): Render
         text: `${input.inviterName} invited you to join ${input.teamName} on Sprintwright as ${withArticle(role)}.`,
       },
       ...(input.existingAccount
-        ? [{ kind: "paragraph" as const, text: "You already have a Sprintwright account with this address: sign in with it to accept. Nothing is shared with the team until you do." }]
+        ? [
+            {
+              kind: "paragraph" as const,
+              text: "You already have a Sprintwright account with this address: sign in with it to accept. Nothing is shared with the team until you do.",
+            },
+          ]
         : []),
       { kind: "button", label: "Accept the invitation", url: input.acceptUrl },
-      { kind: "paragraph", text: `The link works until ${expires}. After that, ask ${input.inviterName} for a new one.` },
+      {
+        kind: "paragraph",
+        text: `The link works until ${expires}. After that, ask ${input.inviterName} for a new one.`,
+      },
       { kind: "paragraph", text: "If you did not expect this invitation, you can ignore this e-mail." },
     ],
     footer: `Sent on behalf of ${input.teamName}.`,

@@ -25,7 +25,10 @@ export function restrictionOverrideEmail(input: RestrictionOverrideEmailInput): 
     heading: `${input.athleteName}: a restriction was overridden`,
     parts: [
       { kind: "paragraph", text: input.recipientName?.trim() ? `Hello ${input.recipientName.trim()},` : "Hello," },
-      { kind: "paragraph", text: `${input.coachName} planned a session for ${input.athleteName} on ${day} that goes past a restriction the medical staff set.` },
+      {
+        kind: "paragraph",
+        text: `${input.coachName} planned a session for ${input.athleteName} on ${day} that goes past a restriction the medical staff set.`,
+      },
       {
         kind: "facts",
         rows: [
@@ -36,7 +39,10 @@ export function restrictionOverrideEmail(input: RestrictionOverrideEmailInput): 
         ],
       },
       { kind: "button", label: "Open the athlete", url: input.athleteUrl },
-      { kind: "caution", text: "The plan can still be changed. Talk it through with the coach if the session should not go ahead." },
+      {
+        kind: "caution",
+        text: "The plan can still be changed. Talk it through with the coach if the session should not go ahead.",
+      },
     ],
     footer: `You get this because you are medical staff of ${input.teamName} in Sprintwright.`,
   });

@@ -16,7 +16,9 @@ export function sessionCancelledEmail(input: SessionCancelledEmailInput): Render
   const sessions = [...input.sessions].sort(byStart);
   const [first] = sessions;
   const single = sessions.length === 1 && first;
-  const reason: EmailPart[] = input.reason?.trim() ? [{ kind: "paragraph", text: `Reason: ${input.reason.trim()}` }] : [];
+  const reason: EmailPart[] = input.reason?.trim()
+    ? [{ kind: "paragraph", text: `Reason: ${input.reason.trim()}` }]
+    : [];
   return renderEmail({
     subject: single
       ? `Cancelled: ${first.title} on ${formatDayShort(first.date)}`

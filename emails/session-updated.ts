@@ -18,12 +18,17 @@ export function sessionUpdatedEmail(input: SessionUpdatedEmailInput): RenderedEm
   const single = sessions.length === 1 ? sessions[0] : undefined;
   const who = input.coachName?.trim() || "Your coach";
   return renderEmail({
-    subject: single ? `Changed: ${single.title} · ${input.teamName}` : `${plural(sessions.length, "session")} changed · ${input.teamName}`,
+    subject: single
+      ? `Changed: ${single.title} · ${input.teamName}`
+      : `${plural(sessions.length, "session")} changed · ${input.teamName}`,
     preheader: single ? sessionLine(single) : `${plural(sessions.length, "session")} in your plan changed.`,
     heading: single ? "A session changed" : "Sessions changed",
     parts: [
       { kind: "paragraph", text: `Hello ${input.athleteName},` },
-      { kind: "paragraph", text: `${who} changed ${single ? "a session" : "sessions"} in your plan. This is how ${single ? "it looks" : "they look"} now:` },
+      {
+        kind: "paragraph",
+        text: `${who} changed ${single ? "a session" : "sessions"} in your plan. This is how ${single ? "it looks" : "they look"} now:`,
+      },
       { kind: "list", items: sessions.map(sessionLine) },
       { kind: "paragraph", text: "The attached calendar update changes the entry in your phone's calendar." },
       { kind: "button", label: "Open my week", url: input.planUrl },

@@ -15,7 +15,8 @@ export async function runAction<T>(fn: () => Promise<T>): Promise<ActionResult<T
       if (err.status >= 500) throw err;
       return { ok: false, message: err.message, fields: err.fields };
     }
-    if (err instanceof z.ZodError) return { ok: false, message: "Check the highlighted fields", fields: zodFields(err) };
+    if (err instanceof z.ZodError)
+      return { ok: false, message: "Check the highlighted fields", fields: zodFields(err) };
     if (isDatabaseBusy(err)) return { ok: false, message: BUSY_MESSAGE };
     // Next's redirect()/notFound() signals must pass through untouched.
     throw err;

@@ -32,7 +32,11 @@ export class AppError extends Error {
   readonly fields?: FieldErrors;
   readonly details?: Record<string, unknown>;
 
-  constructor(code: ErrorCode, message: string, opts: { fields?: FieldErrors; details?: Record<string, unknown> } = {}) {
+  constructor(
+    code: ErrorCode,
+    message: string,
+    opts: { fields?: FieldErrors; details?: Record<string, unknown> } = {},
+  ) {
     super(message);
     this.name = "AppError";
     this.code = code;

@@ -5,7 +5,9 @@ import { AppError } from "@/lib/errors";
 export const JSON_BODY_LIMIT = 1024 * 1024;
 
 function tooLarge(limit: number): AppError {
-  return new AppError("too_large", `The request body is over ${Math.round(limit / 1024)} kB`, { fields: { _: [`At most ${Math.round(limit / 1024)} kB`] } });
+  return new AppError("too_large", `The request body is over ${Math.round(limit / 1024)} kB`, {
+    fields: { _: [`At most ${Math.round(limit / 1024)} kB`] },
+  });
 }
 
 /**

@@ -31,5 +31,7 @@ export function assertSameOrigin(req: Request): void {
 }
 
 function refused(): AppError {
-  return new AppError("forbidden", "Requests from other sites are refused", { fields: { origin: ["Send the request from this app's own pages"] } });
+  return new AppError("forbidden", "Requests from other sites are refused", {
+    fields: { origin: ["Send the request from this app's own pages"] },
+  });
 }

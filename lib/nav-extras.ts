@@ -16,7 +16,11 @@ export async function extraNavLinks(viewer: Viewer): Promise<NavLink[]> {
   const links: NavLink[] = [];
   if (can(viewer.role, "alerts:view", "team")) {
     const unread = await countUnreadAlerts({ teamId: viewer.teamId, userId: viewer.userId });
-    links.push({ href: "/alerts", label: "Alerts", badge: unread > 0 ? createElement(UnreadBadge, { count: unread }) : undefined });
+    links.push({
+      href: "/alerts",
+      label: "Alerts",
+      badge: unread > 0 ? createElement(UnreadBadge, { count: unread }) : undefined,
+    });
   }
   if (isFakeMailbox()) links.push({ href: "/mailbox", label: "Mailbox" });
   return links;

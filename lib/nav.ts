@@ -1,7 +1,13 @@
 import { scopeOf, type Action, type Scope } from "@/lib/auth/permissions";
 import type { Role } from "@/lib/auth/roles";
 
-export type NavItem = { href: string; label: string; can: Action; scope: Scope; athleteHref?: (athleteId: number) => string };
+export type NavItem = {
+  href: string;
+  label: string;
+  can: Action;
+  scope: Scope;
+  athleteHref?: (athleteId: number) => string;
+};
 
 /**
  * The signed-in navigation. An item shows when the role holds the action at the given scope, so an athlete

@@ -46,7 +46,12 @@ export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
     team_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: "teams", key: "id" }, ...cascade },
     user_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: "users", key: "id" }, ...setNull },
-    group_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: "training_groups", key: "id" }, ...setNull },
+    group_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: "training_groups", key: "id" },
+      ...setNull,
+    },
     name: { type: DataTypes.STRING(120), allowNull: false },
     sex: { type: DataTypes.STRING(10), allowNull: true },
     birth_date: { type: DataTypes.DATEONLY, allowNull: true },

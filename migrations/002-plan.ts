@@ -60,8 +60,18 @@ export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
 
   await qi.createTable("session_blocks", {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    session_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: "planned_sessions", key: "id" }, ...cascade },
-    template_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: "block_templates", key: "id" }, ...setNull },
+    session_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: "planned_sessions", key: "id" },
+      ...cascade,
+    },
+    template_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: "block_templates", key: "id" },
+      ...setNull,
+    },
     position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     kind: { type: DataTypes.STRING(20), allowNull: false },
     title: { type: DataTypes.STRING(120), allowNull: false },

@@ -81,7 +81,11 @@ export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
     last_used_at: { type: DataTypes.DATE, allowNull: true },
     ...timestamps,
   });
-  await qi.addIndex("calendar_tokens", ["athlete_id"], { unique: true, name: "calendar_tokens_one_active", where: { revoked_at: null } });
+  await qi.addIndex("calendar_tokens", ["athlete_id"], {
+    unique: true,
+    name: "calendar_tokens_one_active",
+    where: { revoked_at: null },
+  });
 
   await qi.createTable("notification_settings", {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
@@ -92,9 +96,13 @@ export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
     alerts_seen_at: { type: DataTypes.DATE, allowNull: true },
     ...timestamps,
   });
-  await qi.addIndex("notification_settings", ["user_id", "team_id"], { unique: true, name: "notification_settings_user_team" });
+  await qi.addIndex("notification_settings", ["user_id", "team_id"], {
+    unique: true,
+    name: "notification_settings_user_team",
+  });
 };
 
 export const down: MigrationFn<QueryInterface> = async ({ context: qi }) => {
-  for (const table of ["notification_settings", "calendar_tokens", "outbox_messages", "alerts"]) await qi.dropTable(table);
+  for (const table of ["notification_settings", "calendar_tokens", "outbox_messages", "alerts"])
+    await qi.dropTable(table);
 };

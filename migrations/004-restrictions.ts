@@ -38,10 +38,20 @@ export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
   await qi.createTable("restriction_overrides", {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
     team_id: team,
-    restriction_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: "restrictions", key: "id" }, ...cascade },
+    restriction_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: "restrictions", key: "id" },
+      ...cascade,
+    },
     athlete_id: athlete,
     // The session stays linked while it exists; the date and what broke the rule are kept either way.
-    session_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: "planned_sessions", key: "id" }, ...setNull },
+    session_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: "planned_sessions", key: "id" },
+      ...setNull,
+    },
     session_date: { type: DataTypes.DATEONLY, allowNull: false },
     detail: { type: DataTypes.TEXT, allowNull: false },
     reason: { type: DataTypes.TEXT, allowNull: false },

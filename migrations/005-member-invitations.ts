@@ -11,23 +11,40 @@ export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
   await qi.addColumn("invitations", "email", { type: DataTypes.STRING(254), allowNull: true });
   await qi.addColumn("invitations", "name", { type: DataTypes.STRING(120), allowNull: true });
   await qi.addColumn("invitations", "role", { type: DataTypes.STRING(20), allowNull: true });
-  await qi.addColumn("invitations", "athlete_id", { type: DataTypes.INTEGER, allowNull: true, references: { model: "athletes", key: "id" }, ...setNull });
+  await qi.addColumn("invitations", "athlete_id", {
+    type: DataTypes.INTEGER,
+    allowNull: true,
+    references: { model: "athletes", key: "id" },
+    ...setNull,
+  });
   await qi.addIndex("invitations", ["team_id", "email"], { name: "invitations_team_email" });
 
   // Memberships of accounts that never set a password were invitations nobody accepted: move each to its
   // invitation (or drop it when there is none), and unlink the athlete profile until the invitee accepts.
   const sequelize = qi.sequelize;
-  const pending = await sequelize.query<{ id: number; team_id: number; user_id: number; role: string; email: string; name: string }>(
+  const pending = await sequelize.query<{
+    id: number;
+    team_id: number;
+    user_id: number;
+    role: string;
+    email: string;
+    name: string;
+  }>(
     `SELECT m.id, m.team_id, m.user_id, m.role, u.email, u.name FROM memberships m JOIN users u ON u.id = m.user_id WHERE u.password_hash IS NULL`,
     { type: QueryTypes.SELECT },
   );
   for (const m of pending) {
-    const [athlete] = await sequelize.query<{ id: number }>("SELECT id FROM athletes WHERE team_id = ? AND user_id = ? LIMIT 1", { replacements: [m.team_id, m.user_id], type: QueryTypes.SELECT });
+    const [athlete] = await sequelize.query<{ id: number }>(
+      "SELECT id FROM athletes WHERE team_id = ? AND user_id = ? LIMIT 1",
+      { replacements: [m.team_id, m.user_id], type: QueryTypes.SELECT },
+    );
     await sequelize.query(
       `UPDATE invitations SET email = ?, name = ?, role = ?, athlete_id = ? WHERE team_id = ? AND user_id = ? AND purpose = 'invite'`,
       { replacements: [m.email, m.name, m.role, athlete?.id ?? null, m.team_id, m.user_id] },
     );
-    await sequelize.query("UPDATE athletes SET user_id = NULL WHERE team_id = ? AND user_id = ?", { replacements: [m.team_id, m.user_id] });
+    await sequelize.query("UPDATE athletes SET user_id = NULL WHERE team_id = ? AND user_id = ?", {
+      replacements: [m.team_id, m.user_id],
+    });
     await sequelize.query("DELETE FROM memberships WHERE id = ?", { replacements: [m.id] });
   }
   // Older invitations of accounts that did join: the address and role are the account's own.
@@ -48,8 +65,14 @@ export const down: MigrationFn<QueryInterface> = async ({ context: qi }) => {
   );
   const now = new Date().toISOString().replace("T", " ").replace("Z", " +00:00");
   for (const i of open) {
-    await sequelize.query("INSERT INTO memberships (team_id, user_id, role, created_at, updated_at) VALUES (?, ?, ?, ?, ?)", { replacements: [i.team_id, i.user_id, i.role, now, now] });
-    if (i.athlete_id !== null) await sequelize.query("UPDATE athletes SET user_id = ? WHERE id = ? AND user_id IS NULL", { replacements: [i.user_id, i.athlete_id] });
+    await sequelize.query(
+      "INSERT INTO memberships (team_id, user_id, role, created_at, updated_at) VALUES (?, ?, ?, ?, ?)",
+      { replacements: [i.team_id, i.user_id, i.role, now, now] },
+    );
+    if (i.athlete_id !== null)
+      await sequelize.query("UPDATE athletes SET user_id = ? WHERE id = ? AND user_id IS NULL", {
+        replacements: [i.user_id, i.athlete_id],
+      });
   }
   await qi.removeIndex("invitations", "invitations_team_email");
   await qi.removeColumn("invitations", "athlete_id");

@@ -7,7 +7,13 @@ import type { MigrationFn } from "umzug";
 export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
   await qi.createTable("auth_sessions", {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    user_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: "users", key: "id" }, onDelete: "CASCADE", onUpdate: "CASCADE" },
+    user_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: "users", key: "id" },
+      onDelete: "CASCADE",
+      onUpdate: "CASCADE",
+    },
     // SHA-256 of the random session id carried in the JWT; the id itself is never stored.
     token_hash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
     last_seen_at: { type: DataTypes.DATE, allowNull: false },
@@ -18,7 +24,9 @@ export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
   });
   await qi.addIndex("auth_sessions", ["user_id"], { name: "auth_sessions_user" });
   // Exactly the table RateLimiterSQLite would create for itself (key, points, expire in epoch ms).
-  await qi.sequelize.query("CREATE TABLE sign_in_limits (key TEXT PRIMARY KEY, points INTEGER NOT NULL DEFAULT 0, expire INTEGER)");
+  await qi.sequelize.query(
+    "CREATE TABLE sign_in_limits (key TEXT PRIMARY KEY, points INTEGER NOT NULL DEFAULT 0, expire INTEGER)",
+  );
 };
 
 export const down: MigrationFn<QueryInterface> = async ({ context: qi }) => {

@@ -10,7 +10,11 @@ const COLUMNS = {
   sprint_speed_ms: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 7 },
   maximal_pct: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 95 },
   // JSON array of lib/load/types.ts RECOVERY_WORK values
-  recovery_work: { type: DataTypes.TEXT, allowNull: false, defaultValue: '["max_velocity","max_acceleration","speed_endurance","high_plyo"]' },
+  recovery_work: {
+    type: DataTypes.TEXT,
+    allowNull: false,
+    defaultValue: '["max_velocity","max_acceleration","speed_endurance","high_plyo"]',
+  },
   // "estimate" (the plan stands in) | "exclude" (the day is left out)
   missing_logs: { type: DataTypes.STRING(10), allowNull: false, defaultValue: "estimate" },
   monotony_limit: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 2 },

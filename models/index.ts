@@ -24,9 +24,40 @@ import { User } from "./user";
 
 export { Alert, CalendarToken, NotificationSetting, OutboxMessage, Restriction, RestrictionOverride };
 export { AuthSession };
-export { Athlete, BlockTemplate, Invitation, Membership, PlannedSession, SessionBlock, SessionLog, Team, TeamLoadSettings, TrainingGroup, User };
+export {
+  Athlete,
+  BlockTemplate,
+  Invitation,
+  Membership,
+  PlannedSession,
+  SessionBlock,
+  SessionLog,
+  Team,
+  TeamLoadSettings,
+  TrainingGroup,
+  User,
+};
 
-const models = { AuthSession, Alert, CalendarToken, NotificationSetting, OutboxMessage, Restriction, RestrictionOverride, Athlete, BlockTemplate, Invitation, Membership, PlannedSession, SessionBlock, SessionLog, Team, TeamLoadSettings, TrainingGroup, User };
+const models = {
+  AuthSession,
+  Alert,
+  CalendarToken,
+  NotificationSetting,
+  OutboxMessage,
+  Restriction,
+  RestrictionOverride,
+  Athlete,
+  BlockTemplate,
+  Invitation,
+  Membership,
+  PlannedSession,
+  SessionBlock,
+  SessionLog,
+  Team,
+  TeamLoadSettings,
+  TrainingGroup,
+  User,
+};
 export type Models = typeof models;
 export type Db = Models & { sequelize: Sequelize };
 

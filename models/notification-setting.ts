@@ -1,4 +1,12 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 import type { Team } from "./team";
 import type { User } from "./user";
 
@@ -6,7 +14,10 @@ export const ALERT_EMAIL_MODES = ["each", "digest", "off"] as const;
 export type AlertEmailMode = (typeof ALERT_EMAIL_MODES)[number];
 
 /** How one member hears about load alerts in one team. No row = the role's default. */
-export class NotificationSetting extends Model<InferAttributes<NotificationSetting>, InferCreationAttributes<NotificationSetting>> {
+export class NotificationSetting extends Model<
+  InferAttributes<NotificationSetting>,
+  InferCreationAttributes<NotificationSetting>
+> {
   declare id: CreationOptional<number>;
   declare teamId: ForeignKey<Team["id"]>;
   declare userId: ForeignKey<User["id"]>;

@@ -1,7 +1,22 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 import type { Team } from "./team";
 
-export const OUTBOX_KINDS = ["alert", "digest", "invitation", "password_reset", "calendar_request", "calendar_cancel"] as const;
+export const OUTBOX_KINDS = [
+  "alert",
+  "digest",
+  "invitation",
+  "password_reset",
+  "calendar_request",
+  "calendar_cancel",
+] as const;
 export type OutboxKind = (typeof OUTBOX_KINDS)[number];
 export type OutboxStatus = "pending" | "sending" | "sent" | "failed";
 

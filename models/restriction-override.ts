@@ -1,10 +1,21 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 import type { Athlete } from "./athlete";
 import type { Restriction } from "./restriction";
 import type { Team } from "./team";
 
 /** A coach planned a session against a restriction, and said why: kept for the medical staff. */
-export class RestrictionOverride extends Model<InferAttributes<RestrictionOverride>, InferCreationAttributes<RestrictionOverride>> {
+export class RestrictionOverride extends Model<
+  InferAttributes<RestrictionOverride>,
+  InferCreationAttributes<RestrictionOverride>
+> {
   declare id: CreationOptional<number>;
   declare teamId: ForeignKey<Team["id"]>;
   declare restrictionId: ForeignKey<Restriction["id"]>;

@@ -1,8 +1,19 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 import type { Team } from "./team";
 
 /** Per-team thresholds the load engine reads; defaults and sources: lib/load/README.md. */
-export class TeamLoadSettings extends Model<InferAttributes<TeamLoadSettings>, InferCreationAttributes<TeamLoadSettings>> {
+export class TeamLoadSettings extends Model<
+  InferAttributes<TeamLoadSettings>,
+  InferCreationAttributes<TeamLoadSettings>
+> {
   declare id: CreationOptional<number>;
   declare teamId: ForeignKey<Team["id"]>;
   declare hsrSpeedMs: CreationOptional<number>;
@@ -43,7 +54,11 @@ export class TeamLoadSettings extends Model<InferAttributes<TeamLoadSettings>, I
         hsrPct: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 75 },
         sprintSpeedMs: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 7 },
         maximalPct: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 95 },
-        recoveryWork: { type: DataTypes.TEXT, allowNull: false, defaultValue: '["max_velocity","max_acceleration","speed_endurance","high_plyo"]' },
+        recoveryWork: {
+          type: DataTypes.TEXT,
+          allowNull: false,
+          defaultValue: '["max_velocity","max_acceleration","speed_endurance","high_plyo"]',
+        },
         missingLogs: { type: DataTypes.STRING(10), allowNull: false, defaultValue: "estimate" },
         monotonyLimit: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 2 },
         createdAt: DataTypes.DATE,

@@ -12,7 +12,16 @@ const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 20);
 const DURATION_S = Number(process.env.BENCH_DURATION_S ?? 10);
 
 type Target = { name: string; path: string; method?: "GET" | "PUT"; cookie?: string; body?: string; paths?: string[] };
-type Row = { name: string; rps: number; p50: number; p99: number; errors: number; non2xx: number; fivexx: number; codes: string };
+type Row = {
+  name: string;
+  rps: number;
+  p50: number;
+  p99: number;
+  errors: number;
+  non2xx: number;
+  fivexx: number;
+  codes: string;
+};
 
 async function drive(base: string, t: Target): Promise<Row> {
   let next = 0;
@@ -21,14 +30,31 @@ async function drive(base: string, t: Target): Promise<Row> {
     connections: CONNECTIONS,
     duration: DURATION_S,
     method: t.method ?? "GET",
-    headers: { ...(t.cookie ? { cookie: t.cookie } : {}), ...(t.body ? { "content-type": "application/json", origin: base } : {}) },
+    headers: {
+      ...(t.cookie ? { cookie: t.cookie } : {}),
+      ...(t.body ? { "content-type": "application/json", origin: base } : {}),
+    },
     body: t.body,
     // A write target spreads over many sessions, as a squad logging after training would.
     requests: t.paths ? [{ setupRequest: (req) => ({ ...req, path: t.paths![next++ % t.paths!.length] }) }] : undefined,
   });
-  const codes = Object.entries(result.statusCodeStats ?? {}).map(([code, s]) => `${code}×${s.count ?? 0}`).join(" ");
-  const fivexx = Object.entries(result.statusCodeStats ?? {}).reduce((n, [code, s]) => n + (Number(code) >= 500 ? Number(s.count ?? 0) : 0), 0);
-  return { name: t.name, rps: result.requests.average, p50: result.latency.p50, p99: result.latency.p99, errors: result.errors, non2xx: result.non2xx, fivexx, codes };
+  const codes = Object.entries(result.statusCodeStats ?? {})
+    .map(([code, s]) => `${code}×${s.count ?? 0}`)
+    .join(" ");
+  const fivexx = Object.entries(result.statusCodeStats ?? {}).reduce(
+    (n, [code, s]) => n + (Number(code) >= 500 ? Number(s.count ?? 0) : 0),
+    0,
+  );
+  return {
+    name: t.name,
+    rps: result.requests.average,
+    p50: result.latency.p50,
+    p99: result.latency.p99,
+    errors: result.errors,
+    non2xx: result.non2xx,
+    fivexx,
+    codes,
+  };
 }
 
 const ratio = (v: number, floor: number) => (floor > 0 ? `${(v / floor).toFixed(2)}×` : "—");
@@ -46,11 +72,17 @@ async function main() {
     const athleteEmail = DEMO_ATHLETES.find((a) => a.email)!.email!;
     const athlete = await apiSession(app, athleteEmail);
     const [[team]] = (await sequelize.query("SELECT id FROM teams ORDER BY id LIMIT 1")) as [{ id: number }[], unknown];
-    const [[own]] = (await sequelize.query("SELECT a.id FROM athletes a JOIN users u ON u.id = a.user_id WHERE u.email = ?", { replacements: [athleteEmail] })) as [{ id: number }[], unknown];
+    const [[own]] = (await sequelize.query(
+      "SELECT a.id FROM athletes a JOIN users u ON u.id = a.user_id WHERE u.email = ?",
+      { replacements: [athleteEmail] },
+    )) as [{ id: number }[], unknown];
     const feed = (await (await head.fetch(`/api/athletes/${own.id}/calendar-token`)).json()) as { url: string | null };
     if (!feed.url) throw new Error("the demo athlete has no calendar feed");
     // The squad's published sessions of the last fortnight: what athletes log after training.
-    const [sessions] = (await sequelize.query("SELECT id FROM planned_sessions WHERE team_id = ? AND status = 'published' AND date < date('now') ORDER BY date DESC LIMIT 60", { replacements: [team.id] })) as [{ id: number }[], unknown];
+    const [sessions] = (await sequelize.query(
+      "SELECT id FROM planned_sessions WHERE team_id = ? AND status = 'published' AND date < date('now') ORDER BY date DESC LIMIT 60",
+      { replacements: [team.id] },
+    )) as [{ id: number }[], unknown];
     if (sessions.length === 0) throw new Error("the demo seed has no past published sessions to log");
 
     const targets: Target[] = [
@@ -69,11 +101,23 @@ async function main() {
       },
     ];
     for (const t of targets) {
-      const check = await fetch(`${app.url}${t.path}`, { method: t.method ?? "GET", headers: { ...(t.cookie ? { cookie: t.cookie } : {}), ...(t.body ? { "content-type": "application/json", origin: app.url } : {}) }, body: t.body });
-      if (!check.ok) throw new Error(`${t.name}: ${t.path} answered ${check.status} before the run: ${(await check.text()).slice(0, 200)}`);
+      const check = await fetch(`${app.url}${t.path}`, {
+        method: t.method ?? "GET",
+        headers: {
+          ...(t.cookie ? { cookie: t.cookie } : {}),
+          ...(t.body ? { "content-type": "application/json", origin: app.url } : {}),
+        },
+        body: t.body,
+      });
+      if (!check.ok)
+        throw new Error(
+          `${t.name}: ${t.path} answered ${check.status} before the run: ${(await check.text()).slice(0, 200)}`,
+        );
     }
 
-    console.log(`${CONNECTIONS} connections × ${DURATION_S} s per endpoint (load average ${loadavg()[0].toFixed(2)} at start)\n`);
+    console.log(
+      `${CONNECTIONS} connections × ${DURATION_S} s per endpoint (load average ${loadavg()[0].toFixed(2)} at start)\n`,
+    );
     const rows: Row[] = [];
     for (const t of targets) {
       rows.push(await drive(app.url, t));
@@ -83,14 +127,18 @@ async function main() {
     const floor = rows[0];
     const pad = (s: string, n: number) => s.padEnd(n);
     const num = (s: string, n: number) => s.padStart(n);
-    console.log(`\n${pad("endpoint", 42)}${num("req/s", 9)}${num("×floor", 8)}${num("p50 ms", 9)}${num("×floor", 8)}${num("p99 ms", 9)}${num("×floor", 8)}${num("errors", 8)}${num("non-2xx", 9)}${num("5xx", 6)}`);
+    console.log(
+      `\n${pad("endpoint", 42)}${num("req/s", 9)}${num("×floor", 8)}${num("p50 ms", 9)}${num("×floor", 8)}${num("p99 ms", 9)}${num("×floor", 8)}${num("errors", 8)}${num("non-2xx", 9)}${num("5xx", 6)}`,
+    );
     for (const r of rows) {
       console.log(
         `${pad(r.name, 42)}${num(r.rps.toFixed(0), 9)}${num(ratio(r.rps, floor.rps), 8)}${num(String(r.p50), 9)}${num(ratio(r.p50, floor.p50), 8)}${num(String(r.p99), 9)}${num(ratio(r.p99, floor.p99), 8)}${num(String(r.errors), 8)}${num(String(r.non2xx), 9)}${num(String(r.fivexx), 6)}`,
       );
     }
     const bad = rows.filter((r) => r.errors > 0 || r.fivexx > 0);
-    console.log(`\nbar: zero connection errors and zero 5xx → ${bad.length === 0 ? "met" : `NOT met (${bad.map((r) => r.name).join(", ")})`} (load average ${loadavg()[0].toFixed(2)} at end)`);
+    console.log(
+      `\nbar: zero connection errors and zero 5xx → ${bad.length === 0 ? "met" : `NOT met (${bad.map((r) => r.name).join(", ")})`} (load average ${loadavg()[0].toFixed(2)} at end)`,
+    );
     if (bad.length > 0) process.exitCode = 1;
   } finally {
     await sequelize.close();

@@ -23,7 +23,9 @@ async function main() {
   try {
     const head = DEMO_STAFF.find((s) => s.role === "head_coach")!;
     const session = await apiSession(app, head.email);
-    const me = (await (await session.fetch("/api/auth/session")).json()) as { user: { memberships: { teamId: number }[] } };
+    const me = (await (await session.fetch("/api/auth/session")).json()) as {
+      user: { memberships: { teamId: number }[] };
+    };
     const teamId = me.user.memberships[0].teamId;
     const path = `/api/teams/${teamId}/load?view=projected`;
     const first = await session.fetch(path);
@@ -40,9 +42,13 @@ async function main() {
     times.sort((a, b) => a - b);
     const p50 = percentile(times, 50);
     const p95 = percentile(times, 95);
-    console.log(`GET ${path} (week ${body.weekStart}, ${body.rows.length} athletes), ${REQUESTS} sequential requests after ${WARMUP} warm-up`);
+    console.log(
+      `GET ${path} (week ${body.weekStart}, ${body.rows.length} athletes), ${REQUESTS} sequential requests after ${WARMUP} warm-up`,
+    );
     console.log(`  p50 ${p50.toFixed(1)} ms · p95 ${p95.toFixed(1)} ms · max ${times[times.length - 1].toFixed(1)} ms`);
-    console.log(`  target: p95 < ${TARGET_P95_MS} ms → ${p95 < TARGET_P95_MS ? "met" : "NOT met"} (load average ${loadavg()[0].toFixed(2)})`);
+    console.log(
+      `  target: p95 < ${TARGET_P95_MS} ms → ${p95 < TARGET_P95_MS ? "met" : "NOT met"} (load average ${loadavg()[0].toFixed(2)})`,
+    );
   } finally {
     await app.stop();
   }

@@ -103,7 +103,10 @@ function flatten(a: SynthAthlete, startDay: number): Flat {
   const rp = resolveProfile(a.profile, settings);
   const logs = indexLogs(a.logs);
   const today = dayIndex(TODAY);
-  const bd: number[] = [], bf: number[] = [], sd: number[] = [], ss: number[] = [];
+  const bd: number[] = [],
+    bf: number[] = [],
+    sd: number[] = [],
+    ss: number[] = [];
   const acc = new Float64Array(ACC_SIZE);
   for (const s of a.sessions as SessionInput[]) {
     const day = dayIndex(s.date);
@@ -116,14 +119,36 @@ function flatten(a: SynthAthlete, startDay: number): Flat {
     ss.push(acc[8]);
     for (const b of s.blocks) {
       const r = b.running;
-      const low = b.drills?.filter((d) => d.intensity === "low").reduce((t, d) => t + d.sets * d.reps * d.contactsPerRep, 0) ?? 0;
-      const mod = b.drills?.filter((d) => d.intensity === "moderate").reduce((t, d) => t + d.sets * d.reps * d.contactsPerRep, 0) ?? 0;
-      const high = b.drills?.filter((d) => d.intensity === "high").reduce((t, d) => t + d.sets * d.reps * d.contactsPerRep, 0) ?? 0;
+      const low =
+        b.drills?.filter((d) => d.intensity === "low").reduce((t, d) => t + d.sets * d.reps * d.contactsPerRep, 0) ?? 0;
+      const mod =
+        b.drills
+          ?.filter((d) => d.intensity === "moderate")
+          .reduce((t, d) => t + d.sets * d.reps * d.contactsPerRep, 0) ?? 0;
+      const high =
+        b.drills?.filter((d) => d.intensity === "high").reduce((t, d) => t + d.sets * d.reps * d.contactsPerRep, 0) ??
+        0;
       bd.push(day - startDay);
-      bf.push(r ? r.sets * r.reps * factor : 0, r ? r.runInM + r.distanceM : 0, r ? (r.intensityPct / 100) * rp.vmax : 0, r && b.kind !== "tempo" ? 1 : 0, low * factor, mod * factor, high * factor);
+      bf.push(
+        r ? r.sets * r.reps * factor : 0,
+        r ? r.runInM + r.distanceM : 0,
+        r ? (r.intensityPct / 100) * rp.vmax : 0,
+        r && b.kind !== "tempo" ? 1 : 0,
+        low * factor,
+        mod * factor,
+        high * factor,
+      );
     }
   }
-  return { blockDay: Int32Array.from(bd), blockF: Float64Array.from(bf), sessionDay: Int32Array.from(sd), sessionSrpe: Float64Array.from(ss), tau: rp.tau, step: rp.stepLengthM, nearSpeed: rp.nearMaxSpeed };
+  return {
+    blockDay: Int32Array.from(bd),
+    blockF: Float64Array.from(bf),
+    sessionDay: Int32Array.from(sd),
+    sessionSrpe: Float64Array.from(ss),
+    tau: rp.tau,
+    step: rp.stepLengthM,
+    nearSpeed: rp.nearMaxSpeed,
+  };
 }
 
 function bareFull(flats: Flat[], n: number, days: Float64Array, scratch: Float64Array): number {
@@ -135,10 +160,16 @@ function bareFull(flats: Flat[], n: number, days: Float64Array, scratch: Float64
     for (let b = 0; b < blockDay.length; b++) {
       const i = blockDay[b];
       const o = 7 * b;
-      const reps = blockF[o], total = blockF[o + 1], target = blockF[o + 2];
+      const reps = blockF[o],
+        total = blockF[o + 1],
+        target = blockF[o + 2];
       if (reps > 0 && total > 0) {
-        if (hsr < target) days[i] += Math.max(0, total - Math.max(0, -target * tau * Math.log1p(-hsr / target) - tau * hsr)) * reps;
-        if (f.nearSpeed < target) days[n + i] += Math.max(0, total - Math.max(0, -target * tau * Math.log1p(-f.nearSpeed / target) - tau * f.nearSpeed)) * reps;
+        if (hsr < target)
+          days[i] += Math.max(0, total - Math.max(0, -target * tau * Math.log1p(-hsr / target) - tau * hsr)) * reps;
+        if (f.nearSpeed < target)
+          days[n + i] +=
+            Math.max(0, total - Math.max(0, -target * tau * Math.log1p(-f.nearSpeed / target) - tau * f.nearSpeed)) *
+            reps;
         if (blockF[o + 3] > 0) {
           days[2 * n + i] += total * reps;
           days[3 * n + i] += (total * reps) / f.step;
@@ -157,8 +188,12 @@ function main(): void {
   const sessions = squad.reduce((n, a) => n + a.sessions.length, 0);
   const blocks = squad.reduce((n, a) => n + a.sessions.reduce((m, s) => m + s.blocks.length, 0), 0);
   const logs = squad.reduce((n, a) => n + a.logs.length, 0);
-  console.log(`Squad: ${ATHLETES} athletes × ${DAYS} days: ${sessions} sessions, ${blocks} blocks, ${logs} logs (invented, seeded)`);
-  console.log(`Week ${WEEK}, today ${TODAY}, view projected, ACWR ${settings.acwrMethod}; median of ${RUNS} interleaved runs`);
+  console.log(
+    `Squad: ${ATHLETES} athletes × ${DAYS} days: ${sessions} sessions, ${blocks} blocks, ${logs} logs (invented, seeded)`,
+  );
+  console.log(
+    `Week ${WEEK}, today ${TODAY}, view projected, ACWR ${settings.acwrMethod}; median of ${RUNS} interleaved runs`,
+  );
   // Timings on a shared machine move with its load; the ratios move much less (runs are interleaved).
   console.log(`Machine load average (1 min): ${loadavg()[0].toFixed(2)}\n`);
 
@@ -166,7 +201,16 @@ function main(): void {
   const from = squad.reduce((d, a) => (a.sessions[0].date < d ? a.sessions[0].date : d), WEEK);
   const n = dayIndex(WEEK_END) - dayIndex(from) + 1;
   const daily = squad.map((a) => {
-    const s = dailySeries({ from, to: WEEK_END, sessions: a.sessions, logs: a.logs, profile: a.profile, settings, view: "projected", today: TODAY });
+    const s = dailySeries({
+      from,
+      to: WEEK_END,
+      sessions: a.sessions,
+      logs: a.logs,
+      profile: a.profile,
+      settings,
+      view: "projected",
+      today: TODAY,
+    });
     const flat = new Float64Array(NM * n);
     METRICS.forEach((m, k) => flat.set(s.values[m], k * n));
     return flat;
@@ -182,7 +226,10 @@ function main(): void {
   let flagCount = 0;
   const [engine, objects, bareA, bareB] = interleaved([
     () => {
-      flagCount = computeSquadWeek(packedSquad, settings, WEEK, TODAY, "projected").reduce((t, r) => t + r.flags.length, 0);
+      flagCount = computeSquadWeek(packedSquad, settings, WEEK, TODAY, "projected").reduce(
+        (t, r) => t + r.flags.length,
+        0,
+      );
     },
     () => computeSquadWeek(squad, settings, WEEK, TODAY, "projected"),
     () => bareEwma(daily, n, scratch),
@@ -193,7 +240,9 @@ function main(): void {
   const ratio = (a: Timing, b: Timing) => `${(a.wall / b.wall).toFixed(2)}× wall, ${(a.cpu / b.cpu).toFixed(2)}× cpu`;
   const within = (a: Timing, b: Timing) => (a.wall / b.wall <= TARGET_RATIO ? "met" : "NOT met");
   console.log("Squad week, whole engine: daily series + ACWR for all 6 metrics + week summary + flags, per athlete");
-  console.log(`  engine   ${ms(engine)}  (${n} days per athlete, ${flagCount} flags), sessions packed into columns as the data layer hands them`);
+  console.log(
+    `  engine   ${ms(engine)}  (${n} days per athlete, ${flagCount} flags), sessions packed into columns as the data layer hands them`,
+  );
   console.log(`  objects  ${ms(objects)}  the same call on session objects (no packed columns given)`);
   console.log(`  bare A   ${ms(bareA)}  EWMA recurrence only, over pre-summed daily typed arrays`);
   console.log(`  bare B   ${ms(bareB)}  block maths + daily sums + EWMA, over inputs pre-extracted to typed arrays`);
@@ -202,23 +251,53 @@ function main(): void {
   // The target's "bare single pass over the same numbers" is bare B: the same inputs (the prescriptions) in typed
   // arrays, one pass to the same outputs. Bare A starts from daily sums already made, so it skips the block maths
   // the engine must do from sessions; it is printed as a lower bound, not as the target.
-  console.log(`           within ${TARGET_RATIO}× of the bare single pass over the same numbers (bare B): ${within(engine, bareB)}`);
+  console.log(
+    `           within ${TARGET_RATIO}× of the bare single pass over the same numbers (bare B): ${within(engine, bareB)}`,
+  );
   console.log(`           for reference, engine / bare A (EWMA only, no block maths): ${ratio(engine, bareA)}\n`);
 
   // For information: the per-athlete API with day rows for the whole two years, and the drag preview.
   const a0 = squad[0];
-  const ctx = buildWeekPreviewContext({ profile: a0.profile, settings, sessions: a0.sessions, logs: a0.logs, weekStart: WEEK, today: TODAY });
+  const ctx = buildWeekPreviewContext({
+    profile: a0.profile,
+    settings,
+    sessions: a0.sessions,
+    logs: a0.logs,
+    weekStart: WEEK,
+    today: TODAY,
+  });
   const weekSessions = a0.sessions.filter((s) => s.date >= WEEK && s.date <= WEEK_END);
   const [withDays, preview] = interleaved([
     () => {
       for (const a of squad) {
-        computeAthleteLoad({ profile: a.profile, settings, sessions: a.sessions, logs: a.logs, from: START, to: WEEK_END, today: TODAY, view: "projected", weekStart: WEEK });
+        computeAthleteLoad({
+          profile: a.profile,
+          settings,
+          sessions: a.sessions,
+          logs: a.logs,
+          from: START,
+          to: WEEK_END,
+          today: TODAY,
+          view: "projected",
+          weekStart: WEEK,
+        });
       }
     },
-    () => computeWeekPreview({ ...ctx, weekSessions, weekLogs: [], profile: a0.profile, settings, weekStart: WEEK, today: TODAY }),
+    () =>
+      computeWeekPreview({
+        ...ctx,
+        weekSessions,
+        weekLogs: [],
+        profile: a0.profile,
+        settings,
+        weekStart: WEEK,
+        today: TODAY,
+      }),
   ]);
   console.log(`computeAthleteLoad, ${DAYS}+ day rows each, all ${ATHLETES} athletes: ${ms(withDays)}`);
-  console.log(`computeWeekPreview, one athlete, ${ctx.historyDates.length} history days (drag preview): ${(preview.wall * 1000).toFixed(1)} µs wall (target < 1 ms: ${preview.wall < 1 ? "met" : "NOT met"})`);
+  console.log(
+    `computeWeekPreview, one athlete, ${ctx.historyDates.length} history days (drag preview): ${(preview.wall * 1000).toFixed(1)} µs wall (target < 1 ms: ${preview.wall < 1 ? "met" : "NOT met"})`,
+  );
 
   // ---------------------------------------------------------------------------------------------
   // HOOK: HTTP measurement of the squad-week route handler. It lives in scripts/bench-load-http.ts (owned by

@@ -10,11 +10,15 @@ const DROPS = 30;
 const TARGETS = { loadMs: 1000, previewMs: 16, dropMs: 300 };
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
-const pct = (xs: number[], p: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor(xs.length * p))];
+const pct = (xs: number[], p: number) =>
+  [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor(xs.length * p))];
 const fmt = (ms: number) => `${ms.toFixed(1)} ms`;
-const verdict = (xs: number[], target: number) => (pct(xs, 0.95) < target ? "ok (median and p95)" : median(xs) < target ? "median ok, p95 OVER" : "OVER");
+const verdict = (xs: number[], target: number) =>
+  pct(xs, 0.95) < target ? "ok (median and p95)" : median(xs) < target ? "median ok, p95 OVER" : "OVER";
 const line = (label: string, xs: number[], target: number) =>
-  console.log(`${label.padEnd(34)} median ${fmt(median(xs)).padStart(9)}   p95 ${fmt(pct(xs, 0.95)).padStart(9)}   max ${fmt(Math.max(...xs)).padStart(9)}   target < ${target} ms  ${verdict(xs, target)}`);
+  console.log(
+    `${label.padEnd(34)} median ${fmt(median(xs)).padStart(9)}   p95 ${fmt(pct(xs, 0.95)).padStart(9)}   max ${fmt(Math.max(...xs)).padStart(9)}   target < ${target} ms  ${verdict(xs, target)}`,
+  );
 
 // The middle of the screen: near its top or bottom edge dnd-kit scrolls the page while the item hovers.
 async function centre(l: Locator) {
@@ -45,19 +49,24 @@ function recordPlannerTimings() {
   let sawSaving = false;
   addEventListener("pointerdown", () => (down = true), { capture: true });
   addEventListener("pointermove", () => (moveAt = down ? performance.now() : null), { capture: true });
-  addEventListener("pointerup", () => {
-    down = false;
-    moveAt = null;
-    dropAt = performance.now();
-    sawSaving = false;
-  }, { capture: true });
+  addEventListener(
+    "pointerup",
+    () => {
+      down = false;
+      moveAt = null;
+      dropAt = performance.now();
+      sawSaving = false;
+    },
+    { capture: true },
+  );
   new MutationObserver((records) => {
     const now = performance.now();
     for (const r of records) {
       if (r.type === "attributes" && r.attributeName === "data-save-state" && dropAt !== null) {
         const state = (r.target as Element).getAttribute("data-save-state");
         if (state === "saving") sawSaving = true;
-        else if (sawSaving && state !== "saving" && perf.saved.length === perf.confirmed.length) perf.saved.push(now - dropAt);
+        else if (sawSaving && state !== "saving" && perf.saved.length === perf.confirmed.length)
+          perf.saved.push(now - dropAt);
         if (sawSaving && state === "idle") {
           perf.confirmed.push(now - dropAt);
           dropAt = null;
@@ -67,7 +76,13 @@ function recordPlannerTimings() {
         moveAt = null;
       }
     }
-  }).observe(document, { subtree: true, childList: true, characterData: true, attributes: true, attributeFilter: ["data-save-state"] });
+  }).observe(document, {
+    subtree: true,
+    childList: true,
+    characterData: true,
+    attributes: true,
+    attributeFilter: ["data-save-state"],
+  });
 }
 
 async function main() {
@@ -89,7 +104,9 @@ async function main() {
     }
     const rows = await page.getByTestId("athlete-row").count();
     const cards = await page.getByTestId("session-card").count();
-    console.log(`\nPlanner benchmark · demo club: ${rows} athletes, ${cards} sessions in the week · Chromium headless · 1440×1800\n`);
+    console.log(
+      `\nPlanner benchmark · demo club: ${rows} athletes, ${cards} sessions in the week · Chromium headless · 1440×1800\n`,
+    );
     line("first load (goto → hydrated grid)", loads.slice(1), TARGETS.loadMs);
 
     // Drag previews: carry a template across every day of every row without dropping.
@@ -114,7 +131,9 @@ async function main() {
     await page.evaluate(() => Object.assign(window.__benchPerf!, { saved: [], confirmed: [] }));
     // Rows under a physio restriction ask for a reason on drop (a person typing); the timed drops avoid them.
     const free = await page.evaluate(() =>
-      [...document.querySelectorAll('[data-testid="day-cell"]')].flatMap((c, i) => (c.closest("tr")?.querySelector('[data-testid="row-restriction"]') ? [] : [i])),
+      [...document.querySelectorAll('[data-testid="day-cell"]')].flatMap((c, i) =>
+        c.closest("tr")?.querySelector('[data-testid="row-restriction"]') ? [] : [i],
+      ),
     );
     for (let i = 0; i < DROPS; i++) {
       const target = cells.nth(free[(i * 9) % free.length]!);
@@ -128,10 +147,15 @@ async function main() {
       await page.mouse.up();
       await page.waitForFunction((k) => window.__benchPerf!.confirmed.length > k, i, { timeout: 10_000 });
     }
-    const { saved, confirmed } = await page.evaluate(() => ({ saved: window.__benchPerf!.saved, confirmed: window.__benchPerf!.confirmed }));
+    const { saved, confirmed } = await page.evaluate(() => ({
+      saved: window.__benchPerf!.saved,
+      confirmed: window.__benchPerf!.confirmed,
+    }));
     line(`drop → saved (${saved.length} drops)`, saved, TARGETS.dropMs);
     line("drop → server numbers shown", confirmed, TARGETS.dropMs);
-    console.log("\nFirst load is timed from Node (includes Playwright's round trips); the rest is timed inside the page.");
+    console.log(
+      "\nFirst load is timed from Node (includes Playwright's round trips); the rest is timed inside the page.",
+    );
   } finally {
     await browser.close();
     await app.stop();

@@ -4,7 +4,10 @@ import { inspectDatabase, restoreDatabase, type Inspection } from "@/lib/db/back
 import { migrationNames } from "@/lib/db/migrator";
 import { databaseStorage } from "@/lib/env";
 
-const describe = (i: Inspection) => `${Object.entries(i.counts).map(([t, n]) => `${n} ${t}`).join(", ")}; last migration ${i.migrations.at(-1) ?? "none"}`;
+const describe = (i: Inspection) =>
+  `${Object.entries(i.counts)
+    .map(([t, n]) => `${n} ${t}`)
+    .join(", ")}; last migration ${i.migrations.at(-1) ?? "none"}`;
 
 async function main(): Promise<number> {
   const args = process.argv.slice(2);
@@ -24,13 +27,16 @@ async function main(): Promise<number> {
   console.log(`backup:   ${file}\n          integrity_check ok; ${describe(check)}`);
   console.log(`replaces: ${storage}\n          ${live.problems.length ? live.problems.join("; ") : describe(live)}`);
   if (!args.includes("--yes")) {
-    console.error("Nothing changed. Stop the app, then run again with --yes to restore (the current database is backed up first).");
+    console.error(
+      "Nothing changed. Stop the app, then run again with --yes to restore (the current database is backed up first).",
+    );
     return 1;
   }
   const { saved, restored } = await restoreDatabase({ from: file, storage, knownMigrations: known });
   console.log(`restored: ${storage} passes integrity_check; ${describe(restored)}`);
   if (saved) console.log(`the database as it was: ${saved}`);
-  if (restored.migrations.length < known.length) console.log("The backup is from an older version: `npm start` (or `npm run db:migrate`) brings it up to date.");
+  if (restored.migrations.length < known.length)
+    console.log("The backup is from an older version: `npm start` (or `npm run db:migrate`) brings it up to date.");
   return 0;
 }
 

@@ -7,7 +7,10 @@ async function main() {
   await prepareDatabase();
   const children: ChildProcess[] = [...(await devServices())];
   const port = process.env.PORT ?? "3000";
-  const next = spawn(process.execPath, ["node_modules/next/dist/bin/next", "dev", "-p", port], { stdio: "inherit", env: { NEXT_TELEMETRY_DISABLED: "1", ...process.env } });
+  const next = spawn(process.execPath, ["node_modules/next/dist/bin/next", "dev", "-p", port], {
+    stdio: "inherit",
+    env: { NEXT_TELEMETRY_DISABLED: "1", ...process.env },
+  });
   children.push(next);
   const stop = () => {
     for (const c of children) c.kill("SIGTERM");

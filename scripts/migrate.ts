@@ -9,7 +9,9 @@ async function main() {
   const migrator = createMigrator(sequelize);
   if (command === "up") {
     const done = await migrator.up();
-    console.log(`migrated ${databaseStorage()}: ${done.length ? done.map((m) => m.name).join(", ") : "already up to date"}`);
+    console.log(
+      `migrated ${databaseStorage()}: ${done.length ? done.map((m) => m.name).join(", ") : "already up to date"}`,
+    );
   } else if (command === "down") {
     const undone = await migrator.down();
     console.log(`rolled back: ${undone.map((m) => m.name).join(", ") || "nothing"}`);

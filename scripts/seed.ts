@@ -9,7 +9,9 @@ async function main() {
     console.log(`seed: ${databaseStorage()} already has data; skipping (db:reset starts over)`);
   } else {
     const club = await seedDemo(d, { today: process.env.SEED_TODAY });
-    console.log(`seed: demo club ready in ${databaseStorage()} (team ${club.teamId}, ${Object.keys(club.athleteIds).length} athletes)`);
+    console.log(
+      `seed: demo club ready in ${databaseStorage()} (team ${club.teamId}, ${Object.keys(club.athleteIds).length} athletes)`,
+    );
   }
   await closeDb();
 }

@@ -7,7 +7,9 @@ export default function AuthLayout({ children }: { children: ReactNode }) {
       <div className="mb-8">
         <Logo />
       </div>
-      <div className="w-full max-w-sm rounded-card bg-paper-raised p-6 shadow-card ring-1 ring-ink-100 sm:p-8">{children}</div>
+      <div className="w-full max-w-sm rounded-card bg-paper-raised p-6 shadow-card ring-1 ring-ink-100 sm:p-8">
+        {children}
+      </div>
     </div>
   );
 }

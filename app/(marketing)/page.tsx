@@ -33,14 +33,15 @@ export default async function LandingPage() {
       <main className="mx-auto max-w-6xl px-5 pb-20">
         <section className="grid gap-10 py-12 md:grid-cols-[1.2fr_1fr] md:py-20">
           <div>
-            <p className="text-sm font-semibold uppercase tracking-widest text-clay-600">For people who coach speed</p>
+            <p className="text-sm font-semibold tracking-widest text-clay-600 uppercase">For people who coach speed</p>
             <h1 className="mt-4 text-3xl font-semibold text-ink-950 md:text-4xl">
               Faster athletes, planned one week at a time, without the hamstring bill.
             </h1>
             <p className="mt-5 max-w-xl text-lg text-ink-600">
-              Top speed is built by hard, short ground contacts: the same sessions that overload hamstrings, Achilles tendons and
-              shins when volume jumps. Sprintwright keeps each athlete&apos;s high-speed metres and contacts progressive against their own
-              tested max velocity, and tells the physio before a spike turns into an injury.
+              Top speed is built by hard, short ground contacts: the same sessions that overload hamstrings, Achilles
+              tendons and shins when volume jumps. Sprintwright keeps each athlete&apos;s high-speed metres and contacts
+              progressive against their own tested max velocity, and tells the physio before a spike turns into an
+              injury.
             </p>
             <div className="mt-8 flex flex-wrap gap-3">
               <Link href="/sign-in" className={buttonClass({ variant: "accent", size: "lg" })}>
@@ -49,7 +50,7 @@ export default async function LandingPage() {
             </div>
           </div>
           <div className="rounded-card bg-ink-950 p-6 text-paper shadow-lift">
-            <p className="text-xs font-semibold uppercase tracking-widest text-lane-300">This week · Maya Okafor</p>
+            <p className="text-xs font-semibold tracking-widest text-lane-300 uppercase">This week · Maya Okafor</p>
             <dl className="mt-5 grid grid-cols-2 gap-4">
               {[
                 ["HSR metres", "640 m"],
@@ -63,7 +64,9 @@ export default async function LandingPage() {
                 </div>
               ))}
             </dl>
-            <p className="mt-5 text-sm text-ink-300">Steady week: inside the team&apos;s ratio band and under the weekly jump limit.</p>
+            <p className="mt-5 text-sm text-ink-300">
+              Steady week: inside the team&apos;s ratio band and under the weekly jump limit.
+            </p>
           </div>
         </section>
         <section className="grid gap-4 md:grid-cols-3">

@@ -14,7 +14,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
   const links = [...base, ...extras.filter((e) => !base.some((b) => b.href === e.href))];
   return (
     <div className="min-h-dvh md:grid md:grid-cols-[15rem_1fr]">
-      <aside className="border-b border-ink-100 bg-paper-raised px-4 py-3 md:sticky md:top-0 md:h-dvh md:border-b-0 md:border-r md:px-4 md:py-6">
+      <aside className="border-b border-ink-100 bg-paper-raised px-4 py-3 md:sticky md:top-0 md:h-dvh md:border-r md:border-b-0 md:px-4 md:py-6">
         <div className="flex items-center justify-between md:block">
           <Logo href="/home" />
           <div className="md:hidden">
@@ -34,12 +34,12 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
           <p className="text-xs text-ink-500" data-testid="viewer-role">
             {ROLE_LABEL[viewer.role]}
           </p>
-          <div className="-ml-2 mt-2">
+          <div className="mt-2 -ml-2">
             <SignOutButton />
           </div>
         </div>
       </aside>
-      <main className="mx-auto w-full min-w-0 max-w-7xl px-4 py-6 md:px-8 md:py-8">{children}</main>
+      <main className="mx-auto w-full max-w-7xl min-w-0 px-4 py-6 md:px-8 md:py-8">{children}</main>
     </div>
   );
 }

@@ -11,7 +11,10 @@ import { forgotPasswordSchema, type ForgotPasswordInput } from "@/lib/validation
 export function ForgotPasswordForm() {
   const [done, setDone] = useState(false);
   const [error, setError] = useState<string>();
-  const { register, handleSubmit, formState } = useForm<ForgotPasswordInput>({ resolver: zodResolver(forgotPasswordSchema), defaultValues: { email: "" } });
+  const { register, handleSubmit, formState } = useForm<ForgotPasswordInput>({
+    resolver: zodResolver(forgotPasswordSchema),
+    defaultValues: { email: "" },
+  });
 
   const onSubmit = handleSubmit(async (values) => {
     setError(undefined);
@@ -30,9 +33,19 @@ export function ForgotPasswordForm() {
   const { errors, isSubmitting } = formState;
   return (
     <form onSubmit={onSubmit} noValidate className="mt-6 space-y-4">
-      {error ? <p role="alert" className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">{error}</p> : null}
+      {error ? (
+        <p role="alert" className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">
+          {error}
+        </p>
+      ) : null}
       <Field label="E-mail" htmlFor="reset-email" error={errors.email?.message}>
-        <Input id="reset-email" type="email" autoComplete="email" aria-invalid={!!errors.email} {...register("email")} />
+        <Input
+          id="reset-email"
+          type="email"
+          autoComplete="email"
+          aria-invalid={!!errors.email}
+          {...register("email")}
+        />
       </Field>
       <Button type="submit" className="w-full" disabled={isSubmitting}>
         {isSubmitting ? "Sending…" : "Send reset link"}

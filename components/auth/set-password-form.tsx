@@ -13,7 +13,12 @@ import { PASSWORD_HINT } from "@/lib/validations/password";
 export function SetPasswordForm({ token, email }: { token: string; email: string }) {
   const router = useRouter();
   const [error, setError] = useState<string>();
-  const { register, handleSubmit, setError: setFieldError, formState } = useForm<SetPasswordInput>({
+  const {
+    register,
+    handleSubmit,
+    setError: setFieldError,
+    formState,
+  } = useForm<SetPasswordInput>({
     resolver: zodResolver(setPasswordSchemaFor(email)),
     defaultValues: { token, password: "", confirm: "" },
   });
@@ -34,13 +39,29 @@ export function SetPasswordForm({ token, email }: { token: string; email: string
   const { errors, isSubmitting } = formState;
   return (
     <form onSubmit={onSubmit} noValidate className="mt-6 space-y-4">
-      {error ? <p role="alert" className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">{error}</p> : null}
+      {error ? (
+        <p role="alert" className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">
+          {error}
+        </p>
+      ) : null}
       <input type="hidden" {...register("token")} />
       <Field label="New password" htmlFor="password" error={errors.password?.message} hint={PASSWORD_HINT}>
-        <Input id="password" type="password" autoComplete="new-password" aria-invalid={!!errors.password} {...register("password")} />
+        <Input
+          id="password"
+          type="password"
+          autoComplete="new-password"
+          aria-invalid={!!errors.password}
+          {...register("password")}
+        />
       </Field>
       <Field label="Repeat it" htmlFor="confirm" error={errors.confirm?.message}>
-        <Input id="confirm" type="password" autoComplete="new-password" aria-invalid={!!errors.confirm} {...register("confirm")} />
+        <Input
+          id="confirm"
+          type="password"
+          autoComplete="new-password"
+          aria-invalid={!!errors.confirm}
+          {...register("confirm")}
+        />
       </Field>
       <Button type="submit" className="w-full" disabled={isSubmitting}>
         {isSubmitting ? "Saving…" : "Set password"}

@@ -11,7 +11,15 @@ import { safeCallbackPath } from "@/lib/auth/safe-redirect";
 import { WRONG_CREDENTIALS, signInErrorMessage } from "@/lib/auth/sign-in-messages";
 import { signInSchema, type SignInInput } from "@/lib/validations/auth";
 
-export function SignInForm({ next, initialError, initialEmail }: { next: string; initialError?: string; initialEmail?: string }) {
+export function SignInForm({
+  next,
+  initialError,
+  initialEmail,
+}: {
+  next: string;
+  initialError?: string;
+  initialEmail?: string;
+}) {
   const router = useRouter();
   const [error, setError] = useState(initialError);
   const { register, handleSubmit, formState } = useForm<SignInInput>({
@@ -34,7 +42,11 @@ export function SignInForm({ next, initialError, initialEmail }: { next: string;
   return (
     <form onSubmit={onSubmit} noValidate className="mt-6 space-y-4" data-testid="sign-in-form">
       {error ? (
-        <p role="alert" data-testid="sign-in-error" className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">
+        <p
+          role="alert"
+          data-testid="sign-in-error"
+          className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike"
+        >
           {error}
         </p>
       ) : null}
@@ -42,7 +54,13 @@ export function SignInForm({ next, initialError, initialEmail }: { next: string;
         <Input id="email" type="email" autoComplete="email" aria-invalid={!!errors.email} {...register("email")} />
       </Field>
       <Field label="Password" htmlFor="password" error={errors.password?.message}>
-        <Input id="password" type="password" autoComplete="current-password" aria-invalid={!!errors.password} {...register("password")} />
+        <Input
+          id="password"
+          type="password"
+          autoComplete="current-password"
+          aria-invalid={!!errors.password}
+          {...register("password")}
+        />
       </Field>
       <Button type="submit" className="w-full" disabled={isSubmitting}>
         {isSubmitting ? "Signing in…" : "Sign in"}

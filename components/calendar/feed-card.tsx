@@ -34,7 +34,11 @@ export function FeedCard({ athleteId, initial }: { athleteId: number; initial: C
     try {
       const next = await sendJson<CalendarFeedStatus>(url, kind === "rotate" ? "POST" : "DELETE");
       setFeed(next);
-      setMessage(kind === "rotate" ? "New link made. The old one no longer works: subscribe again with this one." : "Calendar link turned off. Calendars that used it stop updating.");
+      setMessage(
+        kind === "rotate"
+          ? "New link made. The old one no longer works: subscribe again with this one."
+          : "Calendar link turned off. Calendars that used it stop updating.",
+      );
     } catch (err) {
       setMessage((err as Error).message);
     } finally {
@@ -46,29 +50,47 @@ export function FeedCard({ athleteId, initial }: { athleteId: number; initial: C
   return (
     <Card className="p-4 sm:p-5" id="calendar" data-testid="feed-card">
       <h2 className="font-semibold text-ink-950">Your sessions in your phone&apos;s calendar</h2>
-      <p className="mt-1 text-sm text-ink-500">Subscribe once; published sessions appear by themselves and follow every change your coach makes.</p>
+      <p className="mt-1 text-sm text-ink-500">
+        Subscribe once; published sessions appear by themselves and follow every change your coach makes.
+      </p>
 
       {feed.active && feed.url ? (
         <>
           <div className="mt-4 flex flex-col gap-2 sm:flex-row">
-            <input ref={setInput} readOnly value={feed.url} aria-label="Calendar link" className={`${inputClass} font-mono text-xs`} data-testid="feed-url" onFocus={(e) => e.currentTarget.select()} />
+            <input
+              ref={setInput}
+              readOnly
+              value={feed.url}
+              aria-label="Calendar link"
+              className={`${inputClass} font-mono text-xs`}
+              data-testid="feed-url"
+              onFocus={(e) => e.currentTarget.select()}
+            />
             <Button
               variant="secondary"
               className="shrink-0"
               data-testid="feed-copy"
-              onClick={async () => setMessage((await copyText(feed.url!, input)) ? "Link copied." : "Select the link and copy it.")}
+              onClick={async () =>
+                setMessage((await copyText(feed.url!, input)) ? "Link copied." : "Select the link and copy it.")
+              }
             >
               Copy link
             </Button>
           </div>
-          <a href={feed.webcalUrl ?? feed.url} className={buttonClass({ variant: "accent", className: "mt-3 w-full sm:w-auto" })} data-testid="feed-webcal">
+          <a
+            href={feed.webcalUrl ?? feed.url}
+            className={buttonClass({ variant: "accent", className: "mt-3 w-full sm:w-auto" })}
+            data-testid="feed-webcal"
+          >
             Add to my calendar
           </a>
           <SubscribeHelp />
         </>
       ) : (
         <p className="mt-4 rounded-lg bg-paper-sunk px-3 py-2 text-sm text-ink-700" data-testid="feed-off">
-          {feed.active ? "This link can no longer be shown. Make a new one to subscribe." : "Your calendar link is turned off."}
+          {feed.active
+            ? "This link can no longer be shown. Make a new one to subscribe."
+            : "Your calendar link is turned off."}
         </p>
       )}
 
@@ -80,9 +102,17 @@ export function FeedCard({ athleteId, initial }: { athleteId: number; initial: C
         {confirm ? (
           <>
             <span className="self-center text-sm text-ink-700">
-              {confirm === "rotate" ? "Make a new link? Calendars using the old one stop updating." : "Turn the link off? Calendars using it stop updating."}
+              {confirm === "rotate"
+                ? "Make a new link? Calendars using the old one stop updating."
+                : "Turn the link off? Calendars using it stop updating."}
             </span>
-            <Button size="sm" variant={confirm === "revoke" ? "danger" : "primary"} disabled={busy} onClick={() => void run(confirm)} data-testid="feed-confirm">
+            <Button
+              size="sm"
+              variant={confirm === "revoke" ? "danger" : "primary"}
+              disabled={busy}
+              onClick={() => void run(confirm)}
+              data-testid="feed-confirm"
+            >
               {confirm === "rotate" ? "Make new link" : "Turn off"}
             </Button>
             <Button size="sm" variant="ghost" onClick={() => setConfirm(null)}>
@@ -91,7 +121,12 @@ export function FeedCard({ athleteId, initial }: { athleteId: number; initial: C
           </>
         ) : (
           <>
-            <Button size="sm" variant="secondary" onClick={() => (feed.active ? setConfirm("rotate") : void run("rotate"))} data-testid="feed-rotate">
+            <Button
+              size="sm"
+              variant="secondary"
+              onClick={() => (feed.active ? setConfirm("rotate") : void run("rotate"))}
+              data-testid="feed-rotate"
+            >
               {feed.active ? "Make a new link" : "Make a link"}
             </Button>
             {feed.active ? (

@@ -5,11 +5,17 @@ export function SubscribeHelp() {
       <details className="group rounded-lg bg-paper-sunk px-3 py-2">
         <summary className="cursor-pointer font-medium text-ink-800">On an iPhone or iPad</summary>
         <ol className="mt-2 list-decimal space-y-1 pl-5 text-ink-600">
-          <li>On the phone, tap <strong>Add to my calendar</strong> above and confirm <strong>Subscribe</strong>.</li>
           <li>
-            Or copy the link, then open <strong>Settings → Calendar → Accounts → Add Account → Other → Add Subscribed Calendar</strong> and paste it.
+            On the phone, tap <strong>Add to my calendar</strong> above and confirm <strong>Subscribe</strong>.
           </li>
-          <li>Sessions appear within a few minutes and update by themselves; cancelled ones are marked as cancelled.</li>
+          <li>
+            Or copy the link, then open{" "}
+            <strong>Settings → Calendar → Accounts → Add Account → Other → Add Subscribed Calendar</strong> and paste
+            it.
+          </li>
+          <li>
+            Sessions appear within a few minutes and update by themselves; cancelled ones are marked as cancelled.
+          </li>
         </ol>
       </details>
       <details className="group rounded-lg bg-paper-sunk px-3 py-2">
@@ -17,13 +23,18 @@ export function SubscribeHelp() {
         <ol className="mt-2 list-decimal space-y-1 pl-5 text-ink-600">
           <li>Copy the link.</li>
           <li>
-            In a browser, open <strong>calendar.google.com</strong>, choose <strong>Other calendars → + → From URL</strong>, paste the link and add it.
+            In a browser, open <strong>calendar.google.com</strong>, choose{" "}
+            <strong>Other calendars → + → From URL</strong>, paste the link and add it.
           </li>
-          <li>In the Google Calendar app, turn the new calendar on under <strong>Settings</strong> if it is hidden. Google refreshes subscribed calendars every few hours.</li>
+          <li>
+            In the Google Calendar app, turn the new calendar on under <strong>Settings</strong> if it is hidden. Google
+            refreshes subscribed calendars every few hours.
+          </li>
         </ol>
       </details>
       <p className="text-xs text-ink-500">
-        The link is personal: anyone who has it can see your sessions. If it got out, make a new one; the old link stops working at once.
+        The link is personal: anyone who has it can see your sessions. If it got out, make a new one; the old link stops
+        working at once.
       </p>
     </div>
   );

@@ -3,7 +3,15 @@ import { Card } from "@/components/ui/card";
 import type { FiguresTopic } from "@/lib/load/figures-link";
 
 /** One explained figure: an anchor other screens link to, a title, and plain words. */
-export function FigureSection({ id, title, children }: { id: FiguresTopic | string; title: string; children: ReactNode }) {
+export function FigureSection({
+  id,
+  title,
+  children,
+}: {
+  id: FiguresTopic | string;
+  title: string;
+  children: ReactNode;
+}) {
   return (
     <Card id={id} className="scroll-mt-6 p-5" data-testid={`figures-${id}`}>
       <h2 className="text-base font-semibold text-ink-900">{title}</h2>

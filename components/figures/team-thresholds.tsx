@@ -19,7 +19,10 @@ export function TeamThresholds({ settings }: { settings: TeamLoadSettings }) {
     ["Near-max running", `at or above ${formatNumber(settings.nearMaxPct)} % of the athlete's own vmax`],
     ["Acute:chronic ratio", `${METHOD[settings.acwrMethod]}, judged on ${METRIC_INFO[settings.acwrMetric].label}`],
     ["Spike", `ratio at or above ${formatRatio(settings.spikeRatio)}`],
-    ["Climbing", `ratio at or above ${formatRatio(settings.risingRatio)} and below ${formatRatio(settings.spikeRatio)}`],
+    [
+      "Climbing",
+      `ratio at or above ${formatRatio(settings.risingRatio)} and below ${formatRatio(settings.spikeRatio)}`,
+    ],
     ["Underloaded", `ratio below ${formatRatio(settings.lowRatio)} on every day of a week with a full history`],
     ["Weekly jump", `more than ${formatNumber(settings.weeklyChangeLimitPct, 1)} % up on the week before`],
     ["Recovery window", `${formatNumber(settings.recoveryHours)} h between high-intensity sessions`],

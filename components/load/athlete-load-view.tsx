@@ -32,8 +32,20 @@ export function AthleteLoadView({ initial }: { initial: AthleteLoadDto }) {
   const [showPlan, setShowPlan] = useState(true);
   const range = rangeFor(initial, weeks);
   const key = loadKeys.athlete(initial.athlete.id, { ...range, view, metric });
-  const initialKey = loadKeys.athlete(initial.athlete.id, { from: initial.from, to: initial.to, view: initial.view, metric: initial.metric });
-  const { data = initial, error, isValidating } = useSWR<AthleteLoadDto>(key, fetchJson, { fallbackData: key === initialKey ? initial : undefined, keepPreviousData: true });
+  const initialKey = loadKeys.athlete(initial.athlete.id, {
+    from: initial.from,
+    to: initial.to,
+    view: initial.view,
+    metric: initial.metric,
+  });
+  const {
+    data = initial,
+    error,
+    isValidating,
+  } = useSWR<AthleteLoadDto>(key, fetchJson, {
+    fallbackData: key === initialKey ? initial : undefined,
+    keepPreviousData: true,
+  });
   const info = METRIC_INFO[data.metric];
 
   return (
@@ -41,7 +53,12 @@ export function AthleteLoadView({ initial }: { initial: AthleteLoadDto }) {
       <div className="flex flex-wrap items-end gap-3">
         <label className="flex flex-col gap-1 text-xs font-medium text-ink-600">
           Metric
-          <Select className="w-48" value={metric} onChange={(e) => setMetric(e.target.value as Metric)} data-testid="metric-select">
+          <Select
+            className="w-48"
+            value={metric}
+            onChange={(e) => setMetric(e.target.value as Metric)}
+            data-testid="metric-select"
+          >
             {METRICS.map((m) => (
               <option key={m} value={m}>
                 {METRIC_INFO[m].label}
@@ -60,13 +77,29 @@ export function AthleteLoadView({ initial }: { initial: AthleteLoadDto }) {
             ))}
           </Select>
         </label>
-        <Segmented label="Which sessions count" value={view} onChange={setView} options={[["actual", "Logged only"], ["projected", "Logged + plan"]]} />
+        <Segmented
+          label="Which sessions count"
+          value={view}
+          onChange={setView}
+          options={[
+            ["actual", "Logged only"],
+            ["projected", "Logged + plan"],
+          ]}
+        />
         <label className="flex h-10 items-center gap-2 text-sm text-ink-700">
-          <input type="checkbox" checked={showPlan} onChange={(e) => setShowPlan(e.target.checked)} className="accent-lane-600" data-testid="show-plan" />
+          <input
+            type="checkbox"
+            checked={showPlan}
+            onChange={(e) => setShowPlan(e.target.checked)}
+            className="accent-lane-600"
+            data-testid="show-plan"
+          />
           Show planned
         </label>
       </div>
-      {error ? <p className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">{(error as Error).message}</p> : null}
+      {error ? (
+        <p className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">{(error as Error).message}</p>
+      ) : null}
       <Card className={clsx("p-4 sm:p-5", isValidating && "opacity-80")}>
         <div className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
           <h2 className="text-base font-semibold text-ink-900">
@@ -75,7 +108,7 @@ export function AthleteLoadView({ initial }: { initial: AthleteLoadDto }) {
           <p className="text-xs text-ink-500">{info.description}</p>
         </div>
         <LoadChart days={data.days} unit={info.unit} today={data.today} showPlan={showPlan} />
-        <div className="mb-2 mt-6 flex flex-wrap items-baseline justify-between gap-2">
+        <div className="mt-6 mb-2 flex flex-wrap items-baseline justify-between gap-2">
           <h2 className="text-base font-semibold text-ink-900">
             Acute:chronic ratio{" "}
             <Link href={figuresHref("acwr")} className="text-xs font-normal text-lane-700 underline">
@@ -83,13 +116,20 @@ export function AthleteLoadView({ initial }: { initial: AthleteLoadDto }) {
             </Link>
           </h2>
           <p className="text-xs text-ink-500">
-            {data.settings.acwrMethod === "ewma" ? "EWMA, 7 and 28 days" : data.settings.acwrMethod === "rolling_coupled" ? "Rolling, coupled" : "Rolling, uncoupled"} · shaded: under{" "}
-            {data.settings.lowRatio}, comfortable, climbing from {data.settings.risingRatio}, spike from {data.settings.spikeRatio}
+            {data.settings.acwrMethod === "ewma"
+              ? "EWMA, 7 and 28 days"
+              : data.settings.acwrMethod === "rolling_coupled"
+                ? "Rolling, coupled"
+                : "Rolling, uncoupled"}{" "}
+            · shaded: under {data.settings.lowRatio}, comfortable, climbing from {data.settings.risingRatio}, spike from{" "}
+            {data.settings.spikeRatio}
           </p>
         </div>
         <RatioChart days={data.days} settings={data.settings} today={data.today} />
         {data.days.some((d) => d.provisional && d.ratio !== null) ? (
-          <p className="mt-2 text-xs text-ink-500">Dashed: provisional, fewer than 28 days of history behind the ratio.</p>
+          <p className="mt-2 text-xs text-ink-500">
+            Dashed: provisional, fewer than 28 days of history behind the ratio.
+          </p>
         ) : null}
       </Card>
       <div className="grid gap-5 lg:grid-cols-[1fr_1.2fr]">
@@ -97,7 +137,9 @@ export function AthleteLoadView({ initial }: { initial: AthleteLoadDto }) {
         <Card className="p-4 sm:p-5">
           <h2 className="mb-3 text-base font-semibold text-ink-900">Worth a look this week</h2>
           <FlagList flags={data.flags} />
-          <h2 className="mb-3 mt-5 border-t border-ink-100 pt-4 text-base font-semibold text-ink-900">Next week as planned</h2>
+          <h2 className="mt-5 mb-3 border-t border-ink-100 pt-4 text-base font-semibold text-ink-900">
+            Next week as planned
+          </h2>
           <FlagList flags={data.upcoming.flags} empty="Nothing flagged in next week's plan so far." />
         </Card>
       </div>

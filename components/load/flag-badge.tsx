@@ -5,14 +5,28 @@ import { FLAG_DISPLAY, flagClasses } from "@/lib/load/flag-display";
 import type { Flag, FlagKind } from "@/lib/load/flags";
 
 /** One flag kind as a small pill; the title carries the one-line hint. */
-export function FlagBadge({ kind, count, provisional, className }: { kind: FlagKind; count?: number; provisional?: boolean; className?: string }) {
+export function FlagBadge({
+  kind,
+  count,
+  provisional,
+  className,
+}: {
+  kind: FlagKind;
+  count?: number;
+  provisional?: boolean;
+  className?: string;
+}) {
   const d = FLAG_DISPLAY[kind];
   return (
     <span
       data-testid="flag-badge"
       data-kind={kind}
       title={d.hint}
-      className={clsx("inline-flex items-center gap-1 whitespace-nowrap rounded-full border px-2 py-0.5 text-2xs font-medium", flagClasses(kind).badge, className)}
+      className={clsx(
+        "inline-flex items-center gap-1 rounded-full border px-2 py-0.5 text-2xs font-medium whitespace-nowrap",
+        flagClasses(kind).badge,
+        className,
+      )}
     >
       <span className={clsx("h-1.5 w-1.5 rounded-full", flagClasses(kind).dot)} aria-hidden />
       {d.label}

@@ -10,14 +10,21 @@ export function FlagList({ flags, empty = "No flags this week." }: { flags: read
   return (
     <ul className="space-y-2" data-testid="flag-list">
       {flags.map((f, i) => (
-        <li key={`${f.kind}-${f.date}-${f.metric ?? ""}-${i}`} className="flex flex-col gap-1 sm:flex-row sm:items-start sm:gap-3">
+        <li
+          key={`${f.kind}-${f.date}-${f.metric ?? ""}-${i}`}
+          className="flex flex-col gap-1 sm:flex-row sm:items-start sm:gap-3"
+        >
           <span className="flex shrink-0 items-center gap-2 sm:w-44">
             <FlagBadge kind={f.kind} provisional={f.provisional} />
             <span className="text-2xs text-ink-400">{formatDayLabel(f.date)}</span>
           </span>
           <span className="text-sm text-ink-700">
             {f.reason}{" "}
-            <Link href={figuresHref(f.provisional ? "provisional" : FLAG_TOPIC[f.kind])} className="text-xs text-lane-700 underline" data-testid="flag-explain">
+            <Link
+              href={figuresHref(f.provisional ? "provisional" : FLAG_TOPIC[f.kind])}
+              className="text-xs text-lane-700 underline"
+              data-testid="flag-explain"
+            >
               How this is worked out
             </Link>
           </span>

@@ -3,7 +3,17 @@
 import { clsx } from "clsx";
 
 /** A small segmented control: one pressed button out of a few. */
-export function Segmented<T extends string>({ value, options, onChange, label }: { value: T; options: [T, string][]; onChange: (v: T) => void; label: string }) {
+export function Segmented<T extends string>({
+  value,
+  options,
+  onChange,
+  label,
+}: {
+  value: T;
+  options: [T, string][];
+  onChange: (v: T) => void;
+  label: string;
+}) {
   return (
     <div className="inline-flex rounded-lg bg-ink-100 p-0.5 text-sm" role="group" aria-label={label}>
       {options.map(([v, text]) => (
@@ -12,7 +22,10 @@ export function Segmented<T extends string>({ value, options, onChange, label }:
           type="button"
           aria-pressed={value === v}
           onClick={() => onChange(v)}
-          className={clsx("rounded-md px-3 py-1.5 font-medium", value === v ? "bg-paper-raised text-ink-900 shadow-card" : "text-ink-500 hover:text-ink-800")}
+          className={clsx(
+            "rounded-md px-3 py-1.5 font-medium",
+            value === v ? "bg-paper-raised text-ink-900 shadow-card" : "text-ink-500 hover:text-ink-800",
+          )}
         >
           {text}
         </button>

@@ -58,7 +58,17 @@ export const COLUMN_LABELS: Record<string, string> = {
 /** Right-aligned numeric columns, and the one-line explanation shown on each header. */
 const BAND_COLUMNS = ["absHsrM", "absSprintM", "relHsrM", "relNearMaxM", "relMaximalM"] as const;
 type BandColumn = (typeof BAND_COLUMNS)[number];
-export const NUMERIC_COLUMNS = new Set(["hsrM", "nearMaxM", "sprintSteps", "contacts", "weightedContacts", ...BAND_COLUMNS, "srpe", "ratio", "change"]);
+export const NUMERIC_COLUMNS = new Set([
+  "hsrM",
+  "nearMaxM",
+  "sprintSteps",
+  "contacts",
+  "weightedContacts",
+  ...BAND_COLUMNS,
+  "srpe",
+  "ratio",
+  "change",
+]);
 export const COLUMN_HINTS: Record<string, string> = {
   hsrM: METRIC_INFO.hsrM.description,
   nearMaxM: METRIC_INFO.nearMaxM.description,
@@ -109,12 +119,18 @@ export const squadColumns = helper.columns([
     enableHiding: false,
     cell: (c) => (
       <span className="flex flex-col whitespace-nowrap">
-        <Link href={`/load/${c.row.original.id}`} className="font-medium text-ink-900 hover:text-lane-700 hover:underline" data-testid="athlete-link">
+        <Link
+          href={`/load/${c.row.original.id}`}
+          className="font-medium text-ink-900 hover:text-lane-700 hover:underline"
+          data-testid="athlete-link"
+        >
           {c.getValue()}
         </Link>
         {c.row.original.missingDays > 0 ? (
           <span className="text-2xs text-flag-climb" data-testid="missing-note">
-            {c.row.original.missingDays === 1 ? "1 session not logged" : `${c.row.original.missingDays} sessions not logged`}
+            {c.row.original.missingDays === 1
+              ? "1 session not logged"
+              : `${c.row.original.missingDays} sessions not logged`}
             {c.row.original.estimated ? " (plan counted, estimate)" : ""}
           </span>
         ) : null}

@@ -3,7 +3,12 @@
 import { clsx } from "clsx";
 import { useMemo, useState } from "react";
 import useSWR from "swr";
-import { useTable, type ColumnFiltersState, type SortingState, type ColumnVisibilityState } from "@tanstack/react-table";
+import {
+  useTable,
+  type ColumnFiltersState,
+  type SortingState,
+  type ColumnVisibilityState,
+} from "@tanstack/react-table";
 import { LoadCaution } from "@/components/ui/caution";
 import { Card, EmptyState } from "@/components/ui/card";
 import type { SquadWeekDto } from "@/lib/data/load-views";
@@ -30,7 +35,17 @@ export function SquadLoadTable({ teamId, initial }: { teamId: number; initial: S
   const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
   const [columnVisibility, setColumnVisibility] = useState<ColumnVisibilityState>({});
 
-  const rows = useMemo<SquadRow[]>(() => (data ? data.rows.map((r) => ({ ...r, acwrMetric: data.settings.acwrMetric, estimated: data.settings.missingLogs === "estimate" })) : NO_ROWS), [data]);
+  const rows = useMemo<SquadRow[]>(
+    () =>
+      data
+        ? data.rows.map((r) => ({
+            ...r,
+            acwrMetric: data.settings.acwrMetric,
+            estimated: data.settings.missingLogs === "estimate",
+          }))
+        : NO_ROWS,
+    [data],
+  );
   const table = useTable({
     features: squadFeatures,
     columns: squadColumns,
@@ -47,11 +62,28 @@ export function SquadLoadTable({ teamId, initial }: { teamId: number; initial: S
   return (
     <div className="space-y-4">
       <div className="flex flex-col gap-3 lg:flex-row lg:items-center lg:justify-between">
-        <WeekNav week={week} today={data?.today ?? initial.today} weekStartDay={initial.weekStartDay} onChange={setWeek} />
-        <Segmented label="Which sessions count" value={view} onChange={setView} options={[["projected", "Logged + plan"], ["actual", "Logged only"]]} />
+        <WeekNav
+          week={week}
+          today={data?.today ?? initial.today}
+          weekStartDay={initial.weekStartDay}
+          onChange={setWeek}
+        />
+        <Segmented
+          label="Which sessions count"
+          value={view}
+          onChange={setView}
+          options={[
+            ["projected", "Logged + plan"],
+            ["actual", "Logged only"],
+          ]}
+        />
       </div>
       <SquadToolbar table={table} groups={data?.groups ?? []} week={week} />
-      {error ? <p className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">Could not load the week: {(error as Error).message}</p> : null}
+      {error ? (
+        <p className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">
+          Could not load the week: {(error as Error).message}
+        </p>
+      ) : null}
       <Card className={clsx("overflow-x-auto transition-opacity [contain:inline-size]", isLoading && "opacity-60")}>
         <table className="w-full min-w-[56rem] text-sm" data-testid="squad-load-table">
           <thead className="border-b border-ink-100 text-xs text-ink-500">
@@ -66,7 +98,11 @@ export function SquadLoadTable({ teamId, initial }: { teamId: number; initial: S
                       scope="col"
                       title={COLUMN_HINTS[id]}
                       aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : "none"}
-                      className={clsx("px-3 py-2.5 font-medium", NUMERIC_COLUMNS.has(id) ? "text-right" : "text-left", id === "name" && "sticky left-0 bg-paper-raised")}
+                      className={clsx(
+                        "px-3 py-2.5 font-medium",
+                        NUMERIC_COLUMNS.has(id) ? "text-right" : "text-left",
+                        id === "name" && "sticky left-0 bg-paper-raised",
+                      )}
                     >
                       <button
                         type="button"
@@ -75,8 +111,12 @@ export function SquadLoadTable({ teamId, initial }: { teamId: number; initial: S
                         data-testid={`sort-${id}`}
                       >
                         <table.FlexRender header={header} />
-                        {id === "ratio" || id === "change" ? <span className="font-normal text-ink-400">({metric})</span> : null}
-                        <span aria-hidden className="w-3 text-ink-400">{sorted === "asc" ? "↑" : sorted === "desc" ? "↓" : ""}</span>
+                        {id === "ratio" || id === "change" ? (
+                          <span className="font-normal text-ink-400">({metric})</span>
+                        ) : null}
+                        <span aria-hidden className="w-3 text-ink-400">
+                          {sorted === "asc" ? "↑" : sorted === "desc" ? "↓" : ""}
+                        </span>
                       </button>
                     </th>
                   );
@@ -86,11 +126,20 @@ export function SquadLoadTable({ teamId, initial }: { teamId: number; initial: S
           </thead>
           <tbody className="divide-y divide-ink-50">
             {visible.map((row) => (
-              <tr key={row.id} data-testid="squad-load-row" data-athlete={row.original.name} className="hover:bg-paper/60">
+              <tr
+                key={row.id}
+                data-testid="squad-load-row"
+                data-athlete={row.original.name}
+                className="hover:bg-paper/60"
+              >
                 {row.getVisibleCells().map((cell) => (
                   <td
                     key={cell.id}
-                    className={clsx("px-3 py-2.5 align-middle", NUMERIC_COLUMNS.has(cell.column.id) && "text-right", cell.column.id === "name" && "sticky left-0 bg-paper-raised")}
+                    className={clsx(
+                      "px-3 py-2.5 align-middle",
+                      NUMERIC_COLUMNS.has(cell.column.id) && "text-right",
+                      cell.column.id === "name" && "sticky left-0 bg-paper-raised",
+                    )}
                   >
                     <table.FlexRender cell={cell} />
                   </td>
@@ -106,8 +155,9 @@ export function SquadLoadTable({ teamId, initial }: { teamId: number; initial: S
         ) : null}
       </Card>
       <p className="text-xs text-ink-500">
-        Metres and steps are estimates from each athlete&apos;s tested max velocity and step length. * marks a ratio with under 28 days of history
-        behind it. Ratios use {data?.settings.acwrMethod === "ewma" ? "EWMA (7 and 28 days)" : "rolling 7- and 28-day averages"}.
+        Metres and steps are estimates from each athlete&apos;s tested max velocity and step length. * marks a ratio
+        with under 28 days of history behind it. Ratios use{" "}
+        {data?.settings.acwrMethod === "ewma" ? "EWMA (7 and 28 days)" : "rolling 7- and 28-day averages"}.
       </p>
       <LoadCaution />
     </div>

@@ -16,7 +16,10 @@ const FLAG_KINDS = Object.keys(FLAG_DISPLAY) as FlagKind[];
 function exportCsv(table: Table, week: string) {
   const columns = table.getVisibleLeafColumns().map((c) => c.id);
   const data = table.getRowModel().rows.map((r) => columns.map((id) => csvValue(r.original, id)));
-  const csv = toCsv(columns.map((id) => COLUMN_LABELS[id] ?? id), data);
+  const csv = toCsv(
+    columns.map((id) => COLUMN_LABELS[id] ?? id),
+    data,
+  );
   const url = URL.createObjectURL(new Blob([csv], { type: "text/csv;charset=utf-8" }));
   const a = document.createElement("a");
   a.href = url;
@@ -25,7 +28,15 @@ function exportCsv(table: Table, week: string) {
   URL.revokeObjectURL(url);
 }
 
-export function SquadToolbar({ table, groups, week }: { table: Table; groups: { id: number; name: string }[]; week: string }) {
+export function SquadToolbar({
+  table,
+  groups,
+  week,
+}: {
+  table: Table;
+  groups: { id: number; name: string }[];
+  week: string;
+}) {
   const group = table.getColumn("group");
   const flags = table.getColumn("flags");
   return (
@@ -64,7 +75,10 @@ export function SquadToolbar({ table, groups, week }: { table: Table; groups: { 
         </Select>
       </label>
       <details className="relative">
-        <summary className="flex h-10 cursor-pointer list-none items-center rounded-lg px-3 text-sm font-medium text-ink-700 ring-1 ring-inset ring-ink-200 hover:bg-ink-50" data-testid="choose-columns">
+        <summary
+          className="flex h-10 cursor-pointer list-none items-center rounded-lg px-3 text-sm font-medium text-ink-700 ring-1 ring-ink-200 ring-inset hover:bg-ink-50"
+          data-testid="choose-columns"
+        >
           Columns
         </summary>
         <div className="absolute z-10 mt-1 w-56 space-y-1 rounded-lg bg-paper-raised p-3 shadow-lift ring-1 ring-ink-100">
@@ -73,7 +87,12 @@ export function SquadToolbar({ table, groups, week }: { table: Table; groups: { 
             .filter((c) => c.getCanHide())
             .map((c) => (
               <label key={c.id} className="flex items-center gap-2 text-sm text-ink-700">
-                <input type="checkbox" checked={c.getIsVisible()} onChange={(e) => c.toggleVisibility(e.target.checked)} className="accent-lane-600" />
+                <input
+                  type="checkbox"
+                  checked={c.getIsVisible()}
+                  onChange={(e) => c.toggleVisibility(e.target.checked)}
+                  className="accent-lane-600"
+                />
                 {COLUMN_LABELS[c.id] ?? c.id}
               </label>
             ))}

@@ -6,7 +6,8 @@ export const loadKeys = {
   athlete: (athleteId: number, q: { from: string; to: string; view: LoadView; metric: Metric }) =>
     `/api/athletes/${athleteId}/load?from=${q.from}&to=${q.to}&view=${q.view}&metric=${q.metric}`,
   /** Matches every cached range of one athlete (for `mutate(loadKeys.athleteMatcher(id))`). */
-  athleteMatcher: (athleteId: number) => (key: unknown) => typeof key === "string" && key.startsWith(`/api/athletes/${athleteId}/load?`),
+  athleteMatcher: (athleteId: number) => (key: unknown) =>
+    typeof key === "string" && key.startsWith(`/api/athletes/${athleteId}/load?`),
   teamSettings: (teamId: number) => `/api/teams/${teamId}/settings`,
 };
 
@@ -22,8 +23,18 @@ export class FetchError extends Error {
 
 /** SWR fetcher: JSON on 2xx, a FetchError with the server's message otherwise. */
 export async function fetchJson<T>(url: string, init?: RequestInit): Promise<T> {
-  const res = await fetch(url, { ...init, headers: { accept: "application/json", ...(init?.body ? { "content-type": "application/json" } : {}), ...init?.headers } });
-  const body = (await res.json().catch(() => null)) as { error?: { message?: string; fields?: Record<string, string[]> } } | null;
-  if (!res.ok) throw new FetchError(body?.error?.message ?? `Request failed (${res.status})`, res.status, body?.error?.fields);
+  const res = await fetch(url, {
+    ...init,
+    headers: {
+      accept: "application/json",
+      ...(init?.body ? { "content-type": "application/json" } : {}),
+      ...init?.headers,
+    },
+  });
+  const body = (await res.json().catch(() => null)) as {
+    error?: { message?: string; fields?: Record<string, string[]> };
+  } | null;
+  if (!res.ok)
+    throw new FetchError(body?.error?.message ?? `Request failed (${res.status})`, res.status, body?.error?.fields);
   return body as T;
 }

@@ -4,10 +4,29 @@ import { Button } from "@/components/ui/button";
 import { addDays, diffDays, formatDayLabel, startOfWeek } from "@/lib/load/dates";
 
 /** Previous / this / next week, with the week's dates as the label. */
-export function WeekNav({ week, today, onChange, weekStartDay = 1 }: { week: string; today: string; onChange: (week: string) => void; weekStartDay?: number }) {
+export function WeekNav({
+  week,
+  today,
+  onChange,
+  weekStartDay = 1,
+}: {
+  week: string;
+  today: string;
+  onChange: (week: string) => void;
+  weekStartDay?: number;
+}) {
   const current = startOfWeek(today, weekStartDay);
   const offset = Math.round(diffDays(week, current) / 7);
-  const note = offset === 0 ? "This week" : offset === 1 ? "Next week" : offset === -1 ? "Last week" : offset > 0 ? `In ${offset} weeks` : `${-offset} weeks ago`;
+  const note =
+    offset === 0
+      ? "This week"
+      : offset === 1
+        ? "Next week"
+        : offset === -1
+          ? "Last week"
+          : offset > 0
+            ? `In ${offset} weeks`
+            : `${-offset} weeks ago`;
   return (
     <div className="flex items-center gap-2" data-testid="week-nav">
       <Button variant="secondary" size="sm" onClick={() => onChange(addDays(week, -7))} aria-label="Previous week">

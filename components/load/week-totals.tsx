@@ -9,9 +9,7 @@ export function WeekTotals({ week, estimated = true }: { week: WeekSummary; esti
   const m = week.acwrMetric;
   return (
     <Card className="p-4 sm:p-5" data-testid="week-totals">
-      <h2 className="text-base font-semibold text-ink-900">
-        Week of {formatDayLabel(week.weekStart)}
-      </h2>
+      <h2 className="text-base font-semibold text-ink-900">Week of {formatDayLabel(week.weekStart)}</h2>
       <dl className="mt-3 grid grid-cols-2 gap-x-4 gap-y-3 sm:grid-cols-3">
         {METRICS.map((metric) => {
           const info = METRIC_INFO[metric];
@@ -22,17 +20,21 @@ export function WeekTotals({ week, estimated = true }: { week: WeekSummary; esti
                 {info.label}
                 {metric === "sprintSteps" ? " (est.)" : ""}
               </dt>
-              <dd className="text-lg font-semibold tabular-nums text-ink-900">
-                {formatNumber(week.totals[metric], 0)} <span className="text-xs font-normal text-ink-500">{info.unit}</span>
+              <dd className="text-lg font-semibold text-ink-900 tabular-nums">
+                {formatNumber(week.totals[metric], 0)}{" "}
+                <span className="text-xs font-normal text-ink-500">{info.unit}</span>
               </dd>
-              <dd className="text-2xs tabular-nums text-ink-500">{change === null ? "no last week" : `${change > 0 ? "+" : ""}${formatNumber(change, 0)}% on last week`}</dd>
+              <dd className="text-2xs text-ink-500 tabular-nums">
+                {change === null ? "no last week" : `${change > 0 ? "+" : ""}${formatNumber(change, 0)}% on last week`}
+              </dd>
             </div>
           );
         })}
       </dl>
       <p className="mt-4 border-t border-ink-100 pt-3 text-xs text-ink-500">
         {METRIC_INFO[m].short} monotony {week.monotony[m] === null ? "–" : formatNumber(week.monotony[m]!, 2)} · strain{" "}
-        {week.strain[m] === null ? "–" : formatNumber(week.strain[m]!, 0)} (Foster 1998; {week.sdType === "population" ? "population" : "sample"} SD)
+        {week.strain[m] === null ? "–" : formatNumber(week.strain[m]!, 0)} (Foster 1998;{" "}
+        {week.sdType === "population" ? "population" : "sample"} SD)
         {week.missingDays > 0
           ? ` · ${week.missingDays} day${week.missingDays === 1 ? "" : "s"} with a session not logged (${estimated ? "counted from the plan, an estimate" : "left out"})`
           : ""}

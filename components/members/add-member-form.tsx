@@ -11,7 +11,11 @@ import { addMemberSchema, type AddMemberFormValues, type AddMemberInput } from "
 
 export function AddMemberForm({ unlinkedAthletes }: { unlinkedAthletes: { id: number; name: string }[] }) {
   const [message, setMessage] = useState<{ tone: "error" | "ok"; text: string }>();
-  const { register, handleSubmit, control, reset, setError, formState } = useForm<AddMemberFormValues, unknown, AddMemberInput>({
+  const { register, handleSubmit, control, reset, setError, formState } = useForm<
+    AddMemberFormValues,
+    unknown,
+    AddMemberInput
+  >({
     resolver: zodResolver(addMemberSchema),
     defaultValues: { name: "", email: "", role: "coach" },
   });
@@ -22,7 +26,8 @@ export function AddMemberForm({ unlinkedAthletes }: { unlinkedAthletes: { id: nu
     const result = await addMemberAction({ ...values, athleteId: values.athleteId || undefined });
     if (!result.ok) {
       for (const [field, messages] of Object.entries(result.fields ?? {})) {
-        if (field === "name" || field === "email" || field === "role" || field === "athleteId") setError(field, { message: messages[0] });
+        if (field === "name" || field === "email" || field === "role" || field === "athleteId")
+          setError(field, { message: messages[0] });
       }
       setMessage({ tone: "error", text: result.message });
       return;
@@ -53,7 +58,12 @@ export function AddMemberForm({ unlinkedAthletes }: { unlinkedAthletes: { id: nu
         </Select>
       </Field>
       {role === "athlete" && unlinkedAthletes.length > 0 ? (
-        <Field label="Athlete profile" htmlFor="member-athlete" error={errors.athleteId?.message} hint="Link an existing profile, or leave empty to create one.">
+        <Field
+          label="Athlete profile"
+          htmlFor="member-athlete"
+          error={errors.athleteId?.message}
+          hint="Link an existing profile, or leave empty to create one."
+        >
           <Select id="member-athlete" {...register("athleteId")}>
             <option value="">Create a new profile</option>
             {unlinkedAthletes.map((a) => (
@@ -65,7 +75,15 @@ export function AddMemberForm({ unlinkedAthletes }: { unlinkedAthletes: { id: nu
         </Field>
       ) : null}
       {message ? (
-        <div role={message.tone === "error" ? "alert" : "status"} data-testid="add-member-message" className={message.tone === "error" ? "rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike" : "rounded-lg bg-lane-50 px-3 py-2 text-sm text-lane-800"}>
+        <div
+          role={message.tone === "error" ? "alert" : "status"}
+          data-testid="add-member-message"
+          className={
+            message.tone === "error"
+              ? "rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike"
+              : "rounded-lg bg-lane-50 px-3 py-2 text-sm text-lane-800"
+          }
+        >
           <p>{message.text}</p>
         </div>
       ) : null}

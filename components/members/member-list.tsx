@@ -29,11 +29,13 @@ export function MemberList({ members, viewerUserId }: { members: Member[]; viewe
       ) : null}
       <ul className="divide-y divide-ink-50" data-testid="member-list" aria-busy={pending}>
         {members.map((m) => (
-          <li key={m.membershipId} className="flex flex-col gap-3 px-4 py-3 sm:flex-row sm:items-center sm:justify-between" data-testid="member-row">
+          <li
+            key={m.membershipId}
+            className="flex flex-col gap-3 px-4 py-3 sm:flex-row sm:items-center sm:justify-between"
+            data-testid="member-row"
+          >
             <div className="min-w-0">
-              <p className="truncate font-medium text-ink-900">
-                {m.name}
-              </p>
+              <p className="truncate font-medium text-ink-900">{m.name}</p>
               <p className="truncate text-sm text-ink-500">{m.email}</p>
             </div>
             <div className="flex items-center gap-2">
@@ -59,7 +61,8 @@ export function MemberList({ members, viewerUserId }: { members: Member[]; viewe
                   size="sm"
                   disabled={pending}
                   onClick={() => {
-                    if (window.confirm(`Remove ${m.name} from the club? Their training history stays.`)) run(() => removeMemberAction(m.membershipId));
+                    if (window.confirm(`Remove ${m.name} from the club? Their training history stays.`))
+                      run(() => removeMemberAction(m.membershipId));
                   }}
                 >
                   Remove

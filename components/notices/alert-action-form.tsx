@@ -13,7 +13,17 @@ type Action = AlertActionInput["action"];
 const LABEL: Record<Action, string> = { acknowledge: "Acknowledge", resolve: "Resolve", reopen: "Reopen" };
 
 /** One action on an alert with its note; resolving needs the note (what was done). */
-export function AlertActionForm({ alert, action, onDone, onCancel }: { alert: AlertRow; action: Action; onDone: (a: AlertRow) => void; onCancel: () => void }) {
+export function AlertActionForm({
+  alert,
+  action,
+  onDone,
+  onCancel,
+}: {
+  alert: AlertRow;
+  action: Action;
+  onDone: (a: AlertRow) => void;
+  onCancel: () => void;
+}) {
   const { register, handleSubmit, setError, formState } = useForm<AlertActionFormValues, unknown, AlertActionInput>({
     resolver: zodResolver(alertActionSchema),
     defaultValues: { action, note: action === "resolve" ? "" : undefined },
@@ -29,10 +39,24 @@ export function AlertActionForm({ alert, action, onDone, onCancel }: { alert: Al
     }
   });
   return (
-    <form onSubmit={submit} className="mt-3 space-y-3 rounded-lg bg-paper-sunk p-3" data-testid={`alert-${action}-form`}>
+    <form
+      onSubmit={submit}
+      className="mt-3 space-y-3 rounded-lg bg-paper-sunk p-3"
+      data-testid={`alert-${action}-form`}
+    >
       <input type="hidden" {...register("action")} />
-      <Field label={action === "resolve" ? "How was it handled?" : "Note (optional)"} htmlFor={id} error={formState.errors.note?.message}>
-        <Textarea id={id} rows={2} aria-invalid={Boolean(formState.errors.note)} placeholder={action === "resolve" ? "e.g. Talked to the coach; Tuesday's volume halved" : ""} {...register("note")} />
+      <Field
+        label={action === "resolve" ? "How was it handled?" : "Note (optional)"}
+        htmlFor={id}
+        error={formState.errors.note?.message}
+      >
+        <Textarea
+          id={id}
+          rows={2}
+          aria-invalid={Boolean(formState.errors.note)}
+          placeholder={action === "resolve" ? "e.g. Talked to the coach; Tuesday's volume halved" : ""}
+          {...register("note")}
+        />
       </Field>
       <div className="flex gap-2">
         <Button type="submit" size="sm" disabled={formState.isSubmitting}>

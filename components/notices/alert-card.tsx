@@ -12,27 +12,41 @@ import { ALERT_KIND_HINT, ALERT_KIND_LABEL, ALERT_KIND_TOPIC } from "@/lib/notic
 import { AlertActionForm } from "./alert-action-form";
 import { AlertFacts } from "./alert-facts";
 
-const STATUS_LABEL: Record<AlertRow["status"], string> = { open: "Open", acknowledged: "Acknowledged", resolved: "Resolved" };
+const STATUS_LABEL: Record<AlertRow["status"], string> = {
+  open: "Open",
+  acknowledged: "Acknowledged",
+  resolved: "Resolved",
+};
 const STATUS_TONE = { open: "spike", acknowledged: "climb", resolved: "steady" } as const;
 
 function when(iso: string): string {
   return new Date(iso).toLocaleString("en-GB", { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit" });
 }
 
-export function AlertCard({ alert, canManage, onChange }: { alert: AlertRow; canManage: boolean; onChange: (a: AlertRow) => void }) {
+export function AlertCard({
+  alert,
+  canManage,
+  onChange,
+}: {
+  alert: AlertRow;
+  canManage: boolean;
+  onChange: (a: AlertRow) => void;
+}) {
   const [action, setAction] = useState<"acknowledge" | "resolve" | "reopen" | null>(null);
   return (
     <Card className="p-4 sm:p-5" data-testid="alert-card" data-alert-id={alert.id} data-status={alert.status}>
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div>
           <div className="flex flex-wrap items-center gap-2">
-            {alert.unread ? <span className="h-2 w-2 rounded-full bg-flag-spike" aria-label="New" data-testid="alert-new" /> : null}
+            {alert.unread ? (
+              <span className="h-2 w-2 rounded-full bg-flag-spike" aria-label="New" data-testid="alert-new" />
+            ) : null}
             <h3 className="font-semibold text-ink-950">
               <Link href={`/load/${alert.athleteId}`} className="hover:underline" data-testid="alert-athlete">
                 {alert.athleteName}
               </Link>
             </h3>
-            <Badge tone={alert.kind === "spike" ? "spike" : "climb"} className="uppercase tracking-wide">
+            <Badge tone={alert.kind === "spike" ? "spike" : "climb"} className="tracking-wide uppercase">
               {ALERT_KIND_LABEL[alert.kind]}
             </Badge>
             <Badge tone={STATUS_TONE[alert.status]}>{STATUS_LABEL[alert.status]}</Badge>
@@ -51,7 +65,11 @@ export function AlertCard({ alert, canManage, onChange }: { alert: AlertRow; can
       <p className="mt-1 text-xs text-ink-500">
         {ALERT_KIND_HINT[alert.kind]}{" "}
         {ALERT_KIND_TOPIC[alert.kind] ? (
-          <Link href={figuresHref(alert.provisional ? "provisional" : ALERT_KIND_TOPIC[alert.kind]!)} className="text-lane-700 underline" data-testid="alert-explain">
+          <Link
+            href={figuresHref(alert.provisional ? "provisional" : ALERT_KIND_TOPIC[alert.kind]!)}
+            className="text-lane-700 underline"
+            data-testid="alert-explain"
+          >
             How this is worked out
           </Link>
         ) : null}
@@ -60,17 +78,28 @@ export function AlertCard({ alert, canManage, onChange }: { alert: AlertRow; can
         <AlertFacts alert={alert} />
       </div>
       {!alert.flagged ? (
-        <p className="mt-3 rounded-lg bg-flag-steady-soft px-3 py-2 text-xs text-flag-steady" data-testid="alert-cleared">
+        <p
+          className="mt-3 rounded-lg bg-flag-steady-soft px-3 py-2 text-xs text-flag-steady"
+          data-testid="alert-cleared"
+        >
           The current plan no longer raises this flag.
         </p>
       ) : null}
 
       {alert.note || alert.acknowledgedByName || alert.resolvedByName ? (
         <div className="mt-3 border-t border-ink-100 pt-3 text-sm">
-          {alert.note ? <p className="text-ink-800" data-testid="alert-note">“{alert.note}”</p> : null}
+          {alert.note ? (
+            <p className="text-ink-800" data-testid="alert-note">
+              “{alert.note}”
+            </p>
+          ) : null}
           <p className="mt-1 text-xs text-ink-500">
-            {alert.acknowledgedByName && alert.acknowledgedAt ? `Acknowledged by ${alert.acknowledgedByName}, ${when(alert.acknowledgedAt)}. ` : ""}
-            {alert.resolvedByName && alert.resolvedAt ? `Resolved by ${alert.resolvedByName}, ${when(alert.resolvedAt)}.` : ""}
+            {alert.acknowledgedByName && alert.acknowledgedAt
+              ? `Acknowledged by ${alert.acknowledgedByName}, ${when(alert.acknowledgedAt)}. `
+              : ""}
+            {alert.resolvedByName && alert.resolvedAt
+              ? `Resolved by ${alert.resolvedByName}, ${when(alert.resolvedAt)}.`
+              : ""}
           </p>
         </div>
       ) : null}

@@ -9,7 +9,7 @@ export function AlertFacts({ alert }: { alert: AlertForMail }) {
       {rows.map(([label, value]) => (
         <div key={label} className="contents">
           <dt className="text-ink-500">{label}</dt>
-          <dd className="font-medium tabular-nums text-ink-900">{value}</dd>
+          <dd className="font-medium text-ink-900 tabular-nums">{value}</dd>
         </div>
       ))}
     </dl>

@@ -32,7 +32,9 @@ const EMPTY: Record<Filter, string> = {
 export function AlertInbox({ canManage }: { canManage: boolean }) {
   const [filter, setFilter] = useState<Filter>("unresolved");
   const key = noticeKeys.alerts(filter);
-  const { data, error, isLoading, mutate } = useSWR<{ alerts: AlertRow[]; unread: number }>(key, fetchJson, { refreshInterval: 30_000 });
+  const { data, error, isLoading, mutate } = useSWR<{ alerts: AlertRow[]; unread: number }>(key, fetchJson, {
+    refreshInterval: 30_000,
+  });
   const { mutate: mutateAll } = useSWRConfig();
   const router = useRouter();
   const marked = useRef(false);
@@ -45,7 +47,10 @@ export function AlertInbox({ canManage }: { canManage: boolean }) {
   }, [data, router]);
 
   const onChange = (updated: AlertRow) => {
-    void mutate((prev) => (prev ? { ...prev, alerts: prev.alerts.map((a) => (a.id === updated.id ? updated : a)) } : prev), { revalidate: true });
+    void mutate(
+      (prev) => (prev ? { ...prev, alerts: prev.alerts.map((a) => (a.id === updated.id ? updated : a)) } : prev),
+      { revalidate: true },
+    );
     void mutateAll((k) => noticeKeys.isAlertList(k) && k !== key);
   };
 
@@ -61,18 +66,26 @@ export function AlertInbox({ canManage }: { canManage: boolean }) {
             onClick={() => setFilter(f.value)}
             className={clsx(
               "shrink-0 rounded-full px-3 py-1.5 text-sm font-medium",
-              filter === f.value ? "bg-ink-900 text-paper" : "bg-paper-raised text-ink-600 ring-1 ring-inset ring-ink-200 hover:bg-ink-50",
+              filter === f.value
+                ? "bg-ink-900 text-paper"
+                : "bg-paper-raised text-ink-600 ring-1 ring-ink-200 ring-inset hover:bg-ink-50",
             )}
           >
             {f.label}
           </button>
         ))}
       </div>
-      {error ? <p role="alert" className="text-sm text-flag-spike">{(error as Error).message}</p> : null}
+      {error ? (
+        <p role="alert" className="text-sm text-flag-spike">
+          {(error as Error).message}
+        </p>
+      ) : null}
       {isLoading ? <div className="h-40 animate-pulse rounded-card bg-ink-100" aria-busy="true" /> : null}
       {data && data.alerts.length === 0 ? <EmptyState title={EMPTY[filter]} /> : null}
       <div className="space-y-3" data-testid="alert-list">
-        {data?.alerts.map((a) => <AlertCard key={a.id} alert={a} canManage={canManage} onChange={onChange} />)}
+        {data?.alerts.map((a) => (
+          <AlertCard key={a.id} alert={a} canManage={canManage} onChange={onChange} />
+        ))}
       </div>
     </section>
   );

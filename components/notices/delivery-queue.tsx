@@ -22,7 +22,8 @@ export function DeliveryQueue({ rows }: { rows: DeliveryRow[] }) {
     <Card className="p-4" data-testid="delivery-queue">
       <h2 className="font-semibold text-ink-950">Team outbox</h2>
       <p className="mt-1 text-xs text-ink-500">
-        Every mail is queued with the change that caused it and retried with growing pauses until the mail server takes it. Only its recipient can read it.
+        Every mail is queued with the change that caused it and retried with growing pauses until the mail server takes
+        it. Only its recipient can read it.
       </p>
       {rows.length === 0 ? (
         <p className="mt-3 text-sm text-ink-600">No mail queued yet.</p>

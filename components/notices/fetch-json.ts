@@ -10,8 +10,11 @@ export class ApiError extends Error {
 }
 
 async function answer<T>(res: Response): Promise<T> {
-  const body = (await res.json().catch(() => null)) as { error?: { message?: string; fields?: Record<string, string[]> } } | null;
-  if (!res.ok) throw new ApiError(body?.error?.message ?? `Request failed (${res.status})`, res.status, body?.error?.fields ?? {});
+  const body = (await res.json().catch(() => null)) as {
+    error?: { message?: string; fields?: Record<string, string[]> };
+  } | null;
+  if (!res.ok)
+    throw new ApiError(body?.error?.message ?? `Request failed (${res.status})`, res.status, body?.error?.fields ?? {});
   return body as T;
 }
 
@@ -20,8 +23,16 @@ export async function fetchJson<T>(url: string): Promise<T> {
   return answer<T>(await fetch(url, { headers: { accept: "application/json" } }));
 }
 
-export async function sendJson<T>(url: string, method: "POST" | "PUT" | "PATCH" | "DELETE", body?: unknown): Promise<T> {
+export async function sendJson<T>(
+  url: string,
+  method: "POST" | "PUT" | "PATCH" | "DELETE",
+  body?: unknown,
+): Promise<T> {
   return answer<T>(
-    await fetch(url, { method, headers: { "content-type": "application/json", accept: "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) }),
+    await fetch(url, {
+      method,
+      headers: { "content-type": "application/json", accept: "application/json" },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    }),
   );
 }

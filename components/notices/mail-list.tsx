@@ -4,12 +4,23 @@ import { Card, EmptyState } from "@/components/ui/card";
 import type { MailSummary } from "@/lib/mail/mailbox";
 
 function received(iso: string): string {
-  return new Date(iso).toLocaleString("en-GB", { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit", second: "2-digit" });
+  return new Date(iso).toLocaleString("en-GB", {
+    day: "numeric",
+    month: "short",
+    hour: "2-digit",
+    minute: "2-digit",
+    second: "2-digit",
+  });
 }
 
 /** The signed-in member's own mail in the local mailbox, newest first. */
 export function MailList({ mails }: { mails: MailSummary[] }) {
-  if (mails.length === 0) return <EmptyState title="No mail for you yet">Mail the app sends to you (alerts, invitations, calendar invites, password resets) lands here.</EmptyState>;
+  if (mails.length === 0)
+    return (
+      <EmptyState title="No mail for you yet">
+        Mail the app sends to you (alerts, invitations, calendar invites, password resets) lands here.
+      </EmptyState>
+    );
   return (
     <Card className="divide-y divide-ink-100" data-testid="mail-list">
       {mails.map((m) => (
@@ -18,7 +29,7 @@ export function MailList({ mails }: { mails: MailSummary[] }) {
             <p className="truncate font-medium text-ink-900" data-testid="mail-subject">
               {m.subject || "(no subject)"}
             </p>
-            <time className="shrink-0 text-xs tabular-nums text-ink-500" dateTime={m.receivedAt}>
+            <time className="shrink-0 text-xs text-ink-500 tabular-nums" dateTime={m.receivedAt}>
               {received(m.receivedAt)}
             </time>
           </div>

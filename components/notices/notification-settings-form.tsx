@@ -24,7 +24,10 @@ export function NotificationSettingsForm() {
     if (!parsed.success) return setStatus(parsed.error.issues[0]?.message ?? "Invalid choice");
     setStatus("Saving…");
     try {
-      await mutate(sendJson<NotificationSettingsView>(noticeKeys.notificationSettings, "PUT", parsed.data), { optimisticData: { alertEmail: parsed.data.alertEmail, isDefault: false }, rollbackOnError: true });
+      await mutate(sendJson<NotificationSettingsView>(noticeKeys.notificationSettings, "PUT", parsed.data), {
+        optimisticData: { alertEmail: parsed.data.alertEmail, isDefault: false },
+        rollbackOnError: true,
+      });
       setStatus("Saved");
     } catch (err) {
       setStatus((err as Error).message);
@@ -36,11 +39,23 @@ export function NotificationSettingsForm() {
       <fieldset>
         <legend className="font-semibold text-ink-950">Alert e-mails</legend>
         <p className="mt-1 text-sm text-ink-500">How you hear about new load flags for this team.</p>
-        {error ? <p role="alert" className="mt-2 text-sm text-flag-spike">{(error as Error).message}</p> : null}
+        {error ? (
+          <p role="alert" className="mt-2 text-sm text-flag-spike">
+            {(error as Error).message}
+          </p>
+        ) : null}
         <div className="mt-3 space-y-2" data-testid="notification-settings">
           {ALERT_EMAIL_CHOICES.map((c) => (
             <label key={c} className="flex cursor-pointer items-start gap-3 rounded-lg p-2 hover:bg-ink-50">
-              <input type="radio" name="alertEmail" value={c} checked={data?.alertEmail === c} disabled={!data} onChange={() => void choose(c)} className="mt-1 accent-lane-600" />
+              <input
+                type="radio"
+                name="alertEmail"
+                value={c}
+                checked={data?.alertEmail === c}
+                disabled={!data}
+                onChange={() => void choose(c)}
+                className="mt-1 accent-lane-600"
+              />
               <span>
                 <span className="block text-sm font-medium text-ink-900">{CHOICE_TEXT[c].label}</span>
                 <span className="block text-xs text-ink-500">{CHOICE_TEXT[c].hint}</span>

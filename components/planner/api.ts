@@ -23,9 +23,21 @@ export class PlanApiError extends Error {
   }
 }
 
-type ErrorBody = { error?: { code?: string; message?: string; fields?: Record<string, string[]>; current?: PlanSession; hits?: RestrictionHit[] } };
+type ErrorBody = {
+  error?: {
+    code?: string;
+    message?: string;
+    fields?: Record<string, string[]>;
+    current?: PlanSession;
+    hits?: RestrictionHit[];
+  };
+};
 
-export async function requestJson<T>(method: "GET" | "POST" | "PATCH" | "PUT" | "DELETE", url: string, body?: unknown): Promise<T> {
+export async function requestJson<T>(
+  method: "GET" | "POST" | "PATCH" | "PUT" | "DELETE",
+  url: string,
+  body?: unknown,
+): Promise<T> {
   let res: Response;
   try {
     res = await fetch(url, {
@@ -39,10 +51,18 @@ export async function requestJson<T>(method: "GET" | "POST" | "PATCH" | "PUT" | 
   const data = (await res.json().catch(() => ({}))) as T & ErrorBody;
   if (!res.ok) {
     const e = data.error ?? {};
-    throw new PlanApiError(res.status, e.code ?? "error", e.message ?? `The server answered ${res.status}`, e.fields, e.current ?? null, e.hits ?? []);
+    throw new PlanApiError(
+      res.status,
+      e.code ?? "error",
+      e.message ?? `The server answered ${res.status}`,
+      e.fields,
+      e.current ?? null,
+      e.hits ?? [],
+    );
   }
   return data;
 }
 
 export const fetchWeek = (url: string) => requestJson<PlanWeek>("GET", url);
-export const write = (method: "POST" | "PATCH" | "DELETE", url: string, body?: unknown) => requestJson<PlanWriteResult>(method, url, body);
+export const write = (method: "POST" | "PATCH" | "DELETE", url: string, body?: unknown) =>
+  requestJson<PlanWriteResult>(method, url, body);

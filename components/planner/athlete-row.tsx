@@ -33,16 +33,41 @@ function flagsBySession(flags: readonly Flag[]): Map<string, Flag[]> {
 }
 
 /** One athlete: name and week numbers, then a cell per day holding that day's session cards. */
-export const AthleteRow = memo(function AthleteRow({ athlete, restrictions, days, today, canEdit, hoverStore, copyArmedId, actions }: Props) {
+export const AthleteRow = memo(function AthleteRow({
+  athlete,
+  restrictions,
+  days,
+  today,
+  canEdit,
+  hoverStore,
+  copyArmedId,
+  actions,
+}: Props) {
   const preview = useRowPreview(hoverStore, athlete.id);
   return (
-    <tr data-testid="athlete-row" data-athlete-id={athlete.id} className={clsx("border-t border-ink-100", preview && "bg-lane-50/30")}>
-      <th scope="row" className="sticky left-0 z-10 w-52 min-w-52 bg-paper-raised px-3 py-2 text-left align-top font-normal">
+    <tr
+      data-testid="athlete-row"
+      data-athlete-id={athlete.id}
+      className={clsx("border-t border-ink-100", preview && "bg-lane-50/30")}
+    >
+      <th
+        scope="row"
+        className="sticky left-0 z-10 w-52 min-w-52 bg-paper-raised px-3 py-2 text-left align-top font-normal"
+      >
         <span className="block truncate text-sm font-medium text-ink-900">{athlete.name}</span>
         <RestrictionChip restrictions={restrictions} />
         <RowLoadSummary load={athlete.load} preview={preview?.after ?? null} raised={preview?.warnings ?? NO_FLAGS} />
       </th>
-      <RowDays athlete={athlete} restrictions={restrictions} days={days} today={today} canEdit={canEdit} hoverStore={hoverStore} copyArmedId={copyArmedId} actions={actions} />
+      <RowDays
+        athlete={athlete}
+        restrictions={restrictions}
+        days={days}
+        today={today}
+        canEdit={canEdit}
+        hoverStore={hoverStore}
+        copyArmedId={copyArmedId}
+        actions={actions}
+      />
     </tr>
   );
 });
@@ -51,7 +76,11 @@ const RestrictionChip = memo(function RestrictionChip({ restrictions }: { restri
   if (restrictions.length === 0) return null;
   const limitsText = restrictions.map((r) => `${describeRestriction(r)} (${r.setByName}): ${r.note}`).join("\n");
   return (
-    <span data-testid="row-restriction" title={limitsText} className="mt-0.5 inline-flex max-w-full items-center gap-1 truncate rounded-full border border-flag-climb/30 bg-flag-climb-soft px-1.5 py-px text-2xs font-medium text-flag-climb">
+    <span
+      data-testid="row-restriction"
+      title={limitsText}
+      className="mt-0.5 inline-flex max-w-full items-center gap-1 truncate rounded-full border border-flag-climb/30 bg-flag-climb-soft px-1.5 py-px text-2xs font-medium text-flag-climb"
+    >
       <span aria-hidden>⚕</span>
       {restrictions.length === 1 ? "Physio restriction" : `${restrictions.length} physio restrictions`}
       <span className="sr-only">: {limitsText}</span>
@@ -59,9 +88,17 @@ const RestrictionChip = memo(function RestrictionChip({ restrictions }: { restri
   );
 });
 
-
 /** The row's day cells: memoised apart from the preview, so hovering a row does not re-render its cards. */
-const RowDays = memo(function RowDays({ athlete, restrictions, days, today, canEdit, hoverStore, copyArmedId, actions }: Props) {
+const RowDays = memo(function RowDays({
+  athlete,
+  restrictions,
+  days,
+  today,
+  canEdit,
+  hoverStore,
+  copyArmedId,
+  actions,
+}: Props) {
   const bySession = flagsBySession(athlete.load.flags);
   const restrictedText = (s: PlanAthlete["sessions"][number]) => {
     const hits = sessionHits({ restrictions }, s);
@@ -70,12 +107,28 @@ const RowDays = memo(function RowDays({ athlete, restrictions, days, today, canE
   return (
     <>
       {days.map((date) => (
-        <DropCell key={date} store={hoverStore} target={{ type: "cell", athleteId: athlete.id, date }} label={`${athlete.name}, ${formatDayShort(date)}`} enabled={canEdit} today={date === today}>
+        <DropCell
+          key={date}
+          store={hoverStore}
+          target={{ type: "cell", athleteId: athlete.id, date }}
+          label={`${athlete.name}, ${formatDayShort(date)}`}
+          enabled={canEdit}
+          today={date === today}
+        >
           <div className="flex min-h-16 flex-col gap-1 p-0.5">
             {athlete.sessions
               .filter((s) => s.date === date)
               .map((s) => (
-                <SessionCard key={s.id} session={s} athleteName={athlete.name} canEdit={canEdit} copyArmed={copyArmedId === s.id} flags={bySession.get(String(s.id)) ?? NO_FLAGS} restricted={restrictions.length > 0 ? restrictedText(s) : null} actions={actions} />
+                <SessionCard
+                  key={s.id}
+                  session={s}
+                  athleteName={athlete.name}
+                  canEdit={canEdit}
+                  copyArmed={copyArmedId === s.id}
+                  flags={bySession.get(String(s.id)) ?? NO_FLAGS}
+                  restricted={restrictions.length > 0 ? restrictedText(s) : null}
+                  actions={actions}
+                />
               ))}
           </div>
         </DropCell>

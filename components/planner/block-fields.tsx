@@ -29,8 +29,10 @@ function useKindDefaults(prefix: string) {
   const kind = useWatch({ name: `${prefix}kind` }) as BlockKind;
   const start = useWatch({ name: `${prefix}running.start` }) as RunningPrescription["start"] | undefined;
   useEffect(() => {
-    if (RUNNING_KINDS.includes(kind) && !getValues(`${prefix}running`)) setValue(`${prefix}running`, RUNNING_DEFAULT[kind]);
-    if (kind === "plyometric" && !(getValues(`${prefix}drills`)?.length > 0)) setValue(`${prefix}drills`, [{ ...DRILL_DEFAULT }]);
+    if (RUNNING_KINDS.includes(kind) && !getValues(`${prefix}running`))
+      setValue(`${prefix}running`, RUNNING_DEFAULT[kind]);
+    if (kind === "plyometric" && !(getValues(`${prefix}drills`)?.length > 0))
+      setValue(`${prefix}drills`, [{ ...DRILL_DEFAULT }]);
   }, [kind, prefix, getValues, setValue]);
   useEffect(() => {
     if (!start) return;
@@ -41,13 +43,32 @@ function useKindDefaults(prefix: string) {
   return kind;
 }
 
-function NumberField({ name, label, step = 1, hint, className }: { name: string; label: string; step?: number; hint?: string; className?: string }) {
+function NumberField({
+  name,
+  label,
+  step = 1,
+  hint,
+  className,
+}: {
+  name: string;
+  label: string;
+  step?: number;
+  hint?: string;
+  className?: string;
+}) {
   const { register, formState } = useFormContext();
   const error = errorAt(formState.errors, name);
   const id = name.replace(/\./g, "-");
   return (
     <Field label={label} htmlFor={id} error={error} hint={hint} className={className}>
-      <Input id={id} type="number" inputMode="decimal" step={step} aria-invalid={Boolean(error)} {...register(name, { valueAsNumber: true })} />
+      <Input
+        id={id}
+        type="number"
+        inputMode="decimal"
+        step={step}
+        aria-invalid={Boolean(error)}
+        {...register(name, { valueAsNumber: true })}
+      />
     </Field>
   );
 }
@@ -59,14 +80,27 @@ function Drills({ prefix }: { prefix: string }) {
   return (
     <fieldset className="space-y-2">
       <legend className="text-sm font-medium text-ink-800">Drills</legend>
-      {listError ? <p className="text-xs font-medium text-flag-spike" role="alert">{listError}</p> : null}
+      {listError ? (
+        <p className="text-xs font-medium text-flag-spike" role="alert">
+          {listError}
+        </p>
+      ) : null}
       {fields.map((f, i) => {
         const p = `${prefix}drills.${i}.`;
         const nameError = errorAt(formState.errors, `${p}name`);
         return (
-          <div key={f.id} data-testid="drill-row" className="grid grid-cols-2 gap-2 rounded-lg bg-paper-sunk/60 p-2 sm:grid-cols-[1fr_4rem_4rem_5rem_7rem_auto]">
+          <div
+            key={f.id}
+            data-testid="drill-row"
+            className="grid grid-cols-2 gap-2 rounded-lg bg-paper-sunk/60 p-2 sm:grid-cols-[1fr_4rem_4rem_5rem_7rem_auto]"
+          >
             <Field label="Drill" htmlFor={`${p}name`} error={nameError} className="col-span-2 sm:col-span-1">
-              <Input id={`${p}name`} placeholder="e.g. Ankle hops" aria-invalid={Boolean(nameError)} {...register(`${p}name`)} />
+              <Input
+                id={`${p}name`}
+                placeholder="e.g. Ankle hops"
+                aria-invalid={Boolean(nameError)}
+                {...register(`${p}name`)}
+              />
             </Field>
             <NumberField name={`${p}sets`} label="Sets" />
             <NumberField name={`${p}reps`} label="Reps" />
@@ -79,7 +113,13 @@ function Drills({ prefix }: { prefix: string }) {
               </Select>
             </Field>
             <div className="flex items-end">
-              <Button variant="ghost" size="sm" onClick={() => remove(i)} aria-label={`Remove drill ${i + 1}`} disabled={fields.length === 1}>
+              <Button
+                variant="ghost"
+                size="sm"
+                onClick={() => remove(i)}
+                aria-label={`Remove drill ${i + 1}`}
+                disabled={fields.length === 1}
+              >
                 Remove
               </Button>
             </div>
@@ -114,17 +154,30 @@ export function BlockFields({ prefix = "" }: { prefix?: string }) {
           </Select>
         </Field>
         <Field label="Title" htmlFor={id("title")} error={err("title")}>
-          <Input id={id("title")} placeholder="e.g. Flying 30s" aria-invalid={Boolean(err("title"))} {...register(`${prefix}title`)} />
+          <Input
+            id={id("title")}
+            placeholder="e.g. Flying 30s"
+            aria-invalid={Boolean(err("title"))}
+            {...register(`${prefix}title`)}
+          />
         </Field>
       </div>
       {RUNNING_KINDS.includes(kind) ? (
         <fieldset className="grid grid-cols-2 gap-2 sm:grid-cols-4">
           <legend className="col-span-full mb-1 text-sm font-medium text-ink-800">Runs</legend>
-          {err("running") ? <p className="col-span-full text-xs font-medium text-flag-spike" role="alert">{err("running")}</p> : null}
+          {err("running") ? (
+            <p className="col-span-full text-xs font-medium text-flag-spike" role="alert">
+              {err("running")}
+            </p>
+          ) : null}
           <NumberField name={`${prefix}running.sets`} label="Sets" />
           <NumberField name={`${prefix}running.reps`} label="Reps per set" />
           <NumberField name={`${prefix}running.distanceM`} label="Distance (m)" />
-          <NumberField name={`${prefix}running.intensityPct`} label="% of vmax" hint="of the athlete's tested top speed" />
+          <NumberField
+            name={`${prefix}running.intensityPct`}
+            label="% of vmax"
+            hint="of the athlete's tested top speed"
+          />
           <Field label="Start" htmlFor={id("running.start")}>
             <Select id={id("running.start")} {...register(`${prefix}running.start`)}>
               {Object.entries(START_LABEL).map(([v, l]) => (

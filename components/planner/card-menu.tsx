@@ -41,7 +41,11 @@ export function CardMenu({ label, items }: { label: string; items: MenuItem[] })
         </svg>
       </button>
       {open ? (
-        <ul id={id} role="menu" className="absolute right-0 top-6 z-30 w-44 rounded-lg bg-paper-raised py-1 text-sm shadow-lift ring-1 ring-ink-100">
+        <ul
+          id={id}
+          role="menu"
+          className="absolute top-6 right-0 z-30 w-44 rounded-lg bg-paper-raised py-1 text-sm shadow-lift ring-1 ring-ink-100"
+        >
           {items.map((item) => (
             <li key={item.label} role="none">
               <button
@@ -52,7 +56,10 @@ export function CardMenu({ label, items }: { label: string; items: MenuItem[] })
                   setOpen(false);
                   item.onSelect();
                 }}
-                className={clsx("block w-full px-3 py-1.5 text-left hover:bg-ink-50", item.danger ? "text-flag-spike" : "text-ink-800")}
+                className={clsx(
+                  "block w-full px-3 py-1.5 text-left hover:bg-ink-50",
+                  item.danger ? "text-flag-spike" : "text-ink-800",
+                )}
               >
                 {item.label}
               </button>

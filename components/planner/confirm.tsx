@@ -17,7 +17,10 @@ export function useConfirm(): Confirm {
 
 export function ConfirmProvider({ children }: { children: ReactNode }) {
   const [pending, setPending] = useState<Pending | null>(null);
-  const confirm = useCallback<Confirm>((request) => new Promise<boolean>((resolve) => setPending({ ...request, resolve })), []);
+  const confirm = useCallback<Confirm>(
+    (request) => new Promise<boolean>((resolve) => setPending({ ...request, resolve })),
+    [],
+  );
   const settle = (ok: boolean) => {
     pending?.resolve(ok);
     setPending(null);
@@ -25,13 +28,23 @@ export function ConfirmProvider({ children }: { children: ReactNode }) {
   return (
     <ConfirmContext.Provider value={confirm}>
       {children}
-      <Dialog open={pending !== null} onClose={() => settle(false)} title={pending?.title ?? ""} testId="confirm-dialog">
+      <Dialog
+        open={pending !== null}
+        onClose={() => settle(false)}
+        title={pending?.title ?? ""}
+        testId="confirm-dialog"
+      >
         <p className="text-sm text-ink-600">{pending?.body}</p>
         <div className="mt-5 flex justify-end gap-2">
           <Button variant="secondary" onClick={() => settle(false)} data-testid="confirm-no">
             Keep as it is
           </Button>
-          <Button variant={pending?.danger ? "danger" : "primary"} onClick={() => settle(true)} data-testid="confirm-yes" autoFocus>
+          <Button
+            variant={pending?.danger ? "danger" : "primary"}
+            onClick={() => settle(true)}
+            data-testid="confirm-yes"
+            autoFocus
+          >
             {pending?.confirmLabel}
           </Button>
         </div>
@@ -43,6 +56,16 @@ export function ConfirmProvider({ children }: { children: ReactNode }) {
 /** The question before deleting a session: a draft goes; a published one is cancelled for the athlete. */
 export function removeQuestion(s: { title: string; status: string }): ConfirmRequest {
   return s.status === "published"
-    ? { title: `Cancel "${s.title}"?`, body: "Athletes who have it in their calendar will see it cancelled. You can undo this.", confirmLabel: "Cancel session", danger: true }
-    : { title: `Delete "${s.title}"?`, body: "The draft is removed. You can undo this.", confirmLabel: "Delete draft", danger: true };
+    ? {
+        title: `Cancel "${s.title}"?`,
+        body: "Athletes who have it in their calendar will see it cancelled. You can undo this.",
+        confirmLabel: "Cancel session",
+        danger: true,
+      }
+    : {
+        title: `Delete "${s.title}"?`,
+        body: "The draft is removed. You can undo this.",
+        confirmLabel: "Delete draft",
+        danger: true,
+      };
 }

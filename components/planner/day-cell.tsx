@@ -22,7 +22,25 @@ function useIsOver(store: HoverStore, target: DropTarget): boolean {
 }
 
 /** One day of a row: one athlete's day, or a group's day (templates only). `enabled`: items can be dropped here. */
-export function DropCell({ store, target, label, enabled, today, hint, children, className }: { store: HoverStore; target: DropTarget; label: string; enabled: boolean; today: boolean; hint?: string; children?: ReactNode; className?: string }) {
+export function DropCell({
+  store,
+  target,
+  label,
+  enabled,
+  today,
+  hint,
+  children,
+  className,
+}: {
+  store: HoverStore;
+  target: DropTarget;
+  label: string;
+  enabled: boolean;
+  today: boolean;
+  hint?: string;
+  children?: ReactNode;
+  className?: string;
+}) {
   const isOver = useIsOver(store, target);
   return (
     <td
@@ -42,7 +60,11 @@ export function DropCell({ store, target, label, enabled, today, hint, children,
       )}
     >
       {children}
-      {isOver && hint ? <span className="pointer-events-none absolute inset-x-1 bottom-1 rounded bg-lane-600 px-1 py-0.5 text-center text-2xs font-medium text-white">{hint}</span> : null}
+      {isOver && hint ? (
+        <span className="pointer-events-none absolute inset-x-1 bottom-1 rounded bg-lane-600 px-1 py-0.5 text-center text-2xs font-medium text-white">
+          {hint}
+        </span>
+      ) : null}
     </td>
   );
 }

@@ -6,7 +6,8 @@ const nameOf = (week: PlanWeek, id: number) => week.athletes.find((a) => a.id ==
 const templateOf = (week: PlanWeek, id: number) => week.templates.find((t) => t.id === id)?.title ?? "block";
 
 export function targetLabel(week: PlanWeek, t: DropTarget): string {
-  if (t.type === "group") return `the whole ${week.groups.find((g) => g.id === t.groupId)?.name ?? ""} group on ${formatDayShort(t.date)}`;
+  if (t.type === "group")
+    return `the whole ${week.groups.find((g) => g.id === t.groupId)?.name ?? ""} group on ${formatDayShort(t.date)}`;
   return `${nameOf(week, t.athleteId)}'s ${formatDayShort(t.date)}`;
 }
 

@@ -3,7 +3,21 @@
 import { useEffect, useId, useRef, type ReactNode } from "react";
 
 /** A modal built on the native <dialog>: focus stays inside, Escape closes, the page behind is inert. */
-export function Dialog({ open, onClose, title, children, wide = false, testId }: { open: boolean; onClose: () => void; title: string; children: ReactNode; wide?: boolean; testId?: string }) {
+export function Dialog({
+  open,
+  onClose,
+  title,
+  children,
+  wide = false,
+  testId,
+}: {
+  open: boolean;
+  onClose: () => void;
+  title: string;
+  children: ReactNode;
+  wide?: boolean;
+  testId?: string;
+}) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
   useEffect(() => {
@@ -29,7 +43,12 @@ export function Dialog({ open, onClose, title, children, wide = false, testId }:
             <h2 id={titleId} className="text-lg font-semibold text-ink-950">
               {title}
             </h2>
-            <button type="button" onClick={onClose} aria-label="Close" className="rounded p-1 text-ink-400 hover:bg-ink-100 hover:text-ink-800">
+            <button
+              type="button"
+              onClick={onClose}
+              aria-label="Close"
+              className="rounded p-1 text-ink-400 hover:bg-ink-100 hover:text-ink-800"
+            >
               <svg viewBox="0 0 16 16" aria-hidden className="h-4 w-4 stroke-current" strokeWidth="1.8">
                 <path d="M4 4l8 8M12 4l-8 8" />
               </svg>

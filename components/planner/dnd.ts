@@ -9,21 +9,28 @@ import type { Latest } from "./latest";
 // the cell itself (the element under the pointer, or the cell the arrow keys aimed at), so a new cell costs
 // only the preview: the panel, the row whose numbers change and the two cells whose outline moves.
 
-export const dragId = (s: DragSource) => (s.type === "template" ? `template:${s.templateId}` : `session:${s.sessionId}`);
-export const dropId = (t: DropTarget) => (t.type === "cell" ? `cell:${t.athleteId}:${t.date}` : `group:${t.groupId}:${t.date}`);
+export const dragId = (s: DragSource) =>
+  s.type === "template" ? `template:${s.templateId}` : `session:${s.sessionId}`;
+export const dropId = (t: DropTarget) =>
+  t.type === "cell" ? `cell:${t.athleteId}:${t.date}` : `group:${t.groupId}:${t.date}`;
 export const rowKey = (t: DropTarget) => (t.type === "cell" ? `athlete:${t.athleteId}` : `group:${t.groupId}`);
 
 export type DragData = { source: DragSource; label: string };
 
 /** The cell element of a target, as the grid renders it (data-testid day-cell / group-cell). */
 export function cellElement(t: DropTarget): HTMLElement | null {
-  const sel = t.type === "cell" ? `[data-testid="day-cell"][data-athlete-id="${t.athleteId}"]` : `[data-testid="group-cell"][data-group-id="${t.groupId}"]`;
+  const sel =
+    t.type === "cell"
+      ? `[data-testid="day-cell"][data-athlete-id="${t.athleteId}"]`
+      : `[data-testid="group-cell"][data-group-id="${t.groupId}"]`;
   return document.querySelector<HTMLElement>(`${sel}[data-date="${t.date}"]`);
 }
 
 /** The drop cell at a viewport point, or null (the drag overlay ignores the pointer, so it never hides a cell). */
 export function cellAtPoint(x: number, y: number): DropTarget | null {
-  const td = document.elementFromPoint(x, y)?.closest<HTMLElement>('[data-testid="day-cell"], [data-testid="group-cell"]');
+  const td = document
+    .elementFromPoint(x, y)
+    ?.closest<HTMLElement>('[data-testid="day-cell"], [data-testid="group-cell"]');
   if (!td || td.dataset.drop !== "on") return null;
   const date = td.dataset.date!;
   if (td.dataset.athleteId) return { type: "cell", athleteId: Number(td.dataset.athleteId), date };
@@ -39,7 +46,11 @@ export type GridLayout = { rows: { key: string; target: (date: string) => DropTa
  * Arrow keys move the dragged item one day left/right or one row up/down, landing on the centre of that cell
  * (dnd-kit's default moves a fixed number of pixels, which lands between cells in a table).
  */
-export function gridKeyboardCoordinates(layout: () => GridLayout, start: () => { origin: DropTarget | null; moves: number }, aimed: Latest<DropTarget | null>): KeyboardCoordinateGetter {
+export function gridKeyboardCoordinates(
+  layout: () => GridLayout,
+  start: () => { origin: DropTarget | null; moves: number },
+  aimed: Latest<DropTarget | null>,
+): KeyboardCoordinateGetter {
   // The cell the last key press aimed at: the planner reads it as the cell under the item (`aimed`).
   let last: DropTarget | null = null;
   return (event, { context, currentCoordinates }) => {
@@ -58,7 +69,10 @@ export function gridKeyboardCoordinates(layout: () => GridLayout, start: () => {
     let r = base ? rows.findIndex((row) => row.key === rowKey(base)) : -1;
     let d = base ? days.indexOf(base.date) : -1;
     if (r < 0 || d < 0) {
-      r = Math.max(0, rows.findIndex((row) => row.key.startsWith("athlete:")));
+      r = Math.max(
+        0,
+        rows.findIndex((row) => row.key.startsWith("athlete:")),
+      );
       d = 0;
     } else if (event.code === "ArrowRight") d = Math.min(days.length - 1, d + 1);
     else if (event.code === "ArrowLeft") d = Math.max(0, d - 1);
@@ -82,7 +96,10 @@ export const SCREEN_READER_INSTRUCTIONS =
  * Screen-reader lines. The cell under the item comes from `current()` (the planner tracks it from the
  * pointer or the keyboard), so moving along a row is announced even though dnd-kit's `over` (the row) stays.
  */
-export function announcements(describeOver: (source: DragSource, target: DropTarget) => string, current: () => { target: DropTarget | null; label: string | null }): Announcements {
+export function announcements(
+  describeOver: (source: DragSource, target: DropTarget) => string,
+  current: () => { target: DropTarget | null; label: string | null },
+): Announcements {
   const label = (data: unknown) => (data as DragData | undefined)?.label ?? "item";
   let said: string | null = null;
   const over = (active: Active) => {
@@ -103,7 +120,9 @@ export function announcements(describeOver: (source: DragSource, target: DropTar
     onDragOver: ({ active }) => over(active),
     onDragEnd: ({ active }) => {
       const where = current().label;
-      return where ? `Dropped ${label(active.data.current)} on ${where}.` : `${label(active.data.current)} was put back.`;
+      return where
+        ? `Dropped ${label(active.data.current)} on ${where}.`
+        : `${label(active.data.current)} was put back.`;
     },
     onDragCancel: ({ active }) => `Cancelled. ${label(active.data.current)} was put back.`,
   };

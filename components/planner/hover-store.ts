@@ -6,7 +6,14 @@ import type { RowPreview } from "@/lib/plan/preview";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
 
 /** What the item being dragged would do to the cell under it. */
-export type Hover = { source: DragSource; target: DropTarget; rows: Map<number, RowPreview>; refusal: string | null; text: string; hits: RestrictionHit[] };
+export type Hover = {
+  source: DragSource;
+  target: DropTarget;
+  rows: Map<number, RowPreview>;
+  refusal: string | null;
+  text: string;
+  hits: RestrictionHit[];
+};
 
 /**
  * The drag preview lives outside React state on purpose: a new cell under the pointer re-renders only what
@@ -44,4 +51,3 @@ export function useHover(store: HoverStore): Hover | null {
 export function useRowPreview(store: HoverStore, athleteId: number): RowPreview | null {
   return useSyncExternalStore(store.subscribe, () => store.get()?.rows.get(athleteId) ?? null, none);
 }
-

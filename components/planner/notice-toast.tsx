@@ -22,12 +22,23 @@ export function NoticeToast({ notice }: { notice: Notice | null }) {
           data-tone={notice.tone}
           className={clsx(
             "pointer-events-auto flex max-w-2xl items-start gap-3 rounded-lg px-4 py-2.5 text-sm shadow-lift ring-1",
-            notice.tone === "refused" ? "bg-flag-climb-soft text-flag-climb ring-flag-climb/20" : notice.tone === "saved" ? "bg-paper-raised text-ink-800 ring-ink-100" : "bg-lane-50 text-lane-800 ring-lane-200",
+            notice.tone === "refused"
+              ? "bg-flag-climb-soft text-flag-climb ring-flag-climb/20"
+              : notice.tone === "saved"
+                ? "bg-paper-raised text-ink-800 ring-ink-100"
+                : "bg-lane-50 text-lane-800 ring-lane-200",
           )}
         >
-          {notice.tone === "saved" ? <span aria-hidden className="mt-1.5 h-2 w-2 shrink-0 rounded-full bg-flag-steady" /> : null}
+          {notice.tone === "saved" ? (
+            <span aria-hidden className="mt-1.5 h-2 w-2 shrink-0 rounded-full bg-flag-steady" />
+          ) : null}
           <span>{notice.text}</span>
-          <button type="button" onClick={() => setHidden(notice.at)} aria-label="Dismiss" className="-mr-1 shrink-0 rounded px-1 text-current opacity-60 hover:opacity-100">
+          <button
+            type="button"
+            onClick={() => setHidden(notice.at)}
+            aria-label="Dismiss"
+            className="-mr-1 shrink-0 rounded px-1 text-current opacity-60 hover:opacity-100"
+          >
             ×
           </button>
         </p>

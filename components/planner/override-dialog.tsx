@@ -23,7 +23,10 @@ export function useOverrideReason(): Ask {
 
 export function OverrideProvider({ children }: { children: ReactNode }) {
   const [pending, setPending] = useState<Pending | null>(null);
-  const ask = useCallback<Ask>((request) => new Promise<string | null>((resolve) => setPending({ ...request, resolve })), []);
+  const ask = useCallback<Ask>(
+    (request) => new Promise<string | null>((resolve) => setPending({ ...request, resolve })),
+    [],
+  );
   const settle = (reason: string | null) => {
     pending?.resolve(reason);
     setPending(null);
@@ -31,7 +34,12 @@ export function OverrideProvider({ children }: { children: ReactNode }) {
   return (
     <OverrideContext.Provider value={ask}>
       {children}
-      <Dialog open={pending !== null} onClose={() => settle(null)} title="This goes past a physio restriction" testId="override-dialog">
+      <Dialog
+        open={pending !== null}
+        onClose={() => settle(null)}
+        title="This goes past a physio restriction"
+        testId="override-dialog"
+      >
         {pending ? <OverrideForm request={pending} onDone={settle} /> : null}
       </Dialog>
     </OverrideContext.Provider>
@@ -39,24 +47,32 @@ export function OverrideProvider({ children }: { children: ReactNode }) {
 }
 
 function OverrideForm({ request, onDone }: { request: OverrideRequest; onDone: (reason: string | null) => void }) {
-  const { register, handleSubmit, formState } = useForm<OverrideInput>({ resolver: zodResolver(overrideSchema), defaultValues: { reason: "" } });
+  const { register, handleSubmit, formState } = useForm<OverrideInput>({
+    resolver: zodResolver(overrideSchema),
+    defaultValues: { reason: "" },
+  });
   const people = [...new Set(request.hits.map((h) => request.athleteName(h.athleteId)))];
   const whom = people.length === 1 ? people[0] : "these athletes";
   return (
     <form onSubmit={handleSubmit((v) => onDone(v.reason))} noValidate className="space-y-4">
       <p className="text-sm text-ink-600">
-        The medical staff limited what {whom} should do. You can still plan {request.what}; your reason is kept with the session and sent to the medical staff.
+        The medical staff limited what {whom} should do. You can still plan {request.what}; your reason is kept with the
+        session and sent to the medical staff.
       </p>
       <ul className="space-y-2">
         {request.hits.map((h) => (
-          <li key={`${h.restrictionId}:${h.date}`} data-testid="override-hit" className="rounded-md border border-flag-climb/30 bg-flag-climb-soft px-3 py-2 text-sm">
+          <li
+            key={`${h.restrictionId}:${h.date}`}
+            data-testid="override-hit"
+            className="rounded-md border border-flag-climb/30 bg-flag-climb-soft px-3 py-2 text-sm"
+          >
             <span className="font-semibold text-ink-900">
               {request.athleteName(h.athleteId)} · {formatDayShort(h.date)}
             </span>
             <span className="block text-ink-700">{h.rule}</span>
             <span className="block text-xs text-ink-600">In the session: {h.detail}</span>
             {h.note ? (
-              <span className="mt-1 block text-xs italic text-ink-600">
+              <span className="mt-1 block text-xs text-ink-600 italic">
                 “{h.note}” · {h.setByName}
               </span>
             ) : null}
@@ -64,7 +80,15 @@ function OverrideForm({ request, onDone }: { request: OverrideRequest; onDone: (
         ))}
       </ul>
       <Field label="Why should it go ahead?" htmlFor="override-reason" error={formState.errors.reason?.message}>
-        <Textarea id="override-reason" rows={3} autoFocus placeholder="e.g. Cleared by the physio at today's check; flys capped at 20 m." aria-invalid={formState.errors.reason ? true : undefined} {...register("reason")} data-testid="override-reason" />
+        <Textarea
+          id="override-reason"
+          rows={3}
+          autoFocus
+          placeholder="e.g. Cleared by the physio at today's check; flys capped at 20 m."
+          aria-invalid={formState.errors.reason ? true : undefined}
+          {...register("reason")}
+          data-testid="override-reason"
+        />
       </Field>
       <div className="flex flex-wrap justify-end gap-2">
         <Button type="button" variant="secondary" onClick={() => onDone(null)} data-testid="override-cancel">

@@ -34,7 +34,11 @@ const noop = () => {};
 const subscribeNothing = () => noop;
 
 function useHydrated() {
-  return useSyncExternalStore(subscribeNothing, () => true, () => false);
+  return useSyncExternalStore(
+    subscribeNothing,
+    () => true,
+    () => false,
+  );
 }
 
 type PlannerProps = { teamId: number; initialWeek: string; initial: PlanWeek | null };
@@ -53,7 +57,12 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
   const [weekStart, setWeekStart] = useState(initialWeek);
   const key = planWeekKey(teamId, weekStart);
   const seeded = initial !== null && initial.weekStart === weekStart;
-  const { data: week, error, isLoading, isValidating } = useSWR<PlanWeek>(key, fetchWeek, {
+  const {
+    data: week,
+    error,
+    isLoading,
+    isValidating,
+  } = useSWR<PlanWeek>(key, fetchWeek, {
     fallbackData: seeded ? initial : undefined,
     revalidateOnMount: !seeded,
     revalidateOnFocus: false,
@@ -63,7 +72,12 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
   const current = useCallback(() => weekBox.get(), [weekBox]);
   const askReason = useOverrideReason();
   const askOverride = useCallback(
-    (hits: RestrictionHit[], what: string) => askReason({ hits, what, athleteName: (id) => weekBox.get()?.athletes.find((a) => a.id === id)?.name ?? "The athlete" }),
+    (hits: RestrictionHit[], what: string) =>
+      askReason({
+        hits,
+        what,
+        athleteName: (id) => weekBox.get()?.athletes.find((a) => a.id === id)?.name ?? "The athlete",
+      }),
     [askReason, weekBox],
   );
   const act = usePlanActions({ swrKey: key, current, askOverride });
@@ -73,7 +87,10 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
   const [collapsed, setCollapsed] = useState<ReadonlySet<string>>(new Set());
   const [shelfOpen, setShelfOpen] = useState(true);
   const [editing, setEditing] = useState<number | null>(null);
-  const [templateEditor, setTemplateEditor] = useState<{ open: boolean; template: PlanTemplate | null }>({ open: false, template: null });
+  const [templateEditor, setTemplateEditor] = useState<{ open: boolean; template: PlanTemplate | null }>({
+    open: false,
+    template: null,
+  });
   const collapsedBox = useLatest(collapsed);
   const { say, saveChange, deleteSession, clearUndo } = act;
 
@@ -86,20 +103,26 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
       // Warned while hovering; the drop itself asks why before anything is saved.
       const w = weekBox.get();
       const what = w ? describeChange(w, change) : "this session";
-      void askOverride(hits, what).then((reason) => (reason === null ? say("info", `Not planned: ${what}. The restriction stands.`) : save({ reason })));
+      void askOverride(hits, what).then((reason) =>
+        reason === null ? say("info", `Not planned: ${what}. The restriction stands.`) : save({ reason }),
+      );
     },
     [askOverride, saveChange, say, weekBox],
   );
   const onRefused = useCallback((reason: string) => say("refused", reason), [say]);
   const dnd = usePlannerDnd({ week: weekBox, collapsed: collapsedBox, onDrop, onRefused });
 
-
   // Ctrl/⌘+Z undoes the last change (not while typing in a field or in a dialog).
   const undoBox = useLatest(act.undo);
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
       const typing = e.target instanceof HTMLElement && /^(INPUT|TEXTAREA|SELECT)$/.test(e.target.tagName);
-      if ((e.ctrlKey || e.metaKey) && e.key.toLowerCase() === "z" && !typing && !document.querySelector("dialog[open]")) {
+      if (
+        (e.ctrlKey || e.metaKey) &&
+        e.key.toLowerCase() === "z" &&
+        !typing &&
+        !document.querySelector("dialog[open]")
+      ) {
         e.preventDefault();
         void undoBox.get()();
       }
@@ -136,11 +159,16 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
       open: (s: PlanSession) => setEditing(s.id),
       armCopy: (s: PlanSession) => {
         armCopy(s.id);
-        say("info", `Copy mode for "${s.title}": drag the card (or focus it, press Space and use the arrow keys) to where the copy goes. Escape leaves copy mode.`);
+        say(
+          "info",
+          `Copy mode for "${s.title}": drag the card (or focus it, press Space and use the arrow keys) to where the copy goes. Escape leaves copy mode.`,
+        );
       },
       remove: async (s: PlanSession) => {
         if (!(await confirm(removeQuestion(s)))) return;
-        await deleteSession(s).catch((err: unknown) => say("refused", err instanceof Error ? err.message : "Could not delete"));
+        await deleteSession(s).catch((err: unknown) =>
+          say("refused", err instanceof Error ? err.message : "Could not delete"),
+        );
       },
     }),
     [armCopy, confirm, deleteSession, say],
@@ -153,28 +181,67 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
   const editingSession = shown && editing !== null ? findSession(shown, editing) : null;
   const editingAthlete = editingSession ? shown?.athletes.find((a) => a.id === editingSession.athleteId) : undefined;
   const { active, hoverStore, copying } = dnd;
-  const overlaySession = active?.source.type === "session" && shown ? findSession(shown, active.source.sessionId) : null;
+  const overlaySession =
+    active?.source.type === "session" && shown ? findSession(shown, active.source.sessionId) : null;
   const overlayTemplateId = active?.source.type === "template" ? active.source.templateId : null;
   const overlayTemplate = shown?.templates.find((t) => t.id === overlayTemplateId);
 
   return (
-    <div data-testid="planner" data-team-id={teamId} data-save-state={act.saving > 0 ? "saving" : isValidating ? "confirming" : "idle"} data-week={weekStart} data-ready={hydrated || undefined}>
-      <WeekHeader week={shown} weekStart={weekStart} onGo={go} onToday={() => go(shown?.today ?? weekStart)} undo={act.undoStack.at(-1) ?? null} onUndo={() => void act.undo()} onTool={(t) => void act.runTool(t)} busy={act.saving > 0} />
+    <div
+      data-testid="planner"
+      data-team-id={teamId}
+      data-save-state={act.saving > 0 ? "saving" : isValidating ? "confirming" : "idle"}
+      data-week={weekStart}
+      data-ready={hydrated || undefined}
+    >
+      <WeekHeader
+        week={shown}
+        weekStart={weekStart}
+        onGo={go}
+        onToday={() => go(shown?.today ?? weekStart)}
+        undo={act.undoStack.at(-1) ?? null}
+        onUndo={() => void act.undo()}
+        onTool={(t) => void act.runTool(t)}
+        busy={act.saving > 0}
+      />
       {active ? null : <NoticeToast notice={act.notice} />}
-      {error && !shown ? <p className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">The plan could not be loaded: {error instanceof Error ? error.message : "unknown error"}.</p> : null}
-      {!shown && isLoading ? <div className="h-96 animate-pulse rounded-card bg-paper-sunk" data-testid="plan-loading" /> : null}
+      {error && !shown ? (
+        <p className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">
+          The plan could not be loaded: {error instanceof Error ? error.message : "unknown error"}.
+        </p>
+      ) : null}
+      {!shown && isLoading ? (
+        <div className="h-96 animate-pulse rounded-card bg-paper-sunk" data-testid="plan-loading" />
+      ) : null}
       {shown ? (
-        <DndContext sensors={dnd.sensors} accessibility={dnd.accessibility} onDragStart={dnd.onDragStart} onDragMove={dnd.onDragMove} onDragEnd={dnd.onDragEnd} onDragCancel={dnd.onDragCancel} autoScroll={AUTO_SCROLL}>
+        <DndContext
+          sensors={dnd.sensors}
+          accessibility={dnd.accessibility}
+          onDragStart={dnd.onDragStart}
+          onDragMove={dnd.onDragMove}
+          onDragEnd={dnd.onDragEnd}
+          onDragCancel={dnd.onDragCancel}
+          autoScroll={AUTO_SCROLL}
+        >
           {!shown.canEdit ? (
             <p className="mb-3 rounded-lg bg-paper-sunk px-3 py-2 text-xs text-ink-600" data-testid="read-only">
-              {shown.scope === "own" ? "Your published sessions this week. Coaches plan them; open a card to see what it asks." : "Read-only: coaches and the head coach change the plan. Open a card to see its blocks."}
+              {shown.scope === "own"
+                ? "Your published sessions this week. Coaches plan them; open a card to see what it asks."
+                : "Read-only: coaches and the head coach change the plan. Open a card to see its blocks."}
             </p>
           ) : null}
           <DropPreviewPanel store={hoverStore} week={shown} copying={copying} />
           <div className="mb-2 flex items-center justify-between gap-3">
             <DragHint active={active?.source.type ?? null} copying={copying} canEdit={shown.canEdit} />
             {shown.canEdit ? (
-              <button type="button" aria-expanded={shelfOpen} aria-controls="block-shelf" onClick={() => setShelfOpen((o) => !o)} data-testid="toggle-shelf" className="shrink-0 text-xs font-medium text-ink-500 hover:text-ink-900">
+              <button
+                type="button"
+                aria-expanded={shelfOpen}
+                aria-controls="block-shelf"
+                onClick={() => setShelfOpen((o) => !o)}
+                data-testid="toggle-shelf"
+                className="shrink-0 text-xs font-medium text-ink-500 hover:text-ink-900"
+              >
                 {shelfOpen ? "Hide block shelf ›" : "‹ Show block shelf"}
               </button>
             ) : null}
@@ -182,22 +249,48 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
           <div className={clsx("grid gap-4", shown.canEdit && shelfOpen ? "xl:grid-cols-[minmax(0,1fr)_13.5rem]" : "")}>
             <div className="min-w-0 space-y-3">
               {shown.athletes.length === 0 ? (
-                <p className="rounded-card border border-dashed border-ink-200 px-6 py-10 text-center text-sm text-ink-500">No athletes in the team yet. Add them on the squad screen.</p>
+                <p className="rounded-card border border-dashed border-ink-200 px-6 py-10 text-center text-sm text-ink-500">
+                  No athletes in the team yet. Add them on the squad screen.
+                </p>
               ) : (
-                <WeekGrid week={shown} collapsed={collapsed} onToggleGroup={toggleGroup} hoverStore={hoverStore} templateDrag={active?.source.type === "template"} dragging={active !== null && shown.canEdit} copyArmedId={dnd.copyArmedId} actions={actions} />
+                <WeekGrid
+                  week={shown}
+                  collapsed={collapsed}
+                  onToggleGroup={toggleGroup}
+                  hoverStore={hoverStore}
+                  templateDrag={active?.source.type === "template"}
+                  dragging={active !== null && shown.canEdit}
+                  copyArmedId={dnd.copyArmedId}
+                  actions={actions}
+                />
               )}
               <LoadCaution />
               <p className="text-2xs text-ink-400">
-                Totals are for the week as planned (logged work up to today, the plan after). HSR and near-max metres and sprint steps are model estimates from each athlete&apos;s tested max velocity.
+                Totals are for the week as planned (logged work up to today, the plan after). HSR and near-max metres
+                and sprint steps are model estimates from each athlete&apos;s tested max velocity.
               </p>
             </div>
-            {shown.canEdit && shelfOpen ? <BlockShelf templates={shown.templates} canEdit onEdit={editTemplate} onNew={newTemplate} /> : null}
+            {shown.canEdit && shelfOpen ? (
+              <BlockShelf templates={shown.templates} canEdit onEdit={editTemplate} onNew={newTemplate} />
+            ) : null}
           </div>
           <DragOverlay dropAnimation={null} className="pointer-events-none">
             {overlaySession ? (
               <div className="relative">
-                <SessionCard session={overlaySession} athleteName="" canEdit={false} copyArmed={false} flags={[]} actions={actions} overlay />
-                {copying ? <span className="absolute -right-2 -top-2 rounded-full bg-lane-600 px-1.5 text-2xs font-semibold text-white">+ copy</span> : null}
+                <SessionCard
+                  session={overlaySession}
+                  athleteName=""
+                  canEdit={false}
+                  copyArmed={false}
+                  flags={[]}
+                  actions={actions}
+                  overlay
+                />
+                {copying ? (
+                  <span className="absolute -top-2 -right-2 rounded-full bg-lane-600 px-1.5 text-2xs font-semibold text-white">
+                    + copy
+                  </span>
+                ) : null}
               </div>
             ) : overlayTemplate ? (
               <ul>
@@ -209,7 +302,15 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
       ) : null}
       {shown ? (
         <>
-          <SessionEditor session={editingSession} athleteName={editingAthlete?.name ?? ""} canEdit={shown.canEdit} templates={shown.templates} onClose={() => setEditing(null)} onSave={act.saveSession} onDelete={(s, version) => act.deleteSession(s, version)} />
+          <SessionEditor
+            session={editingSession}
+            athleteName={editingAthlete?.name ?? ""}
+            canEdit={shown.canEdit}
+            templates={shown.templates}
+            onClose={() => setEditing(null)}
+            onSave={act.saveSession}
+            onDelete={(s, version) => act.deleteSession(s, version)}
+          />
           <TemplateEditor
             open={templateEditor.open}
             template={templateEditor.template}
@@ -225,7 +326,15 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
   );
 }
 
-function DragHint({ active, copying, canEdit }: { active: "template" | "session" | null; copying: boolean; canEdit: boolean }) {
+function DragHint({
+  active,
+  copying,
+  canEdit,
+}: {
+  active: "template" | "session" | null;
+  copying: boolean;
+  canEdit: boolean;
+}) {
   const text =
     active === "session"
       ? copying
@@ -237,7 +346,11 @@ function DragHint({ active, copying, canEdit }: { active: "template" | "session"
           ? "Drag a block onto a day · drag a card to move it (Alt copies) · Ctrl+Z undoes"
           : "";
   return (
-    <p data-testid="drag-hint" data-active={active ? "true" : undefined} className={clsx("min-h-4 text-xs", active ? "text-ink-600" : "text-ink-400")}>
+    <p
+      data-testid="drag-hint"
+      data-active={active ? "true" : undefined}
+      className={clsx("min-h-4 text-xs", active ? "text-ink-600" : "text-ink-400")}
+    >
       {text}
     </p>
   );

@@ -26,8 +26,14 @@ export function StatusMark({ status }: { status: PlanSession["status"] }) {
   return (
     <span className="inline-flex items-center" title={STATUS_WORD[status]}>
       {status === "published" ? <span aria-hidden className="h-1.5 w-1.5 rounded-full bg-lane-600" /> : null}
-      {status === "draft" ? <span aria-hidden className="h-1.5 w-1.5 rounded-full ring-1 ring-inset ring-ink-400" /> : null}
-      {status === "cancelled" ? <span aria-hidden className="text-2xs font-semibold text-flag-spike">✕</span> : null}
+      {status === "draft" ? (
+        <span aria-hidden className="h-1.5 w-1.5 rounded-full ring-1 ring-ink-400 ring-inset" />
+      ) : null}
+      {status === "cancelled" ? (
+        <span aria-hidden className="text-2xs font-semibold text-flag-spike">
+          ✕
+        </span>
+      ) : null}
       <span className="sr-only">{STATUS_WORD[status]}</span>
     </span>
   );
@@ -52,14 +58,27 @@ type Props = {
 };
 
 /** One session in a day cell: kind stripe, time and state, title, the first block's key numbers. */
-export const SessionCard = memo(function SessionCard({ session: s, athleteName, canEdit, copyArmed, flags, actions, overlay = false, restricted = null }: Props) {
+export const SessionCard = memo(function SessionCard({
+  session: s,
+  athleteName,
+  canEdit,
+  copyArmed,
+  flags,
+  actions,
+  overlay = false,
+  restricted = null,
+}: Props) {
   const label = sessionLabel(s, athleteName);
   const pending = s.id < 0;
   const cancelled = s.status === "cancelled";
   const data: DragData = { source: { type: "session", sessionId: s.id }, label };
   // The drag hook re-renders on every move over the grid; everything below it is memoised on the session.
   const draggable = !overlay && canEdit && !pending && !cancelled;
-  const { attributes, listeners, setNodeRef, isDragging } = useDraggable({ id: overlay ? `overlay:${s.id}` : dragId(data.source), data, disabled: !draggable });
+  const { attributes, listeners, setNodeRef, isDragging } = useDraggable({
+    id: overlay ? `overlay:${s.id}` : dragId(data.source),
+    data,
+    disabled: !draggable,
+  });
   // Only a card that can move says so; the others are plain buttons that open the session.
   const dragProps = draggable ? { ...attributes, ...listeners } : {};
   return (
@@ -70,7 +89,9 @@ export const SessionCard = memo(function SessionCard({ session: s, athleteName, 
       data-pending={pending || undefined}
       className={clsx(
         "group relative flex overflow-hidden rounded-md bg-paper-raised text-left shadow-card ring-1 transition-opacity",
-        s.status === "draft" ? "ring-ink-200 [background-image:repeating-linear-gradient(135deg,transparent_0_6px,rgba(154,169,189,0.08)_6px_12px)]" : "ring-ink-100",
+        s.status === "draft"
+          ? "[background-image:repeating-linear-gradient(135deg,transparent_0_6px,rgba(154,169,189,0.08)_6px_12px)] ring-ink-200"
+          : "ring-ink-100",
         cancelled && "opacity-55",
         isDragging && "opacity-30",
         pending && "animate-pulse",
@@ -84,13 +105,20 @@ export const SessionCard = memo(function SessionCard({ session: s, athleteName, 
         {...dragProps}
         aria-label={label}
         onClick={() => !overlay && actions.open(s)}
-        className={clsx("flex min-w-0 flex-1 text-left", canEdit && !cancelled ? "cursor-grab active:cursor-grabbing" : "cursor-pointer")}
+        className={clsx(
+          "flex min-w-0 flex-1 text-left",
+          canEdit && !cancelled ? "cursor-grab active:cursor-grabbing" : "cursor-pointer",
+        )}
       >
         <CardBody session={s} />
       </button>
       {flags.length > 0 ? <CardFlags flags={flags} /> : null}
       {restricted ? (
-        <span data-testid="card-restricted" title={restricted} className="absolute left-1.5 top-0.5 text-2xs font-semibold text-flag-climb">
+        <span
+          data-testid="card-restricted"
+          title={restricted}
+          className="absolute top-0.5 left-1.5 text-2xs font-semibold text-flag-climb"
+        >
           <span aria-hidden>⚕</span>
           <span className="sr-only">Goes past a physio restriction: {restricted}</span>
         </span>
@@ -112,8 +140,19 @@ const CardBody = memo(function CardBody({ session: s }: { session: PlanSession }
           <span className="tabular-nums">{s.startTime}</span>
           <StatusMark status={s.status} />
         </span>
-        <span className={clsx("line-clamp-2 hyphens-auto break-words text-xs font-medium leading-4 text-ink-900", s.status === "cancelled" && "line-through")}>{s.title}</span>
-        {first ? <span className="mt-0.5 line-clamp-2 text-2xs leading-[0.95rem] text-ink-600">{blockSummary(toBlockInput(first))}</span> : null}
+        <span
+          className={clsx(
+            "line-clamp-2 text-xs leading-4 font-medium break-words hyphens-auto text-ink-900",
+            s.status === "cancelled" && "line-through",
+          )}
+        >
+          {s.title}
+        </span>
+        {first ? (
+          <span className="mt-0.5 line-clamp-2 text-2xs leading-[0.95rem] text-ink-600">
+            {blockSummary(toBlockInput(first))}
+          </span>
+        ) : null}
         {more > 0 ? <span className="text-2xs text-ink-400">+{more} more</span> : null}
       </span>
     </>
@@ -122,9 +161,15 @@ const CardBody = memo(function CardBody({ session: s }: { session: PlanSession }
 
 const CardFlags = memo(function CardFlags({ flags }: { flags: Flag[] }) {
   return (
-    <span className="absolute bottom-1 right-1 flex gap-0.5">
+    <span className="absolute right-1 bottom-1 flex gap-0.5">
       {flags.map((f) => (
-        <span key={`${f.kind}${f.date}`} title={f.reason} data-testid="card-flag" data-kind={f.kind} className={clsx("h-2 w-2 rounded-full", flagClasses(f.kind).dot)}>
+        <span
+          key={`${f.kind}${f.date}`}
+          title={f.reason}
+          data-testid="card-flag"
+          data-kind={f.kind}
+          className={clsx("h-2 w-2 rounded-full", flagClasses(f.kind).dot)}
+        >
           <span className="sr-only">
             {FLAG_DISPLAY[f.kind].label}: {f.reason}
           </span>
@@ -134,16 +179,35 @@ const CardFlags = memo(function CardFlags({ flags }: { flags: Flag[] }) {
   );
 });
 
-const CardActionsMenu = memo(function CardActionsMenu({ session: s, label, actions }: { session: PlanSession; label: string; actions: CardActions }) {
+const CardActionsMenu = memo(function CardActionsMenu({
+  session: s,
+  label,
+  actions,
+}: {
+  session: PlanSession;
+  label: string;
+  actions: CardActions;
+}) {
   const cancelled = s.status === "cancelled";
   return (
-    <div className="absolute right-0.5 top-0.5 opacity-0 focus-within:opacity-100 group-hover:opacity-100">
+    <div className="absolute top-0.5 right-0.5 opacity-0 group-hover:opacity-100 focus-within:opacity-100">
       <CardMenu
         label={`More for ${label}`}
         items={[
           { label: "Edit", onSelect: () => actions.open(s), testId: "menu-edit" },
-          ...(cancelled ? [] : [{ label: "Copy to another day…", onSelect: () => actions.armCopy(s), testId: "menu-copy" }]),
-          ...(cancelled ? [] : [{ label: s.status === "published" ? "Cancel session" : "Delete", onSelect: () => void actions.remove(s), danger: true, testId: "menu-delete" }]),
+          ...(cancelled
+            ? []
+            : [{ label: "Copy to another day…", onSelect: () => actions.armCopy(s), testId: "menu-copy" }]),
+          ...(cancelled
+            ? []
+            : [
+                {
+                  label: s.status === "published" ? "Cancel session" : "Delete",
+                  onSelect: () => void actions.remove(s),
+                  danger: true,
+                  testId: "menu-delete",
+                },
+              ]),
         ]}
       />
     </div>

@@ -34,7 +34,14 @@ export function toEditValues(s: PlanSession): SessionEditValues {
     durationMin: s.durationMin,
     plannedRpe: s.plannedRpe,
     notes: s.notes ?? "",
-    blocks: s.blocks.map(({ templateId, kind, title, running, drills, notes }) => ({ templateId, kind, title, running, drills, notes: notes ?? "" })),
+    blocks: s.blocks.map(({ templateId, kind, title, running, drills, notes }) => ({
+      templateId,
+      kind,
+      title,
+      running,
+      drills,
+      notes: notes ?? "",
+    })),
   };
 }
 
@@ -44,7 +51,13 @@ export function SessionEditor(props: Props) {
   const title = session ? `${athleteName} · ${formatDayLong(session.date)}` : "Session";
   return (
     <Dialog open={session !== null} onClose={onClose} title={title} wide testId="session-editor">
-      {session ? props.canEdit && session.status !== "cancelled" ? <EditForm key={`${session.id}:${session.version}`} {...props} session={session} /> : <SessionDetails session={session} /> : null}
+      {session ? (
+        props.canEdit && session.status !== "cancelled" ? (
+          <EditForm key={`${session.id}:${session.version}`} {...props} session={session} />
+        ) : (
+          <SessionDetails session={session} />
+        )
+      ) : null}
     </Dialog>
   );
 }
@@ -53,7 +66,8 @@ function SessionDetails({ session: s }: { session: PlanSession }) {
   return (
     <div className="space-y-3 text-sm" data-testid="session-details">
       <p className="text-ink-600">
-        {s.startTime} · {formatMinutes(s.durationMin)} · planned RPE {s.plannedRpe} · {s.status === "draft" ? "draft" : s.status}
+        {s.startTime} · {formatMinutes(s.durationMin)} · planned RPE {s.plannedRpe} ·{" "}
+        {s.status === "draft" ? "draft" : s.status}
       </p>
       <h3 className="text-base font-semibold text-ink-900">{s.title}</h3>
       {s.blocks.map((b) => (
@@ -72,7 +86,10 @@ function SessionDetails({ session: s }: { session: PlanSession }) {
 
 function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { session: PlanSession }) {
   const confirm = useConfirm();
-  const form = useForm<SessionEditValues>({ resolver: zodResolver(sessionEditSchema), defaultValues: toEditValues(session) });
+  const form = useForm<SessionEditValues>({
+    resolver: zodResolver(sessionEditSchema),
+    defaultValues: toEditValues(session),
+  });
   const blocks = useFieldArray({ control: form.control, name: "blocks" });
   const [open, setOpen] = useState<number | null>(session.blocks.length === 1 ? 0 : null);
   const [version, setVersion] = useState(session.version);
@@ -82,10 +99,14 @@ function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { s
   const handleError = (e: unknown) => {
     if (e instanceof PlanApiError && e.stale && e.current) {
       setVersion(e.current.version);
-      setNotice(`This session was changed by someone else while you were editing (it is now "${e.current.title}" at ${e.current.startTime}, ${e.current.blocks.length} blocks). Save again to replace it with what you see here, or close to keep their version.`);
+      setNotice(
+        `This session was changed by someone else while you were editing (it is now "${e.current.title}" at ${e.current.startTime}, ${e.current.blocks.length} blocks). Save again to replace it with what you see here, or close to keep their version.`,
+      );
       return;
     }
-    if (e instanceof PlanApiError) for (const [field, m] of Object.entries(e.fields)) form.setError(field as Path<SessionEditValues>, { message: m[0] });
+    if (e instanceof PlanApiError)
+      for (const [field, m] of Object.entries(e.fields))
+        form.setError(field as Path<SessionEditValues>, { message: m[0] });
     setNotice(e instanceof Error ? e.message : "Could not save the session");
   };
   const submit = form.handleSubmit(async (values) => {
@@ -110,10 +131,21 @@ function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { s
             <Input id="s-start" type="time" {...form.register("startTime")} aria-invalid={Boolean(err.startTime)} />
           </Field>
           <Field label="Minutes" htmlFor="s-duration" error={err.durationMin?.message}>
-            <Input id="s-duration" type="number" {...form.register("durationMin", { valueAsNumber: true })} aria-invalid={Boolean(err.durationMin)} />
+            <Input
+              id="s-duration"
+              type="number"
+              {...form.register("durationMin", { valueAsNumber: true })}
+              aria-invalid={Boolean(err.durationMin)}
+            />
           </Field>
           <Field label="Planned RPE (CR-10)" htmlFor="s-rpe" error={err.plannedRpe?.message}>
-            <Input id="s-rpe" type="number" step={0.5} {...form.register("plannedRpe", { valueAsNumber: true })} aria-invalid={Boolean(err.plannedRpe)} />
+            <Input
+              id="s-rpe"
+              type="number"
+              step={0.5}
+              {...form.register("plannedRpe", { valueAsNumber: true })}
+              aria-invalid={Boolean(err.plannedRpe)}
+            />
           </Field>
         </div>
         <section aria-label="Blocks" className="space-y-2">
@@ -124,19 +156,44 @@ function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { s
             return (
               <div key={f.id} data-testid="editor-block" className="rounded-lg ring-1 ring-ink-100">
                 <div className="flex items-center gap-2 px-3 py-2">
-                  <button type="button" className="min-w-0 flex-1 text-left" aria-expanded={open === i} onClick={() => setOpen(open === i ? null : i)}>
+                  <button
+                    type="button"
+                    className="min-w-0 flex-1 text-left"
+                    aria-expanded={open === i}
+                    onClick={() => setOpen(open === i ? null : i)}
+                  >
                     <span className="block truncate text-sm font-medium text-ink-900">
-                      {b?.title || "Untitled"} <span className="font-normal text-ink-500">· {b ? BLOCK_KIND_LABEL[b.kind] : ""}</span>
+                      {b?.title || "Untitled"}{" "}
+                      <span className="font-normal text-ink-500">· {b ? BLOCK_KIND_LABEL[b.kind] : ""}</span>
                     </span>
-                    <span className="block truncate text-xs text-ink-500">{b ? blockSummary(toBlockInput(b)) : ""}</span>
+                    <span className="block truncate text-xs text-ink-500">
+                      {b ? blockSummary(toBlockInput(b)) : ""}
+                    </span>
                   </button>
-                  <Button variant="ghost" size="sm" aria-label={`Move block ${i + 1} up`} disabled={i === 0} onClick={() => blocks.move(i, i - 1)}>
+                  <Button
+                    variant="ghost"
+                    size="sm"
+                    aria-label={`Move block ${i + 1} up`}
+                    disabled={i === 0}
+                    onClick={() => blocks.move(i, i - 1)}
+                  >
                     ↑
                   </Button>
-                  <Button variant="ghost" size="sm" aria-label={`Move block ${i + 1} down`} disabled={i === blocks.fields.length - 1} onClick={() => blocks.move(i, i + 1)}>
+                  <Button
+                    variant="ghost"
+                    size="sm"
+                    aria-label={`Move block ${i + 1} down`}
+                    disabled={i === blocks.fields.length - 1}
+                    onClick={() => blocks.move(i, i + 1)}
+                  >
                     ↓
                   </Button>
-                  <Button variant="ghost" size="sm" onClick={() => blocks.remove(i)} aria-label={`Remove block ${i + 1}`}>
+                  <Button
+                    variant="ghost"
+                    size="sm"
+                    onClick={() => blocks.remove(i)}
+                    aria-label={`Remove block ${i + 1}`}
+                  >
                     Remove
                   </Button>
                 </div>
@@ -149,7 +206,12 @@ function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { s
             );
           })}
           <div className="flex gap-2">
-            <Select aria-label="Add a block from the shelf" value={addFrom} onChange={(e) => setAddFrom(e.target.value)} className="max-w-xs">
+            <Select
+              aria-label="Add a block from the shelf"
+              value={addFrom}
+              onChange={(e) => setAddFrom(e.target.value)}
+              className="max-w-xs"
+            >
               <option value="">Add a block from the shelf…</option>
               {templates.map((t) => (
                 <option key={t.id} value={t.id}>
@@ -163,7 +225,14 @@ function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { s
               onClick={() => {
                 const t = templates.find((x) => String(x.id) === addFrom);
                 if (!t) return;
-                blocks.append({ templateId: t.id, kind: t.kind, title: t.title, running: t.running, drills: t.drills, notes: t.notes ?? "" });
+                blocks.append({
+                  templateId: t.id,
+                  kind: t.kind,
+                  title: t.title,
+                  running: t.running,
+                  drills: t.drills,
+                  notes: t.notes ?? "",
+                });
                 setAddFrom("");
               }}
             >
@@ -175,7 +244,11 @@ function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { s
           <Textarea id="s-notes" rows={2} {...form.register("notes")} />
         </Field>
         {notice ? (
-          <p role="alert" data-testid="editor-notice" className="rounded-md bg-flag-climb-soft px-3 py-2 text-sm text-flag-climb">
+          <p
+            role="alert"
+            data-testid="editor-notice"
+            className="rounded-md bg-flag-climb-soft px-3 py-2 text-sm text-flag-climb"
+          >
             {notice}
           </p>
         ) : null}
@@ -186,21 +259,21 @@ function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { s
           saveLabel="Save"
           saveTestId="save-session"
           left={
-              <Button
-                variant="danger"
-                data-testid="delete-session"
-                onClick={async () => {
-                  if (!(await confirm(removeQuestion(session)))) return;
-                  try {
-                    await onDelete(session, version);
-                    onClose();
-                  } catch (e) {
-                    handleError(e);
-                  }
-                }}
-              >
-                {session.status === "published" ? "Cancel session" : "Delete"}
-              </Button>
+            <Button
+              variant="danger"
+              data-testid="delete-session"
+              onClick={async () => {
+                if (!(await confirm(removeQuestion(session)))) return;
+                try {
+                  await onDelete(session, version);
+                  onClose();
+                } catch (e) {
+                  handleError(e);
+                }
+              }}
+            >
+              {session.status === "published" ? "Cancel session" : "Delete"}
+            </Button>
           }
         />
       </form>

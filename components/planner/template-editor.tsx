@@ -38,8 +38,22 @@ type Props = {
 /** Creates or edits a block template with the schema the handler parses, and shows its load as you type. */
 export function TemplateEditor({ template, open, onClose, onSave, onDelete, profile, settings }: Props) {
   return (
-    <Dialog open={open} onClose={onClose} title={template ? `Edit block · ${template.title}` : "New block"} wide testId="template-editor">
-      <TemplateForm key={template?.id ?? "new"} template={template} onClose={onClose} onSave={onSave} onDelete={onDelete} profile={profile} settings={settings} />
+    <Dialog
+      open={open}
+      onClose={onClose}
+      title={template ? `Edit block · ${template.title}` : "New block"}
+      wide
+      testId="template-editor"
+    >
+      <TemplateForm
+        key={template?.id ?? "new"}
+        template={template}
+        onClose={onClose}
+        onSave={onSave}
+        onDelete={onDelete}
+        profile={profile}
+        settings={settings}
+      />
     </Dialog>
   );
 }
@@ -59,7 +73,8 @@ function TemplateForm({ template, onClose, onSave, onDelete, profile, settings }
       onClose();
     } catch (e) {
       if (e instanceof PlanApiError) {
-        for (const [field, messages] of Object.entries(e.fields)) form.setError(field as Path<TemplateInput>, { message: messages[0] });
+        for (const [field, messages] of Object.entries(e.fields))
+          form.setError(field as Path<TemplateInput>, { message: messages[0] });
       }
       setFailure(e instanceof Error ? e.message : "Could not save the block");
     }
@@ -70,11 +85,26 @@ function TemplateForm({ template, onClose, onSave, onDelete, profile, settings }
       <form onSubmit={submit} noValidate className="space-y-4" data-testid="template-form">
         <BlockFields />
         <div className="grid grid-cols-2 gap-3">
-          <Field label="Session length when it starts a session (min)" htmlFor="durationMin" error={err.durationMin?.message}>
-            <Input id="durationMin" type="number" {...form.register("durationMin", { valueAsNumber: true })} aria-invalid={Boolean(err.durationMin)} />
+          <Field
+            label="Session length when it starts a session (min)"
+            htmlFor="durationMin"
+            error={err.durationMin?.message}
+          >
+            <Input
+              id="durationMin"
+              type="number"
+              {...form.register("durationMin", { valueAsNumber: true })}
+              aria-invalid={Boolean(err.durationMin)}
+            />
           </Field>
           <Field label="Planned RPE (CR-10)" htmlFor="plannedRpe" error={err.plannedRpe?.message}>
-            <Input id="plannedRpe" type="number" step={0.5} {...form.register("plannedRpe", { valueAsNumber: true })} aria-invalid={Boolean(err.plannedRpe)} />
+            <Input
+              id="plannedRpe"
+              type="number"
+              step={0.5}
+              {...form.register("plannedRpe", { valueAsNumber: true })}
+              aria-invalid={Boolean(err.plannedRpe)}
+            />
           </Field>
         </div>
         <BlockLoadPreview profile={profile} settings={settings} />
@@ -90,17 +120,22 @@ function TemplateForm({ template, onClose, onSave, onDelete, profile, settings }
           saveTestId="save-template"
           left={
             template ? (
-                <Button
-                  variant="danger"
-                  onClick={async () => {
-                    const ok = await confirm({ title: `Delete the block "${template.title}"?`, body: "It leaves the shelf. Sessions that already use it keep their copy.", confirmLabel: "Delete block", danger: true });
-                    if (!ok) return;
-                    await onDelete(template);
-                    onClose();
-                  }}
-                >
-                  Delete block
-                </Button>
+              <Button
+                variant="danger"
+                onClick={async () => {
+                  const ok = await confirm({
+                    title: `Delete the block "${template.title}"?`,
+                    body: "It leaves the shelf. Sessions that already use it keep their copy.",
+                    confirmLabel: "Delete block",
+                    danger: true,
+                  });
+                  if (!ok) return;
+                  await onDelete(template);
+                  onClose();
+                }}
+              >
+                Delete block
+              </Button>
             ) : undefined
           }
         />

@@ -4,10 +4,27 @@ import { useCallback, useState } from "react";
 import { useSWRConfig } from "swr";
 import { applyChange, mergeSaved, type TempIds } from "@/lib/plan/apply";
 import { findSession, type PlanChange } from "@/lib/plan/drop";
-import { planWeekKey, sessionBlockPath, sessionBlocksPath, sessionPath, teamSessionsPath, teamTemplatesPath, templatePath, weekToolPath } from "@/lib/plan/keys";
+import {
+  planWeekKey,
+  sessionBlockPath,
+  sessionBlocksPath,
+  sessionPath,
+  teamSessionsPath,
+  teamTemplatesPath,
+  templatePath,
+  weekToolPath,
+} from "@/lib/plan/keys";
 import { rowLoad } from "@/lib/plan/preview";
 import type { PlanSession, PlanTemplate, PlanWeek, PlanWriteResult } from "@/lib/plan/types";
-import { popUndo, pushUndo, undoForChange, undoForDelete, undoForEdit, type UndoEntry, type UndoOp } from "@/lib/plan/undo";
+import {
+  popUndo,
+  pushUndo,
+  undoForChange,
+  undoForDelete,
+  undoForEdit,
+  type UndoEntry,
+  type UndoOp,
+} from "@/lib/plan/undo";
 import type { SessionEditValues } from "@/lib/validations/plan";
 import type { TemplateInput } from "@/lib/validations/template";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
@@ -26,15 +43,42 @@ function request(week: PlanWeek, change: PlanChange, override?: Override): Promi
   const o = override ? { override } : {};
   switch (change.kind) {
     case "create":
-      return write("POST", teamSessionsPath(week.teamId), { from: "template", templateId: change.templateId, athleteId: change.athleteId, date: change.date, ...o });
+      return write("POST", teamSessionsPath(week.teamId), {
+        from: "template",
+        templateId: change.templateId,
+        athleteId: change.athleteId,
+        date: change.date,
+        ...o,
+      });
     case "group":
-      return write("POST", teamSessionsPath(week.teamId), { from: "template", templateId: change.templateId, groupId: change.groupId, date: change.date, ...o });
+      return write("POST", teamSessionsPath(week.teamId), {
+        from: "template",
+        templateId: change.templateId,
+        groupId: change.groupId,
+        date: change.date,
+        ...o,
+      });
     case "copy":
-      return write("POST", teamSessionsPath(week.teamId), { from: "copy", sessionId: change.sessionId, athleteId: change.athleteId, date: change.date, ...o });
+      return write("POST", teamSessionsPath(week.teamId), {
+        from: "copy",
+        sessionId: change.sessionId,
+        athleteId: change.athleteId,
+        date: change.date,
+        ...o,
+      });
     case "add-block":
-      return write("POST", sessionBlocksPath(change.sessionId), { version: version(change.sessionId), templateId: change.templateId, ...o });
+      return write("POST", sessionBlocksPath(change.sessionId), {
+        version: version(change.sessionId),
+        templateId: change.templateId,
+        ...o,
+      });
     case "move":
-      return write("PATCH", sessionPath(change.sessionId), { version: version(change.sessionId), athleteId: change.athleteId, date: change.date, ...o });
+      return write("PATCH", sessionPath(change.sessionId), {
+        version: version(change.sessionId),
+        athleteId: change.athleteId,
+        date: change.date,
+        ...o,
+      });
   }
 }
 
@@ -47,8 +91,16 @@ class KeptAsItWas extends Error {}
 
 /** The saved sessions in place, with the server's week numbers where the answer has them. */
 function withServerRows(week: PlanWeek, res: PlanWriteResult, temps: readonly number[]): PlanWeek {
-  const server = new Map((res.rows ?? []).filter((r) => r.weekStart === week.weekStart).map((r) => [r.athleteId, r.load]));
-  const merged = mergeSaved(week, res.sessions, res.removedIds, temps, (a, s) => server.get(a.id) ?? rowLoad(week, a, s));
+  const server = new Map(
+    (res.rows ?? []).filter((r) => r.weekStart === week.weekStart).map((r) => [r.athleteId, r.load]),
+  );
+  const merged = mergeSaved(
+    week,
+    res.sessions,
+    res.removedIds,
+    temps,
+    (a, s) => server.get(a.id) ?? rowLoad(week, a, s),
+  );
   const stale = (res.touched ?? []).some((t) => week.days.includes(t.date) && !server.has(t.athleteId));
   return stale || !res.rows ? { ...merged, unconfirmed: true } : merged;
 }
@@ -56,13 +108,29 @@ function withServerRows(week: PlanWeek, res: PlanWriteResult, temps: readonly nu
 /** A week whose numbers were only computed in the browser is refetched to confirm them. */
 const needsRefetch = (week: PlanWeek | undefined) => Boolean(week?.unconfirmed);
 
-const blockBodies = (s: Pick<PlanSession, "blocks">) => s.blocks.map(({ templateId, kind, title, running, drills, notes }) => ({ templateId, kind, title, running, drills, notes }));
+const blockBodies = (s: Pick<PlanSession, "blocks">) =>
+  s.blocks.map(({ templateId, kind, title, running, drills, notes }) => ({
+    templateId,
+    kind,
+    title,
+    running,
+    drills,
+    notes,
+  }));
 
 /**
  * Every write the planner makes: optimistic in the grid (numbers from lib/load), then confirmed by the server's
  * answer and a refetch. A refusal rolls back with the server's reason; a 409 refetches and says what happened.
  */
-export function usePlanActions({ swrKey, current, askOverride }: { swrKey: string; current: () => PlanWeek | undefined; askOverride: AskOverride }) {
+export function usePlanActions({
+  swrKey,
+  current,
+  askOverride,
+}: {
+  swrKey: string;
+  current: () => PlanWeek | undefined;
+  askOverride: AskOverride;
+}) {
   const { mutate } = useSWRConfig();
   const [notice, setNoticeState] = useState<Notice | null>(null);
   const [undoStack, setUndoStack] = useState<UndoEntry[]>([]);
@@ -79,7 +147,10 @@ export function usePlanActions({ swrKey, current, askOverride }: { swrKey: strin
       } else if (e instanceof PlanApiError && e.stale) {
         await refetch();
         const s = e.current;
-        say("refused", `${what} was not saved: someone else changed ${s ? `"${s.title}"` : "this session"} a moment ago. The grid now shows the latest plan; try again if it is still needed.`);
+        say(
+          "refused",
+          `${what} was not saved: someone else changed ${s ? `"${s.title}"` : "this session"} a moment ago. The grid now shows the latest plan; try again if it is still needed.`,
+        );
       } else if (e instanceof PlanApiError && e.status === 404) {
         await refetch();
         say("refused", `${what} was not saved: it is no longer in the plan. The grid has been refreshed.`);
@@ -90,7 +161,7 @@ export function usePlanActions({ swrKey, current, askOverride }: { swrKey: strin
     [refetch, say],
   );
 
-  const track = useCallback(async <T,>(fn: () => Promise<T>): Promise<T> => {
+  const track = useCallback(async <T>(fn: () => Promise<T>): Promise<T> => {
     setSaving((n) => n + 1);
     try {
       return await fn();
@@ -101,7 +172,7 @@ export function usePlanActions({ swrKey, current, askOverride }: { swrKey: strin
 
   /** Runs a write; when the server says it goes past a restriction, asks for a reason and sends it again. */
   const withOverride = useCallback(
-    async <T,>(what: string, fn: (override?: Override) => Promise<T>, override?: Override): Promise<T> => {
+    async <T>(what: string, fn: (override?: Override) => Promise<T>, override?: Override): Promise<T> => {
       try {
         return await fn(override);
       } catch (e) {
@@ -139,7 +210,12 @@ export function usePlanActions({ swrKey, current, askOverride }: { swrKey: strin
           });
         const result = await track(() => withOverride(what, save, override));
         if (!result) return;
-        setUndoStack((st) => pushUndo(st, undoForChange(change, (id) => findSession(before, id) ?? undefined, result)));
+        setUndoStack((st) =>
+          pushUndo(
+            st,
+            undoForChange(change, (id) => findSession(before, id) ?? undefined, result),
+          ),
+        );
         say("saved", `Saved: ${what}.`);
       } catch (e) {
         await explain(e, what);
@@ -166,28 +242,57 @@ export function usePlanActions({ swrKey, current, askOverride }: { swrKey: strin
     [current, mutate, swrKey],
   );
 
-  const runOp = useCallback(async (op: UndoOp, versions: Map<number, number>, week: PlanWeek, override?: Override): Promise<PlanWriteResult> => {
-    const v = (id: number) => versions.get(id) ?? findSession(week, id)?.version ?? 0;
-    const o = override ? { override } : {};
-    switch (op.op) {
-      case "remove":
-        return write("DELETE", `${sessionPath(op.sessionId)}?version=${v(op.sessionId)}`);
-      case "move":
-        return write("PATCH", sessionPath(op.sessionId), { version: v(op.sessionId), athleteId: op.athleteId, date: op.date, ...o });
-      case "remove-block":
-        return write("DELETE", `${sessionBlockPath(op.sessionId, op.blockId)}?version=${v(op.sessionId)}`);
-      case "reinstate":
-        return write("PATCH", sessionPath(op.sessionId), { version: v(op.sessionId), status: "published", ...o });
-      case "restore-fields": {
-        const { blocks, ...fields } = op.fields;
-        return write("PATCH", sessionPath(op.sessionId), { version: v(op.sessionId), ...fields, blocks: blockBodies({ blocks }), ...o });
+  const runOp = useCallback(
+    async (
+      op: UndoOp,
+      versions: Map<number, number>,
+      week: PlanWeek,
+      override?: Override,
+    ): Promise<PlanWriteResult> => {
+      const v = (id: number) => versions.get(id) ?? findSession(week, id)?.version ?? 0;
+      const o = override ? { override } : {};
+      switch (op.op) {
+        case "remove":
+          return write("DELETE", `${sessionPath(op.sessionId)}?version=${v(op.sessionId)}`);
+        case "move":
+          return write("PATCH", sessionPath(op.sessionId), {
+            version: v(op.sessionId),
+            athleteId: op.athleteId,
+            date: op.date,
+            ...o,
+          });
+        case "remove-block":
+          return write("DELETE", `${sessionBlockPath(op.sessionId, op.blockId)}?version=${v(op.sessionId)}`);
+        case "reinstate":
+          return write("PATCH", sessionPath(op.sessionId), { version: v(op.sessionId), status: "published", ...o });
+        case "restore-fields": {
+          const { blocks, ...fields } = op.fields;
+          return write("PATCH", sessionPath(op.sessionId), {
+            version: v(op.sessionId),
+            ...fields,
+            blocks: blockBodies({ blocks }),
+            ...o,
+          });
+        }
+        case "recreate": {
+          const s = op.session;
+          return write("POST", teamSessionsPath(week.teamId), {
+            from: "blank",
+            athleteId: s.athleteId,
+            date: s.date,
+            startTime: s.startTime,
+            durationMin: s.durationMin,
+            title: s.title,
+            plannedRpe: s.plannedRpe,
+            notes: s.notes,
+            blocks: blockBodies(s),
+            ...o,
+          });
+        }
       }
-      case "recreate": {
-        const s = op.session;
-        return write("POST", teamSessionsPath(week.teamId), { from: "blank", athleteId: s.athleteId, date: s.date, startTime: s.startTime, durationMin: s.durationMin, title: s.title, plannedRpe: s.plannedRpe, notes: s.notes, blocks: blockBodies(s), ...o });
-      }
-    }
-  }, []);
+    },
+    [],
+  );
 
   const undo = useCallback(async () => {
     const { entry, rest } = popUndo(undoBox.get());
@@ -212,7 +317,11 @@ export function usePlanActions({ swrKey, current, askOverride }: { swrKey: strin
   const saveSession = useCallback(
     async (before: PlanSession, values: SessionEditValues, version: number) => {
       const body = { version, ...values, notes: values.notes?.trim() ? values.notes : null };
-      const res = await track(() => withOverride(`the changes to "${values.title}"`, (o) => write("PATCH", sessionPath(before.id), o ? { ...body, override: o } : body)));
+      const res = await track(() =>
+        withOverride(`the changes to "${values.title}"`, (o) =>
+          write("PATCH", sessionPath(before.id), o ? { ...body, override: o } : body),
+        ),
+      );
       await settle(res);
       setUndoStack((st) => pushUndo(st, undoForEdit(before)));
       say("saved", `Saved "${values.title}".`);
@@ -225,7 +334,12 @@ export function usePlanActions({ swrKey, current, askOverride }: { swrKey: strin
       const res = await track(() => write("DELETE", `${sessionPath(s.id)}?version=${version}`));
       await settle(res);
       setUndoStack((st) => pushUndo(st, undoForDelete(s, res)));
-      say("saved", res.removedIds.includes(s.id) ? `Deleted "${s.title}".` : `Cancelled "${s.title}"; athletes will see it cancelled.`);
+      say(
+        "saved",
+        res.removedIds.includes(s.id)
+          ? `Deleted "${s.title}".`
+          : `Cancelled "${s.title}"; athletes will see it cancelled.`,
+      );
     },
     [say, settle, track],
   );
@@ -235,13 +349,19 @@ export function usePlanActions({ swrKey, current, askOverride }: { swrKey: strin
       const week = current();
       if (!week) return;
       try {
-        const res = await track(() => withOverride("this copy of the week", (o) => write("POST", weekToolPath(week.teamId, tool), { week: week.weekStart, ...(o ? { override: o } : {}) })));
+        const res = await track(() =>
+          withOverride("this copy of the week", (o) =>
+            write("POST", weekToolPath(week.teamId, tool), { week: week.weekStart, ...(o ? { override: o } : {}) }),
+          ),
+        );
         await refetch();
         if (tool === "clear") setUndoStack([]);
         const n = res.sessions.length;
         const text =
           tool === "publish"
-            ? n === 0 ? "Nothing to publish: the week has no drafts." : `Published ${n} session${n === 1 ? "" : "s"}; athletes will get them in their calendars.`
+            ? n === 0
+              ? "Nothing to publish: the week has no drafts."
+              : `Published ${n} session${n === 1 ? "" : "s"}; athletes will get them in their calendars.`
             : tool === "copy-to-next"
               ? `Copied ${n} session${n === 1 ? "" : "s"} to next week as drafts.`
               : `Cleared the week: ${res.removedIds.length} draft${res.removedIds.length === 1 ? "" : "s"} removed, ${n} published session${n === 1 ? "" : "s"} cancelled.`;
@@ -258,7 +378,11 @@ export function usePlanActions({ swrKey, current, askOverride }: { swrKey: strin
       const week = current();
       if (!week) return;
       try {
-        await track(() => (template === null ? requestJson("POST", teamTemplatesPath(week.teamId), values) : requestJson("PUT", templatePath(template.id), { ...values, version: template.version })));
+        await track(() =>
+          template === null
+            ? requestJson("POST", teamTemplatesPath(week.teamId), values)
+            : requestJson("PUT", templatePath(template.id), { ...values, version: template.version }),
+        );
       } catch (e) {
         // Someone else saved the block first: show their version on the shelf; the editor shows why.
         if (e instanceof PlanApiError && e.stale) await refetch();
@@ -281,5 +405,19 @@ export function usePlanActions({ swrKey, current, askOverride }: { swrKey: strin
 
   const clearUndo = useCallback(() => setUndoStack([]), []);
 
-  return { notice, say, saving, undoStack, undo, clearUndo, saveChange, saveSession, deleteSession, runTool, saveTemplate, deleteTemplate, refetch };
+  return {
+    notice,
+    say,
+    saving,
+    undoStack,
+    undo,
+    clearUndo,
+    saveChange,
+    saveSession,
+    deleteSession,
+    runTool,
+    saveTemplate,
+    deleteTemplate,
+    refetch,
+  };
 }

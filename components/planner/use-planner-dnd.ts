@@ -1,6 +1,14 @@
 "use client";
 
-import { KeyboardSensor, PointerSensor, useSensor, useSensors, type DragEndEvent, type DragMoveEvent, type DragStartEvent } from "@dnd-kit/core";
+import {
+  KeyboardSensor,
+  PointerSensor,
+  useSensor,
+  useSensors,
+  type DragEndEvent,
+  type DragMoveEvent,
+  type DragStartEvent,
+} from "@dnd-kit/core";
 import { useCallback, useEffect, useMemo, useState } from "react";
 import { FLAG_DISPLAY } from "@/lib/load/flag-display";
 import { formatNumber } from "@/lib/format/number";
@@ -9,13 +17,28 @@ import { previewChange, type RowPreview } from "@/lib/plan/preview";
 import { changeHits } from "@/lib/plan/restrictions";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
 import type { PlanWeek } from "@/lib/plan/types";
-import { announcements, cellAtPoint, dragId, dropId, gridKeyboardCoordinates, SCREEN_READER_INSTRUCTIONS, type DragData, type GridLayout } from "./dnd";
+import {
+  announcements,
+  cellAtPoint,
+  dragId,
+  dropId,
+  gridKeyboardCoordinates,
+  SCREEN_READER_INSTRUCTIONS,
+  type DragData,
+  type GridLayout,
+} from "./dnd";
 import { describeChange, targetLabel } from "./describe";
 import { groupKey } from "./group-row";
 import { useHoverStore } from "./hover-store";
 import { useBox, type Latest } from "./latest";
 
-type Preview = { week: PlanWeek; key: string; outcome: ReturnType<typeof resolveDrop>; rows: RowPreview[]; hits: RestrictionHit[] };
+type Preview = {
+  week: PlanWeek;
+  key: string;
+  outcome: ReturnType<typeof resolveDrop>;
+  rows: RowPreview[];
+  hits: RestrictionHit[];
+};
 
 type Args = {
   week: Latest<PlanWeek | undefined>;
@@ -48,12 +71,18 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
   const pointed = useBox<DropTarget | null>(null);
   const previewed = useBox<string | null>(null);
 
-  const armCopy = useCallback((sessionId: number | null) => {
-    armed.set(sessionId);
-    setCopyArmedId(sessionId);
-  }, [armed]);
+  const armCopy = useCallback(
+    (sessionId: number | null) => {
+      armed.set(sessionId);
+      setCopyArmedId(sessionId);
+    },
+    [armed],
+  );
 
-  const copies = useCallback((src: DragSource) => alt.get() || (src.type === "session" && armed.get() === src.sessionId), [alt, armed]);
+  const copies = useCallback(
+    (src: DragSource) => alt.get() || (src.type === "session" && armed.get() === src.sessionId),
+    [alt, armed],
+  );
 
   // dnd-kit asks twice per new target (onDragOver and the announcement): compute the preview once.
   const previewFor = useCallback(
@@ -63,7 +92,13 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
       const last = cache.get();
       if (last?.week === w && last.key === key) return last;
       const outcome = resolveDrop({ week: w, source, target, copy });
-      const next = { week: w, key, outcome, rows: outcome?.ok ? previewChange(w, outcome.change) : [], hits: outcome?.ok ? changeHits(w, outcome.change) : [] };
+      const next = {
+        week: w,
+        key,
+        outcome,
+        rows: outcome?.ok ? previewChange(w, outcome.change) : [],
+        hits: outcome?.ok ? changeHits(w, outcome.change) : [],
+      };
       cache.set(next);
       return next;
     },
@@ -75,9 +110,11 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
     if (!w) return { rows: [], days: [] };
     const rows: GridLayout["rows"] = [];
     for (const g of w.groups) {
-      if (g.id !== null && w.scope === "team") rows.push({ key: `group:${g.id}`, target: (date) => ({ type: "group", groupId: g.id!, date }) });
+      if (g.id !== null && w.scope === "team")
+        rows.push({ key: `group:${g.id}`, target: (date) => ({ type: "group", groupId: g.id!, date }) });
       if (collapsed.get().has(groupKey(g))) continue;
-      for (const id of g.athleteIds) rows.push({ key: `athlete:${id}`, target: (date) => ({ type: "cell", athleteId: id, date }) });
+      for (const id of g.athleteIds)
+        rows.push({ key: `athlete:${id}`, target: (date) => ({ type: "cell", athleteId: id, date }) });
     }
     return { rows, days: w.days };
   }, [week, collapsed]);
@@ -92,8 +129,14 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
     return { origin, moves };
   }, [dragging, keyMoves, week]);
 
-  const coordinateGetter = useMemo(() => gridKeyboardCoordinates(layout, keyboardStart, aimed), [layout, keyboardStart, aimed]);
-  const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 5 } }), useSensor(KeyboardSensor, { coordinateGetter }));
+  const coordinateGetter = useMemo(
+    () => gridKeyboardCoordinates(layout, keyboardStart, aimed),
+    [layout, keyboardStart, aimed],
+  );
+  const sensors = useSensors(
+    useSensor(PointerSensor, { activationConstraint: { distance: 5 } }),
+    useSensor(KeyboardSensor, { coordinateGetter }),
+  );
 
   const describeOver = useCallback(
     (source: DragSource, target: DropTarget): string => {
@@ -118,7 +161,13 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
     const w = week.get();
     return { target, label: target && w ? targetLabel(w, target) : null };
   }, [pointed, week]);
-  const accessibility = useMemo(() => ({ announcements: announcements(describeOver, pointedAt), screenReaderInstructions: { draggable: SCREEN_READER_INSTRUCTIONS } }), [describeOver, pointedAt]);
+  const accessibility = useMemo(
+    () => ({
+      announcements: announcements(describeOver, pointedAt),
+      screenReaderInstructions: { draggable: SCREEN_READER_INSTRUCTIONS },
+    }),
+    [describeOver, pointedAt],
+  );
 
   const onDragStart = useCallback(
     (e: DragStartEvent) => {
@@ -155,13 +204,23 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
         return;
       }
       const { outcome, rows, hits } = previewFor(w, data.source, target);
-      setHover({ source: data.source, target, rows: new Map(rows.map((r) => [r.athleteId, r])), refusal: outcome && !outcome.ok ? outcome.reason : null, text: outcome?.ok ? describeChange(w, outcome.change) : "", hits });
+      setHover({
+        source: data.source,
+        target,
+        rows: new Map(rows.map((r) => [r.athleteId, r])),
+        refusal: outcome && !outcome.ok ? outcome.reason : null,
+        text: outcome?.ok ? describeChange(w, outcome.change) : "",
+        hits,
+      });
     },
     [cellNow, copies, pointed, previewFor, previewed, setHover, week],
   );
 
   // Called on every move.
-  const onDragMove = useCallback((e: DragMoveEvent) => previewNow(e.active.data.current as DragData | undefined), [previewNow]);
+  const onDragMove = useCallback(
+    (e: DragMoveEvent) => previewNow(e.active.data.current as DragData | undefined),
+    [previewNow],
+  );
 
   // Alt held while dropping copies instead of moving; Escape leaves the card menu's copy mode.
   useEffect(() => {
@@ -218,5 +277,18 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
   );
 
   const copying = active?.source.type === "session" && (altDown || copyArmedId === active.source.sessionId);
-  return { sensors, accessibility, onDragStart, onDragMove, onDragEnd, onDragCancel, active, hoverStore, altDown, copying, copyArmedId, armCopy };
+  return {
+    sensors,
+    accessibility,
+    onDragStart,
+    onDragMove,
+    onDragEnd,
+    onDragCancel,
+    active,
+    hoverStore,
+    altDown,
+    copying,
+    copyArmedId,
+    armCopy,
+  };
 }

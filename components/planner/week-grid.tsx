@@ -25,7 +25,16 @@ type Props = {
 const NO_RESTRICTIONS: Restriction[] = [];
 
 /** Rows = athletes grouped by training group; columns = the days of the team's week. */
-export const WeekGrid = memo(function WeekGrid({ week, collapsed, onToggleGroup, hoverStore, templateDrag, dragging, copyArmedId, actions }: Props) {
+export const WeekGrid = memo(function WeekGrid({
+  week,
+  collapsed,
+  onToggleGroup,
+  hoverStore,
+  templateDrag,
+  dragging,
+  copyArmedId,
+  actions,
+}: Props) {
   const byId = new Map(week.athletes.map((a) => [a.id, a]));
   // One stable list per athlete, so rows stay memoised while something is dragged.
   const limits = useMemo(() => {
@@ -35,7 +44,11 @@ export const WeekGrid = memo(function WeekGrid({ week, collapsed, onToggleGroup,
   }, [week.restrictions]);
   return (
     <div className="overflow-x-auto rounded-card bg-paper-raised shadow-card ring-1 ring-ink-100">
-      <table data-testid="plan-grid" data-dragging={dragging || undefined} className="group/grid w-full min-w-[52rem] table-fixed border-collapse text-sm">
+      <table
+        data-testid="plan-grid"
+        data-dragging={dragging || undefined}
+        className="group/grid w-full min-w-[52rem] table-fixed border-collapse text-sm"
+      >
         <colgroup>
           <col className="w-52" />
           {week.days.map((d) => (
@@ -51,8 +64,17 @@ export const WeekGrid = memo(function WeekGrid({ week, collapsed, onToggleGroup,
               const h = dayHeading(date);
               const today = date === week.today;
               return (
-                <th key={date} scope="col" data-testid="day-heading" data-day-column={date} className={clsx("border-l border-ink-100 px-2 py-2 text-xs font-medium", today ? "text-clay-700" : "text-ink-500")}>
-                  <span className="block uppercase tracking-wider">{h.weekday}</span>
+                <th
+                  key={date}
+                  scope="col"
+                  data-testid="day-heading"
+                  data-day-column={date}
+                  className={clsx(
+                    "border-l border-ink-100 px-2 py-2 text-xs font-medium",
+                    today ? "text-clay-700" : "text-ink-500",
+                  )}
+                >
+                  <span className="block tracking-wider uppercase">{h.weekday}</span>
                   <span className={clsx("tabular-nums", today ? "font-semibold" : "text-ink-800")}>{h.date}</span>
                   {today ? <span className="ml-1 rounded bg-clay-100 px-1 text-2xs text-clay-700">today</span> : null}
                 </th>
@@ -65,14 +87,33 @@ export const WeekGrid = memo(function WeekGrid({ week, collapsed, onToggleGroup,
           return (
             <tbody key={groupKey(g)} data-testid="group-body">
               {week.scope === "team" ? (
-                <GroupRow group={g} days={week.days} today={week.today} collapsed={folded} onToggle={onToggleGroup} templateDrag={templateDrag} canEdit={week.canEdit} hoverStore={hoverStore} />
+                <GroupRow
+                  group={g}
+                  days={week.days}
+                  today={week.today}
+                  collapsed={folded}
+                  onToggle={onToggleGroup}
+                  templateDrag={templateDrag}
+                  canEdit={week.canEdit}
+                  hoverStore={hoverStore}
+                />
               ) : null}
               {folded
                 ? null
                 : g.athleteIds.map((id) => {
                     const athlete = byId.get(id);
                     return athlete ? (
-                      <AthleteRow key={id} athlete={athlete} restrictions={limits.get(id) ?? NO_RESTRICTIONS} days={week.days} today={week.today} canEdit={week.canEdit} hoverStore={hoverStore} copyArmedId={copyArmedId} actions={actions} />
+                      <AthleteRow
+                        key={id}
+                        athlete={athlete}
+                        restrictions={limits.get(id) ?? NO_RESTRICTIONS}
+                        days={week.days}
+                        today={week.today}
+                        canEdit={week.canEdit}
+                        hoverStore={hoverStore}
+                        copyArmedId={copyArmedId}
+                        actions={actions}
+                      />
                     ) : null;
                   })}
             </tbody>

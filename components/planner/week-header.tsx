@@ -22,8 +22,17 @@ type Props = {
 };
 
 const QUESTION: Record<Tool, (w: PlanWeek) => ConfirmRequest> = {
-  "copy-to-next": () => ({ title: "Copy this week to next week?", body: "Every session that is not cancelled is copied to the same day next week, as a draft.", confirmLabel: "Copy week" }),
-  clear: () => ({ title: "Clear this week?", body: "Drafts are removed. Published sessions are cancelled, and athletes see them cancelled in their calendars. Sessions an athlete has logged stay.", confirmLabel: "Clear week", danger: true }),
+  "copy-to-next": () => ({
+    title: "Copy this week to next week?",
+    body: "Every session that is not cancelled is copied to the same day next week, as a draft.",
+    confirmLabel: "Copy week",
+  }),
+  clear: () => ({
+    title: "Clear this week?",
+    body: "Drafts are removed. Published sessions are cancelled, and athletes see them cancelled in their calendars. Sessions an athlete has logged stay.",
+    confirmLabel: "Clear week",
+    danger: true,
+  }),
   publish: (w) => ({
     title: `Publish ${draftCount(w)} draft session${draftCount(w) === 1 ? "" : "s"}?`,
     body: "Athletes get them in their calendars. Later changes to a published session reach them as updates.",
@@ -48,7 +57,7 @@ export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onToo
     <header className="mb-4 space-y-3">
       <div className="flex flex-col gap-3 xl:flex-row xl:items-end xl:justify-between">
         <div>
-          <p className="text-xs font-medium uppercase tracking-wider text-clay-700" data-testid="iso-week">
+          <p className="text-xs font-medium tracking-wider text-clay-700 uppercase" data-testid="iso-week">
             {iso}
             {week ? <span className="text-ink-400"> · {week.isoYear}</span> : null}
           </p>
@@ -56,14 +65,29 @@ export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onToo
             {weekRangeLabel(weekStart)}
           </h1>
         </div>
-        <nav aria-label="Weeks" className="flex flex-wrap items-center gap-1 self-start whitespace-nowrap rounded-lg bg-paper-raised p-1 ring-1 ring-ink-100 xl:self-auto">
-          <Button variant="ghost" size="sm" onClick={() => onGo(shiftWeek(weekStart, -1))} aria-label="Previous week" data-testid="prev-week">
+        <nav
+          aria-label="Weeks"
+          className="flex flex-wrap items-center gap-1 self-start rounded-lg bg-paper-raised p-1 whitespace-nowrap ring-1 ring-ink-100 xl:self-auto"
+        >
+          <Button
+            variant="ghost"
+            size="sm"
+            onClick={() => onGo(shiftWeek(weekStart, -1))}
+            aria-label="Previous week"
+            data-testid="prev-week"
+          >
             ‹ Prev
           </Button>
           <Button variant="ghost" size="sm" onClick={onToday} data-testid="this-week">
             This week
           </Button>
-          <Button variant="ghost" size="sm" onClick={() => onGo(shiftWeek(weekStart, 1))} aria-label="Next week" data-testid="next-week">
+          <Button
+            variant="ghost"
+            size="sm"
+            onClick={() => onGo(shiftWeek(weekStart, 1))}
+            aria-label="Next week"
+            data-testid="next-week"
+          >
             Next ›
           </Button>
           <form
@@ -73,7 +97,14 @@ export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onToo
               if (picked) onGo(picked);
             }}
           >
-            <Input type="date" aria-label="Go to the week of a date" value={picked} onChange={(e) => setPicked(e.target.value)} className="h-8 w-36 py-1" data-testid="pick-date" />
+            <Input
+              type="date"
+              aria-label="Go to the week of a date"
+              value={picked}
+              onChange={(e) => setPicked(e.target.value)}
+              className="h-8 w-36 py-1"
+              data-testid="pick-date"
+            />
             <Button type="submit" variant="ghost" size="sm" disabled={!picked}>
               Go
             </Button>
@@ -83,17 +114,42 @@ export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onToo
       <div className="flex flex-wrap items-center justify-between gap-2 border-y border-ink-100 py-2">
         {week?.canEdit ? (
           <div className="flex flex-wrap items-center gap-1.5" role="toolbar" aria-label="Week tools">
-            <Button variant="secondary" size="sm" onClick={onUndo} disabled={!undo || busy} data-testid="undo" title="Ctrl+Z">
+            <Button
+              variant="secondary"
+              size="sm"
+              onClick={onUndo}
+              disabled={!undo || busy}
+              data-testid="undo"
+              title="Ctrl+Z"
+            >
               ↶ {undo ? `Undo ${undo.label}` : "Undo"}
             </Button>
             <span aria-hidden className="mx-1 h-5 w-px bg-ink-100" />
-            <Button variant="ghost" size="sm" disabled={busy} onClick={() => void ask("copy-to-next")} data-testid="copy-week">
+            <Button
+              variant="ghost"
+              size="sm"
+              disabled={busy}
+              onClick={() => void ask("copy-to-next")}
+              data-testid="copy-week"
+            >
               Copy to next week
             </Button>
-            <Button variant="ghost" size="sm" disabled={busy} onClick={() => void ask("clear")} data-testid="clear-week">
+            <Button
+              variant="ghost"
+              size="sm"
+              disabled={busy}
+              onClick={() => void ask("clear")}
+              data-testid="clear-week"
+            >
               Clear week
             </Button>
-            <Button variant="accent" size="sm" disabled={busy || drafts === 0} onClick={() => void ask("publish")} data-testid="publish-week">
+            <Button
+              variant="accent"
+              size="sm"
+              disabled={busy || drafts === 0}
+              onClick={() => void ask("publish")}
+              data-testid="publish-week"
+            >
               Publish week{drafts > 0 ? ` · ${drafts} draft${drafts === 1 ? "" : "s"}` : ""}
             </Button>
           </div>
@@ -105,7 +161,7 @@ export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onToo
             <span aria-hidden className="h-1.5 w-1.5 rounded-full bg-lane-600" /> published
           </span>
           <span className="inline-flex items-center gap-1">
-            <span aria-hidden className="h-1.5 w-1.5 rounded-full ring-1 ring-inset ring-ink-400" /> draft
+            <span aria-hidden className="h-1.5 w-1.5 rounded-full ring-1 ring-ink-400 ring-inset" /> draft
           </span>
           {week ? <span>Days in {week.timeZone.replace(/_/g, " ")} time</span> : null}
         </p>

@@ -7,7 +7,10 @@ import { RestrictionsCard } from "./restrictions-card";
 
 /** The athlete page's restrictions card, first drawn on the server with what the GET handler would answer. */
 export async function AthleteRestrictions({ viewer, athleteId }: { viewer: Viewer; athleteId: number }) {
-  const [restrictions, overrides] = await Promise.all([listAthleteRestrictions({ teamId: viewer.teamId, athleteId }), listOverrides({ teamId: viewer.teamId, athleteId })]);
+  const [restrictions, overrides] = await Promise.all([
+    listAthleteRestrictions({ teamId: viewer.teamId, athleteId }),
+    listOverrides({ teamId: viewer.teamId, athleteId }),
+  ]);
   return (
     <RestrictionsCard
       athleteId={athleteId}

@@ -5,7 +5,15 @@ import { describeRestriction } from "@/lib/restrictions/rules";
 import { RestrictionCaution } from "./restriction-caution";
 
 /** The athlete's own view: what their medical staff limit now or soon. Nothing at all when there is none. */
-export async function MyRestrictions({ teamId, athleteId, today }: { teamId: number; athleteId: number; today: string }) {
+export async function MyRestrictions({
+  teamId,
+  athleteId,
+  today,
+}: {
+  teamId: number;
+  athleteId: number;
+  today: string;
+}) {
   const restrictions = await listCurrentRestrictions({ teamId, athleteId, today });
   if (restrictions.length === 0) return null;
   return (
@@ -15,7 +23,7 @@ export async function MyRestrictions({ teamId, athleteId, today }: { teamId: num
         {restrictions.map((r) => (
           <li key={r.id} className="py-2" data-testid="my-restriction-item">
             <p className="font-medium text-ink-900">{describeRestriction(r)}</p>
-            <p className="mt-0.5 whitespace-pre-line text-sm text-ink-700">{r.note}</p>
+            <p className="mt-0.5 text-sm whitespace-pre-line text-ink-700">{r.note}</p>
             <p className="mt-0.5 text-xs text-ink-500">Set by {r.setByName}</p>
           </li>
         ))}

@@ -8,16 +8,35 @@ import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { ApiError, sendJson } from "@/components/notices/fetch-json";
 import { BLOCK_KIND_LABEL } from "@/lib/format/block-summary";
 import { RESTRICTION_RULES, RESTRICTION_RULE_LABEL, type Restriction } from "@/lib/restrictions/rules";
-import { RESTRICTABLE_KINDS, createRestrictionSchema, type CreateRestrictionInput, type RestrictionFormValues } from "@/lib/validations/restrictions";
+import {
+  RESTRICTABLE_KINDS,
+  createRestrictionSchema,
+  type CreateRestrictionInput,
+  type RestrictionFormValues,
+} from "@/lib/validations/restrictions";
 
 const FIELDS = ["rule", "blockKinds", "maxPct", "maxContacts", "startsOn", "endsOn", "note"] as const;
 const emptyToNull = (v: unknown) => (v === "" || v === undefined ? null : v);
 
 /** The physio's form: what to limit, from when to when, and a note for the coaches. Same schema as the handler. */
-export function RestrictionForm({ athleteId, today, url, onSaved }: { athleteId: number; today: string; url: string; onSaved: (r: Restriction) => Promise<void> }) {
+export function RestrictionForm({
+  athleteId,
+  today,
+  url,
+  onSaved,
+}: {
+  athleteId: number;
+  today: string;
+  url: string;
+  onSaved: (r: Restriction) => Promise<void>;
+}) {
   const [message, setMessage] = useState<string | null>(null);
   const defaults: RestrictionFormValues = { rule: "no_kind", blockKinds: [], startsOn: today, endsOn: null, note: "" };
-  const { register, handleSubmit, setError, reset, control, formState } = useForm<RestrictionFormValues, unknown, CreateRestrictionInput>({
+  const { register, handleSubmit, setError, reset, control, formState } = useForm<
+    RestrictionFormValues,
+    unknown,
+    CreateRestrictionInput
+  >({
     resolver: zodResolver(createRestrictionSchema),
     defaultValues: defaults,
   });
@@ -64,7 +83,13 @@ export function RestrictionForm({ athleteId, today, url, onSaved }: { athleteId:
           <div className="flex flex-wrap gap-x-4 gap-y-2">
             {RESTRICTABLE_KINDS.map((k) => (
               <label key={k} className="inline-flex items-center gap-2 text-sm text-ink-800">
-                <input type="checkbox" value={k} className="h-4 w-4 rounded border-ink-300 text-lane-600" data-testid={`kind-${k}`} {...register("blockKinds")} />
+                <input
+                  type="checkbox"
+                  value={k}
+                  className="h-4 w-4 rounded border-ink-300 text-lane-600"
+                  data-testid={`kind-${k}`}
+                  {...register("blockKinds")}
+                />
                 {BLOCK_KIND_LABEL[k]}
               </label>
             ))}
@@ -76,12 +101,40 @@ export function RestrictionForm({ athleteId, today, url, onSaved }: { athleteId:
           ) : null}
         </fieldset>
       ) : rule === "max_intensity" ? (
-        <Field label="Running at most (% of vmax)" htmlFor={id("maxPct")} error={errors.maxPct?.message} hint="50 to 100">
-          <Input id={id("maxPct")} type="number" inputMode="decimal" min={50} max={100} step="any" aria-invalid={Boolean(errors.maxPct)} {...register("maxPct", { valueAsNumber: true })} />
+        <Field
+          label="Running at most (% of vmax)"
+          htmlFor={id("maxPct")}
+          error={errors.maxPct?.message}
+          hint="50 to 100"
+        >
+          <Input
+            id={id("maxPct")}
+            type="number"
+            inputMode="decimal"
+            min={50}
+            max={100}
+            step="any"
+            aria-invalid={Boolean(errors.maxPct)}
+            {...register("maxPct", { valueAsNumber: true })}
+          />
         </Field>
       ) : (
-        <Field label="Ground contacts per session, at most" htmlFor={id("maxContacts")} error={errors.maxContacts?.message} hint="0 to 500">
-          <Input id={id("maxContacts")} type="number" inputMode="numeric" min={0} max={500} step={1} aria-invalid={Boolean(errors.maxContacts)} {...register("maxContacts", { valueAsNumber: true })} />
+        <Field
+          label="Ground contacts per session, at most"
+          htmlFor={id("maxContacts")}
+          error={errors.maxContacts?.message}
+          hint="0 to 500"
+        >
+          <Input
+            id={id("maxContacts")}
+            type="number"
+            inputMode="numeric"
+            min={0}
+            max={500}
+            step={1}
+            aria-invalid={Boolean(errors.maxContacts)}
+            {...register("maxContacts", { valueAsNumber: true })}
+          />
         </Field>
       )}
 
@@ -89,13 +142,34 @@ export function RestrictionForm({ athleteId, today, url, onSaved }: { athleteId:
         <Field label="From" htmlFor={id("startsOn")} error={errors.startsOn?.message}>
           <Input id={id("startsOn")} type="date" aria-invalid={Boolean(errors.startsOn)} {...register("startsOn")} />
         </Field>
-        <Field label="Until (last day)" htmlFor={id("endsOn")} error={errors.endsOn?.message} hint="Leave empty: until you lift it">
-          <Input id={id("endsOn")} type="date" aria-invalid={Boolean(errors.endsOn)} {...register("endsOn", { setValueAs: emptyToNull })} />
+        <Field
+          label="Until (last day)"
+          htmlFor={id("endsOn")}
+          error={errors.endsOn?.message}
+          hint="Leave empty: until you lift it"
+        >
+          <Input
+            id={id("endsOn")}
+            type="date"
+            aria-invalid={Boolean(errors.endsOn)}
+            {...register("endsOn", { setValueAs: emptyToNull })}
+          />
         </Field>
       </div>
 
-      <Field label="Note for the coaches" htmlFor={id("note")} error={errors.note?.message} hint="Why, and what is still fine">
-        <Textarea id={id("note")} rows={3} aria-invalid={Boolean(errors.note)} placeholder="e.g. Calf tightness. Tempo and acceleration to 20 m are fine." {...register("note")} />
+      <Field
+        label="Note for the coaches"
+        htmlFor={id("note")}
+        error={errors.note?.message}
+        hint="Why, and what is still fine"
+      >
+        <Textarea
+          id={id("note")}
+          rows={3}
+          aria-invalid={Boolean(errors.note)}
+          placeholder="e.g. Calf tightness. Tempo and acceleration to 20 m are fine."
+          {...register("note")}
+        />
       </Field>
 
       <div className="flex flex-wrap items-center gap-3">

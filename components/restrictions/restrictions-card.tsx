@@ -18,11 +18,23 @@ export type AthleteRestrictions = { restrictions: Restriction[]; overrides: Over
  * The athlete page's restrictions: what applies now or soon, what ended, and the coaches' overrides.
  * The medical staff (canEdit) also set new ones and lift them; everyone else reads.
  */
-export function RestrictionsCard({ athleteId, today, canEdit, initial }: { athleteId: number; today: string; canEdit: boolean; initial: AthleteRestrictions }) {
+export function RestrictionsCard({
+  athleteId,
+  today,
+  canEdit,
+  initial,
+}: {
+  athleteId: number;
+  today: string;
+  canEdit: boolean;
+  initial: AthleteRestrictions;
+}) {
   const url = restrictionKeys.athlete(athleteId);
   const { data = initial, error, mutate } = useSWR<AthleteRestrictions>(url, fetchJson, { fallbackData: initial });
   // Soonest first for what still applies; the history stays newest first, as the server sends it.
-  const current = data.restrictions.filter((r) => isCurrent(r, today)).sort((a, b) => a.startsOn.localeCompare(b.startsOn) || a.id - b.id);
+  const current = data.restrictions
+    .filter((r) => isCurrent(r, today))
+    .sort((a, b) => a.startsOn.localeCompare(b.startsOn) || a.id - b.id);
   const past = data.restrictions.filter((r) => !isCurrent(r, today));
 
   const [failure, setFailure] = useState<string | null>(null);
@@ -40,7 +52,9 @@ export function RestrictionsCard({ athleteId, today, canEdit, initial }: { athle
   return (
     <Card className="p-4 sm:p-5" data-testid="restrictions-card">
       <h2 className="font-semibold text-ink-950">Restrictions</h2>
-      <p className="mt-1 text-sm text-ink-500">Limits the medical staff put on this athlete&apos;s training. The week plan warns before a session breaks one.</p>
+      <p className="mt-1 text-sm text-ink-500">
+        Limits the medical staff put on this athlete&apos;s training. The week plan warns before a session breaks one.
+      </p>
       {error || failure ? (
         <p role="alert" className="mt-3 text-sm text-flag-spike">
           {failure ?? (error as Error).message}

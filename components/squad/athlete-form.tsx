@@ -11,7 +11,18 @@ import { athleteSchema, type AthleteFormValues, type AthleteInput } from "@/lib/
 
 type Props = { athleteId: number | null; initial: AthleteFormValues; groups: { id: number; name: string }[] };
 
-const FIELDS = ["name", "groupId", "sex", "birthDate", "bodyMassKg", "vmaxMs", "vmaxTestedOn", "tauS", "stepLengthM", "plyoLevel"] as const;
+const FIELDS = [
+  "name",
+  "groupId",
+  "sex",
+  "birthDate",
+  "bodyMassKg",
+  "vmaxMs",
+  "vmaxTestedOn",
+  "tauS",
+  "stepLengthM",
+  "plyoLevel",
+] as const;
 
 export function AthleteForm({ athleteId, initial, groups }: Props) {
   const router = useRouter();
@@ -28,7 +39,8 @@ export function AthleteForm({ athleteId, initial, groups }: Props) {
     const result = await saveAthleteAction(athleteId, values);
     if (!result.ok) {
       for (const [field, messages] of Object.entries(result.fields ?? {})) {
-        if ((FIELDS as readonly string[]).includes(field)) setError(field as (typeof FIELDS)[number], { message: messages[0] });
+        if ((FIELDS as readonly string[]).includes(field))
+          setError(field as (typeof FIELDS)[number], { message: messages[0] });
       }
       setMessage({ tone: "error", text: result.message });
       return;
@@ -53,13 +65,23 @@ export function AthleteForm({ athleteId, initial, groups }: Props) {
           ))}
         </Select>
       </Field>
-      <Field label="Max velocity (m/s)" htmlFor="a-vmax" error={err("vmaxMs")} hint="Best flying 10–30 m split, in metres per second.">
+      <Field
+        label="Max velocity (m/s)"
+        htmlFor="a-vmax"
+        error={err("vmaxMs")}
+        hint="Best flying 10–30 m split, in metres per second."
+      >
         <Input id="a-vmax" inputMode="decimal" aria-invalid={!!errors.vmaxMs} {...register("vmaxMs")} />
       </Field>
       <Field label="Tested on" htmlFor="a-vmax-date" error={err("vmaxTestedOn")}>
         <Input id="a-vmax-date" type="date" {...register("vmaxTestedOn")} />
       </Field>
-      <Field label="Acceleration constant τ (s)" htmlFor="a-tau" error={err("tauS")} hint="From timing-gate splits; about 1.0–1.4 s in trained sprinters.">
+      <Field
+        label="Acceleration constant τ (s)"
+        htmlFor="a-tau"
+        error={err("tauS")}
+        hint="From timing-gate splits; about 1.0–1.4 s in trained sprinters."
+      >
         <Input id="a-tau" inputMode="decimal" aria-invalid={!!errors.tauS} {...register("tauS")} />
       </Field>
       <Field label="Step length at top speed (m)" htmlFor="a-step" error={err("stepLengthM")}>
@@ -90,7 +112,11 @@ export function AthleteForm({ athleteId, initial, groups }: Props) {
           {isSubmitting ? "Saving…" : athleteId === null ? "Add athlete" : "Save profile"}
         </Button>
         {message ? (
-          <p role={message.tone === "error" ? "alert" : "status"} data-testid="athlete-form-message" className={message.tone === "error" ? "text-sm text-flag-spike" : "text-sm text-lane-700"}>
+          <p
+            role={message.tone === "error" ? "alert" : "status"}
+            data-testid="athlete-form-message"
+            className={message.tone === "error" ? "text-sm text-flag-spike" : "text-sm text-lane-700"}
+          >
             {message.text}
           </p>
         ) : null}

@@ -14,6 +14,24 @@ const TONES = {
 
 export type BadgeTone = keyof typeof TONES;
 
-export function Badge({ tone = "neutral", children, className }: { tone?: BadgeTone; children: ReactNode; className?: string }) {
-  return <span className={clsx("inline-flex items-center gap-1 rounded-full px-2 py-0.5 text-xs font-medium", TONES[tone], className)}>{children}</span>;
+export function Badge({
+  tone = "neutral",
+  children,
+  className,
+}: {
+  tone?: BadgeTone;
+  children: ReactNode;
+  className?: string;
+}) {
+  return (
+    <span
+      className={clsx(
+        "inline-flex items-center gap-1 rounded-full px-2 py-0.5 text-xs font-medium",
+        TONES[tone],
+        className,
+      )}
+    >
+      {children}
+    </span>
+  );
 }

@@ -16,7 +16,11 @@ export type ButtonProps = ButtonHTMLAttributes<HTMLButtonElement> & {
   size?: keyof typeof SIZES;
 };
 
-export function buttonClass({ variant = "primary", size = "md", className }: { variant?: keyof typeof VARIANTS; size?: keyof typeof SIZES; className?: string } = {}) {
+export function buttonClass({
+  variant = "primary",
+  size = "md",
+  className,
+}: { variant?: keyof typeof VARIANTS; size?: keyof typeof SIZES; className?: string } = {}) {
   return clsx(
     "inline-flex items-center justify-center gap-2 rounded-lg font-medium transition-colors disabled:cursor-not-allowed",
     VARIANTS[variant],

@@ -22,7 +22,15 @@ export async function requireViewer(): Promise<Viewer> {
 }
 
 /** Every handler, action and page that touches team data calls this (or requireAthlete). */
-export async function requireMember({ teamId, can, scope }: { teamId: number; can: Action; scope?: Scope }): Promise<Viewer> {
+export async function requireMember({
+  teamId,
+  can,
+  scope,
+}: {
+  teamId: number;
+  can: Action;
+  scope?: Scope;
+}): Promise<Viewer> {
   return authorizeTeam({ userId: await sessionUserId(), teamId, can, scope });
 }
 

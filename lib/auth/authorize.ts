@@ -50,19 +50,38 @@ export async function loadViewer({ userId, teamId }: { userId: number; teamId?: 
  * nothing; members without the permission get 403. `scope: "team"` (the default) demands squad-wide access;
  * pass "own" where the caller filters the answer down to the viewer's own athlete.
  */
-export async function authorizeTeam({ userId, teamId, can, scope = "team" }: { userId: number | null; teamId: number; can: Action; scope?: Scope }): Promise<Viewer> {
+export async function authorizeTeam({
+  userId,
+  teamId,
+  can,
+  scope = "team",
+}: {
+  userId: number | null;
+  teamId: number;
+  can: Action;
+  scope?: Scope;
+}): Promise<Viewer> {
   if (!userId) throw new AppError("unauthenticated", "Sign in first");
   const viewer = await loadViewer({ userId, teamId });
   if (!viewer) throw new AppError("not_found", "Not found");
   const granted = scopeOf(viewer.role, can);
-  if (!granted || (scope === "team" && granted !== "team")) throw new AppError("forbidden", "Your role does not allow this");
+  if (!granted || (scope === "team" && granted !== "team"))
+    throw new AppError("forbidden", "Your role does not allow this");
   return viewer;
 }
 
 export type AthleteRef = { id: number; teamId: number; userId: number | null; name: string };
 
 /** Authorizes an action on one athlete: "team" scope reaches any athlete of the team, "own" only the linked one. */
-export async function authorizeAthlete({ userId, athleteId, can }: { userId: number | null; athleteId: number; can: Action }): Promise<Viewer & { athlete: AthleteRef }> {
+export async function authorizeAthlete({
+  userId,
+  athleteId,
+  can,
+}: {
+  userId: number | null;
+  athleteId: number;
+  can: Action;
+}): Promise<Viewer & { athlete: AthleteRef }> {
   if (!userId) throw new AppError("unauthenticated", "Sign in first");
   const { Athlete } = await db();
   const athlete = await Athlete.findByPk(athleteId, { attributes: ["id", "teamId", "userId", "name"] });

@@ -7,6 +7,10 @@
 export function clientAddress(headers: Record<string, unknown> | undefined): string {
   const raw = headers?.["x-forwarded-for"];
   const value = Array.isArray(raw) ? raw.join(",") : typeof raw === "string" ? raw : "";
-  const last = value.split(",").map((s) => s.trim()).filter(Boolean).at(-1);
+  const last = value
+    .split(",")
+    .map((s) => s.trim())
+    .filter(Boolean)
+    .at(-1);
   return last ? last.slice(0, 64) : "unknown";
 }

@@ -7,7 +7,10 @@
  * with "//" after dot segments are resolved (`/.//evil.test`) is refused too. Isomorphic: the sign-in page,
  * the sign-in form and next-auth's redirect callback all use it.
  */
-export function safeCallbackPath(raw: unknown, { origin, fallback = "/home" }: { origin: string; fallback?: string }): string {
+export function safeCallbackPath(
+  raw: unknown,
+  { origin, fallback = "/home" }: { origin: string; fallback?: string },
+): string {
   if (typeof raw !== "string" || raw.length === 0 || raw.length > 2048) return fallback;
   // Control characters, spaces at the ends and backslashes have no place in a link we made ourselves.
   if (/[\u0000-\u001f\u007f\\]/.test(raw) || raw.trim() !== raw) return fallback;

@@ -1,4 +1,11 @@
-import { addSessionEvent, assertTimeZone, calendarText, defaultSessionUrl, escapeText, newCalendar } from "./session-event";
+import {
+  addSessionEvent,
+  assertTimeZone,
+  calendarText,
+  defaultSessionUrl,
+  escapeText,
+  newCalendar,
+} from "./session-event";
 import type { CalendarPerson, CalendarSession, CalendarTeam, SessionUrlFn } from "./types";
 
 /** Content-Type for serving a feed or attaching an .ics file. */

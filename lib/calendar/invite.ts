@@ -1,5 +1,13 @@
 import { ICalAttendeeRole, ICalAttendeeStatus, ICalCalendarMethod } from "ical-generator";
-import { addSessionEvent, assertTimeZone, calendarText, defaultSessionUrl, escapeText, newCalendar, paramSafe } from "./session-event";
+import {
+  addSessionEvent,
+  assertTimeZone,
+  calendarText,
+  defaultSessionUrl,
+  escapeText,
+  newCalendar,
+  paramSafe,
+} from "./session-event";
 import type { CalendarPerson, CalendarSession, CalendarTeam, SessionUrlFn } from "./types";
 
 export type InviteMethod = "REQUEST" | "CANCEL";
@@ -31,8 +39,7 @@ export function buildInvite(input: InviteInput): string {
 
   for (const session of input.sessions) {
     // A CANCEL carries STATUS:CANCELLED on every event (RFC 5546 §3.2.5), whatever the stored status says.
-    const asSent: CalendarSession =
-      input.method === "CANCEL" ? { ...session, status: "cancelled" } : session;
+    const asSent: CalendarSession = input.method === "CANCEL" ? { ...session, status: "cancelled" } : session;
     const event = addSessionEvent(cal, asSent, { team: input.team, sessionUrl, stamp });
     event.organizer({ name: paramSafe(input.organizer.name), email: input.organizer.email });
     event.createAttendee({

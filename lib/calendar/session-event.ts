@@ -33,12 +33,17 @@ export function plainText(value: string): string {
 
 /** An escaped TEXT value for the properties ical-generator writes as given (NAME, X-WR-CALNAME, X-WR-CALDESC). */
 export function escapeText(value: string): string {
-  return plainText(value).replace(/[\\;,]/g, (ch) => `\\${ch}`).replace(/\n/g, "\\n");
+  return plainText(value)
+    .replace(/[\\;,]/g, (ch) => `\\${ch}`)
+    .replace(/\n/g, "\\n");
 }
 
 /** A parameter value (CN) may not hold DQUOTE or control characters (RFC 5545 §3.1 param-value). */
 export function paramSafe(value: string): string {
-  return value.replace(/[\u0000-\u001f\u007f-\u009f"\\]+/g, " ").replace(/\s{2,}/g, " ").trim();
+  return value
+    .replace(/[\u0000-\u001f\u007f-\u009f"\\]+/g, " ")
+    .replace(/\s{2,}/g, " ")
+    .trim();
 }
 
 /** A calendar whose VTIMEZONE blocks come from @touch4it/ical-timezones for every zone its events use. */

@@ -16,8 +16,15 @@ export class DatabaseBusyError extends Error {
 /** Our own queue timeout, or SQLITE_BUSY after busy_timeout (Sequelize reports that as a TimeoutError). */
 export function isDatabaseBusy(err: unknown): boolean {
   // By name too: Next bundles this file into more than one chunk, and each copy has its own class.
-  if (err instanceof DatabaseBusyError || err instanceof TimeoutError || (err as Error | null)?.name === "DatabaseBusyError") return true;
-  const code = (err as { parent?: { code?: unknown }; code?: unknown } | null)?.parent?.code ?? (err as { code?: unknown } | null)?.code;
+  if (
+    err instanceof DatabaseBusyError ||
+    err instanceof TimeoutError ||
+    (err as Error | null)?.name === "DatabaseBusyError"
+  )
+    return true;
+  const code =
+    (err as { parent?: { code?: unknown }; code?: unknown } | null)?.parent?.code ??
+    (err as { code?: unknown } | null)?.code;
   return code === "SQLITE_BUSY" || code === "SQLITE_LOCKED";
 }
 

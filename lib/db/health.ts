@@ -43,7 +43,13 @@ async function canWrite(storage: string): Promise<boolean> {
  * Whether the database answers reads and could take a write now. Never waits behind this process's writers:
  * while one of them holds its turn the answer comes from whether it is stuck at BEGIN, or has held it long.
  */
-export async function databaseState({ sequelize, storage }: { sequelize: Sequelize; storage: string }): Promise<DatabaseState> {
+export async function databaseState({
+  sequelize,
+  storage,
+}: {
+  sequelize: Sequelize;
+  storage: string;
+}): Promise<DatabaseState> {
   try {
     await sequelize.query("SELECT 1", { type: QueryTypes.SELECT });
   } catch {
@@ -67,6 +73,8 @@ export async function databaseState({ sequelize, storage }: { sequelize: Sequeli
     if (waited < PROBE_WAIT_MS) await new Promise((r) => setTimeout(r, PROBE_WAIT_MS - waited));
     if (queue.beginSince !== null && Date.now() - queue.beginSince >= PROBE_WAIT_MS) return "busy";
   }
-  const stuck = (queue.heldSince !== null && now - queue.heldSince > STUCK_MS) || (queue.lastBusyAt !== null && now - queue.lastBusyAt < STUCK_MS);
+  const stuck =
+    (queue.heldSince !== null && now - queue.heldSince > STUCK_MS) ||
+    (queue.lastBusyAt !== null && now - queue.lastBusyAt < STUCK_MS);
   return stuck ? "busy" : "ok";
 }

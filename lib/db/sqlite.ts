@@ -33,7 +33,14 @@ export function writeQueue(storage: string): WriteQueue {
   return q;
 }
 
-const WRITE_TYPES = new Set<string>([QueryTypes.INSERT, QueryTypes.UPDATE, QueryTypes.BULKUPDATE, QueryTypes.BULKDELETE, QueryTypes.DELETE, QueryTypes.UPSERT]);
+const WRITE_TYPES = new Set<string>([
+  QueryTypes.INSERT,
+  QueryTypes.UPDATE,
+  QueryTypes.BULKUPDATE,
+  QueryTypes.BULKDELETE,
+  QueryTypes.DELETE,
+  QueryTypes.UPSERT,
+]);
 const READ_SQL = /^\s*(SELECT|PRAGMA|EXPLAIN)\b/i;
 
 type QueryOptions = { type?: string; transaction?: Transaction | null } & Record<string, unknown>;
@@ -45,7 +52,7 @@ function isWrite(sql: unknown, options: QueryOptions | undefined): boolean {
   const type = options?.type ?? QueryTypes.RAW;
   if (WRITE_TYPES.has(type)) return true;
   if (type !== QueryTypes.RAW) return false;
-  const text = typeof sql === "string" ? sql : (sql as { query?: string } | null)?.query ?? "";
+  const text = typeof sql === "string" ? sql : ((sql as { query?: string } | null)?.query ?? "");
   return !READ_SQL.test(text);
 }
 
@@ -82,7 +89,10 @@ export function queueWrites(sequelize: Sequelize, queue: WriteQueue): void {
   Object.assign(sequelize, { transaction, query: queued });
   // A BEGIN that gave up on the lock makes Sequelize "destroy" the connection through a pool the SQLite
   // dialect never uses, which leaves it open; releasing closes it (the shared :memory: one is kept).
-  const connections = sequelize.connectionManager as unknown as { destroyConnection: (c: unknown) => Promise<void>; releaseConnection: (c: unknown) => void };
+  const connections = sequelize.connectionManager as unknown as {
+    destroyConnection: (c: unknown) => Promise<void>;
+    releaseConnection: (c: unknown) => void;
+  };
   connections.destroyConnection = async (c) => connections.releaseConnection(c);
 }
 

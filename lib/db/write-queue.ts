@@ -60,7 +60,10 @@ export class WriteQueue {
       return Promise.resolve();
     }
     return new Promise((resolve, reject) => {
-      const timer = setTimeout(() => leave(new DatabaseBusyError("Timed out waiting for the database write lock")), this.maxWaitMs);
+      const timer = setTimeout(
+        () => leave(new DatabaseBusyError("Timed out waiting for the database write lock")),
+        this.maxWaitMs,
+      );
       const leave = (err: Error) => {
         clearTimeout(timer);
         const i = this.waiters.indexOf(waiter);
@@ -91,6 +94,7 @@ export class WriteQueue {
 
   private giveUpAll() {
     this.lastBusyAt = Date.now();
-    for (const w of [...this.waiters]) w.fail(new DatabaseBusyError("The database stayed locked by another connection"));
+    for (const w of [...this.waiters])
+      w.fail(new DatabaseBusyError("The database stayed locked by another connection"));
   }
 }

@@ -106,7 +106,10 @@ export function blockDescription(block: BlockInput): string[] {
     for (const drill of drills) lines.push(drillLine(drill));
   }
   if (lines.length === 0) lines.push(heading);
-  const notes = (block.notes ?? "").split(/\r?\n/).map((n) => n.trim()).filter(Boolean);
+  const notes = (block.notes ?? "")
+    .split(/\r?\n/)
+    .map((n) => n.trim())
+    .filter(Boolean);
   notes.forEach((note, i) => lines.push(i === 0 ? `Note: ${note}` : note));
   return lines;
 }

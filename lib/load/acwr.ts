@@ -204,12 +204,20 @@ export interface AcwrSeries {
 }
 
 /** Fewer than minHistoryDays of history behind day i; firstDataIndex null = no data on record. */
-export function isProvisional(i: number, firstDataIndex: number | null, minHistoryDays = ACWR_MIN_HISTORY_DAYS): boolean {
+export function isProvisional(
+  i: number,
+  firstDataIndex: number | null,
+  minHistoryDays = ACWR_MIN_HISTORY_DAYS,
+): boolean {
   return firstDataIndex === null || i - firstDataIndex + 1 < minHistoryDays;
 }
 
 /** Fills out[i] with 1 where day i's ratio is provisional. */
-export function markProvisional(out: Uint8Array, firstDataIndex: number | null, minHistoryDays = ACWR_MIN_HISTORY_DAYS): void {
+export function markProvisional(
+  out: Uint8Array,
+  firstDataIndex: number | null,
+  minHistoryDays = ACWR_MIN_HISTORY_DAYS,
+): void {
   for (let i = 0; i < out.length; i++) out[i] = isProvisional(i, firstDataIndex, minHistoryDays) ? 1 : 0;
 }
 

@@ -2,7 +2,15 @@ import { acwrFromFirstDay, markProvisional, type AcwrColumns } from "./acwr";
 import { resolveProfile, type ResolvedProfile } from "./accumulate";
 import { dateFromDayIndex, dayIndex, startOfWeek } from "./dates";
 import { computeFlags, type Flag } from "./flags";
-import { alignLogs, buildDailyColumns, effectiveSessions, firstDayOnRecord, sessionDayNumbers, type AlignedLogs, type DailyColumns } from "./series";
+import {
+  alignLogs,
+  buildDailyColumns,
+  effectiveSessions,
+  firstDayOnRecord,
+  sessionDayNumbers,
+  type AlignedLogs,
+  type DailyColumns,
+} from "./series";
 import {
   METRICS,
   type AthleteProfile,
@@ -70,7 +78,12 @@ export interface ColumnsRequest {
  */
 export function computeAthleteColumns(req: ColumnsRequest, ws?: EngineWorkspace): AthleteColumns {
   const sessionDays = req.packed ? req.packed.day : sessionDayNumbers(req.sessions);
-  const first = firstDayOnRecord({ sessions: req.sessions, sessionDays, logFor: req.logFor, packed: req.packed }, req.view, req.todayDay, req.toDay);
+  const first = firstDayOnRecord(
+    { sessions: req.sessions, sessionDays, logFor: req.logFor, packed: req.packed },
+    req.view,
+    req.todayDay,
+    req.toDay,
+  );
   const startDay = first === null ? req.fromDay : Math.min(first, req.fromDay);
   const n = Math.max(0, req.toDay - startDay + 1);
   const nm = METRICS.length;
@@ -101,12 +114,31 @@ export function computeAthleteColumns(req: ColumnsRequest, ws?: EngineWorkspace)
   METRICS.forEach((m, k) => {
     const at = (j: number) => f64.subarray((nm + 3 * k + j) * n, (nm + 3 * k + j + 1) * n);
     acwr[m] = { acute: at(0), chronic: at(1), ratio: at(2) };
-    acwrFromFirstDay(cols.values[m], req.settings.acwrMethod, acwr[m], cols.firstDataIndex, prefix, rp.estimateMissing ? undefined : cols.missing);
+    acwrFromFirstDay(
+      cols.values[m],
+      req.settings.acwrMethod,
+      acwr[m],
+      cols.firstDataIndex,
+      prefix,
+      rp.estimateMissing ? undefined : cols.missing,
+    );
   });
   const provisional = u8.subarray(2 * n, 3 * n);
   markProvisional(provisional, cols.firstDataIndex);
   const { length, values, logged, missing, firstDataIndex } = cols;
-  return { startDay, length, values, logged, missing, firstDataIndex, acwr, provisional, firstDate: dateFromDayIndex(startDay), sessionDays, rp };
+  return {
+    startDay,
+    length,
+    values,
+    logged,
+    missing,
+    firstDataIndex,
+    acwr,
+    provisional,
+    firstDate: dateFromDayIndex(startDay),
+    sessionDays,
+    rp,
+  };
 }
 
 /** Week summary and flags for the week starting at weekStartDay (a day number) from precomputed columns. */

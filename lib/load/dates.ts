@@ -33,8 +33,14 @@ export function daysInMonth(year: number, month: number): number {
 /** Day number (days since 1970-01-01) of a "YYYY-MM-DD" date. Throws RangeError on a malformed or impossible date. */
 export function dayIndex(date: string): number {
   if (date.length !== 10 || date.charCodeAt(4) !== DASH || date.charCodeAt(7) !== DASH) invalid("date", date);
-  const d0 = digit(date, 0), d1 = digit(date, 1), d2 = digit(date, 2), d3 = digit(date, 3);
-  const m0 = digit(date, 5), m1 = digit(date, 6), a0 = digit(date, 8), a1 = digit(date, 9);
+  const d0 = digit(date, 0),
+    d1 = digit(date, 1),
+    d2 = digit(date, 2),
+    d3 = digit(date, 3);
+  const m0 = digit(date, 5),
+    m1 = digit(date, 6),
+    a0 = digit(date, 8),
+    a1 = digit(date, 9);
   if ((d0 | d1 | d2 | d3 | m0 | m1 | a0 | a1) < 0) invalid("date", date);
   const y = d0 * 1000 + d1 * 100 + d2 * 10 + d3;
   const m = m0 * 10 + m1;
@@ -119,7 +125,10 @@ export function maxDate(a: string, b: string): string {
 /** Minutes after midnight of "HH:MM" (00:00–23:59). Throws RangeError when malformed. */
 export function minutesOfDay(time: string): number {
   if (time.length !== 5 || time.charCodeAt(2) !== COLON) invalid("time", time);
-  const h0 = digit(time, 0), h1 = digit(time, 1), m0 = digit(time, 3), m1 = digit(time, 4);
+  const h0 = digit(time, 0),
+    h1 = digit(time, 1),
+    m0 = digit(time, 3),
+    m1 = digit(time, 4);
   if ((h0 | h1 | m0 | m1) < 0) invalid("time", time);
   const h = h0 * 10 + h1;
   const m = m0 * 10 + m1;

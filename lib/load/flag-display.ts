@@ -34,13 +34,33 @@ export const FLAG_COLOUR_CLASSES: Record<FlagColour, FlagClasses> = {
 };
 
 export const FLAG_DISPLAY: Record<FlagKind, FlagDisplay> = {
-  spike: { label: "Spike", hint: "Acute load well above the recent norm (ACWR at or above the spike threshold).", colour: "rose" },
+  spike: {
+    label: "Spike",
+    hint: "Acute load well above the recent norm (ACWR at or above the spike threshold).",
+    colour: "rose",
+  },
   rising: { label: "Climbing", hint: "ACWR above the comfortable range but below a spike.", colour: "amber" },
-  low: { label: "Underloaded", hint: "ACWR below the comfortable range: a light week compared with recent training.", colour: "sky" },
+  low: {
+    label: "Underloaded",
+    hint: "ACWR below the comfortable range: a light week compared with recent training.",
+    colour: "sky",
+  },
   weekly_jump: { label: "Weekly jump", hint: "Week-on-week increase above the team's limit.", colour: "orange" },
-  monotony: { label: "Monotony", hint: "Daily sRPE loads too alike over the week (Foster's monotony above the limit); strain shown.", colour: "orange" },
-  plyo_volume: { label: "Contact overload", hint: "More ground contacts in one session than the athlete's experience range.", colour: "violet" },
-  recovery: { label: "Short recovery", hint: "Two high-intensity sessions closer together than the recovery window.", colour: "teal" },
+  monotony: {
+    label: "Monotony",
+    hint: "Daily sRPE loads too alike over the week (Foster's monotony above the limit); strain shown.",
+    colour: "orange",
+  },
+  plyo_volume: {
+    label: "Contact overload",
+    hint: "More ground contacts in one session than the athlete's experience range.",
+    colour: "violet",
+  },
+  recovery: {
+    label: "Short recovery",
+    hint: "Two high-intensity sessions closer together than the recovery window.",
+    colour: "teal",
+  },
 };
 
 export const FLAG_LEVEL_DISPLAY: Record<FlagLevel, { label: string; colour: FlagColour }> = {

@@ -65,7 +65,15 @@ const METHOD_WORDS: Record<AcwrMethod, string> = {
 
 const PROVISIONAL_NOTE = " Provisional: fewer than 28 days on record stand behind this ratio.";
 
-const KIND_ORDER: Record<FlagKind, number> = { spike: 0, rising: 1, low: 2, weekly_jump: 3, monotony: 4, plyo_volume: 5, recovery: 6 };
+const KIND_ORDER: Record<FlagKind, number> = {
+  spike: 0,
+  rising: 1,
+  low: 2,
+  weekly_jump: 3,
+  monotony: 4,
+  plyo_volume: 5,
+  recovery: 6,
+};
 
 type Peak = { index: number; value: number };
 
@@ -126,7 +134,13 @@ function hasMissing(input: FlagInput, from: number, to: number): boolean {
 function monotonyFlag(input: FlagInput, w: number): Flag | null {
   const limit = input.settings.monotonyLimit ?? 2;
   const col = input.values.srpe;
-  const m = monotonyOfWindow(col, w, 7, DEFAULT_SD_TYPE, input.settings.missingLogs === "exclude" ? input.missing : undefined);
+  const m = monotonyOfWindow(
+    col,
+    w,
+    7,
+    DEFAULT_SD_TYPE,
+    input.settings.missingLogs === "exclude" ? input.missing : undefined,
+  );
   // Strictly above the limit ("above 2.0"); SD 0 (identical days) has no monotony and no flag.
   if (m === null || !(m > limit + 1e-9)) return null;
   const load = sumWindow(col, w, w + 7);
@@ -163,7 +177,10 @@ function acwrFlag(input: FlagInput, from: number, to: number, first: number): Fl
   const settled = peakRatioIn(input.ratio, from, to, input.provisional, false);
   const early = peakRatioIn(input.ratio, from, to, input.provisional, true);
   const mayBeLow = early === null && !anyProvisional(input.provisional, from, to) && !hasMissing(input, from, to);
-  const candidates = [settled && zoneFlag(input, settled, first, false, mayBeLow), early && zoneFlag(input, early, first, true, false)].filter((f): f is Flag => Boolean(f));
+  const candidates = [
+    settled && zoneFlag(input, settled, first, false, mayBeLow),
+    early && zoneFlag(input, early, first, true, false),
+  ].filter((f): f is Flag => Boolean(f));
   return candidates.sort((a, b) => zoneRank(b) - zoneRank(a))[0] ?? null;
 }
 

@@ -47,13 +47,7 @@ export {
   type RepShape,
 } from "./sprint-model";
 export { blockMetrics, resolveProfile, prescribedReps, type BlockMetrics, type ResolvedProfile } from "./block-metrics";
-export {
-  srpe,
-  sessionMetrics,
-  actualSessionMetrics,
-  COMPLETION_FACTOR,
-  type SessionMetrics,
-} from "./session-metrics";
+export { srpe, sessionMetrics, actualSessionMetrics, COMPLETION_FACTOR, type SessionMetrics } from "./session-metrics";
 export {
   dailySeries,
   weeklyTotals,
@@ -85,7 +79,15 @@ export {
 export { monotony, monotonyOfWindow, strain, DEFAULT_SD_TYPE, type SdType } from "./monotony";
 export { weeklyChangePct, exceedsWeeklyLimit } from "./weekly-change";
 export { contactBand, aboveContactBand, drillContacts, PLYO_CONTACT_BANDS, type ContactBand } from "./plyo";
-export { computeFlags, topFlagLevel, type Flag, type FlagKind, type FlagLevel, type FlagInput, type FlagSession } from "./flags";
+export {
+  computeFlags,
+  topFlagLevel,
+  type Flag,
+  type FlagKind,
+  type FlagLevel,
+  type FlagInput,
+  type FlagSession,
+} from "./flags";
 export {
   LOAD_CAUTION,
   FLAG_DISPLAY,
@@ -97,12 +99,7 @@ export {
   type FlagClasses,
 } from "./flag-display";
 export { summariseWeek, type WeekSummary } from "./week-summary";
-export {
-  computeAthleteLoad,
-  type AthleteLoad,
-  type AthleteLoadDay,
-  type AthleteLoadInput,
-} from "./athlete-load";
+export { computeAthleteLoad, type AthleteLoad, type AthleteLoadDay, type AthleteLoadInput } from "./athlete-load";
 export {
   computeWeekPreview,
   buildWeekPreviewContext,

@@ -17,7 +17,13 @@ function at(col: ArrayLike<number>, i: number): number {
  * e.g. a week of rest) or there are too few days for the SD type. Days with skip[i] = 1 are left out (a missing
  * log under settings.missingLogs "exclude", lib/load/README.md §11.3): the mean and SD are over the days kept.
  */
-export function monotonyOfWindow(col: ArrayLike<number>, from: number, days: number, sd: SdType = DEFAULT_SD_TYPE, skip?: ArrayLike<number>): number | null {
+export function monotonyOfWindow(
+  col: ArrayLike<number>,
+  from: number,
+  days: number,
+  sd: SdType = DEFAULT_SD_TYPE,
+  skip?: ArrayLike<number>,
+): number | null {
   const kept = (i: number) => !skip || !(from + i >= 0 && from + i < skip.length && skip[from + i]);
   let count = 0;
   for (let i = 0; i < days; i++) if (kept(i)) count++;

@@ -151,7 +151,8 @@ export function packSessions(sessions: readonly SessionInput[], logs: readonly L
         }
         p.prescribed[b] = reps;
       }
-      if (done && block.id !== undefined && Object.prototype.hasOwnProperty.call(done, block.id)) p.doneReps[b] = nonNeg(done[block.id]);
+      if (done && block.id !== undefined && Object.prototype.hasOwnProperty.call(done, block.id))
+        p.doneReps[b] = nonNeg(done[block.id]);
       b++;
     }
   }
@@ -160,7 +161,14 @@ export function packSessions(sessions: readonly SessionInput[], logs: readonly L
   return p;
 }
 
-const S_HSR = 0, S_NEAR = 1, S_SPRINT = 2, S_STEPS = 3, S_LOW = 4, S_MOD = 5, S_HIGH = 6, S_SRPE = 7;
+const S_HSR = 0,
+  S_NEAR = 1,
+  S_SPRINT = 2,
+  S_STEPS = 3,
+  S_LOW = 4,
+  S_MOD = 5,
+  S_HIGH = 6,
+  S_SRPE = 7;
 export const PACKED_ACC_SIZE = 8;
 
 /**
@@ -168,7 +176,13 @@ export const PACKED_ACC_SIZE = 8;
  * planned (`logged` false) or as logged. The rules, and the order of every operation, are those of
  * evaluateSessionInto and addScaledBlock in accumulate.ts.
  */
-export function sumPackedSession(acc: Float64Array, p: PackedSessions, k: number, logged: boolean, rp: ResolvedProfile): void {
+export function sumPackedSession(
+  acc: Float64Array,
+  p: PackedSessions,
+  k: number,
+  logged: boolean,
+  rp: ResolvedProfile,
+): void {
   // Eight stores beat TypedArray#fill's call for so short an array.
   acc[0] = 0;
   acc[1] = 0;

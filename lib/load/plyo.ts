@@ -27,7 +27,9 @@ export const PLYO_CONTACT_BANDS: Record<PlyoLevel, ContactBand> = {
 export const PLYO_INTENSITY_WEIGHT = { low: 1, moderate: 2, high: 3 } as const;
 
 export function weightedContacts(low: number, moderate: number, high: number): number {
-  return low * PLYO_INTENSITY_WEIGHT.low + moderate * PLYO_INTENSITY_WEIGHT.moderate + high * PLYO_INTENSITY_WEIGHT.high;
+  return (
+    low * PLYO_INTENSITY_WEIGHT.low + moderate * PLYO_INTENSITY_WEIGHT.moderate + high * PLYO_INTENSITY_WEIGHT.high
+  );
 }
 
 export function contactBand(level: PlyoLevel): ContactBand {

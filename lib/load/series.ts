@@ -125,7 +125,16 @@ export function buildDailyColumns(input: ColumnsInput): DailyColumns {
   const logged = input.scratch ? input.scratch.u8.subarray(0, length) : new Uint8Array(length);
   const missing = input.scratch ? input.scratch.u8.subarray(length, 2 * length) : new Uint8Array(length);
   if (input.packed) {
-    const firstDataIndex = packedIntoColumns(input.packed, { startDay, length, rp, view, todayDay, buffer, logged, missing });
+    const firstDataIndex = packedIntoColumns(input.packed, {
+      startDay,
+      length,
+      rp,
+      view,
+      todayDay,
+      buffer,
+      logged,
+      missing,
+    });
     return { startDay, length, values, logged, missing, firstDataIndex };
   }
   const days = input.sessionDays ?? sessionDayNumbers(sessions);
@@ -154,7 +163,16 @@ export function buildDailyColumns(input: ColumnsInput): DailyColumns {
 /** buildDailyColumns over packed sessions: the same rules, reading typed arrays. Returns firstDataIndex. */
 function packedIntoColumns(
   p: PackedSessions,
-  o: { startDay: number; length: number; rp: ResolvedProfile; view: LoadView; todayDay: number; buffer: Float64Array; logged: Uint8Array; missing: Uint8Array },
+  o: {
+    startDay: number;
+    length: number;
+    rp: ResolvedProfile;
+    view: LoadView;
+    todayDay: number;
+    buffer: Float64Array;
+    logged: Uint8Array;
+    missing: Uint8Array;
+  },
 ): number | null {
   const { startDay, length, rp, view, todayDay, buffer, logged, missing } = o;
   const acc = new Float64Array(PACKED_ACC_SIZE);
@@ -252,7 +270,13 @@ export function dailySeries(input: DailySeriesInput): DailySeries {
   });
   const dates: string[] = new Array(length);
   for (let i = 0; i < length; i++) dates[i] = dateFromDayIndex(startDay + i);
-  return { dates, values: cols.values, logged: cols.logged, missing: cols.missing, firstDataIndex: cols.firstDataIndex };
+  return {
+    dates,
+    values: cols.values,
+    logged: cols.logged,
+    missing: cols.missing,
+    firstDataIndex: cols.firstDataIndex,
+  };
 }
 
 export interface WeeklyTotals {

@@ -15,7 +15,15 @@ import {
   resolveProfile,
 } from "./accumulate";
 import { bandsFromAcc, contactsFromAcc } from "./block-metrics";
-import type { AthleteProfile, ContactsByIntensity, LogInput, MetricValues, SessionInput, SpeedBands, TeamLoadSettings } from "./types";
+import type {
+  AthleteProfile,
+  ContactsByIntensity,
+  LogInput,
+  MetricValues,
+  SessionInput,
+  SpeedBands,
+  TeamLoadSettings,
+} from "./types";
 
 export { COMPLETION_FACTOR, evaluateSessionInto, srpe } from "./accumulate";
 
@@ -55,7 +63,11 @@ export function toSessionMetrics(acc: Float64Array): SessionMetrics {
 }
 
 /** A session as planned (status is not consulted; callers decide whether cancelled sessions count). */
-export function sessionMetrics(session: SessionInput, profile: AthleteProfile, settings: TeamLoadSettings): SessionMetrics {
+export function sessionMetrics(
+  session: SessionInput,
+  profile: AthleteProfile,
+  settings: TeamLoadSettings,
+): SessionMetrics {
   const acc = new Float64Array(ACC_SIZE);
   evaluateSessionInto(acc, session, undefined, resolveProfile(profile, settings));
   return toSessionMetrics(acc);

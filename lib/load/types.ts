@@ -2,13 +2,7 @@
 // Everything here is serialisable JSON: no classes, no Dates (dates are local "YYYY-MM-DD" strings).
 
 export type BlockKind =
-  | "acceleration"
-  | "max_velocity"
-  | "plyometric"
-  | "speed_endurance"
-  | "tempo"
-  | "strength"
-  | "recovery";
+  "acceleration" | "max_velocity" | "plyometric" | "speed_endurance" | "tempo" | "strength" | "recovery";
 
 export const BLOCK_KINDS: readonly BlockKind[] = [
   "acceleration",
@@ -146,7 +140,12 @@ export const SPEED_ZONES: readonly SpeedZones[] = ["absolute", "relative"];
 
 /** Work that makes a session high-intensity for the recovery rule. */
 export type RecoveryWork = "max_velocity" | "max_acceleration" | "speed_endurance" | "high_plyo";
-export const RECOVERY_WORK: readonly RecoveryWork[] = ["max_velocity", "max_acceleration", "speed_endurance", "high_plyo"];
+export const RECOVERY_WORK: readonly RecoveryWork[] = [
+  "max_velocity",
+  "max_acceleration",
+  "speed_endurance",
+  "high_plyo",
+];
 
 /** How a published past session without a log enters the series: the plan as an estimate, or left out. */
 export type MissingLogs = "estimate" | "exclude";

@@ -29,5 +29,14 @@ export function weekExtras(
     moderate += s.contactsByIntensity.moderate;
     high += s.contactsByIntensity.high;
   }
-  return { bands, contactsByIntensity: { low, moderate, high, total: low + moderate + high, weighted: weightedContacts(low, moderate, high) } };
+  return {
+    bands,
+    contactsByIntensity: {
+      low,
+      moderate,
+      high,
+      total: low + moderate + high,
+      weighted: weightedContacts(low, moderate, high),
+    },
+  };
 }

@@ -68,7 +68,14 @@ export function computeWeekPreview(input: WeekPreviewInput): { week: WeekSummary
     firstData = offset + week.firstDataIndex;
   }
   const acwr = allocAcwrColumns(length);
-  acwrFromFirstDay(values[settings.acwrMetric], settings.acwrMethod, acwr, firstData, undefined, rp.estimateMissing ? undefined : missing);
+  acwrFromFirstDay(
+    values[settings.acwrMetric],
+    settings.acwrMethod,
+    acwr,
+    firstData,
+    undefined,
+    rp.estimateMissing ? undefined : missing,
+  );
   const provisional = new Uint8Array(length);
   markProvisional(provisional, firstData);
   const firstDate = dateFromDayIndex(historyStart);
@@ -146,7 +153,13 @@ export function buildWeekPreviewContext(input: WeekPreviewContextInput): WeekPre
   const rp = resolveProfile(input.profile, input.settings);
   const priorSessions = effectiveSessions(input.sessions, logFor, rp, view, req.todayDay, ws - lookBack, ws - 1)
     .filter((s) => s.highIntensity)
-    .map((s) => ({ id: s.id, date: s.date, startTime: s.startTime, contactsByIntensity: s.contactsByIntensity, highIntensity: true }));
+    .map((s) => ({
+      id: s.id,
+      date: s.date,
+      startTime: s.startTime,
+      contactsByIntensity: s.contactsByIntensity,
+      highIntensity: true,
+    }));
   return {
     historyDates,
     historyValues,

@@ -122,7 +122,9 @@ export function summariseWeek(input: WeekSummaryInput): WeekSummary {
     peakRatioDate: peak ? dateFromDayIndex(dayIndex(input.firstDate) + peak.index) : null,
     ratioProvisional: peak ? peak.provisional : true,
     dailyRatio: Array.from({ length: 7 }, (_, i) => (w + i >= 0 ? ratioAt(ratio, w + i) : null)),
-    dailyProvisional: Array.from({ length: 7 }, (_, i) => (w + i >= 0 && w + i < provisional.length ? Boolean(provisional[w + i]) : true)),
+    dailyProvisional: Array.from({ length: 7 }, (_, i) =>
+      w + i >= 0 && w + i < provisional.length ? Boolean(provisional[w + i]) : true,
+    ),
     missingDays: missing ? sumWindow(missing, w, w + 7) : 0,
   };
 }

@@ -100,7 +100,9 @@ export function isDeliveredTo(mail: Pick<StoredMail, "envelope">, address: strin
 }
 
 /** Newest first; `to` keeps only mail delivered to that address. */
-export async function listMail({ dir, to, limit }: { dir?: string; to?: string; limit?: number } = {}): Promise<MailSummary[]> {
+export async function listMail({ dir, to, limit }: { dir?: string; to?: string; limit?: number } = {}): Promise<
+  MailSummary[]
+> {
   const base = resolveDir(dir);
   const ids = (await storedIds(base)).sort().reverse();
   const out: MailSummary[] = [];
@@ -156,7 +158,9 @@ export async function clearMailbox({ dir, to }: { dir?: string; to?: string } = 
   const base = resolveDir(dir);
   if (to !== undefined) {
     const mine = (await listMail({ dir: base, to })).map((m) => m.id);
-    await Promise.all(mine.flatMap((id) => [".json", ".eml"].map((ext) => fs.rm(path.join(base, `${id}${ext}`), { force: true }))));
+    await Promise.all(
+      mine.flatMap((id) => [".json", ".eml"].map((ext) => fs.rm(path.join(base, `${id}${ext}`), { force: true }))),
+    );
     return mine.length;
   }
   const ids = await storedIds(base);

@@ -52,7 +52,11 @@ export async function sendMail(message: OutgoingMail, config: MailConfig = readM
     html: message.html,
     text: message.text,
     icalEvent: message.icalEvent
-      ? { method: message.icalEvent.method, content: message.icalEvent.content, filename: message.icalEvent.filename ?? "invite.ics" }
+      ? {
+          method: message.icalEvent.method,
+          content: message.icalEvent.content,
+          filename: message.icalEvent.filename ?? "invite.ics",
+        }
       : undefined,
     attachments: message.attachments,
     // RFC 3834: marks automatic mail so auto-responders stay quiet.

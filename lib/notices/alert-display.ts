@@ -37,12 +37,24 @@ function isMetric(value: string | null): value is Metric {
 export type AlertFacts = { kind: AlertKind; metric: string | null };
 
 /** What was measured, its unit, and whether the threshold is a ceiling or a floor. */
-export function alertMeasure(alert: AlertFacts): { metricLabel: string; unit: string | null; direction: "above" | "below" | "count" } {
+export function alertMeasure(alert: AlertFacts): {
+  metricLabel: string;
+  unit: string | null;
+  direction: "above" | "below" | "count";
+} {
   switch (alert.kind) {
     case "spike":
-      return { metricLabel: `ACWR (${isMetric(alert.metric) ? METRIC_INFO[alert.metric].short : "load"})`, unit: null, direction: "above" };
+      return {
+        metricLabel: `ACWR (${isMetric(alert.metric) ? METRIC_INFO[alert.metric].short : "load"})`,
+        unit: null,
+        direction: "above",
+      };
     case "weekly_jump":
-      return { metricLabel: `${isMetric(alert.metric) ? METRIC_INFO[alert.metric].label : "Load"}: change on last week`, unit: "%", direction: "above" };
+      return {
+        metricLabel: `${isMetric(alert.metric) ? METRIC_INFO[alert.metric].label : "Load"}: change on last week`,
+        unit: "%",
+        direction: "above",
+      };
     case "plyo_volume":
       return { metricLabel: "Ground contacts in one session", unit: "contacts", direction: "above" };
     case "recovery":

@@ -13,7 +13,8 @@ import { appUrl } from "@/lib/env";
 import { startOfWeek } from "@/lib/load";
 import type { SessionChange, SessionSnapshot } from "./hooks";
 
-export type CalendarAction = { method: "REQUEST"; update: boolean; session: CalendarSession } | { method: "CANCEL"; session: CalendarSession };
+export type CalendarAction =
+  { method: "REQUEST"; update: boolean; session: CalendarSession } | { method: "CANCEL"; session: CalendarSession };
 
 export function toCalendarSession(s: SessionSnapshot, overrides: Partial<CalendarSession> = {}): CalendarSession {
   return {
@@ -56,13 +57,20 @@ export function calendarActionFor(change: SessionChange): CalendarAction | null 
   if (after && isVisible) {
     if (!wasVisible) return { method: "REQUEST", update: false, session: toCalendarSession(after) };
     if (before && visibleChange(before, after)) {
-      return { method: "REQUEST", update: true, session: toCalendarSession(after, { sequence: Math.max(after.sequence, before.sequence + 1) }) };
+      return {
+        method: "REQUEST",
+        update: true,
+        session: toCalendarSession(after, { sequence: Math.max(after.sequence, before.sequence + 1) }),
+      };
     }
     return null;
   }
   if (!wasVisible || !before) return null;
   const last = after ?? before;
-  return { method: "CANCEL", session: toCalendarSession(last, { sequence: Math.max(last.sequence, before.sequence + 1), status: "cancelled" }) };
+  return {
+    method: "CANCEL",
+    session: toCalendarSession(last, { sequence: Math.max(last.sequence, before.sequence + 1), status: "cancelled" }),
+  };
 }
 
 function meUrl(base: string): string {
@@ -70,13 +78,32 @@ function meUrl(base: string): string {
 }
 
 /** Queues the invitations, updates and cancellations a plan change calls for, one mail per athlete and kind. */
-export async function queueCalendarNotices({ transaction, teamId, actorUserId, changes }: { transaction: Transaction; teamId: number; actorUserId: number; changes: readonly SessionChange[] }): Promise<number> {
-  const actions = changes.map((c) => ({ athleteId: c.athleteId, action: calendarActionFor(c) })).filter((a): a is { athleteId: number; action: CalendarAction } => a.action !== null);
+export async function queueCalendarNotices({
+  transaction,
+  teamId,
+  actorUserId,
+  changes,
+}: {
+  transaction: Transaction;
+  teamId: number;
+  actorUserId: number;
+  changes: readonly SessionChange[];
+}): Promise<number> {
+  const actions = changes
+    .map((c) => ({ athleteId: c.athleteId, action: calendarActionFor(c) }))
+    .filter((a): a is { athleteId: number; action: CalendarAction } => a.action !== null);
   if (actions.length === 0) return 0;
   const team = await getNoticeTeam({ teamId, transaction });
   if (!team) return 0;
-  const contacts = await listAthleteContacts({ teamId, athleteIds: [...new Set(actions.map((a) => a.athleteId))], transaction });
-  const organizer = (await getPerson({ userId: actorUserId, transaction })) ?? { name: team.name, email: "no-reply@sprintwright.local" };
+  const contacts = await listAthleteContacts({
+    teamId,
+    athleteIds: [...new Set(actions.map((a) => a.athleteId))],
+    transaction,
+  });
+  const organizer = (await getPerson({ userId: actorUserId, transaction })) ?? {
+    name: team.name,
+    email: "no-reply@sprintwright.local",
+  };
   const base = appUrl();
   const sessionUrl = (s: CalendarSession) => `${base}/me#session-${s.id}`;
   let queued = 0;
@@ -86,21 +113,75 @@ export async function queueCalendarNotices({ transaction, teamId, actorUserId, c
     const send = async (method: "REQUEST" | "CANCEL", sessions: CalendarSession[], mail: RenderedEmail) => {
       let icalEvent: { method: typeof method; content: string } | null = null;
       try {
-        icalEvent = { method, content: buildInvite({ method, team, organizer, attendee: { name: contact.name, email: contact.email }, sessions, appUrl: base, sessionUrl }) };
+        icalEvent = {
+          method,
+          content: buildInvite({
+            method,
+            team,
+            organizer,
+            attendee: { name: contact.name, email: contact.email },
+            sessions,
+            appUrl: base,
+            sessionUrl,
+          }),
+        };
       } catch (err) {
         // The coach's plan change must not fail over a calendar attachment: the mail still lists the sessions.
         console.error(`[notices] no calendar attachment for ${contact.email}:`, err);
       }
-      await enqueueMail({ transaction, teamId, kind: method === "CANCEL" ? "calendar_cancel" : "calendar_request", to: contact.email, mail, icalEvent });
+      await enqueueMail({
+        transaction,
+        teamId,
+        kind: method === "CANCEL" ? "calendar_cancel" : "calendar_request",
+        to: contact.email,
+        mail,
+        icalEvent,
+      });
       queued += 1;
     };
-    for (const [weekStart, sessions] of byWeek(team, mine.filter((a) => a.method === "REQUEST" && !a.update))) {
-      await send("REQUEST", sessions, sessionInvitationsEmail({ athleteName: contact.name, teamName: team.name, coachName: organizer.name, weekStart, sessions, planUrl: meUrl(base), feedUrl: `${meUrl(base)}#calendar` }));
+    for (const [weekStart, sessions] of byWeek(
+      team,
+      mine.filter((a) => a.method === "REQUEST" && !a.update),
+    )) {
+      await send(
+        "REQUEST",
+        sessions,
+        sessionInvitationsEmail({
+          athleteName: contact.name,
+          teamName: team.name,
+          coachName: organizer.name,
+          weekStart,
+          sessions,
+          planUrl: meUrl(base),
+          feedUrl: `${meUrl(base)}#calendar`,
+        }),
+      );
     }
     const updates = mine.filter((a) => a.method === "REQUEST" && a.update).map((a) => a.session);
-    if (updates.length > 0) await send("REQUEST", updates, sessionUpdatedEmail({ athleteName: contact.name, teamName: team.name, coachName: organizer.name, sessions: updates, planUrl: meUrl(base) }));
+    if (updates.length > 0)
+      await send(
+        "REQUEST",
+        updates,
+        sessionUpdatedEmail({
+          athleteName: contact.name,
+          teamName: team.name,
+          coachName: organizer.name,
+          sessions: updates,
+          planUrl: meUrl(base),
+        }),
+      );
     const cancels = mine.filter((a) => a.method === "CANCEL").map((a) => a.session);
-    if (cancels.length > 0) await send("CANCEL", cancels, sessionCancelledEmail({ athleteName: contact.name, teamName: team.name, sessions: cancels, planUrl: meUrl(base) }));
+    if (cancels.length > 0)
+      await send(
+        "CANCEL",
+        cancels,
+        sessionCancelledEmail({
+          athleteName: contact.name,
+          teamName: team.name,
+          sessions: cancels,
+          planUrl: meUrl(base),
+        }),
+      );
   }
   return queued;
 }
@@ -113,4 +194,3 @@ function byWeek(team: NoticeTeam, actions: CalendarAction[]): Map<string, Calend
   }
   return new Map([...out.entries()].sort(([x], [y]) => x.localeCompare(y)));
 }
-

@@ -43,7 +43,13 @@ export async function queueDueDigests({ now }: { now: Date }): Promise<number> {
         teamId: s.teamId,
         kind: "digest",
         to: s.email,
-        mail: alertDigestEmail({ recipientName: s.name, teamName: s.teamName, date, alerts: alerts.map((a) => toLoadAlertItem(a, base)), inboxUrl: `${base}/alerts` }),
+        mail: alertDigestEmail({
+          recipientName: s.name,
+          teamName: s.teamName,
+          date,
+          alerts: alerts.map((a) => toLoadAlertItem(a, base)),
+          inboxUrl: `${base}/alerts`,
+        }),
         dedupeKey: `digest:${s.userId}:${s.teamId}:${date}`,
       });
       if (id !== null) queued += 1;

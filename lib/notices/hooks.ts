@@ -42,7 +42,12 @@ function wakeOutboxOnCommit(transaction: Transaction) {
 }
 
 /** Alerts for every athlete whose load the change moved, then calendar invitations/updates/cancellations. */
-export async function afterPlanChange(args: { transaction: Transaction; teamId: number; actorUserId: number; changes: SessionChange[] }): Promise<void> {
+export async function afterPlanChange(args: {
+  transaction: Transaction;
+  teamId: number;
+  actorUserId: number;
+  changes: SessionChange[];
+}): Promise<void> {
   const { transaction, teamId, actorUserId } = args;
   const changes = splitAthleteMoves(args.changes);
   if (changes.length === 0) return;
@@ -61,7 +66,13 @@ export async function afterPlanChange(args: { transaction: Transaction; teamId: 
 }
 
 /** A log changes what the athlete actually did: re-check that session's week (and the next) on logged data. */
-export async function afterLogChange(args: { transaction: Transaction; teamId: number; athleteId: number; sessionId: number; actorUserId: number }): Promise<void> {
+export async function afterLogChange(args: {
+  transaction: Transaction;
+  teamId: number;
+  athleteId: number;
+  sessionId: number;
+  actorUserId: number;
+}): Promise<void> {
   const { transaction, teamId, athleteId, sessionId } = args;
   const date = await getAthleteSessionDate({ athleteId, sessionId, transaction });
   if (!date) return;

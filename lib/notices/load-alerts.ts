@@ -51,7 +51,15 @@ export function strongestByKind(flags: readonly Flag[], kinds: readonly AlertKin
  * The week an alert is judged on: the athlete's one daily series (whole history from getAthleteLoadInputs) on
  * the projected view, so the figures in alerts and their e-mails are the figures every screen shows.
  */
-export function alertWeekLoad({ inputs, weekStart, today }: { inputs: LoadInputs & { athlete: LoadAthleteInputs }; weekStart: string; today: string }): AthleteLoad {
+export function alertWeekLoad({
+  inputs,
+  weekStart,
+  today,
+}: {
+  inputs: LoadInputs & { athlete: LoadAthleteInputs };
+  weekStart: string;
+  today: string;
+}): AthleteLoad {
   return computeAthleteLoad({
     profile: inputs.athlete.profile,
     settings: inputs.settings,
@@ -102,7 +110,15 @@ export async function evaluateLoadAlerts(args: EvaluateArgs): Promise<number[]> 
     const kinds = WEEK_KINDS.filter((k) => kindSet.has(k));
     const load = alertWeekLoad({ inputs, weekStart, today });
     const candidates = strongestByKind(load.flags, kinds);
-    const fresh = await syncWeekAlerts({ transaction, teamId, athleteId, weekStart, basis: args.basis, kinds, candidates });
+    const fresh = await syncWeekAlerts({
+      transaction,
+      teamId,
+      athleteId,
+      weekStart,
+      basis: args.basis,
+      kinds,
+      candidates,
+    });
     created.push(...fresh);
   }
   if (created.length === 0) return [];

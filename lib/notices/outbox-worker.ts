@@ -1,6 +1,12 @@
 import "server-only";
 import { isJoinedMember } from "@/lib/data/notification-settings";
-import { claimDueMessages, markMessageAttemptFailed, markMessageSent, nextOutboxDueAt, type ClaimedMessage } from "@/lib/data/outbox";
+import {
+  claimDueMessages,
+  markMessageAttemptFailed,
+  markMessageSent,
+  nextOutboxDueAt,
+  type ClaimedMessage,
+} from "@/lib/data/outbox";
 import type { OutboxKind } from "@/models/outbox-message";
 import { readMailConfig, type MailConfig } from "@/lib/mail/mail-config";
 import { sendMail } from "@/lib/mail/transport";
@@ -64,7 +70,12 @@ export function createOutboxWorker(options: OutboxWorkerOptions = {}): OutboxWor
   async function stillMember(message: ClaimedMessage): Promise<boolean> {
     if (!MEMBERS_ONLY.has(message.kind) || message.teamId === null) return true;
     if (await isJoinedMember({ teamId: message.teamId, email: message.toEmail })) return true;
-    await markMessageAttemptFailed({ id: message.id, leaseToken: message.leaseToken, error: "Not sent: the recipient is not a member of the team", retryAt: null });
+    await markMessageAttemptFailed({
+      id: message.id,
+      leaseToken: message.leaseToken,
+      error: "Not sent: the recipient is not a member of the team",
+      retryAt: null,
+    });
     log(`message ${message.id} to ${message.toEmail}: not sent, no longer a member of team ${message.teamId}`);
     return false;
   }
@@ -79,7 +90,10 @@ export function createOutboxWorker(options: OutboxWorkerOptions = {}): OutboxWor
           subject: message.subject,
           html: message.html,
           text: message.text,
-          icalEvent: message.icalMethod && message.icalContent ? { method: message.icalMethod, content: message.icalContent } : undefined,
+          icalEvent:
+            message.icalMethod && message.icalContent
+              ? { method: message.icalMethod, content: message.icalContent }
+              : undefined,
           // Stable per row: if a lease ever runs out mid-send and the row is sent again, clients can drop the copy.
           headers: { "Message-ID": `<outbox-${message.id}-${message.createdAt.getTime()}@${domainOf(config.from)}>` },
         },
@@ -92,7 +106,9 @@ export function createOutboxWorker(options: OutboxWorkerOptions = {}): OutboxWor
       const giveUp = message.attempts >= Math.min(message.maxAttempts, policy.maxAttempts);
       const retryAt = giveUp ? null : new Date(now().getTime() + backoffDelayMs(message.attempts, policy));
       await markMessageAttemptFailed({ id: message.id, leaseToken: message.leaseToken, error, retryAt });
-      log(`message ${message.id} to ${message.toEmail}: attempt ${message.attempts} failed (${error})${giveUp ? ", giving up" : ""}`);
+      log(
+        `message ${message.id} to ${message.toEmail}: attempt ${message.attempts} failed (${error})${giveUp ? ", giving up" : ""}`,
+      );
       return giveUp ? "failed" : "retrying";
     }
   }

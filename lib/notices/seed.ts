@@ -13,13 +13,37 @@ export async function seedNotices(d: Db, club: SeededClub): Promise<void> {
     const athletes = await Athlete.findAll({ where: { teamId: club.teamId }, attributes: ["id"], transaction });
     for (const a of athletes) {
       const { token, hash } = newToken(32);
-      await CalendarToken.create({ teamId: club.teamId, athleteId: a.id, tokenHash: hash, tokenSealed: sealToken(token), createdBy: null, revokedAt: null, lastUsedAt: null }, { transaction });
+      await CalendarToken.create(
+        {
+          teamId: club.teamId,
+          athleteId: a.id,
+          tokenHash: hash,
+          tokenSealed: sealToken(token),
+          createdBy: null,
+          revokedAt: null,
+          lastUsedAt: null,
+        },
+        { transaction },
+      );
     }
-    const staff = await Membership.findAll({ where: { teamId: club.teamId }, attributes: ["userId", "role"], transaction });
+    const staff = await Membership.findAll({
+      where: { teamId: club.teamId },
+      attributes: ["userId", "role"],
+      transaction,
+    });
     const choice = { physio: "each", head_coach: "digest", coach: "off" } as const;
     for (const m of staff) {
       if (m.role === "athlete") continue;
-      await NotificationSetting.create({ teamId: club.teamId, userId: m.userId, alertEmail: choice[m.role], lastDigestAt: new Date(), alertsSeenAt: null }, { transaction });
+      await NotificationSetting.create(
+        {
+          teamId: club.teamId,
+          userId: m.userId,
+          alertEmail: choice[m.role],
+          lastDigestAt: new Date(),
+          alertsSeenAt: null,
+        },
+        { transaction },
+      );
     }
   });
 }

@@ -11,7 +11,9 @@ export function sealToken(token: string, secret = authSecret()): string {
   const iv = randomBytes(12);
   const cipher = createCipheriv("aes-256-gcm", key(secret), iv);
   const body = Buffer.concat([cipher.update(token, "utf8"), cipher.final()]);
-  return ["v1", iv.toString("base64url"), body.toString("base64url"), cipher.getAuthTag().toString("base64url")].join(".");
+  return ["v1", iv.toString("base64url"), body.toString("base64url"), cipher.getAuthTag().toString("base64url")].join(
+    ".",
+  );
 }
 
 /** The token, or null when it was sealed with another secret or the text was tampered with. */

@@ -13,11 +13,34 @@ export function tempIdCounter(start = -1): TempIds {
 
 function newBlock(t: PlanTemplate, position: number, tempId: TempIds): PlanBlock {
   const b = blockFromTemplate(t);
-  return { id: tempId(), templateId: t.id, position, kind: b.kind, title: b.title, running: b.running, drills: b.drills, notes: b.notes };
+  return {
+    id: tempId(),
+    templateId: t.id,
+    position,
+    kind: b.kind,
+    title: b.title,
+    running: b.running,
+    drills: b.drills,
+    notes: b.notes,
+  };
 }
 
-function draft(fields: Omit<PlanSession, "id" | "status" | "version" | "sequence" | "publishedAt" | "logged" | "notes"> & { notes?: string | null }, tempId: TempIds): PlanSession {
-  return { notes: null, ...fields, id: tempId(), status: "draft", version: 1, sequence: 0, publishedAt: null, logged: false };
+function draft(
+  fields: Omit<PlanSession, "id" | "status" | "version" | "sequence" | "publishedAt" | "logged" | "notes"> & {
+    notes?: string | null;
+  },
+  tempId: TempIds,
+): PlanSession {
+  return {
+    notes: null,
+    ...fields,
+    id: tempId(),
+    status: "draft",
+    version: 1,
+    sequence: 0,
+    publishedAt: null,
+    logged: false,
+  };
 }
 
 function fromTemplate(t: PlanTemplate, athleteId: number, date: string, tempId: TempIds): PlanSession {
@@ -51,10 +74,18 @@ export function sessionsAfter(week: PlanWeek, change: PlanChange, tempId: TempId
   const template = "templateId" in change ? week.templates.find((t) => t.id === change.templateId) : undefined;
   switch (change.kind) {
     case "create":
-      if (template) out.set(change.athleteId, [...current(change.athleteId), fromTemplate(template, change.athleteId, change.date, tempId)]);
+      if (template)
+        out.set(change.athleteId, [
+          ...current(change.athleteId),
+          fromTemplate(template, change.athleteId, change.date, tempId),
+        ]);
       break;
     case "add-block":
-      if (template) out.set(change.athleteId, current(change.athleteId).map((s) => (s.id === change.sessionId ? withBlock(s, template, tempId) : s)));
+      if (template)
+        out.set(
+          change.athleteId,
+          current(change.athleteId).map((s) => (s.id === change.sessionId ? withBlock(s, template, tempId) : s)),
+        );
       break;
     case "group":
       if (!template) break;
@@ -62,21 +93,32 @@ export function sessionsAfter(week: PlanWeek, change: PlanChange, tempId: TempId
         const list = current(t.athleteId);
         out.set(
           t.athleteId,
-          t.sessionId === null ? [...list, fromTemplate(template, t.athleteId, change.date, tempId)] : list.map((s) => (s.id === t.sessionId ? withBlock(s, template, tempId) : s)),
+          t.sessionId === null
+            ? [...list, fromTemplate(template, t.athleteId, change.date, tempId)]
+            : list.map((s) => (s.id === t.sessionId ? withBlock(s, template, tempId) : s)),
         );
       }
       break;
     case "move": {
       const s = findSession(week, change.sessionId);
       if (!s) break;
-      out.set(change.fromAthleteId, current(change.fromAthleteId).filter((x) => x.id !== s.id));
-      out.set(change.athleteId, [...current(change.athleteId), { ...s, athleteId: change.athleteId, date: change.date }]);
+      out.set(
+        change.fromAthleteId,
+        current(change.fromAthleteId).filter((x) => x.id !== s.id),
+      );
+      out.set(change.athleteId, [
+        ...current(change.athleteId),
+        { ...s, athleteId: change.athleteId, date: change.date },
+      ]);
       break;
     }
     case "copy": {
       const s = findSession(week, change.sessionId);
       if (!s) break;
-      const copy = draft({ ...s, athleteId: change.athleteId, date: change.date, blocks: s.blocks.map((b) => ({ ...b, id: tempId() })) }, tempId);
+      const copy = draft(
+        { ...s, athleteId: change.athleteId, date: change.date, blocks: s.blocks.map((b) => ({ ...b, id: tempId() })) },
+        tempId,
+      );
       out.set(change.athleteId, [...current(change.athleteId), copy]);
       break;
     }
@@ -86,7 +128,11 @@ export function sessionsAfter(week: PlanWeek, change: PlanChange, tempId: TempId
 }
 
 /** Replaces the touched athletes' sessions; untouched rows keep their identity (cheap re-renders). */
-export function withSessions(week: PlanWeek, changed: ReadonlyMap<number, PlanSession[]>, load?: (a: PlanAthlete, sessions: PlanSession[]) => PlanAthlete["load"]): PlanWeek {
+export function withSessions(
+  week: PlanWeek,
+  changed: ReadonlyMap<number, PlanSession[]>,
+  load?: (a: PlanAthlete, sessions: PlanSession[]) => PlanAthlete["load"],
+): PlanWeek {
   if (changed.size === 0) return week;
   const athletes = week.athletes.map((a) => {
     const sessions = changed.get(a.id);
@@ -97,7 +143,12 @@ export function withSessions(week: PlanWeek, changed: ReadonlyMap<number, PlanSe
 }
 
 /** The week as it would look after the change: what the grid shows while the save is on its way. */
-export function applyChange(week: PlanWeek, change: PlanChange, tempId: TempIds, load?: (a: PlanAthlete, sessions: PlanSession[]) => PlanAthlete["load"]): PlanWeek {
+export function applyChange(
+  week: PlanWeek,
+  change: PlanChange,
+  tempId: TempIds,
+  load?: (a: PlanAthlete, sessions: PlanSession[]) => PlanAthlete["load"],
+): PlanWeek {
   return withSessions(week, sessionsAfter(week, change, tempId), load);
 }
 

@@ -10,9 +10,10 @@ export type BlockContent = BlockBody & { templateId?: number | null };
  * but a stored block should say exactly what the athlete is asked to do.
  */
 export function normaliseBlock<T extends BlockContent>(block: T): T {
-  const running = RUNNING_KINDS.includes(block.kind) && block.running
-    ? { ...block.running, runInM: block.running.start === "flying" ? block.running.runInM : 0 }
-    : null;
+  const running =
+    RUNNING_KINDS.includes(block.kind) && block.running
+      ? { ...block.running, runInM: block.running.start === "flying" ? block.running.runInM : 0 }
+      : null;
   const drills = block.kind === "plyometric" && block.drills && block.drills.length > 0 ? block.drills : null;
   const notes = block.notes?.trim() ? block.notes.trim() : null;
   return { ...block, running, drills, notes };
@@ -32,8 +33,17 @@ export function sessionFieldsFromTemplate(t: PlanTemplate) {
 }
 
 /** The engine's (and blockSummary's) view of a block, a template or a form's block; the id only when stored. */
-export function toBlockInput(b: Pick<PlanBlock, "kind" | "title" | "running" | "drills" | "notes"> & { id?: number }): BlockInput {
-  return { ...(b.id !== undefined ? { id: String(b.id) } : {}), kind: b.kind, title: b.title, running: b.running, drills: b.drills, ...(b.notes ? { notes: b.notes } : {}) };
+export function toBlockInput(
+  b: Pick<PlanBlock, "kind" | "title" | "running" | "drills" | "notes"> & { id?: number },
+): BlockInput {
+  return {
+    ...(b.id !== undefined ? { id: String(b.id) } : {}),
+    kind: b.kind,
+    title: b.title,
+    running: b.running,
+    drills: b.drills,
+    ...(b.notes ? { notes: b.notes } : {}),
+  };
 }
 
 /** The engine's view of a planned session (ids as strings, as lib/data/load.ts gives them). */
@@ -57,5 +67,7 @@ export function logsFor(logs: readonly LogInput[], sessions: readonly PlanSessio
 
 /** Sessions in calendar order: date, start time, then id (stable). */
 export function sortSessions<T extends Pick<PlanSession, "date" | "startTime" | "id">>(list: T[]): T[] {
-  return [...list].sort((a, b) => a.date.localeCompare(b.date) || a.startTime.localeCompare(b.startTime) || a.id - b.id);
+  return [...list].sort(
+    (a, b) => a.date.localeCompare(b.date) || a.startTime.localeCompare(b.startTime) || a.id - b.id,
+  );
 }

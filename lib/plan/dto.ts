@@ -45,7 +45,11 @@ export type SessionRow = {
   log?: { id: number } | null;
 };
 
-export type TemplateRow = Omit<BlockRow, "templateId" | "position"> & { durationMin: number; plannedRpe: number; version: number };
+export type TemplateRow = Omit<BlockRow, "templateId" | "position"> & {
+  durationMin: number;
+  plannedRpe: number;
+  version: number;
+};
 
 export function toPlanBlock(b: BlockRow): PlanBlock {
   return {
@@ -60,7 +64,8 @@ export function toPlanBlock(b: BlockRow): PlanBlock {
   };
 }
 
-const iso = (v: Date | string | null) => (v === null ? null : typeof v === "string" ? new Date(v).toISOString() : v.toISOString());
+const iso = (v: Date | string | null) =>
+  v === null ? null : typeof v === "string" ? new Date(v).toISOString() : v.toISOString();
 
 export function toPlanSession(s: SessionRow): PlanSession {
   const blocks = (s.blocks ?? []).map(toPlanBlock).sort((a, b) => a.position - b.position || a.id - b.id);

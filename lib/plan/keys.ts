@@ -7,4 +7,5 @@ export const sessionBlocksPath = (sessionId: number) => `/api/sessions/${session
 export const sessionBlockPath = (sessionId: number, blockId: number) => `/api/sessions/${sessionId}/blocks/${blockId}`;
 export const teamTemplatesPath = (teamId: number) => `/api/teams/${teamId}/templates`;
 export const templatePath = (templateId: number) => `/api/templates/${templateId}`;
-export const weekToolPath = (teamId: number, tool: "copy-to-next" | "clear" | "publish") => `/api/teams/${teamId}/plan/${tool}`;
+export const weekToolPath = (teamId: number, tool: "copy-to-next" | "clear" | "publish") =>
+  `/api/teams/${teamId}/plan/${tool}`;

@@ -11,7 +11,11 @@ type WeekFrame = Pick<PlanWeek, "weekStart" | "today" | "settings">;
  * A row's week numbers for a given list of sessions, computed in the browser with the same engine the
  * server uses (lib/load) over the history the plan GET sent. With no change it equals the server's row.
  */
-export function rowLoad(frame: WeekFrame, athlete: PlanAthlete, sessions: readonly PlanSession[] = athlete.sessions): RowLoad {
+export function rowLoad(
+  frame: WeekFrame,
+  athlete: PlanAthlete,
+  sessions: readonly PlanSession[] = athlete.sessions,
+): RowLoad {
   const ctx = athlete.context;
   const { week, flags } = computeWeekPreview({
     historyDates: ctx.historyDates,

@@ -7,7 +7,12 @@ import type { PlanSession, PlanWeek } from "./types";
 /** The physio restrictions a session in the grid breaks (same check as the server's). */
 export function sessionHits(week: { restrictions: readonly Restriction[] }, s: PlanSession): RestrictionHit[] {
   if (week.restrictions.length === 0) return [];
-  return restrictionHits(week.restrictions, { athleteId: s.athleteId, date: s.date, status: s.status, blocks: s.blocks.map(toBlockInput) });
+  return restrictionHits(week.restrictions, {
+    athleteId: s.athleteId,
+    date: s.date,
+    status: s.status,
+    blocks: s.blocks.map(toBlockInput),
+  });
 }
 
 /**

@@ -1,6 +1,14 @@
 // Plain JSON shapes of the week plan, shared by lib/data/plan.ts, the route handlers and the week grid.
 import type { Flag, FlagLevel } from "@/lib/load/flags";
-import type { AthleteProfile, BlockKind, LogInput, PlyoDrill, RunningPrescription, SessionStatus, TeamLoadSettings } from "@/lib/load/types";
+import type {
+  AthleteProfile,
+  BlockKind,
+  LogInput,
+  PlyoDrill,
+  RunningPrescription,
+  SessionStatus,
+  TeamLoadSettings,
+} from "@/lib/load/types";
 import type { WeekPreviewContext } from "@/lib/load/week-preview";
 import type { WeekSummary } from "@/lib/load/week-summary";
 import type { Restriction } from "@/lib/restrictions/rules";

@@ -21,7 +21,8 @@ function mode(levels: PlyoLevel[]): PlyoLevel {
  * engine's documented defaults when nobody is tested) and the most common plyometric level.
  */
 export function typicalProfile(profiles: readonly AthleteProfile[]): AthleteProfile & { tested: boolean } {
-  const pick = (f: (p: AthleteProfile) => number | null) => median(profiles.map(f).filter((v): v is number => typeof v === "number" && v > 0));
+  const pick = (f: (p: AthleteProfile) => number | null) =>
+    median(profiles.map(f).filter((v): v is number => typeof v === "number" && v > 0));
   const vmax = pick((p) => p.vmax);
   return {
     vmax: vmax ?? DEFAULT_VMAX,

@@ -13,7 +13,10 @@ export type UndoOp =
   | { op: "reinstate"; sessionId: number }
   | { op: "restore-fields"; sessionId: number; fields: EditableFields };
 
-export type EditableFields = Pick<PlanSession, "startTime" | "durationMin" | "title" | "plannedRpe" | "notes" | "blocks">;
+export type EditableFields = Pick<
+  PlanSession,
+  "startTime" | "durationMin" | "title" | "plannedRpe" | "notes" | "blocks"
+>;
 
 export type UndoEntry = { label: string; ops: UndoOp[] };
 
@@ -36,7 +39,11 @@ function addedBlockIds(before: PlanSession | undefined, after: PlanSession): num
 }
 
 /** How to take back a saved drop, given the sessions as they were and the server's answer. */
-export function undoForChange(change: PlanChange, before: (sessionId: number) => PlanSession | undefined, result: PlanWriteResult): UndoEntry {
+export function undoForChange(
+  change: PlanChange,
+  before: (sessionId: number) => PlanSession | undefined,
+  result: PlanWriteResult,
+): UndoEntry {
   const ops: UndoOp[] = [];
   switch (change.kind) {
     case "move": {
@@ -61,7 +68,16 @@ export function undoForChange(change: PlanChange, before: (sessionId: number) =>
 /** Undo for an edit made in the session editor: put the fields back. */
 export function undoForEdit(before: PlanSession): UndoEntry {
   const { startTime, durationMin, title, plannedRpe, notes, blocks } = before;
-  return { label: "edit", ops: [{ op: "restore-fields", sessionId: before.id, fields: { startTime, durationMin, title, plannedRpe, notes, blocks } }] };
+  return {
+    label: "edit",
+    ops: [
+      {
+        op: "restore-fields",
+        sessionId: before.id,
+        fields: { startTime, durationMin, title, plannedRpe, notes, blocks },
+      },
+    ],
+  };
 }
 
 /** Undo for a delete: a removed draft is written again; a cancelled published session is reinstated. */

@@ -5,7 +5,8 @@ import { DateTime } from "luxon";
 
 function day(date: string): DateTime {
   const d = DateTime.fromISO(date, { zone: "utc" });
-  if (!d.isValid || !/^\d{4}-\d{2}-\d{2}$/.test(date)) throw new RangeError(`Expected a date as YYYY-MM-DD, got "${date}"`);
+  if (!d.isValid || !/^\d{4}-\d{2}-\d{2}$/.test(date))
+    throw new RangeError(`Expected a date as YYYY-MM-DD, got "${date}"`);
   return d;
 }
 

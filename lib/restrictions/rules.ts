@@ -97,7 +97,12 @@ export function describeRule(r: RestrictionRule): string {
 export function describeRestriction(r: Restriction): string {
   const last = lastDay(r);
   const from = formatDayLabel(r.startsOn);
-  const span = last === null ? `from ${from}, until lifted` : last < r.startsOn ? "lifted before it began" : `${from} – ${formatDayLabel(last)}`;
+  const span =
+    last === null
+      ? `from ${from}, until lifted`
+      : last < r.startsOn
+        ? "lifted before it began"
+        : `${from} – ${formatDayLabel(last)}`;
   return `${describeRule(r)}, ${span}`;
 }
 
@@ -110,7 +115,9 @@ function contactsOf(block: BlockInput): number {
 export function ruleBreaches(r: RestrictionRule, blocks: readonly BlockInput[]): string[] {
   switch (r.rule) {
     case "no_kind":
-      return blocks.filter((b) => r.blockKinds.includes(b.kind)).map((b) => `${b.title}: ${BLOCK_KIND_LABEL[b.kind].toLowerCase()}`);
+      return blocks
+        .filter((b) => r.blockKinds.includes(b.kind))
+        .map((b) => `${b.title}: ${BLOCK_KIND_LABEL[b.kind].toLowerCase()}`);
     case "max_intensity":
       return blocks
         .filter((b) => RUNNING_KINDS.includes(b.kind) && b.running && b.running.intensityPct > r.maxPct)
@@ -130,7 +137,15 @@ export function restrictionHits(restrictions: readonly Restriction[], session: R
     if (r.athleteId !== session.athleteId || !isActiveOn(r, session.date)) continue;
     const breaches = ruleBreaches(r, session.blocks);
     if (breaches.length === 0) continue;
-    hits.push({ restrictionId: r.id, athleteId: r.athleteId, date: session.date, rule: describeRestriction(r), detail: breaches.join("; "), note: r.note, setByName: r.setByName });
+    hits.push({
+      restrictionId: r.id,
+      athleteId: r.athleteId,
+      date: session.date,
+      rule: describeRestriction(r),
+      detail: breaches.join("; "),
+      note: r.note,
+      setByName: r.setByName,
+    });
   }
   return hits;
 }

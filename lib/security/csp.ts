@@ -28,4 +28,3 @@ export function contentSecurityPolicy({ nonce, dev }: { nonce: string; dev: bool
     .map(([name, values]) => `${name} ${values.join(" ")}`)
     .join("; ");
 }
-

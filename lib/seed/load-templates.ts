@@ -4,7 +4,10 @@ import type { BlockTemplate } from "@/models";
 // The demo team's shelf of blocks. Volumes are typical of sprint coaching practice (common practice, invented
 // here); contacts count one per landing of one foot or both feet together (NSCA).
 
-export type DemoTemplate = { key: TemplateKey } & Pick<BlockTemplate, "kind" | "title" | "running" | "drills" | "notes" | "durationMin" | "plannedRpe">;
+export type DemoTemplate = { key: TemplateKey } & Pick<
+  BlockTemplate,
+  "kind" | "title" | "running" | "drills" | "notes" | "durationMin" | "plannedRpe"
+>;
 
 export type TemplateKey =
   | "blockStarts"
@@ -18,7 +21,15 @@ export type TemplateKey =
   | "strength"
   | "recovery";
 
-const run = (sets: number, reps: number, distanceM: number, intensityPct: number, start: RunningPrescription["start"], restSec: number, runInM = 0): RunningPrescription => ({
+const run = (
+  sets: number,
+  reps: number,
+  distanceM: number,
+  intensityPct: number,
+  start: RunningPrescription["start"],
+  restSec: number,
+  runInM = 0,
+): RunningPrescription => ({
   sets,
   reps,
   distanceM,
@@ -29,11 +40,56 @@ const run = (sets: number, reps: number, distanceM: number, intensityPct: number
 });
 
 export const DEMO_TEMPLATES: DemoTemplate[] = [
-  { key: "blockStarts", kind: "acceleration", title: "Block starts 6 × 20 m", running: run(1, 6, 20, 95, "blocks", 180), drills: null, notes: "Full recovery; walk back.", durationMin: 60, plannedRpe: 6 },
-  { key: "crouchAccel", kind: "acceleration", title: "Crouch accelerations 2 × 3 × 30 m", running: run(2, 3, 30, 95, "crouch", 180), drills: null, notes: "5 min between sets.", durationMin: 60, plannedRpe: 6 },
-  { key: "flying30", kind: "max_velocity", title: "Flying 30s, 20 m run-in", running: run(1, 4, 30, 95, "flying", 300, 20), drills: null, notes: "Build through the run-in; hold form through the zone.", durationMin: 70, plannedRpe: 8 },
-  { key: "speedEndurance", kind: "speed_endurance", title: "Speed endurance 3 × 150 m", running: run(1, 3, 150, 88, "standing", 600), drills: null, notes: "10 min walk recovery.", durationMin: 70, plannedRpe: 8 },
-  { key: "tempo", kind: "tempo", title: "Tempo 8 × 100 m", running: run(1, 8, 100, 70, "standing", 60), drills: null, notes: "Grass if available; walk the bend.", durationMin: 45, plannedRpe: 4 },
+  {
+    key: "blockStarts",
+    kind: "acceleration",
+    title: "Block starts 6 × 20 m",
+    running: run(1, 6, 20, 95, "blocks", 180),
+    drills: null,
+    notes: "Full recovery; walk back.",
+    durationMin: 60,
+    plannedRpe: 6,
+  },
+  {
+    key: "crouchAccel",
+    kind: "acceleration",
+    title: "Crouch accelerations 2 × 3 × 30 m",
+    running: run(2, 3, 30, 95, "crouch", 180),
+    drills: null,
+    notes: "5 min between sets.",
+    durationMin: 60,
+    plannedRpe: 6,
+  },
+  {
+    key: "flying30",
+    kind: "max_velocity",
+    title: "Flying 30s, 20 m run-in",
+    running: run(1, 4, 30, 95, "flying", 300, 20),
+    drills: null,
+    notes: "Build through the run-in; hold form through the zone.",
+    durationMin: 70,
+    plannedRpe: 8,
+  },
+  {
+    key: "speedEndurance",
+    kind: "speed_endurance",
+    title: "Speed endurance 3 × 150 m",
+    running: run(1, 3, 150, 88, "standing", 600),
+    drills: null,
+    notes: "10 min walk recovery.",
+    durationMin: 70,
+    plannedRpe: 8,
+  },
+  {
+    key: "tempo",
+    kind: "tempo",
+    title: "Tempo 8 × 100 m",
+    running: run(1, 8, 100, 70, "standing", 60),
+    drills: null,
+    notes: "Grass if available; walk the bend.",
+    durationMin: 45,
+    plannedRpe: 4,
+  },
   {
     key: "plyoLow",
     kind: "plyometric",
@@ -76,6 +132,24 @@ export const DEMO_TEMPLATES: DemoTemplate[] = [
     durationMin: 30,
     plannedRpe: 7,
   },
-  { key: "strength", kind: "strength", title: "Strength · lower body", running: null, drills: null, notes: "Trap-bar deadlift, split squat, Nordic curls, calf raises.", durationMin: 60, plannedRpe: 6 },
-  { key: "recovery", kind: "recovery", title: "Recovery · mobility and easy bike", running: null, drills: null, notes: "Keep it easy: conversation pace.", durationMin: 30, plannedRpe: 2 },
+  {
+    key: "strength",
+    kind: "strength",
+    title: "Strength · lower body",
+    running: null,
+    drills: null,
+    notes: "Trap-bar deadlift, split squat, Nordic curls, calf raises.",
+    durationMin: 60,
+    plannedRpe: 6,
+  },
+  {
+    key: "recovery",
+    kind: "recovery",
+    title: "Recovery · mobility and easy bike",
+    running: null,
+    drills: null,
+    notes: "Keep it easy: conversation pace.",
+    durationMin: 30,
+    plannedRpe: 2,
+  },
 ];

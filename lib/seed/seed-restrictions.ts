@@ -30,7 +30,19 @@ export async function seedRestrictions(d: Db, club: SeededClub, options: { today
     await swapMaxVelocity(d, { teamId: club.teamId, athleteId: dario, from: startsOn, to: endsOn, transaction });
     await d.Restriction.bulkCreate(
       [
-        { teamId: club.teamId, athleteId: dario, rule: "no_kind", blockKinds: JSON.stringify(["max_velocity"]), limitValue: null, startsOn, endsOn, liftedOn: null, note: NOTE, createdBy: physio, liftedBy: null },
+        {
+          teamId: club.teamId,
+          athleteId: dario,
+          rule: "no_kind",
+          blockKinds: JSON.stringify(["max_velocity"]),
+          limitValue: null,
+          startsOn,
+          endsOn,
+          liftedOn: null,
+          note: NOTE,
+          createdBy: physio,
+          liftedBy: null,
+        },
         {
           teamId: club.teamId,
           athleteId: club.athleteIds[PAST_RESTRICTED_ATHLETE],
@@ -52,19 +64,42 @@ export async function seedRestrictions(d: Db, club: SeededClub, options: { today
 }
 
 /** Replaces the athlete's max-velocity blocks between two days (inclusive) by block starts of the same scale. */
-async function swapMaxVelocity(d: Db, { teamId, athleteId, from, to, transaction }: { teamId: number; athleteId: number; from: string; to: string; transaction: Transaction }) {
+async function swapMaxVelocity(
+  d: Db,
+  {
+    teamId,
+    athleteId,
+    from,
+    to,
+    transaction,
+  }: { teamId: number; athleteId: number; from: string; to: string; transaction: Transaction },
+) {
   const flying = DEMO_TEMPLATES.find((t) => t.key === "flying30")!;
   const starts = DEMO_TEMPLATES.find((t) => t.key === "blockStarts")!;
-  const template = await d.BlockTemplate.findOne({ where: { teamId, title: starts.title }, attributes: ["id"], transaction });
-  const sessions = await d.PlannedSession.findAll({ where: { teamId, athleteId, date: { [Op.between]: [from, to] } }, attributes: ["id", "title"], transaction });
+  const template = await d.BlockTemplate.findOne({
+    where: { teamId, title: starts.title },
+    attributes: ["id"],
+    transaction,
+  });
+  const sessions = await d.PlannedSession.findAll({
+    where: { teamId, athleteId, date: { [Op.between]: [from, to] } },
+    attributes: ["id", "title"],
+    transaction,
+  });
   for (const session of sessions) {
-    const blocks = await d.SessionBlock.findAll({ where: { sessionId: session.id, kind: "max_velocity" }, transaction });
+    const blocks = await d.SessionBlock.findAll({
+      where: { sessionId: session.id, kind: "max_velocity" },
+      transaction,
+    });
     if (blocks.length === 0) continue;
     for (const block of blocks) {
       // Keep the session's volume wave: the same share of the template's reps.
       const scale = (block.running?.reps ?? flying.running!.reps) / flying.running!.reps;
       const running = { ...starts.running!, reps: Math.max(1, Math.round(starts.running!.reps * scale)) };
-      await block.update({ kind: starts.kind, title: starts.title, templateId: template?.id ?? null, running, notes: starts.notes }, { transaction });
+      await block.update(
+        { kind: starts.kind, title: starts.title, templateId: template?.id ?? null, running, notes: starts.notes },
+        { transaction },
+      );
     }
     await session.update({ title: "Acceleration (no flying sprints)" }, { transaction });
   }

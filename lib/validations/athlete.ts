@@ -5,13 +5,14 @@ import { lineText } from "./text";
 const optionalNumber = (min: number, max: number, label: string) =>
   z.preprocess(
     (v) => (v === "" || v === null || v === undefined ? null : v),
-    z.coerce.number({ message: `${label} must be a number` }).min(min, `${label} must be at least ${min}`).max(max, `${label} must be at most ${max}`).nullable(),
+    z.coerce
+      .number({ message: `${label} must be a number` })
+      .min(min, `${label} must be at least ${min}`)
+      .max(max, `${label} must be at most ${max}`)
+      .nullable(),
   );
 
-const optionalDate = z.preprocess(
-  (v) => (v === "" || v === undefined ? null : v),
-  pastDateSchema.nullable(),
-);
+const optionalDate = z.preprocess((v) => (v === "" || v === undefined ? null : v), pastDateSchema.nullable());
 
 /** An athlete's profile and test values; ranges are generous bounds for sprinting humans, not norms. */
 export const athleteSchema = z.object({

@@ -8,7 +8,10 @@ export const signInSchema = z.object({
 });
 export type SignInInput = z.infer<typeof signInSchema>;
 
-const setPasswordFields = { token: lineText().min(20, "This link is not valid").max(200), confirm: z.string().max(200) };
+const setPasswordFields = {
+  token: lineText().min(20, "This link is not valid").max(200),
+  confirm: z.string().max(200),
+};
 const sameTwice = (v: { password: string; confirm: string }) => v.password === v.confirm;
 const differ = { path: ["confirm"], message: "The two passwords differ" };
 

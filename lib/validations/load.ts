@@ -25,7 +25,8 @@ export const athleteLoadQuerySchema = z
     if (!q.from || !q.to) return;
     const days = dayIndex(q.to) - dayIndex(q.from);
     if (days < 0) ctx.addIssue({ code: "custom", path: ["to"], message: "Must be on or after from" });
-    else if (days >= MAX_RANGE_DAYS) ctx.addIssue({ code: "custom", path: ["to"], message: `At most ${MAX_RANGE_DAYS} days from from` });
+    else if (days >= MAX_RANGE_DAYS)
+      ctx.addIssue({ code: "custom", path: ["to"], message: `At most ${MAX_RANGE_DAYS} days from from` });
   });
 export type AthleteLoadQuery = z.infer<typeof athleteLoadQuerySchema>;
 
@@ -44,9 +45,15 @@ export const previewSessionSchema = z.object({
   id: z.union([idSchema, lineText().min(1).max(40)]).optional(),
   date: localDateSchema,
   startTime: startTimeSchema.default("16:00"),
-  durationMin: z.number({ error: "Enter minutes" }).int("Whole minutes").min(5, "At least 5 min").max(300, "At most 300 min"),
+  durationMin: z
+    .number({ error: "Enter minutes" })
+    .int("Whole minutes")
+    .min(5, "At least 5 min")
+    .max(300, "At most 300 min"),
   plannedRpe: z.number({ error: "Enter an RPE from 0 to 10" }).min(0, "CR-10: 0 to 10").max(10, "CR-10: 0 to 10"),
-  status: z.enum(["draft", "published", "cancelled"], { error: "Choose draft, published or cancelled" }).default("draft"),
+  status: z
+    .enum(["draft", "published", "cancelled"], { error: "Choose draft, published or cancelled" })
+    .default("draft"),
   blocks: z.array(previewBlockSchema).max(20, "At most 20 blocks"),
 });
 export type PreviewSession = z.infer<typeof previewSessionSchema>;

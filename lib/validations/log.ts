@@ -9,8 +9,19 @@ export const sessionLogSchema = z
   .object({
     completion: z.enum(LOG_COMPLETIONS, { error: 'Choose "yes", "partly" or "no"' }),
     /** Session RPE, CR-10 (Foster et al. 2001). */
-    rpe: z.number({ error: "Enter an RPE from 0 to 10" }).min(0, "CR-10: 0 to 10").max(10, "CR-10: 0 to 10").nullable().default(null),
-    minutes: z.number({ error: "Enter minutes" }).int("Whole minutes").min(1, "At least 1 min").max(600, "At most 600 min").nullable().default(null),
+    rpe: z
+      .number({ error: "Enter an RPE from 0 to 10" })
+      .min(0, "CR-10: 0 to 10")
+      .max(10, "CR-10: 0 to 10")
+      .nullable()
+      .default(null),
+    minutes: z
+      .number({ error: "Enter minutes" })
+      .int("Whole minutes")
+      .min(1, "At least 1 min")
+      .max(600, "At most 600 min")
+      .nullable()
+      .default(null),
     completedReps: z
       .record(
         z.string().regex(/^\d+$/, "Use the session's block ids"),

@@ -24,7 +24,10 @@ export const passwordSchema = z
   .string()
   .min(PASSWORD_MIN, `Use at least ${PASSWORD_MIN} characters`)
   .max(PASSWORD_MAX, `Use at most ${PASSWORD_MAX} characters`)
-  .refine((p) => new TextEncoder().encode(p).length <= BCRYPT_MAX_BYTES, `This password is too long; use fewer special characters`)
+  .refine(
+    (p) => new TextEncoder().encode(p).length <= BCRYPT_MAX_BYTES,
+    `This password is too long; use fewer special characters`,
+  )
   .refine((p) => p.trim().length > 0, "A password cannot be only spaces")
   .refine((p) => new Set(p.toLowerCase()).size >= 4, "Use more different characters")
   .refine((p) => !isCommon(p), "This password is too common; choose a less predictable one");

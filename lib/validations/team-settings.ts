@@ -12,13 +12,23 @@ const fields = {
   spikeRatio: z.coerce.number({ message: "Enter a ratio" }).min(1, "At least 1.00").max(3, "At most 3.00"),
   risingRatio: z.coerce.number({ message: "Enter a ratio" }).min(1, "At least 1.00").max(3, "At most 3.00"),
   lowRatio: z.coerce.number({ message: "Enter a ratio" }).min(0.3, "At least 0.30").max(1, "At most 1.00"),
-  weeklyChangeLimitPct: z.coerce.number({ message: "Enter a percentage" }).min(1, "At least 1%").max(100, "At most 100%"),
+  weeklyChangeLimitPct: z.coerce
+    .number({ message: "Enter a percentage" })
+    .min(1, "At least 1%")
+    .max(100, "At most 100%"),
   recoveryHours: z.coerce.number({ message: "Enter hours" }).min(12, "At least 12 h").max(120, "At most 120 h"),
   speedZones: z.enum(SPEED_ZONES, { message: "Choose absolute or relative speed zones" }),
   hsrPct: z.coerce.number({ message: "Enter a percentage" }).min(50, "At least 50%").max(95, "At most 95%"),
-  sprintSpeedMs: z.coerce.number({ message: "Enter a speed in m/s" }).min(5, "At least 5 m/s").max(11, "At most 11 m/s"),
+  sprintSpeedMs: z.coerce
+    .number({ message: "Enter a speed in m/s" })
+    .min(5, "At least 5 m/s")
+    .max(11, "At most 11 m/s"),
   maximalPct: z.coerce.number({ message: "Enter a percentage" }).min(85, "At least 85%").max(100, "At most 100%"),
-  recoveryWork: z.array(z.enum(RECOVERY_WORK, { message: "Unknown kind of work" }), { message: "Choose the work that needs recovery" }).refine((v) => new Set(v).size === v.length, "Each kind once"),
+  recoveryWork: z
+    .array(z.enum(RECOVERY_WORK, { message: "Unknown kind of work" }), {
+      message: "Choose the work that needs recovery",
+    })
+    .refine((v) => new Set(v).size === v.length, "Each kind once"),
   missingLogs: z.enum(MISSING_LOGS, { message: "Choose estimate or exclude" }),
   monotonyLimit: z.coerce.number({ message: "Enter a monotony" }).min(1, "At least 1.0").max(5, "At most 5.0"),
 };

@@ -6,7 +6,11 @@ import { BLOCK_KINDS, RUNNING_KINDS } from "@/lib/load/types";
 // Ranges are wide enough for any sprint group and narrow enough to catch a typo (300 reps, 950%).
 
 const count = (what: string, max: number) =>
-  z.number({ error: `Enter the ${what}` }).int(`Whole ${what} only`).min(1, `At least 1`).max(max, `At most ${max}`);
+  z
+    .number({ error: `Enter the ${what}` })
+    .int(`Whole ${what} only`)
+    .min(1, `At least 1`)
+    .max(max, `At most ${max}`);
 
 export const startTypeSchema = z.enum(["standing", "crouch", "blocks", "flying"], { error: "Choose a start" });
 export const plyoIntensitySchema = z.enum(["low", "moderate", "high"], { error: "Choose an intensity" });
@@ -20,7 +24,11 @@ export const runningSchema = z
     intensityPct: z.number({ error: "Enter a % of max velocity" }).min(50, "At least 50%").max(100, "At most 100%"),
     start: startTypeSchema,
     runInM: z.number({ error: "Enter a run-in in m" }).min(0, "Not negative").max(60, "At most 60 m"),
-    restSec: z.number({ error: "Enter rest in seconds" }).int("Whole seconds").min(0, "Not negative").max(1800, "At most 30 min"),
+    restSec: z
+      .number({ error: "Enter rest in seconds" })
+      .int("Whole seconds")
+      .min(0, "Not negative")
+      .max(1800, "At most 30 min"),
   })
   .superRefine((r, ctx) => {
     if (r.start !== "flying" && r.runInM > 0) {
@@ -39,7 +47,9 @@ export const drillSchema = z.object({
   intensity: plyoIntensitySchema,
 });
 
-const title = lineText({ error: "Give it a title" }).min(1, "Give it a title").max(120, "Keep the title under 120 characters");
+const title = lineText({ error: "Give it a title" })
+  .min(1, "Give it a title")
+  .max(120, "Keep the title under 120 characters");
 const notes = noteText().max(1000, "Keep notes under 1000 characters").nullable();
 
 const blockFields = {
@@ -69,11 +79,17 @@ export type BlockBody = z.infer<typeof blockSchema>;
 export const templateSchema = z
   .object({
     ...blockFields,
-    durationMin: z.number({ error: "Enter minutes" }).int("Whole minutes").min(5, "At least 5 min").max(300, "At most 300 min"),
+    durationMin: z
+      .number({ error: "Enter minutes" })
+      .int("Whole minutes")
+      .min(5, "At least 5 min")
+      .max(300, "At most 300 min"),
     plannedRpe: z.number({ error: "Enter an RPE from 0 to 10" }).min(0, "CR-10: 0 to 10").max(10, "CR-10: 0 to 10"),
   })
   .superRefine(requirePrescription);
 export type TemplateInput = z.infer<typeof templateSchema>;
 
 /** PUT /api/templates/[id]: the whole form and the version it was read at (409 "stale" when it moved on). */
-export const updateTemplateSchema = templateSchema.and(z.object({ version: z.number({ error: "Send the version you read" }).int().min(1, "Send the version you read") }));
+export const updateTemplateSchema = templateSchema.and(
+  z.object({ version: z.number({ error: "Send the version you read" }).int().min(1, "Send the version you read") }),
+);

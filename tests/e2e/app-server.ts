@@ -36,7 +36,8 @@ const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 export async function ensureBuilt(): Promise<void> {
   const runId = process.env.SPRINTWRIGHT_RUN_ID ?? "manual";
   const marker = join(ROOT, DIST, "sprintwright-run");
-  const ready = () => existsSync(marker) && (process.env.E2E_REUSE_BUILD === "1" || readFileSync(marker, "utf8") === runId);
+  const ready = () =>
+    existsSync(marker) && (process.env.E2E_REUSE_BUILD === "1" || readFileSync(marker, "utf8") === runId);
   if (ready()) return;
   const lock = join(ROOT, `${DIST}.lock`);
   for (;;) {
@@ -50,7 +51,11 @@ export async function ensureBuilt(): Promise<void> {
   }
   try {
     if (ready()) return;
-    const res = spawnSync(process.execPath, [NEXT, "build"], { cwd: ROOT, env: { ...process.env, NEXT_DIST_DIR: DIST, NODE_ENV: "production", NEXT_SKIP_TYPECHECK: "1" }, encoding: "utf8" });
+    const res = spawnSync(process.execPath, [NEXT, "build"], {
+      cwd: ROOT,
+      env: { ...process.env, NEXT_DIST_DIR: DIST, NODE_ENV: "production", NEXT_SKIP_TYPECHECK: "1" },
+      encoding: "utf8",
+    });
     if (res.status !== 0) throw new Error(`next build failed:\n${res.stdout}\n${res.stderr}`);
     writeFileSync(marker, runId);
   } finally {
@@ -61,7 +66,10 @@ export async function ensureBuilt(): Promise<void> {
 export type App = { url: string; port: number; dbPath: string; env: Record<string, string>; stop: () => Promise<void> };
 
 /** Starts `next start` on a free port with its own migrated (and by default demo-seeded) SQLite database. */
-export async function startApp({ env = {}, seed = true }: { env?: Record<string, string>; seed?: boolean } = {}): Promise<App> {
+export async function startApp({
+  env = {},
+  seed = true,
+}: { env?: Record<string, string>; seed?: boolean } = {}): Promise<App> {
   await ensureBuilt();
   const dir = mkdtempSync(join(tmpdir(), "sprintwright-e2e-"));
   const dbPath = join(dir, "app.sqlite");
@@ -76,11 +84,24 @@ export async function startApp({ env = {}, seed = true }: { env?: Record<string,
     MAILBOX_DIR: join(dir, "mailbox"),
     ...env,
   };
-  const fullEnv = { NEXT_TELEMETRY_DISABLED: "1", ...process.env, ...appEnv, NODE_ENV: "production" } as NodeJS.ProcessEnv;
-  const prep = spawnSync(process.execPath, ["--conditions=react-server", "--import", "tsx", "scripts/db-prepare.ts", ...(seed ? [] : ["--no-seed"])], { cwd: ROOT, env: fullEnv, encoding: "utf8" });
+  const fullEnv = {
+    NEXT_TELEMETRY_DISABLED: "1",
+    ...process.env,
+    ...appEnv,
+    NODE_ENV: "production",
+  } as NodeJS.ProcessEnv;
+  const prep = spawnSync(
+    process.execPath,
+    ["--conditions=react-server", "--import", "tsx", "scripts/db-prepare.ts", ...(seed ? [] : ["--no-seed"])],
+    { cwd: ROOT, env: fullEnv, encoding: "utf8" },
+  );
   if (prep.status !== 0) throw new Error(`db-prepare failed:\n${prep.stdout}\n${prep.stderr}`);
 
-  const child: ChildProcess = spawn(process.execPath, [NEXT, "start", "-p", String(port), "-H", "127.0.0.1"], { cwd: ROOT, env: fullEnv, stdio: ["ignore", "pipe", "pipe"] });
+  const child: ChildProcess = spawn(process.execPath, [NEXT, "start", "-p", String(port), "-H", "127.0.0.1"], {
+    cwd: ROOT,
+    env: fullEnv,
+    stdio: ["ignore", "pipe", "pipe"],
+  });
   let output = "";
   child.stdout?.on("data", (b) => (output += b));
   child.stderr?.on("data", (b) => (output += b));
@@ -115,7 +136,15 @@ export async function launchBrowser(): Promise<Browser> {
   return chromium.launch({
     executablePath: CHROMIUM_PATH,
     headless: true,
-    args: ["--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-first-run", "--disable-quic"],
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+      "--no-first-run",
+      "--disable-quic",
+    ],
   });
 }
 
@@ -154,9 +183,15 @@ export async function apiSession(app: App, email: string, password = DEMO_PASSWO
     body: new URLSearchParams({ csrfToken, email, password, json: "true" }),
   });
   keep(login);
-  if (![...jar.keys()].some((k) => k.endsWith("next-auth.session-token"))) throw new Error(`HTTP sign-in failed for ${email}`);
+  if (![...jar.keys()].some((k) => k.endsWith("next-auth.session-token")))
+    throw new Error(`HTTP sign-in failed for ${email}`);
   return {
     cookie,
-    fetch: (path: string, init: RequestInit = {}) => fetch(`${app.url}${path}`, { ...init, redirect: "manual", headers: { ...(init.headers ?? {}), cookie: cookie() } }),
+    fetch: (path: string, init: RequestInit = {}) =>
+      fetch(`${app.url}${path}`, {
+        ...init,
+        redirect: "manual",
+        headers: { ...(init.headers ?? {}), cookie: cookie() },
+      }),
   };
 }

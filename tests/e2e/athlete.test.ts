@@ -30,15 +30,31 @@ describeBrowser("athlete journey", () => {
 
   it("the coach publishes next week: the athlete gets a calendar invitation (METHOD:REQUEST) by e-mail", async () => {
     const coach = await apiSession(app, "coach@harbourvale.test");
-    const [maya] = await app.query<{ id: number; team_id: number }>("SELECT a.id, a.team_id FROM athletes a JOIN users u ON u.id = a.user_id WHERE u.email = ?", [MAYA]);
+    const [maya] = await app.query<{ id: number; team_id: number }>(
+      "SELECT a.id, a.team_id FROM athletes a JOIN users u ON u.id = a.user_id WHERE u.email = ?",
+      [MAYA],
+    );
     const nextWeek = addDays(startOfWeek(teamToday({ timeZone: "Europe/London" }), 1), 7);
     const created = await coach.fetch(`/api/teams/${maya!.team_id}/sessions`, {
       method: "POST",
       headers: { "content-type": "application/json" },
-      body: JSON.stringify({ from: "blank", athleteId: maya!.id, date: addDays(nextWeek, 6), startTime: "11:00", durationMin: 45, title: "Sunday strides, relaxed", plannedRpe: 4, blocks: [] }),
+      body: JSON.stringify({
+        from: "blank",
+        athleteId: maya!.id,
+        date: addDays(nextWeek, 6),
+        startTime: "11:00",
+        durationMin: 45,
+        title: "Sunday strides, relaxed",
+        plannedRpe: 4,
+        blocks: [],
+      }),
     });
     expect(created.status, await created.clone().text()).toBeLessThan(300);
-    const published = await coach.fetch(`/api/teams/${maya!.team_id}/plan/publish`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ week: nextWeek }) });
+    const published = await coach.fetch(`/api/teams/${maya!.team_id}/plan/publish`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ week: nextWeek }),
+    });
     expect(published.status, await published.clone().text()).toBe(200);
     const mail = await app.waitForMail(MAYA, (m) => m.subject.startsWith("Your sessions for the week of"));
     const ics = mail.attachments.find((a) => /^text\/calendar/i.test(a.contentType));
@@ -68,12 +84,21 @@ describeBrowser("athlete journey", () => {
     expect(res.headers.get("content-type")).toBe("text/calendar; charset=utf-8");
     const cal = new ICAL.Component(ICAL.parse(await res.text()));
     const events = cal.getAllSubcomponents("vevent").map((v) => new ICAL.Event(v));
-    const [{ id }] = await app.query<{ id: number }>("SELECT a.id FROM athletes a JOIN users u ON u.id = a.user_id WHERE u.email = ?", [MAYA]);
-    const stored = await app.query<{ id: number }>("SELECT id FROM planned_sessions WHERE athlete_id = ? AND status IN ('published','cancelled') ORDER BY date, start_time, id", [id]);
+    const [{ id }] = await app.query<{ id: number }>(
+      "SELECT a.id FROM athletes a JOIN users u ON u.id = a.user_id WHERE u.email = ?",
+      [MAYA],
+    );
+    const stored = await app.query<{ id: number }>(
+      "SELECT id FROM planned_sessions WHERE athlete_id = ? AND status IN ('published','cancelled') ORDER BY date, start_time, id",
+      [id],
+    );
     expect(stored.length).toBeGreaterThan(0);
     expect(events.map((e) => e.uid)).toEqual(stored.map((s) => `session-${s.id}@sprintwright`));
     expect(events.map((e) => e.summary)).toContain("Sunday strides, relaxed");
-    const others = await app.query<{ n: number }>("SELECT COUNT(*) AS n FROM planned_sessions WHERE athlete_id <> ? AND status = 'published'", [id]);
+    const others = await app.query<{ n: number }>(
+      "SELECT COUNT(*) AS n FROM planned_sessions WHERE athlete_id <> ? AND status = 'published'",
+      [id],
+    );
     expect(others[0]!.n).toBeGreaterThan(0); // other athletes have sessions, and none of them is in Maya's feed
     await page.close();
   });
@@ -81,7 +106,10 @@ describeBrowser("athlete journey", () => {
   it("logs a session from the phone", async () => {
     const page = await context.newPage();
     await page.goto(`${app.url}/me`);
-    const card = page.getByTestId("my-session").filter({ has: page.getByTestId("log-form") }).first();
+    const card = page
+      .getByTestId("my-session")
+      .filter({ has: page.getByTestId("log-form") })
+      .first();
     await card.waitFor();
     const sessionId = Number(await card.getAttribute("data-session-id"));
     await card.getByTestId("log-completion-partly").check();
@@ -111,9 +139,15 @@ describeBrowser("athlete journey", () => {
     await card.getByTestId("log-status").getByText("Saved").waitFor();
     await screenshot(page, "athlete-logged");
     await card.screenshot({ path: "tests/e2e/artifacts/athlete-log-card.png" });
-    const [log] = await app.query<{ completion: string; rpe: number; minutes: number; notes: string }>("SELECT completion, rpe, minutes, notes FROM session_logs WHERE session_id = ?", [sessionId]);
+    const [log] = await app.query<{ completion: string; rpe: number; minutes: number; notes: string }>(
+      "SELECT completion, rpe, minutes, notes FROM session_logs WHERE session_id = ?",
+      [sessionId],
+    );
     expect(log).toEqual({ completion: "partly", rpe: 6.5, minutes: 55, notes: "Legs heavy after the third rep." });
-    const [{ completed_reps: reps }] = await app.query<{ completed_reps: string }>("SELECT completed_reps FROM session_logs WHERE session_id = ?", [sessionId]);
+    const [{ completed_reps: reps }] = await app.query<{ completed_reps: string }>(
+      "SELECT completed_reps FROM session_logs WHERE session_id = ?",
+      [sessionId],
+    );
     expect(JSON.parse(reps)).toEqual(expected);
     await page.reload();
     await page.locator(`[data-session-id="${sessionId}"]`).getByTestId("my-log-summary").waitFor();

@@ -13,14 +13,29 @@ type ActionRef = { id: string; path: string };
 /** Server action ids come from the build's manifest, as the browser gets them; posted to a page that uses them. */
 export function actionRefs(): Map<string, ActionRef> {
   const dist = process.env.E2E_DIST_DIR || ".next-e2e";
-  const manifest = JSON.parse(readFileSync(join(process.cwd(), dist, "server/server-reference-manifest.json"), "utf8")) as {
+  const manifest = JSON.parse(
+    readFileSync(join(process.cwd(), dist, "server/server-reference-manifest.json"), "utf8"),
+  ) as {
     node: Record<string, { exportedName?: string; filename?: string; workers: Record<string, unknown> }>;
   };
   const refs = new Map<string, ActionRef>();
   for (const [id, entry] of Object.entries(manifest.node)) {
     if (!entry.filename || !entry.exportedName) continue;
-    const dir = entry.filename.replace(/^app\//, "").replace(/\/actions\.ts$/, "").split("/").filter((p) => !/^\(.*\)$/.test(p)).join("/");
-    const pages = Object.keys(entry.workers).map((w) => `/${w.replace(/^app\//, "").replace(/\/page$/, "").split("/").filter((p) => !/^\(.*\)$/.test(p)).join("/")}`);
+    const dir = entry.filename
+      .replace(/^app\//, "")
+      .replace(/\/actions\.ts$/, "")
+      .split("/")
+      .filter((p) => !/^\(.*\)$/.test(p))
+      .join("/");
+    const pages = Object.keys(entry.workers).map(
+      (w) =>
+        `/${w
+          .replace(/^app\//, "")
+          .replace(/\/page$/, "")
+          .split("/")
+          .filter((p) => !/^\(.*\)$/.test(p))
+          .join("/")}`,
+    );
     const path = (pages.find((p) => !p.includes("[")) ?? pages[0]).replace(/\[[^\]]+\]/g, "x");
     refs.set(`ACTION /${dir}#${entry.exportedName}`, { id, path });
   }
@@ -44,7 +59,9 @@ function pageAnswer(res: Response, body: string, w: World): Answer {
   if (res.status >= 300 && res.status < 400 && location) return where(location, w);
   if (res.status === 404) return "not-found";
   if (res.status !== 200) return res.status;
-  const redirect = /NEXT_REDIRECT;(?:replace|push);([^;"]+);/.exec(body) ?? /http-equiv="refresh" content="\d+;url=([^"]+)"/.exec(body);
+  const redirect =
+    /NEXT_REDIRECT;(?:replace|push);([^;"]+);/.exec(body) ??
+    /http-equiv="refresh" content="\d+;url=([^"]+)"/.exec(body);
   if (redirect) return where(redirect[1].replace(/&amp;/g, "&"), w);
   const fallback = /NEXT_HTTP_ERROR_FALLBACK;(\d{3})/.exec(body);
   if (fallback) return fallback[1] === "404" ? "not-found" : Number(fallback[1]);
@@ -65,7 +82,13 @@ function actionAnswer(res: Response, body: string, w: World): Answer {
   return "refused";
 }
 
-export async function call(w: World, subject: Subject, key: string, req: Req, actions: Map<string, ActionRef>): Promise<Outcome> {
+export async function call(
+  w: World,
+  subject: Subject,
+  key: string,
+  req: Req,
+  actions: Map<string, ActionRef>,
+): Promise<Outcome> {
   if (req.kind === "api") {
     const res = await w.as(subject, req.method, req.path, req.body);
     return { answer: res.status, status: res.status, body: await res.text() };
@@ -79,7 +102,12 @@ export async function call(w: World, subject: Subject, key: string, req: Req, ac
   if (!ref) throw new Error(`no server action ${key} in the build's manifest`);
   const res = await w.clients[subject].fetch(ref.path, {
     method: "POST",
-    headers: { "next-action": ref.id, accept: "text/x-component", "content-type": "text/plain;charset=UTF-8", origin: w.app.url },
+    headers: {
+      "next-action": ref.id,
+      accept: "text/x-component",
+      "content-type": "text/plain;charset=UTF-8",
+      origin: w.app.url,
+    },
     body: JSON.stringify(req.args),
   });
   const body = await res.text();

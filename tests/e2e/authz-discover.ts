@@ -18,16 +18,24 @@ function walk(dir: string, name: string): string[] {
 
 /** `app/(workspace)/squad/[athleteId]/page.tsx` → `/squad/[athleteId]`: route groups vanish from URLs. */
 function urlOf(file: string): string {
-  const parts = relative(APP, file).split(sep).slice(0, -1).filter((p) => !/^\(.*\)$/.test(p));
+  const parts = relative(APP, file)
+    .split(sep)
+    .slice(0, -1)
+    .filter((p) => !/^\(.*\)$/.test(p));
   return `/${parts.join("/")}`;
 }
 
 function exportedNames(source: string): string[] {
   const names = new Set<string>();
-  for (const m of source.matchAll(/export\s+(?:async\s+)?(?:const|function|let)\s+([A-Za-z_$][\w$]*)/g)) names.add(m[1]);
+  for (const m of source.matchAll(/export\s+(?:async\s+)?(?:const|function|let)\s+([A-Za-z_$][\w$]*)/g))
+    names.add(m[1]);
   for (const m of source.matchAll(/export\s*\{([^}]*)\}/g)) {
     for (const part of m[1].split(",")) {
-      const alias = part.trim().split(/\s+as\s+/).pop()?.trim();
+      const alias = part
+        .trim()
+        .split(/\s+as\s+/)
+        .pop()
+        ?.trim();
       if (alias) names.add(alias);
     }
   }
@@ -63,7 +71,11 @@ export function discoverActions(): ActionEntry[] {
   return walk(APP, "actions.ts")
     .flatMap((file) => {
       const rel = relative(process.cwd(), file);
-      return exportedNames(readFileSync(file, "utf8")).map((name) => ({ key: `ACTION ${urlOf(file)}#${name}`, name, file: rel }));
+      return exportedNames(readFileSync(file, "utf8")).map((name) => ({
+        key: `ACTION ${urlOf(file)}#${name}`,
+        name,
+        file: rel,
+      }));
     })
     .sort((a, b) => a.key.localeCompare(b.key));
 }

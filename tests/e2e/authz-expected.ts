@@ -9,7 +9,16 @@
 import type { Subject } from "./authz-fixtures";
 
 export type Answer = number | "ok" | "sign-in" | "not-allowed" | "not-found" | "refused" | `redirect:${string}`;
-type Line = [key: string, anon: Answer, own: Answer, other: Answer, physio: Answer, coach: Answer, head: Answer, outsider: Answer];
+type Line = [
+  key: string,
+  anon: Answer,
+  own: Answer,
+  other: Answer,
+  physio: Answer,
+  coach: Answer,
+  head: Answer,
+  outsider: Answer,
+];
 
 // prettier-ignore
 const TABLE: Line[] = [
@@ -97,6 +106,9 @@ const TABLE: Line[] = [
 export const KNOWN_DEFECTS: Record<string, Partial<Record<Subject, string>>> = {};
 
 export const EXPECTED: Record<string, Record<Subject, Answer>> = Object.fromEntries(
-  TABLE.map(([key, anon, own, other, physio, coach, head, outsider]) => [key, { anon, own, other, physio, coach, head, outsider }]),
+  TABLE.map(([key, anon, own, other, physio, coach, head, outsider]) => [
+    key,
+    { anon, own, other, physio, coach, head, outsider },
+  ]),
 );
 export const TABLE_KEYS = TABLE.map(([key]) => key);

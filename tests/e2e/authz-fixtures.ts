@@ -23,17 +23,35 @@ export async function setupWorld(app: MailApp) {
   const one = async <T extends Row>(sql: string, args: unknown[] = []) => (await app.query<T>(sql, args))[0];
   const now = sqlNow();
   const teamId = (await one<{ id: number }>("SELECT id FROM teams ORDER BY id LIMIT 1")).id;
-  const athleteOf = async (email: string) => (await one<{ id: number }>("SELECT a.id FROM athletes a JOIN users u ON u.id = a.user_id WHERE u.email = ?", [email])).id;
+  const athleteOf = async (email: string) =>
+    (
+      await one<{ id: number }>("SELECT a.id FROM athletes a JOIN users u ON u.id = a.user_id WHERE u.email = ?", [
+        email,
+      ])
+    ).id;
   const maya = { id: await athleteOf(MAYA), email: MAYA };
   const jonah = { id: await athleteOf(JONAH), email: JONAH };
 
   // Another team with its own head coach: everything of team A must answer it 404.
-  await app.query("INSERT INTO teams (name, time_zone, week_start_day, created_at, updated_at) VALUES (?, 'Europe/London', 1, ?, ?)", [OUTSIDER.team, now, now]);
+  await app.query(
+    "INSERT INTO teams (name, time_zone, week_start_day, created_at, updated_at) VALUES (?, 'Europe/London', 1, ?, ?)",
+    [OUTSIDER.team, now, now],
+  );
   const otherTeamId = (await one<{ id: number }>("SELECT id FROM teams WHERE name = ?", [OUTSIDER.team])).id;
-  await app.query("INSERT INTO team_load_settings (team_id, created_at, updated_at) VALUES (?, ?, ?)", [otherTeamId, now, now]);
-  await app.query("INSERT INTO users (email, name, password_hash, created_at, updated_at) VALUES (?, 'Orla Outsider', ?, ?, ?)", [OUTSIDER.email, await hashPassword(OUTSIDER.password), now, now]);
+  await app.query("INSERT INTO team_load_settings (team_id, created_at, updated_at) VALUES (?, ?, ?)", [
+    otherTeamId,
+    now,
+    now,
+  ]);
+  await app.query(
+    "INSERT INTO users (email, name, password_hash, created_at, updated_at) VALUES (?, 'Orla Outsider', ?, ?, ?)",
+    [OUTSIDER.email, await hashPassword(OUTSIDER.password), now, now],
+  );
   const outsiderId = (await one<{ id: number }>("SELECT id FROM users WHERE email = ?", [OUTSIDER.email])).id;
-  await app.query("INSERT INTO memberships (user_id, team_id, role, created_at, updated_at) VALUES (?, ?, 'head_coach', ?, ?)", [outsiderId, otherTeamId, now, now]);
+  await app.query(
+    "INSERT INTO memberships (user_id, team_id, role, created_at, updated_at) VALUES (?, ?, 'head_coach', ?, ?)",
+    [outsiderId, otherTeamId, now, now],
+  );
 
   const anon: Client = { fetch: (path, init = {}) => fetch(`${app.url}${path}`, { ...init, redirect: "manual" }) };
   const clients: Record<Subject, Client> = {
@@ -58,10 +76,19 @@ let counter = 0;
 /** Timestamps as Sequelize writes them to SQLite, so rows made here read back like the app's own. */
 const sqlNow = () => new Date().toISOString().replace("T", " ").replace("Z", " +00:00");
 const unique = (what: string) => `${what} ${Date.now().toString(36)}-${++counter}`;
-const json = (body: unknown): RequestInit => ({ body: JSON.stringify(body), headers: { "content-type": "application/json" } });
+const json = (body: unknown): RequestInit => ({
+  body: JSON.stringify(body),
+  headers: { "content-type": "application/json" },
+});
 
 /** A strength block: no running prescription, so no physio restriction ever applies to it. */
-export const STRENGTH_BLOCK = { kind: "strength", title: "Trap-bar pulls", running: null, drills: null, notes: null } as const;
+export const STRENGTH_BLOCK = {
+  kind: "strength",
+  title: "Trap-bar pulls",
+  running: null,
+  drills: null,
+  notes: null,
+} as const;
 
 export class World {
   constructor(
@@ -103,19 +130,41 @@ export class World {
       "INSERT INTO planned_sessions (team_id, athlete_id, date, start_time, duration_min, title, planned_rpe, status, notes, version, sequence, published_at, created_at, updated_at) VALUES (?, ?, ?, '16:00', 45, ?, 5, 'published', NULL, 1, 0, ?, ?, ?)",
       [this.teamId, athleteId, this.today(-1), title, now, now, now],
     );
-    const [row] = await this.app.query<{ id: number; version: number }>("SELECT id, version FROM planned_sessions WHERE title = ?", [title]);
-    await this.app.query("INSERT INTO session_blocks (session_id, template_id, position, kind, title, running, drills, notes, created_at, updated_at) VALUES (?, NULL, 0, ?, ?, NULL, NULL, NULL, ?, ?)", [row.id, STRENGTH_BLOCK.kind, STRENGTH_BLOCK.title, now, now]);
-    const [block] = await this.app.query<{ id: number }>("SELECT id FROM session_blocks WHERE session_id = ?", [row.id]);
+    const [row] = await this.app.query<{ id: number; version: number }>(
+      "SELECT id, version FROM planned_sessions WHERE title = ?",
+      [title],
+    );
+    await this.app.query(
+      "INSERT INTO session_blocks (session_id, template_id, position, kind, title, running, drills, notes, created_at, updated_at) VALUES (?, NULL, 0, ?, ?, NULL, NULL, NULL, ?, ?)",
+      [row.id, STRENGTH_BLOCK.kind, STRENGTH_BLOCK.title, now, now],
+    );
+    const [block] = await this.app.query<{ id: number }>("SELECT id FROM session_blocks WHERE session_id = ?", [
+      row.id,
+    ]);
     return { id: row.id, version: row.version, blockId: block.id };
   }
 
   async template(): Promise<number> {
-    const body = await this.ok(await this.as("head", "POST", `/api/teams/${this.teamId}/templates`, { ...STRENGTH_BLOCK, title: unique("Matrix template"), durationMin: 30, plannedRpe: 4 }), "create template");
+    const body = await this.ok(
+      await this.as("head", "POST", `/api/teams/${this.teamId}/templates`, {
+        ...STRENGTH_BLOCK,
+        title: unique("Matrix template"),
+        durationMin: 30,
+        plannedRpe: 4,
+      }),
+      "create template",
+    );
     return (body.template as { id: number }).id;
   }
 
   async restriction(athleteId: number): Promise<number> {
-    const res = await this.as("physio", "POST", `/api/athletes/${athleteId}/restrictions`, { rule: "contact_cap", maxContacts: 400, startsOn: this.today(), endsOn: null, note: "Matrix check: contacts capped" });
+    const res = await this.as("physio", "POST", `/api/athletes/${athleteId}/restrictions`, {
+      rule: "contact_cap",
+      maxContacts: 400,
+      startsOn: this.today(),
+      endsOn: null,
+      note: "Matrix check: contacts capped",
+    });
     return ((await this.ok(res, "create restriction")).restriction as { id: number }).id;
   }
 
@@ -127,7 +176,10 @@ export class World {
       "INSERT INTO alerts (team_id, athlete_id, kind, level, metric, value, threshold, date, week_start, basis, reason, provisional, flagged, status, created_at, updated_at) VALUES (?, ?, 'weekly_jump', 'caution', 'srpe', 1.4, 1.15, ?, ?, 'planned', 'Matrix check: planned load up 40 % on last week', 0, 1, 'open', ?, ?)",
       [this.teamId, athleteId, week, week, now, now],
     );
-    const [row] = await this.app.query<{ id: number }>("SELECT id FROM alerts WHERE team_id = ? ORDER BY id DESC LIMIT 1", [this.teamId]);
+    const [row] = await this.app.query<{ id: number }>(
+      "SELECT id FROM alerts WHERE team_id = ? ORDER BY id DESC LIMIT 1",
+      [this.teamId],
+    );
     return row.id;
   }
 
@@ -135,17 +187,27 @@ export class World {
   async membership(): Promise<number> {
     const now = sqlNow();
     const email = `${unique("spare").replace(/\W+/g, "-")}@harbourvale.test`;
-    await this.app.query("INSERT INTO users (email, name, password_hash, created_at, updated_at) VALUES (?, 'Spare Coach', NULL, ?, ?)", [email, now, now]);
+    await this.app.query(
+      "INSERT INTO users (email, name, password_hash, created_at, updated_at) VALUES (?, 'Spare Coach', NULL, ?, ?)",
+      [email, now, now],
+    );
     const [user] = await this.app.query<{ id: number }>("SELECT id FROM users WHERE email = ?", [email]);
-    await this.app.query("INSERT INTO memberships (user_id, team_id, role, created_at, updated_at) VALUES (?, ?, 'coach', ?, ?)", [user.id, this.teamId, now, now]);
+    await this.app.query(
+      "INSERT INTO memberships (user_id, team_id, role, created_at, updated_at) VALUES (?, ?, 'coach', ?, ?)",
+      [user.id, this.teamId, now, now],
+    );
     const [m] = await this.app.query<{ id: number }>("SELECT id FROM memberships WHERE user_id = ?", [user.id]);
     return m.id;
   }
 
   /** The athlete's current calendar-feed path (a new link when none is active). */
   async feedPath(athleteId: number): Promise<string> {
-    let status = await this.ok(await this.as("head", "GET", `/api/athletes/${athleteId}/calendar-token`), "feed status");
-    if (!status.url) status = await this.ok(await this.as("head", "POST", `/api/athletes/${athleteId}/calendar-token`), "rotate feed");
+    let status = await this.ok(
+      await this.as("head", "GET", `/api/athletes/${athleteId}/calendar-token`),
+      "feed status",
+    );
+    if (!status.url)
+      status = await this.ok(await this.as("head", "POST", `/api/athletes/${athleteId}/calendar-token`), "rotate feed");
     return new URL(String(status.url)).pathname;
   }
 
@@ -156,8 +218,19 @@ export class World {
       if (stored?.subject.startsWith("Matrix mail") && stored.attachments.length > 0) return m.id;
     }
     const subject = unique("Matrix mail");
-    const transport = nodemailer.createTransport({ host: "127.0.0.1", port: this.app.smtp.port, secure: false, ignoreTLS: true });
-    await transport.sendMail({ from: "club@harbourvale.test", to, subject, text: "Private to the addressee.", attachments: [{ filename: "note.txt", content: "private" }] });
+    const transport = nodemailer.createTransport({
+      host: "127.0.0.1",
+      port: this.app.smtp.port,
+      secure: false,
+      ignoreTLS: true,
+    });
+    await transport.sendMail({
+      from: "club@harbourvale.test",
+      to,
+      subject,
+      text: "Private to the addressee.",
+      attachments: [{ filename: "note.txt", content: "private" }],
+    });
     transport.close();
     const stored = await this.app.waitForMail(to, (m) => m.subject === subject);
     return stored.id;
@@ -171,11 +244,17 @@ export class World {
    */
   async checksum(): Promise<string> {
     const hash = createHash("sha256");
-    const tables = await this.app.query<{ name: string }>("SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' ORDER BY name");
+    const tables = await this.app.query<{ name: string }>(
+      "SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' ORDER BY name",
+    );
     for (const { name } of tables) {
       const skip = BACKGROUND_COLUMNS[name];
-      const columns = (await this.app.query<{ name: string }>(`PRAGMA table_info("${name}")`)).map((c) => c.name).filter((c) => !skip || (skip === "all but id" ? c === "id" : !skip.includes(c)));
-      const [row] = await this.app.query<{ j: string | null }>(`SELECT json_group_array(json_array(${columns.map((c) => `"${c}"`).join(", ")})) AS j FROM (SELECT * FROM "${name}" ORDER BY rowid)`);
+      const columns = (await this.app.query<{ name: string }>(`PRAGMA table_info("${name}")`))
+        .map((c) => c.name)
+        .filter((c) => !skip || (skip === "all but id" ? c === "id" : !skip.includes(c)));
+      const [row] = await this.app.query<{ j: string | null }>(
+        `SELECT json_group_array(json_array(${columns.map((c) => `"${c}"`).join(", ")})) AS j FROM (SELECT * FROM "${name}" ORDER BY rowid)`,
+      );
       hash.update(`${name}:${row.j ?? ""}\n`);
     }
     return hash.digest("hex");

@@ -13,7 +13,10 @@ const discovered = [...discoverRoutes(), ...discoverPages(), ...discoverActions(
 
 describe("authorization matrix: coverage", () => {
   it("has a row for every handler method, page and server action in the tree, and none for what is gone", () => {
-    expect({ missing: discovered.filter((k) => !(k in EXPECTED)), stale: TABLE_KEYS.filter((k) => !discovered.includes(k)) }).toEqual({ missing: [], stale: [] });
+    expect({
+      missing: discovered.filter((k) => !(k in EXPECTED)),
+      stale: TABLE_KEYS.filter((k) => !discovered.includes(k)),
+    }).toEqual({ missing: [], stale: [] });
     expect(new Set(TABLE_KEYS).size).toBe(TABLE_KEYS.length);
   });
   it("knows how to ask every row's question", () => {
@@ -22,7 +25,12 @@ describe("authorization matrix: coverage", () => {
 });
 
 // Rows where another team's head coach is rightly answered 200, but about their own team or by design.
-const LEAK_CHECK_SKIPS = new Set(["GET /api/calendar/[token]", "GET /api/health", "GET /api/auth/[...nextauth]", "POST /api/auth/[...nextauth]"]);
+const LEAK_CHECK_SKIPS = new Set([
+  "GET /api/calendar/[token]",
+  "GET /api/health",
+  "GET /api/auth/[...nextauth]",
+  "POST /api/auth/[...nextauth]",
+]);
 const TEAM_A_WORDS = [DEMO_TEAM.name, "harbourvale", ...DEMO_ATHLETES.map((a) => a.name)];
 
 describe("authorization matrix", () => {
@@ -49,8 +57,16 @@ describe("authorization matrix", () => {
           const outcome = await call(world, subject, key, await REQUESTS[key](world, subject), actions);
           expect(outcome.status, outcome.body.slice(0, 300)).toBeLessThan(500);
           expect(outcome.answer, `${key} as ${subject}: ${outcome.body.slice(0, 300)}`).toBe(expected);
-          const isPublicPage = key.startsWith("PAGE /") && !/^PAGE \/(alerts|figures|home|load|mailbox|me|members|plan|settings|squad|not-allowed)/.test(key);
-          if (subject === "outsider" && (expected === 200 || expected === "ok") && !LEAK_CHECK_SKIPS.has(key) && !isPublicPage && !key.startsWith("ACTION")) {
+          const isPublicPage =
+            key.startsWith("PAGE /") &&
+            !/^PAGE \/(alerts|figures|home|load|mailbox|me|members|plan|settings|squad|not-allowed)/.test(key);
+          if (
+            subject === "outsider" &&
+            (expected === 200 || expected === "ok") &&
+            !LEAK_CHECK_SKIPS.has(key) &&
+            !isPublicPage &&
+            !key.startsWith("ACTION")
+          ) {
             const leaked = TEAM_A_WORDS.filter((word) => outcome.body.toLowerCase().includes(word.toLowerCase()));
             expect(leaked, `${key} shows another team's names to an outsider`).toEqual([]);
           }

@@ -16,13 +16,27 @@ const action = (...args: unknown[]): Req => ({ kind: "action", args });
 const athlete = (w: World, s: Subject) => w.target(s).id;
 const template = { ...STRENGTH_BLOCK, title: "Matrix template (edited)", durationMin: 30, plannedRpe: 4 };
 const farWeek = "2027-11-15"; // an empty week: the week tools change nothing else the matrix reads
-const athleteForm = { name: "Jonah Pell", groupId: null, sex: "male", birthDate: "2000-09-03", bodyMassKg: 78.2, vmaxMs: 10.86, vmaxTestedOn: null, tauS: 1.24, stepLengthM: 2.46, plyoLevel: "advanced" };
+const athleteForm = {
+  name: "Jonah Pell",
+  groupId: null,
+  sex: "male",
+  birthDate: "2000-09-03",
+  bodyMassKg: 78.2,
+  vmaxMs: 10.86,
+  vmaxTestedOn: null,
+  tauS: 1.24,
+  stepLengthM: 2.46,
+  plyoLevel: "advanced",
+};
 
 /** A fresh open invitation to team A, written straight to the table (nobody accepted it). */
 async function openInvitation(w: World): Promise<number> {
   const now = new Date().toISOString().replace("T", " ").replace("Z", " +00:00");
   const email = `invited-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 8)}@elsewhere.test`;
-  await w.app.query("INSERT INTO users (email, name, password_hash, created_at, updated_at) VALUES (?, 'Invited', NULL, ?, ?)", [email, now, now]);
+  await w.app.query(
+    "INSERT INTO users (email, name, password_hash, created_at, updated_at) VALUES (?, 'Invited', NULL, ?, ?)",
+    [email, now, now],
+  );
   const [user] = await w.app.query<{ id: number }>("SELECT id FROM users WHERE email = ?", [email]);
   await w.app.query(
     "INSERT INTO invitations (team_id, user_id, purpose, email, role, token_hash, expires_at, used_at, created_at, updated_at) VALUES (?, ?, 'invite', ?, 'coach', ?, '2099-01-01 00:00:00.000 +00:00', NULL, ?, ?)",
@@ -35,15 +49,26 @@ async function openInvitation(w: World): Promise<number> {
 export const REQUESTS: Record<string, Build> = {
   "GET /api/alerts": async () => api("GET", "/api/alerts"),
   "GET /api/alerts/[alertId]": async (w, s) => api("GET", `/api/alerts/${await w.alert(athlete(w, s))}`),
-  "PATCH /api/alerts/[alertId]": async (w, s) => api("PATCH", `/api/alerts/${await w.alert(athlete(w, s))}`, { action: "acknowledge" }),
+  "PATCH /api/alerts/[alertId]": async (w, s) =>
+    api("PATCH", `/api/alerts/${await w.alert(athlete(w, s))}`, { action: "acknowledge" }),
   "POST /api/alerts/seen": async () => api("POST", "/api/alerts/seen"),
-  "GET /api/athletes/[athleteId]/calendar-token": async (w, s) => api("GET", `/api/athletes/${athlete(w, s)}/calendar-token`),
-  "POST /api/athletes/[athleteId]/calendar-token": async (w, s) => api("POST", `/api/athletes/${athlete(w, s)}/calendar-token`),
-  "DELETE /api/athletes/[athleteId]/calendar-token": async (w, s) => api("DELETE", `/api/athletes/${athlete(w, s)}/calendar-token`),
+  "GET /api/athletes/[athleteId]/calendar-token": async (w, s) =>
+    api("GET", `/api/athletes/${athlete(w, s)}/calendar-token`),
+  "POST /api/athletes/[athleteId]/calendar-token": async (w, s) =>
+    api("POST", `/api/athletes/${athlete(w, s)}/calendar-token`),
+  "DELETE /api/athletes/[athleteId]/calendar-token": async (w, s) =>
+    api("DELETE", `/api/athletes/${athlete(w, s)}/calendar-token`),
   "GET /api/athletes/[athleteId]/load": async (w, s) => api("GET", `/api/athletes/${athlete(w, s)}/load`),
-  "GET /api/athletes/[athleteId]/restrictions": async (w, s) => api("GET", `/api/athletes/${athlete(w, s)}/restrictions`),
+  "GET /api/athletes/[athleteId]/restrictions": async (w, s) =>
+    api("GET", `/api/athletes/${athlete(w, s)}/restrictions`),
   "POST /api/athletes/[athleteId]/restrictions": async (w, s) =>
-    api("POST", `/api/athletes/${athlete(w, s)}/restrictions`, { rule: "contact_cap", maxContacts: 450, startsOn: w.today(), endsOn: null, note: "Matrix check" }),
+    api("POST", `/api/athletes/${athlete(w, s)}/restrictions`, {
+      rule: "contact_cap",
+      maxContacts: 450,
+      startsOn: w.today(),
+      endsOn: null,
+      note: "Matrix check",
+    }),
   "GET /api/auth/[...nextauth]": async () => api("GET", "/api/auth/session"),
   // Without the CSRF token next-auth only points at its confirmation page; nobody is signed out.
   "POST /api/auth/[...nextauth]": async () => api("POST", "/api/auth/signout"),
@@ -51,18 +76,26 @@ export const REQUESTS: Record<string, Build> = {
   "GET /api/calendar/[token]": async (w, s) => api("GET", await w.feedPath(athlete(w, s))),
   "GET /api/health": async () => api("GET", "/api/health"),
   "POST /api/load/preview": async (w, s) =>
-    api("POST", "/api/load/preview", { teamId: w.teamId, athleteId: athlete(w, s), week: w.today(), sessions: [{ date: w.today(), durationMin: 40, plannedRpe: 5, blocks: [STRENGTH_BLOCK] }] }),
+    api("POST", "/api/load/preview", {
+      teamId: w.teamId,
+      athleteId: athlete(w, s),
+      week: w.today(),
+      sessions: [{ date: w.today(), durationMin: 40, plannedRpe: 5, blocks: [STRENGTH_BLOCK] }],
+    }),
   "GET /api/mailbox": async (w) => {
     await Promise.all([w.mail(w.athletes.maya.email), w.mail(w.athletes.jonah.email)]);
     return api("GET", "/api/mailbox");
   },
   "DELETE /api/mailbox": async () => api("DELETE", "/api/mailbox"),
   "GET /api/mailbox/[mailId]": async (w, s) => api("GET", `/api/mailbox/${await w.mail(w.target(s).email)}`),
-  "GET /api/mailbox/[mailId]/attachments/[index]": async (w, s) => api("GET", `/api/mailbox/${await w.mail(w.target(s).email)}/attachments/0`),
+  "GET /api/mailbox/[mailId]/attachments/[index]": async (w, s) =>
+    api("GET", `/api/mailbox/${await w.mail(w.target(s).email)}/attachments/0`),
   "GET /api/mailbox/[mailId]/raw": async (w, s) => api("GET", `/api/mailbox/${await w.mail(w.target(s).email)}/raw`),
   "GET /api/me/notification-settings": async () => api("GET", "/api/me/notification-settings"),
-  "PUT /api/me/notification-settings": async () => api("PUT", "/api/me/notification-settings", { alertEmail: "digest" }),
-  "PATCH /api/restrictions/[restrictionId]": async (w, s) => api("PATCH", `/api/restrictions/${await w.restriction(athlete(w, s))}`, { action: "lift" }),
+  "PUT /api/me/notification-settings": async () =>
+    api("PUT", "/api/me/notification-settings", { alertEmail: "digest" }),
+  "PATCH /api/restrictions/[restrictionId]": async (w, s) =>
+    api("PATCH", `/api/restrictions/${await w.restriction(athlete(w, s))}`, { action: "lift" }),
   "GET /api/sessions/[sessionId]": async (w, s) => api("GET", `/api/sessions/${(await w.session(athlete(w, s))).id}`),
   "PATCH /api/sessions/[sessionId]": async (w, s) => {
     const { id, version } = await w.session(athlete(w, s));
@@ -78,13 +111,17 @@ export const REQUESTS: Record<string, Build> = {
   },
   "PATCH /api/sessions/[sessionId]/blocks/[blockId]": async (w, s) => {
     const { id, version, blockId } = await w.session(athlete(w, s));
-    return api("PATCH", `/api/sessions/${id}/blocks/${blockId}`, { version, block: { ...STRENGTH_BLOCK, title: "Split squats" } });
+    return api("PATCH", `/api/sessions/${id}/blocks/${blockId}`, {
+      version,
+      block: { ...STRENGTH_BLOCK, title: "Split squats" },
+    });
   },
   "DELETE /api/sessions/[sessionId]/blocks/[blockId]": async (w, s) => {
     const { id, version, blockId } = await w.session(athlete(w, s));
     return api("DELETE", `/api/sessions/${id}/blocks/${blockId}?version=${version}`);
   },
-  "PUT /api/sessions/[sessionId]/log": async (w, s) => api("PUT", `/api/sessions/${(await w.session(athlete(w, s))).id}/log`, { completion: "yes", rpe: 6, minutes: 45 }),
+  "PUT /api/sessions/[sessionId]/log": async (w, s) =>
+    api("PUT", `/api/sessions/${(await w.session(athlete(w, s))).id}/log`, { completion: "yes", rpe: 6, minutes: 45 }),
   "DELETE /api/sessions/[sessionId]/log": async (w, s) => {
     const { id } = await w.session(athlete(w, s));
     const logged = await w.as("head", "PUT", `/api/sessions/${id}/log`, { completion: "partly", rpe: 5, minutes: 30 });
@@ -93,15 +130,27 @@ export const REQUESTS: Record<string, Build> = {
   },
   "GET /api/teams/[teamId]/load": async (w) => api("GET", `/api/teams/${w.teamId}/load`),
   "GET /api/teams/[teamId]/plan": async (w) => api("GET", `/api/teams/${w.teamId}/plan`),
-  "POST /api/teams/[teamId]/plan/[tool]": async (w) => api("POST", `/api/teams/${w.teamId}/plan/publish`, { week: farWeek }),
+  "POST /api/teams/[teamId]/plan/[tool]": async (w) =>
+    api("POST", `/api/teams/${w.teamId}/plan/publish`, { week: farWeek }),
   "POST /api/teams/[teamId]/sessions": async (w, s) =>
-    api("POST", `/api/teams/${w.teamId}/sessions`, { from: "blank", athleteId: athlete(w, s), date: farWeek, durationMin: 40, title: "Matrix new session", plannedRpe: 4, notes: null, blocks: [] }),
+    api("POST", `/api/teams/${w.teamId}/sessions`, {
+      from: "blank",
+      athleteId: athlete(w, s),
+      date: farWeek,
+      durationMin: 40,
+      title: "Matrix new session",
+      plannedRpe: 4,
+      notes: null,
+      blocks: [],
+    }),
   "GET /api/teams/[teamId]/settings": async (w) => api("GET", `/api/teams/${w.teamId}/settings`),
-  "PATCH /api/teams/[teamId]/settings": async (w) => api("PATCH", `/api/teams/${w.teamId}/settings`, { recoveryHours: 48 }),
+  "PATCH /api/teams/[teamId]/settings": async (w) =>
+    api("PATCH", `/api/teams/${w.teamId}/settings`, { recoveryHours: 48 }),
   "GET /api/teams/[teamId]/templates": async (w) => api("GET", `/api/teams/${w.teamId}/templates`),
   "POST /api/teams/[teamId]/templates": async (w) => api("POST", `/api/teams/${w.teamId}/templates`, template),
   "GET /api/templates/[templateId]": async (w) => api("GET", `/api/templates/${await w.template()}`),
-  "PUT /api/templates/[templateId]": async (w) => api("PUT", `/api/templates/${await w.template()}`, { ...template, version: 1 }),
+  "PUT /api/templates/[templateId]": async (w) =>
+    api("PUT", `/api/templates/${await w.template()}`, { ...template, version: 1 }),
   "DELETE /api/templates/[templateId]": async (w) => api("DELETE", `/api/templates/${await w.template()}`),
 
   "PAGE /": async () => page("/"),
@@ -126,8 +175,18 @@ export const REQUESTS: Record<string, Build> = {
 
   "ACTION /forgot-password#forgotPasswordAction": async () => action({ email: "nobody-here@nowhere.test" }),
   "ACTION /invite#joinTeamAction": async () => action({ token: "no-such-invitation-token-0123456789" }),
-  "ACTION /invite#setPasswordAction": async () => action({ token: "no-such-invitation-token-0123456789", password: "a long enough passphrase 77", confirm: "a long enough passphrase 77" }),
-  "ACTION /members#addMemberAction": async () => action({ name: "Matrix Newcomer", email: `new-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 8)}@elsewhere.test`, role: "coach" }),
+  "ACTION /invite#setPasswordAction": async () =>
+    action({
+      token: "no-such-invitation-token-0123456789",
+      password: "a long enough passphrase 77",
+      confirm: "a long enough passphrase 77",
+    }),
+  "ACTION /members#addMemberAction": async () =>
+    action({
+      name: "Matrix Newcomer",
+      email: `new-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 8)}@elsewhere.test`,
+      role: "coach",
+    }),
   "ACTION /members#changeRoleAction": async (w) => action(await w.membership(), { role: "physio" }),
   "ACTION /members#removeMemberAction": async (w) => action(await w.membership()),
   "ACTION /members#withdrawInvitationAction": async (w) => action(await openInvitation(w)),

@@ -22,10 +22,27 @@ describe.runIf(run)("next dev under the Content-Security-Policy", () => {
     dir = mkdtempSync(join(tmpdir(), "sprintwright-dev-"));
     const port = await freePort();
     const url = `http://127.0.0.1:${port}`;
-    const env = { ...process.env, NEXT_TELEMETRY_DISABLED: "1", NODE_ENV: "development", DATABASE_URL: `file:${join(dir, "app.sqlite")}`, NEXTAUTH_URL: url, APP_URL: url, NEXTAUTH_SECRET: "dev-e2e-secret-0123456789", NEXT_DIST_DIR: ".next-dev-e2e", MAILBOX_DIR: join(dir, "mailbox") } as NodeJS.ProcessEnv;
-    const prep = spawnSync(process.execPath, ["--conditions=react-server", "--import", "tsx", "scripts/db-prepare.ts"], { env, encoding: "utf8" });
+    const env = {
+      ...process.env,
+      NEXT_TELEMETRY_DISABLED: "1",
+      NODE_ENV: "development",
+      DATABASE_URL: `file:${join(dir, "app.sqlite")}`,
+      NEXTAUTH_URL: url,
+      APP_URL: url,
+      NEXTAUTH_SECRET: "dev-e2e-secret-0123456789",
+      NEXT_DIST_DIR: ".next-dev-e2e",
+      MAILBOX_DIR: join(dir, "mailbox"),
+    } as NodeJS.ProcessEnv;
+    const prep = spawnSync(
+      process.execPath,
+      ["--conditions=react-server", "--import", "tsx", "scripts/db-prepare.ts"],
+      { env, encoding: "utf8" },
+    );
     if (prep.status !== 0) throw new Error(prep.stderr);
-    child = spawn(process.execPath, ["node_modules/next/dist/bin/next", "dev", "-p", String(port), "-H", "127.0.0.1"], { env, stdio: "ignore" });
+    child = spawn(process.execPath, ["node_modules/next/dist/bin/next", "dev", "-p", String(port), "-H", "127.0.0.1"], {
+      env,
+      stdio: "ignore",
+    });
     for (let i = 0; ; i++) {
       try {
         if ((await fetch(`${url}/api/health`)).ok) break;
@@ -52,7 +69,11 @@ describe.runIf(run)("next dev under the Content-Security-Policy", () => {
     const violations: string[] = [];
     await context.exposeBinding("__cspViolation", (_s, v: string) => void violations.push(v));
     await context.addInitScript(() => {
-      document.addEventListener("securitypolicyviolation", (e) => (window as unknown as { __cspViolation: (v: string) => void }).__cspViolation(`${location.pathname} ${e.violatedDirective} ${e.blockedURI}`));
+      document.addEventListener("securitypolicyviolation", (e) =>
+        (window as unknown as { __cspViolation: (v: string) => void }).__cspViolation(
+          `${location.pathname} ${e.violatedDirective} ${e.blockedURI}`,
+        ),
+      );
     });
     const page = await context.newPage();
     const first = await page.goto(`${appUrl}/sign-in`, { timeout: 180_000 });
@@ -64,7 +85,9 @@ describe.runIf(run)("next dev under the Content-Security-Policy", () => {
     await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"), { timeout: 180_000 });
     for (const path of ["/home", "/plan"]) {
       await page.goto(`${appUrl}${path}`, { waitUntil: "networkidle", timeout: 180_000 });
-      await page.waitForFunction(() => (window as unknown as { next?: unknown }).next !== undefined, null, { timeout: 60_000 });
+      await page.waitForFunction(() => (window as unknown as { next?: unknown }).next !== undefined, null, {
+        timeout: 60_000,
+      });
     }
     expect(violations).toEqual([]);
     await context.close();

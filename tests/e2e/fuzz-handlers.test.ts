@@ -15,7 +15,10 @@ const SEED = Number(process.env.FUZZ_SEED ?? 20261202);
 /** next-auth's own handler answers redirects and its own pages; it is held to "never 5xx" only. */
 const FOREIGN = new Set(["GET /api/auth/[...nextauth]", "POST /api/auth/[...nextauth]"]);
 /** Who sends the request: someone allowed to, so that the fuzzed input gets past the permission check. */
-const SENDER: Record<string, Subject> = { "POST /api/athletes/[athleteId]/restrictions": "physio", "PATCH /api/restrictions/[restrictionId]": "physio" };
+const SENDER: Record<string, Subject> = {
+  "POST /api/athletes/[athleteId]/restrictions": "physio",
+  "PATCH /api/restrictions/[restrictionId]": "physio",
+};
 /**
  * Handlers with a 5xx the fuzz finds today, each naming the defect and whose area it is in. They run as expected
  * failures, so the suite turns red the day the fix lands: then delete the entry.
@@ -26,14 +29,52 @@ const KNOWN_5XX: Record<string, string> = {};
 const evilString = fc.oneof(
   fc.string({ maxLength: 40 }),
   fc.string({ unit: "grapheme", maxLength: 20 }),
-  fc.constantFrom("\u0000", "a\u0000b", "\r", "line\rbreak", "\u001b[31m", "\u202e", "\ud800", "=HYPERLINK(\"http://x\")", "../../etc/passwd", "%00", "<script>", "' OR 1=1 --"),
-  fc.constantFrom("9999-12-31", "0000-01-01", "2026-02-30", "2026-13-01", "+275760-09-13", "-000001-01-01", "2026-1-1", "1e3", "NaN", "Infinity", "-0", "0x10", " 5 "),
+  fc.constantFrom(
+    "\u0000",
+    "a\u0000b",
+    "\r",
+    "line\rbreak",
+    "\u001b[31m",
+    "\u202e",
+    "\ud800",
+    '=HYPERLINK("http://x")',
+    "../../etc/passwd",
+    "%00",
+    "<script>",
+    "' OR 1=1 --",
+  ),
+  fc.constantFrom(
+    "9999-12-31",
+    "0000-01-01",
+    "2026-02-30",
+    "2026-13-01",
+    "+275760-09-13",
+    "-000001-01-01",
+    "2026-1-1",
+    "1e3",
+    "NaN",
+    "Infinity",
+    "-0",
+    "0x10",
+    " 5 ",
+  ),
   fc.constantFrom("x".repeat(5000), "é".repeat(3000)),
 );
 const evilNumber = fc.oneof(
   fc.integer(),
   fc.double(),
-  fc.constantFrom(0, -1, 1.5, 1e308, -1e308, Number.MAX_SAFE_INTEGER, Number.MAX_SAFE_INTEGER + 2, 2 ** 31, -(2 ** 31) - 1, 5e-324),
+  fc.constantFrom(
+    0,
+    -1,
+    1.5,
+    1e308,
+    -1e308,
+    Number.MAX_SAFE_INTEGER,
+    Number.MAX_SAFE_INTEGER + 2,
+    2 ** 31,
+    -(2 ** 31) - 1,
+    5e-324,
+  ),
 );
 const evilValue: fc.Arbitrary<unknown> = fc.oneof(
   { weight: 3, arbitrary: evilString },
@@ -43,7 +84,10 @@ const evilValue: fc.Arbitrary<unknown> = fc.oneof(
   fc.jsonValue({ maxDepth: 3 }),
   fc.constant(Array.from({ length: 40 }, () => [[[[[[[[1]]]]]]]])),
 );
-const rawText = fc.oneof(fc.constantFrom("", "null", "[]", "{", '{"a":', "\u0000", "true", "1e999", '{"__proto__":{"a":1}}'), fc.string({ maxLength: 60 }));
+const rawText = fc.oneof(
+  fc.constantFrom("", "null", "[]", "{", '{"a":', "\u0000", "true", "1e999", '{"__proto__":{"a":1}}'),
+  fc.string({ maxLength: 60 }),
+);
 const QUERY_KEYS = ["week", "view", "from", "to", "metric", "status", "athleteId", "limit", "version", "mine"];
 
 type Mutation =
@@ -56,11 +100,31 @@ type Mutation =
 
 const mutation: fc.Arbitrary<Mutation> = fc.oneof(
   { weight: 5, arbitrary: fc.record({ kind: fc.constant("field" as const), pathPick: fc.nat(), value: evilValue }) },
-  { weight: 1, arbitrary: fc.record({ kind: fc.constant("extra" as const), key: fc.oneof(fc.string({ maxLength: 12 }), fc.constantFrom("__proto__", "constructor", "id", "teamId")), value: evilValue }) },
+  {
+    weight: 1,
+    arbitrary: fc.record({
+      kind: fc.constant("extra" as const),
+      key: fc.oneof(fc.string({ maxLength: 12 }), fc.constantFrom("__proto__", "constructor", "id", "teamId")),
+      value: evilValue,
+    }),
+  },
   { weight: 2, arbitrary: fc.record({ kind: fc.constant("body" as const), value: evilValue }) },
   { weight: 1, arbitrary: fc.record({ kind: fc.constant("raw" as const), text: rawText }) },
-  { weight: 3, arbitrary: fc.record({ kind: fc.constant("query" as const), key: fc.constantFrom(...QUERY_KEYS), value: evilString }) },
-  { weight: 1, arbitrary: fc.record({ kind: fc.constant("path" as const), segment: fc.oneof(evilString, fc.constantFrom("0", "-1", "1.5", "99999999999999999999", "%2e%2e", "%00")) }) },
+  {
+    weight: 3,
+    arbitrary: fc.record({
+      kind: fc.constant("query" as const),
+      key: fc.constantFrom(...QUERY_KEYS),
+      value: evilString,
+    }),
+  },
+  {
+    weight: 1,
+    arbitrary: fc.record({
+      kind: fc.constant("path" as const),
+      segment: fc.oneof(evilString, fc.constantFrom("0", "-1", "1.5", "99999999999999999999", "%2e%2e", "%00")),
+    }),
+  },
 );
 
 /** Every path to a leaf (or a whole array/object) inside a JSON body. */
@@ -82,7 +146,12 @@ type Sent = { method: string; path: string; body?: string; json: boolean };
 
 function apply(base: Extract<Req, { kind: "api" }>, m: Mutation): Sent {
   const hasBody = base.body !== undefined;
-  const sent: Sent = { method: base.method, path: base.path, body: hasBody ? JSON.stringify(base.body) : undefined, json: true };
+  const sent: Sent = {
+    method: base.method,
+    path: base.path,
+    body: hasBody ? JSON.stringify(base.body) : undefined,
+    json: true,
+  };
   switch (m.kind) {
     case "field": {
       const all = paths(base.body);
@@ -90,7 +159,10 @@ function apply(base: Extract<Req, { kind: "api" }>, m: Mutation): Sent {
       return { ...sent, body: JSON.stringify(setPath(base.body, all[m.pathPick % all.length], m.value)) };
     }
     case "extra":
-      return { ...sent, body: JSON.stringify({ ...(typeof base.body === "object" && base.body ? base.body : {}), [m.key]: m.value }) };
+      return {
+        ...sent,
+        body: JSON.stringify({ ...(typeof base.body === "object" && base.body ? base.body : {}), [m.key]: m.value }),
+      };
     case "body":
       return { ...sent, body: JSON.stringify(m.value) ?? "null" };
     case "raw":

@@ -11,7 +11,9 @@ export function describeBrowser(name: string, fn: () => void) {
   if (hasBrowser) return describe(name, fn);
   if (requireBrowser) {
     return describe(name, () => {
-      throw new Error(`REQUIRE_BROWSER=1 but no Chromium at ${CHROMIUM_PATH}. Install it: sudo apt-get install -y chromium`);
+      throw new Error(
+        `REQUIRE_BROWSER=1 but no Chromium at ${CHROMIUM_PATH}. Install it: sudo apt-get install -y chromium`,
+      );
     });
   }
   if (!warned) {
@@ -22,4 +24,3 @@ export function describeBrowser(name: string, fn: () => void) {
   }
   return describe.skip(name, fn);
 }
-

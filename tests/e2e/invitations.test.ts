@@ -22,13 +22,28 @@ describeBrowser("inviting an account of another club", () => {
     browser = await launchBrowser();
     // A second club with its own head coach (same demo password).
     const now = sqlNow();
-    await app.query("INSERT INTO teams (name, time_zone, week_start_day, created_at, updated_at) VALUES ('Riverside Relay', 'Europe/London', 1, ?, ?)", [now, now]);
+    await app.query(
+      "INSERT INTO teams (name, time_zone, week_start_day, created_at, updated_at) VALUES ('Riverside Relay', 'Europe/London', 1, ?, ?)",
+      [now, now],
+    );
     const [team] = await app.query<{ id: number }>("SELECT id FROM teams WHERE name = 'Riverside Relay'");
-    await app.query("INSERT INTO team_load_settings (team_id, created_at, updated_at) VALUES (?, ?, ?)", [team.id, now, now]);
-    const [hash] = await app.query<{ password_hash: string }>("SELECT password_hash FROM users WHERE email = ?", ["head.coach@harbourvale.test"]);
-    await app.query("INSERT INTO users (email, name, password_hash, created_at, updated_at) VALUES (?, 'Rafe Rival', ?, ?, ?)", [RIVAL, hash.password_hash, now, now]);
+    await app.query("INSERT INTO team_load_settings (team_id, created_at, updated_at) VALUES (?, ?, ?)", [
+      team.id,
+      now,
+      now,
+    ]);
+    const [hash] = await app.query<{ password_hash: string }>("SELECT password_hash FROM users WHERE email = ?", [
+      "head.coach@harbourvale.test",
+    ]);
+    await app.query(
+      "INSERT INTO users (email, name, password_hash, created_at, updated_at) VALUES (?, 'Rafe Rival', ?, ?, ?)",
+      [RIVAL, hash.password_hash, now, now],
+    );
     const [rival] = await app.query<{ id: number }>("SELECT id FROM users WHERE email = ?", [RIVAL]);
-    await app.query("INSERT INTO memberships (user_id, team_id, role, created_at, updated_at) VALUES (?, ?, 'head_coach', ?, ?)", [rival.id, team.id, now, now]);
+    await app.query(
+      "INSERT INTO memberships (user_id, team_id, role, created_at, updated_at) VALUES (?, ?, 'head_coach', ?, ?)",
+      [rival.id, team.id, now, now],
+    );
   }, 240_000);
   afterAll(async () => {
     await browser?.close();
@@ -64,7 +79,9 @@ describeBrowser("inviting an account of another club", () => {
     expect(html).toContain('data-testid="invite-wrong-account"');
     expect(html).not.toContain("Joining…");
     const physio = await apiSession(app, PHYSIO);
-    const me = (await (await physio.fetch("/api/auth/session")).json()) as { user: { memberships: Array<{ teamName: string }> } };
+    const me = (await (await physio.fetch("/api/auth/session")).json()) as {
+      user: { memberships: Array<{ teamName: string }> };
+    };
     expect(me.user.memberships.map((m) => m.teamName)).toEqual(["Harbour Vale Sprint Club"]);
   });
 

@@ -33,7 +33,9 @@ describeBrowser("load screens", () => {
   it("renders the demo club's week, one row per athlete, with the caution", async () => {
     await page.goto(`${app.url}/load`);
     await page.getByTestId("squad-load-table").waitFor();
-    const names = await page.getByTestId("squad-load-row").evaluateAll((rows) => rows.map((r) => r.getAttribute("data-athlete")));
+    const names = await page
+      .getByTestId("squad-load-row")
+      .evaluateAll((rows) => rows.map((r) => r.getAttribute("data-athlete")));
     expect(names.sort()).toEqual(DEMO_ATHLETES.map((a) => a.name).sort());
     expect(await page.getByTestId("load-caution").count()).toBe(1);
     // Eight weeks of logged history stand behind this week, so every athlete has a ratio.
@@ -57,9 +59,15 @@ describeBrowser("load screens", () => {
     await page.getByTestId("choose-columns").click();
     expect(await page.getByTestId("sort-group").count()).toBe(0);
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("export-csv").click()]);
-    const csv = await (await download.createReadStream()).toArray().then((chunks) => Buffer.concat(chunks).toString("utf8"));
+    const csv = await (
+      await download.createReadStream()
+    )
+      .toArray()
+      .then((chunks) => Buffer.concat(chunks).toString("utf8"));
     const lines = csv.trim().split(/\r?\n/);
-    expect(lines[0]).toBe("Athlete,ACWR,Flags,HSR m,Near-max m,Sprint steps (est.),Plyo contacts,Contacts by intensity,≥ HSR speed m,≥ sprint speed m,≥ HSR % m,≥ near-max % m,≥ maximal % m,sRPE (AU),Weekly change");
+    expect(lines[0]).toBe(
+      "Athlete,ACWR,Flags,HSR m,Near-max m,Sprint steps (est.),Plyo contacts,Contacts by intensity,≥ HSR speed m,≥ sprint speed m,≥ HSR % m,≥ near-max % m,≥ maximal % m,sRPE (AU),Weekly change",
+    );
     expect(lines).toHaveLength(DEMO_ATHLETES.length + 1);
     await page.getByTestId("choose-columns").click();
     await page.getByRole("checkbox", { name: "Group" }).check();
@@ -80,7 +88,10 @@ describeBrowser("load screens", () => {
   });
 
   it("draws the athlete chart: bars of the chosen metric and the ratio line", async () => {
-    await page.locator(`[data-testid="squad-load-row"][data-athlete="${SPIKE_ATHLETE}"]`).getByTestId("athlete-link").click();
+    await page
+      .locator(`[data-testid="squad-load-row"][data-athlete="${SPIKE_ATHLETE}"]`)
+      .getByTestId("athlete-link")
+      .click();
     await page.waitForURL(/\/load\/\d+$/);
     const chart = page.getByTestId("load-chart");
     await chart.locator("svg .recharts-bar-rectangle").first().waitFor();
@@ -105,10 +116,17 @@ describeBrowser("load screens", () => {
   it("over real HTTP, the squad table, the week plan and each athlete page give the same daily ratios (lib/load/README.md §5)", async () => {
     const api = await apiSession(app, headCoach.email);
     type Week = { dailyRatio: (number | null)[] };
-    const squad = (await (await api.fetch(`/api/teams/1/load?view=projected`)).json()) as { weekStart: string; rows: ({ id: number } & Week)[] };
-    const plan = (await (await api.fetch(`/api/teams/1/plan?week=${squad.weekStart}`)).json()) as { athletes: { id: number; load: { week: Week } }[] };
+    const squad = (await (await api.fetch(`/api/teams/1/load?view=projected`)).json()) as {
+      weekStart: string;
+      rows: ({ id: number } & Week)[];
+    };
+    const plan = (await (await api.fetch(`/api/teams/1/plan?week=${squad.weekStart}`)).json()) as {
+      athletes: { id: number; load: { week: Week } }[];
+    };
     for (const row of squad.rows) {
-      const page = (await (await api.fetch(`/api/athletes/${row.id}/load?view=projected&metric=srpe`)).json()) as { days: { date: string; ratio: number | null }[] };
+      const page = (await (await api.fetch(`/api/athletes/${row.id}/load?view=projected&metric=srpe`)).json()) as {
+        days: { date: string; ratio: number | null }[];
+      };
       const start = page.days.findIndex((x) => x.date === squad.weekStart);
       expect(start).toBeGreaterThanOrEqual(0);
       const fromPage = page.days.slice(start, start + 7).map((x) => x.ratio);
@@ -133,7 +151,9 @@ describeBrowser("load screens", () => {
     const api = await apiSession(app, maya.email!);
     expect((await api.fetch(`/api/athletes/${own}/load`)).status).toBe(200);
     const squad = await (await apiSession(app, headCoach.email)).fetch(`/api/teams/1/load`);
-    const jonahId = ((await squad.json()) as { rows: { id: number; name: string }[] }).rows.find((r) => r.name === SPIKE_ATHLETE)!.id;
+    const jonahId = ((await squad.json()) as { rows: { id: number; name: string }[] }).rows.find(
+      (r) => r.name === SPIKE_ATHLETE,
+    )!.id;
     expect((await api.fetch(`/api/athletes/${jonahId}/load`)).status).toBe(404);
     expect((await api.fetch(`/api/teams/1/load`)).status).toBe(403);
     // The page streams behind loading.tsx, so the answer is the not-found screen rather than a 404 status.

@@ -44,7 +44,11 @@ describeBrowser("local mailbox: each member reads only their own mail", () => {
     const body = (await list.json()) as { mails: Array<{ id: string; subject: string }> };
     expect(body.mails.map((m) => m.id)).not.toContain(resetId);
     expect(JSON.stringify(body)).not.toContain(RESET_SUBJECT);
-    for (const path of [`/api/mailbox/${resetId}`, `/api/mailbox/${resetId}/raw`, `/api/mailbox/${resetId}/attachments/0`]) {
+    for (const path of [
+      `/api/mailbox/${resetId}`,
+      `/api/mailbox/${resetId}/raw`,
+      `/api/mailbox/${resetId}/attachments/0`,
+    ]) {
       const res = await athlete.fetch(path);
       expect(res.status, path).toBe(404);
       expect(await res.text(), path).not.toMatch(/\/invite\//);

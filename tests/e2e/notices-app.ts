@@ -8,12 +8,19 @@ import { listMail, readMail, type StoredMail } from "@/lib/mail/mailbox";
 import { openDatabase } from "@/models";
 import { startApp, type App } from "./harness";
 
-export type MailApp = App & { smtp: FakeSmtp; mailDir: string; waitForMail: (to: string, match: (m: StoredMail) => boolean, timeoutMs?: number) => Promise<StoredMail>; query: <T>(sql: string, replacements?: unknown[]) => Promise<T[]> };
+export type MailApp = App & {
+  smtp: FakeSmtp;
+  mailDir: string;
+  waitForMail: (to: string, match: (m: StoredMail) => boolean, timeoutMs?: number) => Promise<StoredMail>;
+  query: <T>(sql: string, replacements?: unknown[]) => Promise<T[]>;
+};
 
 export async function startMailApp(): Promise<MailApp> {
   const mailDir = mkdtempSync(join(tmpdir(), "sw-e2e-mail-"));
   const smtp = await startFakeSmtp({ port: 0, dir: mailDir });
-  const app = await startApp({ env: { SMTP_URL: `smtp://127.0.0.1:${smtp.port}`, MAILBOX_DIR: mailDir, MAIL_FAKE: "1", OUTBOX_POLL_MS: "300" } });
+  const app = await startApp({
+    env: { SMTP_URL: `smtp://127.0.0.1:${smtp.port}`, MAILBOX_DIR: mailDir, MAIL_FAKE: "1", OUTBOX_POLL_MS: "300" },
+  });
   const sequelize = await openDatabase(app.dbPath);
 
   async function waitForMail(to: string, match: (m: StoredMail) => boolean, timeoutMs = 15_000): Promise<StoredMail> {
@@ -33,7 +40,8 @@ export async function startMailApp(): Promise<MailApp> {
     smtp,
     mailDir,
     waitForMail,
-    query: async <T>(sql: string, replacements: unknown[] = []) => (await sequelize.query(sql, { replacements }))[0] as T[],
+    query: async <T>(sql: string, replacements: unknown[] = []) =>
+      (await sequelize.query(sql, { replacements }))[0] as T[],
     stop: async () => {
       await sequelize.close();
       await app.stop();

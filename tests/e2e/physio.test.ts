@@ -17,7 +17,10 @@ describeBrowser("physio journey", () => {
   beforeAll(async () => {
     app = await startMailApp();
     browser = await launchBrowser();
-    [athlete] = await app.query<{ id: number; name: string; team_id: number }>("SELECT id, name, team_id FROM athletes WHERE name = ?", ["Maya Okafor"]);
+    [athlete] = await app.query<{ id: number; name: string; team_id: number }>(
+      "SELECT id, name, team_id FROM athletes WHERE name = ?",
+      ["Maya Okafor"],
+    );
   }, 240_000);
   afterAll(async () => {
     await browser?.close();
@@ -32,7 +35,16 @@ describeBrowser("physio journey", () => {
       const res = await coach.fetch(`/api/teams/${athlete.team_id}/sessions`, {
         method: "POST",
         headers: { "content-type": "application/json" },
-        body: JSON.stringify({ from: "blank", athleteId: athlete.id, date: addDays(nextWeek, day), startTime: "09:00", durationMin: 300, title: "Overload camp", plannedRpe: 10, blocks: [] }),
+        body: JSON.stringify({
+          from: "blank",
+          athleteId: athlete.id,
+          date: addDays(nextWeek, day),
+          startTime: "09:00",
+          durationMin: 300,
+          title: "Overload camp",
+          plannedRpe: 10,
+          blocks: [],
+        }),
       });
       expect(res.status, await res.clone().text()).toBeLessThan(300);
     }
@@ -43,11 +55,23 @@ describeBrowser("physio journey", () => {
     const res = await coach.fetch(`/api/teams/${athlete.team_id}/sessions`, {
       method: "POST",
       headers: { "content-type": "application/json" },
-      body: JSON.stringify({ from: "blank", athleteId: athlete.id, date: addDays(nextWeek, 4), startTime: "07:00", durationMin: 20, title: "Walk", plannedRpe: 1, blocks: [] }),
+      body: JSON.stringify({
+        from: "blank",
+        athleteId: athlete.id,
+        date: addDays(nextWeek, 4),
+        startTime: "07:00",
+        durationMin: 20,
+        title: "Walk",
+        plannedRpe: 1,
+        blocks: [],
+      }),
     });
     expect(res.status).toBeLessThan(300);
     await new Promise((r) => setTimeout(r, 1500));
-    const [{ n }] = await app.query<{ n: number }>("SELECT COUNT(*) AS n FROM outbox_messages WHERE to_email = ? AND subject = ?", [PHYSIO, `Load flag: ${athlete.name} · Spike`]);
+    const [{ n }] = await app.query<{ n: number }>(
+      "SELECT COUNT(*) AS n FROM outbox_messages WHERE to_email = ? AND subject = ?",
+      [PHYSIO, `Load flag: ${athlete.name} · Spike`],
+    );
     expect(n).toBe(1);
   });
 
@@ -101,12 +125,28 @@ describeBrowser("physio journey", () => {
 
     const list = (await (await physioApi.fetch("/api/alerts?status=all")).json()) as { alerts: Array<{ id: number }> };
     const id = list.alerts[0]!.id;
-    const noNote = await physioApi.fetch(`/api/alerts/${id}`, { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify({ action: "resolve", note: "  " }) });
+    const noNote = await physioApi.fetch(`/api/alerts/${id}`, {
+      method: "PATCH",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ action: "resolve", note: "  " }),
+    });
     expect(noNote.status).toBe(400);
     expect(((await noNote.json()) as { error: { fields: Record<string, string[]> } }).error.fields.note).toBeDefined();
     expect((await physioApi.fetch("/api/alerts?status=later")).status).toBe(400);
-    expect((await physioApi.fetch("/api/alerts/999999", { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify({ action: "acknowledge" }) })).status).toBe(404);
-    const setting = await physioApi.fetch("/api/me/notification-settings", { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify({ alertEmail: "weekly" }) });
+    expect(
+      (
+        await physioApi.fetch("/api/alerts/999999", {
+          method: "PATCH",
+          headers: { "content-type": "application/json" },
+          body: JSON.stringify({ action: "acknowledge" }),
+        })
+      ).status,
+    ).toBe(404);
+    const setting = await physioApi.fetch("/api/me/notification-settings", {
+      method: "PUT",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ alertEmail: "weekly" }),
+    });
     expect(setting.status).toBe(400);
 
     // Calendar links: the athlete manages only their own; a physio manages none; a coach any in the team.

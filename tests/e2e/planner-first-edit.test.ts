@@ -13,21 +13,44 @@ const thisWeek = teamWeekStart(DateTime.now().setZone("Europe/London").toISODate
 const week = addDaysTo(thisWeek, 21);
 const day = (i: number) => addDaysTo(week, i);
 
-const row = (page: Page, athleteId: number) => page.locator(`[data-testid="athlete-row"][data-athlete-id="${athleteId}"]`);
-const cell = (page: Page, athleteId: number, date: string) => page.locator(`[data-testid="day-cell"][data-athlete-id="${athleteId}"][data-date="${date}"]`);
+const row = (page: Page, athleteId: number) =>
+  page.locator(`[data-testid="athlete-row"][data-athlete-id="${athleteId}"]`);
+const cell = (page: Page, athleteId: number, date: string) =>
+  page.locator(`[data-testid="day-cell"][data-athlete-id="${athleteId}"][data-date="${date}"]`);
 const cards = (page: Page, athleteId: number, date: string) => cell(page, athleteId, date).getByTestId("session-card");
-const srpe = async (page: Page, athleteId: number) => Number(await row(page, athleteId).getByTestId("total-srpe").getAttribute("data-value"));
+const srpe = async (page: Page, athleteId: number) =>
+  Number(await row(page, athleteId).getByTestId("total-srpe").getAttribute("data-value"));
 const notice = (page: Page) => page.getByTestId("plan-notice");
 
 async function settled(page: Page) {
-  await page.waitForFunction(() => !document.querySelector('[data-pending="true"]') && document.querySelector('[data-testid="planner"]')?.getAttribute("data-save-state") === "idle");
+  await page.waitForFunction(
+    () =>
+      !document.querySelector('[data-pending="true"]') &&
+      document.querySelector('[data-testid="planner"]')?.getAttribute("data-save-state") === "idle",
+  );
 }
 
 /** A blank session saved through the API, before the page that is tested is opened. */
 async function createSession(page: Page, teamId: string, athleteId: number, date: string, title: string) {
-  const body = { from: "blank", athleteId, date, startTime: "16:00", durationMin: 40, title, plannedRpe: 5, blocks: [] };
+  const body = {
+    from: "blank",
+    athleteId,
+    date,
+    startTime: "16:00",
+    durationMin: 40,
+    title,
+    plannedRpe: 5,
+    blocks: [],
+  };
   const status = await page.evaluate(
-    async ([url, b]) => (await fetch(url as string, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(b) })).status,
+    async ([url, b]) =>
+      (
+        await fetch(url as string, {
+          method: "POST",
+          headers: { "content-type": "application/json" },
+          body: JSON.stringify(b),
+        })
+      ).status,
     [`/api/teams/${teamId}/sessions`, body] as const,
   );
   expect(status).toBe(201);
@@ -68,7 +91,10 @@ describeBrowser("planner: the first edit after opening, and the copy preview", (
     await signIn(page, app, coach.email);
     await openPlan(page, app);
     teamId = (await page.getByTestId("planner").getAttribute("data-team-id"))!;
-    plan = await page.evaluate(async (url) => (await fetch(url)).json() as Promise<PlanWeek>, `/api/teams/${teamId}/plan?week=${week}`);
+    plan = await page.evaluate(
+      async (url) => (await fetch(url)).json() as Promise<PlanWeek>,
+      `/api/teams/${teamId}/plan?week=${week}`,
+    );
   });
   /** A new session's card on a freshly opened plan: its button, which opens the editor and starts a drag. */
   const freshCard = async (athleteId: number, date: string, title: string) => {
@@ -118,7 +144,16 @@ describeBrowser("planner: the first edit after opening, and the copy preview", (
     // dnd-kit's keyboard sensor listens a moment after the drag starts: press again until the preview moves.
     for (let attempt = 0; attempt < 3; attempt++) {
       await page.keyboard.press("ArrowRight");
-      if (await preview.filter({ hasText: "moved to" }).waitFor({ timeout: 2000 }).then(() => true, () => false)) break;
+      if (
+        await preview
+          .filter({ hasText: "moved to" })
+          .waitFor({ timeout: 2000 })
+          .then(
+            () => true,
+            () => false,
+          )
+      )
+        break;
     }
     const figures = async () => {
       const m = /sRPE (\d[\d,]*) → (\d[\d,]*) AU/.exec((await preview.textContent()) ?? "");

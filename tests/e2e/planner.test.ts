@@ -6,7 +6,16 @@ import { formatDayShort } from "@/lib/format/dates";
 import { addDaysTo, teamWeekStart } from "@/lib/plan/week";
 import type { PlanWeek } from "@/lib/plan/types";
 import { join } from "node:path";
-import { ARTIFACTS, apiSession, describeBrowser, launchBrowser, screenshot, signIn, startApp, type App } from "./harness";
+import {
+  ARTIFACTS,
+  apiSession,
+  describeBrowser,
+  launchBrowser,
+  screenshot,
+  signIn,
+  startApp,
+  type App,
+} from "./harness";
 
 const coach = DEMO_STAFF.find((s) => s.role === "coach")!;
 const physio = DEMO_STAFF.find((s) => s.role === "physio")!;
@@ -19,7 +28,12 @@ const week = addDaysTo(thisWeek, 14);
 const day = (i: number) => addDaysTo(week, i);
 
 /** Pointer drag the way a person does it: press, move in steps (past dnd-kit's 5 px threshold), release. */
-async function drag(page: Page, from: Locator, to: Locator, { alt = false, hold }: { alt?: boolean; hold?: () => Promise<void> } = {}) {
+async function drag(
+  page: Page,
+  from: Locator,
+  to: Locator,
+  { alt = false, hold }: { alt?: boolean; hold?: () => Promise<void> } = {},
+) {
   await from.scrollIntoViewIfNeeded();
   const a = (await from.boundingBox())!;
   await page.mouse.move(a.x + a.width / 2, a.y + a.height / 2);
@@ -34,18 +48,26 @@ async function drag(page: Page, from: Locator, to: Locator, { alt = false, hold 
   if (alt) await page.keyboard.up("Alt");
 }
 
-const row = (page: Page, athleteId: number) => page.locator(`[data-testid="athlete-row"][data-athlete-id="${athleteId}"]`);
-const cell = (page: Page, athleteId: number, date: string) => page.locator(`[data-testid="day-cell"][data-athlete-id="${athleteId}"][data-date="${date}"]`);
+const row = (page: Page, athleteId: number) =>
+  page.locator(`[data-testid="athlete-row"][data-athlete-id="${athleteId}"]`);
+const cell = (page: Page, athleteId: number, date: string) =>
+  page.locator(`[data-testid="day-cell"][data-athlete-id="${athleteId}"][data-date="${date}"]`);
 const cards = (page: Page, athleteId: number, date: string) => cell(page, athleteId, date).getByTestId("session-card");
-const template = (page: Page, kind: string) => page.locator(`[data-testid="template-card"][data-kind="${kind}"]`).first();
-const srpe = async (page: Page, athleteId: number) => Number(await row(page, athleteId).getByTestId("total-srpe").getAttribute("data-value"));
+const template = (page: Page, kind: string) =>
+  page.locator(`[data-testid="template-card"][data-kind="${kind}"]`).first();
+const srpe = async (page: Page, athleteId: number) =>
+  Number(await row(page, athleteId).getByTestId("total-srpe").getAttribute("data-value"));
 
 /** A viewport-only shot: a full-page one resizes the window, and dnd-kit cancels a drag on resize. */
 const shotDuringDrag = (page: Page, name: string) => page.screenshot({ path: join(ARTIFACTS, `${name}.png`) });
 
 /** Waits until no optimistic card is left and the grid is idle (saved and confirmed by the server). */
 async function settled(page: Page) {
-  await page.waitForFunction(() => !document.querySelector('[data-pending="true"]') && document.querySelector('[data-testid="planner"]')?.getAttribute("data-save-state") === "idle");
+  await page.waitForFunction(
+    () =>
+      !document.querySelector('[data-pending="true"]') &&
+      document.querySelector('[data-testid="planner"]')?.getAttribute("data-save-state") === "idle",
+  );
 }
 
 describeBrowser("planner journeys", () => {
@@ -64,7 +86,10 @@ describeBrowser("planner journeys", () => {
     await page.goto(`${app.url}/plan?week=${week}`);
     await page.getByTestId("plan-grid").waitFor();
     const teamId = await page.getByTestId("planner").getAttribute("data-team-id");
-    plan = await page.evaluate(async (url) => (await fetch(url)).json() as Promise<PlanWeek>, `/api/teams/${teamId}/plan?week=${week}`);
+    plan = await page.evaluate(
+      async (url) => (await fetch(url)).json() as Promise<PlanWeek>,
+      `/api/teams/${teamId}/plan?week=${week}`,
+    );
   });
   afterAll(async () => {
     await page?.close();
@@ -118,20 +143,29 @@ describeBrowser("planner journeys", () => {
 
   it("copies with Alt held, and undoes the copy", async () => {
     const maya = ids("Maya Okafor");
-    await drag(page, cards(page, maya, day(3)).first().locator("button").first(), cell(page, maya, day(5)), { alt: true });
+    await drag(page, cards(page, maya, day(3)).first().locator("button").first(), cell(page, maya, day(5)), {
+      alt: true,
+    });
     await cards(page, maya, day(5)).first().waitFor();
     await settled(page);
     expect(await cards(page, maya, day(3)).count()).toBe(1);
     expect(await cards(page, maya, day(5)).count()).toBe(1);
     await page.getByTestId("undo").click();
-    await page.waitForFunction((sel) => document.querySelectorAll(sel).length === 0, `[data-testid="day-cell"][data-athlete-id="${maya}"][data-date="${day(5)}"] [data-testid="session-card"]`);
+    await page.waitForFunction(
+      (sel) => document.querySelectorAll(sel).length === 0,
+      `[data-testid="day-cell"][data-athlete-id="${maya}"][data-date="${day(5)}"] [data-testid="session-card"]`,
+    );
     await settled(page);
     expect(await cards(page, maya, day(3)).count()).toBe(1);
   });
 
   it("drags a template onto a group's day: every athlete of the group gets it", async () => {
     const group = plan.groups.find((g) => g.name === "Junior sprint")!;
-    await drag(page, template(page, "tempo"), page.locator(`[data-testid="group-cell"][data-group-id="${group.id}"][data-date="${day(2)}"]`));
+    await drag(
+      page,
+      template(page, "tempo"),
+      page.locator(`[data-testid="group-cell"][data-group-id="${group.id}"][data-date="${day(2)}"]`),
+    );
     await settled(page);
     for (const id of group.athleteIds) expect(await cards(page, id, day(2)).count()).toBe(1);
     await page.evaluate(() => window.scrollTo(0, 0));
@@ -144,7 +178,15 @@ describeBrowser("planner journeys", () => {
     const made = await api.fetch(`/api/teams/${plan.teamId}/templates`, {
       method: "POST",
       headers: { "content-type": "application/json" },
-      body: JSON.stringify({ kind: "speed_endurance", title: "Double speed endurance", running: { sets: 2, reps: 3, distanceM: 150, intensityPct: 90, start: "standing", runInM: 0, restSec: 600 }, drills: null, notes: null, durationMin: 180, plannedRpe: 10 }),
+      body: JSON.stringify({
+        kind: "speed_endurance",
+        title: "Double speed endurance",
+        running: { sets: 2, reps: 3, distanceM: 150, intensityPct: 90, start: "standing", runInM: 0, restSec: 600 },
+        drills: null,
+        notes: null,
+        durationMin: 180,
+        plannedRpe: 10,
+      }),
     });
     expect(made.status).toBe(201);
     const { template: heavy } = (await made.json()) as { template: { id: number } };
@@ -157,7 +199,9 @@ describeBrowser("planner journeys", () => {
     for (let i = 1; i < 7 && !warned; i++) {
       await drag(page, source, cell(page, callum, day(i)), {
         hold: async () => {
-          await row(page, callum).locator('[data-testid="row-load"][data-previewing="true"]').waitFor({ timeout: 5000 });
+          await row(page, callum)
+            .locator('[data-testid="row-load"][data-previewing="true"]')
+            .waitFor({ timeout: 5000 });
           warned = (await warning.count()) > 0;
           if (warned) {
             expect(await warning.textContent()).toMatch(/at or above the spike threshold/);
@@ -181,7 +225,13 @@ describeBrowser("planner journeys", () => {
     const set = await staff.fetch(`/api/athletes/${ruben}/restrictions`, {
       method: "POST",
       headers: { "content-type": "application/json" },
-      body: JSON.stringify({ rule: "no_kind", blockKinds: ["max_velocity"], startsOn: day(0), endsOn: day(6), note: "Calf strain, grade 1: no flying sprints this week" }),
+      body: JSON.stringify({
+        rule: "no_kind",
+        blockKinds: ["max_velocity"],
+        startsOn: day(0),
+        endsOn: day(6),
+        note: "Calf strain, grade 1: no flying sprints this week",
+      }),
     });
     expect(set.status).toBe(201);
     await page.reload();
@@ -217,9 +267,18 @@ describeBrowser("planner journeys", () => {
     expect(await cards(page, ruben, day(2)).first().getByTestId("card-restricted").count()).toBe(1);
 
     // The medical staff see the override with its reason, and have an alert for it.
-    const list = (await (await staff.fetch(`/api/athletes/${ruben}/restrictions`)).json()) as { overrides: { reason: string; sessionDate: string }[] };
-    expect(list.overrides).toEqual([expect.objectContaining({ reason: "Cleared by the physio at today's check; flys capped at 20 m", sessionDate: day(2) })]);
-    const alerts = (await (await staff.fetch(`/api/alerts?status=all&athleteId=${ruben}`)).json()) as { alerts: { kind: string }[] };
+    const list = (await (await staff.fetch(`/api/athletes/${ruben}/restrictions`)).json()) as {
+      overrides: { reason: string; sessionDate: string }[];
+    };
+    expect(list.overrides).toEqual([
+      expect.objectContaining({
+        reason: "Cleared by the physio at today's check; flys capped at 20 m",
+        sessionDate: day(2),
+      }),
+    ]);
+    const alerts = (await (await staff.fetch(`/api/alerts?status=all&athleteId=${ruben}`)).json()) as {
+      alerts: { kind: string }[];
+    };
     expect(alerts.alerts.map((a) => a.kind)).toContain("restriction_override");
   });
 
@@ -240,9 +299,14 @@ describeBrowser("planner journeys", () => {
           .getByTestId("drop-preview")
           .filter({ hasText: where })
           .waitFor({ timeout: 2000 })
-          .then(() => true, () => false);
+          .then(
+            () => true,
+            () => false,
+          );
         if (reached) return;
-        console.warn(`keyboard drag: ${key} did not reach ${where} yet; pressing again (live region: ${await page.locator('[id^="DndLiveRegion"]').textContent()})`);
+        console.warn(
+          `keyboard drag: ${key} did not reach ${where} yet; pressing again (live region: ${await page.locator('[id^="DndLiveRegion"]').textContent()})`,
+        );
       }
       throw new Error(`the keyboard drag did not reach ${where}`);
     };
@@ -272,7 +336,11 @@ describeBrowser("planner journeys", () => {
     const id = Number(await cards(page, maya, day(3)).first().getAttribute("data-session-id"));
     const other = await apiSession(app, headCoach.email);
     const current = (await (await other.fetch(`/api/sessions/${id}`)).json()) as { session: { version: number } };
-    const res = await other.fetch(`/api/sessions/${id}`, { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify({ version: current.session.version, startTime: "07:00" }) });
+    const res = await other.fetch(`/api/sessions/${id}`, {
+      method: "PATCH",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ version: current.session.version, startTime: "07:00" }),
+    });
     expect(res.status).toBe(200);
     await drag(page, cards(page, maya, day(3)).first().locator("button").first(), cell(page, maya, day(4)));
     await page.locator('[data-testid="plan-notice"][data-tone="refused"]').waitFor();
@@ -313,8 +381,14 @@ describeBrowser("planner journeys", () => {
     await page.getByTestId("template-card").first().getByTestId("edit-template").click();
     await editor.waitFor();
     const other = await apiSession(app, coach.email);
-    const { template: read } = (await (await other.fetch(`/api/templates/${id}`)).json()) as { template: Record<string, unknown> };
-    const saved = await other.fetch(`/api/templates/${id}`, { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify({ ...read, title: "Flying 20s, the other coach's" }) });
+    const { template: read } = (await (await other.fetch(`/api/templates/${id}`)).json()) as {
+      template: Record<string, unknown>;
+    };
+    const saved = await other.fetch(`/api/templates/${id}`, {
+      method: "PUT",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ ...read, title: "Flying 20s, the other coach's" }),
+    });
     expect(saved.status).toBe(200);
     await page.getByLabel("Title").fill("Flying 20s, mine");
     await page.getByTestId("save-template").click();
@@ -340,7 +414,10 @@ describeBrowser("planner journeys", () => {
     await page.evaluate(() => window.scrollTo(0, 0));
     await page.screenshot({ path: join(ARTIFACTS, "planner-confirm-publish.png") });
     await page.getByTestId("confirm-yes").click();
-    await page.locator('[data-testid="plan-notice"]').filter({ hasText: `Published ${drafts} session` }).waitFor();
+    await page
+      .locator('[data-testid="plan-notice"]')
+      .filter({ hasText: `Published ${drafts} session` })
+      .waitFor();
     await settled(page);
     expect(await page.locator('[data-testid="session-card"][data-status="draft"]').count()).toBe(0);
 
@@ -349,7 +426,10 @@ describeBrowser("planner journeys", () => {
     await page.getByTestId("confirm-yes").click();
     await page.locator('[data-testid="plan-notice"]').filter({ hasText: "to next week as drafts" }).waitFor();
     await page.getByTestId("next-week").click();
-    await page.waitForFunction((w) => document.querySelector('[data-testid="planner"]')?.getAttribute("data-week") === w, day(7));
+    await page.waitForFunction(
+      (w) => document.querySelector('[data-testid="planner"]')?.getAttribute("data-week") === w,
+      day(7),
+    );
     await page.getByTestId("plan-grid").waitFor();
     await settled(page);
     expect(await page.locator('[data-testid="session-card"][data-status="draft"]').count()).toBe(total);
@@ -361,7 +441,10 @@ describeBrowser("planner journeys", () => {
 
     await page.getByTestId("pick-date").fill(day(2));
     await page.getByRole("button", { name: "Go", exact: true }).click();
-    await page.waitForFunction((w) => document.querySelector('[data-testid="planner"]')?.getAttribute("data-week") === w, week);
+    await page.waitForFunction(
+      (w) => document.querySelector('[data-testid="planner"]')?.getAttribute("data-week") === w,
+      week,
+    );
     await settled(page);
     expect(await page.locator('[data-testid="session-card"][data-status="published"]').count()).toBe(total);
   });
@@ -394,16 +477,28 @@ describeBrowser("planner journeys", () => {
     const card = p.getByTestId("session-card").first();
     await card.waitFor();
     expect(await p.locator('[aria-roledescription="draggable"]').count()).toBe(0);
-    const before = await p.getByTestId("session-card").evaluateAll((els) => els.map((e) => `${e.getAttribute("data-session-id")}@${e.closest("td")?.getAttribute("data-date")}`));
+    const before = await p
+      .getByTestId("session-card")
+      .evaluateAll((els) =>
+        els.map((e) => `${e.getAttribute("data-session-id")}@${e.closest("td")?.getAttribute("data-date")}`),
+      );
     const target = p.locator('[data-testid="day-cell"]').last();
     await drag(p, card.locator("button").first(), target);
     await p.waitForTimeout(300);
-    const after = await p.getByTestId("session-card").evaluateAll((els) => els.map((e) => `${e.getAttribute("data-session-id")}@${e.closest("td")?.getAttribute("data-date")}`));
+    const after = await p
+      .getByTestId("session-card")
+      .evaluateAll((els) =>
+        els.map((e) => `${e.getAttribute("data-session-id")}@${e.closest("td")?.getAttribute("data-date")}`),
+      );
     expect(after).toEqual(before);
     await screenshot(p, "planner-athlete");
     const api = await apiSession(app, athlete.email!);
     const id = Number(await card.getAttribute("data-session-id"));
-    const res = await api.fetch(`/api/sessions/${id}`, { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify({ version: 1, date: thisWeek }) });
+    const res = await api.fetch(`/api/sessions/${id}`, {
+      method: "PATCH",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ version: 1, date: thisWeek }),
+    });
     expect(res.status).toBe(403);
     await p.close();
   });

@@ -68,9 +68,15 @@ describeBrowser("restrictions journey", () => {
     await expect.poll(() => current.getByTestId("restriction-item").count()).toBe(1);
     const past = card.getByTestId("restrictions-past");
     await past.locator("summary").click();
-    await past.getByTestId("restriction-item").filter({ hasText: "At most 60 ground contacts per session" }).filter({ hasText: "Lifted" }).waitFor();
+    await past
+      .getByTestId("restriction-item")
+      .filter({ hasText: "At most 60 ground contacts per session" })
+      .filter({ hasText: "Lifted" })
+      .waitFor();
     // The seeded one is untouched.
-    expect(await current.getByTestId("restriction-item").first().getByTestId("restriction-text").textContent()).toMatch(/^No max velocity, /);
+    expect(await current.getByTestId("restriction-item").first().getByTestId("restriction-text").textContent()).toMatch(
+      /^No max velocity, /,
+    );
     await context.close();
   });
 
@@ -98,7 +104,12 @@ describeBrowser("restrictions journey", () => {
     const res = await physio.fetch(`/api/athletes/${mayaId}/restrictions`, {
       method: "POST",
       headers: { "content-type": "application/json" },
-      body: JSON.stringify({ rule: "max_intensity", maxPct: 85, startsOn: today, note: "Back from a calf strain: build up gradually." }),
+      body: JSON.stringify({
+        rule: "max_intensity",
+        maxPct: 85,
+        startsOn: today,
+        note: "Back from a calf strain: build up gradually.",
+      }),
     });
     expect(res.status, await res.clone().text()).toBe(201);
 

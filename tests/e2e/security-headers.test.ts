@@ -17,7 +17,11 @@ async function watch(context: BrowserContext): Promise<{ violations: Violation[]
   await context.exposeBinding("__cspViolation", (_src, v: Violation) => void seen.violations.push(v));
   await context.addInitScript(() => {
     document.addEventListener("securitypolicyviolation", (e) => {
-      (window as unknown as { __cspViolation: (v: unknown) => void }).__cspViolation({ directive: e.violatedDirective, blocked: e.blockedURI, source: `${location.pathname} ${e.sourceFile}:${e.lineNumber}` });
+      (window as unknown as { __cspViolation: (v: unknown) => void }).__cspViolation({
+        directive: e.violatedDirective,
+        blocked: e.blockedURI,
+        source: `${location.pathname} ${e.sourceFile}:${e.lineNumber}`,
+      });
     });
   });
   context.on("console", (m) => {
@@ -30,7 +34,11 @@ async function visit(page: Page, url: string) {
   const res = await page.goto(url, { waitUntil: "networkidle" });
   expect(res?.status(), url).toBeLessThan(400);
   // Hydration ran: a nonce-less or blocked script would leave the page without React.
-  await page.waitForFunction(() => document.querySelector("body") !== null && (window as unknown as { next?: unknown }).next !== undefined, null, { timeout: 10_000 });
+  await page.waitForFunction(
+    () => document.querySelector("body") !== null && (window as unknown as { next?: unknown }).next !== undefined,
+    null,
+    { timeout: 10_000 },
+  );
   await page.waitForTimeout(300);
 }
 
@@ -43,7 +51,10 @@ describeBrowser("security headers", () => {
   beforeAll(async () => {
     app = await startMailApp();
     browser = await launchBrowser();
-    const [maya] = await app.query<{ id: number; team_id: number }>("SELECT a.id, a.team_id FROM athletes a JOIN users u ON u.id = a.user_id WHERE u.email = ?", [MAYA]);
+    const [maya] = await app.query<{ id: number; team_id: number }>(
+      "SELECT a.id, a.team_id FROM athletes a JOIN users u ON u.id = a.user_id WHERE u.email = ?",
+      [MAYA],
+    );
     teamId = maya!.team_id;
     athleteId = maya!.id;
   }, 300_000);
@@ -58,9 +69,38 @@ describeBrowser("security headers", () => {
     const page = await context.newPage();
     await visit(page, `${app.url}/sign-in`);
     await signIn(page, app, HEAD);
-    for (const path of ["/home", "/plan", "/load", `/load/${athleteId}`, "/alerts", "/squad", "/members", "/mailbox", "/settings"]) await visit(page, `${app.url}${path}`);
+    for (const path of [
+      "/home",
+      "/plan",
+      "/load",
+      `/load/${athleteId}`,
+      "/alerts",
+      "/squad",
+      "/members",
+      "/mailbox",
+      "/settings",
+    ])
+      await visit(page, `${app.url}${path}`);
     // A same-origin write from the page passes the Origin check.
-    const status = await page.evaluate(async (t) => (await fetch(`/api/teams/${t}/templates`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ kind: "recovery", title: "Strides", running: null, drills: null, notes: null, durationMin: 20, plannedRpe: 3 }) })).status, teamId);
+    const status = await page.evaluate(
+      async (t) =>
+        (
+          await fetch(`/api/teams/${t}/templates`, {
+            method: "POST",
+            headers: { "content-type": "application/json" },
+            body: JSON.stringify({
+              kind: "recovery",
+              title: "Strides",
+              running: null,
+              drills: null,
+              notes: null,
+              durationMin: 20,
+              plannedRpe: 3,
+            }),
+          })
+        ).status,
+      teamId,
+    );
     expect(status).toBe(201);
     await context.close();
 
@@ -68,7 +108,8 @@ describeBrowser("security headers", () => {
     const seenAthlete = await watch(athlete);
     const phone = await athlete.newPage();
     await signIn(phone, app, MAYA);
-    for (const path of ["/home", "/me", `/load/${athleteId}`, "/plan", "/mailbox"]) await visit(phone, `${app.url}${path}`);
+    for (const path of ["/home", "/me", `/load/${athleteId}`, "/plan", "/mailbox"])
+      await visit(phone, `${app.url}${path}`);
     await athlete.close();
 
     expect([...seen.violations, ...seenAthlete.violations]).toEqual([]);
@@ -94,7 +135,9 @@ describeBrowser("security headers", () => {
       expect(res.headers.get("x-frame-options")).toBe("DENY");
       expect(res.headers.get("strict-transport-security")).toBeNull();
     }
-    expect((await fetch(`${app.url}/api/health`)).headers.get("content-security-policy")).toBe("default-src 'none'; frame-ancestors 'none'");
+    expect((await fetch(`${app.url}/api/health`)).headers.get("content-security-policy")).toBe(
+      "default-src 'none'; frame-ancestors 'none'",
+    );
     // Behind a TLS proxy (X-Forwarded-Proto: https) the answers ask browsers to stay on HTTPS.
     const tls = await fetch(`${app.url}/sign-in`, { headers: { "x-forwarded-proto": "https" } });
     expect(tls.headers.get("strict-transport-security")).toBe("max-age=31536000; includeSubDomains");
@@ -118,19 +161,47 @@ describeBrowser("security headers", () => {
     });
     const started = Date.now();
     const big = await coach
-      .fetch(`/api/teams/${teamId}/templates`, { method: "POST", headers: { "content-type": "application/json" }, body, duplex: "half" } as RequestInit)
-      .then((r) => r.status, (e: Error) => `connection closed: ${e.message}`);
+      .fetch(`/api/teams/${teamId}/templates`, {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body,
+        duplex: "half",
+      } as RequestInit)
+      .then(
+        (r) => r.status,
+        (e: Error) => `connection closed: ${e.message}`,
+      );
     expect([413, "connection closed: fetch failed"]).toContain(big);
     expect(sent).toBeLessThan(100 * 1024 * 1024);
     expect(Date.now() - started).toBeLessThan(20_000);
-    const declared = await coach.fetch(`/api/teams/${teamId}/templates`, { method: "POST", headers: { "content-type": "application/json" }, body: " ".repeat(2 * 1024 * 1024) });
+    const declared = await coach.fetch(`/api/teams/${teamId}/templates`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: " ".repeat(2 * 1024 * 1024),
+    });
     expect(declared.status).toBe(413);
     expect((await fetch(`${app.url}/api/health`)).status).toBe(200);
 
-    const template = JSON.stringify({ kind: "recovery", title: "Strides", running: null, drills: null, notes: null, durationMin: 20, plannedRpe: 3 });
-    const evil = await coach.fetch(`/api/teams/${teamId}/templates`, { method: "POST", headers: { "content-type": "application/json", origin: "https://evil.test" }, body: template });
+    const template = JSON.stringify({
+      kind: "recovery",
+      title: "Strides",
+      running: null,
+      drills: null,
+      notes: null,
+      durationMin: 20,
+      plannedRpe: 3,
+    });
+    const evil = await coach.fetch(`/api/teams/${teamId}/templates`, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin: "https://evil.test" },
+      body: template,
+    });
     expect(evil.status).toBe(403);
-    const own = await coach.fetch(`/api/teams/${teamId}/templates`, { method: "POST", headers: { "content-type": "application/json", origin: app.url }, body: template });
+    const own = await coach.fetch(`/api/teams/${teamId}/templates`, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin: app.url },
+      body: template,
+    });
     expect(own.status).toBe(201);
   }, 60_000);
 
@@ -138,7 +209,16 @@ describeBrowser("security headers", () => {
     const coach = await apiSession(app, "coach@harbourvale.test");
     const [key, ref] = [...actionRefs()].find(([k]) => k.startsWith("ACTION /squad#"))!;
     const send = (size: number) =>
-      coach.fetch(ref.path, { method: "POST", headers: { "next-action": ref.id, accept: "text/x-component", "content-type": "text/plain;charset=UTF-8", origin: app.url }, body: JSON.stringify([null, { name: "x".repeat(size) }]) });
+      coach.fetch(ref.path, {
+        method: "POST",
+        headers: {
+          "next-action": ref.id,
+          accept: "text/x-component",
+          "content-type": "text/plain;charset=UTF-8",
+          origin: app.url,
+        },
+        body: JSON.stringify([null, { name: "x".repeat(size) }]),
+      });
     const small = await send(10);
     expect(small.status, key).toBe(200);
     const big = await send(300 * 1024);

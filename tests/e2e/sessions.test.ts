@@ -11,8 +11,10 @@ const headCoach = DEMO_STAFF.find((s) => s.role === "head_coach")!;
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
 /** Sends a stored cookie the way an attacker who copied it would. */
-const replay = (app: App, cookie: string, path: string) => fetch(`${app.url}${path}`, { headers: { cookie }, redirect: "manual" });
-const sessionUser = async (app: App, cookie: string) => ((await (await replay(app, cookie, "/api/auth/session")).json()) as { user?: { email: string } }).user?.email ?? null;
+const replay = (app: App, cookie: string, path: string) =>
+  fetch(`${app.url}${path}`, { headers: { cookie }, redirect: "manual" });
+const sessionUser = async (app: App, cookie: string) =>
+  ((await (await replay(app, cookie, "/api/auth/session")).json()) as { user?: { email: string } }).user?.email ?? null;
 
 async function signOutOverHttp(app: App, cookie: string) {
   const csrf = await fetch(`${app.url}/api/auth/csrf`, { headers: { cookie } });
@@ -29,9 +31,14 @@ async function signOutOverHttp(app: App, cookie: string) {
 function open(path: string) {
   const handle = new sqlite3.Database(path);
   handle.configure("busyTimeout", 5000);
-  const all = <T>(sql: string, params: unknown[] = []) => new Promise<T[]>((resolve, reject) => handle.all(sql, params, (err, rows) => (err ? reject(err) : resolve(rows as T[]))));
-  const run = (sql: string, params: unknown[]) => new Promise<void>((resolve, reject) => handle.run(sql, params, (err) => (err ? reject(err) : resolve())));
-  const exec = (sql: string) => new Promise<void>((resolve, reject) => handle.exec(sql, (err) => (err ? reject(err) : resolve())));
+  const all = <T>(sql: string, params: unknown[] = []) =>
+    new Promise<T[]>((resolve, reject) =>
+      handle.all(sql, params, (err, rows) => (err ? reject(err) : resolve(rows as T[]))),
+    );
+  const run = (sql: string, params: unknown[]) =>
+    new Promise<void>((resolve, reject) => handle.run(sql, params, (err) => (err ? reject(err) : resolve())));
+  const exec = (sql: string) =>
+    new Promise<void>((resolve, reject) => handle.exec(sql, (err) => (err ? reject(err) : resolve())));
   return { all, run, exec, close: () => new Promise<void>((r) => handle.close(() => r())) };
 }
 
@@ -40,7 +47,10 @@ async function resetLinks(dbPath: string, to: string, { atLeast = 1, timeoutMs =
   try {
     const deadline = Date.now() + timeoutMs;
     for (;;) {
-      const rows = await db.all<{ text: string }>("SELECT text FROM outbox_messages WHERE kind = 'password_reset' AND to_email = ? ORDER BY id", [to]);
+      const rows = await db.all<{ text: string }>(
+        "SELECT text FROM outbox_messages WHERE kind = 'password_reset' AND to_email = ? ORDER BY id",
+        [to],
+      );
       if (rows.length >= atLeast) return rows.map((r) => r.text.match(/\/invite\/([A-Za-z0-9_-]{40,})/)![1]!);
       if (Date.now() > deadline) throw new Error(`no reset link for ${to}`);
       await sleep(200);
@@ -54,12 +64,16 @@ async function resetLinks(dbPath: string, to: string, { atLeast = 1, timeoutMs =
 async function plantResetLink(dbPath: string, email: string): Promise<string> {
   const { token, hash } = newToken();
   const db = open(dbPath);
-  const [user] = await db.all<{ id: number; team_id: number }>("SELECT u.id, m.team_id FROM users u JOIN memberships m ON m.user_id = u.id WHERE u.email = ?", [email]);
+  const [user] = await db.all<{ id: number; team_id: number }>(
+    "SELECT u.id, m.team_id FROM users u JOIN memberships m ON m.user_id = u.id WHERE u.email = ?",
+    [email],
+  );
   const stamp = (d: Date) => d.toISOString().replace("T", " ").replace("Z", " +00:00");
   const now = new Date();
-  await db.run("INSERT INTO invitations (team_id, user_id, purpose, token_hash, expires_at, used_at, created_at, updated_at) VALUES (?, ?, 'reset', ?, ?, NULL, ?, ?)", [
-    user!.team_id, user!.id, hash, stamp(new Date(now.getTime() + 3_600_000)), stamp(now), stamp(now),
-  ]);
+  await db.run(
+    "INSERT INTO invitations (team_id, user_id, purpose, token_hash, expires_at, used_at, created_at, updated_at) VALUES (?, ?, 'reset', ?, ?, NULL, ?, ?)",
+    [user!.team_id, user!.id, hash, stamp(new Date(now.getTime() + 3_600_000)), stamp(now), stamp(now)],
+  );
   await db.close();
   return token;
 }
@@ -128,7 +142,8 @@ describeBrowser("sessions end on the server", () => {
     // A second mail waits for the resend window, so an older link still out there is written directly.
     const older = await plantResetLink(app.dbPath, physio.email);
     await setPassword(page, app, first!, "a-new-physio-password");
-    for (const cookie of sessions) expect((await replay(app, cookie, "/api/me/notification-settings")).status).toBe(401);
+    for (const cookie of sessions)
+      expect((await replay(app, cookie, "/api/me/notification-settings")).status).toBe(401);
     expect((await bystander.fetch("/api/me/notification-settings")).status).toBe(200);
     for (const token of [first, older]) {
       await page.goto(`${app.url}/invite/${token}`);

@@ -6,7 +6,14 @@ import { describeBrowser, launchBrowser, startApp, type App } from "./harness";
 const coach = DEMO_STAFF.find((s) => s.role === "coach")!;
 
 // The two reported bypasses plus close relatives, as they stand in the address bar (encoded once).
-const CRAFTED = ["/%5Cevil.test/phish", "/%09/evil.test", "%2F%2Fevil.test", "/%2E//evil.test", "https%3A%2F%2Fevil.test", "/%0A/evil.test"];
+const CRAFTED = [
+  "/%5Cevil.test/phish",
+  "/%09/evil.test",
+  "%2F%2Fevil.test",
+  "/%2E//evil.test",
+  "https%3A%2F%2Fevil.test",
+  "/%0A/evil.test",
+];
 
 describeBrowser("sign-in keeps the browser on the site", () => {
   let app: App;
@@ -55,13 +62,22 @@ describeBrowser("sign-in keeps the browser on the site", () => {
   it("answers next-auth's own sign-in endpoint with a same-site URL only", async () => {
     const csrfRes = await fetch(`${app.url}/api/auth/csrf`);
     const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
-    const cookie = csrfRes.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+    const cookie = csrfRes.headers
+      .getSetCookie()
+      .map((c) => c.split(";")[0])
+      .join("; ");
     for (const callbackUrl of ["/\\evil.test/phish", "/\t/evil.test", "https://evil.test/"]) {
       const res = await fetch(`${app.url}/api/auth/callback/credentials`, {
         method: "POST",
         redirect: "manual",
         headers: { "content-type": "application/x-www-form-urlencoded", cookie },
-        body: new URLSearchParams({ csrfToken, email: coach.email, password: DEMO_PASSWORD, callbackUrl, json: "true" }),
+        body: new URLSearchParams({
+          csrfToken,
+          email: coach.email,
+          password: DEMO_PASSWORD,
+          callbackUrl,
+          json: "true",
+        }),
       });
       const target = res.headers.get("location") ?? ((await res.json()) as { url: string }).url;
       // A browser resolves the answer the same way: it must stay on the site.

@@ -15,14 +15,19 @@ type Answer = { signedIn: boolean; error: string | null };
 async function attempt(app: App, email: string, password: string, from: string): Promise<Answer> {
   const csrfRes = await fetch(`${app.url}/api/auth/csrf`);
   const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
-  const cookie = csrfRes.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  const cookie = csrfRes.headers
+    .getSetCookie()
+    .map((c) => c.split(";")[0])
+    .join("; ");
   const res = await fetch(`${app.url}/api/auth/callback/credentials`, {
     method: "POST",
     redirect: "manual",
     headers: { "content-type": "application/x-www-form-urlencoded", cookie, "x-forwarded-for": from },
     body: new URLSearchParams({ csrfToken, email, password, json: "true" }),
   });
-  const signedIn = res.headers.getSetCookie().some((c) => c.includes("next-auth.session-token=") && !c.includes("Max-Age=0"));
+  const signedIn = res.headers
+    .getSetCookie()
+    .some((c) => c.includes("next-auth.session-token=") && !c.includes("Max-Age=0"));
   const { url } = (await res.json()) as { url: string };
   return { signedIn, error: new URL(url).searchParams.get("error") };
 }
@@ -43,7 +48,11 @@ describeBrowser("sign-in throttling", () => {
   it("stops 50 fast guesses at one account, and the right password straight after is refused too", async () => {
     const answers: Answer[] = [];
     for (let round = 0; round < 5; round++) {
-      answers.push(...(await Promise.all(Array.from({ length: 10 }, (_, i) => attempt(app, coach.email, `wrong-guess-${round}-${i}`, "203.0.113.7")))));
+      answers.push(
+        ...(await Promise.all(
+          Array.from({ length: 10 }, (_, i) => attempt(app, coach.email, `wrong-guess-${round}-${i}`, "203.0.113.7")),
+        )),
+      );
     }
     expect(answers.filter((a) => a.error === "CredentialsSignin")).toHaveLength(10);
     expect(answers.filter((a) => a.error?.startsWith("Throttled:"))).toHaveLength(40);
@@ -64,22 +73,37 @@ describeBrowser("sign-in throttling", () => {
   });
 
   it("closes one address that guesses across many accounts", async () => {
-    const spread = await Promise.all(Array.from({ length: 30 }, (_, i) => attempt(app, `guess${i}@harbourvale.test`, "wrong-password", "203.0.113.10")));
+    const spread = await Promise.all(
+      Array.from({ length: 30 }, (_, i) =>
+        attempt(app, `guess${i}@harbourvale.test`, "wrong-password", "203.0.113.10"),
+      ),
+    );
     expect(spread.every((a) => a.error === "CredentialsSignin")).toBe(true);
-    expect(await attempt(app, "one-more@harbourvale.test", "wrong-password", "203.0.113.10")).toEqual({ signedIn: false, error: "Throttled:15" });
+    expect(await attempt(app, "one-more@harbourvale.test", "wrong-password", "203.0.113.10")).toEqual({
+      signedIn: false,
+      error: "Throttled:15",
+    });
     // Other clients are not held up.
-    expect((await attempt(app, "one-more@harbourvale.test", "wrong-password", "203.0.113.11")).error).toBe("CredentialsSignin");
+    expect((await attempt(app, "one-more@harbourvale.test", "wrong-password", "203.0.113.11")).error).toBe(
+      "CredentialsSignin",
+    );
   });
 
-  it("tells the person in the browser when to try again, and other accounts still sign in", { timeout: 60_000 }, async () => {
-    const page = await browser.newPage();
-    await page.goto(`${app.url}/sign-in`);
-    await page.getByLabel("E-mail").fill(coach.email);
-    await page.getByLabel("Password").fill(DEMO_PASSWORD);
-    await page.getByRole("button", { name: "Sign in" }).click();
-    await expect(page.getByTestId("sign-in-error").textContent()).resolves.toBe("Too many sign-in attempts. Try again in 15 minutes.");
-    await page.close();
-    const head = DEMO_STAFF.find((s) => s.role === "head_coach")!;
-    await expect(apiSession(app, head.email)).resolves.toBeTruthy();
-  });
+  it(
+    "tells the person in the browser when to try again, and other accounts still sign in",
+    { timeout: 60_000 },
+    async () => {
+      const page = await browser.newPage();
+      await page.goto(`${app.url}/sign-in`);
+      await page.getByLabel("E-mail").fill(coach.email);
+      await page.getByLabel("Password").fill(DEMO_PASSWORD);
+      await page.getByRole("button", { name: "Sign in" }).click();
+      await expect(page.getByTestId("sign-in-error").textContent()).resolves.toBe(
+        "Too many sign-in attempts. Try again in 15 minutes.",
+      );
+      await page.close();
+      const head = DEMO_STAFF.find((s) => s.role === "head_coach")!;
+      await expect(apiSession(app, head.email)).resolves.toBeTruthy();
+    },
+  );
 });

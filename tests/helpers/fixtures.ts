@@ -8,7 +8,10 @@ export const TEST_PASSWORD = "test-password-123";
 type Person = { name: string; email: string; role: Role };
 
 /** A small invented team for tests, independent of the demo seed. */
-export async function createTestTeam(d: Db, { name = "Test Track Club", people = defaultPeople(name) }: { name?: string; people?: Person[] } = {}) {
+export async function createTestTeam(
+  d: Db,
+  { name = "Test Track Club", people = defaultPeople(name) }: { name?: string; people?: Person[] } = {},
+) {
   const passwordHash = await hashPassword(passwordSchema.parse(TEST_PASSWORD));
   const team = await d.Team.create({ name, timeZone: "Europe/London", weekStartDay: 1 });
   await d.TeamLoadSettings.create({ teamId: team.id });
@@ -20,7 +23,20 @@ export async function createTestTeam(d: Db, { name = "Test Track Club", people =
     let athleteId: number | null = null;
     if (p.role === "athlete") {
       athleteId = (
-        await d.Athlete.create({ teamId: team.id, userId: user.id, groupId: group.id, name: p.name, sex: "female", birthDate: "2004-01-01", bodyMassKg: 60, vmaxMs: 9.5, vmaxTestedOn: "2026-10-01", tauS: 1.15, stepLengthM: 2.1, plyoLevel: "intermediate" })
+        await d.Athlete.create({
+          teamId: team.id,
+          userId: user.id,
+          groupId: group.id,
+          name: p.name,
+          sex: "female",
+          birthDate: "2004-01-01",
+          bodyMassKg: 60,
+          vmaxMs: 9.5,
+          vmaxTestedOn: "2026-10-01",
+          tauS: 1.15,
+          stepLengthM: 2.1,
+          plyoLevel: "intermediate",
+        })
       ).id;
     }
     users[p.role === "athlete" ? p.email : p.role] = { userId: user.id, athleteId, membershipId: membership.id };

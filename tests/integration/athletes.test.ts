@@ -8,11 +8,29 @@ const d = await setupTestDb();
 const a = await createTestTeam(d, { name: "Squad One" });
 const b = await createTestTeam(d, { name: "Squad Two" });
 
-const base = { name: "Tess Tempo", groupId: "", sex: "", birthDate: "", bodyMassKg: "", vmaxMs: "9.4", vmaxTestedOn: "2026-10-06", tauS: "1.1", stepLengthM: "", plyoLevel: "beginner" };
+const base = {
+  name: "Tess Tempo",
+  groupId: "",
+  sex: "",
+  birthDate: "",
+  bodyMassKg: "",
+  vmaxMs: "9.4",
+  vmaxTestedOn: "2026-10-06",
+  tauS: "1.1",
+  stepLengthM: "",
+  plyoLevel: "beginner",
+};
 
 describe("athlete profiles", () => {
   it("parses form strings into numbers and nulls", () => {
-    expect(athleteSchema.parse(base)).toMatchObject({ vmaxMs: 9.4, tauS: 1.1, stepLengthM: null, groupId: null, sex: null, birthDate: null });
+    expect(athleteSchema.parse(base)).toMatchObject({
+      vmaxMs: 9.4,
+      tauS: 1.1,
+      stepLengthM: null,
+      groupId: null,
+      sex: null,
+      birthDate: null,
+    });
   });
 
   it("names the field that is out of range", () => {
@@ -22,16 +40,23 @@ describe("athlete profiles", () => {
   });
 
   it("creates and updates within the team only", async () => {
-    const { id } = await createAthlete({ teamId: a.teamId, input: athleteSchema.parse({ ...base, groupId: String(a.groupId) }) });
+    const { id } = await createAthlete({
+      teamId: a.teamId,
+      input: athleteSchema.parse({ ...base, groupId: String(a.groupId) }),
+    });
     expect((await getAthlete({ teamId: a.teamId, athleteId: id }))?.groupName).toBe("Sprint");
     await updateAthlete({ teamId: a.teamId, athleteId: id, input: athleteSchema.parse({ ...base, vmaxMs: "9.9" }) });
     expect((await getAthlete({ teamId: a.teamId, athleteId: id }))?.vmaxMs).toBe(9.9);
-    await expect(updateAthlete({ teamId: b.teamId, athleteId: id, input: athleteSchema.parse(base) })).rejects.toMatchObject({ status: 404 });
+    await expect(
+      updateAthlete({ teamId: b.teamId, athleteId: id, input: athleteSchema.parse(base) }),
+    ).rejects.toMatchObject({ status: 404 });
     expect(await getAthlete({ teamId: b.teamId, athleteId: id })).toBeNull();
   });
 
   it("refuses another team's training group", async () => {
-    await expect(createAthlete({ teamId: a.teamId, input: athleteSchema.parse({ ...base, groupId: String(b.groupId) }) })).rejects.toMatchObject({ status: 400, fields: { groupId: ["Unknown group"] } });
+    await expect(
+      createAthlete({ teamId: a.teamId, input: athleteSchema.parse({ ...base, groupId: String(b.groupId) }) }),
+    ).rejects.toMatchObject({ status: 400, fields: { groupId: ["Unknown group"] } });
   });
 
   it("lists a squad without account details", async () => {

@@ -16,14 +16,55 @@ const coach = team.users.coach.userId;
 const ada = team.users["ada@feedclub.test"].athleteId!;
 const ben = team.users["ben@feedclub.test"].athleteId!;
 
-async function addSession(athleteId: number, date: string, status: "draft" | "published" | "cancelled", title: string, notes: string | null = null) {
-  const s = await d.PlannedSession.create({ teamId: team.teamId, athleteId, date, startTime: "18:00", durationMin: 75, title, plannedRpe: 7, status, notes, publishedAt: status === "draft" ? null : new Date() });
-  await d.SessionBlock.create({ sessionId: s.id, templateId: null, position: 0, kind: "max_velocity", title: "Flying 30s", running: { sets: 2, reps: 3, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 }, drills: null, notes: null });
-  await d.SessionBlock.create({ sessionId: s.id, templateId: null, position: 1, kind: "plyometric", title: "Hops", running: null, drills: [{ name: "Pogo jumps", sets: 2, reps: 10, contactsPerRep: 1, intensity: "low" }], notes: null });
+async function addSession(
+  athleteId: number,
+  date: string,
+  status: "draft" | "published" | "cancelled",
+  title: string,
+  notes: string | null = null,
+) {
+  const s = await d.PlannedSession.create({
+    teamId: team.teamId,
+    athleteId,
+    date,
+    startTime: "18:00",
+    durationMin: 75,
+    title,
+    plannedRpe: 7,
+    status,
+    notes,
+    publishedAt: status === "draft" ? null : new Date(),
+  });
+  await d.SessionBlock.create({
+    sessionId: s.id,
+    templateId: null,
+    position: 0,
+    kind: "max_velocity",
+    title: "Flying 30s",
+    running: { sets: 2, reps: 3, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 },
+    drills: null,
+    notes: null,
+  });
+  await d.SessionBlock.create({
+    sessionId: s.id,
+    templateId: null,
+    position: 1,
+    kind: "plyometric",
+    title: "Hops",
+    running: null,
+    drills: [{ name: "Pogo jumps", sets: 2, reps: 10, contactsPerRep: 1, intensity: "low" }],
+    notes: null,
+  });
   return s;
 }
 
-const adaPublished = await addSession(ada, "2026-03-31", "published", "Flys, starts; and more", "Bring spikes, and water; it is a long one. ".repeat(4).trim());
+const adaPublished = await addSession(
+  ada,
+  "2026-03-31",
+  "published",
+  "Flys, starts; and more",
+  "Bring spikes, and water; it is a long one. ".repeat(4).trim(),
+);
 const adaCancelled = await addSession(ada, "2026-04-02", "cancelled", "Tempo");
 await addSession(ada, "2026-04-03", "draft", "Secret draft");
 await addSession(ben, "2026-03-31", "published", "Ben's starts");
@@ -32,7 +73,9 @@ const adaToken = (await rotateCalendarToken({ athleteId: ada, createdBy: null })
 const benToken = (await rotateCalendarToken({ athleteId: ben, createdBy: null })).token;
 
 async function fetchFeed(segment: string) {
-  return GET(new Request(`http://sprintwright.test/api/calendar/${segment}`), { params: Promise.resolve({ token: segment }) });
+  return GET(new Request(`http://sprintwright.test/api/calendar/${segment}`), {
+    params: Promise.resolve({ token: segment }),
+  });
 }
 
 function parse(ics: string) {
@@ -50,7 +93,10 @@ describe("athlete calendar feed", () => {
     const { cal, events } = parse(ics);
     // A subscription feed is a plain published calendar: no METHOD (RFC 5545 §3.7.2 is for iTIP only).
     expect(cal.getFirstPropertyValue("method")).toBeNull();
-    expect(events.map((e) => e.uid)).toEqual([`session-${adaPublished.id}@sprintwright`, `session-${adaCancelled.id}@sprintwright`]);
+    expect(events.map((e) => e.uid)).toEqual([
+      `session-${adaPublished.id}@sprintwright`,
+      `session-${adaCancelled.id}@sprintwright`,
+    ]);
     expect(events.map((e) => e.component.getFirstPropertyValue("status"))).toEqual(["CONFIRMED", "CANCELLED"]);
     expect(ics).not.toContain("Secret draft");
     expect(ics).not.toContain("Ben's starts");
@@ -61,7 +107,9 @@ describe("athlete calendar feed", () => {
     expect(first!.endDate.toJSDate().toISOString()).toBe("2026-03-31T18:15:00.000Z");
     expect(first!.summary).toBe("Flys, starts; and more · Max velocity");
     // The description lists the blocks in words.
-    expect(first!.description).toContain("Max velocity – Flying 30s: 2 sets of 3 × 30 m from a flying start with a 20 m run-in at 95% of top speed, 4 min rest");
+    expect(first!.description).toContain(
+      "Max velocity – Flying 30s: 2 sets of 3 × 30 m from a flying start with a 20 m run-in at 95% of top speed, 4 min rest",
+    );
     expect(first!.description).toContain("• Pogo jumps: 2 × 10, low intensity, 20 contacts");
     expect(first!.description).toContain("http://sprintwright.test/me#session-");
   });
@@ -102,7 +150,12 @@ describe("athlete calendar feed", () => {
     const lm0 = String(before.component.getFirstPropertyValue("last-modified"));
     await new Promise((r) => setTimeout(r, 1100)); // LAST-MODIFIED has whole seconds
     const row = (await d.PlannedSession.findByPk(adaPublished.id))!;
-    await updateSession({ teamId: team.teamId, actorUserId: coach, sessionId: row.id, input: updateSessionSchema.parse({ version: row.version, startTime: "19:00" }) });
+    await updateSession({
+      teamId: team.teamId,
+      actorUserId: coach,
+      sessionId: row.id,
+      input: updateSessionSchema.parse({ version: row.version, startTime: "19:00" }),
+    });
     const after = parse(await (await fetchFeed(`${adaToken}.ics`)).text()).events[0]!;
     expect(after.uid).toBe(before.uid);
     expect(after.sequence).toBeGreaterThan(seq0);
@@ -121,7 +174,9 @@ describe("athlete calendar feed", () => {
     expect(row.tokenHash).toBe(hashToken(adaToken));
     expect(row.tokenSealed).not.toContain(adaToken);
     expect(adaToken.length).toBeGreaterThanOrEqual(43); // 32 random bytes, base64url
-    expect((await getCalendarFeedStatus({ athleteId: ada })).url).toBe(`http://sprintwright.test/api/calendar/${adaToken}.ics`);
+    expect((await getCalendarFeedStatus({ athleteId: ada })).url).toBe(
+      `http://sprintwright.test/api/calendar/${adaToken}.ics`,
+    );
   });
 
   it("a rotated, revoked, unknown or malformed token gives 404 and no calendar", async () => {

@@ -16,14 +16,43 @@ const coach = team.users.coach.userId;
 const ada = team.users["ada@inviteclub.test"].athleteId!;
 const ben = team.users["ben@inviteclub.test"].athleteId!;
 // An athlete without a login has no address: the plan works, no mail is attempted.
-const cleo = (await d.Athlete.create({ teamId: team.teamId, userId: null, groupId: team.groupId, name: "Cleo Nologin", sex: "female", birthDate: null, bodyMassKg: null, vmaxMs: null, vmaxTestedOn: null, tauS: null, stepLengthM: null })).id;
+const cleo = (
+  await d.Athlete.create({
+    teamId: team.teamId,
+    userId: null,
+    groupId: team.groupId,
+    name: "Cleo Nologin",
+    sex: "female",
+    birthDate: null,
+    bodyMassKg: null,
+    vmaxMs: null,
+    vmaxTestedOn: null,
+    tauS: null,
+    stepLengthM: null,
+  })
+).id;
 const ADA = "ada@inviteclub.test";
 
 const WEEK = "2030-03-04"; // a Monday, far from today so no load alert interferes
-const flying = { kind: "max_velocity", title: "Flying 30s", running: { sets: 1, reps: 4, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 }, drills: null, notes: "" };
+const flying = {
+  kind: "max_velocity",
+  title: "Flying 30s",
+  running: { sets: 1, reps: 4, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 },
+  drills: null,
+  notes: "",
+};
 
 async function plan(athleteId: number, date: string, title: string) {
-  const input = createSessionSchema.parse({ from: "blank", athleteId, date, startTime: "17:30", durationMin: 60, title, plannedRpe: 6, blocks: [flying] });
+  const input = createSessionSchema.parse({
+    from: "blank",
+    athleteId,
+    date,
+    startTime: "17:30",
+    durationMin: 60,
+    title,
+    plannedRpe: 6,
+    blocks: [flying],
+  });
   return (await createSessions({ teamId: team.teamId, actorUserId: coach, input })).sessions[0]!;
 }
 
@@ -55,7 +84,7 @@ describe("calendar invitations", () => {
     expect(mail?.subject).toBe("Your sessions for the week of Mon 4 Mar · Invite Club");
     const { part, cal, events } = calendarOf(mail!);
     // RFC 6047 §2.4 / RFC 5545 §8.1: the text/calendar part carries a method parameter equal to METHOD.
-    expect(await rawContentTypes(mail!)).toContain('text/calendar; charset=utf-8; method=REQUEST');
+    expect(await rawContentTypes(mail!)).toContain("text/calendar; charset=utf-8; method=REQUEST");
     expect(part.content).toContain("METHOD:REQUEST");
     expect(cal.getFirstPropertyValue("method")).toBe("REQUEST");
     expect(events.map((e) => e.summary).sort()).toEqual(["Flys · Max velocity", "Starts, curve; bends · Max velocity"]);
@@ -75,7 +104,12 @@ describe("calendar invitations", () => {
   it("moving a published session sends an update with the same UID and a higher SEQUENCE", async () => {
     const row = (await d.PlannedSession.findOne({ where: { athleteId: ada, title: "Flys" } }))!;
     const firstUid = calendarOf((await n.mailTo(ADA))[0]!).events.find((e) => e.summary.startsWith("Flys"))!.uid;
-    await updateSession({ teamId: team.teamId, actorUserId: coach, sessionId: row.id, input: updateSessionSchema.parse({ version: row.version, date: "2030-03-05", startTime: "18:00" }) });
+    await updateSession({
+      teamId: team.teamId,
+      actorUserId: coach,
+      sessionId: row.id,
+      input: updateSessionSchema.parse({ version: row.version, date: "2030-03-05", startTime: "18:00" }),
+    });
     await n.worker.runOnce();
     const mails = await n.mailTo(ADA);
     expect(mails).toHaveLength(2);
@@ -98,7 +132,7 @@ describe("calendar invitations", () => {
     expect(mails).toHaveLength(3);
     expect(mails[2]!.subject).toBe("Cancelled: Flys on Tue 5 Mar");
     const { part, cal, events } = calendarOf(mails[2]!);
-    expect(await rawContentTypes(mails[2]!)).toContain('text/calendar; charset=utf-8; method=CANCEL');
+    expect(await rawContentTypes(mails[2]!)).toContain("text/calendar; charset=utf-8; method=CANCEL");
     expect(part.content).toContain("METHOD:CANCEL");
     expect(cal.getFirstPropertyValue("method")).toBe("CANCEL");
     // RFC 5546 §3.2.5: every cancelled component carries STATUS:CANCELLED.

@@ -26,7 +26,19 @@ function writerLoop() {
     for (let i = 0; running; i++) {
       const title = `Loop ${i}`;
       await d.sequelize.transaction(async (transaction) => {
-        await d.BlockTemplate.create({ teamId, kind: "strength", title, running: null, drills: null, notes: "x".repeat(500), durationMin: 30, plannedRpe: 5 }, { transaction });
+        await d.BlockTemplate.create(
+          {
+            teamId,
+            kind: "strength",
+            title,
+            running: null,
+            drills: null,
+            notes: "x".repeat(500),
+            durationMin: 30,
+            plannedRpe: 5,
+          },
+          { transaction },
+        );
       });
       committed.push(title);
     }
@@ -76,7 +88,13 @@ describe("backup and restore", () => {
     const conn = await openRaw(target);
     await exec(conn, "DELETE FROM block_templates");
     await closeRaw(conn);
-    const { saved, restored } = await restoreDatabase({ from: backup, storage: target, knownMigrations: known, dir, now: new Date("2026-12-02T05:41:00Z") });
+    const { saved, restored } = await restoreDatabase({
+      from: backup,
+      storage: target,
+      knownMigrations: known,
+      dir,
+      now: new Date("2026-12-02T05:41:00Z"),
+    });
     expect(restored.problems).toEqual([]);
     expect(saved).toBe(join(dir, "pre-restore-2026-12-02T05-41-00Z.sqlite"));
     expect((await titles(saved!)).size).toBe(0);
@@ -113,7 +131,9 @@ describe("backup and restore", () => {
     await exec(o, "CREATE TABLE notes (body TEXT)");
     await closeRaw(o);
     await expect(refuse(other)).rejects.toThrow(/not a Sprintwright database/);
-    await expect(restoreDatabase({ from: target, storage: target, knownMigrations: known })).rejects.toThrow(/same file/);
+    await expect(restoreDatabase({ from: target, storage: target, knownMigrations: known })).rejects.toThrow(
+      /same file/,
+    );
     // Nothing was written over the target by any refusal.
     expect(await titles(target)).toEqual(await titles(backup));
   });
@@ -121,7 +141,10 @@ describe("backup and restore", () => {
   it("npm run db:backup and db:restore: restore only checks and explains without --yes", async () => {
     const env = { ...process.env, DATABASE_URL: `file:${d.storage}`, BACKUP_DIR: join(dir, "cli") };
     const run = (script: string, args: string[] = [], extra: Record<string, string> = {}) =>
-      spawnSync(process.execPath, ["--conditions=react-server", "--import", "tsx", `scripts/${script}`, ...args], { env: { ...env, ...extra }, encoding: "utf8" });
+      spawnSync(process.execPath, ["--conditions=react-server", "--import", "tsx", `scripts/${script}`, ...args], {
+        env: { ...env, ...extra },
+        encoding: "utf8",
+      });
     const made = run("db-backup.ts");
     expect(made.status, made.stderr).toBe(0);
     const file = /backup: (\S+\.sqlite)/.exec(made.stdout)?.[1];

@@ -14,18 +14,25 @@ const d = await setupTestDb();
 const { teamId } = await createTestTeam(d, { name: "Queue Club" });
 
 const busyTimeout = async (transaction?: Transaction) => {
-  const [row] = await d.sequelize.query<{ timeout: number }>("PRAGMA busy_timeout", { type: QueryTypes.SELECT, transaction });
+  const [row] = await d.sequelize.query<{ timeout: number }>("PRAGMA busy_timeout", {
+    type: QueryTypes.SELECT,
+    transaction,
+  });
   return row!.timeout;
 };
 const newTemplate = (title: string, transaction?: Transaction) =>
-  d.BlockTemplate.create({ teamId, kind: "strength", title, running: null, drills: null, notes: null, durationMin: 30, plannedRpe: 5 }, { transaction });
+  d.BlockTemplate.create(
+    { teamId, kind: "strength", title, running: null, drills: null, notes: null, durationMin: 30, plannedRpe: 5 },
+    { transaction },
+  );
 
 function otherConnection(): Promise<sqlite3.Database> {
   return new Promise((resolve, reject) => {
     const c = new sqlite3.Database(d.storage, (err) => (err ? reject(err) : resolve(c)));
   });
 }
-const exec = (c: sqlite3.Database, sql: string) => new Promise<void>((resolve, reject) => c.exec(sql, (err) => (err ? reject(err) : resolve())));
+const exec = (c: sqlite3.Database, sql: string) =>
+  new Promise<void>((resolve, reject) => c.exec(sql, (err) => (err ? reject(err) : resolve())));
 
 describe("SQLite writes", () => {
   it("sets busy_timeout on the shared connection and on each transaction's own connection", async () => {
@@ -59,7 +66,10 @@ describe("SQLite writes", () => {
     try {
       expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("busy");
       const started = Date.now();
-      const pending = Promise.all([Promise.allSettled(Array.from({ length: 5 }, (_, i) => newTemplate(`Blocked ${i}`))), runAction(() => newTemplate("Blocked in a form"))]);
+      const pending = Promise.all([
+        Promise.allSettled(Array.from({ length: 5 }, (_, i) => newTemplate(`Blocked ${i}`))),
+        runAction(() => newTemplate("Blocked in a form")),
+      ]);
       // Now our own writer holds the turn, stuck at BEGIN: health still says busy, without waiting for it.
       await new Promise((r) => setTimeout(r, 300));
       const asked = Date.now();
@@ -85,7 +95,9 @@ describe("SQLite writes", () => {
     }
     expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("ok");
     // The connection of the transaction that never began is closed, not left open.
-    expect(Object.keys((d.sequelize.connectionManager as unknown as { connections: Record<string, unknown> }).connections)).toEqual(["default"]);
+    expect(
+      Object.keys((d.sequelize.connectionManager as unknown as { connections: Record<string, unknown> }).connections),
+    ).toEqual(["default"]);
     await newTemplate("After the lock");
     expect(await d.BlockTemplate.count({ where: { teamId, title: "After the lock" } })).toBe(1);
     expect(await d.BlockTemplate.count({ where: { teamId, title: "Blocked 0" } })).toBe(0);

@@ -23,11 +23,27 @@ const ada = a.users["ada@alphatrack.test"].athleteId!;
 const T = String(a.teamId);
 const week = addDaysTo(teamWeekStart(teamToday({ timeZone: "Europe/London" }), 1), 7);
 const p = <T>(v: T) => ({ params: Promise.resolve(v) });
-const template = { kind: "recovery", title: "Strides", running: null, drills: null, notes: null, durationMin: 20, plannedRpe: 3 };
+const template = {
+  kind: "recovery",
+  title: "Strides",
+  running: null,
+  drills: null,
+  notes: null,
+  durationMin: 20,
+  plannedRpe: 3,
+};
 const count = () => d.BlockTemplate.count({ where: { teamId: a.teamId } });
 
 function post(body: BodyInit, headers: Record<string, string> = {}) {
-  return templates.POST(new Request(`http://127.0.0.1:3000/api/teams/${T}/templates`, { method: "POST", headers: { "content-type": "application/json", ...headers }, body, duplex: "half" } as RequestInit), p({ teamId: T }));
+  return templates.POST(
+    new Request(`http://127.0.0.1:3000/api/teams/${T}/templates`, {
+      method: "POST",
+      headers: { "content-type": "application/json", ...headers },
+      body,
+      duplex: "half",
+    } as RequestInit),
+    p({ teamId: T }),
+  );
 }
 
 beforeEach(() => void (who.userId = a.users.coach.userId));
@@ -66,7 +82,13 @@ describe("request size limit (1 MB of JSON)", () => {
 describe("Origin check on state-changing requests", () => {
   it("refuses a write from another site's page with 403 and writes nothing", async () => {
     const before = await count();
-    for (const headers of <Record<string, string>[]>[{ origin: "https://evil.test" }, { origin: "null" }, { origin: "http://127.0.0.1:3000.evil.test" }, { "sec-fetch-site": "cross-site" }, { "sec-fetch-site": "same-site", origin: "http://127.0.0.1:3000" }]) {
+    for (const headers of <Record<string, string>[]>[
+      { origin: "https://evil.test" },
+      { origin: "null" },
+      { origin: "http://127.0.0.1:3000.evil.test" },
+      { "sec-fetch-site": "cross-site" },
+      { "sec-fetch-site": "same-site", origin: "http://127.0.0.1:3000" },
+    ]) {
       const res = await post(JSON.stringify(template), headers);
       expect(res.status, JSON.stringify(headers)).toBe(403);
     }
@@ -74,11 +96,20 @@ describe("Origin check on state-changing requests", () => {
   });
 
   it("accepts this server's own origin, the configured app URL, and clients that send no Origin", async () => {
-    for (const headers of <Record<string, string>[]>[{ origin: "http://127.0.0.1:3000", "sec-fetch-site": "same-origin" }, { origin: "https://club.sprintwright.test" }, {}]) {
+    for (const headers of <Record<string, string>[]>[
+      { origin: "http://127.0.0.1:3000", "sec-fetch-site": "same-origin" },
+      { origin: "https://club.sprintwright.test" },
+      {},
+    ]) {
       expect((await post(JSON.stringify(template), headers)).status, JSON.stringify(headers)).toBe(201);
     }
     // Reads are not checked: a link from another site may open a page that then fetches its data.
-    const read = await plan.GET(new Request(`http://127.0.0.1:3000/api/teams/${T}/plan?week=${week}`, { headers: { origin: "https://evil.test" } }), p({ teamId: T }));
+    const read = await plan.GET(
+      new Request(`http://127.0.0.1:3000/api/teams/${T}/plan?week=${week}`, {
+        headers: { origin: "https://evil.test" },
+      }),
+      p({ teamId: T }),
+    );
     expect(read.status).toBe(200);
   });
 });
@@ -87,7 +118,21 @@ describe("Cache-Control on JSON answers", () => {
   it("marks answers and errors no-store", async () => {
     const read = await plan.GET(new Request(`http://test/api/teams/${T}/plan?week=${week}`), p({ teamId: T }));
     expect(read.headers.get("cache-control")).toBe("no-store");
-    const made = await sessions.POST(new Request(`http://test/api/teams/${T}/sessions`, { method: "POST", body: JSON.stringify({ from: "blank", athleteId: ada, date: week, durationMin: 30, title: "Speed", plannedRpe: 4, blocks: [] }) }), p({ teamId: T }));
+    const made = await sessions.POST(
+      new Request(`http://test/api/teams/${T}/sessions`, {
+        method: "POST",
+        body: JSON.stringify({
+          from: "blank",
+          athleteId: ada,
+          date: week,
+          durationMin: 30,
+          title: "Speed",
+          plannedRpe: 4,
+          blocks: [],
+        }),
+      }),
+      p({ teamId: T }),
+    );
     expect(made.status).toBe(201);
     expect(made.headers.get("cache-control")).toBe("no-store");
     who.userId = null;

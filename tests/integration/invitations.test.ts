@@ -20,7 +20,8 @@ const bravoHead = bravo.users.head_coach!.userId;
 // The account's own name, which Bravo must not learn before it joins.
 await d.User.update({ name: "Orla Quennell" }, { where: { id: physioA.userId } });
 
-const invite = (input: Record<string, unknown>, teamId = bravo.teamId, now?: Date) => addMember({ teamId, input: addMemberSchema.parse(input), invitedBy: bravoHead, now });
+const invite = (input: Record<string, unknown>, teamId = bravo.teamId, now?: Date) =>
+  addMember({ teamId, input: addMemberSchema.parse(input), invitedBy: bravoHead, now });
 
 async function status(p: Promise<unknown>): Promise<number> {
   try {
@@ -40,13 +41,23 @@ describe("inviting an account that exists already", () => {
     expect(members.map((m) => m.userId)).not.toContain(physioA.userId);
     expect(JSON.stringify(members)).not.toContain("Orla Quennell");
     const invitations = await listInvitations({ teamId: bravo.teamId });
-    expect(invitations).toEqual([{ invitationId: expect.any(Number), email: PHYSIO_A, role: "physio", status: "invited", expiresAt: expect.any(String) }]);
+    expect(invitations).toEqual([
+      {
+        invitationId: expect.any(Number),
+        email: PHYSIO_A,
+        role: "physio",
+        status: "invited",
+        expiresAt: expect.any(String),
+      },
+    ]);
     expect(JSON.stringify(invitations)).not.toContain("Orla Quennell");
   });
 
   it("gives the account no access to the team and no alerts from it", async () => {
     await pending;
-    expect(await listMembershipsOfUser({ userId: physioA.userId })).toEqual([expect.objectContaining({ teamId: alpha.teamId })]);
+    expect(await listMembershipsOfUser({ userId: physioA.userId })).toEqual([
+      expect.objectContaining({ teamId: alpha.teamId }),
+    ]);
     expect(await status(authorizeTeam({ userId: physioA.userId, teamId: bravo.teamId, can: "team:view" }))).toBe(404);
     expect((await listAlertRecipients({ teamId: bravo.teamId })).map((r) => r.email)).not.toContain(PHYSIO_A);
   });
@@ -69,13 +80,25 @@ describe("inviting an account that exists already", () => {
 
   it("is accepted only by the invited account, signed in; then the account is a member and the link is spent", async () => {
     const { inviteToken } = await pending;
-    expect(await findOpenInvitation({ token: inviteToken })).toMatchObject({ hasPassword: true, purpose: "invite", role: "physio", teamName: "Bravo Track", name: "Someone Typed" });
+    expect(await findOpenInvitation({ token: inviteToken })).toMatchObject({
+      hasPassword: true,
+      purpose: "invite",
+      role: "physio",
+      teamName: "Bravo Track",
+      name: "Someone Typed",
+    });
     expect(await status(joinTeam({ token: inviteToken, userId: bravoHead }))).toBe(403);
     expect(await status(joinTeam({ token: inviteToken, userId: alpha.users.coach!.userId }))).toBe(403);
     expect((await listMembers({ teamId: bravo.teamId })).map((m) => m.userId)).not.toContain(physioA.userId);
 
-    expect(await joinTeam({ token: inviteToken, userId: physioA.userId })).toEqual({ teamId: bravo.teamId, teamName: "Bravo Track" });
-    expect((await listMembers({ teamId: bravo.teamId })).find((m) => m.userId === physioA.userId)).toMatchObject({ role: "physio", name: "Orla Quennell" });
+    expect(await joinTeam({ token: inviteToken, userId: physioA.userId })).toEqual({
+      teamId: bravo.teamId,
+      teamName: "Bravo Track",
+    });
+    expect((await listMembers({ teamId: bravo.teamId })).find((m) => m.userId === physioA.userId)).toMatchObject({
+      role: "physio",
+      name: "Orla Quennell",
+    });
     expect(await listInvitations({ teamId: bravo.teamId })).toEqual([]);
     expect(await status(joinTeam({ token: inviteToken, userId: physioA.userId }))).toBe(400);
     expect(await status(authorizeTeam({ userId: physioA.userId, teamId: bravo.teamId, can: "team:view" }))).toBe(200);
@@ -84,8 +107,25 @@ describe("inviting an account that exists already", () => {
 
 describe("inviting an athlete", () => {
   it("links the team's profile only when the invitee accepts", async () => {
-    const profile = await d.Athlete.create({ teamId: bravo.teamId, userId: null, groupId: null, name: "Cleo Sprint", sex: null, birthDate: null, bodyMassKg: null, vmaxMs: null, vmaxTestedOn: null, tauS: null, stepLengthM: null });
-    const { inviteToken, athleteId } = await invite({ name: "Cleo Sprint", email: "ada@alphatrack.test", role: "athlete", athleteId: profile.id });
+    const profile = await d.Athlete.create({
+      teamId: bravo.teamId,
+      userId: null,
+      groupId: null,
+      name: "Cleo Sprint",
+      sex: null,
+      birthDate: null,
+      bodyMassKg: null,
+      vmaxMs: null,
+      vmaxTestedOn: null,
+      tauS: null,
+      stepLengthM: null,
+    });
+    const { inviteToken, athleteId } = await invite({
+      name: "Cleo Sprint",
+      email: "ada@alphatrack.test",
+      role: "athlete",
+      athleteId: profile.id,
+    });
     expect(athleteId).toBe(profile.id);
     expect((await d.Athlete.findByPk(profile.id))!.userId).toBeNull();
     const ada = alpha.users["ada@alphatrack.test"]!;
@@ -96,28 +136,48 @@ describe("inviting an athlete", () => {
   });
 
   it("a new account joins, with its new profile linked, by choosing its first password", async () => {
-    const { inviteToken, athleteId, userId } = await invite({ name: "Dara New", email: "dara@bravo.test", role: "athlete" });
+    const { inviteToken, athleteId, userId } = await invite({
+      name: "Dara New",
+      email: "dara@bravo.test",
+      role: "athlete",
+    });
     expect((await d.Athlete.findByPk(athleteId!))!.userId).toBeNull();
     expect(await listMembershipsOfUser({ userId })).toEqual([]);
     await acceptInvitation({ token: inviteToken, password: "dara picks a good one" });
     expect((await d.Athlete.findByPk(athleteId!))!.userId).toBe(userId);
-    expect(await listMembershipsOfUser({ userId })).toEqual([{ teamId: bravo.teamId, teamName: "Bravo Track", role: "athlete", athleteId }]);
+    expect(await listMembershipsOfUser({ userId })).toEqual([
+      { teamId: bravo.teamId, teamName: "Bravo Track", role: "athlete", athleteId },
+    ]);
   });
 });
 
 describe("invitation lifecycle", () => {
   it("an expired invitation never becomes a membership, and sending again replaces it", async () => {
-    const old = await invite({ name: "Late Comer", email: "late@bravo.test", role: "coach" }, bravo.teamId, new Date(Date.now() - 8 * 86_400_000));
-    expect((await listInvitations({ teamId: bravo.teamId })).find((i) => i.email === "late@bravo.test")?.status).toBe("expired");
+    const old = await invite(
+      { name: "Late Comer", email: "late@bravo.test", role: "coach" },
+      bravo.teamId,
+      new Date(Date.now() - 8 * 86_400_000),
+    );
+    expect((await listInvitations({ teamId: bravo.teamId })).find((i) => i.email === "late@bravo.test")?.status).toBe(
+      "expired",
+    );
     expect(await status(acceptInvitation({ token: old.inviteToken, password: "late but keen 123" }))).toBe(400);
     expect(await listMembershipsOfUser({ userId: old.userId })).toEqual([]);
     const fresh = await invite({ name: "Late Comer", email: "late@bravo.test", role: "coach" });
-    expect((await listInvitations({ teamId: bravo.teamId })).filter((i) => i.email === "late@bravo.test").map((i) => i.status)).toEqual(["invited"]);
+    expect(
+      (await listInvitations({ teamId: bravo.teamId }))
+        .filter((i) => i.email === "late@bravo.test")
+        .map((i) => i.status),
+    ).toEqual(["invited"]);
     expect(await findOpenInvitation({ token: fresh.inviteToken })).not.toBeNull();
   });
 
   it("a withdrawn invitation stops working; another team cannot withdraw it", async () => {
-    const { invitationId, inviteToken } = await invite({ name: "Changed Mind", email: "changed@bravo.test", role: "physio" });
+    const { invitationId, inviteToken } = await invite({
+      name: "Changed Mind",
+      email: "changed@bravo.test",
+      role: "physio",
+    });
     expect(await status(withdrawInvitation({ teamId: alpha.teamId, invitationId }))).toBe(404);
     expect(await findOpenInvitation({ token: inviteToken })).not.toBeNull();
     await withdrawInvitation({ teamId: bravo.teamId, invitationId });
@@ -126,6 +186,9 @@ describe("invitation lifecycle", () => {
   });
 
   it("an existing member cannot be invited again", async () => {
-    await expect(invite({ name: "Again", email: "head@bravotrack.test", role: "coach" })).rejects.toMatchObject({ status: 409, fields: { email: ["Already a member of this team"] } });
+    await expect(invite({ name: "Again", email: "head@bravotrack.test", role: "coach" })).rejects.toMatchObject({
+      status: 409,
+      fields: { email: ["Already a member of this team"] },
+    });
   });
 });

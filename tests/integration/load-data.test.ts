@@ -12,10 +12,44 @@ const ada = a.users["ada@alphatrack.test"].athleteId!;
 const ben = a.users["ben@alphatrack.test"].athleteId!;
 const bravoAda = b.users["ada@bravotrack.test"].athleteId!;
 
-async function session(teamId: number, athleteId: number, date: string, status: "draft" | "published" | "cancelled" = "published") {
-  const s = await d.PlannedSession.create({ teamId, athleteId, date, startTime: "17:00", durationMin: 60, title: "Speed", plannedRpe: 6, status, notes: null, publishedAt: null });
-  const b1 = await d.SessionBlock.create({ sessionId: s.id, templateId: null, position: 1, kind: "plyometric", title: "Hops", running: null, drills: [{ name: "Pogo", sets: 2, reps: 10, contactsPerRep: 1, intensity: "low" }], notes: null });
-  const b0 = await d.SessionBlock.create({ sessionId: s.id, templateId: null, position: 0, kind: "acceleration", title: "Starts", running: { sets: 1, reps: 6, distanceM: 20, intensityPct: 95, start: "blocks", runInM: 0, restSec: 180 }, drills: null, notes: "Block starts" });
+async function session(
+  teamId: number,
+  athleteId: number,
+  date: string,
+  status: "draft" | "published" | "cancelled" = "published",
+) {
+  const s = await d.PlannedSession.create({
+    teamId,
+    athleteId,
+    date,
+    startTime: "17:00",
+    durationMin: 60,
+    title: "Speed",
+    plannedRpe: 6,
+    status,
+    notes: null,
+    publishedAt: null,
+  });
+  const b1 = await d.SessionBlock.create({
+    sessionId: s.id,
+    templateId: null,
+    position: 1,
+    kind: "plyometric",
+    title: "Hops",
+    running: null,
+    drills: [{ name: "Pogo", sets: 2, reps: 10, contactsPerRep: 1, intensity: "low" }],
+    notes: null,
+  });
+  const b0 = await d.SessionBlock.create({
+    sessionId: s.id,
+    templateId: null,
+    position: 0,
+    kind: "acceleration",
+    title: "Starts",
+    running: { sets: 1, reps: 6, distanceM: 20, intensityPct: 95, start: "blocks", runInM: 0, restSec: 180 },
+    drills: null,
+    notes: "Block starts",
+  });
   return { s, b0, b1 };
 }
 
@@ -24,7 +58,15 @@ const s2 = await session(a.teamId, ada, "2026-11-04", "draft");
 await session(a.teamId, ben, "2026-11-03");
 await session(a.teamId, ada, "2026-12-20"); // after `through` below
 await session(b.teamId, bravoAda, "2026-11-02");
-await d.SessionLog.create({ sessionId: s1.s.id, athleteId: ada, completion: "partly", rpe: 7, minutes: 50, completedReps: { [String(s1.b0.id)]: 4 }, notes: null });
+await d.SessionLog.create({
+  sessionId: s1.s.id,
+  athleteId: ada,
+  completion: "partly",
+  rpe: 7,
+  minutes: 50,
+  completedReps: { [String(s1.b0.id)]: 4 },
+  notes: null,
+});
 
 describe("getLoadSeriesInputs", () => {
   it("returns the team's athletes with their sessions, blocks in position order and logs, as engine inputs", async () => {
@@ -36,12 +78,23 @@ describe("getLoadSeriesInputs", () => {
     const adaIn = inputs.athletes[0];
     expect(adaIn.groupName).toBe("Sprint");
     expect(adaIn.profile).toEqual({ vmax: 9.5, tau: 1.15, stepLengthM: 2.1, plyoLevel: "intermediate" });
-    expect(adaIn.sessions.map((s) => [s.date, s.status])).toEqual([["2026-11-02", "published"], ["2026-11-04", "draft"]]);
+    expect(adaIn.sessions.map((s) => [s.date, s.status])).toEqual([
+      ["2026-11-02", "published"],
+      ["2026-11-04", "draft"],
+    ]);
     expect(adaIn.sessions[0].id).toBe(String(s1.s.id));
     expect(adaIn.sessions[0].blocks.map((x) => x.kind)).toEqual(["acceleration", "plyometric"]);
     expect(adaIn.sessions[0].blocks[0].running?.distanceM).toBe(20);
     expect(adaIn.sessions[0].blocks[1].drills?.[0].contactsPerRep).toBe(1);
-    expect(adaIn.logs).toEqual([{ sessionId: String(s1.s.id), completion: "partly", rpe: 7, minutes: 50, completedReps: { [String(s1.b0.id)]: 4 } }]);
+    expect(adaIn.logs).toEqual([
+      {
+        sessionId: String(s1.s.id),
+        completion: "partly",
+        rpe: 7,
+        minutes: 50,
+        completedReps: { [String(s1.b0.id)]: 4 },
+      },
+    ]);
     expect(inputs.athletes[1].logs).toEqual([]);
     expect(s2.s.id).toBeGreaterThan(0);
   });
@@ -71,7 +124,9 @@ describe("getAthleteLoadInputs", () => {
     const inputs = await getAthleteLoadInputs({ athleteId: ben, through: "2026-11-30" });
     expect(inputs.athletes).toHaveLength(1);
     expect(inputs.athlete.sessions).toHaveLength(1);
-    await expect(getAthleteLoadInputs({ athleteId: 999999, through: "2026-11-30" })).rejects.toMatchObject({ status: 404 });
+    await expect(getAthleteLoadInputs({ athleteId: 999999, through: "2026-11-30" })).rejects.toMatchObject({
+      status: 404,
+    });
   });
 });
 
@@ -94,7 +149,10 @@ describe("team settings", () => {
   it("defaults without a row, merges a patch, and refuses thresholds out of order", async () => {
     await d.TeamLoadSettings.destroy({ where: { teamId: b.teamId } });
     expect(await getTeamLoadSettings({ teamId: b.teamId })).toEqual(DEFAULT_TEAM_LOAD_SETTINGS);
-    const updated = await updateTeamLoadSettings({ teamId: b.teamId, input: { spikeRatio: 1.6, acwrMethod: "rolling_uncoupled" } });
+    const updated = await updateTeamLoadSettings({
+      teamId: b.teamId,
+      input: { spikeRatio: 1.6, acwrMethod: "rolling_uncoupled" },
+    });
     expect(updated).toMatchObject({ spikeRatio: 1.6, acwrMethod: "rolling_uncoupled", risingRatio: 1.3 });
     expect(await getTeamLoadSettings({ teamId: b.teamId })).toEqual(updated);
     await expect(updateTeamLoadSettings({ teamId: b.teamId, input: { risingRatio: 1.7 } })).rejects.toMatchObject({

@@ -60,14 +60,23 @@ describe("one series for the demo club, whoever reads it", () => {
   it("squad week, plan rows, drag preview, athlete page and alert evaluation agree to 1e-12 on every day of 10 weeks", async () => {
     const zoneFlags: { athleteId: number; flag: Flag }[] = [];
     for (const week of weeks) {
-      const squad = await body<{ rows: { id: number; dailyRatio: (number | null)[]; dailyProvisional: boolean[]; flags: Flag[] }[] }>(
-        await squadLoad.GET(get(`/api/teams/${club.teamId}/load?week=${week}&view=projected`), p({ teamId: String(club.teamId) })),
+      const squad = await body<{
+        rows: { id: number; dailyRatio: (number | null)[]; dailyProvisional: boolean[]; flags: Flag[] }[];
+      }>(
+        await squadLoad.GET(
+          get(`/api/teams/${club.teamId}/load?week=${week}&view=projected`),
+          p({ teamId: String(club.teamId) }),
+        ),
       );
       for (const r of squad.rows) {
         record("squad", r.id, week, { ratio: r.dailyRatio, provisional: r.dailyProvisional });
-        for (const f of r.flags) if (f.kind === "spike" || f.kind === "rising" || f.kind === "low") zoneFlags.push({ athleteId: r.id, flag: f });
+        for (const f of r.flags)
+          if (f.kind === "spike" || f.kind === "rising" || f.kind === "low")
+            zoneFlags.push({ athleteId: r.id, flag: f });
       }
-      const plan = await body<PlanWeek>(await planRoute.GET(get(`/api/teams/${club.teamId}/plan?week=${week}`), p({ teamId: String(club.teamId) })));
+      const plan = await body<PlanWeek>(
+        await planRoute.GET(get(`/api/teams/${club.teamId}/plan?week=${week}`), p({ teamId: String(club.teamId) })),
+      );
       for (const a of plan.athletes) {
         record("plan", a.id, week, fromWeek(a.load.week));
         record("preview", a.id, week, fromWeek(rowLoad(plan, a).week));
@@ -79,9 +88,15 @@ describe("one series for the demo club, whoever reads it", () => {
     }
     for (const id of athleteIds) {
       const page = await body<{ days: { date: string; ratio: number | null; provisional: boolean }[] }>(
-        await athleteLoad.GET(get(`/api/athletes/${id}/load?from=${weeks[0]}&to=${addDays(thisWeek, 6)}&view=projected&metric=srpe`), p({ athleteId: String(id) })),
+        await athleteLoad.GET(
+          get(`/api/athletes/${id}/load?from=${weeks[0]}&to=${addDays(thisWeek, 6)}&view=projected&metric=srpe`),
+          p({ athleteId: String(id) }),
+        ),
       );
-      record("athlete", id, weeks[0], { ratio: page.days.map((x) => x.ratio), provisional: page.days.map((x) => x.provisional) });
+      record("athlete", id, weeks[0], {
+        ratio: page.days.map((x) => x.ratio),
+        provisional: page.days.map((x) => x.provisional),
+      });
     }
 
     const reference = seen.get("athlete")!;
@@ -94,7 +109,8 @@ describe("one series for the demo club, whoever reads it", () => {
           const ref = reference.get(id)!.get(date)!;
           expect(v.provisional, `${reader} athlete ${id} ${date}`).toBe(ref.provisional);
           expect(v.ratio === null, `${reader} athlete ${id} ${date}`).toBe(ref.ratio === null);
-          if (v.ratio !== null && ref.ratio !== null) expect(Math.abs(v.ratio - ref.ratio), `${reader} athlete ${id} ${date}`).toBeLessThanOrEqual(1e-12);
+          if (v.ratio !== null && ref.ratio !== null)
+            expect(Math.abs(v.ratio - ref.ratio), `${reader} athlete ${id} ${date}`).toBeLessThanOrEqual(1e-12);
           compared++;
         }
       }
@@ -106,7 +122,10 @@ describe("one series for the demo club, whoever reads it", () => {
     const first = addDays(thisWeek, -7 * HISTORY_WEEKS);
     for (const id of athleteIds) {
       const early = await body<{ days: { date: string; ratio: number | null }[] }>(
-        await athleteLoad.GET(get(`/api/athletes/${id}/load?from=${addDays(first, -7)}&to=${addDays(first, 6)}&view=projected&metric=srpe`), p({ athleteId: String(id) })),
+        await athleteLoad.GET(
+          get(`/api/athletes/${id}/load?from=${addDays(first, -7)}&to=${addDays(first, 6)}&view=projected&metric=srpe`),
+          p({ athleteId: String(id) }),
+        ),
       );
       const firstDay = early.days.find((x) => x.ratio !== null)!;
       expect(firstDay).toEqual({ ...firstDay, date: first, ratio: 1 });
@@ -119,9 +138,15 @@ describe("one series for the demo club, whoever reads it", () => {
     for (let k = -HISTORY_WEEKS; k <= 1; k++) {
       const week = addDays(thisWeek, 7 * k);
       const squad = await body<{ rows: { name: string; flags: Flag[] }[] }>(
-        await squadLoad.GET(get(`/api/teams/${club.teamId}/load?week=${week}&view=projected`), p({ teamId: String(club.teamId) })),
+        await squadLoad.GET(
+          get(`/api/teams/${club.teamId}/load?week=${week}&view=projected`),
+          p({ teamId: String(club.teamId) }),
+        ),
       );
-      for (const r of squad.rows) for (const f of r.flags) if (f.provisional || (k < -HISTORY_WEEKS + 4 && ["spike", "rising", "low"].includes(f.kind))) early.push({ name: r.name, flag: f });
+      for (const r of squad.rows)
+        for (const f of r.flags)
+          if (f.provisional || (k < -HISTORY_WEEKS + 4 && ["spike", "rising", "low"].includes(f.kind)))
+            early.push({ name: r.name, flag: f });
     }
     expect(early).toEqual([]);
   });

@@ -10,7 +10,10 @@ vi.mock("next-auth", async (orig) => ({
   getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
 }));
 const logHook = vi.fn();
-vi.mock("@/lib/notices/hooks", () => ({ afterLogChange: (args: unknown) => logHook(args), afterPlanChange: async () => {} }));
+vi.mock("@/lib/notices/hooks", () => ({
+  afterLogChange: (args: unknown) => logHook(args),
+  afterPlanChange: async () => {},
+}));
 
 const d = await setupTestDb();
 const { teamToday } = await import("@/lib/data/load");
@@ -28,10 +31,27 @@ const bravoHead = b.users.head_coach;
 const today = teamToday({ timeZone: "Europe/London" });
 const week = startOfWeek(today, 1);
 
-const accel = { kind: "acceleration" as const, title: "Starts", running: { sets: 1, reps: 6, distanceM: 20, intensityPct: 95, start: "blocks" as const, runInM: 0, restSec: 180 }, drills: null, notes: null };
+const accel = {
+  kind: "acceleration" as const,
+  title: "Starts",
+  running: { sets: 1, reps: 6, distanceM: 20, intensityPct: 95, start: "blocks" as const, runInM: 0, restSec: 180 },
+  drills: null,
+  notes: null,
+};
 
 async function addSession(athleteId: number, date: string) {
-  const s = await d.PlannedSession.create({ teamId: a.teamId, athleteId, date, startTime: "17:00", durationMin: 60, title: "Speed", plannedRpe: 6, status: "published", notes: null, publishedAt: new Date() });
+  const s = await d.PlannedSession.create({
+    teamId: a.teamId,
+    athleteId,
+    date,
+    startTime: "17:00",
+    durationMin: 60,
+    title: "Speed",
+    plannedRpe: 6,
+    status: "published",
+    notes: null,
+    publishedAt: new Date(),
+  });
   const block = await d.SessionBlock.create({ sessionId: s.id, templateId: null, position: 0, ...accel });
   return { id: s.id, blockId: block.id };
 }
@@ -40,7 +60,15 @@ async function addSession(athleteId: number, date: string) {
 for (let i = 35; i >= 1; i -= 3) {
   for (const who of [ada, ben]) {
     const s = await addSession(who.athleteId!, addDays(today, -i));
-    await d.SessionLog.create({ sessionId: s.id, athleteId: who.athleteId!, completion: "yes", rpe: 6, minutes: 60, completedReps: null, notes: null });
+    await d.SessionLog.create({
+      sessionId: s.id,
+      athleteId: who.athleteId!,
+      completion: "yes",
+      rpe: 6,
+      minutes: 60,
+      completedReps: null,
+      notes: null,
+    });
   }
 }
 const adaPast = await addSession(ada.athleteId!, addDays(today, -1));
@@ -51,11 +79,18 @@ function get(path: string) {
   return new Request(`http://test${path}`);
 }
 function send(path: string, method: string, body: unknown) {
-  return new Request(`http://test${path}`, { method, headers: { "content-type": "application/json" }, body: typeof body === "string" ? body : JSON.stringify(body) });
+  return new Request(`http://test${path}`, {
+    method,
+    headers: { "content-type": "application/json" },
+    body: typeof body === "string" ? body : JSON.stringify(body),
+  });
 }
 const p = <T>(v: T) => ({ params: Promise.resolve(v) });
 async function json(res: Response) {
-  return { status: res.status, body: (await res.json()) as Record<string, unknown> & { error?: { fields?: Record<string, string[]> } } };
+  return {
+    status: res.status,
+    body: (await res.json()) as Record<string, unknown> & { error?: { fields?: Record<string, string[]> } },
+  };
 }
 const as = (userId: number | null) => {
   who.userId = userId;
@@ -64,7 +99,8 @@ const as = (userId: number | null) => {
 beforeEach(() => as(null));
 
 describe("GET /api/athletes/[athleteId]/load", () => {
-  const call = (athleteId: number, q = "") => athleteLoad.GET(get(`/api/athletes/${athleteId}/load${q}`), p({ athleteId: String(athleteId) })).then(json);
+  const call = (athleteId: number, q = "") =>
+    athleteLoad.GET(get(`/api/athletes/${athleteId}/load${q}`), p({ athleteId: String(athleteId) })).then(json);
 
   it("leaves a coach's draft out of the athlete's own figures (drafts are invisible to athletes), not the coach's", async () => {
     const date = addDays(today, 4);
@@ -72,14 +108,26 @@ describe("GET /api/athletes/[athleteId]/load", () => {
     const before = await call(ada.athleteId!, "?view=projected&metric=hsrM");
     as(a.users.coach.userId);
     const coachBefore = await call(ada.athleteId!, "?view=projected&metric=hsrM");
-    const draft = await d.PlannedSession.create({ teamId: a.teamId, athleteId: ada.athleteId!, date, startTime: "17:00", durationMin: 60, title: "Speed", plannedRpe: 6, status: "draft", notes: null, publishedAt: null });
+    const draft = await d.PlannedSession.create({
+      teamId: a.teamId,
+      athleteId: ada.athleteId!,
+      date,
+      startTime: "17:00",
+      durationMin: 60,
+      title: "Speed",
+      plannedRpe: 6,
+      status: "draft",
+      notes: null,
+      publishedAt: null,
+    });
     await d.SessionBlock.create({ sessionId: draft.id, templateId: null, position: 0, ...accel });
     try {
       as(ada.userId);
       expect(await call(ada.athleteId!, "?view=projected&metric=hsrM")).toEqual(before);
       as(a.users.coach.userId);
       const coachAfter = await call(ada.athleteId!, "?view=projected&metric=hsrM");
-      const day = (r: typeof coachAfter) => (r.body.days as { date: string; planned: number }[]).find((x) => x.date === date)!;
+      const day = (r: typeof coachAfter) =>
+        (r.body.days as { date: string; planned: number }[]).find((x) => x.date === date)!;
       expect(day(coachBefore).planned).toBe(0);
       expect(day(coachAfter).planned).toBeGreaterThan(0);
     } finally {
@@ -128,14 +176,20 @@ describe("GET /api/athletes/[athleteId]/load", () => {
 });
 
 describe("GET /api/teams/[teamId]/load", () => {
-  const call = (teamId: number, q = "") => squadLoad.GET(get(`/api/teams/${teamId}/load${q}`), p({ teamId: String(teamId) })).then(json);
+  const call = (teamId: number, q = "") =>
+    squadLoad.GET(get(`/api/teams/${teamId}/load${q}`), p({ teamId: String(teamId) })).then(json);
 
   it("gives staff the squad's week with totals, ratio and flags per athlete", async () => {
     as(a.users.physio.userId);
     const { status, body } = await call(a.teamId, `?week=${today}`);
     expect(status).toBe(200);
     expect(body.weekStart).toBe(week);
-    const rows = body.rows as { name: string; totals: Record<string, number>; flags: unknown[]; ratio: number | null }[];
+    const rows = body.rows as {
+      name: string;
+      totals: Record<string, number>;
+      flags: unknown[];
+      ratio: number | null;
+    }[];
     expect(rows.map((r) => r.name)).toEqual(["Ada Athlete", "Ben Athlete"]);
     expect(rows[0].totals).toHaveProperty("hsrM");
     expect(Array.isArray(rows[0].flags)).toBe(true);
@@ -179,7 +233,10 @@ describe("POST /api/load/preview", () => {
     as(bravoHead.userId);
     expect((await call({ ...proposal([1]), teamId: b.teamId })).status).toBe(404);
     as(a.users.coach.userId);
-    const outside = await call({ ...proposal([1]), sessions: [{ ...proposal([1]).sessions[0], date: addDays(week, 9) }] });
+    const outside = await call({
+      ...proposal([1]),
+      sessions: [{ ...proposal([1]).sessions[0], date: addDays(week, 9) }],
+    });
     expect(outside.status).toBe(400);
     expect(outside.body.error?.fields).toHaveProperty(["sessions.0.date"]);
     const rpe = await call({ ...proposal([1]), sessions: [{ ...proposal([1]).sessions[0], plannedRpe: 12 }] });
@@ -189,7 +246,8 @@ describe("POST /api/load/preview", () => {
 });
 
 describe("GET/PATCH /api/teams/[teamId]/settings", () => {
-  const patch = (body: unknown) => settings.PATCH(send(`/api/teams/${a.teamId}/settings`, "PATCH", body), p({ teamId: String(a.teamId) })).then(json);
+  const patch = (body: unknown) =>
+    settings.PATCH(send(`/api/teams/${a.teamId}/settings`, "PATCH", body), p({ teamId: String(a.teamId) })).then(json);
 
   it("lets members read, only the head coach edit, and names the bad field", async () => {
     as(ada.userId);
@@ -212,18 +270,35 @@ describe("GET/PATCH /api/teams/[teamId]/settings", () => {
 });
 
 describe("PUT/DELETE /api/sessions/[sessionId]/log", () => {
-  const put = (sessionId: number, body: unknown) => log.PUT(send(`/api/sessions/${sessionId}/log`, "PUT", body), p({ sessionId: String(sessionId) })).then(json);
-  const del = (sessionId: number) => log.DELETE(send(`/api/sessions/${sessionId}/log`, "DELETE", ""), p({ sessionId: String(sessionId) })).then(json);
+  const put = (sessionId: number, body: unknown) =>
+    log.PUT(send(`/api/sessions/${sessionId}/log`, "PUT", body), p({ sessionId: String(sessionId) })).then(json);
+  const del = (sessionId: number) =>
+    log.DELETE(send(`/api/sessions/${sessionId}/log`, "DELETE", ""), p({ sessionId: String(sessionId) })).then(json);
 
   it("lets an athlete log their own session and tells notices inside the transaction", async () => {
     as(ada.userId);
     logHook.mockClear();
-    const { status, body } = await put(adaPast.id, { completion: "partly", rpe: 7, minutes: 45, completedReps: { [String(adaPast.blockId)]: 4 } });
+    const { status, body } = await put(adaPast.id, {
+      completion: "partly",
+      rpe: 7,
+      minutes: 45,
+      completedReps: { [String(adaPast.blockId)]: 4 },
+    });
     expect(status).toBe(200);
     expect(body.log).toMatchObject({ sessionId: adaPast.id, completion: "partly", rpe: 7, minutes: 45 });
-    expect(logHook).toHaveBeenCalledWith(expect.objectContaining({ sessionId: adaPast.id, athleteId: ada.athleteId, actorUserId: ada.userId, transaction: expect.anything() }));
+    expect(logHook).toHaveBeenCalledWith(
+      expect.objectContaining({
+        sessionId: adaPast.id,
+        athleteId: ada.athleteId,
+        actorUserId: ada.userId,
+        transaction: expect.anything(),
+      }),
+    );
     // A second PUT replaces the log.
-    expect((await put(adaPast.id, { completion: "yes", rpe: 6, minutes: 60 })).body.log).toMatchObject({ completion: "yes", completedReps: null });
+    expect((await put(adaPast.id, { completion: "yes", rpe: 6, minutes: 60 })).body.log).toMatchObject({
+      completion: "yes",
+      completedReps: null,
+    });
     expect(await d.SessionLog.count({ where: { sessionId: adaPast.id } })).toBe(1);
   });
 
@@ -262,7 +337,18 @@ describe("PUT/DELETE /api/sessions/[sessionId]/log", () => {
   });
 
   it("answers an athlete's log of a draft exactly like a missing id, and refuses staff a draft too", async () => {
-    const draft = await d.PlannedSession.create({ teamId: a.teamId, athleteId: ada.athleteId!, date: addDays(today, -1), startTime: "17:00", durationMin: 60, title: "Speed", plannedRpe: 6, status: "draft", notes: null, publishedAt: null });
+    const draft = await d.PlannedSession.create({
+      teamId: a.teamId,
+      athleteId: ada.athleteId!,
+      date: addDays(today, -1),
+      startTime: "17:00",
+      durationMin: 60,
+      title: "Speed",
+      plannedRpe: 6,
+      status: "draft",
+      notes: null,
+      publishedAt: null,
+    });
     as(ada.userId);
     const missing = await put(999999, { completion: "yes" });
     const onDraft = await put(draft.id, { completion: "yes" });

@@ -22,10 +22,32 @@ const logRoute = await import("@/app/api/sessions/[sessionId]/log/route");
 const today = teamToday({ timeZone: "Europe/London" });
 const lastWeek = addDays(startOfWeek(today, 1), -7);
 const p = <T>(v: T) => ({ params: Promise.resolve(v) });
-const send = (path: string, method: string, body: unknown) => new Request(`http://test${path}`, { method, headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
+const send = (path: string, method: string, body: unknown) =>
+  new Request(`http://test${path}`, {
+    method,
+    headers: { "content-type": "application/json" },
+    body: JSON.stringify(body),
+  });
 
-type Running = { sets: number; reps: number; distanceM: number; intensityPct: number; start: "standing" | "crouch" | "blocks" | "flying"; runInM: number; restSec: number };
-const run = (r: Partial<Running>): Running => ({ sets: 1, reps: 1, distanceM: 30, intensityPct: 95, start: "crouch", runInM: 0, restSec: 180, ...r });
+type Running = {
+  sets: number;
+  reps: number;
+  distanceM: number;
+  intensityPct: number;
+  start: "standing" | "crouch" | "blocks" | "flying";
+  runInM: number;
+  restSec: number;
+};
+const run = (r: Partial<Running>): Running => ({
+  sets: 1,
+  reps: 1,
+  distanceM: 30,
+  intensityPct: 95,
+  start: "crouch",
+  runInM: 0,
+  restSec: 180,
+  ...r,
+});
 
 /** A team whose athlete Ada has vmax 10 m/s and τ 1 s (invented), and helpers to plan and read. */
 async function team(name: string) {
@@ -33,34 +55,96 @@ async function team(name: string) {
   const ada = t.users[`ada@${name.toLowerCase().replace(/[^a-z]+/g, "")}.test`];
   await d.Athlete.update({ vmaxMs: 10, tauS: 1, stepLengthM: 2.2 }, { where: { id: ada.athleteId! } });
   const head = t.users.head_coach.userId;
-  async function plan(date: string, blocks: { kind: string; running?: Running | null; drills?: unknown }[], o: { rpe?: number; minutes?: number; startTime?: string; status?: "published" | "draft"; log?: { completion: "yes" | "partly" | "no"; rpe: number | null; minutes: number | null } } = {}) {
-    const s = await d.PlannedSession.create({ teamId: t.teamId, athleteId: ada.athleteId!, date, startTime: o.startTime ?? "17:00", durationMin: o.minutes ?? 60, title: "Speed", plannedRpe: o.rpe ?? 6, status: o.status ?? "published", notes: null, publishedAt: new Date() });
+  async function plan(
+    date: string,
+    blocks: { kind: string; running?: Running | null; drills?: unknown }[],
+    o: {
+      rpe?: number;
+      minutes?: number;
+      startTime?: string;
+      status?: "published" | "draft";
+      log?: { completion: "yes" | "partly" | "no"; rpe: number | null; minutes: number | null };
+    } = {},
+  ) {
+    const s = await d.PlannedSession.create({
+      teamId: t.teamId,
+      athleteId: ada.athleteId!,
+      date,
+      startTime: o.startTime ?? "17:00",
+      durationMin: o.minutes ?? 60,
+      title: "Speed",
+      plannedRpe: o.rpe ?? 6,
+      status: o.status ?? "published",
+      notes: null,
+      publishedAt: new Date(),
+    });
     let position = 0;
-    for (const b of blocks) await d.SessionBlock.create({ sessionId: s.id, templateId: null, position: position++, kind: b.kind as "acceleration", title: b.kind, running: b.running ?? null, drills: (b.drills as null) ?? null, notes: null });
-    if (o.log) await d.SessionLog.create({ sessionId: s.id, athleteId: ada.athleteId!, completedReps: null, notes: null, ...o.log });
+    for (const b of blocks)
+      await d.SessionBlock.create({
+        sessionId: s.id,
+        templateId: null,
+        position: position++,
+        kind: b.kind as "acceleration",
+        title: b.kind,
+        running: b.running ?? null,
+        drills: (b.drills as null) ?? null,
+        notes: null,
+      });
+    if (o.log)
+      await d.SessionLog.create({
+        sessionId: s.id,
+        athleteId: ada.athleteId!,
+        completedReps: null,
+        notes: null,
+        ...o.log,
+      });
     return s.id;
   }
   async function days(metric: string, from: string, to: string) {
     who.userId = head;
-    const res = await athleteLoad.GET(new Request(`http://test/api/athletes/${ada.athleteId}/load?view=actual&metric=${metric}&from=${from}&to=${to}`), p({ athleteId: String(ada.athleteId) }));
+    const res = await athleteLoad.GET(
+      new Request(`http://test/api/athletes/${ada.athleteId}/load?view=actual&metric=${metric}&from=${from}&to=${to}`),
+      p({ athleteId: String(ada.athleteId) }),
+    );
     expect(res.status).toBe(200);
-    const body = (await res.json()) as { days: { date: string; value: number; ratio: number | null; missing: boolean; logged: boolean }[] };
+    const body = (await res.json()) as {
+      days: { date: string; value: number; ratio: number | null; missing: boolean; logged: boolean }[];
+    };
     return body.days;
   }
   async function squad(week: string) {
     who.userId = head;
-    const res = await squadLoad.GET(new Request(`http://test/api/teams/${t.teamId}/load?week=${week}&view=actual`), p({ teamId: String(t.teamId) }));
+    const res = await squadLoad.GET(
+      new Request(`http://test/api/teams/${t.teamId}/load?week=${week}&view=actual`),
+      p({ teamId: String(t.teamId) }),
+    );
     expect(res.status).toBe(200);
-    return (await res.json()) as { rows: { totals: Record<string, number>; flags: { kind: string; value: number; reason: string }[]; bands?: Record<string, number>; missingDays: number }[] };
+    return (await res.json()) as {
+      rows: {
+        totals: Record<string, number>;
+        flags: { kind: string; value: number; reason: string }[];
+        bands?: Record<string, number>;
+        missingDays: number;
+      }[];
+    };
   }
   async function setSettings(body: unknown) {
     who.userId = head;
-    const res = await settingsRoute.PATCH(send(`/api/teams/${t.teamId}/settings`, "PATCH", body), p({ teamId: String(t.teamId) }));
-    return { status: res.status, body: (await res.json()) as { settings?: Record<string, unknown>; error?: { fields?: Record<string, string[]> } } };
+    const res = await settingsRoute.PATCH(
+      send(`/api/teams/${t.teamId}/settings`, "PATCH", body),
+      p({ teamId: String(t.teamId) }),
+    );
+    return {
+      status: res.status,
+      body: (await res.json()) as { settings?: Record<string, unknown>; error?: { fields?: Record<string, string[]> } },
+    };
   }
   async function putLog(sessionId: number, body: unknown) {
     who.userId = ada.userId;
-    const res = await logRoute.PUT(send(`/api/sessions/${sessionId}/log`, "PUT", body), p({ sessionId: String(sessionId) }));
+    const res = await logRoute.PUT(
+      send(`/api/sessions/${sessionId}/log`, "PUT", body),
+      p({ sessionId: String(sessionId) }),
+    );
     return { status: res.status, body: (await res.json()) as { error?: { fields?: Record<string, string[]> } } };
   }
   return { ...t, ada, plan, days, squad, setSettings, putLog };
@@ -77,7 +161,9 @@ describe("speed zones, starts and run-ins through GET /api/athletes/[id]/load", 
     const day = addDays(today, -3);
     const dayBlocks = addDays(today, -2);
     await t.plan(day, [{ kind: "acceleration", running: run({ sets: 2, reps: 3 }) }], { log: yes });
-    await t.plan(dayBlocks, [{ kind: "acceleration", running: run({ sets: 2, reps: 3, start: "blocks" }) }], { log: yes });
+    await t.plan(dayBlocks, [{ kind: "acceleration", running: run({ sets: 2, reps: 3, start: "blocks" }) }], {
+      log: yes,
+    });
     const abs = await t.days("hsrM", day, dayBlocks);
     expect(abs[0].value).toBeCloseTo(163.695146, 4);
     expect(abs[1].value).toBeCloseTo(164.510389, 4);
@@ -94,7 +180,16 @@ describe("speed zones, starts and run-ins through GET /api/athletes/[id]/load", 
   it("a flying rep's run-in is a build-up, counted in band metres but not as sprint metres", async () => {
     const t = await team("Flying Track");
     const day = addDays(today, -2);
-    await t.plan(day, [{ kind: "max_velocity", running: run({ reps: 4, intensityPct: 97, start: "flying", runInM: 20, restSec: 300 }) }], { log: yes });
+    await t.plan(
+      day,
+      [
+        {
+          kind: "max_velocity",
+          running: run({ reps: 4, intensityPct: 97, start: "flying", runInM: 20, restSec: 300 }),
+        },
+      ],
+      { log: yes },
+    );
     expect((await t.days("hsrM", day, day))[0].value).toBeCloseTo(174.279945, 4);
     expect((await t.days("nearMaxM", day, day))[0].value).toBeCloseTo(131.129769, 4);
     expect((await t.days("sprintM", day, day))[0].value).toBe(120);
@@ -112,9 +207,20 @@ describe("the squad table shows absolute and relative bands and the week's conta
       { name: "box jumps", sets: 3, reps: 8, contactsPerRep: 1, intensity: "moderate" },
       { name: "bounds", sets: 4, reps: 6, contactsPerRep: 1, intensity: "high" },
     ];
-    await t.plan(addDays(lastWeek, 2), [{ kind: "acceleration", running: run({ sets: 2, reps: 3 }) }, { kind: "plyometric", drills }], { log: yes });
+    await t.plan(
+      addDays(lastWeek, 2),
+      [
+        { kind: "acceleration", running: run({ sets: 2, reps: 3 }) },
+        { kind: "plyometric", drills },
+      ],
+      { log: yes },
+    );
     const { rows } = await t.squad(lastWeek);
-    const row = rows.find((r) => r.totals.contacts === 68) as unknown as { bands: Record<string, number>; contactsByIntensity: { total: number; weighted: number }; totals: Record<string, number> };
+    const row = rows.find((r) => r.totals.contacts === 68) as unknown as {
+      bands: Record<string, number>;
+      contactsByIntensity: { total: number; weighted: number };
+      totals: Record<string, number>;
+    };
     expect(row.bands.absHsrM).toBeCloseTo(163.695146, 4);
     expect(row.bands.absSprintM).toBeCloseTo(145.904939, 4);
     expect(row.bands.relHsrM).toBeCloseTo(136.185757, 4);
@@ -140,7 +246,12 @@ describe("partial sessions by block (PUT /api/sessions/[id]/log, then GET the lo
     const [accel, tempo] = await d.SessionBlock.findAll({ where: { sessionId: id }, order: [["position", "ASC"]] });
     expect((await t.putLog(id, { completion: "partly", rpe: 6, minutes: 40 })).status).toBe(200);
     expect((await t.days("hsrM", day, day))[0].value).toBeCloseTo(365.998227, 4);
-    const ticked = await t.putLog(id, { completion: "partly", rpe: 6, minutes: 40, completedReps: { [String(accel.id)]: 4, [String(tempo.id)]: 0 } });
+    const ticked = await t.putLog(id, {
+      completion: "partly",
+      rpe: 6,
+      minutes: 40,
+      completedReps: { [String(accel.id)]: 4, [String(tempo.id)]: 0 },
+    });
     expect(ticked.status).toBe(200);
     expect((await t.days("hsrM", day, day))[0].value).toBeCloseTo(109.130097, 4);
     // Sprint metres: 4 × 30 = 120 m (tempo is not sprinting); sRPE 6 × 40 = 240 AU (Foster 2001).
@@ -193,7 +304,8 @@ describe("flags through GET /api/teams/[id]/load", () => {
   // 1800 × √6 = 4409 (hand-derived: mean 6a/7, SD a·√6/7).
   it("raises a monotony caution above 2.0 with the strain", async () => {
     const t = await team("Same Track");
-    for (let i = 0; i < 6; i++) await t.plan(addDays(lastWeek, i), [], { rpe: 5, log: { completion: "yes", rpe: 5, minutes: 60 } });
+    for (let i = 0; i < 6; i++)
+      await t.plan(addDays(lastWeek, i), [], { rpe: 5, log: { completion: "yes", rpe: 5, minutes: 60 } });
     const { rows } = await t.squad(lastWeek);
     const ada = rows.find((r) => r.totals.srpe === 1800)!;
     const mono = ada.flags.find((f) => f.kind === "monotony");
@@ -205,8 +317,14 @@ describe("flags through GET /api/teams/[id]/load", () => {
   // under the default 48 h (NSCA 48–72 h); not when the team counts only max-velocity blocks.
   it("counts maximal accelerations and speed endurance for the recovery window, as the team chose", async () => {
     const t = await team("Rest Track");
-    await t.plan(addDays(lastWeek, 1), [{ kind: "acceleration", running: run({ reps: 6, distanceM: 20 }) }], { log: yes });
-    await t.plan(addDays(lastWeek, 2), [{ kind: "speed_endurance", running: run({ reps: 2, distanceM: 150, intensityPct: 90, start: "standing" }) }], { log: yes });
+    await t.plan(addDays(lastWeek, 1), [{ kind: "acceleration", running: run({ reps: 6, distanceM: 20 }) }], {
+      log: yes,
+    });
+    await t.plan(
+      addDays(lastWeek, 2),
+      [{ kind: "speed_endurance", running: run({ reps: 2, distanceM: 150, intensityPct: 90, start: "standing" }) }],
+      { log: yes },
+    );
     const kinds = async () => (await t.squad(lastWeek)).rows.flatMap((r) => r.flags.map((f) => f.kind));
     expect(await kinds()).toContain("recovery");
     expect((await t.setSettings({ recoveryWork: ["max_velocity", "high_plyo"] })).status).toBe(200);
@@ -217,9 +335,25 @@ describe("flags through GET /api/teams/[id]/load", () => {
 describe("PATCH /api/teams/[id]/settings: the new choices", () => {
   it("stores them and names a bad field", async () => {
     const t = await team("Settings Track");
-    const ok = await t.setSettings({ speedZones: "relative", hsrPct: 80, maximalPct: 96, sprintSpeedMs: 7.5, monotonyLimit: 2.5, missingLogs: "exclude", recoveryWork: ["speed_endurance"] });
+    const ok = await t.setSettings({
+      speedZones: "relative",
+      hsrPct: 80,
+      maximalPct: 96,
+      sprintSpeedMs: 7.5,
+      monotonyLimit: 2.5,
+      missingLogs: "exclude",
+      recoveryWork: ["speed_endurance"],
+    });
     expect(ok.status).toBe(200);
-    expect(ok.body.settings).toMatchObject({ speedZones: "relative", hsrPct: 80, maximalPct: 96, sprintSpeedMs: 7.5, monotonyLimit: 2.5, missingLogs: "exclude", recoveryWork: ["speed_endurance"] });
+    expect(ok.body.settings).toMatchObject({
+      speedZones: "relative",
+      hsrPct: 80,
+      maximalPct: 96,
+      sprintSpeedMs: 7.5,
+      monotonyLimit: 2.5,
+      missingLogs: "exclude",
+      recoveryWork: ["speed_endurance"],
+    });
     for (const [body, field] of [
       [{ speedZones: "fast" }, "speedZones"],
       [{ hsrPct: 20 }, "hsrPct"],

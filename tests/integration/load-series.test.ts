@@ -37,32 +37,64 @@ const week4 = day(22); // Monday of the fourth week: days 22 … 28
 
 /** sRPE = RPE × minutes (Foster et al. 2001): 300 AU = RPE 5 × 60 min. */
 async function plan(athleteId: number, date: string, plannedRpe: number, durationMin: number) {
-  return d.PlannedSession.create({ teamId: team.teamId, athleteId, date, startTime: "17:00", durationMin, title: "Load", plannedRpe, status: "published", notes: null, publishedAt: new Date() });
+  return d.PlannedSession.create({
+    teamId: team.teamId,
+    athleteId,
+    date,
+    startTime: "17:00",
+    durationMin,
+    title: "Load",
+    plannedRpe,
+    status: "published",
+    notes: null,
+    publishedAt: new Date(),
+  });
 }
 
 const p = <T>(v: T) => ({ params: Promise.resolve(v) });
 const get = (path: string) => new Request(`http://test${path}`);
-const post = (path: string, body: unknown) => new Request(`http://test${path}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-type Row = { id: number; ratio: number | null; ratioProvisional: boolean; flags: { kind: string; level: string; value: number; provisional?: boolean; date: string }[] };
+const post = (path: string, body: unknown) =>
+  new Request(`http://test${path}`, {
+    method: "POST",
+    headers: { "content-type": "application/json" },
+    body: JSON.stringify(body),
+  });
+type Row = {
+  id: number;
+  ratio: number | null;
+  ratioProvisional: boolean;
+  flags: { kind: string; level: string; value: number; provisional?: boolean; date: string }[];
+};
 type Day = { date: string; ratio: number | null; provisional: boolean };
 
 async function squadRow(athleteId: number, week: string): Promise<Row & { week?: WeekSummary }> {
   who.userId = head;
-  const res = await squadLoad.GET(get(`/api/teams/${team.teamId}/load?week=${week}&view=projected`), p({ teamId: String(team.teamId) }));
+  const res = await squadLoad.GET(
+    get(`/api/teams/${team.teamId}/load?week=${week}&view=projected`),
+    p({ teamId: String(team.teamId) }),
+  );
   expect(res.status).toBe(200);
   return ((await res.json()) as { rows: Row[] }).rows.find((r) => r.id === athleteId)!;
 }
 async function athleteDays(athleteId: number, from: string, to: string): Promise<Day[]> {
   who.userId = head;
-  const res = await athleteLoad.GET(get(`/api/athletes/${athleteId}/load?from=${from}&to=${to}&view=projected&metric=srpe`), p({ athleteId: String(athleteId) }));
+  const res = await athleteLoad.GET(
+    get(`/api/athletes/${athleteId}/load?from=${from}&to=${to}&view=projected&metric=srpe`),
+    p({ athleteId: String(athleteId) }),
+  );
   expect(res.status).toBe(200);
   return ((await res.json()) as { days: Day[] }).days;
 }
 async function planRow(athleteId: number, week: string): Promise<{ week: WeekSummary; flags: Row["flags"] }> {
   who.userId = head;
-  const res = await planWeek.GET(get(`/api/teams/${team.teamId}/plan?week=${week}`), p({ teamId: String(team.teamId) }));
+  const res = await planWeek.GET(
+    get(`/api/teams/${team.teamId}/plan?week=${week}`),
+    p({ teamId: String(team.teamId) }),
+  );
   expect(res.status).toBe(200);
-  return ((await res.json()) as { athletes: { id: number; load: { week: WeekSummary; flags: Row["flags"] } }[] }).athletes.find((a) => a.id === athleteId)!.load;
+  return (
+    (await res.json()) as { athletes: { id: number; load: { week: WeekSummary; flags: Row["flags"] } }[] }
+  ).athletes.find((a) => a.id === athleteId)!.load;
 }
 
 beforeEach(() => {
@@ -105,7 +137,16 @@ describe("defect 4: a settled spike is an alert even when an early day of the we
   it("day 27 (provisional) 2.956974, day 28 (settled) 2.382006: spike alert, an alert row and one e-mail", async () => {
     who.userId = head;
     const res = await sessionsRoute.POST(
-      post(`/api/teams/${team.teamId}/sessions`, { from: "blank", athleteId: ben, date: day(27), startTime: "10:00", durationMin: 300, title: "Overload", plannedRpe: 10, blocks: [] }),
+      post(`/api/teams/${team.teamId}/sessions`, {
+        from: "blank",
+        athleteId: ben,
+        date: day(27),
+        startTime: "10:00",
+        durationMin: 300,
+        title: "Overload",
+        plannedRpe: 10,
+        blocks: [],
+      }),
       p({ teamId: String(team.teamId) }),
     );
     expect(res.status).toBe(201);
@@ -134,16 +175,78 @@ describe("defect 3: the preview keeps logged per-block reps and block ids", () =
   it("re-sending a saved, partly logged week unchanged returns the saved numbers", async () => {
     const athleteId = team.users["ada@seriesclub.test"].athleteId!;
     const past = addDays(startOfWeek(today, 1), -7);
-    const s = await d.PlannedSession.create({ teamId: team.teamId, athleteId, date: addDays(past, 1), startTime: "17:00", durationMin: 60, title: "Speed", plannedRpe: 7, status: "published", notes: null, publishedAt: new Date() });
-    const running = { sets: 2, reps: 3, distanceM: 30, intensityPct: 95, start: "blocks" as const, runInM: 0, restSec: 180 };
-    const b0 = await d.SessionBlock.create({ sessionId: s.id, templateId: null, position: 0, kind: "acceleration", title: "Starts", running, drills: null, notes: null });
-    await d.SessionBlock.create({ sessionId: s.id, templateId: null, position: 1, kind: "tempo", title: "Tempo", running: { ...running, intensityPct: 70, distanceM: 100, start: "standing" }, drills: null, notes: null });
+    const s = await d.PlannedSession.create({
+      teamId: team.teamId,
+      athleteId,
+      date: addDays(past, 1),
+      startTime: "17:00",
+      durationMin: 60,
+      title: "Speed",
+      plannedRpe: 7,
+      status: "published",
+      notes: null,
+      publishedAt: new Date(),
+    });
+    const running = {
+      sets: 2,
+      reps: 3,
+      distanceM: 30,
+      intensityPct: 95,
+      start: "blocks" as const,
+      runInM: 0,
+      restSec: 180,
+    };
+    const b0 = await d.SessionBlock.create({
+      sessionId: s.id,
+      templateId: null,
+      position: 0,
+      kind: "acceleration",
+      title: "Starts",
+      running,
+      drills: null,
+      notes: null,
+    });
+    await d.SessionBlock.create({
+      sessionId: s.id,
+      templateId: null,
+      position: 1,
+      kind: "tempo",
+      title: "Tempo",
+      running: { ...running, intensityPct: 70, distanceM: 100, start: "standing" },
+      drills: null,
+      notes: null,
+    });
     // "Partly": 1 of the 6 starts logged; the tempo block falls back to half.
-    await d.SessionLog.create({ sessionId: s.id, athleteId, completion: "partly", rpe: 6, minutes: 40, completedReps: { [String(b0.id)]: 1 }, notes: null });
+    await d.SessionLog.create({
+      sessionId: s.id,
+      athleteId,
+      completion: "partly",
+      rpe: 6,
+      minutes: 40,
+      completedReps: { [String(b0.id)]: 1 },
+      notes: null,
+    });
 
     who.userId = head;
-    const blocks = (await d.SessionBlock.findAll({ where: { sessionId: s.id }, order: [["position", "ASC"]] })).map((b) => ({ id: b.id, kind: b.kind, title: b.title, running: b.running, drills: b.drills, notes: b.notes }));
-    const body = { teamId: team.teamId, athleteId, week: past, sessions: [{ id: s.id, date: s.date, startTime: s.startTime, durationMin: s.durationMin, plannedRpe: s.plannedRpe, status: s.status, blocks }] };
+    const blocks = (await d.SessionBlock.findAll({ where: { sessionId: s.id }, order: [["position", "ASC"]] })).map(
+      (b) => ({ id: b.id, kind: b.kind, title: b.title, running: b.running, drills: b.drills, notes: b.notes }),
+    );
+    const body = {
+      teamId: team.teamId,
+      athleteId,
+      week: past,
+      sessions: [
+        {
+          id: s.id,
+          date: s.date,
+          startTime: s.startTime,
+          durationMin: s.durationMin,
+          plannedRpe: s.plannedRpe,
+          status: s.status,
+          blocks,
+        },
+      ],
+    };
     const res = await preview.POST(post("/api/load/preview", body), p({}));
     expect(res.status).toBe(200);
     const out = (await res.json()) as { proposed: { week: WeekSummary }; current: { week: WeekSummary } };

@@ -43,7 +43,13 @@ const invite = () =>
         status: "published",
         sequence: 1,
         updatedAt: new Date("2026-03-25T12:00:00Z"),
-        blocks: [{ kind: "max_velocity", title: "Flying 30s", running: { sets: 1, reps: 4, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 } }],
+        blocks: [
+          {
+            kind: "max_velocity",
+            title: "Flying 30s",
+            running: { sets: 1, reps: 4, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 },
+          },
+        ],
       },
     ],
     appUrl: "https://sprintwright.test",
@@ -94,7 +100,10 @@ describe("fake SMTP mailbox", () => {
 
   it("lists newest first and leaves no temporary files behind", async () => {
     for (const n of [1, 2, 3]) {
-      await sendMail({ to: "lena@harbourvale.test", subject: `Mail ${n}`, html: `<p>${n}</p>`, text: String(n) }, config());
+      await sendMail(
+        { to: "lena@harbourvale.test", subject: `Mail ${n}`, html: `<p>${n}</p>`, text: String(n) },
+        config(),
+      );
     }
     const list = await listMail({ dir, to: "lena@harbourvale.test" });
     expect(list.map((m) => m.subject)).toEqual(["Mail 3", "Mail 2", "Mail 1"]);
@@ -104,20 +113,32 @@ describe("fake SMTP mailbox", () => {
 
   it("rejects ids that could leave the mailbox folder", async () => {
     await expect(readMail({ dir, id: "../x" })).rejects.toThrow(/Not a mailbox id/);
-    await expect(readMail({ dir, id: "20261201T214455123Z-abcdef01/../../etc/passwd" })).rejects.toThrow(/Not a mailbox id/);
+    await expect(readMail({ dir, id: "20261201T214455123Z-abcdef01/../../etc/passwd" })).rejects.toThrow(
+      /Not a mailbox id/,
+    );
     expect(await readMail({ dir, id: "20000101T000000000Z-00000000" })).toBeNull();
   });
 
   it("says it is the fake mailbox only for a loopback host", () => {
     expect(isFakeMailbox(config())).toBe(true);
-    expect(isFakeMailbox(readMailConfig({ NODE_ENV: "test", SMTP_URL: `smtp://127.0.0.1:${fake.port}`, MAIL_FAKE: "0" }))).toBe(false);
-    expect(isFakeMailbox(readMailConfig({ NODE_ENV: "development", SMTP_HOST: "smtp.example.test", SMTP_PORT: "587" }))).toBe(false);
+    expect(
+      isFakeMailbox(readMailConfig({ NODE_ENV: "test", SMTP_URL: `smtp://127.0.0.1:${fake.port}`, MAIL_FAKE: "0" })),
+    ).toBe(false);
+    expect(
+      isFakeMailbox(readMailConfig({ NODE_ENV: "development", SMTP_HOST: "smtp.example.test", SMTP_PORT: "587" })),
+    ).toBe(false);
     expect(isFakeMailbox(readMailConfig({ NODE_ENV: "production", SMTP_URL: "smtp://127.0.0.1:2525" }))).toBe(false);
   });
 
   it("reads SMTP settings from the environment and names a wrong variable", () => {
     const c = readMailConfig({ SMTP_HOST: "smtp.example.test", SMTP_PORT: "465", SMTP_USER: "u", SMTP_PASS: "p" });
-    expect(c).toMatchObject({ host: "smtp.example.test", port: 465, secure: true, auth: { user: "u", pass: "p" }, loopback: false });
+    expect(c).toMatchObject({
+      host: "smtp.example.test",
+      port: 465,
+      secure: true,
+      auth: { user: "u", pass: "p" },
+      loopback: false,
+    });
     expect(readMailConfig({}).port).toBe(2525);
     expect(readMailConfig({}).from).toBe("Sprintwright <no-reply@sprintwright.local>");
     expect(() => readMailConfig({ SMTP_URL: "http://x" })).toThrow(/SMTP_URL/);

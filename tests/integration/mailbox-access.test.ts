@@ -32,12 +32,18 @@ const as = (userId: number | null) => {
   who.userId = userId;
 };
 const get = (path: string) => new Request(`http://sprintwright.test${path}`);
-const ctx = <P,>(params: P) => ({ params: Promise.resolve(params) });
+const ctx = <P>(params: P) => ({ params: Promise.resolve(params) });
 
 // The athlete asks for the head coach's reset (the forgot-password form is public) and the worker delivers it.
 await requestPasswordReset({ email: HEAD });
 const sameTx = await d.sequelize.transaction(async (transaction) =>
-  enqueueMail({ transaction, teamId: b.teamId, kind: "alert", to: "head@bravotrack.test", mail: { subject: "Bravo only", html: "<p>b</p>", text: "bravo secret" } }),
+  enqueueMail({
+    transaction,
+    teamId: b.teamId,
+    kind: "alert",
+    to: "head@bravotrack.test",
+    mail: { subject: "Bravo only", html: "<p>b</p>", text: "bravo secret" },
+  }),
 );
 expect(sameTx).not.toBeNull();
 await n.worker.runOnce();
@@ -73,7 +79,9 @@ describe("local mailbox access", () => {
     as(ada.userId);
     expect((await one.GET(get(`/api/mailbox/${resetId}`), ctx({ mailId: resetId }))).status).toBe(404);
     expect((await raw.GET(get(`/api/mailbox/${resetId}/raw`), ctx({ mailId: resetId }))).status).toBe(404);
-    expect((await attachment.GET(get(`/api/mailbox/${resetId}/attachments/0`), ctx({ mailId: resetId, index: "0" }))).status).toBe(404);
+    expect(
+      (await attachment.GET(get(`/api/mailbox/${resetId}/attachments/0`), ctx({ mailId: resetId, index: "0" }))).status,
+    ).toBe(404);
   });
 
   it("other staff of the team cannot read it either, nor another team's head coach", async () => {
@@ -102,13 +110,24 @@ describe("local mailbox access", () => {
     const subjects = (await json(await list.GET(get("/api/mailbox"), ctx({})))).mails!.map((m) => m.subject);
     expect(subjects).not.toContain("Bravo only");
     as(b.users.head_coach!.userId);
-    expect((await json(await list.GET(get("/api/mailbox"), ctx({})))).mails!.map((m) => m.subject)).toEqual(["Bravo only"]);
+    expect((await json(await list.GET(get("/api/mailbox"), ctx({})))).mails!.map((m) => m.subject)).toEqual([
+      "Bravo only",
+    ]);
   });
 
   it("the head coach's delivery queue names who, what kind and the state, never a subject or body", async () => {
     const rows = await listDeliveryQueue({ teamId: a.teamId });
     expect(rows.map((r) => [r.toEmail, r.kind, r.status])).toEqual([[HEAD, "password_reset", "sent"]]);
-    expect(Object.keys(rows[0]!).sort()).toEqual(["attempts", "createdAt", "id", "kind", "nextAttemptAt", "sentAt", "status", "toEmail"]);
+    expect(Object.keys(rows[0]!).sort()).toEqual([
+      "attempts",
+      "createdAt",
+      "id",
+      "kind",
+      "nextAttemptAt",
+      "sentAt",
+      "status",
+      "toEmail",
+    ]);
     expect(JSON.stringify(rows)).not.toMatch(/invite|reset your|subject/i);
   });
 

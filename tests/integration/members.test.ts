@@ -1,5 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { acceptInvitation, addMember, changeMemberRole, findOpenInvitation, listMembers, removeMember } from "@/lib/data/members";
+import {
+  acceptInvitation,
+  addMember,
+  changeMemberRole,
+  findOpenInvitation,
+  listMembers,
+  removeMember,
+} from "@/lib/data/members";
 import { listMembershipsOfUser, verifyCredentials } from "@/lib/data/users";
 import { AppError } from "@/lib/errors";
 import { addMemberSchema } from "@/lib/validations/members";
@@ -21,13 +28,22 @@ describe("members", () => {
     const input = addMemberSchema.parse({ name: "Nia Newcomer", email: "NIA@members.test ", role: "coach" });
     const { inviteToken, userId } = await addMember({ teamId: team.teamId, input });
     expect(inviteToken).toMatch(/^[A-Za-z0-9_-]{40,}$/);
-    expect(await findOpenInvitation({ token: inviteToken! })).toMatchObject({ email: "nia@members.test", teamName: "Members Club" });
+    expect(await findOpenInvitation({ token: inviteToken! })).toMatchObject({
+      email: "nia@members.test",
+      teamName: "Members Club",
+    });
     expect(await verifyCredentials({ email: "nia@members.test", password: "a-good-password" })).toBeNull();
     expect(await listMembershipsOfUser({ userId })).toEqual([]);
     await acceptInvitation({ token: inviteToken!, password: "a-good-password" });
-    expect(await verifyCredentials({ email: "nia@members.test", password: "a-good-password" })).toMatchObject({ id: userId });
-    await expect(acceptInvitation({ token: inviteToken!, password: "another-password" })).rejects.toMatchObject({ status: 400 });
-    expect(await listMembershipsOfUser({ userId })).toEqual([{ teamId: team.teamId, teamName: "Members Club", role: "coach", athleteId: null }]);
+    expect(await verifyCredentials({ email: "nia@members.test", password: "a-good-password" })).toMatchObject({
+      id: userId,
+    });
+    await expect(acceptInvitation({ token: inviteToken!, password: "another-password" })).rejects.toMatchObject({
+      status: 400,
+    });
+    expect(await listMembershipsOfUser({ userId })).toEqual([
+      { teamId: team.teamId, teamName: "Members Club", role: "coach", athleteId: null },
+    ]);
   });
 
   it("creates an athlete profile for a new athlete member", async () => {
@@ -38,7 +54,10 @@ describe("members", () => {
 
   it("refuses a duplicate member with the field that is wrong", async () => {
     const input = addMemberSchema.parse({ name: "Again", email: "nia@members.test", role: "physio" });
-    await expect(addMember({ teamId: team.teamId, input })).rejects.toMatchObject({ status: 409, fields: { email: ["Already a member of this team"] } });
+    await expect(addMember({ teamId: team.teamId, input })).rejects.toMatchObject({
+      status: 409,
+      fields: { email: ["Already a member of this team"] },
+    });
   });
 
   it("gives field messages for bad input", () => {
@@ -50,8 +69,12 @@ describe("members", () => {
 
   it("keeps at least one head coach", async () => {
     const head = (await listMembers({ teamId: team.teamId })).find((m) => m.role === "head_coach")!;
-    await expect(changeMemberRole({ teamId: team.teamId, membershipId: head.membershipId, role: "coach" })).rejects.toBeInstanceOf(AppError);
-    await expect(removeMember({ teamId: team.teamId, membershipId: head.membershipId })).rejects.toMatchObject({ status: 409 });
+    await expect(
+      changeMemberRole({ teamId: team.teamId, membershipId: head.membershipId, role: "coach" }),
+    ).rejects.toBeInstanceOf(AppError);
+    await expect(removeMember({ teamId: team.teamId, membershipId: head.membershipId })).rejects.toMatchObject({
+      status: 409,
+    });
   });
 
   it("removes a member but keeps their athlete history", async () => {
@@ -63,6 +86,8 @@ describe("members", () => {
 
   it("cannot touch another team's membership", async () => {
     const other = await createTestTeam(d, { name: "Other Club" });
-    await expect(changeMemberRole({ teamId: team.teamId, membershipId: other.users.coach.membershipId, role: "physio" })).rejects.toMatchObject({ status: 404 });
+    await expect(
+      changeMemberRole({ teamId: team.teamId, membershipId: other.users.coach.membershipId, role: "physio" }),
+    ).rejects.toMatchObject({ status: 404 });
   });
 });

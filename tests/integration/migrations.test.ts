@@ -7,7 +7,9 @@ import { setupTestDb } from "../helpers/db";
 const d = await setupTestDb();
 
 async function tables(): Promise<string[]> {
-  const [rows] = await d.sequelize.query("SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' ORDER BY name");
+  const [rows] = await d.sequelize.query(
+    "SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' ORDER BY name",
+  );
   return (rows as { name: string }[]).map((r) => r.name);
 }
 
@@ -19,7 +21,9 @@ describe("migrations", () => {
     await migrator.down({ to: 0 });
     expect(await tables()).toEqual(["SequelizeMeta"]);
     await migrator.up();
-    expect(await tables()).toEqual(expect.arrayContaining(["teams", "users", "memberships", "athletes", "planned_sessions", "session_logs"]));
+    expect(await tables()).toEqual(
+      expect.arrayContaining(["teams", "users", "memberships", "athletes", "planned_sessions", "session_logs"]),
+    );
   });
 
   it("turns on foreign keys and WAL", async () => {
@@ -33,13 +37,25 @@ describe("migrations", () => {
 describe("constraints", () => {
   it("keeps e-mails unique regardless of case", async () => {
     await d.User.create({ name: "One", email: "Same@Example.test", passwordHash: null });
-    await expect(d.User.create({ name: "Two", email: "same@example.test", passwordHash: null })).rejects.toBeInstanceOf(UniqueConstraintError);
+    await expect(d.User.create({ name: "Two", email: "same@example.test", passwordHash: null })).rejects.toBeInstanceOf(
+      UniqueConstraintError,
+    );
   });
 
   it("cascades a team's deletion to memberships, athletes and sessions but keeps user accounts", async () => {
     const { teamId, users } = await createTestTeam(d, { name: "Cascade Club" });
     const athleteId = Object.values(users).find((u) => u.athleteId)!.athleteId!;
-    await d.PlannedSession.create({ teamId, athleteId, date: "2026-11-02", startTime: "16:00", durationMin: 60, title: "Acc", plannedRpe: 6, notes: null, publishedAt: null });
+    await d.PlannedSession.create({
+      teamId,
+      athleteId,
+      date: "2026-11-02",
+      startTime: "16:00",
+      durationMin: 60,
+      title: "Acc",
+      plannedRpe: 6,
+      notes: null,
+      publishedAt: null,
+    });
     await d.Team.destroy({ where: { id: teamId } });
     expect(await d.Membership.count({ where: { teamId } })).toBe(0);
     expect(await d.Athlete.count({ where: { teamId } })).toBe(0);

@@ -31,7 +31,18 @@ const spikeWeek = addDays(w1, 35);
 async function steadyHistory(athleteId: number) {
   for (let week = 0; week < 6; week++) {
     for (const day of [0, 2, 4]) {
-      await d.PlannedSession.create({ teamId: team.teamId, athleteId, date: addDays(w1, week * 7 + day), startTime: "17:00", durationMin: 60, title: "Steady", plannedRpe: 5, status: "published", notes: null, publishedAt: new Date() });
+      await d.PlannedSession.create({
+        teamId: team.teamId,
+        athleteId,
+        date: addDays(w1, week * 7 + day),
+        startTime: "17:00",
+        durationMin: 60,
+        title: "Steady",
+        plannedRpe: 5,
+        status: "published",
+        notes: null,
+        publishedAt: new Date(),
+      });
     }
   }
 }
@@ -40,18 +51,37 @@ await steadyHistory(ben);
 
 /** A big extra session on the spike week's Tuesday: 150 min at RPE 10 (1500 AU) through the planner's data path. */
 async function planSpike(athleteId: number, date = addDays(spikeWeek, 1)) {
-  const input = createSessionSchema.parse({ from: "blank", athleteId, date, startTime: "10:00", durationMin: 150, title: "Overload", plannedRpe: 10, blocks: [] });
+  const input = createSessionSchema.parse({
+    from: "blank",
+    athleteId,
+    date,
+    startTime: "10:00",
+    durationMin: 150,
+    title: "Overload",
+    plannedRpe: 10,
+    blocks: [],
+  });
   const { sessions } = await createSessions({ teamId: team.teamId, actorUserId: coach, input });
   return sessions[0]!;
 }
 
-const spikes = async (athleteId: number) => (await listAlerts({ teamId: team.teamId, userId: coach, query: { status: "all", limit: 100, athleteId } })).filter((a) => a.kind === "spike");
+const spikes = async (athleteId: number) =>
+  (await listAlerts({ teamId: team.teamId, userId: coach, query: { status: "all", limit: 100, athleteId } })).filter(
+    (a) => a.kind === "spike",
+  );
 
 describe("spike alerts", () => {
   it("a planned spike records one alert and puts one e-mail in the physio's mailbox", async () => {
     const session = await planSpike(ada);
     const [alert] = await spikes(ada);
-    expect(alert).toMatchObject({ athleteId: ada, kind: "spike", basis: "planned", status: "open", flagged: true, weekStart: spikeWeek });
+    expect(alert).toMatchObject({
+      athleteId: ada,
+      kind: "spike",
+      basis: "planned",
+      status: "open",
+      flagged: true,
+      weekStart: spikeWeek,
+    });
     expect(alert!.value).toBeGreaterThanOrEqual(alert!.threshold);
     expect(alert!.threshold).toBe(1.5);
 
@@ -70,8 +100,18 @@ describe("spike alerts", () => {
     expect(await n.mailTo("ada@noticeclub.test")).toHaveLength(0);
 
     // Dragging the same spike to another day and back: still one open alert, no more mail.
-    const moved = await updateSession({ teamId: team.teamId, actorUserId: coach, sessionId: session.id, input: updateSessionSchema.parse({ version: session.version, date: addDays(spikeWeek, 2) }) });
-    await updateSession({ teamId: team.teamId, actorUserId: coach, sessionId: session.id, input: updateSessionSchema.parse({ version: moved.sessions[0]!.version, date: addDays(spikeWeek, 1) }) });
+    const moved = await updateSession({
+      teamId: team.teamId,
+      actorUserId: coach,
+      sessionId: session.id,
+      input: updateSessionSchema.parse({ version: session.version, date: addDays(spikeWeek, 2) }),
+    });
+    await updateSession({
+      teamId: team.teamId,
+      actorUserId: coach,
+      sessionId: session.id,
+      input: updateSessionSchema.parse({ version: moved.sessions[0]!.version, date: addDays(spikeWeek, 1) }),
+    });
     await n.worker.runOnce();
     expect(await spikes(ada)).toHaveLength(1);
     expect(await n.mailTo(PHYSIO)).toHaveLength(1);
@@ -90,9 +130,23 @@ describe("spike alerts", () => {
 
   it("a spike that stays up after the physio resolved it raises nothing new; it must go away and come back", async () => {
     const [open] = await spikes(ada);
-    await updateAlertStatus({ teamId: team.teamId, alertId: open!.id, userId: team.users.physio.userId, input: alertActionSchema.parse({ action: "resolve", note: "Spoke to the coach; planned on purpose." }) });
+    await updateAlertStatus({
+      teamId: team.teamId,
+      alertId: open!.id,
+      userId: team.users.physio.userId,
+      input: alertActionSchema.parse({ action: "resolve", note: "Spoke to the coach; planned on purpose." }),
+    });
     // Another edit in the week re-evaluates it: the flag is still raised, but it was dealt with.
-    const extra = createSessionSchema.parse({ from: "blank", athleteId: ada, date: addDays(spikeWeek, 5), startTime: "09:00", durationMin: 20, title: "Walk", plannedRpe: 1, blocks: [] });
+    const extra = createSessionSchema.parse({
+      from: "blank",
+      athleteId: ada,
+      date: addDays(spikeWeek, 5),
+      startTime: "09:00",
+      durationMin: 20,
+      title: "Walk",
+      plannedRpe: 1,
+      blocks: [],
+    });
     await createSessions({ teamId: team.teamId, actorUserId: coach, input: extra });
     await n.worker.runOnce();
     expect(await spikes(ada)).toHaveLength(1);
@@ -128,23 +182,77 @@ describe("spike alerts", () => {
 
   it("a log that makes the actual load spike records an alert based on logged sessions", async () => {
     const today = teamToday({ timeZone: "Europe/London" });
-    const dora = (await d.Athlete.create({ teamId: team.teamId, userId: null, groupId: team.groupId, name: "Dora Logger", sex: "female", birthDate: null, bodyMassKg: null, vmaxMs: null, vmaxTestedOn: null, tauS: null, stepLengthM: null })).id;
+    const dora = (
+      await d.Athlete.create({
+        teamId: team.teamId,
+        userId: null,
+        groupId: team.groupId,
+        name: "Dora Logger",
+        sex: "female",
+        birthDate: null,
+        bodyMassKg: null,
+        vmaxMs: null,
+        vmaxTestedOn: null,
+        tauS: null,
+        stepLengthM: null,
+      })
+    ).id;
     // Five weeks of logged steady work before today (every other day, 60 min at RPE 5).
     for (let back = 35; back >= 1; back -= 2) {
-      const s = await d.PlannedSession.create({ teamId: team.teamId, athleteId: dora, date: addDays(today, -back), startTime: "17:00", durationMin: 60, title: "Steady", plannedRpe: 5, status: "published", notes: null, publishedAt: new Date() });
-      await d.SessionLog.create({ sessionId: s.id, athleteId: dora, completion: "yes", rpe: 5, minutes: 60, completedReps: null, notes: null });
+      const s = await d.PlannedSession.create({
+        teamId: team.teamId,
+        athleteId: dora,
+        date: addDays(today, -back),
+        startTime: "17:00",
+        durationMin: 60,
+        title: "Steady",
+        plannedRpe: 5,
+        status: "published",
+        notes: null,
+        publishedAt: new Date(),
+      });
+      await d.SessionLog.create({
+        sessionId: s.id,
+        athleteId: dora,
+        completion: "yes",
+        rpe: 5,
+        minutes: 60,
+        completedReps: null,
+        notes: null,
+      });
     }
-    const planned = await d.PlannedSession.create({ teamId: team.teamId, athleteId: dora, date: today, startTime: "07:00", durationMin: 60, title: "Steady", plannedRpe: 5, status: "published", notes: null, publishedAt: new Date() });
+    const planned = await d.PlannedSession.create({
+      teamId: team.teamId,
+      athleteId: dora,
+      date: today,
+      startTime: "07:00",
+      durationMin: 60,
+      title: "Steady",
+      plannedRpe: 5,
+      status: "published",
+      notes: null,
+      publishedAt: new Date(),
+    });
     const target = (await getLogTarget({ sessionId: planned.id }))!;
     // The athlete's log, through the load engineer's data path (which calls afterLogChange in its transaction).
-    await saveSessionLog({ target, input: sessionLogSchema.parse({ completion: "yes", rpe: 10, minutes: 300 }), actorUserId: coach, today });
+    await saveSessionLog({
+      target,
+      input: sessionLogSchema.parse({ completion: "yes", rpe: 10, minutes: 300 }),
+      actorUserId: coach,
+      today,
+    });
     const [alert] = await spikes(dora);
     expect(alert).toMatchObject({ kind: "spike", basis: "actual", status: "open", weekStart: startOfWeek(today, 1) });
     await n.worker.runOnce();
     const mail = (await n.mailTo(PHYSIO)).find((m) => m.subject === "Load flag: Dora Logger · Spike");
     expect(mail?.text).toContain("The sessions Dora Logger logged raise a load flag");
     // Saving the same log again changes nothing that is new.
-    await saveSessionLog({ target, input: sessionLogSchema.parse({ completion: "yes", rpe: 10, minutes: 300 }), actorUserId: coach, today });
+    await saveSessionLog({
+      target,
+      input: sessionLogSchema.parse({ completion: "yes", rpe: 10, minutes: 300 }),
+      actorUserId: coach,
+      today,
+    });
     await n.worker.runOnce();
     expect((await n.mailTo(PHYSIO)).filter((m) => m.subject === "Load flag: Dora Logger · Spike")).toHaveLength(1);
   });

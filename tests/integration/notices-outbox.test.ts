@@ -16,18 +16,27 @@ const n = await setupNotices();
 const { d } = n;
 const team = await createTestTeam(d, { name: "Outbox Club" });
 
-const note = (subject: string) => renderEmail({ subject, heading: subject, parts: [{ kind: "paragraph", text: "Hello" }], footer: "Test" });
+const note = (subject: string) =>
+  renderEmail({ subject, heading: subject, parts: [{ kind: "paragraph", text: "Hello" }], footer: "Test" });
 
 // Delivery mechanics only: an invitation may go to anyone (team mail to non-members is dropped, notices-recipients.test.ts).
 async function queue(to: string, subject: string, extra: { maxAttempts?: number } = {}) {
-  return d.sequelize.transaction((transaction) => enqueueMail({ transaction, teamId: team.teamId, kind: "invitation", to, mail: note(subject), ...extra }));
+  return d.sequelize.transaction((transaction) =>
+    enqueueMail({ transaction, teamId: team.teamId, kind: "invitation", to, mail: note(subject), ...extra }),
+  );
 }
 
 describe("outbox", () => {
   it("writes nothing when the change's transaction rolls back", async () => {
     await expect(
       d.sequelize.transaction(async (transaction) => {
-        await enqueueMail({ transaction, teamId: team.teamId, kind: "alert", to: "x@outbox.test", mail: note("Never") });
+        await enqueueMail({
+          transaction,
+          teamId: team.teamId,
+          kind: "alert",
+          to: "x@outbox.test",
+          mail: note("Never"),
+        });
         throw new Error("the plan write failed");
       }),
     ).rejects.toThrow("the plan write failed");
@@ -36,8 +45,26 @@ describe("outbox", () => {
 
   it("skips a second message with the same dedupe key", async () => {
     const key = { dedupeKey: "digest:1:1:2026-12-01" };
-    const first = await d.sequelize.transaction((transaction) => enqueueMail({ transaction, teamId: team.teamId, kind: "invitation", to: "a@outbox.test", mail: note("Once"), ...key }));
-    const second = await d.sequelize.transaction((transaction) => enqueueMail({ transaction, teamId: team.teamId, kind: "invitation", to: "a@outbox.test", mail: note("Once"), ...key }));
+    const first = await d.sequelize.transaction((transaction) =>
+      enqueueMail({
+        transaction,
+        teamId: team.teamId,
+        kind: "invitation",
+        to: "a@outbox.test",
+        mail: note("Once"),
+        ...key,
+      }),
+    );
+    const second = await d.sequelize.transaction((transaction) =>
+      enqueueMail({
+        transaction,
+        teamId: team.teamId,
+        kind: "invitation",
+        to: "a@outbox.test",
+        mail: note("Once"),
+        ...key,
+      }),
+    );
     expect(first).toBeTypeOf("number");
     expect(second).toBeNull();
     await n.worker.runOnce();
@@ -63,7 +90,9 @@ describe("outbox", () => {
     expect(await claimDueMessages({ now: new Date(t0.getTime() + 30_000), limit: 10, leaseMs: 60_000 })).toEqual([]);
     const later = createOutboxWorker({ digests: false, log: () => {}, now: () => new Date(t0.getTime() + 61_000) });
     expect((await later.runOnce()).sent).toBe(1);
-    expect(await markMessageSent({ id: held!.id, leaseToken: held!.leaseToken, messageId: "<x@y>", now: new Date() })).toBe(false);
+    expect(
+      await markMessageSent({ id: held!.id, leaseToken: held!.leaseToken, messageId: "<x@y>", now: new Date() }),
+    ).toBe(false);
     expect(await n.mailTo("lease@outbox.test")).toHaveLength(1);
   });
 
@@ -105,8 +134,28 @@ describe("outbox", () => {
     const athleteId = team.users["ada@outboxclub.test"].athleteId!;
     const start = new Date("2026-03-02T06:00:00Z"); // 06:00 in London (GMT)
     await updateNotificationSettings({ userId: physio, teamId: team.teamId, alertEmail: "digest", now: start });
-    await d.Alert.create({ teamId: team.teamId, athleteId, kind: "spike", level: "alert", metric: "srpe", value: 1.72, threshold: 1.5, date: "2026-03-03", weekStart: "2026-03-02", basis: "planned", reason: "r", note: null, acknowledgedBy: null, acknowledgedAt: null, resolvedBy: null, resolvedAt: null, createdAt: new Date("2026-03-02T09:00:00Z") });
-    expect(lastDigestSlot(new Date("2026-03-03T06:59:00Z"), "Europe/London").toISOString()).toBe("2026-03-02T07:00:00.000Z");
+    await d.Alert.create({
+      teamId: team.teamId,
+      athleteId,
+      kind: "spike",
+      level: "alert",
+      metric: "srpe",
+      value: 1.72,
+      threshold: 1.5,
+      date: "2026-03-03",
+      weekStart: "2026-03-02",
+      basis: "planned",
+      reason: "r",
+      note: null,
+      acknowledgedBy: null,
+      acknowledgedAt: null,
+      resolvedBy: null,
+      resolvedAt: null,
+      createdAt: new Date("2026-03-02T09:00:00Z"),
+    });
+    expect(lastDigestSlot(new Date("2026-03-03T06:59:00Z"), "Europe/London").toISOString()).toBe(
+      "2026-03-02T07:00:00.000Z",
+    );
     // Switched at 06:00, so today's 07:00 slot is due at noon: one digest with the 09:00 alert.
     expect(await queueDueDigests({ now: new Date("2026-03-02T12:00:00Z") })).toBe(1);
     // Same day again: nothing; next morning with no new alerts: the window moves on, no empty mail.

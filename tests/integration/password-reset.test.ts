@@ -9,7 +9,12 @@ const d = await setupTestDb();
 await createTestTeam(d, { name: "Reset Club" });
 const email = "coach@resetclub.test";
 
-const outbox = () => d.OutboxMessage.findAll({ where: { kind: "password_reset" }, attributes: ["toEmail", "text"], order: [["id", "ASC"]] });
+const outbox = () =>
+  d.OutboxMessage.findAll({
+    where: { kind: "password_reset" },
+    attributes: ["toEmail", "text"],
+    order: [["id", "ASC"]],
+  });
 
 describe("password reset", () => {
   it("queues one reset mail with a one-time link, and ignores unknown addresses", async () => {
@@ -40,7 +45,9 @@ describe("password reset", () => {
     expect(links).toHaveLength(2);
     await acceptInvitation({ token: links[1]!, password: "fourth-password-here" });
     expect(await findOpenInvitation({ token: links[0]! })).toBeNull();
-    await expect(acceptInvitation({ token: links[0]!, password: "attacker-password-1" })).rejects.toMatchObject({ status: 400 });
+    await expect(acceptInvitation({ token: links[0]!, password: "attacker-password-1" })).rejects.toMatchObject({
+      status: 400,
+    });
     expect(await verifyCredentials({ email, password: "fourth-password-here" })).not.toBeNull();
   });
 
@@ -48,7 +55,10 @@ describe("password reset", () => {
     await requestPasswordReset({ email, now: new Date(Date.now() + 30 * 60_000) });
     const token = (await outbox()).at(-1)!.text.match(/\/invite\/([A-Za-z0-9_-]{40,})/)![1];
     for (const password of [" ".repeat(10), " ".repeat(12), "password1234", email, "coach@resetclub.test!"]) {
-      await expect(acceptInvitation({ token, password }), JSON.stringify(password)).rejects.toMatchObject({ status: 400, fields: { password: expect.any(Array) } });
+      await expect(acceptInvitation({ token, password }), JSON.stringify(password)).rejects.toMatchObject({
+        status: 400,
+        fields: { password: expect.any(Array) },
+      });
     }
     expect(await findOpenInvitation({ token })).not.toBeNull();
     await acceptInvitation({ token, password: "fifth-password-here" });

@@ -39,13 +39,19 @@ describe("team access, role by role", () => {
   it("refuses an athlete squad-wide views but allows their own scope", async () => {
     expect(await status(authorizeTeam({ userId: adaA.userId, teamId: a.teamId, can: "load:view" }))).toBe(403);
     expect(await status(authorizeTeam({ userId: adaA.userId, teamId: a.teamId, can: "athletes:view" }))).toBe(403);
-    expect(await status(authorizeTeam({ userId: adaA.userId, teamId: a.teamId, can: "load:view", scope: "own" }))).toBe(200);
+    expect(await status(authorizeTeam({ userId: adaA.userId, teamId: a.teamId, can: "load:view", scope: "own" }))).toBe(
+      200,
+    );
   });
 
   it("shows a user of team A nothing of team B (404, not 403)", async () => {
     for (const role of ["head_coach", "coach", "physio"] as const) {
-      expect(await status(authorizeTeam({ userId: a.users[role].userId, teamId: b.teamId, can: "team:view" }))).toBe(404);
-      expect(await status(authorizeAthlete({ userId: a.users[role].userId, athleteId: adaB.athleteId!, can: "load:view" }))).toBe(404);
+      expect(await status(authorizeTeam({ userId: a.users[role].userId, teamId: b.teamId, can: "team:view" }))).toBe(
+        404,
+      );
+      expect(
+        await status(authorizeAthlete({ userId: a.users[role].userId, athleteId: adaB.athleteId!, can: "load:view" })),
+      ).toBe(404);
     }
   });
 
@@ -58,17 +64,27 @@ describe("athlete access", () => {
   it("lets an athlete read their own load and log their own sessions", async () => {
     const viewer = await authorizeAthlete({ userId: adaA.userId, athleteId: adaA.athleteId!, can: "load:view" });
     expect(viewer.athlete.id).toBe(adaA.athleteId);
-    expect(await status(authorizeAthlete({ userId: adaA.userId, athleteId: adaA.athleteId!, can: "log:write" }))).toBe(200);
+    expect(await status(authorizeAthlete({ userId: adaA.userId, athleteId: adaA.athleteId!, can: "log:write" }))).toBe(
+      200,
+    );
   });
 
   it("does not let an athlete read another athlete", async () => {
-    expect(await status(authorizeAthlete({ userId: adaA.userId, athleteId: benA.athleteId!, can: "load:view" }))).toBe(404);
-    expect(await status(authorizeAthlete({ userId: adaA.userId, athleteId: benA.athleteId!, can: "athletes:view" }))).toBe(404);
+    expect(await status(authorizeAthlete({ userId: adaA.userId, athleteId: benA.athleteId!, can: "load:view" }))).toBe(
+      404,
+    );
+    expect(
+      await status(authorizeAthlete({ userId: adaA.userId, athleteId: benA.athleteId!, can: "athletes:view" })),
+    ).toBe(404);
   });
 
   it("lets staff of the team read any athlete, and a physio not edit the plan", async () => {
-    expect(await status(authorizeAthlete({ userId: a.users.physio.userId, athleteId: benA.athleteId!, can: "load:view" }))).toBe(200);
-    expect(await status(authorizeAthlete({ userId: a.users.physio.userId, athleteId: benA.athleteId!, can: "plan:edit" }))).toBe(403);
+    expect(
+      await status(authorizeAthlete({ userId: a.users.physio.userId, athleteId: benA.athleteId!, can: "load:view" })),
+    ).toBe(200);
+    expect(
+      await status(authorizeAthlete({ userId: a.users.physio.userId, athleteId: benA.athleteId!, can: "plan:edit" })),
+    ).toBe(403);
   });
 
   it("re-reads the role from the database: a removed member loses access at once", async () => {

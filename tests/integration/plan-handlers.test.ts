@@ -60,14 +60,29 @@ const flying = {
   durationMin: 50,
   plannedRpe: 7,
 };
-const pogo = { kind: "plyometric" as const, title: "Pogo hops", running: null, drills: [{ name: "Pogo", sets: 3, reps: 10, contactsPerRep: 2, intensity: "low" as const }], notes: null, durationMin: 20, plannedRpe: 4 };
+const pogo = {
+  kind: "plyometric" as const,
+  title: "Pogo hops",
+  running: null,
+  drills: [{ name: "Pogo", sets: 3, reps: 10, contactsPerRep: 2, intensity: "low" as const }],
+  notes: null,
+  durationMin: 20,
+  plannedRpe: 4,
+};
 const bravoTemplate = await d.BlockTemplate.create({ teamId: b.teamId, ...flying });
 
 const p = <T>(v: T) => ({ params: Promise.resolve(v) });
 const url = (path: string) => `http://test${path}`;
 const send = (path: string, method: string, body?: unknown) =>
-  new Request(url(path), { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : typeof body === "string" ? body : JSON.stringify(body) });
-type Answer<T> = { status: number; body: T & { error?: { code: string; message: string; fields?: Record<string, string[]>; current?: PlanSession } } };
+  new Request(url(path), {
+    method,
+    headers: { "content-type": "application/json" },
+    body: body === undefined ? undefined : typeof body === "string" ? body : JSON.stringify(body),
+  });
+type Answer<T> = {
+  status: number;
+  body: T & { error?: { code: string; message: string; fields?: Record<string, string[]>; current?: PlanSession } };
+};
 async function json<T>(res: Response): Promise<Answer<T>> {
   return { status: res.status, body: (await res.json()) as Answer<T>["body"] };
 }
@@ -78,13 +93,27 @@ beforeEach(() => {
 });
 
 const T = String(a.teamId);
-const getWeek = (q = `?week=${week}`, teamId = T) => plan.GET(new Request(url(`/api/teams/${teamId}/plan${q}`)), p({ teamId })).then(json<PlanWeek>);
-const create = (body: unknown, teamId = T) => sessions.POST(send(`/api/teams/${teamId}/sessions`, "POST", body), p({ teamId })).then(json<PlanWriteResult>);
-const patch = (id: number, body: unknown) => session.PATCH(send(`/api/sessions/${id}`, "PATCH", body), p({ sessionId: String(id) })).then(json<PlanWriteResult>);
+const getWeek = (q = `?week=${week}`, teamId = T) =>
+  plan.GET(new Request(url(`/api/teams/${teamId}/plan${q}`)), p({ teamId })).then(json<PlanWeek>);
+const create = (body: unknown, teamId = T) =>
+  sessions.POST(send(`/api/teams/${teamId}/sessions`, "POST", body), p({ teamId })).then(json<PlanWriteResult>);
+const patch = (id: number, body: unknown) =>
+  session.PATCH(send(`/api/sessions/${id}`, "PATCH", body), p({ sessionId: String(id) })).then(json<PlanWriteResult>);
 const del = (id: number, version?: number) =>
-  session.DELETE(send(`/api/sessions/${id}${version === undefined ? "" : `?version=${version}`}`, "DELETE"), p({ sessionId: String(id) })).then(json<PlanWriteResult>);
-const tool = (name: string, body: unknown) => tools.POST(send(`/api/teams/${T}/plan/${name}`, "POST", body), p({ teamId: T, tool: name })).then(json<PlanWriteResult>);
-const newTemplate = (body: unknown, teamId = T) => templates.POST(send(`/api/teams/${teamId}/templates`, "POST", body), p({ teamId })).then(json<{ template: { id: number } }>);
+  session
+    .DELETE(
+      send(`/api/sessions/${id}${version === undefined ? "" : `?version=${version}`}`, "DELETE"),
+      p({ sessionId: String(id) }),
+    )
+    .then(json<PlanWriteResult>);
+const tool = (name: string, body: unknown) =>
+  tools
+    .POST(send(`/api/teams/${T}/plan/${name}`, "POST", body), p({ teamId: T, tool: name }))
+    .then(json<PlanWriteResult>);
+const newTemplate = (body: unknown, teamId = T) =>
+  templates
+    .POST(send(`/api/teams/${teamId}/templates`, "POST", body), p({ teamId }))
+    .then(json<{ template: { id: number } }>);
 
 as(coach);
 const maxV = (await newTemplate(flying)).body.template.id;
@@ -95,19 +124,39 @@ describe("templates", () => {
     const made = await newTemplate({ ...pogo, title: "Skips" });
     expect(made.status).toBe(201);
     const id = made.body.template.id;
-    const list = await templates.GET(new Request(url(`/api/teams/${T}/templates`)), p({ teamId: T })).then(json<{ templates: { title: string }[] }>);
-    expect(list.body.templates.map((t) => t.title)).toEqual(expect.arrayContaining(["Flying 30s", "Pogo hops", "Skips"]));
-    const put = await template.PUT(send(`/api/templates/${id}`, "PUT", { ...pogo, title: "A skips", version: 1 }), p({ templateId: String(id) })).then(json<{ template: { title: string; version: number } }>);
+    const list = await templates
+      .GET(new Request(url(`/api/teams/${T}/templates`)), p({ teamId: T }))
+      .then(json<{ templates: { title: string }[] }>);
+    expect(list.body.templates.map((t) => t.title)).toEqual(
+      expect.arrayContaining(["Flying 30s", "Pogo hops", "Skips"]),
+    );
+    const put = await template
+      .PUT(
+        send(`/api/templates/${id}`, "PUT", { ...pogo, title: "A skips", version: 1 }),
+        p({ templateId: String(id) }),
+      )
+      .then(json<{ template: { title: string; version: number } }>);
     expect(put.body.template).toMatchObject({ title: "A skips", version: 2 });
     // The same edit again carries a version that has moved on: 409 "stale" with the stored template, nothing written.
-    const stale = await template.PUT(send(`/api/templates/${id}`, "PUT", { ...pogo, title: "B skips", version: 1 }), p({ templateId: String(id) })).then(json<{ error: { code: string; current: { title: string } } }>);
+    const stale = await template
+      .PUT(
+        send(`/api/templates/${id}`, "PUT", { ...pogo, title: "B skips", version: 1 }),
+        p({ templateId: String(id) }),
+      )
+      .then(json<{ error: { code: string; current: { title: string } } }>);
     expect(stale.status).toBe(409);
     expect(stale.body.error).toMatchObject({ code: "stale", current: { title: "A skips" } });
-    const missing = await template.PUT(send(`/api/templates/${id}`, "PUT", { ...pogo, title: "C skips" }), p({ templateId: String(id) })).then(json<{ error: { fields: Record<string, string[]> } }>);
+    const missing = await template
+      .PUT(send(`/api/templates/${id}`, "PUT", { ...pogo, title: "C skips" }), p({ templateId: String(id) }))
+      .then(json<{ error: { fields: Record<string, string[]> } }>);
     expect(missing.status).toBe(400);
     expect(missing.body.error.fields).toHaveProperty("version");
-    expect((await template.DELETE(send(`/api/templates/${id}`, "DELETE"), p({ templateId: String(id) }))).status).toBe(200);
-    expect((await template.GET(new Request(url(`/api/templates/${id}`)), p({ templateId: String(id) }))).status).toBe(404);
+    expect((await template.DELETE(send(`/api/templates/${id}`, "DELETE"), p({ templateId: String(id) }))).status).toBe(
+      200,
+    );
+    expect((await template.GET(new Request(url(`/api/templates/${id}`)), p({ templateId: String(id) }))).status).toBe(
+      404,
+    );
   });
 
   it("answers 400 with the field for a running block without its prescription", async () => {
@@ -120,7 +169,9 @@ describe("templates", () => {
 
   it("keeps only the prescription a kind uses", async () => {
     const res = await newTemplate({ ...pogo, kind: "strength", title: "Squats", drills: pogo.drills });
-    const t = await template.GET(new Request(url(`/api/templates/${res.body.template.id}`)), p({ templateId: String(res.body.template.id) })).then(json<{ template: { drills: unknown } }>);
+    const t = await template
+      .GET(new Request(url(`/api/templates/${res.body.template.id}`)), p({ templateId: String(res.body.template.id) }))
+      .then(json<{ template: { drills: unknown } }>);
     expect(t.body.template.drills).toBeNull();
   });
 
@@ -128,7 +179,14 @@ describe("templates", () => {
     as(physio);
     expect((await newTemplate(flying)).status).toBe(403);
     as(bravoCoach);
-    expect((await template.PUT(send(`/api/templates/${maxV}`, "PUT", { ...flying, version: 1 }), p({ templateId: String(maxV) }))).status).toBe(404);
+    expect(
+      (
+        await template.PUT(
+          send(`/api/templates/${maxV}`, "PUT", { ...flying, version: 1 }),
+          p({ templateId: String(maxV) }),
+        )
+      ).status,
+    ).toBe(404);
   });
 });
 
@@ -137,13 +195,39 @@ describe("dropping templates", () => {
     const res = await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: tue });
     expect(res.status).toBe(201);
     const [s] = res.body.sessions;
-    expect(s).toMatchObject({ athleteId: ada.athleteId, date: tue, startTime: "16:00", title: "Flying 30s", durationMin: 50, plannedRpe: 7, status: "draft", version: 1, sequence: 0 });
-    expect(s.blocks).toEqual([expect.objectContaining({ kind: "max_velocity", templateId: maxV, position: 0, running: flying.running })]);
-    expect(told).toEqual([[expect.objectContaining({ kind: "created", sessionId: s.id, before: null, after: expect.objectContaining({ id: s.id, status: "draft" }) })]]);
+    expect(s).toMatchObject({
+      athleteId: ada.athleteId,
+      date: tue,
+      startTime: "16:00",
+      title: "Flying 30s",
+      durationMin: 50,
+      plannedRpe: 7,
+      status: "draft",
+      version: 1,
+      sequence: 0,
+    });
+    expect(s.blocks).toEqual([
+      expect.objectContaining({ kind: "max_velocity", templateId: maxV, position: 0, running: flying.running }),
+    ]);
+    expect(told).toEqual([
+      [
+        expect.objectContaining({
+          kind: "created",
+          sessionId: s.id,
+          before: null,
+          after: expect.objectContaining({ id: s.id, status: "draft" }),
+        }),
+      ],
+    ]);
   });
 
   it("answers each write with the server's week numbers for the touched athletes, equal to a fresh GET", async () => {
-    const res = await create({ from: "template", templateId: plyo, athleteId: ben.athleteId, date: addDaysTo(week, 6) });
+    const res = await create({
+      from: "template",
+      templateId: plyo,
+      athleteId: ben.athleteId,
+      date: addDaysTo(week, 6),
+    });
     expect(res.body.touched).toEqual([{ athleteId: ben.athleteId, date: addDaysTo(week, 6) }]);
     expect(res.body.rows?.map((r) => [r.athleteId, r.weekStart])).toEqual([[ben.athleteId, week]]);
     const fresh = (await getWeek()).body.athletes.find((x) => x.id === ben.athleteId)!;
@@ -155,18 +239,32 @@ describe("dropping templates", () => {
   });
 
   it("appends the template as a block to a session, bumping its version", async () => {
-    const [s] = (await create({ from: "template", templateId: maxV, athleteId: ben.athleteId, date: tue })).body.sessions;
-    const res = await blocks.POST(send(`/api/sessions/${s.id}/blocks`, "POST", { version: 1, templateId: plyo }), p({ sessionId: String(s.id) })).then(json<PlanWriteResult>);
+    const [s] = (await create({ from: "template", templateId: maxV, athleteId: ben.athleteId, date: tue })).body
+      .sessions;
+    const res = await blocks
+      .POST(
+        send(`/api/sessions/${s.id}/blocks`, "POST", { version: 1, templateId: plyo }),
+        p({ sessionId: String(s.id) }),
+      )
+      .then(json<PlanWriteResult>);
     expect(res.status).toBe(201);
     const after = res.body.sessions[0];
     expect(after.version).toBe(2);
-    expect(after.blocks.map((x) => [x.kind, x.position])).toEqual([["max_velocity", 0], ["plyometric", 1]]);
-    expect(told.at(-1)?.[0]).toMatchObject({ kind: "updated", before: { blocks: [expect.anything()] }, after: { blocks: [expect.anything(), expect.anything()] } });
+    expect(after.blocks.map((x) => [x.kind, x.position])).toEqual([
+      ["max_velocity", 0],
+      ["plyometric", 1],
+    ]);
+    expect(told.at(-1)?.[0]).toMatchObject({
+      kind: "updated",
+      before: { blocks: [expect.anything()] },
+      after: { blocks: [expect.anything(), expect.anything()] },
+    });
   });
 
   it("gives a group drop to every athlete of the group in one write (adding to a session already there)", async () => {
     const day = addDaysTo(week, 4);
-    const [existing] = (await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: day })).body.sessions;
+    const [existing] = (await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: day })).body
+      .sessions;
     told.length = 0;
     const res = await create({ from: "template", templateId: plyo, groupId: a.groupId, date: day });
     expect(res.status).toBe(201);
@@ -190,7 +288,9 @@ describe("dropping templates", () => {
   });
 
   it("answers 404 for another team's template, athlete or group, and 400 for a drop with neither", async () => {
-    expect((await create({ from: "template", templateId: bravoTemplate.id, athleteId: ada.athleteId, date: tue })).status).toBe(404);
+    expect(
+      (await create({ from: "template", templateId: bravoTemplate.id, athleteId: ada.athleteId, date: tue })).status,
+    ).toBe(404);
     const other = await create({ from: "template", templateId: maxV, athleteId: bravoAda, date: tue });
     expect(other.status).toBe(404);
     expect(other.body.error?.fields).toHaveProperty("athleteId");
@@ -205,9 +305,20 @@ describe("dropping templates", () => {
     const noDate = await create({ from: "template", templateId: maxV, athleteId: ada.athleteId });
     expect(noDate.status).toBe(400);
     expect(noDate.body.error?.fields).toHaveProperty("date");
-    expect((await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: "2026-02-30" })).body.error?.fields).toHaveProperty("date");
+    expect(
+      (await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: "2026-02-30" })).body.error
+        ?.fields,
+    ).toHaveProperty("date");
     expect((await create({ from: "somewhere" })).status).toBe(400);
-    const blank = await create({ from: "blank", athleteId: ada.athleteId, date: tue, durationMin: 60, title: "X", plannedRpe: 11, blocks: [] });
+    const blank = await create({
+      from: "blank",
+      athleteId: ada.athleteId,
+      date: tue,
+      durationMin: 60,
+      title: "X",
+      plannedRpe: 11,
+      blocks: [],
+    });
     expect(blank.body.error?.fields).toHaveProperty("plannedRpe");
     expect((await create("{not json")).status).toBe(400);
     expect(await d.PlannedSession.count()).toBe(before);
@@ -216,7 +327,8 @@ describe("dropping templates", () => {
 
 describe("moving, copying, editing", () => {
   it("moves a session to another day and athlete with the version it read; a stale version answers 409 with the current session", async () => {
-    const [s] = (await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: tue })).body.sessions;
+    const [s] = (await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: tue })).body
+      .sessions;
     const moved = await patch(s.id, { version: 1, date: thu });
     expect(moved.status).toBe(200);
     expect(moved.body.sessions[0]).toMatchObject({ date: thu, version: 2, sequence: 0 });
@@ -228,7 +340,8 @@ describe("moving, copying, editing", () => {
   });
 
   it("copies a session as a new draft with its blocks", async () => {
-    const [s] = (await create({ from: "template", templateId: plyo, athleteId: ada.athleteId, date: tue })).body.sessions;
+    const [s] = (await create({ from: "template", templateId: plyo, athleteId: ada.athleteId, date: tue })).body
+      .sessions;
     const res = await create({ from: "copy", sessionId: s.id, athleteId: ben.athleteId, date: addDaysTo(week, 5) });
     const [c] = res.body.sessions;
     expect(c.id).not.toBe(s.id);
@@ -238,14 +351,39 @@ describe("moving, copying, editing", () => {
   });
 
   it("rewrites a session's fields and blocks from the editor, and edits and removes one block", async () => {
-    const [s] = (await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: addDaysTo(week, 6) })).body.sessions;
-    const edited = await patch(s.id, { version: 1, startTime: "09:30", durationMin: 75, plannedRpe: 8, notes: "  Spikes on  ", blocks: [{ ...s.blocks[0], title: "Flying 20s" }, { kind: "recovery", title: "Walk back", running: null, drills: null, notes: null }] });
+    const [s] = (
+      await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: addDaysTo(week, 6) })
+    ).body.sessions;
+    const edited = await patch(s.id, {
+      version: 1,
+      startTime: "09:30",
+      durationMin: 75,
+      plannedRpe: 8,
+      notes: "  Spikes on  ",
+      blocks: [
+        { ...s.blocks[0], title: "Flying 20s" },
+        { kind: "recovery", title: "Walk back", running: null, drills: null, notes: null },
+      ],
+    });
     const e = edited.body.sessions[0];
     expect(e).toMatchObject({ startTime: "09:30", durationMin: 75, plannedRpe: 8, notes: "Spikes on", version: 2 });
     expect(e.blocks.map((x) => x.title)).toEqual(["Flying 20s", "Walk back"]);
-    const one = await block.PATCH(send(`/api/sessions/${s.id}/blocks/${e.blocks[1].id}`, "PATCH", { version: 2, block: { kind: "recovery", title: "Easy jog", running: null, drills: null, notes: null } }), p({ sessionId: String(s.id), blockId: String(e.blocks[1].id) })).then(json<PlanWriteResult>);
+    const one = await block
+      .PATCH(
+        send(`/api/sessions/${s.id}/blocks/${e.blocks[1].id}`, "PATCH", {
+          version: 2,
+          block: { kind: "recovery", title: "Easy jog", running: null, drills: null, notes: null },
+        }),
+        p({ sessionId: String(s.id), blockId: String(e.blocks[1].id) }),
+      )
+      .then(json<PlanWriteResult>);
     expect(one.body.sessions[0].blocks.map((x) => x.title)).toEqual(["Flying 20s", "Easy jog"]);
-    const gone = await block.DELETE(send(`/api/sessions/${s.id}/blocks/${e.blocks[1].id}?version=3`, "DELETE"), p({ sessionId: String(s.id), blockId: String(e.blocks[1].id) })).then(json<PlanWriteResult>);
+    const gone = await block
+      .DELETE(
+        send(`/api/sessions/${s.id}/blocks/${e.blocks[1].id}?version=3`, "DELETE"),
+        p({ sessionId: String(s.id), blockId: String(e.blocks[1].id) }),
+      )
+      .then(json<PlanWriteResult>);
     expect(gone.body.sessions[0].blocks).toHaveLength(1);
     expect(gone.body.sessions[0].version).toBe(4);
     const badField = await patch(s.id, { version: 4, startTime: "25:00" });
@@ -254,8 +392,17 @@ describe("moving, copying, editing", () => {
   });
 
   it("keeps a logged session on its day", async () => {
-    const [s] = (await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: tue })).body.sessions;
-    await d.SessionLog.create({ sessionId: s.id, athleteId: ada.athleteId!, completion: "yes", rpe: 7, minutes: 50, completedReps: null, notes: null });
+    const [s] = (await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: tue })).body
+      .sessions;
+    await d.SessionLog.create({
+      sessionId: s.id,
+      athleteId: ada.athleteId!,
+      completion: "yes",
+      rpe: 7,
+      minutes: 50,
+      completedReps: null,
+      notes: null,
+    });
     const res = await patch(s.id, { version: 1, date: thu });
     expect(res.status).toBe(409);
     expect(res.body.error?.code).toBe("conflict");
@@ -269,13 +416,17 @@ describe("moving, copying, editing", () => {
 describe("deleting and the week tools", () => {
   it("removes a draft, and keeps a published session as cancelled with a new SEQUENCE", async () => {
     const day = addDaysTo(week, 2);
-    const [draft] = (await create({ from: "template", templateId: plyo, athleteId: ben.athleteId, date: day })).body.sessions;
+    const [draft] = (await create({ from: "template", templateId: plyo, athleteId: ben.athleteId, date: day })).body
+      .sessions;
     expect((await del(draft.id)).body.error?.fields).toHaveProperty("version");
     const gone = await del(draft.id, 1);
     expect(gone.body).toMatchObject({ sessions: [], removedIds: [draft.id] });
-    expect(told.at(-1)).toEqual([expect.objectContaining({ kind: "deleted", before: expect.objectContaining({ id: draft.id }), after: null })]);
+    expect(told.at(-1)).toEqual([
+      expect.objectContaining({ kind: "deleted", before: expect.objectContaining({ id: draft.id }), after: null }),
+    ]);
 
-    const [s] = (await create({ from: "template", templateId: maxV, athleteId: ben.athleteId, date: day })).body.sessions;
+    const [s] = (await create({ from: "template", templateId: maxV, athleteId: ben.athleteId, date: day })).body
+      .sessions;
     const pub = await patch(s.id, { version: 1, status: "published" });
     expect(pub.body.sessions[0]).toMatchObject({ status: "published", sequence: 0, version: 2 });
     expect(pub.body.sessions[0].publishedAt).not.toBeNull();
@@ -284,20 +435,36 @@ describe("deleting and the week tools", () => {
     expect(edited.body.sessions[0]).toMatchObject({ sequence: 1, version: 3 });
     const cancelled = await del(s.id, 3);
     expect(cancelled.body.sessions[0]).toMatchObject({ status: "cancelled", sequence: 2, version: 4 });
-    expect(told.at(-1)).toEqual([expect.objectContaining({ kind: "deleted", before: expect.objectContaining({ status: "published" }), after: expect.objectContaining({ status: "cancelled", sequence: 2 }) })]);
+    expect(told.at(-1)).toEqual([
+      expect.objectContaining({
+        kind: "deleted",
+        before: expect.objectContaining({ status: "published" }),
+        after: expect.objectContaining({ status: "cancelled", sequence: 2 }),
+      }),
+    ]);
     const back = await patch(s.id, { version: 4, status: "published" });
     expect(back.body.sessions[0]).toMatchObject({ status: "published", sequence: 3 });
   });
 
   it("publishes the week's drafts, copies the week to the next, and clears a week", async () => {
     const w = addDaysTo(week, 14);
-    for (const [athleteId, date] of [[ada.athleteId, w], [ben.athleteId, addDaysTo(w, 2)]] as const) await create({ from: "template", templateId: maxV, athleteId, date });
+    for (const [athleteId, date] of [
+      [ada.athleteId, w],
+      [ben.athleteId, addDaysTo(w, 2)],
+    ] as const)
+      await create({ from: "template", templateId: maxV, athleteId, date });
     const published = await tool("publish", { week: addDaysTo(w, 3) });
-    expect(published.body.sessions.map((s) => [s.status, s.sequence])).toEqual([["published", 0], ["published", 0]]);
+    expect(published.body.sessions.map((s) => [s.status, s.sequence])).toEqual([
+      ["published", 0],
+      ["published", 0],
+    ]);
     expect(told.at(-1)?.map((c) => c.kind)).toEqual(["published", "published"]);
 
     const copied = await tool("copy-to-next", { week: w });
-    expect(copied.body.sessions.map((s) => [s.date, s.status])).toEqual([[addDaysTo(w, 7), "draft"], [addDaysTo(w, 9), "draft"]]);
+    expect(copied.body.sessions.map((s) => [s.date, s.status])).toEqual([
+      [addDaysTo(w, 7), "draft"],
+      [addDaysTo(w, 9), "draft"],
+    ]);
     expect(copied.body.sessions[0].blocks).toHaveLength(1);
 
     const cleared = await tool("clear", { week: w });
@@ -305,7 +472,10 @@ describe("deleting and the week tools", () => {
     const next = await tool("clear", { week: addDaysTo(w, 7) });
     expect(next.body.removedIds).toHaveLength(2);
     expect((await tool("publish", { week: "soon" })).body.error?.fields).toHaveProperty("week");
-    expect((await tools.POST(send(`/api/teams/${T}/plan/shred`, "POST", { week: w }), p({ teamId: T, tool: "shred" }))).status).toBe(404);
+    expect(
+      (await tools.POST(send(`/api/teams/${T}/plan/shred`, "POST", { week: w }), p({ teamId: T, tool: "shred" })))
+        .status,
+    ).toBe(404);
   });
 });
 
@@ -333,7 +503,9 @@ describe("reading the week and who may write", () => {
     const res = await getWeek();
     expect(res.status).toBe(200);
     expect(res.body.canEdit).toBe(false);
-    expect((await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: tue })).status).toBe(403);
+    expect((await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: tue })).status).toBe(
+      403,
+    );
     const s = res.body.athletes[0].sessions[0];
     expect((await patch(s.id, { version: s.version, date: thu })).status).toBe(403);
     expect((await tool("publish", { week })).status).toBe(403);
@@ -348,7 +520,10 @@ describe("reading the week and who may write", () => {
     expect(res.body.canEdit).toBe(false);
     expect(res.body.scope).toBe("own");
     const benSession = (await d.PlannedSession.findOne({ where: { athleteId: ben.athleteId! } }))!;
-    expect((await session.GET(new Request(url(`/api/sessions/${benSession.id}`)), p({ sessionId: String(benSession.id) }))).status).toBe(404);
+    expect(
+      (await session.GET(new Request(url(`/api/sessions/${benSession.id}`)), p({ sessionId: String(benSession.id) })))
+        .status,
+    ).toBe(404);
     expect((await del(benSession.id, benSession.version)).status).toBe(403);
   });
 
@@ -357,7 +532,9 @@ describe("reading the week and who may write", () => {
     expect((await getWeek()).status).toBe(404);
     const s = (await d.PlannedSession.findOne({ where: { teamId: a.teamId } }))!;
     expect((await patch(s.id, { version: s.version, date: thu })).status).toBe(404);
-    expect((await session.GET(new Request(url(`/api/sessions/${s.id}`)), p({ sessionId: String(s.id) }))).status).toBe(404);
+    expect((await session.GET(new Request(url(`/api/sessions/${s.id}`)), p({ sessionId: String(s.id) }))).status).toBe(
+      404,
+    );
     expect((await getWeek("", String(b.teamId))).status).toBe(200);
     as(null);
     expect((await getWeek()).status).toBe(401);

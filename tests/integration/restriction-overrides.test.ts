@@ -33,15 +33,51 @@ const ben = team.users["ben@guardclub.test"].athleteId!;
 // Next week, so every session is plan whatever today is. Ada: no max velocity from next Wednesday to Friday.
 const week = addDays(startOfWeek(teamToday({ timeZone: "Europe/London" }), 1), 7);
 const [mon, tue, wed, thu, sat] = [0, 1, 2, 3, 5].map((k) => addDays(week, k));
-const restriction = await d.Restriction.create({ teamId: team.teamId, athleteId: ada, rule: "no_kind", blockKinds: JSON.stringify(["max_velocity"]), limitValue: null, startsOn: wed, endsOn: addDays(week, 4), liftedOn: null, note: "Hamstring: no flying sprints", createdBy: physio, liftedBy: null });
-const flys = await d.BlockTemplate.create({ teamId: team.teamId, kind: "max_velocity", title: "Flying 30s", running: { sets: 1, reps: 4, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 }, drills: null, notes: null, durationMin: 50, plannedRpe: 7 });
+const restriction = await d.Restriction.create({
+  teamId: team.teamId,
+  athleteId: ada,
+  rule: "no_kind",
+  blockKinds: JSON.stringify(["max_velocity"]),
+  limitValue: null,
+  startsOn: wed,
+  endsOn: addDays(week, 4),
+  liftedOn: null,
+  note: "Hamstring: no flying sprints",
+  createdBy: physio,
+  liftedBy: null,
+});
+const flys = await d.BlockTemplate.create({
+  teamId: team.teamId,
+  kind: "max_velocity",
+  title: "Flying 30s",
+  running: { sets: 1, reps: 4, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 },
+  drills: null,
+  notes: null,
+  durationMin: 50,
+  plannedRpe: 7,
+});
 
 const p = <T>(v: T) => ({ params: Promise.resolve(v) });
-const send = (path: string, method: string, body: unknown) => new Request(`http://test${path}`, { method, headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-type Answer = { status: number; body: PlanWriteResult & { error?: { code: string; message: string; hits?: RestrictionHit[]; fields?: Record<string, string[]> } } };
-const json = async (res: Response): Promise<Answer> => ({ status: res.status, body: (await res.json()) as Answer["body"] });
-const create = (body: unknown) => sessions.POST(send(`/api/teams/${T}/sessions`, "POST", body), p({ teamId: T })).then(json);
-const patch = (id: number, body: unknown) => session.PATCH(send(`/api/sessions/${id}`, "PATCH", body), p({ sessionId: String(id) })).then(json);
+const send = (path: string, method: string, body: unknown) =>
+  new Request(`http://test${path}`, {
+    method,
+    headers: { "content-type": "application/json" },
+    body: JSON.stringify(body),
+  });
+type Answer = {
+  status: number;
+  body: PlanWriteResult & {
+    error?: { code: string; message: string; hits?: RestrictionHit[]; fields?: Record<string, string[]> };
+  };
+};
+const json = async (res: Response): Promise<Answer> => ({
+  status: res.status,
+  body: (await res.json()) as Answer["body"],
+});
+const create = (body: unknown) =>
+  sessions.POST(send(`/api/teams/${T}/sessions`, "POST", body), p({ teamId: T })).then(json);
+const patch = (id: number, body: unknown) =>
+  session.PATCH(send(`/api/sessions/${id}`, "PATCH", body), p({ sessionId: String(id) })).then(json);
 const sessionsOf = (athleteId: number) => d.PlannedSession.count({ where: { athleteId } });
 who.userId = coach;
 
@@ -51,7 +87,14 @@ describe("the restriction guard on plan writes", () => {
     const res = await create({ from: "template", templateId: flys.id, athleteId: ada, date: thu });
     expect(res.status).toBe(409);
     expect(res.body.error?.code).toBe("restricted");
-    expect(res.body.error?.hits).toEqual([expect.objectContaining({ restrictionId: restriction.id, athleteId: ada, date: thu, detail: "Flying 30s: max velocity" })]);
+    expect(res.body.error?.hits).toEqual([
+      expect.objectContaining({
+        restrictionId: restriction.id,
+        athleteId: ada,
+        date: thu,
+        detail: "Flying 30s: max velocity",
+      }),
+    ]);
     expect(res.body.error?.message).toMatch(/restriction from the medical staff/);
     expect(await sessionsOf(ada)).toBe(before);
     expect(await d.RestrictionOverride.count()).toBe(0);
@@ -63,27 +106,49 @@ describe("the restriction guard on plan writes", () => {
   });
 
   it("a reason too short is a 400 on override.reason", async () => {
-    const res = await create({ from: "template", templateId: flys.id, athleteId: ada, date: thu, override: { reason: "ok" } });
+    const res = await create({
+      from: "template",
+      templateId: flys.id,
+      athleteId: ada,
+      date: thu,
+      override: { reason: "ok" },
+    });
     expect(res.status).toBe(400);
     expect(res.body.error?.fields).toHaveProperty(["override.reason"]);
   });
 
   it("with a reason: saved, the override recorded, one alert, and one mail to the physio", async () => {
     const reason = "Cleared at this morning's check; flys capped at 20 m";
-    const res = await create({ from: "template", templateId: flys.id, athleteId: ada, date: thu, override: { reason } });
+    const res = await create({
+      from: "template",
+      templateId: flys.id,
+      athleteId: ada,
+      date: thu,
+      override: { reason },
+    });
     expect(res.status).toBe(201);
     const saved = res.body.sessions[0]!;
     const overrides = await d.RestrictionOverride.findAll({ where: { athleteId: ada } });
-    expect(overrides.map((o) => ({ restrictionId: o.restrictionId, sessionId: o.sessionId, sessionDate: o.sessionDate, reason: o.reason, userId: o.userId }))).toEqual([
-      { restrictionId: restriction.id, sessionId: saved.id, sessionDate: thu, reason, userId: coach },
-    ]);
-    const alerts = (await listAlerts({ teamId: team.teamId, userId: physio, query: { status: "all", limit: 50, athleteId: ada } })).filter((a) => a.kind === "restriction_override");
+    expect(
+      overrides.map((o) => ({
+        restrictionId: o.restrictionId,
+        sessionId: o.sessionId,
+        sessionDate: o.sessionDate,
+        reason: o.reason,
+        userId: o.userId,
+      })),
+    ).toEqual([{ restrictionId: restriction.id, sessionId: saved.id, sessionDate: thu, reason, userId: coach }]);
+    const alerts = (
+      await listAlerts({ teamId: team.teamId, userId: physio, query: { status: "all", limit: 50, athleteId: ada } })
+    ).filter((a) => a.kind === "restriction_override");
     expect(alerts).toHaveLength(1);
     expect(alerts[0]).toMatchObject({ status: "open", date: thu, basis: "planned" });
     expect(alerts[0]!.reason).toContain(reason);
 
     await n.worker.runOnce();
-    const mails = (await n.mailTo("physio@guardclub.test")).filter((m) => m.subject.startsWith("Restriction overridden"));
+    const mails = (await n.mailTo("physio@guardclub.test")).filter((m) =>
+      m.subject.startsWith("Restriction overridden"),
+    );
     expect(mails).toHaveLength(1);
     expect(mails[0]!.text).toContain(reason);
     expect(mails[0]!.text).toContain("No max velocity");
@@ -106,18 +171,52 @@ describe("the restriction guard on plan writes", () => {
   it("a week copy that lands in a restriction asks too, and goes through with a reason", async () => {
     // This week's Thursday flys for Ada, copied into next week's restricted Thursday.
     const thisThu = addDays(thu, -7);
-    await d.PlannedSession.create({ teamId: team.teamId, athleteId: ada, date: thisThu, startTime: "16:00", durationMin: 50, title: "Flys", plannedRpe: 7, status: "draft", notes: null, publishedAt: null })
-      .then((s) => d.SessionBlock.create({ sessionId: s.id, templateId: null, position: 0, kind: "max_velocity", title: "Flys", running: flys.running, drills: null, notes: null }));
-    const copy = (body: unknown) => tools.POST(send(`/api/teams/${T}/plan/copy-to-next`, "POST", body), p({ teamId: T, tool: "copy-to-next" })).then(json);
+    await d.PlannedSession.create({
+      teamId: team.teamId,
+      athleteId: ada,
+      date: thisThu,
+      startTime: "16:00",
+      durationMin: 50,
+      title: "Flys",
+      plannedRpe: 7,
+      status: "draft",
+      notes: null,
+      publishedAt: null,
+    }).then((s) =>
+      d.SessionBlock.create({
+        sessionId: s.id,
+        templateId: null,
+        position: 0,
+        kind: "max_velocity",
+        title: "Flys",
+        running: flys.running,
+        drills: null,
+        notes: null,
+      }),
+    );
+    const copy = (body: unknown) =>
+      tools
+        .POST(send(`/api/teams/${T}/plan/copy-to-next`, "POST", body), p({ teamId: T, tool: "copy-to-next" }))
+        .then(json);
     const refused = await copy({ week: thisThu });
     expect(refused.status).toBe(409);
     expect(refused.body.error?.code).toBe("restricted");
-    expect((await copy({ week: thisThu, override: { reason: "Planned with the physio: reduced volume" } })).status).toBe(200);
+    expect(
+      (await copy({ week: thisThu, override: { reason: "Planned with the physio: reduced volume" } })).status,
+    ).toBe(200);
   });
 
   it("the week the grid reads carries the athletes' restrictions", async () => {
     const res = await plan.GET(new Request(`http://test/api/teams/${T}/plan?week=${mon}`), p({ teamId: T }));
     const body = (await res.json()) as PlanWeek;
-    expect(body.restrictions).toEqual([expect.objectContaining({ id: restriction.id, athleteId: ada, rule: "no_kind", blockKinds: ["max_velocity"], note: "Hamstring: no flying sprints" })]);
+    expect(body.restrictions).toEqual([
+      expect.objectContaining({
+        id: restriction.id,
+        athleteId: ada,
+        rule: "no_kind",
+        blockKinds: ["max_velocity"],
+        note: "Hamstring: no flying sprints",
+      }),
+    ]);
   });
 });

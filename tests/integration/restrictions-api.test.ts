@@ -27,24 +27,52 @@ const bravoPhysio = b.users.physio;
 const today = teamToday({ timeZone: "Europe/London" });
 
 const p = <T>(v: T) => ({ params: Promise.resolve(v) });
-type Body = { restrictions?: Restriction[]; restriction?: Restriction; overrides?: Array<Record<string, unknown>>; error?: { code: string; fields?: Record<string, string[]> } };
+type Body = {
+  restrictions?: Restriction[];
+  restriction?: Restriction;
+  overrides?: Array<Record<string, unknown>>;
+  error?: { code: string; fields?: Record<string, string[]> };
+};
 async function json(res: Response) {
   return { status: res.status, body: (await res.json()) as Body };
 }
 const as = (userId: number | null) => {
   who.userId = userId;
 };
-const list = (athleteId: number) => athleteRoute.GET(new Request(`http://test/api/athletes/${athleteId}/restrictions`), p({ athleteId: String(athleteId) })).then(json);
+const list = (athleteId: number) =>
+  athleteRoute
+    .GET(new Request(`http://test/api/athletes/${athleteId}/restrictions`), p({ athleteId: String(athleteId) }))
+    .then(json);
 const create = (athleteId: number, body: unknown) =>
   athleteRoute
-    .POST(new Request(`http://test/api/athletes/${athleteId}/restrictions`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) }), p({ athleteId: String(athleteId) }))
+    .POST(
+      new Request(`http://test/api/athletes/${athleteId}/restrictions`, {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify(body),
+      }),
+      p({ athleteId: String(athleteId) }),
+    )
     .then(json);
 const lift = (restrictionId: number, body: unknown = { action: "lift" }) =>
   restrictionRoute
-    .PATCH(new Request(`http://test/api/restrictions/${restrictionId}`, { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify(body) }), p({ restrictionId: String(restrictionId) }))
+    .PATCH(
+      new Request(`http://test/api/restrictions/${restrictionId}`, {
+        method: "PATCH",
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify(body),
+      }),
+      p({ restrictionId: String(restrictionId) }),
+    )
     .then(json);
 
-const noMaxV = { rule: "no_kind", blockKinds: ["max_velocity"], startsOn: addDays(today, -2), endsOn: addDays(today, 10), note: "  Hamstring tightness; acceleration to 20 m is fine.  " };
+const noMaxV = {
+  rule: "no_kind",
+  blockKinds: ["max_velocity"],
+  startsOn: addDays(today, -2),
+  endsOn: addDays(today, 10),
+  note: "  Hamstring tightness; acceleration to 20 m is fine.  ",
+};
 
 beforeEach(() => as(null));
 
@@ -53,17 +81,36 @@ describe("POST /api/athletes/[athleteId]/restrictions", () => {
     as(physio.userId);
     const { status, body } = await create(ada.athleteId!, noMaxV);
     expect(status).toBe(201);
-    expect(body.restriction).toMatchObject({ athleteId: ada.athleteId, rule: "no_kind", blockKinds: ["max_velocity"], startsOn: noMaxV.startsOn, endsOn: noMaxV.endsOn, liftedOn: null, setByName: "Pia Physio" });
+    expect(body.restriction).toMatchObject({
+      athleteId: ada.athleteId,
+      rule: "no_kind",
+      blockKinds: ["max_velocity"],
+      startsOn: noMaxV.startsOn,
+      endsOn: noMaxV.endsOn,
+      liftedOn: null,
+      setByName: "Pia Physio",
+    });
     // The note is stored trimmed.
     expect(body.restriction!.note).toBe("Hamstring tightness; acceleration to 20 m is fine.");
   });
 
   it("stores each rule's limit", async () => {
     as(physio.userId);
-    const pct = await create(ada.athleteId!, { rule: "max_intensity", maxPct: 85, startsOn: today, note: "Ease back in." });
+    const pct = await create(ada.athleteId!, {
+      rule: "max_intensity",
+      maxPct: 85,
+      startsOn: today,
+      note: "Ease back in.",
+    });
     expect(pct.status).toBe(201);
     expect(pct.body.restriction).toMatchObject({ rule: "max_intensity", maxPct: 85, endsOn: null });
-    const cap = await create(ben.athleteId!, { rule: "contact_cap", maxContacts: 60, startsOn: today, endsOn: null, note: "Sore Achilles." });
+    const cap = await create(ben.athleteId!, {
+      rule: "contact_cap",
+      maxContacts: 60,
+      startsOn: today,
+      endsOn: null,
+      note: "Sore Achilles.",
+    });
     expect(cap.status).toBe(201);
     expect(cap.body.restriction).toMatchObject({ rule: "contact_cap", maxContacts: 60 });
   });
@@ -104,7 +151,13 @@ describe("POST /api/athletes/[athleteId]/restrictions", () => {
 describe("GET /api/athletes/[athleteId]/restrictions", () => {
   it("lists every restriction of the athlete, newest start first, to staff and to the athlete", async () => {
     as(physio.userId);
-    await create(ada.athleteId!, { rule: "contact_cap", maxContacts: 40, startsOn: addDays(today, -40), endsOn: addDays(today, -30), note: "Old knee niggle." });
+    await create(ada.athleteId!, {
+      rule: "contact_cap",
+      maxContacts: 40,
+      startsOn: addDays(today, -40),
+      endsOn: addDays(today, -30),
+      note: "Old knee niggle.",
+    });
     for (const user of [coach, head, physio, ada]) {
       as(user.userId);
       const { status, body } = await list(ada.athleteId!);
@@ -128,14 +181,35 @@ describe("GET /api/athletes/[athleteId]/restrictions", () => {
 
   it("shows coaches' overrides with what, why and who", async () => {
     as(physio.userId);
-    const { body } = await create(ben.athleteId!, { rule: "no_kind", blockKinds: ["plyometric"], startsOn: today, endsOn: addDays(today, 6), note: "Shin soreness." });
+    const { body } = await create(ben.athleteId!, {
+      rule: "no_kind",
+      blockKinds: ["plyometric"],
+      startsOn: today,
+      endsOn: addDays(today, 6),
+      note: "Shin soreness.",
+    });
     const r = body.restriction!;
-    await d.RestrictionOverride.create({ teamId: a.teamId, restrictionId: r.id, athleteId: ben.athleteId!, sessionId: null, sessionDate: addDays(today, 1), detail: "Pogo hops: plyometrics", reason: "Low pogos only, cleared on the phone", userId: coach.userId });
+    await d.RestrictionOverride.create({
+      teamId: a.teamId,
+      restrictionId: r.id,
+      athleteId: ben.athleteId!,
+      sessionId: null,
+      sessionDate: addDays(today, 1),
+      detail: "Pogo hops: plyometrics",
+      reason: "Low pogos only, cleared on the phone",
+      userId: coach.userId,
+    });
     as(coach.userId);
     const { status, body: listed } = await list(ben.athleteId!);
     expect(status).toBe(200);
     expect(listed.overrides).toHaveLength(1);
-    expect(listed.overrides![0]).toMatchObject({ restrictionId: r.id, sessionDate: addDays(today, 1), detail: "Pogo hops: plyometrics", reason: "Low pogos only, cleared on the phone", who: "Cato Coach" });
+    expect(listed.overrides![0]).toMatchObject({
+      restrictionId: r.id,
+      sessionDate: addDays(today, 1),
+      detail: "Pogo hops: plyometrics",
+      reason: "Low pogos only, cleared on the phone",
+      who: "Cato Coach",
+    });
     expect(listed.overrides![0].restriction).toMatch(/^No plyometrics, /);
     expect(typeof listed.overrides![0].createdAt).toBe("string");
     // Ada's list does not show Ben's overrides.
@@ -161,7 +235,13 @@ describe("PATCH /api/restrictions/[restrictionId]", () => {
   it("lifts one that has not begun on its first day, so it never applies", async () => {
     as(physio.userId);
     const startsOn = addDays(today, 5);
-    const { body } = await create(ada.athleteId!, { rule: "max_intensity", maxPct: 80, startsOn, endsOn: addDays(today, 9), note: "Planned easing." });
+    const { body } = await create(ada.athleteId!, {
+      rule: "max_intensity",
+      maxPct: 80,
+      startsOn,
+      endsOn: addDays(today, 9),
+      note: "Planned easing.",
+    });
     const { status, body: lifted } = await lift(body.restriction!.id);
     expect(status).toBe(200);
     expect(lifted.restriction!.liftedOn).toBe(startsOn);

@@ -13,14 +13,19 @@ const today = "2026-12-01"; // a Tuesday: the restriction starts in the previous
 const week = startOfWeek(today, 1);
 
 async function planSnapshot() {
-  const sessions = await d.PlannedSession.findAll({ include: [{ model: d.SessionBlock, as: "blocks" }], order: [["id", "ASC"]] });
+  const sessions = await d.PlannedSession.findAll({
+    include: [{ model: d.SessionBlock, as: "blocks" }],
+    order: [["id", "ASC"]],
+  });
   return sessions.map((s) => ({
     id: s.id,
     athleteId: s.athleteId,
     date: s.date,
     title: s.title,
     status: s.status,
-    blocks: (s.get("blocks") as InstanceType<typeof d.SessionBlock>[]).sort((x, y) => x.position - y.position).map((b) => ({ id: String(b.id), kind: b.kind, title: b.title, running: b.running, drills: b.drills })),
+    blocks: (s.get("blocks") as InstanceType<typeof d.SessionBlock>[])
+      .sort((x, y) => x.position - y.position)
+      .map((b) => ({ id: String(b.id), kind: b.kind, title: b.title, running: b.running, drills: b.drills })),
   }));
 }
 
@@ -36,7 +41,15 @@ describe("demo restrictions seed", () => {
   it("gives Dario one current no-max-velocity restriction from four days ago to the end of the week, set by the physio", () => {
     const current = restrictions.filter((r) => isActiveOn(r, today));
     expect(current).toHaveLength(1);
-    expect(current[0]).toMatchObject({ athleteId: dario, rule: "no_kind", blockKinds: ["max_velocity"], startsOn: addDays(today, -4), endsOn: addDays(week, 6), liftedOn: null, setByName: "Imogen Dervaux" });
+    expect(current[0]).toMatchObject({
+      athleteId: dario,
+      rule: "no_kind",
+      blockKinds: ["max_velocity"],
+      startsOn: addDays(today, -4),
+      endsOn: addDays(week, 6),
+      liftedOn: null,
+      setByName: "Imogen Dervaux",
+    });
     expect(current[0].note).toMatch(/hamstring/i);
   });
 

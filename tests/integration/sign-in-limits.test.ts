@@ -20,12 +20,18 @@ describe("sign-in limits", () => {
     expect(next).toMatchObject({ allowed: false });
     expect(next!.allowed === false && next!.retryAfterMs).toBeGreaterThan(14 * 60_000);
     // The counters are rows in the app's database, where a second process sees them too.
-    const [row] = (await d.sequelize.query("SELECT COUNT(*) AS n FROM sign_in_limits WHERE key LIKE 'account:%'"))[0] as { n: number }[];
+    const [row] = (
+      await d.sequelize.query("SELECT COUNT(*) AS n FROM sign_in_limits WHERE key LIKE 'account:%'")
+    )[0] as { n: number }[];
     expect(row!.n).toBeGreaterThan(0);
   });
 
   it("counts parallel attempts exactly", async () => {
-    const results = await Promise.all(Array.from({ length: 25 }, (_, i) => beginSignInAttempt({ email: "parallel@limits.test", address: `10.1.0.${i}` })));
+    const results = await Promise.all(
+      Array.from({ length: 25 }, (_, i) =>
+        beginSignInAttempt({ email: "parallel@limits.test", address: `10.1.0.${i}` }),
+      ),
+    );
     expect(results.filter((a) => a.allowed)).toHaveLength(ACCOUNT_ATTEMPTS);
   });
 
@@ -38,7 +44,11 @@ describe("sign-in limits", () => {
 
   it("block one address guessing many accounts", async () => {
     const address = "10.0.0.4";
-    const spread = await Promise.all(Array.from({ length: ADDRESS_ATTEMPTS }, (_, i) => beginSignInAttempt({ email: `user${i}@limits.test`, address })));
+    const spread = await Promise.all(
+      Array.from({ length: ADDRESS_ATTEMPTS }, (_, i) =>
+        beginSignInAttempt({ email: `user${i}@limits.test`, address }),
+      ),
+    );
     expect(spread.every((a) => a.allowed)).toBe(true);
     expect((await beginSignInAttempt({ email: "another@limits.test", address })).allowed).toBe(false);
     expect((await beginSignInAttempt({ email: null, address })).allowed).toBe(false);
@@ -52,11 +62,18 @@ describe("sign-in limits", () => {
         other.configure("busyTimeout", timeoutMs);
         other.exec(sql, (err) => resolve(err));
       });
-    await Promise.all(Array.from({ length: 50 }, (_, i) => beginSignInAttempt({ email: "burst@limits.test", address: `10.2.0.${i % 3}` })));
+    await Promise.all(
+      Array.from({ length: 50 }, (_, i) =>
+        beginSignInAttempt({ email: "burst@limits.test", address: `10.2.0.${i % 3}` }),
+      ),
+    );
     expect(await exec("BEGIN IMMEDIATE; COMMIT;", 500)).toBeNull();
     // Another process holds the write lock past the limiter's short wait: attempts are still answered...
     expect(await exec("BEGIN IMMEDIATE", 500)).toBeNull();
-    const during = await Promise.all([beginSignInAttempt({ email: "locked@limits.test", address: "10.3.0.1" }), beginSignInAttempt({ email: "locked@limits.test", address: "10.3.0.2" })]);
+    const during = await Promise.all([
+      beginSignInAttempt({ email: "locked@limits.test", address: "10.3.0.1" }),
+      beginSignInAttempt({ email: "locked@limits.test", address: "10.3.0.2" }),
+    ]);
     expect(during.every((a) => a.allowed)).toBe(true);
     expect(await exec("COMMIT", 500)).toBeNull();
     // ...and the limiter's connection is not left inside a transaction afterwards.

@@ -11,7 +11,9 @@ export async function forgotPasswordAction(input: ForgotPasswordInput) {
     const { email } = forgotPasswordSchema.parse(input);
     // The account lookup, the link and the mail run after the answer is sent, so a known address and an unknown
     // one answer in the same time (the work differs, the answer does not wait for it).
-    after(() => requestPasswordReset({ email }).catch((err: unknown) => console.error("password reset request failed", err)));
+    after(() =>
+      requestPasswordReset({ email }).catch((err: unknown) => console.error("password reset request failed", err)),
+    );
     return { sent: true };
   });
 }

@@ -16,7 +16,9 @@ export async function setPasswordAction(input: SetPasswordInput) {
   });
 }
 
-const tokenSchema = z.object({ token: z.string().min(20, "This link is not valid").max(200, "This link is not valid") });
+const tokenSchema = z.object({
+  token: z.string().min(20, "This link is not valid").max(200, "This link is not valid"),
+});
 
 /** An existing account accepts an invitation: the token and the signed-in owner of the invited account, both. */
 export async function joinTeamAction(input: { token: string }) {

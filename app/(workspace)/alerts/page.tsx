@@ -11,7 +11,10 @@ export default async function AlertsPage() {
   const viewer = await pageViewer("alerts:view");
   return (
     <>
-      <PageHeader title="Alerts" lead="Load flags raised by the plan (ahead of time) or by what athletes logged. One alert per athlete, flag and week." />
+      <PageHeader
+        title="Alerts"
+        lead="Load flags raised by the plan (ahead of time) or by what athletes logged. One alert per athlete, flag and week."
+      />
       <LoadCaution className="mb-5" />
       <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
         <AlertInbox canManage={can(viewer.role, "alerts:manage", "team")} />

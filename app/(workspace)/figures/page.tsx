@@ -1,8 +1,23 @@
 import { FigureSection } from "@/components/figures/figure-section";
-import { MissingLogFigures, MonotonyFlagFigures, PlyoDoseFigures, RecoveryWorkFigures, SpeedZoneFigures, StartFigures } from "@/components/figures/model-figures";
+import {
+  MissingLogFigures,
+  MonotonyFlagFigures,
+  PlyoDoseFigures,
+  RecoveryWorkFigures,
+  SpeedZoneFigures,
+  StartFigures,
+} from "@/components/figures/model-figures";
 import { AcwrFigures, ProvisionalFigures, SeriesFigures, ZoneFigures } from "@/components/figures/ratio-figures";
 import { TeamThresholds } from "@/components/figures/team-thresholds";
-import { ContactFigures, LogFigures, MonotonyFigures, RecoveryFigures, RunningFigures, SrpeFigures, WeeklyChangeFigures } from "@/components/figures/volume-figures";
+import {
+  ContactFigures,
+  LogFigures,
+  MonotonyFigures,
+  RecoveryFigures,
+  RunningFigures,
+  SrpeFigures,
+  WeeklyChangeFigures,
+} from "@/components/figures/volume-figures";
 import { PageHeader } from "@/components/ui/card";
 import { LoadCaution } from "@/components/ui/caution";
 import { pageViewer } from "@/lib/auth/page-access";

@@ -14,15 +14,19 @@ export default async function MailboxPage() {
   if (!isFakeMailbox()) notFound();
   const viewer = await pageViewer("mailbox:view", "own");
   const queue = canSeeDeliveryQueue(viewer);
-  const [mails, outbox] = await Promise.all([listViewerMail({ viewer, limit: 200 }), queue ? listDeliveryQueue({ teamId: viewer.teamId, limit: 30 }) : null]);
+  const [mails, outbox] = await Promise.all([
+    listViewerMail({ viewer, limit: 200 }),
+    queue ? listDeliveryQueue({ teamId: viewer.teamId, limit: 30 }) : null,
+  ]);
   return (
     <>
       <PageHeader
         title="Mailbox"
         lead={
           <span data-testid="mailbox-local-note">
-            This screen exists only while mail stays on this machine: the app sends to a local test mail server, not to real inboxes. You see
-            the mail sent to {viewer.email} and nobody else&apos;s. Once a real mail server is set up, this screen goes away.
+            This screen exists only while mail stays on this machine: the app sends to a local test mail server, not to
+            real inboxes. You see the mail sent to {viewer.email} and nobody else&apos;s. Once a real mail server is set
+            up, this screen goes away.
           </span>
         }
       />

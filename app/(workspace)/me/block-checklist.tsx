@@ -15,7 +15,10 @@ export function countableBlocks(blocks: readonly BlockInput[]): { id: string; ti
 }
 
 /** Pre-filled from the plan (every block done in full), or from a saved log's per-block reps. */
-export function initialDone(blocks: readonly BlockInput[], logged: Record<string, number> | null | undefined): Record<string, BlockDone> {
+export function initialDone(
+  blocks: readonly BlockInput[],
+  logged: Record<string, number> | null | undefined,
+): Record<string, BlockDone> {
   const out: Record<string, BlockDone> = {};
   for (const b of countableBlocks(blocks)) {
     const reps = logged && Object.prototype.hasOwnProperty.call(logged, b.id) ? logged[b.id] : b.prescribed;
@@ -32,7 +35,19 @@ export function completedRepsOf(done: Record<string, BlockDone>): Record<string,
 }
 
 /** Tick the blocks done and, where fewer reps were run, say how many (phone-sized targets). */
-export function BlockChecklist({ sessionId, blocks, done, onChange, errors }: { sessionId: number; blocks: readonly BlockInput[]; done: Record<string, BlockDone>; onChange: (next: Record<string, BlockDone>) => void; errors: Record<string, string> }) {
+export function BlockChecklist({
+  sessionId,
+  blocks,
+  done,
+  onChange,
+  errors,
+}: {
+  sessionId: number;
+  blocks: readonly BlockInput[];
+  done: Record<string, BlockDone>;
+  onChange: (next: Record<string, BlockDone>) => void;
+  errors: Record<string, string>;
+}) {
   const list = countableBlocks(blocks);
   if (list.length === 0) return null;
   const set = (id: string, patch: Partial<BlockDone>) => onChange({ ...done, [id]: { ...done[id], ...patch } });
@@ -46,20 +61,46 @@ export function BlockChecklist({ sessionId, blocks, done, onChange, errors }: { 
           const repsId = `log-${sessionId}-reps-${b.id}`;
           const error = errors[`completedReps.${b.id}`];
           return (
-            <li key={b.id} className="rounded-lg bg-paper-raised px-3 py-2 ring-1 ring-inset ring-ink-200" data-testid="log-block" data-block-id={b.id}>
+            <li
+              key={b.id}
+              className="rounded-lg bg-paper-raised px-3 py-2 ring-1 ring-ink-200 ring-inset"
+              data-testid="log-block"
+              data-block-id={b.id}
+            >
               <div className="flex items-center gap-3">
                 <label className="flex min-h-11 flex-1 cursor-pointer items-center gap-2 text-sm text-ink-800">
-                  <input type="checkbox" checked={d.ticked} onChange={(e) => set(b.id, { ticked: e.target.checked })} className="h-5 w-5 accent-lane-600" data-testid="log-block-done" />
+                  <input
+                    type="checkbox"
+                    checked={d.ticked}
+                    onChange={(e) => set(b.id, { ticked: e.target.checked })}
+                    className="h-5 w-5 accent-lane-600"
+                    data-testid="log-block-done"
+                  />
                   {b.title}
                 </label>
                 {d.ticked ? (
                   <label htmlFor={repsId} className="flex items-center gap-1 text-xs text-ink-600">
-                    <Input id={repsId} type="number" inputMode="numeric" min={0} max={b.prescribed * 2} value={Number.isFinite(d.reps) ? d.reps : ""} onChange={(e) => set(b.id, { reps: e.target.value === "" ? Number.NaN : Number(e.target.value) })} aria-invalid={Boolean(error)} className="w-16 text-right" data-testid="log-block-reps" />
+                    <Input
+                      id={repsId}
+                      type="number"
+                      inputMode="numeric"
+                      min={0}
+                      max={b.prescribed * 2}
+                      value={Number.isFinite(d.reps) ? d.reps : ""}
+                      onChange={(e) => set(b.id, { reps: e.target.value === "" ? Number.NaN : Number(e.target.value) })}
+                      aria-invalid={Boolean(error)}
+                      className="w-16 text-right"
+                      data-testid="log-block-reps"
+                    />
                     of {b.prescribed} reps
                   </label>
                 ) : null}
               </div>
-              {error ? <p role="alert" className="mt-1 text-xs font-medium text-flag-spike">{error}</p> : null}
+              {error ? (
+                <p role="alert" className="mt-1 text-xs font-medium text-flag-spike">
+                  {error}
+                </p>
+              ) : null}
             </li>
           );
         })}

@@ -11,11 +11,23 @@ import { SessionCard } from "./session-card";
 export const metadata = { title: "My training" };
 export const dynamic = "force-dynamic";
 
-function Week({ title, from, sessions, today, testId }: { title: string; from: string; sessions: AthleteSession[]; today: string; testId: string }) {
+function Week({
+  title,
+  from,
+  sessions,
+  today,
+  testId,
+}: {
+  title: string;
+  from: string;
+  sessions: AthleteSession[];
+  today: string;
+  testId: string;
+}) {
   return (
     <section data-testid={testId}>
-      <h2 className="mb-2 text-sm font-semibold uppercase tracking-wider text-ink-500">
-        {title} <span className="font-normal normal-case tracking-normal">· from {formatDayShort(from)}</span>
+      <h2 className="mb-2 text-sm font-semibold tracking-wider text-ink-500 uppercase">
+        {title} <span className="font-normal tracking-normal normal-case">· from {formatDayShort(from)}</span>
       </h2>
       {sessions.length === 0 ? (
         <EmptyState title="No sessions published yet">Your coach&apos;s plan shows up here once it is sent.</EmptyState>
@@ -36,7 +48,9 @@ export default async function MyTrainingPage() {
     return (
       <>
         <PageHeader title="My training" />
-        <EmptyState title="This screen is for athletes">Your account has no athlete profile in {viewer.teamName}. Plans are on the week plan screen.</EmptyState>
+        <EmptyState title="This screen is for athletes">
+          Your account has no athlete profile in {viewer.teamName}. Plans are on the week plan screen.
+        </EmptyState>
       </>
     );
   }
@@ -44,17 +58,37 @@ export default async function MyTrainingPage() {
   const thisWeek = startOfWeek(today, engineWeekStartDay(viewer.weekStartDay));
   const nextWeek = addDays(thisWeek, 7);
   const [sessions, feed] = await Promise.all([
-    listAthleteSessions({ teamId: viewer.teamId, athleteId: viewer.athleteId, from: thisWeek, to: addDays(nextWeek, 6) }),
+    listAthleteSessions({
+      teamId: viewer.teamId,
+      athleteId: viewer.athleteId,
+      from: thisWeek,
+      to: addDays(nextWeek, 6),
+    }),
     getCalendarFeedStatus({ athleteId: viewer.athleteId }),
   ]);
   return (
     <>
-      <PageHeader title="My training" lead="This week and next, as your coach published them. Log each session after you did it." />
+      <PageHeader
+        title="My training"
+        lead="This week and next, as your coach published them. Log each session after you did it."
+      />
       <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
         <div className="space-y-6">
           <MyRestrictions teamId={viewer.teamId} athleteId={viewer.athleteId} today={today} />
-          <Week title="This week" from={thisWeek} sessions={sessions.filter((s) => s.date < nextWeek)} today={today} testId="week-this" />
-          <Week title="Next week" from={nextWeek} sessions={sessions.filter((s) => s.date >= nextWeek)} today={today} testId="week-next" />
+          <Week
+            title="This week"
+            from={thisWeek}
+            sessions={sessions.filter((s) => s.date < nextWeek)}
+            today={today}
+            testId="week-this"
+          />
+          <Week
+            title="Next week"
+            from={nextWeek}
+            sessions={sessions.filter((s) => s.date >= nextWeek)}
+            today={today}
+            testId="week-next"
+          />
         </div>
         <aside>
           <FeedCard athleteId={viewer.athleteId} initial={feed} />

@@ -15,13 +15,20 @@ export function SessionCard({ session, today }: { session: AthleteSession; today
   const isToday = session.date === today;
   const canLog = !cancelled && session.date <= today;
   return (
-    <Card id={`session-${session.id}`} className={`p-4 sm:p-5 ${cancelled ? "opacity-60" : ""}`} data-testid="my-session" data-session-id={session.id}>
+    <Card
+      id={`session-${session.id}`}
+      className={`p-4 sm:p-5 ${cancelled ? "opacity-60" : ""}`}
+      data-testid="my-session"
+      data-session-id={session.id}
+    >
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div>
-          <p className="text-xs font-semibold uppercase tracking-wider text-ink-500">
+          <p className="text-xs font-semibold tracking-wider text-ink-500 uppercase">
             {formatDayShort(session.date)} · {session.startTime} · {formatMinutes(session.durationMin)}
           </p>
-          <h3 className={`mt-0.5 text-lg font-semibold text-ink-950 ${cancelled ? "line-through" : ""}`}>{sessionHeadline(session)}</h3>
+          <h3 className={`mt-0.5 text-lg font-semibold text-ink-950 ${cancelled ? "line-through" : ""}`}>
+            {sessionHeadline(session)}
+          </h3>
         </div>
         <div className="flex gap-1">
           {isToday ? <Badge tone="lane">Today</Badge> : null}
@@ -40,7 +47,11 @@ export function SessionCard({ session, today }: { session: AthleteSession; today
           </li>
         ))}
       </ul>
-      {session.notes?.trim() ? <p className="mt-3 rounded-lg bg-paper-sunk px-3 py-2 text-sm text-ink-700">Coach&apos;s notes: {session.notes}</p> : null}
+      {session.notes?.trim() ? (
+        <p className="mt-3 rounded-lg bg-paper-sunk px-3 py-2 text-sm text-ink-700">
+          Coach&apos;s notes: {session.notes}
+        </p>
+      ) : null}
       <p className="mt-2 text-xs text-ink-500">Planned effort: RPE {session.plannedRpe} of 10</p>
       {session.log ? (
         <p className="mt-3 text-sm text-ink-700" data-testid="my-log-summary">
@@ -50,7 +61,12 @@ export function SessionCard({ session, today }: { session: AthleteSession; today
         </p>
       ) : null}
       {canLog ? (
-        <SessionLogForm sessionId={session.sessionId} plannedMinutes={session.durationMin} blocks={session.blocks} log={session.log} />
+        <SessionLogForm
+          sessionId={session.sessionId}
+          plannedMinutes={session.durationMin}
+          blocks={session.blocks}
+          log={session.log}
+        />
       ) : !cancelled ? (
         <p className="mt-3 text-xs text-ink-500">You can log this session from {formatDayShort(session.date)}.</p>
       ) : null}

@@ -13,23 +13,49 @@ import { LOG_COMPLETIONS, sessionLogSchema, type SessionLogInput } from "@/lib/v
 import { BlockChecklist, completedRepsOf, initialDone, type BlockDone } from "./block-checklist";
 
 type FormValues = z.input<typeof sessionLogSchema>;
-type Log = { completion: SessionLogInput["completion"]; rpe: number | null; minutes: number | null; completedReps?: Record<string, number> | null; notes: string | null };
+type Log = {
+  completion: SessionLogInput["completion"];
+  rpe: number | null;
+  minutes: number | null;
+  completedReps?: Record<string, number> | null;
+  notes: string | null;
+};
 
-const COMPLETION_LABEL: Record<(typeof LOG_COMPLETIONS)[number], string> = { yes: "Did it all", partly: "Did part of it", no: "Did not train" };
+const COMPLETION_LABEL: Record<(typeof LOG_COMPLETIONS)[number], string> = {
+  yes: "Did it all",
+  partly: "Did part of it",
+  no: "Did not train",
+};
 const blankToNull = (v: unknown) => (v === "" || v === null || v === undefined ? null : Number(v));
 
 /**
  * What the athlete did in one session: completion, the blocks (and reps) done when only part of it was done,
  * session RPE (CR-10), minutes and a note. Per-block reps replace the engine's "half of every block" default.
  */
-export function SessionLogForm({ sessionId, plannedMinutes, blocks = [], log }: { sessionId: number; plannedMinutes: number; blocks?: readonly BlockInput[]; log: Log | null }) {
+export function SessionLogForm({
+  sessionId,
+  plannedMinutes,
+  blocks = [],
+  log,
+}: {
+  sessionId: number;
+  plannedMinutes: number;
+  blocks?: readonly BlockInput[];
+  log: Log | null;
+}) {
   const router = useRouter();
   const [saved, setSaved] = useState<string | null>(null);
   const [done, setDone] = useState<Record<string, BlockDone>>(() => initialDone(blocks, log?.completedReps));
   const [blockErrors, setBlockErrors] = useState<Record<string, string>>({});
   const { register, handleSubmit, setError, formState, control } = useForm<FormValues, unknown, SessionLogInput>({
     resolver: zodResolver(sessionLogSchema),
-    defaultValues: { completion: log?.completion ?? "yes", rpe: log?.rpe ?? null, minutes: log?.minutes ?? plannedMinutes, completedReps: null, notes: log?.notes ?? null },
+    defaultValues: {
+      completion: log?.completion ?? "yes",
+      rpe: log?.rpe ?? null,
+      minutes: log?.minutes ?? plannedMinutes,
+      completedReps: null,
+      notes: log?.notes ?? null,
+    },
   });
   const errors = formState.errors;
   const completion = useWatch({ control, name: "completion" });
@@ -40,7 +66,9 @@ export function SessionLogForm({ sessionId, plannedMinutes, blocks = [], log }: 
     setSaved(null);
     setBlockErrors({});
     const partly = values.completion === "partly" ? { completedReps: completedRepsOf(done) } : { completedReps: null };
-    const body: SessionLogInput = didNotTrain ? { ...values, rpe: values.rpe ?? 0, minutes: null } : { ...values, ...partly };
+    const body: SessionLogInput = didNotTrain
+      ? { ...values, rpe: values.rpe ?? 0, minutes: null }
+      : { ...values, ...partly };
     try {
       await sendJson(`/api/sessions/${sessionId}/log`, "PUT", body);
       setSaved("Saved. Thank you!");
@@ -48,41 +76,97 @@ export function SessionLogForm({ sessionId, plannedMinutes, blocks = [], log }: 
     } catch (err) {
       if (err instanceof ApiError) {
         for (const [field, messages] of Object.entries(err.fields)) {
-          if (field === "completion" || field === "rpe" || field === "minutes" || field === "notes") setError(field, { message: messages[0] });
+          if (field === "completion" || field === "rpe" || field === "minutes" || field === "notes")
+            setError(field, { message: messages[0] });
         }
-        setBlockErrors(Object.fromEntries(Object.entries(err.fields).filter(([f]) => f.startsWith("completedReps")).map(([f, m]) => [f, m[0]])));
+        setBlockErrors(
+          Object.fromEntries(
+            Object.entries(err.fields)
+              .filter(([f]) => f.startsWith("completedReps"))
+              .map(([f, m]) => [f, m[0]]),
+          ),
+        );
         setSaved(err.message);
       } else setSaved("Could not save; check your connection and try again.");
     }
   });
 
   return (
-    <form onSubmit={submit} className="mt-4 space-y-4 rounded-lg bg-paper-sunk p-3 sm:p-4" data-testid="log-form" noValidate>
+    <form
+      onSubmit={submit}
+      className="mt-4 space-y-4 rounded-lg bg-paper-sunk p-3 sm:p-4"
+      data-testid="log-form"
+      noValidate
+    >
       <fieldset>
         <legend className="text-sm font-medium text-ink-800">How did it go?</legend>
         <div className="mt-2 grid gap-2 sm:grid-cols-3">
           {LOG_COMPLETIONS.map((c) => (
-            <label key={c} className="flex cursor-pointer items-center gap-2 rounded-lg bg-paper-raised px-3 py-3 text-sm ring-1 ring-inset ring-ink-200 has-[:checked]:ring-2 has-[:checked]:ring-lane-500">
-              <input type="radio" value={c} {...register("completion")} className="accent-lane-600" data-testid={`log-completion-${c}`} />
+            <label
+              key={c}
+              className="flex cursor-pointer items-center gap-2 rounded-lg bg-paper-raised px-3 py-3 text-sm ring-1 ring-ink-200 ring-inset has-[:checked]:ring-2 has-[:checked]:ring-lane-500"
+            >
+              <input
+                type="radio"
+                value={c}
+                {...register("completion")}
+                className="accent-lane-600"
+                data-testid={`log-completion-${c}`}
+              />
               {COMPLETION_LABEL[c]}
             </label>
           ))}
         </div>
-        {errors.completion ? <p role="alert" className="mt-1 text-xs font-medium text-flag-spike">{errors.completion.message}</p> : null}
+        {errors.completion ? (
+          <p role="alert" className="mt-1 text-xs font-medium text-flag-spike">
+            {errors.completion.message}
+          </p>
+        ) : null}
       </fieldset>
-      {completion === "partly" ? <BlockChecklist sessionId={sessionId} blocks={blocks} done={done} onChange={setDone} errors={blockErrors} /> : null}
+      {completion === "partly" ? (
+        <BlockChecklist sessionId={sessionId} blocks={blocks} done={done} onChange={setDone} errors={blockErrors} />
+      ) : null}
       {didNotTrain ? null : (
         <div className="grid grid-cols-2 gap-3">
-          <Field label="Effort (RPE 0–10)" htmlFor={id("rpe")} error={errors.rpe?.message} hint="How hard the whole session felt, about 30 min after.">
-            <Input id={id("rpe")} type="number" inputMode="decimal" min={0} max={10} step={0.5} aria-invalid={Boolean(errors.rpe)} {...register("rpe", { setValueAs: blankToNull })} data-testid="log-rpe" />
+          <Field
+            label="Effort (RPE 0–10)"
+            htmlFor={id("rpe")}
+            error={errors.rpe?.message}
+            hint="How hard the whole session felt, about 30 min after."
+          >
+            <Input
+              id={id("rpe")}
+              type="number"
+              inputMode="decimal"
+              min={0}
+              max={10}
+              step={0.5}
+              aria-invalid={Boolean(errors.rpe)}
+              {...register("rpe", { setValueAs: blankToNull })}
+              data-testid="log-rpe"
+            />
           </Field>
           <Field label="Minutes" htmlFor={id("minutes")} error={errors.minutes?.message}>
-            <Input id={id("minutes")} type="number" inputMode="numeric" min={1} max={600} aria-invalid={Boolean(errors.minutes)} {...register("minutes", { setValueAs: blankToNull })} data-testid="log-minutes" />
+            <Input
+              id={id("minutes")}
+              type="number"
+              inputMode="numeric"
+              min={1}
+              max={600}
+              aria-invalid={Boolean(errors.minutes)}
+              {...register("minutes", { setValueAs: blankToNull })}
+              data-testid="log-minutes"
+            />
           </Field>
         </div>
       )}
       <Field label="Anything to tell your coach? (optional)" htmlFor={id("notes")} error={errors.notes?.message}>
-        <Textarea id={id("notes")} rows={2} {...register("notes", { setValueAs: (v: unknown) => (typeof v === "string" && v.trim() ? v : null) })} data-testid="log-notes" />
+        <Textarea
+          id={id("notes")}
+          rows={2}
+          {...register("notes", { setValueAs: (v: unknown) => (typeof v === "string" && v.trim() ? v : null) })}
+          data-testid="log-notes"
+        />
       </Field>
       <div className="flex items-center gap-3">
         <Button type="submit" disabled={formState.isSubmitting} className="w-full sm:w-auto" data-testid="log-save">

@@ -9,11 +9,19 @@ import { weekQuerySchema } from "@/lib/validations/plan";
 export const metadata = { title: "Week plan" };
 
 /** The coach's week grid; physios read it, an athlete sees only their own row. */
-export default async function PlanPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function PlanPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const viewer = await pageViewer("plan:view", "own");
   const scope = scopeOf(viewer.role, "plan:view") === "team" ? "team" : "own";
   if (scope === "own" && viewer.athleteId === null) {
-    return <EmptyState title="No athlete profile is linked to your account">Ask your coach to link it; your sessions will show here.</EmptyState>;
+    return (
+      <EmptyState title="No athlete profile is linked to your account">
+        Ask your coach to link it; your sessions will show here.
+      </EmptyState>
+    );
   }
   const query = weekQuerySchema.safeParse({ week: (await searchParams).week });
   const today = teamToday({ timeZone: viewer.timeZone });

@@ -17,7 +17,10 @@ export async function saveAthleteAction(athleteId: number | null, input: Athlete
       revalidatePath("/squad");
       return created;
     }
-    const viewer = await requireAthlete({ athleteId: z.number().int().positive().parse(athleteId), can: "athletes:edit" });
+    const viewer = await requireAthlete({
+      athleteId: z.number().int().positive().parse(athleteId),
+      can: "athletes:edit",
+    });
     const updated = await updateAthlete({ teamId: viewer.teamId, athleteId: viewer.athlete.id, input: parsed });
     revalidatePath("/squad");
     revalidatePath(`/squad/${athleteId}`);

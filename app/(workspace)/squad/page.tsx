@@ -30,12 +30,14 @@ export default async function SquadPage() {
           ) : null
         }
       />
-      {squad.length === 0 ? <EmptyState title="No athletes yet">Add athletes from the members screen.</EmptyState> : null}
+      {squad.length === 0 ? (
+        <EmptyState title="No athletes yet">Add athletes from the members screen.</EmptyState>
+      ) : null}
       <div className="space-y-6" data-testid="squad-list">
         {[...groups.entries()].map(([group, athletes]) => (
           <section key={group}>
-            <h2 className="mb-2 text-sm font-semibold uppercase tracking-wider text-ink-500">
-              {group} <span className="font-normal normal-case tracking-normal">· {athletes.length}</span>
+            <h2 className="mb-2 text-sm font-semibold tracking-wider text-ink-500 uppercase">
+              {group} <span className="font-normal tracking-normal normal-case">· {athletes.length}</span>
             </h2>
             <Card className="overflow-x-auto">
               <table className="w-full min-w-[40rem] table-fixed text-sm">
@@ -60,8 +62,12 @@ export default async function SquadPage() {
                       </td>
                       <td className="px-4 py-2.5 tabular-nums">{formatSpeed(a.vmaxMs)}</td>
                       <td className="px-4 py-2.5 tabular-nums">{a.tauS ? `${a.tauS.toFixed(2)} s` : "–"}</td>
-                      <td className="px-4 py-2.5 tabular-nums">{a.stepLengthM ? `${a.stepLengthM.toFixed(2)} m` : "–"}</td>
-                      <td className="px-4 py-2.5 tabular-nums">{a.bodyMassKg ? `${a.bodyMassKg.toFixed(1)} kg` : "–"}</td>
+                      <td className="px-4 py-2.5 tabular-nums">
+                        {a.stepLengthM ? `${a.stepLengthM.toFixed(2)} m` : "–"}
+                      </td>
+                      <td className="px-4 py-2.5 tabular-nums">
+                        {a.bodyMassKg ? `${a.bodyMassKg.toFixed(1)} kg` : "–"}
+                      </td>
                       <td className="px-4 py-2.5">{PLYO_LEVEL_LABEL[a.plyoLevel]}</td>
                     </tr>
                   ))}

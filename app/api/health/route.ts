@@ -11,7 +11,10 @@ export async function GET() {
   try {
     const state = await databaseState({ sequelize: (await db()).sequelize, storage: databaseStorage() });
     if (state === "ok") return Response.json({ ok: true, db: "ok" });
-    return Response.json({ ok: false, db: state }, { status: 503, headers: state === "busy" ? { "Retry-After": String(RETRY_AFTER_S) } : {} });
+    return Response.json(
+      { ok: false, db: state },
+      { status: 503, headers: state === "busy" ? { "Retry-After": String(RETRY_AFTER_S) } : {} },
+    );
   } catch {
     return Response.json({ ok: false, db: "down" }, { status: 503 });
   }

@@ -8,7 +8,12 @@ export const runtime = "nodejs";
 export const dynamic = "force-dynamic";
 
 const querySchema = z.object({
-  to: z.string().trim().toLowerCase().pipe(z.email({ error: "Give an e-mail address" })).optional(),
+  to: z
+    .string()
+    .trim()
+    .toLowerCase()
+    .pipe(z.email({ error: "Give an e-mail address" }))
+    .optional(),
   limit: z.coerce.number().int().min(1).max(500).default(200),
 });
 
@@ -17,7 +22,9 @@ export const GET = route(async (req) => {
   const viewer = await requireMailbox();
   const { to, limit } = parseQuery(req, querySchema);
   if (to !== undefined && to !== viewer.email.toLowerCase()) {
-    throw new AppError("forbidden", "You can read only the mail sent to your own address", { fields: { to: ["Only your own address"] } });
+    throw new AppError("forbidden", "You can read only the mail sent to your own address", {
+      fields: { to: ["Only your own address"] },
+    });
   }
   return Response.json({ mails: await listViewerMail({ viewer, limit }) });
 });

@@ -44,7 +44,10 @@ describe("password rule", () => {
   });
 
   it("names the problem", () => {
-    const issues = (p: string) => passwordFor(email).safeParse(p).error?.issues.map((i) => i.message) ?? [];
+    const issues = (p: string) =>
+      passwordFor(email)
+        .safeParse(p)
+        .error?.issues.map((i) => i.message) ?? [];
     expect(issues(" ".repeat(10))).toContain("Use at least 12 characters");
     expect(issues(" ".repeat(12))).toContain("A password cannot be only spaces");
     expect(issues("password1234")).toContain("This password is too common; choose a less predictable one");
@@ -54,7 +57,8 @@ describe("password rule", () => {
   it("ships a list of common passwords with the app", () => {
     expect(COMMON_PASSWORDS.size).toBeGreaterThan(1000);
     // The top of every published ranking (from memory): these must be in it.
-    for (const p of ["123456", "password", "qwerty", "iloveyou", "1qaz2wsx3edc"]) expect(COMMON_PASSWORDS.has(p), p).toBe(true);
+    for (const p of ["123456", "password", "qwerty", "iloveyou", "1qaz2wsx3edc"])
+      expect(COMMON_PASSWORDS.has(p), p).toBe(true);
     expect(passwordSchema.safeParse("1qaz2wsx3edc").success).toBe(false);
   });
 

@@ -41,7 +41,11 @@ describe("navigation", () => {
     expect(hrefs).toContain("/members");
     expect(hrefs).toContain("/settings");
     expect(hrefs).not.toContain("/me");
-    expect(navFor("head_coach").filter((n) => n.href === "/load").map((n) => n.label)).toEqual(["Squad load"]);
+    expect(
+      navFor("head_coach")
+        .filter((n) => n.href === "/load")
+        .map((n) => n.label),
+    ).toEqual(["Squad load"]);
   });
 
   it("shows the physio load and alerts but not members", () => {

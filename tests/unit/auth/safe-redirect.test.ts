@@ -56,7 +56,8 @@ describe("safeCallbackPath", () => {
   });
 
   it("falls back for anything that is not one string", () => {
-    for (const raw of [undefined, null, "", ["/plan", "//evil.test"], 42, "/" + "a".repeat(3000)]) expect(safe(raw)).toBe("/home");
+    for (const raw of [undefined, null, "", ["/plan", "//evil.test"], 42, "/" + "a".repeat(3000)])
+      expect(safe(raw)).toBe("/home");
     expect(safeCallbackPath("//evil.test", { origin, fallback: "/" })).toBe("/");
   });
 

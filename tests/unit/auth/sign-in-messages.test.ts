@@ -9,7 +9,12 @@ describe("sign-in messages", () => {
   });
 
   it("never show text taken from the address bar", () => {
-    for (const code of ["Your account is locked, call +1 555 0100", "Throttled:15 <b>now</b>", "CredentialsSignin", "Callback"]) {
+    for (const code of [
+      "Your account is locked, call +1 555 0100",
+      "Throttled:15 <b>now</b>",
+      "CredentialsSignin",
+      "Callback",
+    ]) {
       expect(signInErrorMessage(code)).toBe(WRONG_CREDENTIALS);
     }
     expect(signInErrorMessage(undefined)).toBeUndefined();

@@ -65,7 +65,10 @@ describe("athlete feed", () => {
     expect(after.end).toBe("2026-03-30T18:15:00.000Z");
     expect(unfoldedLines(after.ics)).toContain("DTSTART;TZID=Europe/London:20260330T180000");
     expect(unfoldedLines(after.ics)).toContain("DTEND;TZID=Europe/London:20260330T191500");
-    for (const [x, date] of [[before, "2026-03-28"], [after, "2026-03-30"]] as const) {
+    for (const [x, date] of [
+      [before, "2026-03-28"],
+      [after, "2026-03-30"],
+    ] as const) {
       expect(x.start).toBe(luxonUtc(LONDON, date, "18:00"));
       expect(x.end).toBe(luxonUtc(LONDON, date, "18:00", 75));
     }

@@ -37,7 +37,11 @@ describe("block wording", () => {
     // 2·10·1 + 3·6·1 + 3·8·2 = 20 + 18 + 48 = 86 contacts (sets × reps × contacts per rep).
     expect(blockSummary(plyo)).toBe("3 drills · 86 contacts");
     expect(
-      blockSummary({ kind: "acceleration", title: "Starts", running: { sets: 2, reps: 3, distanceM: 20, intensityPct: 100, start: "blocks", runInM: 0, restSec: 180 } }),
+      blockSummary({
+        kind: "acceleration",
+        title: "Starts",
+        running: { sets: 2, reps: 3, distanceM: 20, intensityPct: 100, start: "blocks", runInM: 0, restSec: 180 },
+      }),
     ).toBe("2 sets of 3 × 20 m from blocks · 100%");
     expect(blockSummary({ kind: "strength", title: "Gym", notes: "Squat 4×5\nRDL" })).toBe("Squat 4×5");
     expect(blockSummary({ kind: "recovery", title: "Easy" })).toBe("Recovery");
@@ -54,7 +58,14 @@ describe("block wording", () => {
       "• Hurdle hops: 3 × 6, moderate intensity, 18 contacts",
       "• Bounds: 3 × 8 (2 contacts each), high intensity, 48 contacts",
     ]);
-    expect(blockDescription({ kind: "tempo", title: "Tempo", notes: "Grass\nBarefoot last 2", running: { sets: 1, reps: 6, distanceM: 100, intensityPct: 70.5, start: "standing", runInM: 0, restSec: 90 } })).toEqual([
+    expect(
+      blockDescription({
+        kind: "tempo",
+        title: "Tempo",
+        notes: "Grass\nBarefoot last 2",
+        running: { sets: 1, reps: 6, distanceM: 100, intensityPct: 70.5, start: "standing", runInM: 0, restSec: 90 },
+      }),
+    ).toEqual([
       "Tempo: 6 × 100 m from a standing start at 70.5% of top speed, 1 min 30 s rest",
       "Note: Grass",
       "Barefoot last 2",
@@ -62,7 +73,9 @@ describe("block wording", () => {
   });
 
   it("names a mixed session after its most demanding sprint quality", () => {
-    expect(mainBlockKind([{ kind: "recovery" }, { kind: "plyometric" }, { kind: "acceleration" }])).toBe("acceleration");
+    expect(mainBlockKind([{ kind: "recovery" }, { kind: "plyometric" }, { kind: "acceleration" }])).toBe(
+      "acceleration",
+    );
     expect(mainBlockKind([])).toBeNull();
   });
 });

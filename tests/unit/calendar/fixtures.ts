@@ -35,5 +35,8 @@ export function parse(ics: string): { cal: ICAL.Component; events: ICAL.Event[] 
 
 /** Content lines after unfolding (RFC 5545 §3.1: CRLF followed by one space or tab is removed). */
 export function unfoldedLines(ics: string): string[] {
-  return ics.replace(/\r\n[ \t]/g, "").split("\r\n").filter(Boolean);
+  return ics
+    .replace(/\r\n[ \t]/g, "")
+    .split("\r\n")
+    .filter(Boolean);
 }

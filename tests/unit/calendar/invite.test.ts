@@ -9,7 +9,16 @@ const attendee = { name: "Maya Okafor", email: "maya@harbourvale.test" };
 const now = new Date("2026-03-22T09:00:00Z");
 
 function invite(overrides: Partial<InviteInput> = {}): string {
-  return buildInvite({ method: "REQUEST", team: LONDON, organizer, attendee, sessions: [session()], appUrl: APP_URL, now, ...overrides });
+  return buildInvite({
+    method: "REQUEST",
+    team: LONDON,
+    organizer,
+    attendee,
+    sessions: [session()],
+    appUrl: APP_URL,
+    now,
+    ...overrides,
+  });
 }
 
 describe("session invitations", () => {
@@ -29,7 +38,9 @@ describe("session invitations", () => {
   it("uses the feed's UIDs so a client updates the same event (RFC 5545 §3.8.4.7)", () => {
     const sessions = [session({ id: "x9" }), session({ id: "y8", date: "2026-04-02" })];
     const fromInvite = parse(invite({ sessions })).events.map((e) => e.uid);
-    const fromFeed = parse(buildAthleteFeed({ team: LONDON, athlete: attendee, sessions, appUrl: APP_URL })).events.map((e) => e.uid);
+    const fromFeed = parse(buildAthleteFeed({ team: LONDON, athlete: attendee, sessions, appUrl: APP_URL })).events.map(
+      (e) => e.uid,
+    );
     expect(fromInvite).toEqual(["session-x9@sprintwright", "session-y8@sprintwright"]);
     expect(fromInvite).toEqual(fromFeed);
   });

@@ -8,7 +8,8 @@ import { APP_URL, LONDON, parse, session } from "./fixtures";
 
 // ical.js reads unknown properties as raw text: NAME is TEXT (RFC 7986 §5.1), and so are the X-WR- copies
 // (common practice), so tell it, and it unescapes them like SUMMARY.
-for (const name of ["name", "x-wr-calname", "x-wr-caldesc"]) ICAL.design.icalendar.property[name] = { defaultType: "text" };
+for (const name of ["name", "x-wr-calname", "x-wr-caldesc"])
+  ICAL.design.icalendar.property[name] = { defaultType: "text" };
 
 const hostile = "Ada\rX-INJECTED:1\u0000\u000b\u0085 Okafor";
 const team = { ...LONDON, name: "Harbour\rVale\nSprint" };
@@ -37,7 +38,14 @@ describe("iCalendar TEXT escaping", () => {
   });
 
   it("invitations carry the same clean values, and names in parameters lose their controls", () => {
-    const ics = buildInvite({ method: "REQUEST", team, organizer: { name: "Sam\rReed", email: "sam@harbourvale.test" }, attendee: { name: hostile, email: "ada@harbourvale.test" }, sessions: [stored], appUrl: APP_URL });
+    const ics = buildInvite({
+      method: "REQUEST",
+      team,
+      organizer: { name: "Sam\rReed", email: "sam@harbourvale.test" },
+      attendee: { name: hostile, email: "ada@harbourvale.test" },
+      sessions: [stored],
+      appUrl: APP_URL,
+    });
     assertCleanLines(ics);
     const { cal, events } = parse(ics);
     expect(cal.getFirstPropertyValue("name")).toBe("Harbour\nVale\nSprint · Sprintwright");

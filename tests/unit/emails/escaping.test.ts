@@ -9,7 +9,13 @@ import { sessionInvitationsEmail } from "@/emails/session-invitations";
 import type { RenderedEmail } from "@/emails/layout";
 
 const EVIL = `<img src=x onerror="alert('x')">&amp;`;
-const session = { date: "2026-03-30", startTime: "18:00", durationMin: 60, title: EVIL, blocks: [{ kind: "tempo" as const }] };
+const session = {
+  date: "2026-03-30",
+  startTime: "18:00",
+  durationMin: 60,
+  title: EVIL,
+  blocks: [{ kind: "tempo" as const }],
+};
 const alert = {
   athleteName: EVIL,
   flagLabel: EVIL,
@@ -23,17 +29,58 @@ const alert = {
 };
 
 const rendered: Array<[string, RenderedEmail]> = [
-  ["member invitation", memberInvitationEmail({ inviteeName: EVIL, teamName: EVIL, role: "athlete", inviterName: EVIL, acceptUrl: "https://sprintwright.test/invite/t0k", expiresAt: new Date("2026-12-08T21:44:00Z"), timeZone: "Europe/London" })],
-  ["password reset", passwordResetEmail({ name: EVIL, resetUrl: "https://sprintwright.test/reset/abc", expiresAt: new Date("2026-12-01T22:44:00Z") })],
+  [
+    "member invitation",
+    memberInvitationEmail({
+      inviteeName: EVIL,
+      teamName: EVIL,
+      role: "athlete",
+      inviterName: EVIL,
+      acceptUrl: "https://sprintwright.test/invite/t0k",
+      expiresAt: new Date("2026-12-08T21:44:00Z"),
+      timeZone: "Europe/London",
+    }),
+  ],
+  [
+    "password reset",
+    passwordResetEmail({
+      name: EVIL,
+      resetUrl: "https://sprintwright.test/reset/abc",
+      expiresAt: new Date("2026-12-01T22:44:00Z"),
+    }),
+  ],
   ["load alert", loadAlertEmail({ ...alert, teamName: EVIL, recipientName: EVIL })],
-  ["alert digest", alertDigestEmail({ teamName: EVIL, date: "2026-03-30", alerts: [alert, { ...alert, athleteName: "Lena Hart" }] })],
-  ["session invitations", sessionInvitationsEmail({ athleteName: EVIL, teamName: EVIL, weekStart: "2026-03-30", sessions: [session], planUrl: "https://sprintwright.test/plan" })],
-  ["session cancelled", sessionCancelledEmail({ athleteName: EVIL, teamName: EVIL, sessions: [session], reason: EVIL, planUrl: "https://sprintwright.test/plan" })],
+  [
+    "alert digest",
+    alertDigestEmail({ teamName: EVIL, date: "2026-03-30", alerts: [alert, { ...alert, athleteName: "Lena Hart" }] }),
+  ],
+  [
+    "session invitations",
+    sessionInvitationsEmail({
+      athleteName: EVIL,
+      teamName: EVIL,
+      weekStart: "2026-03-30",
+      sessions: [session],
+      planUrl: "https://sprintwright.test/plan",
+    }),
+  ],
+  [
+    "session cancelled",
+    sessionCancelledEmail({
+      athleteName: EVIL,
+      teamName: EVIL,
+      sessions: [session],
+      reason: EVIL,
+      planUrl: "https://sprintwright.test/plan",
+    }),
+  ],
 ];
 
 describe("e-mail escaping", () => {
   it("escapes the five HTML specials", () => {
-    expect(escapeHtml(`<a href="x">Tom & 'Jo'</a>`)).toBe("&lt;a href=&quot;x&quot;&gt;Tom &amp; &#39;Jo&#39;&lt;/a&gt;");
+    expect(escapeHtml(`<a href="x">Tom & 'Jo'</a>`)).toBe(
+      "&lt;a href=&quot;x&quot;&gt;Tom &amp; &#39;Jo&#39;&lt;/a&gt;",
+    );
   });
 
   it.each(rendered)("%s: interpolated values never reach the HTML unescaped", (_name, mail) => {
@@ -56,7 +103,13 @@ describe("e-mail escaping", () => {
   });
 
   it("keeps header injection out of the subject", () => {
-    const mail = memberInvitationEmail({ teamName: "A\r\nBcc: x@y.test", role: "coach", inviterName: "Sam", acceptUrl: "https://s.test/i", expiresAt: new Date() });
+    const mail = memberInvitationEmail({
+      teamName: "A\r\nBcc: x@y.test",
+      role: "coach",
+      inviterName: "Sam",
+      acceptUrl: "https://s.test/i",
+      expiresAt: new Date(),
+    });
     expect(mail.subject).toBe("Sam invited you to A Bcc: x@y.test on Sprintwright");
   });
 });

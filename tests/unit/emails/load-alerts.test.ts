@@ -38,13 +38,23 @@ describe("load alert mails", () => {
   });
 
   it("links each load flag to its section of the explanation page; an override has none", () => {
-    const alert = { athleteId: 7, athleteName: "Maya Okafor", metric: "srpe", value: 1.7, threshold: 1.5, date: "2026-03-31", basis: "planned" as const };
+    const alert = {
+      athleteId: 7,
+      athleteName: "Maya Okafor",
+      metric: "srpe",
+      value: 1.7,
+      threshold: 1.5,
+      date: "2026-03-31",
+      basis: "planned" as const,
+    };
     const item = toLoadAlertItem({ ...alert, kind: "spike" }, "https://sprintwright.test/");
     expect(item.explainUrl).toBe("https://sprintwright.test/figures#zones");
     const mail = loadAlertEmail({ ...item, teamName: "Harbour Vale Sprint Club" });
     expect(mail.text).toContain("https://sprintwright.test/figures#zones");
     expect(mail.html).toContain("https://sprintwright.test/figures#zones");
-    expect(toLoadAlertItem({ ...alert, kind: "weekly_jump" }, "https://x.test").explainUrl).toBe("https://x.test/figures#weekly-change");
+    expect(toLoadAlertItem({ ...alert, kind: "weekly_jump" }, "https://x.test").explainUrl).toBe(
+      "https://x.test/figures#weekly-change",
+    );
     expect(toLoadAlertItem({ ...alert, kind: "restriction_override" }, "https://x.test").explainUrl).toBeNull();
   });
 
@@ -58,7 +68,19 @@ describe("load alert mails", () => {
     const mail = alertDigestEmail({
       teamName: "Harbour Vale Sprint Club",
       date: "2026-03-31",
-      alerts: [base, { ...base, athleteName: "Lena Hart", flagLabel: "ACWR spike", metricLabel: "sRPE load", value: 1.62, threshold: 1.5, unit: null, direction: "above" }],
+      alerts: [
+        base,
+        {
+          ...base,
+          athleteName: "Lena Hart",
+          flagLabel: "ACWR spike",
+          metricLabel: "sRPE load",
+          value: 1.62,
+          threshold: 1.5,
+          unit: null,
+          direction: "above",
+        },
+      ],
       inboxUrl: "https://sprintwright.test/alerts",
     });
     expect(mail.subject).toBe("2 load flags for Harbour Vale Sprint Club · Tue 31 Mar");

@@ -3,8 +3,21 @@ import { sessionCancelledEmail } from "@/emails/session-cancelled";
 import { sessionInvitationsEmail } from "@/emails/session-invitations";
 
 const week = [
-  { date: "2026-04-02", startTime: "17:30", durationMin: 90, title: "Block starts", blocks: [{ kind: "acceleration" as const }], location: "Track 1" },
-  { date: "2026-03-31", startTime: "18:00", durationMin: 60, title: "Flying 30s", blocks: [{ kind: "max_velocity" as const }] },
+  {
+    date: "2026-04-02",
+    startTime: "17:30",
+    durationMin: 90,
+    title: "Block starts",
+    blocks: [{ kind: "acceleration" as const }],
+    location: "Track 1",
+  },
+  {
+    date: "2026-03-31",
+    startTime: "18:00",
+    durationMin: 60,
+    title: "Flying 30s",
+    blocks: [{ kind: "max_velocity" as const }],
+  },
 ];
 
 describe("session mails", () => {
@@ -30,10 +43,21 @@ describe("session mails", () => {
 
   it("names a single cancelled session in the subject", () => {
     const [one] = week;
-    const mail = sessionCancelledEmail({ athleteName: "Maya", teamName: "HVSC", sessions: [one!], reason: "Track closed", planUrl: "https://sprintwright.test/plan" });
+    const mail = sessionCancelledEmail({
+      athleteName: "Maya",
+      teamName: "HVSC",
+      sessions: [one!],
+      reason: "Track closed",
+      planUrl: "https://sprintwright.test/plan",
+    });
     expect(mail.subject).toBe("Cancelled: Block starts on Thu 2 Apr");
     expect(mail.text).toContain("Reason: Track closed");
-    const many = sessionCancelledEmail({ athleteName: "Maya", teamName: "HVSC", sessions: week, planUrl: "https://sprintwright.test/plan" });
+    const many = sessionCancelledEmail({
+      athleteName: "Maya",
+      teamName: "HVSC",
+      sessions: week,
+      planUrl: "https://sprintwright.test/plan",
+    });
     expect(many.subject).toBe("2 sessions cancelled · HVSC");
   });
 });

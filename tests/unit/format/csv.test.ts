@@ -6,8 +6,22 @@ import { toCsv } from "@/lib/format/csv";
 // programs; prefixing a single quote makes it text. The output is read back with Papa's own parser (RFC 4180).
 describe("toCsv", () => {
   it("escapes text cells that would run as formulas and leaves numbers alone", () => {
-    const names = ['=HYPERLINK("http://evil.test","x")', "+1+1", "-2+3", "@SUM(A1)", "\t=1", "\r=1", "=cmd\nline two", "＝1+1", "Ada Athlete", "x=1"];
-    const csv = toCsv(["name", "change"], names.map((n, i) => [n, i === 0 ? -12.5 : i]));
+    const names = [
+      '=HYPERLINK("http://evil.test","x")',
+      "+1+1",
+      "-2+3",
+      "@SUM(A1)",
+      "\t=1",
+      "\r=1",
+      "=cmd\nline two",
+      "＝1+1",
+      "Ada Athlete",
+      "x=1",
+    ];
+    const csv = toCsv(
+      ["name", "change"],
+      names.map((n, i) => [n, i === 0 ? -12.5 : i]),
+    );
     const rows = Papa.parse<string[]>(csv.trim()).data.slice(1);
     expect(rows.map((r) => r[0])).toEqual([...names.slice(0, 8).map((n) => `'${n}`), "Ada Athlete", "x=1"]);
     expect(rows[0][1]).toBe("-12.5");

@@ -15,33 +15,52 @@ const WEEK = "2025-12-08";
 const ath = synthAthlete(7, START, 400, TODAY);
 
 describe("computeAthleteLoad", () => {
-  const base = { profile: ath.profile, settings: SETTINGS, sessions: ath.sessions, logs: ath.logs, today: TODAY, weekStart: WEEK };
+  const base = {
+    profile: ath.profile,
+    settings: SETTINGS,
+    sessions: ath.sessions,
+    logs: ath.logs,
+    today: TODAY,
+    weekStart: WEEK,
+  };
 
-  it.each(["actual", "projected"] as const)("%s: day rows equal dailySeries + acwrSeries over the full history", (view) => {
-    const res = computeAthleteLoad({ ...base, from: "2025-11-01", to: "2025-12-31", view });
-    expect(res.days).toHaveLength(61);
-    expect(res.historyStart).toBe(ath.sessions[0].date);
-    const full = dailySeries({ ...base, from: res.historyStart, to: "2025-12-31", view });
-    const off = full.dates.indexOf("2025-11-01");
-    for (const m of METRICS) {
-      const acwr = acwrSeries(full.values[m], SETTINGS.acwrMethod, { firstDataIndex: full.firstDataIndex });
+  it.each(["actual", "projected"] as const)(
+    "%s: day rows equal dailySeries + acwrSeries over the full history",
+    (view) => {
+      const res = computeAthleteLoad({ ...base, from: "2025-11-01", to: "2025-12-31", view });
+      expect(res.days).toHaveLength(61);
+      expect(res.historyStart).toBe(ath.sessions[0].date);
+      const full = dailySeries({ ...base, from: res.historyStart, to: "2025-12-31", view });
+      const off = full.dates.indexOf("2025-11-01");
+      for (const m of METRICS) {
+        const acwr = acwrSeries(full.values[m], SETTINGS.acwrMethod, { firstDataIndex: full.firstDataIndex });
+        res.days.forEach((day, k) => {
+          expect(day.values[m]).toBe(full.values[m][off + k]);
+          expect(day.acute[m]).toBe(acwr.acute[off + k]);
+          expect(day.ratio[m]).toBe(acwr.ratio[off + k]);
+        });
+      }
       res.days.forEach((day, k) => {
-        expect(day.values[m]).toBe(full.values[m][off + k]);
-        expect(day.acute[m]).toBe(acwr.acute[off + k]);
-        expect(day.ratio[m]).toBe(acwr.ratio[off + k]);
+        expect(day.date).toBe(full.dates[off + k]);
+        expect(day.logged).toBe(full.logged[off + k] === 1);
+        expect(day.missing).toBe(full.missing[off + k] === 1);
       });
-    }
-    res.days.forEach((day, k) => {
-      expect(day.date).toBe(full.dates[off + k]);
-      expect(day.logged).toBe(full.logged[off + k] === 1);
-      expect(day.missing).toBe(full.missing[off + k] === 1);
-    });
-  });
+    },
+  );
 
   it("uses history before `from` for the chronic load", () => {
     const old = session("2025-09-01", { plannedRpe: 8, durationMin: 90 });
     const recent = session("2025-11-03", { plannedRpe: 5, durationMin: 60 });
-    const input = { profile: PROFILE, settings: SETTINGS, logs: [log(old.id), log(recent.id)], from: "2025-11-01", to: "2025-11-10", today: TODAY, view: "actual" as const, weekStart: "2025-11-03" };
+    const input = {
+      profile: PROFILE,
+      settings: SETTINGS,
+      logs: [log(old.id), log(recent.id)],
+      from: "2025-11-01",
+      to: "2025-11-10",
+      today: TODAY,
+      view: "actual" as const,
+      weekStart: "2025-11-03",
+    };
     const withOld = computeAthleteLoad({ ...input, sessions: [old, recent] });
     const without = computeAthleteLoad({ ...input, sessions: [recent] });
     expect(withOld.days[0].chronic.srpe).toBeGreaterThan(0);
@@ -61,7 +80,8 @@ describe("computeAthleteLoad", () => {
 
   it("a constant month then a doubled week raises a spike with a readable reason", () => {
     const sessions: SessionInput[] = [];
-    for (let d = 0; d < 56; d++) sessions.push(session(addDays("2026-01-05", d), { plannedRpe: 5, durationMin: d >= 49 ? 120 : 60 }));
+    for (let d = 0; d < 56; d++)
+      sessions.push(session(addDays("2026-01-05", d), { plannedRpe: 5, durationMin: d >= 49 ? 120 : 60 }));
     const res = computeAthleteLoad({
       profile: PROFILE,
       settings: { ...SETTINGS, acwrMethod: "rolling_coupled" },
@@ -76,12 +96,21 @@ describe("computeAthleteLoad", () => {
     // Coupled: acute 600, chronic (21·300 + 7·600)/28 = 375 → 1.6 on the Sunday (as R3, lib/load/README.md §6 [C]).
     const spike = res.flags.find((f) => f.kind === "spike");
     expect(spike?.value).toBeCloseTo(1.6, 9);
-    expect(spike?.reason).toBe("ACWR (sRPE, rolling, coupled) 1.60 on Sun 1 Mar is at or above the spike threshold 1.50.");
+    expect(spike?.reason).toBe(
+      "ACWR (sRPE, rolling, coupled) 1.60 on Sun 1 Mar is at or above the spike threshold 1.50.",
+    );
     expect(res.flags.find((f) => f.kind === "weekly_jump" && f.metric === "srpe")?.value).toBe(100);
   });
 
   it("snaps weekStart to weekStartDay when given", () => {
-    const res = computeAthleteLoad({ ...base, from: WEEK, to: WEEK, view: "actual", weekStart: "2025-12-11", weekStartDay: 1 });
+    const res = computeAthleteLoad({
+      ...base,
+      from: WEEK,
+      to: WEEK,
+      view: "actual",
+      weekStart: "2025-12-11",
+      weekStartDay: 1,
+    });
     expect(res.week.weekStart).toBe(WEEK);
   });
 });
@@ -96,12 +125,33 @@ describe("computeWeekPreview (drag preview fast path)", () => {
       const settings = { ...SETTINGS, acwrMethod };
       // A high-intensity week so the recovery and contact rules have something to say.
       const extra = [
-        session(TODAY, { id: "x1", startTime: "17:00", blocks: [runBlock("max_velocity", { reps: 6, start: "flying", runInM: 20 })] }),
+        session(TODAY, {
+          id: "x1",
+          startTime: "17:00",
+          blocks: [runBlock("max_velocity", { reps: 6, start: "flying", runInM: 20 })],
+        }),
         session(addDays(TODAY, 1), { id: "x2", startTime: "09:00", blocks: [plyoBlock([drill(5, 10, 3, "high")])] }),
       ];
       const sessions = [...ath.sessions, ...extra];
-      const full = computeAthleteLoad({ profile: ath.profile, settings, sessions, logs: ath.logs, from: WEEK, to: weekEnd, today: TODAY, view: "projected", weekStart: WEEK });
-      const ctx = buildWeekPreviewContext({ profile: ath.profile, settings, sessions, logs: ath.logs, weekStart: WEEK, today: TODAY });
+      const full = computeAthleteLoad({
+        profile: ath.profile,
+        settings,
+        sessions,
+        logs: ath.logs,
+        from: WEEK,
+        to: weekEnd,
+        today: TODAY,
+        view: "projected",
+        weekStart: WEEK,
+      });
+      const ctx = buildWeekPreviewContext({
+        profile: ath.profile,
+        settings,
+        sessions,
+        logs: ath.logs,
+        weekStart: WEEK,
+        today: TODAY,
+      });
       const weekSessions = sessions.filter(inWeek);
       const ids = new Set(weekSessions.map((s) => s.id));
       const preview = computeWeekPreview({
@@ -121,7 +171,18 @@ describe("computeWeekPreview (drag preview fast path)", () => {
   );
 
   it("context survives JSON and a dragged session changes the preview", () => {
-    const ctx = JSON.parse(JSON.stringify(buildWeekPreviewContext({ profile: ath.profile, settings: SETTINGS, sessions: ath.sessions, logs: ath.logs, weekStart: WEEK, today: TODAY })));
+    const ctx = JSON.parse(
+      JSON.stringify(
+        buildWeekPreviewContext({
+          profile: ath.profile,
+          settings: SETTINGS,
+          sessions: ath.sessions,
+          logs: ath.logs,
+          weekStart: WEEK,
+          today: TODAY,
+        }),
+      ),
+    );
     const weekSessions = ath.sessions.filter(inWeek);
     const args = { ...ctx, weekLogs: [], profile: ath.profile, settings: SETTINGS, weekStart: WEEK, today: TODAY };
     const before = computeWeekPreview({ ...args, weekSessions });
@@ -133,9 +194,25 @@ describe("computeWeekPreview (drag preview fast path)", () => {
 
   it("runs well under 1 ms per athlete with two years of history", () => {
     const big = synthAthlete(11, "2024-01-01", 730, "2025-12-10");
-    const ctx = buildWeekPreviewContext({ profile: big.profile, settings: SETTINGS, sessions: big.sessions, logs: big.logs, weekStart: WEEK, today: TODAY });
+    const ctx = buildWeekPreviewContext({
+      profile: big.profile,
+      settings: SETTINGS,
+      sessions: big.sessions,
+      logs: big.logs,
+      weekStart: WEEK,
+      today: TODAY,
+    });
     const weekSessions = big.sessions.filter(inWeek);
-    const run = () => computeWeekPreview({ ...ctx, weekSessions, weekLogs: [], profile: big.profile, settings: SETTINGS, weekStart: WEEK, today: TODAY });
+    const run = () =>
+      computeWeekPreview({
+        ...ctx,
+        weekSessions,
+        weekLogs: [],
+        profile: big.profile,
+        settings: SETTINGS,
+        weekStart: WEEK,
+        today: TODAY,
+      });
     for (let i = 0; i < 50; i++) run();
     const times: number[] = [];
     for (let i = 0; i < 200; i++) {
@@ -154,7 +231,17 @@ describe("computeSquadWeek", () => {
     const rows = computeSquadWeek(squad, SETTINGS, WEEK, TODAY, "actual");
     expect(rows.map((r) => r.id)).toEqual(squad.map((a) => a.id));
     squad.forEach((a, i) => {
-      const single = computeAthleteLoad({ profile: a.profile, settings: SETTINGS, sessions: a.sessions, logs: a.logs, from: WEEK, to: WEEK, today: TODAY, view: "actual", weekStart: WEEK });
+      const single = computeAthleteLoad({
+        profile: a.profile,
+        settings: SETTINGS,
+        sessions: a.sessions,
+        logs: a.logs,
+        from: WEEK,
+        to: WEEK,
+        today: TODAY,
+        view: "actual",
+        weekStart: WEEK,
+      });
       expect(rows[i].week).toEqual(single.week);
       expect(rows[i].flags).toEqual(single.flags);
       expect(rows[i].peakRatios.srpe).toBe(single.week.peakRatio);
@@ -165,14 +252,40 @@ describe("computeSquadWeek", () => {
 
 describe("computeWeekPreview with a shortened history", () => {
   it("a first-data date before the history sent still counts as long history (not provisional)", () => {
-    const ctx = buildWeekPreviewContext({ profile: ath.profile, settings: SETTINGS, sessions: ath.sessions, logs: ath.logs, weekStart: WEEK, today: TODAY, historyDays: 84 });
+    const ctx = buildWeekPreviewContext({
+      profile: ath.profile,
+      settings: SETTINGS,
+      sessions: ath.sessions,
+      logs: ath.logs,
+      weekStart: WEEK,
+      today: TODAY,
+      historyDays: 84,
+    });
     expect(ctx.historyDates).toHaveLength(84);
     expect(ctx.firstDataDate! < ctx.historyDates[0]).toBe(true);
     const weekSessions = ath.sessions.filter((s) => s.date >= WEEK && s.date <= addDays(WEEK, 6));
     const ids = new Set(weekSessions.map((s) => s.id));
     const weekLogs = ath.logs.filter((l) => ids.has(l.sessionId));
-    const preview = computeWeekPreview({ ...ctx, weekSessions, weekLogs, profile: ath.profile, settings: SETTINGS, weekStart: WEEK, today: TODAY });
-    const full = computeAthleteLoad({ profile: ath.profile, settings: SETTINGS, sessions: ath.sessions, logs: ath.logs, from: WEEK, to: WEEK, today: TODAY, view: "projected", weekStart: WEEK });
+    const preview = computeWeekPreview({
+      ...ctx,
+      weekSessions,
+      weekLogs,
+      profile: ath.profile,
+      settings: SETTINGS,
+      weekStart: WEEK,
+      today: TODAY,
+    });
+    const full = computeAthleteLoad({
+      profile: ath.profile,
+      settings: SETTINGS,
+      sessions: ath.sessions,
+      logs: ath.logs,
+      from: WEEK,
+      to: WEEK,
+      today: TODAY,
+      view: "projected",
+      weekStart: WEEK,
+    });
     expect(preview.week.ratioProvisional).toBe(false);
     // 84 days of history leave (27/29)^84 ≈ 0.25% of the chronic seed error (lib/load/README.md §6): close, not equal.
     expect(preview.week.peakRatio!).toBeCloseTo(full.week.peakRatio!, 2);

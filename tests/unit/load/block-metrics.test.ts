@@ -9,7 +9,11 @@ describe("running blocks", () => {
   // s = 5.5: t* = −ln(4/9.5) = 0.864997, x* = 2.717476 m, so 30 − x* = 27.282524 m a rep, × 6 reps = 163.695146 m.
   // s = 9.0: t* = −ln(0.5/9.5) = 2.944439, x* = 18.972170 m, so 11.027830 m a rep, × 6 = 66.166978 m.
   it("2 × 3 × 30 m at 95% from a crouch (vmax 10, τ 1): HSR 163.695 m above 5.5 m/s, 66.167 m above 9.0 m/s", () => {
-    const m = blockMetrics(runBlock("acceleration", { sets: 2, reps: 3, distanceM: 30, intensityPct: 95 }), PROFILE, SETTINGS);
+    const m = blockMetrics(
+      runBlock("acceleration", { sets: 2, reps: 3, distanceM: 30, intensityPct: 95 }),
+      PROFILE,
+      SETTINGS,
+    );
     expect(m.runM).toBe(180);
     expect(m.sprintM).toBe(180);
     expect(m.hsrM).toBeCloseTo(163.695146, 5);
@@ -21,10 +25,18 @@ describe("running blocks", () => {
   // x*(5.5) = 0.95 × 2.717476 = 2.581602 m and x*(9.0) = 0.95 × 18.972170 = 18.023562 m:
   // HSR = 6 × (30 − 2.581602) = 164.510389 m; near-max = 6 × (30 − 18.023562) = 71.858629 m.
   it("a block start reaches each line sooner than a crouch start (τ × 0.95)", () => {
-    const m = blockMetrics(runBlock("acceleration", { sets: 2, reps: 3, distanceM: 30, intensityPct: 95, start: "blocks" }), PROFILE, SETTINGS);
+    const m = blockMetrics(
+      runBlock("acceleration", { sets: 2, reps: 3, distanceM: 30, intensityPct: 95, start: "blocks" }),
+      PROFILE,
+      SETTINGS,
+    );
     expect(m.hsrM).toBeCloseTo(164.510389, 5);
     expect(m.nearMaxM).toBeCloseTo(71.858629, 5);
-    const standing = blockMetrics(runBlock("acceleration", { sets: 2, reps: 3, distanceM: 30, intensityPct: 95, start: "standing" }), PROFILE, SETTINGS);
+    const standing = blockMetrics(
+      runBlock("acceleration", { sets: 2, reps: 3, distanceM: 30, intensityPct: 95, start: "standing" }),
+      PROFILE,
+      SETTINGS,
+    );
     expect(standing.hsrM).toBeCloseTo(163.695146, 5);
   });
 
@@ -76,7 +88,11 @@ describe("running blocks", () => {
   });
 
   it("tempo counts in runM and HSR but not in sprint metres or steps", () => {
-    const m = blockMetrics(runBlock("tempo", { reps: 6, distanceM: 100, intensityPct: 70, start: "standing" }), PROFILE, SETTINGS);
+    const m = blockMetrics(
+      runBlock("tempo", { reps: 6, distanceM: 100, intensityPct: 70, start: "standing" }),
+      PROFILE,
+      SETTINGS,
+    );
     expect(m.runM).toBe(600);
     expect(m.hsrM).toBeGreaterThan(0); // 70% of 10 m/s = 7 m/s > 5.5
     expect(m.nearMaxM).toBe(0);
@@ -85,7 +101,11 @@ describe("running blocks", () => {
   });
 
   it("sprint steps = sprint metres ÷ step length (estimate)", () => {
-    const m = blockMetrics(runBlock("speed_endurance", { reps: 3, distanceM: 150, intensityPct: 90 }), PROFILE, SETTINGS);
+    const m = blockMetrics(
+      runBlock("speed_endurance", { reps: 3, distanceM: 150, intensityPct: 90 }),
+      PROFILE,
+      SETTINGS,
+    );
     expect(m.sprintSteps).toBeCloseTo(450 / 2.2, 12);
   });
 
@@ -106,7 +126,11 @@ describe("running blocks", () => {
 describe("plyometric contacts (NSCA: one contact per landing of one foot or both feet; lib/load/README.md §2 [C])", () => {
   it("P1: 2×10 pogo + 3×8 box jumps + 4×6 bounds = 68 contacts", () => {
     const m = blockMetrics(
-      plyoBlock([drill(2, 10, 1, "low", "pogo hops"), drill(3, 8, 1, "moderate", "box jumps"), drill(4, 6, 1, "high", "alternate-leg bounds")]),
+      plyoBlock([
+        drill(2, 10, 1, "low", "pogo hops"),
+        drill(3, 8, 1, "moderate", "box jumps"),
+        drill(4, 6, 1, "high", "alternate-leg bounds"),
+      ]),
       PROFILE,
       SETTINGS,
     );
@@ -124,7 +148,10 @@ describe("plyometric contacts (NSCA: one contact per landing of one foot or both
   });
 
   it("P3: single-leg hops, 10 per leg = 20 contacts; a bilateral jump = 1 contact per landing", () => {
-    expect(blockMetrics(plyoBlock([drill(1, 10, 2, "moderate", "single-leg hops, each leg")]), PROFILE, SETTINGS).contacts.total).toBe(20);
+    expect(
+      blockMetrics(plyoBlock([drill(1, 10, 2, "moderate", "single-leg hops, each leg")]), PROFILE, SETTINGS).contacts
+        .total,
+    ).toBe(20);
     expect(blockMetrics(plyoBlock([drill(1, 1, 1, "low", "squat jump")]), PROFILE, SETTINGS).contacts.total).toBe(1);
   });
 });

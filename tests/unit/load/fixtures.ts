@@ -17,11 +17,21 @@ export function running(overrides: Partial<RunningPrescription> = {}): RunningPr
   return { sets: 1, reps: 1, distanceM: 30, intensityPct: 95, start: "crouch", runInM: 0, restSec: 180, ...overrides };
 }
 
-export function runBlock(kind: BlockInput["kind"], overrides: Partial<RunningPrescription> = {}, id?: string): BlockInput {
+export function runBlock(
+  kind: BlockInput["kind"],
+  overrides: Partial<RunningPrescription> = {},
+  id?: string,
+): BlockInput {
   return { id, kind, title: `${kind} block`, running: running(overrides) };
 }
 
-export function drill(sets: number, reps: number, contactsPerRep: number, intensity: PlyoDrill["intensity"], name = "drill"): PlyoDrill {
+export function drill(
+  sets: number,
+  reps: number,
+  contactsPerRep: number,
+  intensity: PlyoDrill["intensity"],
+  name = "drill",
+): PlyoDrill {
   return { name, sets, reps, contactsPerRep, intensity };
 }
 

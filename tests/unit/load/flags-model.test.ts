@@ -13,7 +13,17 @@ function input(srpeWeek: number[], ratioValue = 1, overrides: Partial<FlagInput>
   srpeWeek.forEach((v, i) => (values.srpe[W + i] = v));
   const ratio = new Float64Array(35).fill(Number.NaN);
   for (let i = W; i < 35; i++) ratio[i] = ratioValue;
-  return { firstDate: FIRST, values, ratio, provisional: new Uint8Array(35), sessions: [], profile: { plyoLevel: "intermediate" }, settings: SETTINGS, weekStart: WEEK, ...overrides };
+  return {
+    firstDate: FIRST,
+    values,
+    ratio,
+    provisional: new Uint8Array(35),
+    sessions: [],
+    profile: { plyoLevel: "intermediate" },
+    settings: SETTINGS,
+    weekStart: WEEK,
+    ...overrides,
+  };
 }
 
 describe("monotony flag (Foster 1998, MSSE 30:1164: monotony = mean ÷ SD, strain = weekly load × monotony)", () => {

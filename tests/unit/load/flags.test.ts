@@ -35,7 +35,14 @@ describe("ACWR flags use the week's peak ratio", () => {
   it("≥ 1.5 is a spike, an alert with a readable reason", () => {
     const flags = computeFlags(input({ peak: [3, 1.62] }));
     expect(flags).toHaveLength(1);
-    expect(flags[0]).toMatchObject({ kind: "spike", level: "alert", date: "2026-03-12", metric: "srpe", value: 1.62, threshold: 1.5 });
+    expect(flags[0]).toMatchObject({
+      kind: "spike",
+      level: "alert",
+      date: "2026-03-12",
+      metric: "srpe",
+      value: 1.62,
+      threshold: 1.5,
+    });
     expect(flags[0].reason).toBe("ACWR (sRPE, EWMA) 1.62 on Thu 12 Mar is at or above the spike threshold 1.50.");
   });
 
@@ -121,7 +128,9 @@ describe("weekly jump: strictly more than the limit", () => {
     expect(withWeeks(2000, 2300)).toEqual([]);
     const [f] = withWeeks(2000, 2500);
     expect(f).toMatchObject({ level: "caution", metric: "srpe", value: 25, threshold: 15, date: WEEK });
-    expect(f.reason).toBe("sRPE load: 2,500 AU this week, up 25.0% on last week's 2,000 AU, more than the 15.0% limit.");
+    expect(f.reason).toBe(
+      "sRPE load: 2,500 AU this week, up 25.0% on last week's 2,000 AU, more than the 15.0% limit.",
+    );
   });
 
   it("last week 0 → no flag (change undefined)", () => {
@@ -148,9 +157,17 @@ describe("plyometric volume per session (NSCA bands [from memory])", () => {
   });
 
   it("flags contacts above the band's top only, for sessions inside the week", () => {
-    const flags = computeFlags(input({ sessions: [s("a", "2026-03-10", 120), s("b", "2026-03-11", 150), s("c", "2026-03-08", 200)] }));
+    const flags = computeFlags(
+      input({ sessions: [s("a", "2026-03-10", 120), s("b", "2026-03-11", 150), s("c", "2026-03-08", 200)] }),
+    );
     expect(flags).toHaveLength(1);
-    expect(flags[0]).toMatchObject({ kind: "plyo_volume", sessionId: "b", value: 150, threshold: 120, metric: "contacts" });
+    expect(flags[0]).toMatchObject({
+      kind: "plyo_volume",
+      sessionId: "b",
+      value: 150,
+      threshold: 120,
+      metric: "contacts",
+    });
     expect(flags[0].reason).toBe(
       // The week's total sits next to the band (lib/load/README.md §11.5): 120 + 150 = 270 (the 8 Mar session is before the week).
       "The session on Wed 11 Mar has 150 ground contacts, above 120, the top of the intermediate range (100–120 per session, the NSCA's off-season guidance). This week: 270 contacts in all.",
@@ -167,7 +184,9 @@ describe("ordering, levels and display", () => {
       contactsByIntensity: { total: 130 },
       highIntensity: true,
     });
-    const flags = computeFlags(input({ peak: [1, 1.7], sessions: [hard("x", "2026-03-09", "09:00"), hard("y", "2026-03-10", "09:00")] }));
+    const flags = computeFlags(
+      input({ peak: [1, 1.7], sessions: [hard("x", "2026-03-09", "09:00"), hard("y", "2026-03-10", "09:00")] }),
+    );
     expect(flags.map((f) => `${f.date} ${f.kind}`)).toEqual([
       "2026-03-09 plyo_volume",
       "2026-03-10 spike",

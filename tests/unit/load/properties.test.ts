@@ -15,13 +15,21 @@ const close = (a: number, b: number, rel: number) => Math.abs(a - b) <= rel * Ma
 describe("ACWR properties", () => {
   it("a constant load gives ratio 1 for every method once 28 days have passed (R2/E3)", () => {
     fc.assert(
-      fc.property(fc.double({ min: 0.5, max: 5000, noNaN: true }), fc.integer({ min: 28, max: 120 }), method, (value, n, m) => {
-        const s = acwrSeries(Array.from({ length: n }, () => value), m);
-        for (let i = 27; i < n; i++) {
-          expect(close(s.ratio[i]!, 1, 1e-12)).toBe(true);
-          expect(s.provisional[i]).toBe(false);
-        }
-      }),
+      fc.property(
+        fc.double({ min: 0.5, max: 5000, noNaN: true }),
+        fc.integer({ min: 28, max: 120 }),
+        method,
+        (value, n, m) => {
+          const s = acwrSeries(
+            Array.from({ length: n }, () => value),
+            m,
+          );
+          for (let i = 27; i < n; i++) {
+            expect(close(s.ratio[i]!, 1, 1e-12)).toBe(true);
+            expect(s.provisional[i]).toBe(false);
+          }
+        },
+      ),
     );
   });
 
@@ -29,7 +37,10 @@ describe("ACWR properties", () => {
     fc.assert(
       fc.property(loads(1), fc.double({ min: 1e-3, max: 1e3, noNaN: true }), method, (xs, k, m) => {
         const a = acwrSeries(xs, m).ratio;
-        const b = acwrSeries(xs.map((x) => x * k), m).ratio;
+        const b = acwrSeries(
+          xs.map((x) => x * k),
+          m,
+        ).ratio;
         a.forEach((r, i) => {
           if (r === null) expect(b[i]).toBeNull();
           else expect(close(r, b[i]!, 1e-8)).toBe(true);
@@ -47,7 +58,8 @@ describe("ACWR properties", () => {
         const after = acwrSeries(ys, m).acute;
         for (let j = 0; j < k; j++) expect(after[j]).toBe(before[j]);
         // Day j of the old series is day j + 1 of the new one.
-        for (let j = k; j < xs.length; j++) expect(after[j + 1]).toBeLessThanOrEqual(before[j] + 1e-9 * Math.max(1, before[j]));
+        for (let j = k; j < xs.length; j++)
+          expect(after[j + 1]).toBeLessThanOrEqual(before[j] + 1e-9 * Math.max(1, before[j]));
         if (k > 0) expect(after[k]).toBeLessThanOrEqual(before[k - 1] + 1e-9 * Math.max(1, before[k - 1]));
       }),
     );
@@ -75,7 +87,14 @@ const profile = fc.record({
   tau: fc.double({ min: 0.6, max: 2, noNaN: true }),
 });
 
-function toBlock(b: { kind: BlockInput["kind"]; sets: number; reps: number; distanceM: number; intensityPct: number; runInM: number }): BlockInput {
+function toBlock(b: {
+  kind: BlockInput["kind"];
+  sets: number;
+  reps: number;
+  distanceM: number;
+  intensityPct: number;
+  runInM: number;
+}): BlockInput {
   return { kind: b.kind, title: "rep", running: { ...b, start: b.runInM > 0 ? "flying" : "standing", restSec: 120 } };
 }
 
@@ -93,22 +112,34 @@ describe("running-metre properties", () => {
 
   it("near-max metres ≤ HSR metres whenever the near-max speed is at least the HSR speed", () => {
     fc.assert(
-      fc.property(runningBlock, profile, fc.double({ min: 50, max: 100, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (b, p, pct, share) => {
-        const nearMaxSpeed = (pct / 100) * p.vmax;
-        const settings = { ...DEFAULT_TEAM_LOAD_SETTINGS, nearMaxPct: pct, hsrSpeedMs: nearMaxSpeed * share };
-        const m = blockMetrics(toBlock(b), { ...p, stepLengthM: 2.2, plyoLevel: "beginner" }, settings);
-        expect(m.nearMaxM).toBeLessThanOrEqual(m.hsrM * (1 + 1e-12) + 1e-12);
-      }),
+      fc.property(
+        runningBlock,
+        profile,
+        fc.double({ min: 50, max: 100, noNaN: true }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (b, p, pct, share) => {
+          const nearMaxSpeed = (pct / 100) * p.vmax;
+          const settings = { ...DEFAULT_TEAM_LOAD_SETTINGS, nearMaxPct: pct, hsrSpeedMs: nearMaxSpeed * share };
+          const m = blockMetrics(toBlock(b), { ...p, stepLengthM: 2.2, plyoLevel: "beginner" }, settings);
+          expect(m.nearMaxM).toBeLessThanOrEqual(m.hsrM * (1 + 1e-12) + 1e-12);
+        },
+      ),
     );
   });
 
   it("metres at or above a speed fall as the speed rises", () => {
     fc.assert(
-      fc.property(fc.double({ min: 0, max: 12, noNaN: true }), fc.double({ min: 0, max: 12, noNaN: true }), fc.double({ min: 1, max: 12, noNaN: true }), fc.double({ min: 1, max: 300, noNaN: true }), (s1, s2, target, total) => {
-        const [lo, hi] = s1 <= s2 ? [s1, s2] : [s2, s1];
-        const rep = { targetSpeed: target, tau: 1.1, totalDistance: total };
-        expect(metresAtOrAbove(hi, rep)).toBeLessThanOrEqual(metresAtOrAbove(lo, rep) + 1e-9);
-      }),
+      fc.property(
+        fc.double({ min: 0, max: 12, noNaN: true }),
+        fc.double({ min: 0, max: 12, noNaN: true }),
+        fc.double({ min: 1, max: 12, noNaN: true }),
+        fc.double({ min: 1, max: 300, noNaN: true }),
+        (s1, s2, target, total) => {
+          const [lo, hi] = s1 <= s2 ? [s1, s2] : [s2, s1];
+          const rep = { targetSpeed: target, tau: 1.1, totalDistance: total };
+          expect(metresAtOrAbove(hi, rep)).toBeLessThanOrEqual(metresAtOrAbove(lo, rep) + 1e-9);
+        },
+      ),
     );
   });
 });

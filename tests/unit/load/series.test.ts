@@ -23,7 +23,15 @@ describe("dailySeries", () => {
   // estimate (b: planned RPE 5 × 60 min = 300 AU, Foster 2001) and marks the day; "exclude" leaves it at 0, marked.
   it("actual: only logged work up to today; a past published session without a log is missing, not a rest day", () => {
     const s = series("actual");
-    expect(s.dates).toEqual(["2026-03-07", "2026-03-08", "2026-03-09", "2026-03-10", "2026-03-11", "2026-03-12", "2026-03-13"]);
+    expect(s.dates).toEqual([
+      "2026-03-07",
+      "2026-03-08",
+      "2026-03-09",
+      "2026-03-10",
+      "2026-03-11",
+      "2026-03-12",
+      "2026-03-13",
+    ]);
     expect(Array.from(s.values.srpe)).toEqual([0, 0, 360, 300, 0, 0, 0]);
     expect(Array.from(s.logged)).toEqual([1, 0, 1, 0, 0, 0, 0]);
     expect(Array.from(s.missing)).toEqual([0, 0, 0, 1, 0, 0, 0]);
@@ -56,7 +64,12 @@ describe("dailySeries", () => {
 
   it("a log counts whatever the session's status; in actual only up to today", () => {
     const future = session("2026-03-14", { status: "cancelled" });
-    const args = { from: "2026-03-14", to: "2026-03-14", sessions: [future], logs: [log(future.id, { rpe: 5, minutes: 10 })] };
+    const args = {
+      from: "2026-03-14",
+      to: "2026-03-14",
+      sessions: [future],
+      logs: [log(future.id, { rpe: 5, minutes: 10 })],
+    };
     const common = { profile: PROFILE, settings: SETTINGS, today: TODAY };
     expect(dailySeries({ ...args, ...common, view: "actual" }).values.srpe[0]).toBe(0);
     expect(dailySeries({ ...args, ...common, view: "projected" }).values.srpe[0]).toBe(50);
@@ -87,7 +100,9 @@ describe("weeklyTotals", () => {
   });
 
   it("handles an empty series", () => {
-    expect(weeklyTotals([], { hsrM: [], nearMaxM: [], sprintM: [], sprintSteps: [], contacts: [], srpe: [] }).weekStarts).toEqual([]);
+    expect(
+      weeklyTotals([], { hsrM: [], nearMaxM: [], sprintM: [], sprintSteps: [], contacts: [], srpe: [] }).weekStarts,
+    ).toEqual([]);
   });
 });
 

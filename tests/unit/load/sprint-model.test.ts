@@ -137,7 +137,10 @@ describe("metresAtOrAbove: analytic threshold metres", () => {
 
   it("equals total − x(t*) with t* = −τ·ln(1 − speed/target)", () => {
     const tStar = -1.1 * Math.log(1 - 5.5 / 9.5);
-    expect(metresAtOrAbove(5.5, { targetSpeed: 9.5, tau: 1.1, totalDistance: 40 })).toBeCloseTo(40 - distanceAt(tStar, 9.5, 1.1), 12);
+    expect(metresAtOrAbove(5.5, { targetSpeed: 9.5, tau: 1.1, totalDistance: 40 })).toBeCloseTo(
+      40 - distanceAt(tStar, 9.5, 1.1),
+      12,
+    );
   });
 
   it("is 0 when the threshold is at or above the target (the model only approaches the target)", () => {

@@ -17,23 +17,78 @@ function blockFor(rng: () => number, id: string): BlockInput {
 function blockBody(rng: () => number, id: string): BlockInput {
   const r = rng();
   if (r < 0.22) {
-    return { id, kind: "acceleration", title: "Starts", running: { sets: 2, reps: 3 + Math.floor(rng() * 3), distanceM: pick(rng, [10, 20, 30]), intensityPct: 95, start: pick(rng, ["crouch", "blocks", "standing"] as const), runInM: 0, restSec: 180 } };
+    return {
+      id,
+      kind: "acceleration",
+      title: "Starts",
+      running: {
+        sets: 2,
+        reps: 3 + Math.floor(rng() * 3),
+        distanceM: pick(rng, [10, 20, 30]),
+        intensityPct: 95,
+        start: pick(rng, ["crouch", "blocks", "standing"] as const),
+        runInM: 0,
+        restSec: 180,
+      },
+    };
   }
   if (r < 0.4) {
-    return { id, kind: "max_velocity", title: "Flys", running: { sets: 1, reps: 3 + Math.floor(rng() * 3), distanceM: pick(rng, [20, 30]), intensityPct: 95 + Math.floor(rng() * 5), start: "flying", runInM: 20 + Math.floor(rng() * 3) * 5, restSec: 300 } };
+    return {
+      id,
+      kind: "max_velocity",
+      title: "Flys",
+      running: {
+        sets: 1,
+        reps: 3 + Math.floor(rng() * 3),
+        distanceM: pick(rng, [20, 30]),
+        intensityPct: 95 + Math.floor(rng() * 5),
+        start: "flying",
+        runInM: 20 + Math.floor(rng() * 3) * 5,
+        restSec: 300,
+      },
+    };
   }
   if (r < 0.55) {
-    return { id, kind: "speed_endurance", title: "Speed endurance", running: { sets: 1, reps: 2 + Math.floor(rng() * 3), distanceM: pick(rng, [80, 120, 150]), intensityPct: 85 + Math.floor(rng() * 8), start: "standing", runInM: 0, restSec: 480 } };
+    return {
+      id,
+      kind: "speed_endurance",
+      title: "Speed endurance",
+      running: {
+        sets: 1,
+        reps: 2 + Math.floor(rng() * 3),
+        distanceM: pick(rng, [80, 120, 150]),
+        intensityPct: 85 + Math.floor(rng() * 8),
+        start: "standing",
+        runInM: 0,
+        restSec: 480,
+      },
+    };
   }
   if (r < 0.7) {
-    return { id, kind: "tempo", title: "Tempo", running: { sets: 2, reps: 5, distanceM: 100, intensityPct: 65 + Math.floor(rng() * 10), start: "standing", runInM: 0, restSec: 60 } };
+    return {
+      id,
+      kind: "tempo",
+      title: "Tempo",
+      running: {
+        sets: 2,
+        reps: 5,
+        distanceM: 100,
+        intensityPct: 65 + Math.floor(rng() * 10),
+        start: "standing",
+        runInM: 0,
+        restSec: 60,
+      },
+    };
   }
   if (r < 0.88) {
     return {
       id,
       kind: "plyometric",
       title: "Plyometrics",
-      drills: [drill(2 + Math.floor(rng() * 3), 8 + Math.floor(rng() * 5), 1, "low", "pogo hops"), drill(3, 6, pick(rng, [1, 2]), pick(rng, ["moderate", "high"] as const), "bounds")],
+      drills: [
+        drill(2 + Math.floor(rng() * 3), 8 + Math.floor(rng() * 5), 1, "low", "pogo hops"),
+        drill(3, 6, pick(rng, [1, 2]), pick(rng, ["moderate", "high"] as const), "bounds"),
+      ],
     };
   }
   return { id, kind: pick(rng, ["strength", "recovery"] as const), title: "Gym" };
@@ -82,7 +137,12 @@ export function synthAthlete(seed: number, start: string, days: number, today: s
     id: `ath-${seed}`,
     name: `Athlete ${seed}`,
     group: pick(rng, ["Short sprint", "Long sprint", "Hurdles"]),
-    profile: { vmax: 8.5 + rng() * 2, tau: 0.9 + rng() * 0.5, stepLengthM: rng() < 0.2 ? null : 2 + rng() * 0.5, plyoLevel: pick(rng, LEVELS) },
+    profile: {
+      vmax: 8.5 + rng() * 2,
+      tau: 0.9 + rng() * 0.5,
+      stepLengthM: rng() < 0.2 ? null : 2 + rng() * 0.5,
+      plyoLevel: pick(rng, LEVELS),
+    },
     sessions,
     logs,
   };

@@ -9,20 +9,42 @@ import { splitAthleteMoves } from "@/lib/notices/session-changes";
 import { sealToken, unsealToken } from "@/lib/notices/token-seal";
 
 const snap = (over: Partial<SessionSnapshot> = {}): SessionSnapshot => ({
-  id: 7, athleteId: 3, date: "2026-03-03", startTime: "17:30", durationMin: 60, title: "Flys", plannedRpe: 7,
-  status: "published", sequence: 0, updatedAt: new Date("2026-03-01T10:00:00Z"), notes: null, blocks: [], ...over,
+  id: 7,
+  athleteId: 3,
+  date: "2026-03-03",
+  startTime: "17:30",
+  durationMin: 60,
+  title: "Flys",
+  plannedRpe: 7,
+  status: "published",
+  sequence: 0,
+  updatedAt: new Date("2026-03-01T10:00:00Z"),
+  notes: null,
+  blocks: [],
+  ...over,
 });
-const change = (kind: SessionChange["kind"], before: SessionSnapshot | null, after: SessionSnapshot | null): SessionChange => ({ kind, athleteId: 3, sessionId: 7, before, after });
+const change = (
+  kind: SessionChange["kind"],
+  before: SessionSnapshot | null,
+  after: SessionSnapshot | null,
+): SessionChange => ({ kind, athleteId: 3, sessionId: 7, before, after });
 
 describe("calendarActionFor (RFC 5546 §3.2: REQUEST to add or update, CANCEL to remove)", () => {
   it("sends nothing for drafts", () => {
     expect(calendarActionFor(change("created", null, snap({ status: "draft" })))).toBeNull();
-    expect(calendarActionFor(change("updated", snap({ status: "draft" }), snap({ status: "draft", date: "2026-03-04" })))).toBeNull();
+    expect(
+      calendarActionFor(change("updated", snap({ status: "draft" }), snap({ status: "draft", date: "2026-03-04" }))),
+    ).toBeNull();
     expect(calendarActionFor(change("deleted", snap({ status: "draft" }), null))).toBeNull();
   });
   it("invites when a session becomes published (publish, or a cancelled one brought back)", () => {
-    expect(calendarActionFor(change("published", snap({ status: "draft" }), snap()))).toMatchObject({ method: "REQUEST", update: false });
-    expect(calendarActionFor(change("updated", snap({ status: "cancelled", sequence: 2 }), snap({ sequence: 3 })))).toMatchObject({ method: "REQUEST", update: false, session: { sequence: 3 } });
+    expect(calendarActionFor(change("published", snap({ status: "draft" }), snap()))).toMatchObject({
+      method: "REQUEST",
+      update: false,
+    });
+    expect(
+      calendarActionFor(change("updated", snap({ status: "cancelled", sequence: 2 }), snap({ sequence: 3 }))),
+    ).toMatchObject({ method: "REQUEST", update: false, session: { sequence: 3 } });
   });
   it("updates a published session that visibly changed, with a SEQUENCE above the last one sent", () => {
     const a = calendarActionFor(change("updated", snap({ sequence: 1 }), snap({ sequence: 1, startTime: "18:00" })));
@@ -30,14 +52,29 @@ describe("calendarActionFor (RFC 5546 §3.2: REQUEST to add or update, CANCEL to
     expect(calendarActionFor(change("updated", snap(), snap({ updatedAt: new Date() })))).toBeNull();
   });
   it("cancels a published session that is deleted, cancelled or taken back to draft", () => {
-    expect(calendarActionFor(change("deleted", snap({ sequence: 4 }), null))).toMatchObject({ method: "CANCEL", session: { sequence: 5, status: "cancelled" } });
-    expect(calendarActionFor(change("deleted", snap({ sequence: 4 }), snap({ status: "cancelled", sequence: 5 })))).toMatchObject({ method: "CANCEL", session: { sequence: 5 } });
-    expect(calendarActionFor(change("updated", snap({ sequence: 1 }), snap({ status: "draft", sequence: 1 })))).toMatchObject({ method: "CANCEL", session: { sequence: 2 } });
+    expect(calendarActionFor(change("deleted", snap({ sequence: 4 }), null))).toMatchObject({
+      method: "CANCEL",
+      session: { sequence: 5, status: "cancelled" },
+    });
+    expect(
+      calendarActionFor(change("deleted", snap({ sequence: 4 }), snap({ status: "cancelled", sequence: 5 }))),
+    ).toMatchObject({ method: "CANCEL", session: { sequence: 5 } });
+    expect(
+      calendarActionFor(change("updated", snap({ sequence: 1 }), snap({ status: "draft", sequence: 1 }))),
+    ).toMatchObject({ method: "CANCEL", session: { sequence: 2 } });
   });
 });
 
 describe("strongestByKind", () => {
-  const flag = (over: Partial<Flag>): Flag => ({ kind: "spike", level: "alert", date: "2026-03-03", value: 1.6, threshold: 1.5, reason: "r", ...over });
+  const flag = (over: Partial<Flag>): Flag => ({
+    kind: "spike",
+    level: "alert",
+    date: "2026-03-03",
+    value: 1.6,
+    threshold: 1.5,
+    reason: "r",
+    ...over,
+  });
   it("keeps one flag per alert kind: the one furthest past its threshold (recovery: the shortest gap)", () => {
     const out = strongestByKind(
       [
@@ -49,7 +86,10 @@ describe("strongestByKind", () => {
       ],
       ["spike", "weekly_jump", "recovery"],
     );
-    expect(out.map((c) => [c.kind, c.metric ?? null, c.value])).toEqual([["weekly_jump", "hsrM", 60], ["recovery", null, 20]]);
+    expect(out.map((c) => [c.kind, c.metric ?? null, c.value])).toEqual([
+      ["weekly_jump", "hsrM", 60],
+      ["recovery", null, 20],
+    ]);
   });
 });
 
@@ -78,9 +118,15 @@ describe("feed links and tokens", () => {
 describe("lastDigestSlot (07:00 in the team's zone)", () => {
   it("is today's 07:00 after 07:00 and yesterday's before, across the UK clock change", () => {
     // UK summer time from 29 March 2026 (common practice): 07:00 BST = 06:00 UTC.
-    expect(lastDigestSlot(new Date("2026-03-28T08:00:00Z"), "Europe/London").toISOString()).toBe("2026-03-28T07:00:00.000Z");
-    expect(lastDigestSlot(new Date("2026-03-30T06:30:00Z"), "Europe/London").toISOString()).toBe("2026-03-30T06:00:00.000Z");
-    expect(lastDigestSlot(new Date("2026-03-30T05:59:00Z"), "Europe/London").toISOString()).toBe("2026-03-29T06:00:00.000Z");
+    expect(lastDigestSlot(new Date("2026-03-28T08:00:00Z"), "Europe/London").toISOString()).toBe(
+      "2026-03-28T07:00:00.000Z",
+    );
+    expect(lastDigestSlot(new Date("2026-03-30T06:30:00Z"), "Europe/London").toISOString()).toBe(
+      "2026-03-30T06:00:00.000Z",
+    );
+    expect(lastDigestSlot(new Date("2026-03-30T05:59:00Z"), "Europe/London").toISOString()).toBe(
+      "2026-03-29T06:00:00.000Z",
+    );
   });
 });
 

@@ -16,22 +16,46 @@ const week = planWeek([
 
 describe("resolveDrop: which drop creates, adds a block, moves or copies", () => {
   it("a template on an empty day makes a new session", () => {
-    expect(resolveDrop({ week, source: { type: "template", templateId: 1 }, target: { type: "cell", athleteId: 3, date: tue } })).toEqual({
+    expect(
+      resolveDrop({
+        week,
+        source: { type: "template", templateId: 1 },
+        target: { type: "cell", athleteId: 3, date: tue },
+      }),
+    ).toEqual({
       ok: true,
       change: { kind: "create", templateId: 1, athleteId: 3, date: tue },
     });
   });
 
   it("a template on a day with a session adds a block to it", () => {
-    expect(resolveDrop({ week, source: { type: "template", templateId: 2 }, target: { type: "cell", athleteId: 1, date: tue } })).toEqual({
+    expect(
+      resolveDrop({
+        week,
+        source: { type: "template", templateId: 2 },
+        target: { type: "cell", athleteId: 1, date: tue },
+      }),
+    ).toEqual({
       ok: true,
       change: { kind: "add-block", templateId: 2, sessionId: mayaTue.id, athleteId: 1, date: tue },
     });
   });
 
   it("a cancelled or logged session does not take new blocks: a new session is made beside it", () => {
-    expect(resolveDrop({ week, source: { type: "template", templateId: 1 }, target: { type: "cell", athleteId: 2, date: tue } })).toMatchObject({ change: { kind: "create" } });
-    expect(resolveDrop({ week, source: { type: "template", templateId: 1 }, target: { type: "cell", athleteId: 1, date: logged.date } })).toMatchObject({ change: { kind: "create" } });
+    expect(
+      resolveDrop({
+        week,
+        source: { type: "template", templateId: 1 },
+        target: { type: "cell", athleteId: 2, date: tue },
+      }),
+    ).toMatchObject({ change: { kind: "create" } });
+    expect(
+      resolveDrop({
+        week,
+        source: { type: "template", templateId: 1 },
+        target: { type: "cell", athleteId: 1, date: logged.date },
+      }),
+    ).toMatchObject({ change: { kind: "create" } });
   });
 
   it("picks the earliest open session of the day", () => {
@@ -42,10 +66,23 @@ describe("resolveDrop: which drop creates, adds a block, moves or copies", () =>
   });
 
   it("a template on a group's day goes to every athlete of the group, joining sessions already there", () => {
-    const out = resolveDrop({ week, source: { type: "template", templateId: 1 }, target: { type: "group", groupId: 10, date: tue } });
+    const out = resolveDrop({
+      week,
+      source: { type: "template", templateId: 1 },
+      target: { type: "group", groupId: 10, date: tue },
+    });
     expect(out).toEqual({
       ok: true,
-      change: { kind: "group", templateId: 1, groupId: 10, date: tue, targets: [{ athleteId: 1, sessionId: mayaTue.id }, { athleteId: 2, sessionId: null }] },
+      change: {
+        kind: "group",
+        templateId: 1,
+        groupId: 10,
+        date: tue,
+        targets: [
+          { athleteId: 1, sessionId: mayaTue.id },
+          { athleteId: 2, sessionId: null },
+        ],
+      },
     });
   });
 
@@ -62,18 +99,79 @@ describe("resolveDrop: which drop creates, adds a block, moves or copies", () =>
   });
 
   it("dropping where it came from, or nowhere, changes nothing", () => {
-    expect(resolveDrop({ week, source: { type: "session", sessionId: mayaTue.id }, target: { type: "cell", athleteId: 1, date: tue } })).toBeNull();
+    expect(
+      resolveDrop({
+        week,
+        source: { type: "session", sessionId: mayaTue.id },
+        target: { type: "cell", athleteId: 1, date: tue },
+      }),
+    ).toBeNull();
     expect(resolveDrop({ week, source: { type: "template", templateId: 1 }, target: null })).toBeNull();
   });
 
   it("refuses with a reason: logged moves, cancelled cards, sessions on groups, unknown templates, days outside the week", () => {
     const reason = (o: ReturnType<typeof resolveDrop>) => (o && !o.ok ? o.reason : null);
-    expect(reason(resolveDrop({ week, source: { type: "session", sessionId: logged.id }, target: { type: "cell", athleteId: 1, date: thu } }))).toMatch(/logged/);
-    expect(resolveDrop({ week, source: { type: "session", sessionId: logged.id }, target: { type: "cell", athleteId: 1, date: thu }, copy: true })).toMatchObject({ ok: true, change: { kind: "copy" } });
-    expect(reason(resolveDrop({ week, source: { type: "session", sessionId: cancelled.id }, target: { type: "cell", athleteId: 2, date: thu } }))).toMatch(/cancelled/);
-    expect(reason(resolveDrop({ week, source: { type: "session", sessionId: mayaTue.id }, target: { type: "group", groupId: 10, date: thu } }))).toMatch(/groups take templates/);
-    expect(reason(resolveDrop({ week, source: { type: "template", templateId: 99 }, target: { type: "cell", athleteId: 1, date: thu } }))).toMatch(/no longer exists/);
-    expect(reason(resolveDrop({ week, source: { type: "template", templateId: 1 }, target: { type: "cell", athleteId: 1, date: addDaysTo(WEEK, 7) } }))).toMatch(/outside/);
-    expect(reason(resolveDrop({ week, source: { type: "template", templateId: 1 }, target: { type: "group", groupId: 99, date: thu } }))).toMatch(/no athletes/);
+    expect(
+      reason(
+        resolveDrop({
+          week,
+          source: { type: "session", sessionId: logged.id },
+          target: { type: "cell", athleteId: 1, date: thu },
+        }),
+      ),
+    ).toMatch(/logged/);
+    expect(
+      resolveDrop({
+        week,
+        source: { type: "session", sessionId: logged.id },
+        target: { type: "cell", athleteId: 1, date: thu },
+        copy: true,
+      }),
+    ).toMatchObject({ ok: true, change: { kind: "copy" } });
+    expect(
+      reason(
+        resolveDrop({
+          week,
+          source: { type: "session", sessionId: cancelled.id },
+          target: { type: "cell", athleteId: 2, date: thu },
+        }),
+      ),
+    ).toMatch(/cancelled/);
+    expect(
+      reason(
+        resolveDrop({
+          week,
+          source: { type: "session", sessionId: mayaTue.id },
+          target: { type: "group", groupId: 10, date: thu },
+        }),
+      ),
+    ).toMatch(/groups take templates/);
+    expect(
+      reason(
+        resolveDrop({
+          week,
+          source: { type: "template", templateId: 99 },
+          target: { type: "cell", athleteId: 1, date: thu },
+        }),
+      ),
+    ).toMatch(/no longer exists/);
+    expect(
+      reason(
+        resolveDrop({
+          week,
+          source: { type: "template", templateId: 1 },
+          target: { type: "cell", athleteId: 1, date: addDaysTo(WEEK, 7) },
+        }),
+      ),
+    ).toMatch(/outside/);
+    expect(
+      reason(
+        resolveDrop({
+          week,
+          source: { type: "template", templateId: 1 },
+          target: { type: "group", groupId: 99, date: thu },
+        }),
+      ),
+    ).toMatch(/no athletes/);
   });
 });

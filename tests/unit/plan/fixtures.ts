@@ -15,16 +15,73 @@ export const settings = { ...DEFAULT_TEAM_LOAD_SETTINGS };
 export const profile: AthleteProfile = { vmax: 9.6, tau: 1.15, stepLengthM: 2.15, plyoLevel: "intermediate" };
 
 export const templates: PlanTemplate[] = [
-  { id: 1, kind: "max_velocity", title: "Flying 30s", running: { sets: 1, reps: 4, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 }, drills: null, notes: null, durationMin: 50, plannedRpe: 7, version: 1 },
-  { id: 2, kind: "plyometric", title: "Bounds", running: null, drills: [{ name: "Bounding", sets: 4, reps: 10, contactsPerRep: 4, intensity: "high" }], notes: null, durationMin: 30, plannedRpe: 6, version: 1 },
-  { id: 3, kind: "speed_endurance", title: "Big 150s", running: { sets: 2, reps: 3, distanceM: 150, intensityPct: 92, start: "standing", runInM: 0, restSec: 600 }, drills: null, notes: null, durationMin: 100, plannedRpe: 9, version: 1 },
+  {
+    id: 1,
+    kind: "max_velocity",
+    title: "Flying 30s",
+    running: { sets: 1, reps: 4, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 },
+    drills: null,
+    notes: null,
+    durationMin: 50,
+    plannedRpe: 7,
+    version: 1,
+  },
+  {
+    id: 2,
+    kind: "plyometric",
+    title: "Bounds",
+    running: null,
+    drills: [{ name: "Bounding", sets: 4, reps: 10, contactsPerRep: 4, intensity: "high" }],
+    notes: null,
+    durationMin: 30,
+    plannedRpe: 6,
+    version: 1,
+  },
+  {
+    id: 3,
+    kind: "speed_endurance",
+    title: "Big 150s",
+    running: { sets: 2, reps: 3, distanceM: 150, intensityPct: 92, start: "standing", runInM: 0, restSec: 600 },
+    drills: null,
+    notes: null,
+    durationMin: 100,
+    plannedRpe: 9,
+    version: 1,
+  },
 ];
 
 let nextId = 1000;
 export function session(athleteId: number, date: string, over: Partial<PlanSession> = {}): PlanSession {
   const id = nextId++;
-  const blocks: PlanBlock[] = over.blocks ?? [{ id: nextId++, templateId: 1, position: 0, kind: "acceleration", title: "Starts", running: { sets: 1, reps: 5, distanceM: 20, intensityPct: 95, start: "crouch", runInM: 0, restSec: 180 }, drills: null, notes: null }];
-  return { id, athleteId, date, startTime: "17:00", durationMin: 40, title: "Starts", plannedRpe: 5, status: "draft", notes: null, version: 1, sequence: 0, publishedAt: null, logged: false, ...over, blocks };
+  const blocks: PlanBlock[] = over.blocks ?? [
+    {
+      id: nextId++,
+      templateId: 1,
+      position: 0,
+      kind: "acceleration",
+      title: "Starts",
+      running: { sets: 1, reps: 5, distanceM: 20, intensityPct: 95, start: "crouch", runInM: 0, restSec: 180 },
+      drills: null,
+      notes: null,
+    },
+  ];
+  return {
+    id,
+    athleteId,
+    date,
+    startTime: "17:00",
+    durationMin: 40,
+    title: "Starts",
+    plannedRpe: 5,
+    status: "draft",
+    notes: null,
+    version: 1,
+    sequence: 0,
+    publishedAt: null,
+    logged: false,
+    ...over,
+    blocks,
+  };
 }
 
 export type Past = { sessions: SessionInput[]; logs: LogInput[] };
@@ -44,13 +101,23 @@ export function history(athleteId: number, weeks = 5): Past {
 
 const NO_PAST: Past = { sessions: [], logs: [] };
 type AthleteSpec = { id: number; name: string; groupId: number | null; past?: Past; sessions: PlanSession[] };
-const all = (a: AthleteSpec, sessions: PlanSession[]) => [...(a.past ?? NO_PAST).sessions, ...sessions.map(toSessionInput)];
+const all = (a: AthleteSpec, sessions: PlanSession[]) => [
+  ...(a.past ?? NO_PAST).sessions,
+  ...sessions.map(toSessionInput),
+];
 const logsOf = (a: AthleteSpec) => (a.past ?? NO_PAST).logs;
 
 /** A PlanWeek built like the server does: context from buildWeekPreviewContext, load from computeSquadWeek. */
 export function planWeek(specs: AthleteSpec[]): PlanWeek {
   const rows = computeSquadWeek(
-    specs.map((a) => ({ id: String(a.id), name: a.name, group: null, profile, sessions: all(a, a.sessions), logs: logsOf(a) })),
+    specs.map((a) => ({
+      id: String(a.id),
+      name: a.name,
+      group: null,
+      profile,
+      sessions: all(a, a.sessions),
+      logs: logsOf(a),
+    })),
     settings,
     WEEK,
     TODAY,
@@ -64,7 +131,17 @@ export function planWeek(specs: AthleteSpec[]): PlanWeek {
     sessions: a.sessions,
     logs: [],
     // Compacted exactly as lib/data/plan.ts sends it, so the equality tests cover the compaction too.
-    context: compactContext(buildWeekPreviewContext({ profile, settings, sessions: all(a, a.sessions), logs: logsOf(a), weekStart: WEEK, today: TODAY }), settings.acwrMetric),
+    context: compactContext(
+      buildWeekPreviewContext({
+        profile,
+        settings,
+        sessions: all(a, a.sessions),
+        logs: logsOf(a),
+        weekStart: WEEK,
+        today: TODAY,
+      }),
+      settings.acwrMetric,
+    ),
     load: { week: rows[i].week, flags: rows[i].flags, topLevel: topFlagLevel(rows[i].flags) },
   }));
   const groupIds = [...new Set(specs.map((a) => a.groupId))];
@@ -79,7 +156,11 @@ export function planWeek(specs: AthleteSpec[]): PlanWeek {
     days: weekDays(WEEK),
     today: TODAY,
     settings,
-    groups: groupIds.map((g) => ({ id: g, name: g === null ? "No group" : `Group ${g}`, athleteIds: specs.filter((a) => a.groupId === g).map((a) => a.id) })),
+    groups: groupIds.map((g) => ({
+      id: g,
+      name: g === null ? "No group" : `Group ${g}`,
+      athleteIds: specs.filter((a) => a.groupId === g).map((a) => a.id),
+    })),
     athletes,
     templates,
     restrictions: [],

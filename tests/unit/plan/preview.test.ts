@@ -20,7 +20,11 @@ function expectPreviewMatchesServer(change: PlanChange) {
   const after = sessionsAfter(week, change, tempIdCounter(-1_000_000));
   expect(preview.length).toBeGreaterThan(0);
   for (const row of preview) {
-    const server = serverRow(week, specs.find((s) => s.id === row.athleteId)!, after.get(row.athleteId)!);
+    const server = serverRow(
+      week,
+      specs.find((s) => s.id === row.athleteId)!,
+      after.get(row.athleteId)!,
+    );
     expect(row.after.week).toEqual(server.week);
     expect(row.after.flags).toEqual(server.flags);
   }
@@ -38,10 +42,35 @@ describe("the drag preview computes what the server will store", () => {
 
   it.each<[string, PlanChange]>([
     ["a new session", { kind: "create", templateId: 1, athleteId: 1, date: addDaysTo(WEEK, 4) }],
-    ["an added block", { kind: "add-block", templateId: 2, sessionId: specs[0].sessions[0].id, athleteId: 1, date: mon }],
-    ["a move to another athlete", { kind: "move", sessionId: specs[0].sessions[1].id, athleteId: 2, date: addDaysTo(WEEK, 5), fromAthleteId: 1, fromDate: wed }],
+    [
+      "an added block",
+      { kind: "add-block", templateId: 2, sessionId: specs[0].sessions[0].id, athleteId: 1, date: mon },
+    ],
+    [
+      "a move to another athlete",
+      {
+        kind: "move",
+        sessionId: specs[0].sessions[1].id,
+        athleteId: 2,
+        date: addDaysTo(WEEK, 5),
+        fromAthleteId: 1,
+        fromDate: wed,
+      },
+    ],
     ["a copy", { kind: "copy", sessionId: specs[0].sessions[0].id, athleteId: 2, date: tue }],
-    ["a group drop", { kind: "group", templateId: 3, groupId: 10, date: tue, targets: [{ athleteId: 1, sessionId: null }, { athleteId: 2, sessionId: null }] }],
+    [
+      "a group drop",
+      {
+        kind: "group",
+        templateId: 3,
+        groupId: 10,
+        date: tue,
+        targets: [
+          { athleteId: 1, sessionId: null },
+          { athleteId: 2, sessionId: null },
+        ],
+      },
+    ],
   ])("%s", (_name, change) => {
     expectPreviewMatchesServer(change);
   });
@@ -64,13 +93,51 @@ describe("a drop that raises a flag is marked with the reason", () => {
   });
 
   it("max-velocity work the day after max-velocity work breaks the 48 h rule", () => {
-    const base = planWeek([{ id: 1, name: "Maya", groupId: 10, past: history(1), sessions: [session(1, mon, { blocks: [{ id: 5, templateId: 1, position: 0, kind: "max_velocity", title: "Fly", running: { sets: 1, reps: 3, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 }, drills: null, notes: null }] })] }]);
+    const base = planWeek([
+      {
+        id: 1,
+        name: "Maya",
+        groupId: 10,
+        past: history(1),
+        sessions: [
+          session(1, mon, {
+            blocks: [
+              {
+                id: 5,
+                templateId: 1,
+                position: 0,
+                kind: "max_velocity",
+                title: "Fly",
+                running: {
+                  sets: 1,
+                  reps: 3,
+                  distanceM: 30,
+                  intensityPct: 95,
+                  start: "flying",
+                  runInM: 20,
+                  restSec: 240,
+                },
+                drills: null,
+                notes: null,
+              },
+            ],
+          }),
+        ],
+      },
+    ]);
     const [row] = previewChange(base, { kind: "create", templateId: 1, athleteId: 1, date: tue });
     expect(row.warnings.find((f) => f.kind === "recovery")?.reason).toMatch(/less than the 48 h recovery window/);
   });
 
   it("160 bounding contacts are above the intermediate range (NSCA 100–120 per session)", () => {
-    const heavy = { ...week, templates: week.templates.map((t) => (t.id === 2 ? { ...t, drills: [{ name: "Bounding", sets: 4, reps: 10, contactsPerRep: 4, intensity: "high" as const }] } : t)) };
+    const heavy = {
+      ...week,
+      templates: week.templates.map((t) =>
+        t.id === 2
+          ? { ...t, drills: [{ name: "Bounding", sets: 4, reps: 10, contactsPerRep: 4, intensity: "high" as const }] }
+          : t,
+      ),
+    };
     const [row] = previewChange(heavy, { kind: "create", templateId: 2, athleteId: 1, date: addDaysTo(WEEK, 5) });
     expect(row.warnings.find((f) => f.kind === "plyo_volume")?.reason).toMatch(/160 ground contacts, above 120/);
   });

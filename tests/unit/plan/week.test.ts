@@ -7,7 +7,15 @@ describe("team weeks in the team's zone", () => {
     expect(teamWeekStart("2026-03-02", 1)).toBe("2026-03-02");
     expect(teamWeekStart("2026-03-05", 7)).toBe("2026-03-01");
     expect(teamWeekStart("2026-03-01", 1)).toBe("2026-02-23");
-    expect(weekDays("2026-02-23")).toEqual(["2026-02-23", "2026-02-24", "2026-02-25", "2026-02-26", "2026-02-27", "2026-02-28", "2026-03-01"]);
+    expect(weekDays("2026-02-23")).toEqual([
+      "2026-02-23",
+      "2026-02-24",
+      "2026-02-25",
+      "2026-02-26",
+      "2026-02-27",
+      "2026-02-28",
+      "2026-03-01",
+    ]);
   });
 
   it("numbers weeks by ISO 8601: week 1 holds the year's first Thursday", () => {

@@ -1,20 +1,59 @@
 import { describe, expect, it } from "vitest";
 import type { BlockInput } from "@/lib/load/types";
-import { describeRestriction, isActiveOn, isCurrent, lastDay, newHits, restrictionHits, ruleBreaches, type Restriction } from "@/lib/restrictions/rules";
+import {
+  describeRestriction,
+  isActiveOn,
+  isCurrent,
+  lastDay,
+  newHits,
+  restrictionHits,
+  ruleBreaches,
+  type Restriction,
+} from "@/lib/restrictions/rules";
 
 // Invented restrictions and sessions. Limiting a block kind, a running intensity or the ground contacts per
 // session while an injury settles is common practice in return-to-sprint plans.
 
 const base = { athleteId: 7, note: "Hamstring settling", setByName: "Physio", endsOn: null, liftedOn: null } as const;
-const noFlys: Restriction = { ...base, id: 1, rule: "no_kind", blockKinds: ["max_velocity"], startsOn: "2026-12-07", endsOn: "2026-12-18" };
+const noFlys: Restriction = {
+  ...base,
+  id: 1,
+  rule: "no_kind",
+  blockKinds: ["max_velocity"],
+  startsOn: "2026-12-07",
+  endsOn: "2026-12-18",
+};
 const cap85: Restriction = { ...base, id: 2, rule: "max_intensity", maxPct: 85, startsOn: "2026-12-01" };
-const contacts60: Restriction = { ...base, id: 3, rule: "contact_cap", maxContacts: 60, startsOn: "2026-12-01", liftedOn: "2026-12-10" };
+const contacts60: Restriction = {
+  ...base,
+  id: 3,
+  rule: "contact_cap",
+  maxContacts: 60,
+  startsOn: "2026-12-01",
+  liftedOn: "2026-12-10",
+};
 
-const flys: BlockInput = { kind: "max_velocity", title: "Flying 30s", running: { sets: 1, reps: 4, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 } };
-const tempo: BlockInput = { kind: "tempo", title: "Tempo 100s", running: { sets: 2, reps: 5, distanceM: 100, intensityPct: 70, start: "standing", runInM: 0, restSec: 60 } };
+const flys: BlockInput = {
+  kind: "max_velocity",
+  title: "Flying 30s",
+  running: { sets: 1, reps: 4, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 },
+};
+const tempo: BlockInput = {
+  kind: "tempo",
+  title: "Tempo 100s",
+  running: { sets: 2, reps: 5, distanceM: 100, intensityPct: 70, start: "standing", runInM: 0, restSec: 60 },
+};
 // NSCA (Potach & Chu): one contact per landing, so 4 × 10 bounds at 2 contacts per rep = 80 contacts.
-const bounds: BlockInput = { kind: "plyometric", title: "Bounds", drills: [{ name: "Bounding", sets: 4, reps: 10, contactsPerRep: 2, intensity: "high" }] };
-const pogos: BlockInput = { kind: "plyometric", title: "Pogos", drills: [{ name: "Pogo", sets: 3, reps: 20, contactsPerRep: 1, intensity: "low" }] };
+const bounds: BlockInput = {
+  kind: "plyometric",
+  title: "Bounds",
+  drills: [{ name: "Bounding", sets: 4, reps: 10, contactsPerRep: 2, intensity: "high" }],
+};
+const pogos: BlockInput = {
+  kind: "plyometric",
+  title: "Pogos",
+  drills: [{ name: "Pogo", sets: 3, reps: 20, contactsPerRep: 1, intensity: "low" }],
+};
 
 describe("restriction dates", () => {
   it("applies from its first to its last day, both included", () => {
@@ -67,14 +106,21 @@ describe("which sessions break a restriction", () => {
   it("a contact cap: the whole session's contacts (NSCA count) above the cap; the cap itself passes", () => {
     expect(ruleBreaches(contacts60, [bounds])).toEqual(["80 ground contacts in the session"]);
     expect(ruleBreaches(contacts60, [pogos])).toEqual([]); // 3 × 20 × 1 = 60
-    expect(ruleBreaches(contacts60, [pogos, { ...pogos, title: "More pogos" }])).toEqual(["120 ground contacts in the session"]);
+    expect(ruleBreaches(contacts60, [pogos, { ...pogos, title: "More pogos" }])).toEqual([
+      "120 ground contacts in the session",
+    ]);
   });
 
   it("only the athlete's own restrictions, only on days they apply, never on a cancelled session", () => {
     const all = [noFlys, cap85, contacts60];
     const hits = restrictionHits(all, { athleteId: 7, date: "2026-12-08", blocks: [flys, bounds] });
     expect(hits.map((h) => h.restrictionId)).toEqual([1, 2, 3]);
-    expect(hits[0]).toMatchObject({ athleteId: 7, date: "2026-12-08", rule: "No max velocity, Mon 7 Dec – Fri 18 Dec", detail: "Flying 30s: max velocity" });
+    expect(hits[0]).toMatchObject({
+      athleteId: 7,
+      date: "2026-12-08",
+      rule: "No max velocity, Mon 7 Dec – Fri 18 Dec",
+      detail: "Flying 30s: max velocity",
+    });
     expect(restrictionHits(all, { athleteId: 8, date: "2026-12-08", blocks: [flys, bounds] })).toEqual([]);
     expect(restrictionHits(all, { athleteId: 7, date: "2026-12-12", blocks: [bounds] })).toEqual([]);
     expect(restrictionHits(all, { athleteId: 7, date: "2026-12-08", status: "cancelled", blocks: [flys] })).toEqual([]);

@@ -18,7 +18,8 @@ describe("lineText / noteText", () => {
   const line = lineText().max(50);
   const note = noteText().max(50);
   it("refuses every control character inside the text", () => {
-    for (const c of [...CONTROLS, "\t", "\n", "\r", "\u2028", "\ud800"]) expect(line.safeParse(`a${c}b`).success, JSON.stringify(c)).toBe(false);
+    for (const c of [...CONTROLS, "\t", "\n", "\r", "\u2028", "\ud800"])
+      expect(line.safeParse(`a${c}b`).success, JSON.stringify(c)).toBe(false);
     for (const c of CONTROLS) expect(note.safeParse(`a${c}b`).success, JSON.stringify(c)).toBe(false);
     expect(note.safeParse("a\ud800b").success).toBe(false);
   });
@@ -31,22 +32,97 @@ describe("lineText / noteText", () => {
 
 // Every text field of every input schema, each with a valid body: a NUL at that path must be refused there.
 const block = { kind: "recovery", title: "Jog", running: null, drills: null, notes: "easy" };
-const plyo = { kind: "plyometric", title: "Hops", running: null, drills: [{ name: "Pogo", sets: 1, reps: 10, contactsPerRep: 2, intensity: "low" }], notes: null };
+const plyo = {
+  kind: "plyometric",
+  title: "Hops",
+  running: null,
+  drills: [{ name: "Pogo", sets: 1, reps: 10, contactsPerRep: 2, intensity: "low" }],
+  notes: null,
+};
 const cases: [string, z.ZodType, unknown, (string | number)[]][] = [
   ["alert note", alertActionSchema, { action: "resolve", note: "done" }, ["note"]],
   ["athlete name", athleteSchema, { name: "Ada", plyoLevel: "beginner" }, ["name"]],
   ["sign-in e-mail", signInSchema, { email: "a@b.test", password: "x" }, ["email"]],
   ["forgotten-password e-mail", forgotPasswordSchema, { email: "a@b.test" }, ["email"]],
-  ["preview session id", loadPreviewSchema, { teamId: 1, athleteId: 1, week: "2026-03-02", sessions: [{ id: "new-1", date: "2026-03-02", durationMin: 30, plannedRpe: 4, blocks: [] }] }, ["sessions", 0, "id"]],
+  [
+    "preview session id",
+    loadPreviewSchema,
+    {
+      teamId: 1,
+      athleteId: 1,
+      week: "2026-03-02",
+      sessions: [{ id: "new-1", date: "2026-03-02", durationMin: 30, plannedRpe: 4, blocks: [] }],
+    },
+    ["sessions", 0, "id"],
+  ],
   ["log notes", sessionLogSchema, { completion: "yes", notes: "fine" }, ["notes"]],
   ["member name", addMemberSchema, { name: "Pia", email: "p@b.test", role: "physio" }, ["name"]],
   ["member e-mail", addMemberSchema, { name: "Pia", email: "p@b.test", role: "physio" }, ["email"]],
-  ["session title", createSessionSchema, { from: "blank", athleteId: 1, date: "2026-03-02", durationMin: 30, title: "Speed", plannedRpe: 4, notes: "n", blocks: [block] }, ["title"]],
-  ["session notes", createSessionSchema, { from: "blank", athleteId: 1, date: "2026-03-02", durationMin: 30, title: "Speed", plannedRpe: 4, notes: "n", blocks: [block] }, ["notes"]],
-  ["block title", createSessionSchema, { from: "blank", athleteId: 1, date: "2026-03-02", durationMin: 30, title: "Speed", plannedRpe: 4, blocks: [block] }, ["blocks", 0, "title"]],
-  ["block notes", createSessionSchema, { from: "blank", athleteId: 1, date: "2026-03-02", durationMin: 30, title: "Speed", plannedRpe: 4, blocks: [block] }, ["blocks", 0, "notes"]],
+  [
+    "session title",
+    createSessionSchema,
+    {
+      from: "blank",
+      athleteId: 1,
+      date: "2026-03-02",
+      durationMin: 30,
+      title: "Speed",
+      plannedRpe: 4,
+      notes: "n",
+      blocks: [block],
+    },
+    ["title"],
+  ],
+  [
+    "session notes",
+    createSessionSchema,
+    {
+      from: "blank",
+      athleteId: 1,
+      date: "2026-03-02",
+      durationMin: 30,
+      title: "Speed",
+      plannedRpe: 4,
+      notes: "n",
+      blocks: [block],
+    },
+    ["notes"],
+  ],
+  [
+    "block title",
+    createSessionSchema,
+    {
+      from: "blank",
+      athleteId: 1,
+      date: "2026-03-02",
+      durationMin: 30,
+      title: "Speed",
+      plannedRpe: 4,
+      blocks: [block],
+    },
+    ["blocks", 0, "title"],
+  ],
+  [
+    "block notes",
+    createSessionSchema,
+    {
+      from: "blank",
+      athleteId: 1,
+      date: "2026-03-02",
+      durationMin: 30,
+      title: "Speed",
+      plannedRpe: 4,
+      blocks: [block],
+    },
+    ["blocks", 0, "notes"],
+  ],
   ["override reason", overrideSchema, { reason: "race prep" }, ["reason"]],
-  ["restriction note", createRestrictionSchema, { rule: "contact_cap", maxContacts: 50, startsOn: "2026-03-02", note: "ankle" }, ["note"]],
+  [
+    "restriction note",
+    createRestrictionSchema,
+    { rule: "contact_cap", maxContacts: 50, startsOn: "2026-03-02", note: "ankle" },
+    ["note"],
+  ],
   ["template title", templateSchema, { ...plyo, durationMin: 20, plannedRpe: 4 }, ["title"]],
   ["drill name", templateSchema, { ...plyo, durationMin: 20, plannedRpe: 4 }, ["drills", 0, "name"]],
 ];

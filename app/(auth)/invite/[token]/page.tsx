@@ -20,7 +20,9 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
     return (
       <>
         <h1 className="text-xl font-semibold text-ink-950">This link no longer works</h1>
-        <p className="mt-2 text-sm text-ink-600">It has expired or was already used. Ask your head coach for a new one.</p>
+        <p className="mt-2 text-sm text-ink-600">
+          It has expired or was already used. Ask your head coach for a new one.
+        </p>
         <Link href="/sign-in" className="mt-6 inline-block text-sm font-medium text-lane-700 underline">
           Go to sign-in
         </Link>
@@ -40,7 +42,9 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
   if (!invitation.hasPassword) {
     return (
       <>
-        <h1 className="text-xl font-semibold text-ink-950">{invitation.name ? `Welcome, ${invitation.name}` : "Welcome"}</h1>
+        <h1 className="text-xl font-semibold text-ink-950">
+          {invitation.name ? `Welcome, ${invitation.name}` : "Welcome"}
+        </h1>
         <p className="mt-1 text-sm text-ink-500">
           Choose a password for {invitation.email} to join {invitation.teamName} as {role}.
         </p>
@@ -55,12 +59,17 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
     <>
       <h1 className="text-xl font-semibold text-ink-950">Join {invitation.teamName}</h1>
       <p className="mt-1 text-sm text-ink-500" data-testid="invite-lead">
-        {invitation.teamName} invited {invitation.email} to join as {role}. The team sees nothing of your account until you accept.
+        {invitation.teamName} invited {invitation.email} to join as {role}. The team sees nothing of your account until
+        you accept.
       </p>
       {viewerId === invitation.userId ? (
         <JoinTeamForm token={token} teamName={invitation.teamName} />
       ) : viewerId ? (
-        <p role="alert" className="mt-6 rounded-lg bg-flag-climb-soft px-3 py-2 text-sm text-ink-800" data-testid="invite-wrong-account">
+        <p
+          role="alert"
+          className="mt-6 rounded-lg bg-flag-climb-soft px-3 py-2 text-sm text-ink-800"
+          data-testid="invite-wrong-account"
+        >
           You are signed in with another account. Sign out, then sign in as {invitation.email} and open this link again.
         </p>
       ) : (

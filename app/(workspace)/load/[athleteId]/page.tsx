@@ -11,7 +11,12 @@ export default async function AthleteLoadPage({ params }: { params: Promise<{ at
   const { athleteId } = await params;
   // An athlete reaches only their own page; anyone else's id is "not found".
   const viewer = await pageAthlete(Number(athleteId), "load:view");
-  const initial = await getAthleteLoad({ teamId: viewer.athlete.teamId, athleteId: viewer.athlete.id, view: "projected", withDrafts: viewer.role !== "athlete" });
+  const initial = await getAthleteLoad({
+    teamId: viewer.athlete.teamId,
+    athleteId: viewer.athlete.id,
+    view: "projected",
+    withDrafts: viewer.role !== "athlete",
+  });
   const p = initial.athlete.profile;
   const staff = viewer.role !== "athlete";
   return (

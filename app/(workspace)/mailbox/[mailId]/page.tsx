@@ -30,11 +30,13 @@ export default async function MailPage({ params }: { params: Promise<{ mailId: s
           <dt className="text-ink-500">From</dt>
           <dd className="break-all">{mail.from}</dd>
           <dt className="text-ink-500">To</dt>
-          <dd className="break-all" data-testid="mail-to">{mail.to.join(", ")}</dd>
+          <dd className="break-all" data-testid="mail-to">
+            {mail.to.join(", ")}
+          </dd>
           <dt className="text-ink-500">Received</dt>
           <dd>{new Date(mail.receivedAt).toLocaleString("en-GB")}</dd>
           <dt className="text-ink-500">Message-ID</dt>
-          <dd className="break-all font-mono text-xs">{mail.messageId}</dd>
+          <dd className="font-mono text-xs break-all">{mail.messageId}</dd>
         </dl>
         <a href={`/api/mailbox/${mail.id}/raw`} className="mt-3 inline-block text-lane-700 hover:underline">
           Download .eml
@@ -43,18 +45,24 @@ export default async function MailPage({ params }: { params: Promise<{ mailId: s
 
       <div className="grid gap-4 xl:grid-cols-2">
         <section>
-          <h2 className="mb-2 text-sm font-semibold uppercase tracking-wider text-ink-500">HTML part</h2>
+          <h2 className="mb-2 text-sm font-semibold tracking-wider text-ink-500 uppercase">HTML part</h2>
           {mail.html ? (
             // sandbox="" : no scripts, no same-origin access, links cannot navigate this page.
-            <iframe title="HTML part" sandbox="" srcDoc={mail.html} className="h-[36rem] w-full rounded-card bg-white ring-1 ring-ink-100" data-testid="mail-html" />
+            <iframe
+              title="HTML part"
+              sandbox=""
+              srcDoc={mail.html}
+              className="h-[36rem] w-full rounded-card bg-white ring-1 ring-ink-100"
+              data-testid="mail-html"
+            />
           ) : (
             <p className="text-sm text-ink-500">No HTML part.</p>
           )}
         </section>
         <section>
-          <h2 className="mb-2 text-sm font-semibold uppercase tracking-wider text-ink-500">Text part</h2>
+          <h2 className="mb-2 text-sm font-semibold tracking-wider text-ink-500 uppercase">Text part</h2>
           <Card className="overflow-x-auto p-4">
-            <pre className="whitespace-pre-wrap break-words font-mono text-xs text-ink-800" data-testid="mail-text">
+            <pre className="font-mono text-xs break-words whitespace-pre-wrap text-ink-800" data-testid="mail-text">
               {mail.text}
             </pre>
           </Card>
@@ -63,20 +71,27 @@ export default async function MailPage({ params }: { params: Promise<{ mailId: s
 
       {mail.attachments.length > 0 ? (
         <section className="mt-6" data-testid="mail-attachments">
-          <h2 className="mb-2 text-sm font-semibold uppercase tracking-wider text-ink-500">Attachments</h2>
+          <h2 className="mb-2 text-sm font-semibold tracking-wider text-ink-500 uppercase">Attachments</h2>
           <div className="space-y-3">
             {mail.attachments.map((a, i) => (
               <Card key={i} className="p-4">
                 <div className="flex flex-wrap items-center justify-between gap-2">
                   <p className="text-sm font-medium text-ink-900">
-                    {a.filename ?? (isCalendar(a.contentType) ? "Calendar part" : `Attachment ${i + 1}`)} <Badge>{a.contentType}</Badge>
+                    {a.filename ?? (isCalendar(a.contentType) ? "Calendar part" : `Attachment ${i + 1}`)}{" "}
+                    <Badge>{a.contentType}</Badge>
                   </p>
-                  <a href={`/api/mailbox/${mail.id}/attachments/${i}`} className="text-sm text-lane-700 hover:underline">
+                  <a
+                    href={`/api/mailbox/${mail.id}/attachments/${i}`}
+                    className="text-sm text-lane-700 hover:underline"
+                  >
                     Download
                   </a>
                 </div>
                 {isCalendar(a.contentType) ? (
-                  <pre className="mt-3 max-h-80 overflow-auto whitespace-pre font-mono text-2xs text-ink-700" data-testid="mail-ics">
+                  <pre
+                    className="mt-3 max-h-80 overflow-auto font-mono text-2xs whitespace-pre text-ink-700"
+                    data-testid="mail-ics"
+                  >
                     {a.content}
                   </pre>
                 ) : null}

@@ -45,7 +45,7 @@ export default async function AthleteProfilePage({ params }: { params: Promise<{
           {facts.map(([k, v]) => (
             <div key={k}>
               <dt className="text-xs text-ink-500">{k}</dt>
-              <dd className="mt-0.5 font-medium tabular-nums text-ink-900">{v}</dd>
+              <dd className="mt-0.5 font-medium text-ink-900 tabular-nums">{v}</dd>
             </div>
           ))}
         </dl>

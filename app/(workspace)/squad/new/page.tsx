@@ -10,9 +10,27 @@ export default async function NewAthletePage() {
   const groups = await listGroups({ teamId: viewer.teamId });
   return (
     <>
-      <PageHeader title="Add athlete" lead="An athlete without a login. To let them sign in and log sessions, add them on the members screen later." />
+      <PageHeader
+        title="Add athlete"
+        lead="An athlete without a login. To let them sign in and log sessions, add them on the members screen later."
+      />
       <Card className="p-5">
-        <AthleteForm athleteId={null} groups={groups} initial={{ name: "", groupId: "", sex: "", birthDate: "", bodyMassKg: "", vmaxMs: "", vmaxTestedOn: "", tauS: "", stepLengthM: "", plyoLevel: "beginner" }} />
+        <AthleteForm
+          athleteId={null}
+          groups={groups}
+          initial={{
+            name: "",
+            groupId: "",
+            sex: "",
+            birthDate: "",
+            bodyMassKg: "",
+            vmaxMs: "",
+            vmaxTestedOn: "",
+            tauS: "",
+            stepLengthM: "",
+            plyoLevel: "beginner",
+          }}
+        />
       </Card>
     </>
   );

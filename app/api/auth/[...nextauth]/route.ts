@@ -22,7 +22,13 @@ async function POST(req: NextRequest, ctx: Ctx): Promise<Response> {
   }
   if (typeof body !== "object" || body === null || Array.isArray(body)) {
     return Response.json(
-      { error: { code: "invalid", message: "The request body must be a JSON object", fields: { _: ["Not a JSON object"] } } },
+      {
+        error: {
+          code: "invalid",
+          message: "The request body must be a JSON object",
+          fields: { _: ["Not a JSON object"] },
+        },
+      },
       { status: 400 },
     );
   }

@@ -13,12 +13,16 @@ async function staff() {
 
 export const GET = route(async () => {
   const viewer = await staff();
-  return Response.json(await getNotificationSettings({ userId: viewer.userId, teamId: viewer.teamId, role: viewer.role }));
+  return Response.json(
+    await getNotificationSettings({ userId: viewer.userId, teamId: viewer.teamId, role: viewer.role }),
+  );
 });
 
 /** PUT { alertEmail: "each" | "digest" | "off" } */
 export const PUT = route(async (req) => {
   const viewer = await staff();
   const input = await parseJson(req, notificationSettingsSchema);
-  return Response.json(await updateNotificationSettings({ userId: viewer.userId, teamId: viewer.teamId, alertEmail: input.alertEmail }));
+  return Response.json(
+    await updateNotificationSettings({ userId: viewer.userId, teamId: viewer.teamId, alertEmail: input.alertEmail }),
+  );
 });

@@ -17,6 +17,11 @@ export const PATCH = route<Params>(async (req, { params }) => {
   if (!owner) throw new AppError("not_found", "No such restriction");
   const viewer = await requireMember({ teamId: owner.teamId, can: "restrictions:edit" });
   await parseJson(req, restrictionActionSchema);
-  const restriction = await liftRestriction({ teamId: viewer.teamId, restrictionId, actorUserId: viewer.userId, today: teamToday({ timeZone: viewer.timeZone }) });
+  const restriction = await liftRestriction({
+    teamId: viewer.teamId,
+    restrictionId,
+    actorUserId: viewer.userId,
+    today: teamToday({ timeZone: viewer.timeZone }),
+  });
   return Response.json({ restriction });
 });

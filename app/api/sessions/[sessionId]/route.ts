@@ -16,7 +16,8 @@ export const GET = route<Params>(async (_req, { params }) => {
   const ref = await findSessionRef({ sessionId });
   if (!ref) throw new AppError("not_found", "Not found");
   const viewer = await requireAthlete({ athleteId: ref.athleteId, can: "plan:view" });
-  if (scopeOf(viewer.role, "plan:view") !== "team" && ref.status === "draft") throw new AppError("not_found", "Not found");
+  if (scopeOf(viewer.role, "plan:view") !== "team" && ref.status === "draft")
+    throw new AppError("not_found", "Not found");
   return Response.json({ session: await getSession({ teamId: ref.teamId, sessionId }) });
 });
 

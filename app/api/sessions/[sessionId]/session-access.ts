@@ -18,5 +18,8 @@ export async function sessionEditor(params: Promise<{ sessionId: string }>) {
 
 /** The write's answer with the server's week numbers for the athletes it touched. */
 export async function answer(ctx: { teamId: number; timeZone: string }, result: PlanWriteResult, status = 200) {
-  return Response.json(await withWeekRows({ teamId: ctx.teamId, today: teamToday({ timeZone: ctx.timeZone }), result }), { status });
+  return Response.json(
+    await withWeekRows({ teamId: ctx.teamId, today: teamToday({ timeZone: ctx.timeZone }), result }),
+    { status },
+  );
 }

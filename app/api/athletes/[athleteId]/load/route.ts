@@ -11,5 +11,13 @@ export const GET = route<{ athleteId: string }>(async (req, { params }) => {
   const { athleteId } = parseParams(await params, athleteParamsSchema);
   const viewer = await requireAthlete({ athleteId, can: "load:view" });
   const query = parseQuery(req, athleteLoadQuerySchema);
-  return Response.json(await getAthleteLoad({ teamId: viewer.athlete.teamId, athleteId, ...query, clock: viewerClock(viewer), withDrafts: viewer.role !== "athlete" }));
+  return Response.json(
+    await getAthleteLoad({
+      teamId: viewer.athlete.teamId,
+      athleteId,
+      ...query,
+      clock: viewerClock(viewer),
+      withDrafts: viewer.role !== "athlete",
+    }),
+  );
 });

@@ -12,6 +12,10 @@ export const GET = route<{ mailId: string }>(async (_req, { params }) => {
   const raw = await readRawMail({ id: mail.id });
   if (!raw) throw new AppError("not_found", "No such mail");
   return new Response(new Uint8Array(raw), {
-    headers: { "content-type": "message/rfc822", "content-disposition": `attachment; filename="${mail.id}.eml"`, "cache-control": "private, no-store" },
+    headers: {
+      "content-type": "message/rfc822",
+      "content-disposition": `attachment; filename="${mail.id}.eml"`,
+      "cache-control": "private, no-store",
+    },
   });
 });

@@ -20,14 +20,20 @@ async function authorized(params: Promise<Params>) {
   const target = await getLogTarget({ sessionId });
   if (!target) throw new AppError("not_found", "Not found");
   const viewer = await requireAthlete({ athleteId: target.athleteId, can: "log:write" });
-  if (target.status === "draft" && scopeOf(viewer.role, "plan:view") !== "team") throw new AppError("not_found", "Not found");
+  if (target.status === "draft" && scopeOf(viewer.role, "plan:view") !== "team")
+    throw new AppError("not_found", "Not found");
   return { target, viewer };
 }
 
 export const PUT = route<Params>(async (req, { params }) => {
   const { target, viewer } = await authorized(params);
   const input = await parseJson(req, sessionLogSchema);
-  const log = await saveSessionLog({ target, input, actorUserId: viewer.userId, today: teamToday({ timeZone: viewer.timeZone }) });
+  const log = await saveSessionLog({
+    target,
+    input,
+    actorUserId: viewer.userId,
+    today: teamToday({ timeZone: viewer.timeZone }),
+  });
   return Response.json({ log });
 });
 

@@ -14,6 +14,10 @@ export const GET = route<{ teamId: string }>(async (req, { params }) => {
   const { week } = parseQuery(req, weekQuerySchema);
   const today = teamToday({ timeZone: viewer.timeZone });
   const scope = scopeOf(viewer.role, "plan:view") === "team" ? "team" : "own";
-  const audience = { scope, canEdit: scopeOf(viewer.role, "plan:edit") === "team", ownAthleteId: viewer.athleteId } as const;
+  const audience = {
+    scope,
+    canEdit: scopeOf(viewer.role, "plan:edit") === "team",
+    ownAthleteId: viewer.athleteId,
+  } as const;
   return Response.json(await getPlanWeek({ teamId, date: week ?? today, today, audience }));
 });

@@ -11,5 +11,9 @@ export const POST = route<{ teamId: string }>(async (req, { params }) => {
   const { teamId } = parseParams(await params, teamParamsSchema);
   const viewer = await requireMember({ teamId, can: "plan:edit" });
   const input = await parseJson(req, createSessionSchema);
-  return answer({ teamId, timeZone: viewer.timeZone }, await createSessions({ teamId, actorUserId: viewer.userId, input }), 201);
+  return answer(
+    { teamId, timeZone: viewer.timeZone },
+    await createSessions({ teamId, actorUserId: viewer.userId, input }),
+    201,
+  );
 });

@@ -20,11 +20,16 @@ export const GET = route<{ mailId: string; index: string }>(async (_req, { param
   const mail = await mailFromParams(viewer, Promise.resolve({ mailId: p.mailId }));
   const attachment = mail.attachments[index];
   if (!attachment) throw new AppError("not_found", "No such attachment");
-  const body = attachment.encoding === "base64" ? Buffer.from(attachment.content, "base64") : Buffer.from(attachment.content, "utf8");
+  const body =
+    attachment.encoding === "base64"
+      ? Buffer.from(attachment.content, "base64")
+      : Buffer.from(attachment.content, "utf8");
   return new Response(new Uint8Array(body), {
     headers: {
       // Only calendar parts keep their type; anything else (an HTML part, say) must never render on our origin.
-      "content-type": /^(text\/calendar|application\/ics)\b/i.test(attachment.contentType) ? "text/calendar; charset=utf-8" : "application/octet-stream",
+      "content-type": /^(text\/calendar|application\/ics)\b/i.test(attachment.contentType)
+        ? "text/calendar; charset=utf-8"
+        : "application/octet-stream",
       "content-disposition": `attachment; filename="${safeName(attachment.filename, index, attachment.contentType)}"`,
       "x-content-type-options": "nosniff",
       "cache-control": "private, no-store",
