@@ -4,7 +4,7 @@
 import { loadavg } from "node:os";
 import { ACC_SIZE, evaluateSessionInto, resolveProfile } from "../lib/load/accumulate";
 import { computeAthleteLoad } from "../lib/load/athlete-load";
-import { addDays, dayIndex, startOfWeek } from "../lib/load/dates";
+import { addDays, dayIndex, startOfWeek } from "../lib/dates/plain-date";
 import { dailySeries, indexLogs, sessionUse } from "../lib/load/series";
 import { packSessions } from "../lib/load/packed";
 import { computeSquadWeek } from "../lib/load/squad";

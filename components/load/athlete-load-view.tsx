@@ -8,7 +8,7 @@ import { Card } from "@/components/ui/card";
 import { LoadCaution } from "@/components/ui/caution";
 import { Select } from "@/components/ui/field";
 import type { AthleteLoadDto } from "@/lib/data/load-views";
-import { addDays } from "@/lib/load/dates";
+import { addDays } from "@/lib/dates/plain-date";
 import { figuresHref } from "@/lib/load/figures-link";
 import { METRIC_INFO, METRICS, type LoadView, type Metric } from "@/lib/load/types";
 import { FlagList } from "./flag-list";

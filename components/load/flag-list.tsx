@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { formatDayLabel } from "@/lib/load/dates";
+import { formatDayLabel } from "@/lib/dates/plain-date";
 import { FLAG_TOPIC, figuresHref } from "@/lib/load/figures-link";
 import type { Flag } from "@/lib/load/flags";
 import { FlagBadge } from "./flag-badge";

@@ -1,7 +1,7 @@
 "use client";
 
 import { Button } from "@/components/ui/button";
-import { addDays, diffDays, formatDayLabel, startOfWeek } from "@/lib/load/dates";
+import { addDays, diffDays, formatDayLabel, startOfWeek } from "@/lib/dates/plain-date";
 
 /** Previous / this / next week, with the week's dates as the label. */
 export function WeekNav({

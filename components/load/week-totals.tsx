@@ -1,6 +1,6 @@
 import { Card } from "@/components/ui/card";
 import { formatNumber } from "@/lib/format/number";
-import { formatDayLabel } from "@/lib/load/dates";
+import { formatDayLabel } from "@/lib/dates/plain-date";
 import { METRIC_INFO, METRICS } from "@/lib/load/types";
 import type { WeekSummary } from "@/lib/load/week-summary";
 

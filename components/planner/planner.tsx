@@ -10,7 +10,7 @@ import { planWeekKey } from "@/lib/plan/keys";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
 import { typicalProfile } from "@/lib/plan/typical";
 import type { PlanSession, PlanTemplate, PlanWeek } from "@/lib/plan/types";
-import { teamWeekStart } from "@/lib/plan/week";
+import { startOfWeek } from "@/lib/dates/plain-date";
 import { fetchWeek } from "./api";
 import { BlockShelf } from "./block-shelf";
 import { ConfirmProvider, removeQuestion, useConfirm } from "./confirm";
@@ -133,7 +133,7 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
 
   const go = useCallback(
     (date: string) => {
-      const start = teamWeekStart(date, weekBox.get()?.weekStartDay ?? 1);
+      const start = startOfWeek(date, weekBox.get()?.weekStartDay ?? 1);
       setWeekStart(start);
       clearUndo();
       window.history.replaceState(null, "", `/plan?week=${start}`);

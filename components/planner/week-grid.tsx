@@ -4,7 +4,7 @@ import { clsx } from "clsx";
 import { memo, useMemo } from "react";
 import type { PlanWeek } from "@/lib/plan/types";
 import type { Restriction } from "@/lib/restrictions/rules";
-import { dayHeading } from "@/lib/plan/week";
+import { dayHeading } from "@/lib/dates/plain-date";
 import { AthleteRow } from "./athlete-row";
 import { GroupRow, groupKey } from "./group-row";
 import type { HoverStore } from "./hover-store";

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import type { PlanWeek } from "@/lib/plan/types";
-import { shiftWeek, weekRangeLabel } from "@/lib/plan/week";
+import { shiftWeek, weekRangeLabel } from "@/lib/dates/plain-date";
 import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/field";
 import type { UndoEntry } from "@/lib/plan/undo";

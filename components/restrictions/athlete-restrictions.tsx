@@ -1,7 +1,7 @@
 import "server-only";
 import { scopeOf } from "@/lib/auth/permissions";
 import type { Viewer } from "@/lib/auth/access";
-import { teamToday } from "@/lib/data/load";
+import { teamToday } from "@/lib/dates/zoned";
 import { listAthleteRestrictions, listOverrides } from "@/lib/data/restrictions";
 import { RestrictionsCard } from "./restrictions-card";
 
@@ -14,7 +14,7 @@ export async function AthleteRestrictions({ viewer, athleteId }: { viewer: Viewe
   return (
     <RestrictionsCard
       athleteId={athleteId}
-      today={teamToday({ timeZone: viewer.timeZone })}
+      today={teamToday({ timeZone: viewer.timeZone, now: new Date() })}
       canEdit={scopeOf(viewer.role, "restrictions:edit") === "team"}
       initial={{ restrictions, overrides }}
     />

@@ -1,11 +1,9 @@
 import "server-only";
+import { addDays, dayIndex, startOfWeek } from "@/lib/dates/plain-date";
 import {
-  addDays,
   computeAthleteLoad,
   computeSquadWeek,
-  dayIndex,
   packSessions,
-  startOfWeek,
   type AthleteProfile,
   type Flag,
   type FlagLevel,
@@ -20,7 +18,8 @@ import {
 } from "@/lib/load";
 import { AppError } from "@/lib/errors";
 import type { LoadPreviewInput } from "@/lib/validations/load";
-import { getAthleteLoadInputs, getLoadSeriesInputs, getTeamClock, teamToday, type TeamClock } from "./load";
+import { teamToday, type TeamClock } from "@/lib/dates/zoned";
+import { getAthleteLoadInputs, getLoadSeriesInputs, getTeamClock } from "./load";
 
 /** The caller's already-known team clock (e.g. from the authorized viewer) saves a query on hot paths. */
 type Clock = Omit<TeamClock, "teamId">;
@@ -68,7 +67,7 @@ export type SquadWeekDto = {
 /** The squad's week: totals per metric, ACWR (provisional marked) and flags with reasons, one row per athlete. */
 export async function getSquadWeekLoad({ teamId, week, view, today, clock }: { teamId: number; week?: string; view: LoadView; today?: string; clock?: Clock }): Promise<SquadWeekDto> {
   const probe = clock ?? (await getTeamClock({ teamId }));
-  const now = today ?? teamToday({ timeZone: probe.timeZone });
+  const now = today ?? teamToday({ timeZone: probe.timeZone, now: new Date() });
   const weekStart = startOfWeek(week ?? now, probe.weekStartDay);
   const weekEnd = addDays(weekStart, 6);
   const inputs = await getLoadSeriesInputs({ teamId, through: weekEnd });
@@ -163,7 +162,7 @@ function defaultRange(today: string, weekStartDay: number): { from: string; to: 
  */
 export async function getAthleteLoad({ teamId, athleteId, from, to, view, metric, today, clock, withDrafts = true }: { teamId: number; athleteId: number; from?: string; to?: string; view: LoadView; metric?: Metric; today?: string; clock?: Clock; withDrafts?: boolean }): Promise<AthleteLoadDto> {
   const probe = clock ?? (await getTeamClock({ teamId }));
-  const now = today ?? teamToday({ timeZone: probe.timeZone });
+  const now = today ?? teamToday({ timeZone: probe.timeZone, now: new Date() });
   const fallback = defaultRange(now, probe.weekStartDay);
   const range = { from: from ?? (to ? addDays(to, -69) : fallback.from), to: to ?? (from ? addDays(from, 69) : fallback.to) };
   if (dayIndex(range.to) < dayIndex(range.from)) throw new AppError("invalid", "Invalid to", { fields: { to: ["Must be on or after from"] } });
@@ -228,7 +227,7 @@ export async function previewAthleteWeek({ input, today }: { input: LoadPreviewI
     if (s.date < weekStart || s.date > weekEnd) fields[`sessions.${i}.date`] = [`Must be inside the week ${weekStart} to ${weekEnd}`];
   });
   if (Object.keys(fields).length > 0) throw new AppError("invalid", `Invalid ${Object.keys(fields).join(", ")}`, { fields });
-  const now = today ?? teamToday({ timeZone: probe.timeZone });
+  const now = today ?? teamToday({ timeZone: probe.timeZone, now: new Date() });
   const inputs = await getAthleteLoadInputs({ athleteId: input.athleteId, through: weekEnd });
   // An athlete of another team is "not found", whatever the caller may do in its own team.
   if (inputs.teamId !== input.teamId) throw new AppError("not_found", "Not found");

@@ -1,5 +1,4 @@
 import "server-only";
-import { DateTime } from "luxon";
 import { QueryTypes, type Transaction } from "sequelize";
 import type {
   AthleteProfile,
@@ -14,6 +13,7 @@ import type {
   SessionStatus,
   TeamLoadSettings,
 } from "@/lib/load/types";
+import type { TeamClock } from "@/lib/dates/zoned";
 import { AppError } from "@/lib/errors";
 import { db } from "@/models";
 import { SETTINGS_SQL_COLUMNS, toEngineSettings, type SettingsRow } from "./team-settings";
@@ -34,7 +34,7 @@ export type LoadInputs = {
   teamId: number;
   settings: TeamLoadSettings;
   timeZone: string;
-  /** Engine convention: 0 = Sunday, 1 = Monday … 6 = Saturday (the Team row stores ISO 1–7). */
+  /** ISO weekday the team's week starts on (1 = Monday … 7 = Sunday). */
   weekStartDay: number;
   athletes: LoadAthleteInputs[];
 };
@@ -46,30 +46,12 @@ export type LoadInputs = {
  */
 type Through = { through: string; transaction?: Transaction };
 
-/** Today's local date in the team's time zone: the one place the load feature reads the clock. */
-export function teamToday({ timeZone, now }: { timeZone: string; now?: Date }): string {
-  const dt = (now ? DateTime.fromJSDate(now) : DateTime.now()).setZone(timeZone);
-  return (dt.isValid ? dt : DateTime.utc()).toISODate()!;
-}
-
-/** ISO weekday (1 = Monday … 7 = Sunday) → engine weekday (0 = Sunday … 6 = Saturday). */
-export function engineWeekStartDay(isoWeekday: number): number {
-  return ((isoWeekday % 7) + 7) % 7;
-}
-
-export type TeamClock = { teamId: number; timeZone: string; weekStartDay: number };
-
-/** The clock of an authorized viewer (lib/auth Viewer carries the team's zone and ISO week start). */
-export function viewerClock(viewer: { timeZone: string; weekStartDay: number }): Omit<TeamClock, "teamId"> {
-  return { timeZone: viewer.timeZone, weekStartDay: engineWeekStartDay(viewer.weekStartDay) };
-}
-
-/** The team's zone and week start (engine convention); 404 when the team does not exist. */
+/** The team's zone and ISO week start; 404 when the team does not exist. */
 export async function getTeamClock({ teamId, transaction }: { teamId: number; transaction?: Transaction }): Promise<TeamClock> {
   const { Team } = await db();
   const team = await Team.findByPk(teamId, { attributes: ["timeZone", "weekStartDay"], raw: true, transaction });
   if (!team) throw new AppError("not_found", "Not found");
-  return { teamId, timeZone: team.timeZone, weekStartDay: engineWeekStartDay(team.weekStartDay) };
+  return { teamId, timeZone: team.timeZone, weekStartDay: team.weekStartDay };
 }
 
 // JSON columns come back from SQLite as text.
@@ -187,7 +169,7 @@ export async function getLoadSeriesInputs({ teamId, athleteIds, through, transac
   }
   const order = new Map(athletes.map((a) => [a.id, a.group_order ?? 1e9]));
   const list = [...byAthlete.values()].sort((x, y) => order.get(x.id)! - order.get(y.id)! || x.name.localeCompare(y.name));
-  return { teamId, settings, timeZone: team.time_zone, weekStartDay: engineWeekStartDay(team.week_start_day), athletes: list };
+  return { teamId, settings, timeZone: team.time_zone, weekStartDay: team.week_start_day, athletes: list };
 }
 
 /** One athlete's engine inputs (getLoadSeriesInputs for their team); 404 when the athlete does not exist. */

@@ -7,7 +7,7 @@ import { computeSquadWeek, type SquadAthleteInput } from "@/lib/load/squad";
 import { logsFor } from "@/lib/plan/blocks";
 import { compactContext } from "@/lib/plan/context";
 import type { PlanAthlete, PlanGroup, PlanSession, PlanWeek, PlanWriteResult, WeekRow } from "@/lib/plan/types";
-import { addDaysTo, isoWeekOf, teamWeekStart, weekDays } from "@/lib/plan/week";
+import { addDays, isoWeekOf, startOfWeek, weekDays } from "@/lib/dates/plain-date";
 import { db } from "@/models";
 import { listGroups } from "./athletes";
 import { getLoadSeriesInputs } from "./load";
@@ -25,8 +25,8 @@ export async function teamWeek({ teamId, date }: { teamId: number; date: string 
   const { Team } = await db();
   const team = await Team.findByPk(teamId, { attributes: ["timeZone", "weekStartDay"] });
   if (!team) throw new AppError("not_found", "Not found");
-  const weekStart = teamWeekStart(date, team.weekStartDay);
-  return { weekStart, weekEnd: addDaysTo(weekStart, 6), timeZone: team.timeZone, weekStartDay: team.weekStartDay };
+  const weekStart = startOfWeek(date, team.weekStartDay);
+  return { weekStart, weekEnd: addDays(weekStart, 6), timeZone: team.timeZone, weekStartDay: team.weekStartDay };
 }
 
 /**
@@ -106,13 +106,13 @@ export async function withWeekRows({ teamId, today, result }: { teamId: number; 
   const { weekStartDay } = await teamWeek({ teamId, date: touched[0].date });
   const weeks = new Map<string, Set<number>>();
   for (const t of touched) {
-    const ws = teamWeekStart(t.date, weekStartDay);
+    const ws = startOfWeek(t.date, weekStartDay);
     weeks.set(ws, (weeks.get(ws) ?? new Set()).add(t.athleteId));
   }
   const rows: WeekRow[] = [];
   for (const [weekStart, ids] of weeks) {
     // A drop touches one or two athletes: read just their history, not the whole squad's.
-    const inputs = await getLoadSeriesInputs({ teamId, athleteIds: [...ids], through: addDaysTo(weekStart, 6) });
+    const inputs = await getLoadSeriesInputs({ teamId, athleteIds: [...ids], through: addDays(weekStart, 6) });
     const squad = inputs.athletes;
     const computed = computeSquadWeek(
       squad.map((a) => ({ id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions: a.sessions, logs: a.logs, packed: packSessions(a.sessions, a.logs) })),
@@ -154,7 +154,7 @@ export async function copyWeekToNext(tool: WeekTool): Promise<PlanWriteResult> {
     const created: number[] = [];
     for (const { dto: s } of inWeek.filter((l) => l.dto.status !== "cancelled")) {
       const row = await PlannedSession.create(
-        { teamId: tool.teamId, athleteId: s.athleteId, date: addDaysTo(s.date, 7), startTime: s.startTime, durationMin: s.durationMin, title: s.title, plannedRpe: s.plannedRpe, notes: s.notes, status: "draft", publishedAt: null },
+        { teamId: tool.teamId, athleteId: s.athleteId, date: addDays(s.date, 7), startTime: s.startTime, durationMin: s.durationMin, title: s.title, plannedRpe: s.plannedRpe, notes: s.notes, status: "draft", publishedAt: null },
         { transaction },
       );
       await insertBlocks({ teamId: tool.teamId, sessionId: row.id, blocks: s.blocks, transaction });

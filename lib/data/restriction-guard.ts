@@ -3,8 +3,7 @@ import type { Transaction } from "sequelize";
 import { restrictionOverrideEmail } from "@/emails/restriction-override";
 import { AppError } from "@/lib/errors";
 import { appUrl } from "@/lib/env";
-import { startOfWeek } from "@/lib/load/dates";
-import { engineWeekStartDay } from "./load";
+import { startOfWeek } from "@/lib/dates/plain-date";
 import type { SessionChange } from "@/lib/notices/hooks";
 import { kickOutbox } from "@/lib/notices/outbox-worker";
 import { newHits, restrictionHits, type RestrictionHit } from "@/lib/restrictions/rules";
@@ -59,7 +58,7 @@ async function recordOverrides({ transaction, teamId, actorUserId, hits, reason 
     const athleteName = nameOf.get(h.athleteId) ?? "An athlete";
     const text = `${coach?.name ?? "A coach"} planned ${h.detail} on this day against "${h.rule}". Reason: ${reason}`;
     // One unresolved alert per athlete × kind × week (a database rule): a second override that week joins it.
-    const weekStart = startOfWeek(h.date, engineWeekStartDay(team?.weekStartDay ?? 1));
+    const weekStart = startOfWeek(h.date, team?.weekStartDay ?? 1);
     const open = await Alert.findOne({ where: { athleteId: h.athleteId, kind: "restriction_override", weekStart, status: ["open", "acknowledged"] }, transaction });
     if (open) await open.update({ reason: `${open.reason}\n${text}`, value: open.value + 1, date: h.date, flagged: true }, { transaction });
     else {

@@ -1,4 +1,4 @@
-import { formatDayLabel } from "@/lib/load/dates";
+import { formatDayLabel } from "@/lib/dates/plain-date";
 
 /** "Tue 31 Mar": the load engine's locale-free day label (throws RangeError on a malformed date). */
 export const formatDayShort = formatDayLabel;

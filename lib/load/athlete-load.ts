@@ -1,6 +1,6 @@
 import { acwrFromFirstDay, markProvisional, type AcwrColumns } from "./acwr";
 import { resolveProfile, type ResolvedProfile } from "./accumulate";
-import { dateFromDayIndex, dayIndex, startOfWeek } from "./dates";
+import { dateFromDayIndex, dayIndex, startOfWeek } from "@/lib/dates/plain-date";
 import { computeFlags, type Flag } from "./flags";
 import {
   alignLogs,

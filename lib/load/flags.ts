@@ -1,4 +1,4 @@
-import { dateFromDayIndex, dayIndex, formatDayLabel, minutesOfDay } from "./dates";
+import { dateFromDayIndex, dayIndex, formatDayLabel, minutesOfDay } from "@/lib/dates/plain-date";
 import { formatNumber, formatRatio } from "./format";
 import { DEFAULT_SD_TYPE, monotonyOfWindow } from "./monotony";
 import { aboveContactBand, contactBand } from "./plyo";

@@ -31,7 +31,6 @@
  *   read instead of the objects (identical results; tests/unit/load/packed.test.ts).
  */
 export * from "./types";
-export * from "./dates";
 export { formatNumber, formatRatio } from "./format";
 export {
   velocityAt,

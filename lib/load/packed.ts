@@ -5,7 +5,7 @@
 // engine (sumPackedSession), with the same operations in the same order as evaluateSessionInto, so both
 // paths give identical numbers (tests/unit/load/packed.test.ts checks it on an invented squad).
 import { BAND_NEAR, buildUpReach, memoOf, nonNeg, reachCell, srpe, type ResolvedProfile } from "./accumulate";
-import { dayIndex } from "./dates";
+import { dayIndex } from "@/lib/dates/plain-date";
 import { alignLogs, type AlignedLogs } from "./align-logs";
 import type { BlockInput, LogInput, SessionInput } from "./types";
 

@@ -1,6 +1,6 @@
 import { ACC_SIZE, addAccToColumns, evaluateSessionInto, resolveProfile, type ResolvedProfile } from "./accumulate";
 import { alignLogs, type AlignedLogs } from "./align-logs";
-import { dateFromDayIndex, dayIndex, weekdayOfDay } from "./dates";
+import { dateFromDayIndex, dayIndex, weekdayOfDay } from "@/lib/dates/plain-date";
 import { addPackedToColumns, PACKED_ACC_SIZE, PACKED_STATUS, sumPackedSession, type PackedSessions } from "./packed";
 import { toSessionMetrics, type SessionMetrics } from "./session-metrics";
 import {

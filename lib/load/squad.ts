@@ -1,5 +1,5 @@
 import { computeAthleteColumns, weekFromColumns, type ColumnsRequest } from "./athlete-load";
-import { dayIndex } from "./dates";
+import { dayIndex } from "@/lib/dates/plain-date";
 import { topFlagLevel, type Flag, type FlagLevel } from "./flags";
 import { metricRecord } from "./metric-record";
 import type { PackedSessions } from "./packed";

@@ -1,7 +1,7 @@
 import { acwrFromFirstDay, allocAcwrColumns, markProvisional } from "./acwr";
 import { computeAthleteColumns } from "./athlete-load";
 import { resolveProfile } from "./accumulate";
-import { dateFromDayIndex, dayIndex } from "./dates";
+import { dateFromDayIndex, dayIndex } from "@/lib/dates/plain-date";
 import { computeFlags, type Flag, type FlagSession } from "./flags";
 import { alignLogs, buildDailyColumns, effectiveSessions } from "./series";
 import {

@@ -1,4 +1,4 @@
-import { dateFromDayIndex, dayIndex } from "./dates";
+import { dateFromDayIndex, dayIndex } from "@/lib/dates/plain-date";
 import { DEFAULT_SD_TYPE, monotonyOfWindow, type SdType } from "./monotony";
 import { metricRecord } from "./metric-record";
 import type { AcwrMethod, ContactsByIntensity, Metric, MetricValues, SpeedBands, TeamLoadSettings } from "./types";

@@ -6,11 +6,10 @@ import { sessionInvitationsEmail } from "@/emails/session-invitations";
 import { sessionUpdatedEmail } from "@/emails/session-updated";
 import { buildInvite } from "@/lib/calendar/invite";
 import type { CalendarSession } from "@/lib/calendar/types";
-import { engineWeekStartDay } from "@/lib/data/load";
 import { getNoticeTeam, getPerson, listAthleteContacts, type NoticeTeam } from "@/lib/data/notification-settings";
 import { enqueueMail } from "@/lib/data/outbox";
 import { appUrl } from "@/lib/env";
-import { startOfWeek } from "@/lib/load";
+import { startOfWeek } from "@/lib/dates/plain-date";
 import type { SessionChange, SessionSnapshot } from "./hooks";
 
 export type CalendarAction =
@@ -189,7 +188,7 @@ export async function queueCalendarNotices({
 function byWeek(team: NoticeTeam, actions: CalendarAction[]): Map<string, CalendarSession[]> {
   const out = new Map<string, CalendarSession[]>();
   for (const a of actions) {
-    const week = startOfWeek(a.session.date, engineWeekStartDay(team.weekStartDay));
+    const week = startOfWeek(a.session.date, team.weekStartDay);
     out.set(week, [...(out.get(week) ?? []), a.session]);
   }
   return new Map([...out.entries()].sort(([x], [y]) => x.localeCompare(y)));

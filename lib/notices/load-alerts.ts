@@ -2,11 +2,13 @@ import "server-only";
 import type { Transaction } from "sequelize";
 import { loadAlertEmail } from "@/emails/load-alert";
 import { syncWeekAlerts, type AlertCandidate } from "@/lib/data/alerts";
-import { getAthleteLoadInputs, teamToday, type LoadAthleteInputs, type LoadInputs } from "@/lib/data/load";
+import { getAthleteLoadInputs, type LoadAthleteInputs, type LoadInputs } from "@/lib/data/load";
+import { teamToday } from "@/lib/dates/zoned";
 import { enqueueMail } from "@/lib/data/outbox";
 import { getNoticeTeam, listAlertRecipients } from "@/lib/data/notification-settings";
 import { appUrl } from "@/lib/env";
-import { addDays, computeAthleteLoad, startOfWeek, type AthleteLoad, type Flag } from "@/lib/load";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
+import { computeAthleteLoad, type AthleteLoad, type Flag } from "@/lib/load";
 import type { AlertBasis, AlertKind } from "@/models/alert";
 import { toLoadAlertItem } from "./alert-display";
 
@@ -103,7 +105,7 @@ export async function evaluateLoadAlerts(args: EvaluateArgs): Promise<number[]> 
     const next = addDays(w, 7);
     weeks.set(next, new Set([...(weeks.get(next) ?? []), ...NEXT_WEEK_KINDS]));
   }
-  const today = args.today ?? teamToday({ timeZone: inputs.timeZone });
+  const today = args.today ?? teamToday({ timeZone: inputs.timeZone, now: new Date() });
 
   const created: Array<{ id: number } & AlertCandidate> = [];
   for (const [weekStart, kindSet] of [...weeks.entries()].sort(([a], [b]) => a.localeCompare(b))) {

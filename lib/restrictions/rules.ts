@@ -1,6 +1,6 @@
 // Physio restrictions as plain data, and the one check both the week grid (before a drop) and the server
 // (before a write) run. Pure and isomorphic: no database, no clock, no React.
-import { addDays, formatDayLabel } from "@/lib/load/dates";
+import { addDays, formatDayLabel } from "@/lib/dates/plain-date";
 import { drillContacts } from "@/lib/load/plyo";
 import { RUNNING_KINDS, type BlockInput, type BlockKind } from "@/lib/load/types";
 import { BLOCK_KIND_LABEL } from "@/lib/format/block-summary";

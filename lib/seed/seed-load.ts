@@ -1,6 +1,6 @@
 import { mulberry32 } from "@/lib/random";
-import { engineWeekStartDay, teamToday } from "@/lib/data/load";
-import { addDays, startOfWeek } from "@/lib/load/dates";
+import { teamToday } from "@/lib/dates/zoned";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import type { PlyoDrill, RunningPrescription } from "@/lib/load/types";
 import type { CreationAttributes } from "sequelize";
 import type { Db, PlannedSession, SessionBlock, SessionLog } from "@/models";
@@ -111,8 +111,8 @@ export async function seedLoad(
   club: SeededClub,
   options: { today?: string } = {},
 ): Promise<{ templateIds: Record<TemplateKey, number>; sessions: number }> {
-  const today = options.today ?? teamToday({ timeZone: DEMO_TEAM.timeZone });
-  const currentWeek = startOfWeek(today, engineWeekStartDay(DEMO_TEAM.weekStartDay));
+  const today = options.today ?? teamToday({ timeZone: DEMO_TEAM.timeZone, now: new Date() });
+  const currentWeek = startOfWeek(today, DEMO_TEAM.weekStartDay);
   const firstWeek = addDays(currentWeek, -7 * HISTORY_WEEKS);
   const random = mulberry32(20261201);
   const { sequelize, BlockTemplate } = d;

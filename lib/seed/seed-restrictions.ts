@@ -1,6 +1,6 @@
 import { Op, type Transaction } from "sequelize";
-import { engineWeekStartDay, teamToday } from "@/lib/data/load";
-import { addDays, startOfWeek } from "@/lib/load/dates";
+import { teamToday } from "@/lib/dates/zoned";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import type { Db } from "@/models";
 import { DEMO_STAFF, DEMO_TEAM } from "./demo-club";
 import { DEMO_TEMPLATES } from "./load-templates";
@@ -20,8 +20,8 @@ const NOTE =
  * days, RESTRICTED_ATHLETE's max-velocity blocks become short block starts, so the demo opens without a breach.
  */
 export async function seedRestrictions(d: Db, club: SeededClub, options: { today?: string } = {}): Promise<void> {
-  const today = options.today ?? teamToday({ timeZone: DEMO_TEAM.timeZone });
-  const weekStart = startOfWeek(today, engineWeekStartDay(DEMO_TEAM.weekStartDay));
+  const today = options.today ?? teamToday({ timeZone: DEMO_TEAM.timeZone, now: new Date() });
+  const weekStart = startOfWeek(today, DEMO_TEAM.weekStartDay);
   const physio = club.userIds[DEMO_STAFF.find((s) => s.role === "physio")!.email];
   const dario = club.athleteIds[RESTRICTED_ATHLETE];
   const startsOn = addDays(today, -4);

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import "./jitless";
-import { isLocalDate } from "@/lib/load/dates";
+import { isLocalDate } from "@/lib/dates/plain-date";
 
 // Plans, logs, load views and restrictions live within these bounds: wide enough for any history a club keeps
 // and any plan it makes, and far enough from year 9999 that week and range arithmetic never leaves four-digit years.

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { lineText } from "./text";
-import { dayIndex } from "@/lib/load/dates";
+import { dayIndex } from "@/lib/dates/plain-date";
 import { METRICS } from "@/lib/load/types";
 import { idSchema, localDateSchema, startTimeSchema } from "./plan";
 import { blockSchema } from "./template";

@@ -3,8 +3,8 @@
 import ICAL from "ical.js";
 import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser, BrowserContext } from "playwright-core";
-import { teamToday } from "@/lib/data/load";
-import { addDays, startOfWeek } from "@/lib/load";
+import { teamToday } from "@/lib/dates/zoned";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { apiSession, describeBrowser, launchBrowser, screenshot, signIn } from "./harness";
 import { startMailApp, type MailApp } from "./notices-app";
 
@@ -34,7 +34,7 @@ describeBrowser("athlete journey", () => {
       "SELECT a.id, a.team_id FROM athletes a JOIN users u ON u.id = a.user_id WHERE u.email = ?",
       [MAYA],
     );
-    const nextWeek = addDays(startOfWeek(teamToday({ timeZone: "Europe/London" }), 1), 7);
+    const nextWeek = addDays(startOfWeek(teamToday({ timeZone: "Europe/London", now: new Date() }), 1), 7);
     const created = await coach.fetch(`/api/teams/${maya!.team_id}/sessions`, {
       method: "POST",
       headers: { "content-type": "application/json" },

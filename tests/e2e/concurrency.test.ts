@@ -3,8 +3,8 @@
 // process holding SQLite's write lock gives waits or 503 with Retry-After, never a 500.
 import sqlite3 from "sqlite3";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { teamToday } from "@/lib/data/load";
-import { addDays } from "@/lib/load";
+import { teamToday } from "@/lib/dates/zoned";
+import { addDays } from "@/lib/dates/plain-date";
 import { closeDb, db } from "@/models";
 import { createTestTeam, TEST_PASSWORD } from "../helpers/fixtures";
 import { apiSession, startApp, type App } from "./harness";
@@ -35,7 +35,7 @@ describe("concurrent writes", () => {
     ];
     const team = await createTestTeam(d, { name: "Busy Club", people });
     teamId = team.teamId;
-    const yesterday = addDays(teamToday({ timeZone: "Europe/London" }), -1);
+    const yesterday = addDays(teamToday({ timeZone: "Europe/London", now: new Date() }), -1);
     sessionIds = [];
     for (const p of people.filter((x) => x.role === "athlete")) {
       const s = await d.PlannedSession.create({

@@ -2,8 +2,8 @@
 // unread badge) and reads its e-mail in the mailbox screen. Mail travels app → outbox → real SMTP (fake).
 import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser } from "playwright-core";
-import { addDays, startOfWeek } from "@/lib/load";
-import { teamToday } from "@/lib/data/load";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
+import { teamToday } from "@/lib/dates/zoned";
 import { apiSession, describeBrowser, launchBrowser, screenshot, signIn } from "./harness";
 import { startMailApp, type MailApp } from "./notices-app";
 
@@ -29,7 +29,7 @@ describeBrowser("physio journey", () => {
 
   it("a coach's plan change raises a spike alert and e-mails the physio once", async () => {
     const coach = await apiSession(app, "coach@harbourvale.test");
-    const nextWeek = addDays(startOfWeek(teamToday({ timeZone: "Europe/London" }), 1), 7);
+    const nextWeek = addDays(startOfWeek(teamToday({ timeZone: "Europe/London", now: new Date() }), 1), 7);
     // What the week grid sends when the coach adds a session: two very long, very hard days next week.
     for (const day of [1, 2]) {
       const res = await coach.fetch(`/api/teams/${athlete.team_id}/sessions`, {

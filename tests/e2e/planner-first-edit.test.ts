@@ -2,16 +2,16 @@ import { DateTime } from "luxon";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, expect, it } from "vitest";
 import { DEMO_STAFF } from "@/lib/seed/demo-club";
-import { addDaysTo, teamWeekStart } from "@/lib/plan/week";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import type { PlanWeek } from "@/lib/plan/types";
 import { describeBrowser, launchBrowser, signIn, startApp, type App } from "./harness";
 
 const coach = DEMO_STAFF.find((s) => s.role === "coach")!;
 
 // Three weeks ahead of the demo's plan: an empty week, so every card in it comes from this file.
-const thisWeek = teamWeekStart(DateTime.now().setZone("Europe/London").toISODate()!, 1);
-const week = addDaysTo(thisWeek, 21);
-const day = (i: number) => addDaysTo(week, i);
+const thisWeek = startOfWeek(DateTime.now().setZone("Europe/London").toISODate()!, 1);
+const week = addDays(thisWeek, 21);
+const day = (i: number) => addDays(week, i);
 
 const row = (page: Page, athleteId: number) =>
   page.locator(`[data-testid="athlete-row"][data-athlete-id="${athleteId}"]`);

@@ -3,7 +3,7 @@ import type { Browser, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, expect, it } from "vitest";
 import { DEMO_ATHLETES, DEMO_STAFF } from "@/lib/seed/demo-club";
 import { formatDayShort } from "@/lib/format/dates";
-import { addDaysTo, teamWeekStart } from "@/lib/plan/week";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import type { PlanWeek } from "@/lib/plan/types";
 import { join } from "node:path";
 import {
@@ -23,9 +23,9 @@ const headCoach = DEMO_STAFF.find((s) => s.role === "head_coach")!;
 const athlete = DEMO_ATHLETES.find((a) => a.email)!;
 
 // Two weeks ahead of the demo's plan: an empty week, so every card in it comes from this test.
-const thisWeek = teamWeekStart(DateTime.now().setZone("Europe/London").toISODate()!, 1);
-const week = addDaysTo(thisWeek, 14);
-const day = (i: number) => addDaysTo(week, i);
+const thisWeek = startOfWeek(DateTime.now().setZone("Europe/London").toISODate()!, 1);
+const week = addDays(thisWeek, 14);
+const day = (i: number) => addDays(week, i);
 
 /** Pointer drag the way a person does it: press, move in steps (past dnd-kit's 5 px threshold), release. */
 async function drag(

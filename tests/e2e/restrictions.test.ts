@@ -3,7 +3,7 @@
 // without the form; an athlete sees their own current limits on /me.
 import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
-import { teamToday } from "@/lib/data/load";
+import { teamToday } from "@/lib/dates/zoned";
 import { RESTRICTED_ATHLETE } from "@/lib/seed/seed-restrictions";
 import { apiSession, describeBrowser, launchBrowser, screenshot, signIn, startApp, type App } from "./harness";
 
@@ -100,7 +100,7 @@ describeBrowser("restrictions journey", () => {
     const mayaId = Number((await athletePath(staff, app, "Maya Okafor")).split("/").at(-1));
     await staff.close();
     const physio = await apiSession(app, PHYSIO);
-    const today = teamToday({ timeZone: "Europe/London" });
+    const today = teamToday({ timeZone: "Europe/London", now: new Date() });
     const res = await physio.fetch(`/api/athletes/${mayaId}/restrictions`, {
       method: "POST",
       headers: { "content-type": "application/json" },

@@ -1,5 +1,5 @@
 import { describe, expect, it, vi } from "vitest";
-import { addDaysTo, teamWeekStart } from "@/lib/plan/week";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
 
@@ -12,7 +12,7 @@ vi.mock("next-auth", async (orig) => ({
 vi.mock("@/lib/notices/hooks", () => ({ afterPlanChange: async () => {}, afterLogChange: async () => {} }));
 
 const d = await setupTestDb();
-const { teamToday } = await import("@/lib/data/load");
+const { teamToday } = await import("@/lib/dates/zoned");
 const templates = await import("@/app/api/teams/[teamId]/templates/route");
 const sessions = await import("@/app/api/teams/[teamId]/sessions/route");
 const tools = await import("@/app/api/teams/[teamId]/plan/[tool]/route");
@@ -21,7 +21,7 @@ const a = await createTestTeam(d, { name: "Alpha Track" });
 who.userId = a.users.coach.userId;
 const ada = a.users["ada@alphatrack.test"].athleteId!;
 const T = String(a.teamId);
-const week = addDaysTo(teamWeekStart(teamToday({ timeZone: "Europe/London" }), 1), 7);
+const week = addDays(startOfWeek(teamToday({ timeZone: "Europe/London", now: new Date() }), 1), 7);
 
 const p = <T>(v: T) => ({ params: Promise.resolve(v) });
 const post = (path: string, body: unknown) =>
@@ -80,7 +80,7 @@ describe("control characters in text fields", () => {
     const s = await d.PlannedSession.create({
       teamId: a.teamId,
       athleteId: ada,
-      date: addDaysTo(week, 14),
+      date: addDays(week, 14),
       startTime: "17:00",
       durationMin: 50,
       title,
@@ -101,7 +101,7 @@ describe("control characters in text fields", () => {
     });
     const copied = await json(
       await tools.POST(
-        post(`/api/teams/${T}/plan/copy-to-next`, { week: addDaysTo(week, 14) }),
+        post(`/api/teams/${T}/plan/copy-to-next`, { week: addDays(week, 14) }),
         p({ teamId: T, tool: "copy-to-next" }),
       ),
     );

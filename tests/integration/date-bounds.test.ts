@@ -1,5 +1,5 @@
 import { describe, expect, it, vi } from "vitest";
-import { addDaysTo, teamWeekStart } from "@/lib/plan/week";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
 
@@ -13,7 +13,7 @@ vi.mock("next-auth", async (orig) => ({
 vi.mock("@/lib/notices/hooks", () => ({ afterPlanChange: async () => {}, afterLogChange: async () => {} }));
 
 const d = await setupTestDb();
-const { teamToday } = await import("@/lib/data/load");
+const { teamToday } = await import("@/lib/dates/zoned");
 const sessions = await import("@/app/api/teams/[teamId]/sessions/route");
 const session = await import("@/app/api/sessions/[sessionId]/route");
 const athleteLoad = await import("@/app/api/athletes/[athleteId]/load/route");
@@ -27,7 +27,7 @@ const a = await createTestTeam(d, { name: "Alpha Track" });
 const ada = a.users["ada@alphatrack.test"].athleteId!;
 const T = String(a.teamId);
 const A = String(ada);
-const week = addDaysTo(teamWeekStart(teamToday({ timeZone: "Europe/London" }), 1), 7);
+const week = addDays(startOfWeek(teamToday({ timeZone: "Europe/London", now: new Date() }), 1), 7);
 
 const p = <T>(v: T) => ({ params: Promise.resolve(v) });
 const req = (path: string, method = "GET", body?: unknown) =>

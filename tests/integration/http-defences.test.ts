@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
-import { addDaysTo, teamWeekStart } from "@/lib/plan/week";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
 
@@ -13,7 +13,7 @@ vi.mock("@/lib/notices/hooks", () => ({ afterPlanChange: async () => {}, afterLo
 
 process.env.APP_URL = "https://club.sprintwright.test";
 const d = await setupTestDb();
-const { teamToday } = await import("@/lib/data/load");
+const { teamToday } = await import("@/lib/dates/zoned");
 const templates = await import("@/app/api/teams/[teamId]/templates/route");
 const sessions = await import("@/app/api/teams/[teamId]/sessions/route");
 const plan = await import("@/app/api/teams/[teamId]/plan/route");
@@ -21,7 +21,7 @@ const plan = await import("@/app/api/teams/[teamId]/plan/route");
 const a = await createTestTeam(d, { name: "Alpha Track" });
 const ada = a.users["ada@alphatrack.test"].athleteId!;
 const T = String(a.teamId);
-const week = addDaysTo(teamWeekStart(teamToday({ timeZone: "Europe/London" }), 1), 7);
+const week = addDays(startOfWeek(teamToday({ timeZone: "Europe/London", now: new Date() }), 1), 7);
 const p = <T>(v: T) => ({ params: Promise.resolve(v) });
 const template = {
   kind: "recovery",

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { getAthleteLoadInputs, getLoadSeriesInputs, teamToday } from "@/lib/data/load";
+import { getAthleteLoadInputs, getLoadSeriesInputs } from "@/lib/data/load";
+import { teamToday } from "@/lib/dates/zoned";
 import { getTeamLoadSettings, updateTeamLoadSettings } from "@/lib/data/team-settings";
 import { DEFAULT_TEAM_LOAD_SETTINGS } from "@/lib/load/types";
 import { setupTestDb } from "../helpers/db";

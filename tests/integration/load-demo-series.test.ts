@@ -3,7 +3,7 @@
 // same ACWR for every athlete and every day of the last 10 weeks (one series, lib/load/README.md §5), and the
 // demo history must raise no flag that comes from how a series starts (§6, §7).
 import { beforeEach, describe, expect, it, vi } from "vitest";
-import { addDays, startOfWeek } from "@/lib/load/dates";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import type { Flag } from "@/lib/load/flags";
 import type { WeekSummary } from "@/lib/load/week-summary";
 import type { PlanWeek } from "@/lib/plan/types";
@@ -19,14 +19,15 @@ vi.mock("next-auth", async (orig) => ({
 }));
 
 const d = await setupTestDb();
-const { getAthleteLoadInputs, teamToday } = await import("@/lib/data/load");
+const { getAthleteLoadInputs } = await import("@/lib/data/load");
+const { teamToday } = await import("@/lib/dates/zoned");
 const { alertWeekLoad } = await import("@/lib/notices/load-alerts");
 const { rowLoad } = await import("@/lib/plan/preview");
 const athleteLoad = await import("@/app/api/athletes/[athleteId]/load/route");
 const squadLoad = await import("@/app/api/teams/[teamId]/load/route");
 const planRoute = await import("@/app/api/teams/[teamId]/plan/route");
 
-const today = teamToday({ timeZone: "Europe/London" });
+const today = teamToday({ timeZone: "Europe/London", now: new Date() });
 const club = await seedDemo(d, { today });
 const head = (await d.User.findOne({ where: { email: DEMO_STAFF.find((s) => s.role === "head_coach")!.email } }))!.id;
 const thisWeek = startOfWeek(today, 1);

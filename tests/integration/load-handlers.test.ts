@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
-import { addDays, startOfWeek } from "@/lib/load/dates";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
 
@@ -16,7 +16,7 @@ vi.mock("@/lib/notices/hooks", () => ({
 }));
 
 const d = await setupTestDb();
-const { teamToday } = await import("@/lib/data/load");
+const { teamToday } = await import("@/lib/dates/zoned");
 const athleteLoad = await import("@/app/api/athletes/[athleteId]/load/route");
 const squadLoad = await import("@/app/api/teams/[teamId]/load/route");
 const preview = await import("@/app/api/load/preview/route");
@@ -28,7 +28,7 @@ const b = await createTestTeam(d, { name: "Bravo Track" });
 const ada = a.users["ada@alphatrack.test"];
 const ben = a.users["ben@alphatrack.test"];
 const bravoHead = b.users.head_coach;
-const today = teamToday({ timeZone: "Europe/London" });
+const today = teamToday({ timeZone: "Europe/London", now: new Date() });
 const week = startOfWeek(today, 1);
 
 const accel = {

@@ -1,5 +1,5 @@
 import { describe, expect, it, vi } from "vitest";
-import { addDays, startOfWeek } from "@/lib/load/dates";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
 
@@ -13,13 +13,13 @@ vi.mock("next-auth", async (orig) => ({
 vi.mock("@/lib/notices/hooks", () => ({ afterLogChange: async () => {}, afterPlanChange: async () => {} }));
 
 const d = await setupTestDb();
-const { teamToday } = await import("@/lib/data/load");
+const { teamToday } = await import("@/lib/dates/zoned");
 const athleteLoad = await import("@/app/api/athletes/[athleteId]/load/route");
 const squadLoad = await import("@/app/api/teams/[teamId]/load/route");
 const settingsRoute = await import("@/app/api/teams/[teamId]/settings/route");
 const logRoute = await import("@/app/api/sessions/[sessionId]/log/route");
 
-const today = teamToday({ timeZone: "Europe/London" });
+const today = teamToday({ timeZone: "Europe/London", now: new Date() });
 const lastWeek = addDays(startOfWeek(today, 1), -7);
 const p = <T>(v: T) => ({ params: Promise.resolve(v) });
 const send = (path: string, method: string, body: unknown) =>

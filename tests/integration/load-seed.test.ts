@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { getSquadWeekLoad } from "@/lib/data/load-views";
-import { addDays, startOfWeek } from "@/lib/load/dates";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { seedDemo } from "@/lib/seed";
 import { HISTORY_WEEKS, SPIKE_ATHLETE } from "@/lib/seed/seed-load";
 import { setupTestDb } from "../helpers/db";

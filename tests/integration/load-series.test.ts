@@ -2,7 +2,7 @@
 // spike is an alert even when an early day peaks higher; the preview keeps logged per-block reps.
 // Check values: lib/load/README.md §6 (E2, E4), hand-computed from Williams et al. 2017's recurrence.
 import { beforeEach, describe, expect, it, vi } from "vitest";
-import { addDays, startOfWeek } from "@/lib/load/dates";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import type { WeekSummary } from "@/lib/load/week-summary";
 import { createTestTeam } from "../helpers/fixtures";
 import { setupNotices } from "./notices-setup";
@@ -15,7 +15,7 @@ vi.mock("next-auth", async (orig) => ({
 
 const n = await setupNotices();
 const { d } = n;
-const { teamToday } = await import("@/lib/data/load");
+const { teamToday } = await import("@/lib/dates/zoned");
 const athleteLoad = await import("@/app/api/athletes/[athleteId]/load/route");
 const squadLoad = await import("@/app/api/teams/[teamId]/load/route");
 const planWeek = await import("@/app/api/teams/[teamId]/plan/route");
@@ -29,7 +29,7 @@ const ben = team.users["ben@seriesclub.test"].athleteId!;
 // Only the ratio is under test: a huge weekly-change limit keeps the week-on-week flag quiet.
 await d.TeamLoadSettings.update({ weeklyChangeLimitPct: 10_000 }, { where: { teamId: team.teamId } });
 
-const today = teamToday({ timeZone: "Europe/London" });
+const today = teamToday({ timeZone: "Europe/London", now: new Date() });
 // Day 1 of both scenarios: a Monday in the future, so the projected view counts every session as planned.
 const day1 = addDays(startOfWeek(today, 1), 14);
 const day = (k: number) => addDays(day1, k - 1);

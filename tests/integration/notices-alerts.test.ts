@@ -2,11 +2,11 @@
 // outbox worker → nodemailer → the real fake SMTP server on a free port → the physio's mailbox.
 import { describe, expect, it } from "vitest";
 import { listAlerts, updateAlertStatus } from "@/lib/data/alerts";
-import { teamToday } from "@/lib/data/load";
+import { teamToday } from "@/lib/dates/zoned";
 import { listOutbox } from "@/lib/data/outbox";
 import { getLogTarget, saveSessionLog } from "@/lib/data/logs";
 import { createSessions, deleteSession, updateSession } from "@/lib/data/plan-sessions";
-import { addDays, startOfWeek } from "@/lib/load";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { createSessionSchema, updateSessionSchema } from "@/lib/validations/plan";
 import { alertActionSchema } from "@/lib/validations/alerts";
 import { sessionLogSchema } from "@/lib/validations/log";
@@ -24,7 +24,7 @@ const PHYSIO = "physio@noticeclub.test";
 await d.TeamLoadSettings.update({ weeklyChangeLimitPct: 10_000 }, { where: { teamId: team.teamId } });
 
 // All dates in the future, so the projected view counts every session as planned (no logs needed).
-const w1 = addDays(startOfWeek(teamToday({ timeZone: "Europe/London" }), 1), 7);
+const w1 = addDays(startOfWeek(teamToday({ timeZone: "Europe/London", now: new Date() }), 1), 7);
 const spikeWeek = addDays(w1, 35);
 
 /** Five steady weeks (Mon/Wed/Fri, 60 min at RPE 5 = 300 AU sRPE) written straight to the table: history, not a change. */
@@ -181,7 +181,7 @@ describe("spike alerts", () => {
   });
 
   it("a log that makes the actual load spike records an alert based on logged sessions", async () => {
-    const today = teamToday({ timeZone: "Europe/London" });
+    const today = teamToday({ timeZone: "Europe/London", now: new Date() });
     const dora = (
       await d.Athlete.create({
         teamId: team.teamId,

@@ -2,12 +2,12 @@
 // invited physio whose invitation expired, or an invitation sent to a mistyped address, gets the invitation
 // and nothing else. Real path: planner data write → load engine → outbox → fake SMTP → mailbox folder.
 import { describe, expect, it } from "vitest";
-import { teamToday } from "@/lib/data/load";
+import { teamToday } from "@/lib/dates/zoned";
 import { listAlertRecipients, listAthleteContacts, listDigestSubscribers } from "@/lib/data/notification-settings";
 import { addMember, removeMember } from "@/lib/data/members";
 import { enqueueMail, listOutbox } from "@/lib/data/outbox";
 import { createSessions } from "@/lib/data/plan-sessions";
-import { addDays, startOfWeek } from "@/lib/load";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { addMemberSchema } from "@/lib/validations/members";
 import { createSessionSchema } from "@/lib/validations/plan";
 import { createTestTeam } from "../helpers/fixtures";
@@ -31,7 +31,7 @@ await invite({ name: "Pia Physio", email: MISTYPED, role: "physio" });
 const pendingAthlete = await invite({ name: "Ria Runner", email: "ria@recipientclub.test", role: "athlete" });
 await n.worker.runOnce(); // the three invitations go out
 
-const w1 = addDays(startOfWeek(teamToday({ timeZone: "Europe/London" }), 1), 7);
+const w1 = addDays(startOfWeek(teamToday({ timeZone: "Europe/London", now: new Date() }), 1), 7);
 for (let week = 0; week < 6; week++) {
   for (const day of [0, 2, 4]) {
     await d.PlannedSession.create({

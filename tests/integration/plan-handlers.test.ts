@@ -1,7 +1,7 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import type { SessionChange } from "@/lib/notices/hooks";
 import type { PlanSession, PlanWeek, PlanWriteResult } from "@/lib/plan/types";
-import { addDaysTo, teamWeekStart } from "@/lib/plan/week";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { rowLoad } from "@/lib/plan/preview";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
@@ -27,7 +27,7 @@ vi.mock("@/lib/notices/hooks", () => ({
 }));
 
 const d = await setupTestDb();
-const { teamToday } = await import("@/lib/data/load");
+const { teamToday } = await import("@/lib/dates/zoned");
 const plan = await import("@/app/api/teams/[teamId]/plan/route");
 const tools = await import("@/app/api/teams/[teamId]/plan/[tool]/route");
 const sessions = await import("@/app/api/teams/[teamId]/sessions/route");
@@ -47,9 +47,9 @@ const bravoCoach = b.users.coach.userId;
 const bravoAda = b.users["ada@bravotrack.test"].athleteId!;
 
 // Next week: every session there is "planned" in the projected view whatever today is.
-const week = addDaysTo(teamWeekStart(teamToday({ timeZone: "Europe/London" }), 1), 7);
-const tue = addDaysTo(week, 1);
-const thu = addDaysTo(week, 3);
+const week = addDays(startOfWeek(teamToday({ timeZone: "Europe/London", now: new Date() }), 1), 7);
+const tue = addDays(week, 1);
+const thu = addDays(week, 3);
 
 const flying = {
   kind: "max_velocity" as const,
@@ -226,15 +226,15 @@ describe("dropping templates", () => {
       from: "template",
       templateId: plyo,
       athleteId: ben.athleteId,
-      date: addDaysTo(week, 6),
+      date: addDays(week, 6),
     });
-    expect(res.body.touched).toEqual([{ athleteId: ben.athleteId, date: addDaysTo(week, 6) }]);
+    expect(res.body.touched).toEqual([{ athleteId: ben.athleteId, date: addDays(week, 6) }]);
     expect(res.body.rows?.map((r) => [r.athleteId, r.weekStart])).toEqual([[ben.athleteId, week]]);
     const fresh = (await getWeek()).body.athletes.find((x) => x.id === ben.athleteId)!;
     expect(res.body.rows![0].load).toEqual(fresh.load);
     const [s] = res.body.sessions;
     const gone = await del(s.id, 1);
-    expect(gone.body.touched).toEqual([{ athleteId: ben.athleteId, date: addDaysTo(week, 6) }]);
+    expect(gone.body.touched).toEqual([{ athleteId: ben.athleteId, date: addDays(week, 6) }]);
     expect(gone.body.rows![0].load).toEqual((await getWeek()).body.athletes.find((x) => x.id === ben.athleteId)!.load);
   });
 
@@ -262,7 +262,7 @@ describe("dropping templates", () => {
   });
 
   it("gives a group drop to every athlete of the group in one write (adding to a session already there)", async () => {
-    const day = addDaysTo(week, 4);
+    const day = addDays(week, 4);
     const [existing] = (await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: day })).body
       .sessions;
     told.length = 0;
@@ -277,7 +277,7 @@ describe("dropping templates", () => {
   });
 
   it("writes a group drop in one transaction: when anything in it fails, no athlete gets a session", async () => {
-    const day = addDaysTo(week, 5);
+    const day = addDays(week, 5);
     const before = await d.PlannedSession.count({ where: { teamId: a.teamId, date: day } });
     failNotice.next = true;
     const spy = vi.spyOn(console, "error").mockImplementation(() => {});
@@ -342,7 +342,7 @@ describe("moving, copying, editing", () => {
   it("copies a session as a new draft with its blocks", async () => {
     const [s] = (await create({ from: "template", templateId: plyo, athleteId: ada.athleteId, date: tue })).body
       .sessions;
-    const res = await create({ from: "copy", sessionId: s.id, athleteId: ben.athleteId, date: addDaysTo(week, 5) });
+    const res = await create({ from: "copy", sessionId: s.id, athleteId: ben.athleteId, date: addDays(week, 5) });
     const [c] = res.body.sessions;
     expect(c.id).not.toBe(s.id);
     expect(c).toMatchObject({ athleteId: ben.athleteId, status: "draft", title: "Pogo hops", version: 1 });
@@ -351,9 +351,8 @@ describe("moving, copying, editing", () => {
   });
 
   it("rewrites a session's fields and blocks from the editor, and edits and removes one block", async () => {
-    const [s] = (
-      await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: addDaysTo(week, 6) })
-    ).body.sessions;
+    const [s] = (await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: addDays(week, 6) }))
+      .body.sessions;
     const edited = await patch(s.id, {
       version: 1,
       startTime: "09:30",
@@ -415,7 +414,7 @@ describe("moving, copying, editing", () => {
 
 describe("deleting and the week tools", () => {
   it("removes a draft, and keeps a published session as cancelled with a new SEQUENCE", async () => {
-    const day = addDaysTo(week, 2);
+    const day = addDays(week, 2);
     const [draft] = (await create({ from: "template", templateId: plyo, athleteId: ben.athleteId, date: day })).body
       .sessions;
     expect((await del(draft.id)).body.error?.fields).toHaveProperty("version");
@@ -447,13 +446,13 @@ describe("deleting and the week tools", () => {
   });
 
   it("publishes the week's drafts, copies the week to the next, and clears a week", async () => {
-    const w = addDaysTo(week, 14);
+    const w = addDays(week, 14);
     for (const [athleteId, date] of [
       [ada.athleteId, w],
-      [ben.athleteId, addDaysTo(w, 2)],
+      [ben.athleteId, addDays(w, 2)],
     ] as const)
       await create({ from: "template", templateId: maxV, athleteId, date });
-    const published = await tool("publish", { week: addDaysTo(w, 3) });
+    const published = await tool("publish", { week: addDays(w, 3) });
     expect(published.body.sessions.map((s) => [s.status, s.sequence])).toEqual([
       ["published", 0],
       ["published", 0],
@@ -462,14 +461,14 @@ describe("deleting and the week tools", () => {
 
     const copied = await tool("copy-to-next", { week: w });
     expect(copied.body.sessions.map((s) => [s.date, s.status])).toEqual([
-      [addDaysTo(w, 7), "draft"],
-      [addDaysTo(w, 9), "draft"],
+      [addDays(w, 7), "draft"],
+      [addDays(w, 9), "draft"],
     ]);
     expect(copied.body.sessions[0].blocks).toHaveLength(1);
 
     const cleared = await tool("clear", { week: w });
     expect(cleared.body.sessions.map((s) => s.status)).toEqual(["cancelled", "cancelled"]);
-    const next = await tool("clear", { week: addDaysTo(w, 7) });
+    const next = await tool("clear", { week: addDays(w, 7) });
     expect(next.body.removedIds).toHaveLength(2);
     expect((await tool("publish", { week: "soon" })).body.error?.fields).toHaveProperty("week");
     expect(

@@ -3,8 +3,8 @@
 // recorded, an alert raised and a mail delivered through the outbox to the real fake SMTP server.
 import { describe, expect, it, vi } from "vitest";
 import { listAlerts } from "@/lib/data/alerts";
-import { teamToday } from "@/lib/data/load";
-import { addDays, startOfWeek } from "@/lib/load";
+import { teamToday } from "@/lib/dates/zoned";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import type { PlanWeek, PlanWriteResult } from "@/lib/plan/types";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
 import { createTestTeam } from "../helpers/fixtures";
@@ -31,7 +31,7 @@ const ada = team.users["ada@guardclub.test"].athleteId!;
 const ben = team.users["ben@guardclub.test"].athleteId!;
 
 // Next week, so every session is plan whatever today is. Ada: no max velocity from next Wednesday to Friday.
-const week = addDays(startOfWeek(teamToday({ timeZone: "Europe/London" }), 1), 7);
+const week = addDays(startOfWeek(teamToday({ timeZone: "Europe/London", now: new Date() }), 1), 7);
 const [mon, tue, wed, thu, sat] = [0, 1, 2, 3, 5].map((k) => addDays(week, k));
 const restriction = await d.Restriction.create({
   teamId: team.teamId,

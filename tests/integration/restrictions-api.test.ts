@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
-import { addDays } from "@/lib/load/dates";
+import { addDays } from "@/lib/dates/plain-date";
 import type { Restriction } from "@/lib/restrictions/rules";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
@@ -12,7 +12,7 @@ vi.mock("next-auth", async (orig) => ({
 }));
 
 const d = await setupTestDb();
-const { teamToday } = await import("@/lib/data/load");
+const { teamToday } = await import("@/lib/dates/zoned");
 const athleteRoute = await import("@/app/api/athletes/[athleteId]/restrictions/route");
 const restrictionRoute = await import("@/app/api/restrictions/[restrictionId]/route");
 
@@ -24,7 +24,7 @@ const head = a.users.head_coach;
 const ada = a.users["ada@alphatrack.test"];
 const ben = a.users["ben@alphatrack.test"];
 const bravoPhysio = b.users.physio;
-const today = teamToday({ timeZone: "Europe/London" });
+const today = teamToday({ timeZone: "Europe/London", now: new Date() });
 
 const p = <T>(v: T) => ({ params: Promise.resolve(v) });
 type Body = {

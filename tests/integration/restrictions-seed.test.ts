@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { listRestrictions } from "@/lib/data/restrictions";
-import { addDays, startOfWeek } from "@/lib/load/dates";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { isActiveOn, restrictionHits } from "@/lib/restrictions/rules";
 import { seedClub } from "@/lib/seed/seed-club";
 import { seedLoad } from "@/lib/seed/seed-load";

@@ -3,9 +3,9 @@ import { MyRestrictions } from "@/components/restrictions/my-restrictions";
 import { EmptyState, PageHeader } from "@/components/ui/card";
 import { pageViewer } from "@/lib/auth/page-access";
 import { getCalendarFeedStatus, listAthleteSessions, type AthleteSession } from "@/lib/data/calendar-tokens";
-import { engineWeekStartDay, teamToday } from "@/lib/data/load";
+import { teamToday } from "@/lib/dates/zoned";
 import { formatDayShort } from "@/lib/format/dates";
-import { addDays, startOfWeek } from "@/lib/load";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { SessionCard } from "./session-card";
 
 export const metadata = { title: "My training" };
@@ -54,8 +54,8 @@ export default async function MyTrainingPage() {
       </>
     );
   }
-  const today = teamToday({ timeZone: viewer.timeZone });
-  const thisWeek = startOfWeek(today, engineWeekStartDay(viewer.weekStartDay));
+  const today = teamToday({ timeZone: viewer.timeZone, now: new Date() });
+  const thisWeek = startOfWeek(today, viewer.weekStartDay);
   const nextWeek = addDays(thisWeek, 7);
   const [sessions, feed] = await Promise.all([
     listAthleteSessions({

@@ -2,7 +2,7 @@ import { EmptyState } from "@/components/ui/card";
 import { Planner } from "@/components/planner/planner";
 import { pageViewer } from "@/lib/auth/page-access";
 import { scopeOf } from "@/lib/auth/permissions";
-import { teamToday } from "@/lib/data/load";
+import { teamToday } from "@/lib/dates/zoned";
 import { getPlanWeek } from "@/lib/data/plan";
 import { weekQuerySchema } from "@/lib/validations/plan";
 
@@ -24,7 +24,7 @@ export default async function PlanPage({
     );
   }
   const query = weekQuerySchema.safeParse({ week: (await searchParams).week });
-  const today = teamToday({ timeZone: viewer.timeZone });
+  const today = teamToday({ timeZone: viewer.timeZone, now: new Date() });
   const initial = await getPlanWeek({
     teamId: viewer.teamId,
     date: (query.success && query.data.week) || today,

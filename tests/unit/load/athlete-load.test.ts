@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { acwrSeries } from "@/lib/load/acwr";
 import { computeAthleteLoad } from "@/lib/load/athlete-load";
-import { addDays } from "@/lib/load/dates";
+import { addDays } from "@/lib/dates/plain-date";
 import { dailySeries } from "@/lib/load/series";
 import { computeSquadWeek } from "@/lib/load/squad";
 import { METRICS, type AcwrMethod, type SessionInput } from "@/lib/load/types";

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { computeAthleteColumns } from "@/lib/load/athlete-load";
-import { addDays, dayIndex, startOfWeek } from "@/lib/load/dates";
+import { addDays, dayIndex, startOfWeek } from "@/lib/dates/plain-date";
 import { packSessions } from "@/lib/load/packed";
 import { alignLogs } from "@/lib/load/series";
 import { computeSquadWeek } from "@/lib/load/squad";

@@ -1,5 +1,5 @@
 // Invented squad data for tests and scripts/bench-load.ts: seeded, so every run sees the same numbers.
-import { addDays } from "@/lib/load/dates";
+import { addDays } from "@/lib/dates/plain-date";
 import type { AthleteProfile, BlockInput, LogInput, PlyoLevel, SessionInput } from "@/lib/load/types";
 import { drill, mulberry32 } from "./fixtures";
 

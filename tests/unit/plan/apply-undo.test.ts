@@ -2,11 +2,11 @@ import { describe, expect, it } from "vitest";
 import { applyChange, mergeSaved, sessionsAfter, tempIdCounter } from "@/lib/plan/apply";
 import { popUndo, pushUndo, undoForChange, undoForDelete, undoForEdit, type UndoEntry } from "@/lib/plan/undo";
 import { findSession } from "@/lib/plan/drop";
-import { addDaysTo } from "@/lib/plan/week";
+import { addDays } from "@/lib/dates/plain-date";
 import { WEEK, history, planWeek, session } from "./fixtures";
 
-const tue = addDaysTo(WEEK, 1);
-const thu = addDaysTo(WEEK, 3);
+const tue = addDays(WEEK, 1);
+const thu = addDays(WEEK, 3);
 const maya = session(1, tue);
 const week = planWeek([
   { id: 1, name: "Maya", groupId: 10, past: history(1), sessions: [maya] },

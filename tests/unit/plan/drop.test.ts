@@ -1,12 +1,12 @@
 import { describe, expect, it } from "vitest";
 import { cellTargetSession, resolveDrop } from "@/lib/plan/drop";
 import { WEEK, history, planWeek, session } from "./fixtures";
-import { addDaysTo } from "@/lib/plan/week";
+import { addDays } from "@/lib/dates/plain-date";
 
-const tue = addDaysTo(WEEK, 1);
-const thu = addDaysTo(WEEK, 3);
+const tue = addDays(WEEK, 1);
+const thu = addDays(WEEK, 3);
 const mayaTue = session(1, tue);
-const logged = session(1, addDaysTo(WEEK, 4), { logged: true, status: "published" });
+const logged = session(1, addDays(WEEK, 4), { logged: true, status: "published" });
 const cancelled = session(2, tue, { status: "cancelled" });
 const week = planWeek([
   { id: 1, name: "Maya", groupId: 10, past: history(1), sessions: [mayaTue, logged] },
@@ -160,7 +160,7 @@ describe("resolveDrop: which drop creates, adds a block, moves or copies", () =>
         resolveDrop({
           week,
           source: { type: "template", templateId: 1 },
-          target: { type: "cell", athleteId: 1, date: addDaysTo(WEEK, 7) },
+          target: { type: "cell", athleteId: 1, date: addDays(WEEK, 7) },
         }),
       ),
     ).toMatch(/outside/);

@@ -5,7 +5,7 @@ import { buildWeekPreviewContext } from "@/lib/load/week-preview";
 import { toSessionInput } from "@/lib/plan/blocks";
 import { compactContext } from "@/lib/plan/context";
 import type { PlanAthlete, PlanBlock, PlanSession, PlanTemplate, PlanWeek } from "@/lib/plan/types";
-import { addDaysTo, weekDays } from "@/lib/plan/week";
+import { addDays, weekDays } from "@/lib/dates/plain-date";
 
 // Invented athletes and templates; the week is built the way lib/data/plan.ts builds it (same engine calls).
 
@@ -91,7 +91,7 @@ export function history(athleteId: number, weeks = 5): Past {
   const out: Past = { sessions: [], logs: [] };
   for (let w = weeks; w >= 1; w--) {
     for (const d of [0, 2, 4]) {
-      const s = toSessionInput(session(athleteId, addDaysTo(WEEK, -7 * w + d), { status: "published" }));
+      const s = toSessionInput(session(athleteId, addDays(WEEK, -7 * w + d), { status: "published" }));
       out.sessions.push(s);
       out.logs.push({ sessionId: s.id, completion: "yes", rpe: 5, minutes: 40, completedReps: null });
     }
@@ -150,7 +150,7 @@ export function planWeek(specs: AthleteSpec[]): PlanWeek {
     timeZone: "Europe/London",
     weekStartDay: 1,
     weekStart: WEEK,
-    weekEnd: addDaysTo(WEEK, 6),
+    weekEnd: addDays(WEEK, 6),
     isoWeek: 10,
     isoYear: 2026,
     days: weekDays(WEEK),

@@ -2,12 +2,12 @@ import { describe, expect, it } from "vitest";
 import { sessionsAfter, tempIdCounter } from "@/lib/plan/apply";
 import { previewChange, rowLoad } from "@/lib/plan/preview";
 import type { PlanChange } from "@/lib/plan/drop";
-import { addDaysTo } from "@/lib/plan/week";
+import { addDays } from "@/lib/dates/plain-date";
 import { WEEK, history, planWeek, serverRow, session } from "./fixtures";
 
 const mon = WEEK;
-const tue = addDaysTo(WEEK, 1);
-const wed = addDaysTo(WEEK, 2);
+const tue = addDays(WEEK, 1);
+const wed = addDays(WEEK, 2);
 const specs = [
   { id: 1, name: "Maya", groupId: 10, past: history(1), sessions: [session(1, mon), session(1, wed)] },
   { id: 2, name: "Jonah", groupId: 10, past: history(2), sessions: [session(2, mon, { blocks: [] })] },
@@ -41,7 +41,7 @@ describe("the drag preview computes what the server will store", () => {
   });
 
   it.each<[string, PlanChange]>([
-    ["a new session", { kind: "create", templateId: 1, athleteId: 1, date: addDaysTo(WEEK, 4) }],
+    ["a new session", { kind: "create", templateId: 1, athleteId: 1, date: addDays(WEEK, 4) }],
     [
       "an added block",
       { kind: "add-block", templateId: 2, sessionId: specs[0].sessions[0].id, athleteId: 1, date: mon },
@@ -52,7 +52,7 @@ describe("the drag preview computes what the server will store", () => {
         kind: "move",
         sessionId: specs[0].sessions[1].id,
         athleteId: 2,
-        date: addDaysTo(WEEK, 5),
+        date: addDays(WEEK, 5),
         fromAthleteId: 1,
         fromDate: wed,
       },
@@ -76,7 +76,7 @@ describe("the drag preview computes what the server will store", () => {
   });
 
   it("adds the template's HSR metres and sRPE to the row's totals", () => {
-    const [row] = expectPreviewMatchesServer({ kind: "create", templateId: 1, athleteId: 1, date: addDaysTo(WEEK, 4) });
+    const [row] = expectPreviewMatchesServer({ kind: "create", templateId: 1, athleteId: 1, date: addDays(WEEK, 4) });
     // sRPE = RPE × minutes (Foster et al. 2001): the template's 7 × 50 = 350 AU.
     expect(row.after.week.totals.srpe - row.before.week.totals.srpe).toBeCloseTo(350, 9);
     expect(row.after.week.totals.hsrM).toBeGreaterThan(row.before.week.totals.hsrM);
@@ -138,7 +138,7 @@ describe("a drop that raises a flag is marked with the reason", () => {
           : t,
       ),
     };
-    const [row] = previewChange(heavy, { kind: "create", templateId: 2, athleteId: 1, date: addDaysTo(WEEK, 5) });
+    const [row] = previewChange(heavy, { kind: "create", templateId: 2, athleteId: 1, date: addDays(WEEK, 5) });
     expect(row.warnings.find((f) => f.kind === "plyo_volume")?.reason).toMatch(/160 ground contacts, above 120/);
   });
 });

@@ -2,11 +2,11 @@ import { describe, expect, it } from "vitest";
 import { resolveDrop } from "@/lib/plan/drop";
 import { changeHits, sessionHits } from "@/lib/plan/restrictions";
 import type { Restriction } from "@/lib/restrictions/rules";
-import { addDaysTo } from "@/lib/plan/week";
+import { addDays } from "@/lib/dates/plain-date";
 import { WEEK, planWeek, session } from "./fixtures";
 
 // Invented: Maya (1) may not run max velocity from Wednesday; Jonah (2) has no restriction.
-const wed = addDaysTo(WEEK, 2);
+const wed = addDays(WEEK, 2);
 const noFlys: Restriction = {
   id: 5,
   athleteId: 1,
@@ -38,7 +38,7 @@ describe("changeHits: the grid's check before a drop", () => {
     expect(changeHits(week, change(flysTemplate, 1, wed))).toEqual([
       expect.objectContaining({ restrictionId: 5, athleteId: 1, date: wed, detail: "Flying 30s: max velocity" }),
     ]);
-    expect(changeHits(week, change(flysTemplate, 1, addDaysTo(WEEK, 1)))).toEqual([]);
+    expect(changeHits(week, change(flysTemplate, 1, addDays(WEEK, 1)))).toEqual([]);
     expect(changeHits(week, change(flysTemplate, 2, wed))).toEqual([]);
   });
 
@@ -61,7 +61,7 @@ describe("changeHits: the grid's check before a drop", () => {
     const move = resolveDrop({
       week: w,
       source: { type: "session", sessionId: withFlys.id },
-      target: { type: "cell", athleteId: 1, date: addDaysTo(WEEK, 3) },
+      target: { type: "cell", athleteId: 1, date: addDays(WEEK, 3) },
     });
     expect(move?.ok && changeHits(w, move.change)).toHaveLength(1);
     const copy = resolveDrop({

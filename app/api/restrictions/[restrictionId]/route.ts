@@ -1,5 +1,5 @@
 import { requireMember, requireViewer } from "@/lib/auth/access";
-import { teamToday } from "@/lib/data/load";
+import { teamToday } from "@/lib/dates/zoned";
 import { liftRestriction, restrictionTeam } from "@/lib/data/restrictions";
 import { AppError } from "@/lib/errors";
 import { parseJson, parseParams, route } from "@/lib/http";
@@ -21,7 +21,7 @@ export const PATCH = route<Params>(async (req, { params }) => {
     teamId: viewer.teamId,
     restrictionId,
     actorUserId: viewer.userId,
-    today: teamToday({ timeZone: viewer.timeZone }),
+    today: teamToday({ timeZone: viewer.timeZone, now: new Date() }),
   });
   return Response.json({ restriction });
 });

@@ -1,6 +1,6 @@
 import "server-only";
 import { requireMember } from "@/lib/auth/access";
-import { teamToday } from "@/lib/data/load";
+import { teamToday } from "@/lib/dates/zoned";
 import { findSessionRef, withWeekRows } from "@/lib/data/plan";
 import type { PlanWriteResult } from "@/lib/plan/types";
 import { AppError } from "@/lib/errors";
@@ -19,7 +19,7 @@ export async function sessionEditor(params: Promise<{ sessionId: string }>) {
 /** The write's answer with the server's week numbers for the athletes it touched. */
 export async function answer(ctx: { teamId: number; timeZone: string }, result: PlanWriteResult, status = 200) {
   return Response.json(
-    await withWeekRows({ teamId: ctx.teamId, today: teamToday({ timeZone: ctx.timeZone }), result }),
+    await withWeekRows({ teamId: ctx.teamId, today: teamToday({ timeZone: ctx.timeZone, now: new Date() }), result }),
     { status },
   );
 }

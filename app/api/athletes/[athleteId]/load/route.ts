@@ -1,5 +1,5 @@
 import { requireAthlete } from "@/lib/auth/access";
-import { viewerClock } from "@/lib/data/load";
+import { viewerClock } from "@/lib/dates/zoned";
 import { getAthleteLoad } from "@/lib/data/load-views";
 import { parseParams, parseQuery, route } from "@/lib/http";
 import { athleteLoadQuerySchema, athleteParamsSchema } from "@/lib/validations/load";

@@ -1,6 +1,6 @@
 import { requireAthlete } from "@/lib/auth/access";
 import { scopeOf } from "@/lib/auth/permissions";
-import { teamToday } from "@/lib/data/load";
+import { teamToday } from "@/lib/dates/zoned";
 import { deleteSessionLog, getLogTarget, saveSessionLog } from "@/lib/data/logs";
 import { AppError } from "@/lib/errors";
 import { parseJson, parseParams, route } from "@/lib/http";
@@ -32,7 +32,7 @@ export const PUT = route<Params>(async (req, { params }) => {
     target,
     input,
     actorUserId: viewer.userId,
-    today: teamToday({ timeZone: viewer.timeZone }),
+    today: teamToday({ timeZone: viewer.timeZone, now: new Date() }),
   });
   return Response.json({ log });
 });

@@ -1,5 +1,5 @@
 import { requireMember } from "@/lib/auth/access";
-import { viewerClock } from "@/lib/data/load";
+import { viewerClock } from "@/lib/dates/zoned";
 import { getSquadWeekLoad } from "@/lib/data/load-views";
 import { parseParams, parseQuery, route } from "@/lib/http";
 import { squadLoadQuerySchema } from "@/lib/validations/load";

@@ -1,6 +1,6 @@
 import { requireMember } from "@/lib/auth/access";
 import { scopeOf } from "@/lib/auth/permissions";
-import { teamToday } from "@/lib/data/load";
+import { teamToday } from "@/lib/dates/zoned";
 import { getPlanWeek } from "@/lib/data/plan";
 import { parseParams, parseQuery, route } from "@/lib/http";
 import { teamParamsSchema, weekQuerySchema } from "@/lib/validations/plan";
@@ -12,7 +12,7 @@ export const GET = route<{ teamId: string }>(async (req, { params }) => {
   const { teamId } = parseParams(await params, teamParamsSchema);
   const viewer = await requireMember({ teamId, can: "plan:view", scope: "own" });
   const { week } = parseQuery(req, weekQuerySchema);
-  const today = teamToday({ timeZone: viewer.timeZone });
+  const today = teamToday({ timeZone: viewer.timeZone, now: new Date() });
   const scope = scopeOf(viewer.role, "plan:view") === "team" ? "team" : "own";
   const audience = {
     scope,

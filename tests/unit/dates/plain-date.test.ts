@@ -11,7 +11,7 @@ import {
   minutesOfDay,
   startOfWeek,
   weekday,
-} from "@/lib/load/dates";
+} from "@/lib/dates/plain-date";
 
 describe("local calendar dates", () => {
   it("day numbers agree with the proleptic Gregorian calendar of Date.UTC for 1900–2100", () => {
@@ -40,12 +40,12 @@ describe("local calendar dates", () => {
     expect(() => dayIndex("2026-02-30")).toThrow(RangeError);
   });
 
-  it("weekdays (0 = Sunday) and week starts", () => {
+  it("weekdays (ISO: 1 = Monday … 7 = Sunday) and week starts", () => {
     expect(weekday("2026-03-12")).toBe(4); // Thursday
     expect(weekday("1970-01-01")).toBe(4);
     expect(startOfWeek("2026-03-12")).toBe("2026-03-09"); // Monday
     expect(startOfWeek("2026-03-15")).toBe("2026-03-09"); // Sunday belongs to the Monday week
-    expect(startOfWeek("2026-03-12", 0)).toBe("2026-03-08");
+    expect(startOfWeek("2026-03-12", 7)).toBe("2026-03-08"); // a Sunday-start week
     expect(startOfWeek("2026-03-09")).toBe("2026-03-09");
   });
 

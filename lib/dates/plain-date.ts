@@ -1,6 +1,9 @@
 // Local calendar dates as "YYYY-MM-DD" and wall-clock times as "HH:MM", handled with integer day
-// arithmetic. A local date is a calendar date, so no timezone library (and no Date object) is needed.
-// Day numbers count days since 1970-01-01 (proleptic Gregorian).
+// arithmetic. A local date is a calendar date, so no timezone library (and no Date object) is needed: the
+// same answer on server and browser whatever their zones. Day numbers count days since 1970-01-01
+// (proleptic Gregorian). Weekdays are ISO 8601 (1 = Monday … 7 = Sunday) everywhere in Sprintwright.
+// Isomorphic and pure: the planner, the load engine, the calendar and the mails share it. Anything that
+// needs a time zone (today's date in the team's zone, instants) is in ./zoned.ts.
 
 const DASH = 45;
 const ZERO = 48;
@@ -90,19 +93,61 @@ export function diffDays(to: string, from: string): number {
   return dayIndex(to) - dayIndex(from);
 }
 
-/** Day of week, 0 = Sunday … 6 = Saturday (same numbering as Date#getDay). 1970-01-01 was a Thursday. */
-export function weekdayOfDay(day: number): number {
-  return (((day + 4) % 7) + 7) % 7;
+export type IsoWeekday = 1 | 2 | 3 | 4 | 5 | 6 | 7;
+
+/** ISO 8601 weekday of a day number: 1 = Monday … 7 = Sunday. 1970-01-01 was a Thursday (4). */
+export function weekdayOfDay(day: number): IsoWeekday {
+  return (((((day + 3) % 7) + 7) % 7) + 1) as IsoWeekday;
 }
 
-export function weekday(date: string): number {
+export function weekday(date: string): IsoWeekday {
   return weekdayOfDay(dayIndex(date));
 }
 
-/** First day of the week holding `date`; weekStartDay 0 = Sunday, 1 = Monday (default) … 6 = Saturday. */
+export function isIsoWeekday(value: unknown): value is IsoWeekday {
+  return typeof value === "number" && Number.isInteger(value) && value >= 1 && value <= 7;
+}
+
+function checkWeekStart(weekStartDay: number): void {
+  // A stray 0 (the old "0 = Sunday" numbering) must fail loudly rather than pass as Sunday by accident.
+  if (!isIsoWeekday(weekStartDay)) throw new RangeError(`Week start must be an ISO weekday 1–7, got ${weekStartDay}`);
+}
+
+/** Day number of the first day of the week holding `day`; `weekStartDay` is ISO (1 = Monday, default … 7 = Sunday). */
+export function weekStartOfDay(day: number, weekStartDay = 1): number {
+  checkWeekStart(weekStartDay);
+  return day - ((weekdayOfDay(day) - weekStartDay + 7) % 7);
+}
+
+/** First day of the week holding `date`; `weekStartDay` is ISO (1 = Monday, default … 7 = Sunday). */
 export function startOfWeek(date: string, weekStartDay = 1): string {
-  const day = dayIndex(date);
-  return dateFromDayIndex(day - ((weekdayOfDay(day) - weekStartDay + 7) % 7));
+  return dateFromDayIndex(weekStartOfDay(dayIndex(date), weekStartDay));
+}
+
+/** The seven dates of the week starting on `weekStart`. */
+export function weekDays(weekStart: string): string[] {
+  const start = dayIndex(weekStart);
+  return Array.from({ length: 7 }, (_, i) => dateFromDayIndex(start + i));
+}
+
+export function shiftWeek(weekStart: string, weeks: number): string {
+  return addDays(weekStart, weeks * 7);
+}
+
+export function isDateInWeek(date: string, weekStart: string): boolean {
+  return date >= weekStart && date <= addDays(weekStart, 6);
+}
+
+/**
+ * ISO 8601 week number of a week. A Monday week is exactly one ISO week; a week starting on another day takes
+ * the ISO week of its fourth day, which holds most of its days (the same rule ISO uses for years: week 1 holds
+ * the year's first Thursday, ISO 8601-1:2019 §3.1.1.23).
+ */
+export function isoWeekOf(weekStart: string): { week: number; year: number } {
+  const mid = dayIndex(weekStart) + 3;
+  const thursday = mid - weekdayOfDay(mid) + 4;
+  const year = civilFromDay(thursday).year;
+  return { week: Math.floor((thursday - daysFromCivil(year, 1, 1)) / 7) + 1, year };
 }
 
 /** Inclusive list of dates from `from` to `to`; empty when `to` is before `from`. */
@@ -144,12 +189,30 @@ export function minutesBetween(dateA: string, timeA: string, dateB: string, time
   return (dayIndex(dateB) - dayIndex(dateA)) * 1440 + minutesOfDay(timeB) - minutesOfDay(timeA);
 }
 
-const WEEKDAY_SHORT = ["Sun", "Mon", "Tue", "Wed", "Thu", "Fri", "Sat"];
+const WEEKDAY_SHORT = ["Mon", "Tue", "Wed", "Thu", "Fri", "Sat", "Sun"];
 const MONTH_SHORT = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"];
 
-/** "Thu 12 Mar": the same text on server and browser (no locale APIs). */
+// Labels use fixed English names, not the locale APIs: server and browser must print the same text.
+
+/** "Thu 12 Mar". */
 export function formatDayLabel(date: string): string {
+  const h = dayHeading(date);
+  return `${h.weekday} ${h.date}`;
+}
+
+/** Column heading parts: { weekday: "Tue", date: "3 Mar" }. */
+export function dayHeading(date: string): { weekday: string; date: string } {
   const day = dayIndex(date);
   const c = civilFromDay(day);
-  return `${WEEKDAY_SHORT[weekdayOfDay(day)]} ${c.day} ${MONTH_SHORT[c.month - 1]}`;
+  return { weekday: WEEKDAY_SHORT[weekdayOfDay(day) - 1], date: `${c.day} ${MONTH_SHORT[c.month - 1]}` };
+}
+
+/** "3–9 Mar 2026", "30 Mar – 5 Apr 2026" or "29 Dec 2025 – 4 Jan 2026". */
+export function weekRangeLabel(weekStart: string): string {
+  const a = civilFromDay(dayIndex(weekStart));
+  const b = civilFromDay(dayIndex(weekStart) + 6);
+  const month = (c: { month: number }) => MONTH_SHORT[c.month - 1];
+  if (a.year !== b.year) return `${a.day} ${month(a)} ${a.year} – ${b.day} ${month(b)} ${b.year}`;
+  if (a.month !== b.month) return `${a.day} ${month(a)} – ${b.day} ${month(b)} ${b.year}`;
+  return `${a.day}–${b.day} ${month(b)} ${b.year}`;
 }

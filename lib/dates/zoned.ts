@@ -1,0 +1,18 @@
+import { DateTime } from "luxon";
+
+// The only date code that needs a time zone: which local date an instant falls on in the team's zone.
+// Pure given its inputs: callers read the clock (`new Date()`) at the edge and pass it in.
+
+/** The local date ("YYYY-MM-DD") of `now` in `timeZone`; an unknown zone falls back to UTC. */
+export function teamToday({ timeZone, now }: { timeZone: string; now: Date }): string {
+  const dt = DateTime.fromJSDate(now).setZone(timeZone);
+  return (dt.isValid ? dt : DateTime.fromJSDate(now).toUTC()).toISODate()!;
+}
+
+/** A team's zone and the ISO weekday its week starts on (1 = Monday … 7 = Sunday, as stored). */
+export type TeamClock = { teamId: number; timeZone: string; weekStartDay: number };
+
+/** The clock of an authorized viewer (lib/auth's Viewer carries the team's zone and week start). */
+export function viewerClock(viewer: { timeZone: string; weekStartDay: number }): Omit<TeamClock, "teamId"> {
+  return { timeZone: viewer.timeZone, weekStartDay: viewer.weekStartDay };
+}
