@@ -48,22 +48,30 @@ function partHtml(part: EmailPart): string {
             `<td valign="top" style="padding:6px 0;color:${INK};font-weight:600;">${escapeHtml(value)}</td></tr>`,
         )
         .join("");
-      return `<table role="presentation" cellpadding="0" cellspacing="0" border="0" style="margin:0 0 16px;font:400 15px/1.5 ${FONT};">${rows}</table>`;
+      return (
+        `<table role="presentation" cellpadding="0" cellspacing="0" border="0" ` +
+        `style="margin:0 0 16px;font:400 15px/1.5 ${FONT};">${rows}</table>`
+      );
     }
     case "list": {
       const items = part.items
         .map((item) => `<tr><td style="padding:8px 0;border-bottom:1px solid ${RULE};">${escapeHtml(item)}</td></tr>`)
         .join("");
-      return `<table role="presentation" width="100%" cellpadding="0" cellspacing="0" border="0" style="margin:0 0 16px;font:400 15px/1.5 ${FONT};color:${INK};">${items}</table>`;
+      return (
+        `<table role="presentation" width="100%" cellpadding="0" cellspacing="0" border="0" ` +
+        `style="margin:0 0 16px;font:400 15px/1.5 ${FONT};color:${INK};">${items}</table>`
+      );
     }
     case "button": {
       const href = escapeHtml(assertWebUrl(part.url));
       return (
         `<table role="presentation" cellpadding="0" cellspacing="0" border="0" style="margin:8px 0 12px;"><tr>` +
         `<td style="border-radius:6px;background:${LANE};">` +
-        `<a href="${href}" style="display:inline-block;padding:12px 22px;font:600 15px/1.2 ${FONT};color:#ffffff;text-decoration:none;border-radius:6px;">${escapeHtml(part.label)}</a>` +
+        `<a href="${href}" style="display:inline-block;padding:12px 22px;font:600 15px/1.2 ${FONT};color:#ffffff;` +
+        `text-decoration:none;border-radius:6px;">${escapeHtml(part.label)}</a>` +
         `</td></tr></table>` +
-        `<p style="margin:0 0 16px;font-size:13px;color:${MUTED};">Or open this link: <a href="${href}" style="color:${LANE};word-break:break-all;">${href}</a></p>`
+        `<p style="margin:0 0 16px;font-size:13px;color:${MUTED};">` +
+        `Or open this link: <a href="${href}" style="color:${LANE};word-break:break-all;">${href}</a></p>`
       );
     }
     case "link": {
@@ -117,15 +125,18 @@ export function renderEmail(content: EmailContent): RenderedEmail {
 ${preheader}
 <table role="presentation" width="100%" cellpadding="0" cellspacing="0" border="0" style="background:${PAGE};">
 <tr><td align="center" style="padding:24px 12px;">
-<table role="presentation" width="100%" cellpadding="0" cellspacing="0" border="0" style="max-width:560px;background:#ffffff;border-radius:8px;">
+<table role="presentation" width="100%" cellpadding="0" cellspacing="0" border="0"
+  style="max-width:560px;background:#ffffff;border-radius:8px;">
 <tr><td style="height:5px;line-height:5px;font-size:0;background:${LANE};border-radius:8px 8px 0 0;">&nbsp;</td></tr>
 <tr><td style="height:2px;line-height:2px;font-size:0;background:${LANE_SOFT};">&nbsp;</td></tr>
 <tr><td style="padding:20px 28px 0;font:700 14px/1.4 ${FONT};letter-spacing:0.04em;color:${LANE};">Sprintwright</td></tr>
-<tr><td style="padding:6px 28px 0;"><h1 style="margin:0;font:700 22px/1.3 ${FONT};color:${INK};">${escapeHtml(content.heading)}</h1></td></tr>
+<tr><td style="padding:6px 28px 0;">
+<h1 style="margin:0;font:700 22px/1.3 ${FONT};color:${INK};">${escapeHtml(content.heading)}</h1></td></tr>
 <tr><td style="padding:16px 28px 8px;font:400 15px/1.6 ${FONT};color:${INK};">
 ${body}
 </td></tr>
-<tr><td style="padding:14px 28px 20px;border-top:1px solid ${RULE};font:400 12px/1.5 ${FONT};color:${MUTED};">${escapeHtml(content.footer)}</td></tr>
+<tr><td style="padding:14px 28px 20px;border-top:1px solid ${RULE};font:400 12px/1.5 ${FONT};color:${MUTED};">
+${escapeHtml(content.footer)}</td></tr>
 </table>
 </td></tr>
 </table>

@@ -37,7 +37,9 @@ export function memberInvitationEmail(input: MemberInvitationEmailInput): Render
         ? [
             {
               kind: "paragraph" as const,
-              text: "You already have a Sprintwright account with this address: sign in with it to accept. Nothing is shared with the team until you do.",
+              text:
+                "You already have a Sprintwright account with this address: sign in with it to accept. " +
+                "Nothing is shared with the team until you do.",
             },
           ]
         : []),

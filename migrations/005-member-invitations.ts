@@ -30,7 +30,8 @@ export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
     email: string;
     name: string;
   }>(
-    `SELECT m.id, m.team_id, m.user_id, m.role, u.email, u.name FROM memberships m JOIN users u ON u.id = m.user_id WHERE u.password_hash IS NULL`,
+    `SELECT m.id, m.team_id, m.user_id, m.role, u.email, u.name
+     FROM memberships m JOIN users u ON u.id = m.user_id WHERE u.password_hash IS NULL`,
     { type: QueryTypes.SELECT },
   );
   for (const m of pending) {

@@ -128,16 +128,20 @@ async function main() {
     const pad = (s: string, n: number) => s.padEnd(n);
     const num = (s: string, n: number) => s.padStart(n);
     console.log(
-      `\n${pad("endpoint", 42)}${num("req/s", 9)}${num("×floor", 8)}${num("p50 ms", 9)}${num("×floor", 8)}${num("p99 ms", 9)}${num("×floor", 8)}${num("errors", 8)}${num("non-2xx", 9)}${num("5xx", 6)}`,
+      `\n${pad("endpoint", 42)}${num("req/s", 9)}${num("×floor", 8)}${num("p50 ms", 9)}${num("×floor", 8)}` +
+        `${num("p99 ms", 9)}${num("×floor", 8)}${num("errors", 8)}${num("non-2xx", 9)}${num("5xx", 6)}`,
     );
     for (const r of rows) {
       console.log(
-        `${pad(r.name, 42)}${num(r.rps.toFixed(0), 9)}${num(ratio(r.rps, floor.rps), 8)}${num(String(r.p50), 9)}${num(ratio(r.p50, floor.p50), 8)}${num(String(r.p99), 9)}${num(ratio(r.p99, floor.p99), 8)}${num(String(r.errors), 8)}${num(String(r.non2xx), 9)}${num(String(r.fivexx), 6)}`,
+        `${pad(r.name, 42)}${num(r.rps.toFixed(0), 9)}${num(ratio(r.rps, floor.rps), 8)}` +
+          `${num(String(r.p50), 9)}${num(ratio(r.p50, floor.p50), 8)}${num(String(r.p99), 9)}${num(ratio(r.p99, floor.p99), 8)}` +
+          `${num(String(r.errors), 8)}${num(String(r.non2xx), 9)}${num(String(r.fivexx), 6)}`,
       );
     }
     const bad = rows.filter((r) => r.errors > 0 || r.fivexx > 0);
     console.log(
-      `\nbar: zero connection errors and zero 5xx → ${bad.length === 0 ? "met" : `NOT met (${bad.map((r) => r.name).join(", ")})`} (load average ${loadavg()[0].toFixed(2)} at end)`,
+      `\nbar: zero connection errors and zero 5xx → ${bad.length === 0 ? "met" : `NOT met (${bad.map((r) => r.name).join(", ")})`}` +
+        ` (load average ${loadavg()[0].toFixed(2)} at end)`,
     );
     if (bad.length > 0) process.exitCode = 1;
   } finally {

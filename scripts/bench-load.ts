@@ -296,7 +296,8 @@ function main(): void {
   ]);
   console.log(`computeAthleteLoad, ${DAYS}+ day rows each, all ${ATHLETES} athletes: ${ms(withDays)}`);
   console.log(
-    `computeWeekPreview, one athlete, ${ctx.historyDates.length} history days (drag preview): ${(preview.wall * 1000).toFixed(1)} µs wall (target < 1 ms: ${preview.wall < 1 ? "met" : "NOT met"})`,
+    `computeWeekPreview, one athlete, ${ctx.historyDates.length} history days (drag preview): ` +
+      `${(preview.wall * 1000).toFixed(1)} µs wall (target < 1 ms: ${preview.wall < 1 ? "met" : "NOT met"})`,
   );
 
   // ---------------------------------------------------------------------------------------------

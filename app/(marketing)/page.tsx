@@ -8,15 +8,22 @@ import { authOptions } from "@/lib/auth/options";
 const ROLES = [
   {
     who: "Coaches",
-    what: "Build each athlete's week from acceleration, max-velocity and plyometric blocks. Drop a block on a day and see HSR metres, near-max metres, ground contacts, sRPE and ACWR change before you commit.",
+    what:
+      "Build each athlete's week from acceleration, max-velocity and plyometric blocks. " +
+      "Drop a block on a day and see HSR metres, near-max metres, ground contacts, sRPE and ACWR change before you commit.",
   },
   {
     who: "Athletes",
-    what: "Get every session on your phone's calendar through a personal feed, read it in plain words, and log what you actually did in under a minute.",
+    what:
+      "Get every session on your phone's calendar through a personal feed, " +
+      "read it in plain words, and log what you actually did in under a minute.",
   },
   {
     who: "Physios",
-    what: "See the whole squad's load, set restrictions the planner enforces, get an e-mail and an in-app alert the moment a spike is planned or happens (or a coach plans past a restriction), and follow up on each alert with a note.",
+    what:
+      "See the whole squad's load, set restrictions the planner enforces, " +
+      "get an e-mail and an in-app alert the moment a spike is planned or happens (or a coach plans past a restriction), " +
+      "and follow up on each alert with a note.",
   },
 ];
 

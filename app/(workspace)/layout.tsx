@@ -1,3 +1,4 @@
+import { clsx } from "clsx";
 import type { ReactNode } from "react";
 import { Logo } from "@/components/shell/logo";
 import { SignOutButton } from "@/components/shell/sign-out-button";
@@ -14,7 +15,12 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
   const links = [...base, ...extras.filter((e) => !base.some((b) => b.href === e.href))];
   return (
     <div className="min-h-dvh md:grid md:grid-cols-[15rem_1fr]">
-      <aside className="border-b border-ink-100 bg-paper-raised px-4 py-3 md:sticky md:top-0 md:h-dvh md:border-r md:border-b-0 md:px-4 md:py-6">
+      <aside
+        className={clsx(
+          "border-b border-ink-100 bg-paper-raised px-4 py-3 md:sticky",
+          "md:top-0 md:h-dvh md:border-r md:border-b-0 md:px-4 md:py-6",
+        )}
+      >
         <div className="flex items-center justify-between md:block">
           <Logo href="/home" />
           <div className="md:hidden">

@@ -1,5 +1,6 @@
 "use client";
 
+import { clsx } from "clsx";
 import type { ReactTable } from "@tanstack/react-table";
 import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/field";
@@ -76,7 +77,10 @@ export function SquadToolbar({
       </label>
       <details className="relative">
         <summary
-          className="flex h-10 cursor-pointer list-none items-center rounded-lg px-3 text-sm font-medium text-ink-700 ring-1 ring-ink-200 ring-inset hover:bg-ink-50"
+          className={clsx(
+            "flex h-10 cursor-pointer list-none items-center rounded-lg px-3 text-sm",
+            "font-medium text-ink-700 ring-1 ring-ink-200 ring-inset hover:bg-ink-50",
+          )}
           data-testid="choose-columns"
         >
           Columns

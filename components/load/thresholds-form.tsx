@@ -192,7 +192,10 @@ export function ThresholdsForm({ teamId, initial }: { teamId: number; initial: T
     <form onSubmit={onSubmit} noValidate className="space-y-6" data-testid="thresholds-form">
       <Section
         title="Speed lines"
-        lead="Running at or above these speeds counts towards HSR and near-max metres. Both kinds of band are shown in the squad table; the choice below decides which HSR line feeds the flags."
+        lead={
+          "Running at or above these speeds counts towards HSR and near-max metres. " +
+          "Both kinds of band are shown in the squad table; the choice below decides which HSR line feeds the flags."
+        }
       >
         <Field
           label="HSR zones"

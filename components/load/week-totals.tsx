@@ -36,7 +36,8 @@ export function WeekTotals({ week, estimated = true }: { week: WeekSummary; esti
         {week.strain[m] === null ? "–" : formatNumber(week.strain[m]!, 0)} (Foster 1998;{" "}
         {week.sdType === "population" ? "population" : "sample"} SD)
         {week.missingDays > 0
-          ? ` · ${week.missingDays} day${week.missingDays === 1 ? "" : "s"} with a session not logged (${estimated ? "counted from the plan, an estimate" : "left out"})`
+          ? ` · ${week.missingDays} day${week.missingDays === 1 ? "" : "s"} with a session not logged ` +
+            `(${estimated ? "counted from the plan, an estimate" : "left out"})`
           : ""}
       </p>
     </Card>

@@ -79,7 +79,10 @@ const RestrictionChip = memo(function RestrictionChip({ restrictions }: { restri
     <span
       data-testid="row-restriction"
       title={limitsText}
-      className="mt-0.5 inline-flex max-w-full items-center gap-1 truncate rounded-full border border-flag-climb/30 bg-flag-climb-soft px-1.5 py-px text-2xs font-medium text-flag-climb"
+      className={clsx(
+        "mt-0.5 inline-flex max-w-full items-center gap-1 truncate rounded-full border border-flag-climb/30",
+        "bg-flag-climb-soft px-1.5 py-px text-2xs font-medium text-flag-climb",
+      )}
     >
       <span aria-hidden>⚕</span>
       {restrictions.length === 1 ? "Physio restriction" : `${restrictions.length} physio restrictions`}

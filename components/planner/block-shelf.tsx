@@ -37,7 +37,10 @@ export const BlockShelf = memo(function BlockShelf({
       id="block-shelf"
       aria-label="Block shelf"
       data-testid="block-shelf"
-      className="order-first flex min-w-0 flex-col gap-3 rounded-card bg-paper-raised p-3 shadow-card ring-1 ring-ink-100 xl:sticky xl:top-4 xl:order-none xl:max-h-[calc(100dvh-2rem)]"
+      className={clsx(
+        "order-first flex min-w-0 flex-col gap-3 rounded-card bg-paper-raised p-3 shadow-card",
+        "ring-1 ring-ink-100 xl:sticky xl:top-4 xl:order-none xl:max-h-[calc(100dvh-2rem)]",
+      )}
     >
       <div className="flex items-center justify-between">
         <h2 className="text-sm font-semibold text-ink-900">Block shelf</h2>
@@ -73,7 +76,12 @@ export const BlockShelf = memo(function BlockShelf({
         ))}
       </div>
       {/* A row that scrolls sideways above the grid on narrower screens; a column beside it on wide ones. */}
-      <ul className="-mb-1 flex gap-1.5 overflow-x-auto pb-1 xl:-mr-1 xl:mb-0 xl:flex-col xl:overflow-x-visible xl:overflow-y-auto xl:pr-1 xl:pb-0">
+      <ul
+        className={clsx(
+          "-mb-1 flex gap-1.5 overflow-x-auto pb-1 xl:-mr-1 xl:mb-0 xl:flex-col",
+          "xl:overflow-x-visible xl:overflow-y-auto xl:pr-1 xl:pb-0",
+        )}
+      >
         {shown.map((t) => (
           <TemplateCard key={t.id} template={t} canEdit={canEdit} onEdit={onEdit} />
         ))}

@@ -61,7 +61,12 @@ export function DropCell({
     >
       {children}
       {isOver && hint ? (
-        <span className="pointer-events-none absolute inset-x-1 bottom-1 rounded bg-lane-600 px-1 py-0.5 text-center text-2xs font-medium text-white">
+        <span
+          className={clsx(
+            "pointer-events-none absolute inset-x-1 bottom-1 rounded bg-lane-600",
+            "px-1 py-0.5 text-center text-2xs font-medium text-white",
+          )}
+        >
           {hint}
         </span>
       ) : null}

@@ -19,7 +19,10 @@ export function describeChange(week: PlanWeek, c: PlanChange): string {
     case "add-block":
       return `"${templateOf(week, c.templateId)}" added to ${nameOf(week, c.athleteId)}'s session on ${formatDayShort(c.date)}`;
     case "group":
-      return `"${templateOf(week, c.templateId)}" for ${c.targets.length} athletes of ${week.groups.find((g) => g.id === c.groupId)?.name ?? "the group"} on ${formatDayShort(c.date)}`;
+      return (
+        `"${templateOf(week, c.templateId)}" for ${c.targets.length} athletes of ` +
+        `${week.groups.find((g) => g.id === c.groupId)?.name ?? "the group"} on ${formatDayShort(c.date)}`
+      );
     case "move":
       return `"${findSession(week, c.sessionId)?.title ?? "session"}" moved to ${nameOf(week, c.athleteId)}'s ${formatDayShort(c.date)}`;
     case "copy":

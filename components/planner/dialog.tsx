@@ -1,5 +1,6 @@
 "use client";
 
+import { clsx } from "clsx";
 import { useEffect, useId, useRef, type ReactNode } from "react";
 
 /** A modal built on the native <dialog>: focus stays inside, Escape closes, the page behind is inert. */
@@ -35,7 +36,11 @@ export function Dialog({
         e.preventDefault();
         onClose();
       }}
-      className={`m-auto max-h-[90dvh] w-[calc(100%-2rem)] overflow-y-auto rounded-card bg-paper-raised p-0 text-ink-900 shadow-lift backdrop:bg-ink-950/30 ${wide ? "max-w-3xl" : "max-w-lg"}`}
+      className={clsx(
+        "m-auto max-h-[90dvh] w-[calc(100%-2rem)] overflow-y-auto rounded-card bg-paper-raised p-0",
+        "text-ink-900 shadow-lift backdrop:bg-ink-950/30",
+        wide ? "max-w-3xl" : "max-w-lg",
+      )}
     >
       {open ? (
         <div className="p-5">

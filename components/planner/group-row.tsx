@@ -44,7 +44,10 @@ export const GroupRow = memo(function GroupRow({
           type="button"
           aria-expanded={!collapsed}
           onClick={() => onToggle(groupKey(group))}
-          className="flex w-full items-center gap-1.5 rounded px-1 text-xs font-semibold tracking-wider text-ink-600 uppercase hover:text-ink-900"
+          className={clsx(
+            "flex w-full items-center gap-1.5 rounded px-1 text-xs font-semibold",
+            "tracking-wider text-ink-600 uppercase hover:text-ink-900",
+          )}
         >
           <svg
             viewBox="0 0 12 12"

@@ -161,7 +161,8 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
         armCopy(s.id);
         say(
           "info",
-          `Copy mode for "${s.title}": drag the card (or focus it, press Space and use the arrow keys) to where the copy goes. Escape leaves copy mode.`,
+          `Copy mode for "${s.title}": drag the card (or focus it, press Space and use the arrow keys) ` +
+            `to where the copy goes. Escape leaves copy mode.`,
         );
       },
       remove: async (s: PlanSession) => {

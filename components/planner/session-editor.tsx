@@ -100,7 +100,9 @@ function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { s
     if (e instanceof PlanApiError && e.stale && e.current) {
       setVersion(e.current.version);
       setNotice(
-        `This session was changed by someone else while you were editing (it is now "${e.current.title}" at ${e.current.startTime}, ${e.current.blocks.length} blocks). Save again to replace it with what you see here, or close to keep their version.`,
+        `This session was changed by someone else while you were editing ` +
+          `(it is now "${e.current.title}" at ${e.current.startTime}, ${e.current.blocks.length} blocks). ` +
+          `Save again to replace it with what you see here, or close to keep their version.`,
       );
       return;
     }

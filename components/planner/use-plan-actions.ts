@@ -149,7 +149,8 @@ export function usePlanActions({
         const s = e.current;
         say(
           "refused",
-          `${what} was not saved: someone else changed ${s ? `"${s.title}"` : "this session"} a moment ago. The grid now shows the latest plan; try again if it is still needed.`,
+          `${what} was not saved: someone else changed ${s ? `"${s.title}"` : "this session"} a moment ago. ` +
+            `The grid now shows the latest plan; try again if it is still needed.`,
         );
       } else if (e instanceof PlanApiError && e.status === 404) {
         await refetch();
@@ -364,7 +365,8 @@ export function usePlanActions({
               : `Published ${n} session${n === 1 ? "" : "s"}; athletes will get them in their calendars.`
             : tool === "copy-to-next"
               ? `Copied ${n} session${n === 1 ? "" : "s"} to next week as drafts.`
-              : `Cleared the week: ${res.removedIds.length} draft${res.removedIds.length === 1 ? "" : "s"} removed, ${n} published session${n === 1 ? "" : "s"} cancelled.`;
+              : `Cleared the week: ${res.removedIds.length} draft${res.removedIds.length === 1 ? "" : "s"} removed, ` +
+                `${n} published session${n === 1 ? "" : "s"} cancelled.`;
         say("saved", text);
       } catch (e) {
         await explain(e, "The week tool");

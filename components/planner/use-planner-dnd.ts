@@ -149,10 +149,12 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
       const parts = rows.map((r) => {
         const name = w.athletes.find((a) => a.id === r.athleteId)?.name ?? "";
         const warn = r.warnings.map((f) => `${FLAG_DISPLAY[f.kind].label}: ${f.reason}`).join(" ");
-        return `${name}: sRPE ${formatNumber(r.before.week.totals.srpe, 0)} to ${formatNumber(r.after.week.totals.srpe, 0)} AU.${warn ? ` ${warn}` : ""}`;
+        const srpe = `${formatNumber(r.before.week.totals.srpe, 0)} to ${formatNumber(r.after.week.totals.srpe, 0)}`;
+        return `${name}: sRPE ${srpe} AU.${warn ? ` ${warn}` : ""}`;
       });
       const limits = hits.map((h) => `Physio restriction: ${h.rule}. ${h.detail}.`).join(" ");
-      return `Over ${where}. Dropping makes ${describeChange(w, outcome.change)}. ${parts.join(" ")}${limits ? ` ${limits} Dropping asks for a reason.` : ""}`;
+      const asks = limits ? ` ${limits} Dropping asks for a reason.` : "";
+      return `Over ${where}. Dropping makes ${describeChange(w, outcome.change)}. ${parts.join(" ")}${asks}`;
     },
     [previewFor, week],
   );

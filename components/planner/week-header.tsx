@@ -1,5 +1,6 @@
 "use client";
 
+import { clsx } from "clsx";
 import { useState } from "react";
 import type { PlanWeek } from "@/lib/plan/types";
 import { shiftWeek, weekRangeLabel } from "@/lib/dates/plain-date";
@@ -29,7 +30,9 @@ const QUESTION: Record<Tool, (w: PlanWeek) => ConfirmRequest> = {
   }),
   clear: () => ({
     title: "Clear this week?",
-    body: "Drafts are removed. Published sessions are cancelled, and athletes see them cancelled in their calendars. Sessions an athlete has logged stay.",
+    body:
+      "Drafts are removed. Published sessions are cancelled, and athletes see them cancelled in their calendars. " +
+      "Sessions an athlete has logged stay.",
     confirmLabel: "Clear week",
     danger: true,
   }),
@@ -67,7 +70,10 @@ export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onToo
         </div>
         <nav
           aria-label="Weeks"
-          className="flex flex-wrap items-center gap-1 self-start rounded-lg bg-paper-raised p-1 whitespace-nowrap ring-1 ring-ink-100 xl:self-auto"
+          className={clsx(
+            "flex flex-wrap items-center gap-1 self-start rounded-lg bg-paper-raised",
+            "p-1 whitespace-nowrap ring-1 ring-ink-100 xl:self-auto",
+          )}
         >
           <Button
             variant="ghost"

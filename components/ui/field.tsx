@@ -8,7 +8,8 @@ import {
 } from "react";
 
 export const inputClass =
-  "block w-full rounded-lg border-0 bg-paper-raised px-3 py-2 text-sm text-ink-900 ring-1 ring-inset ring-ink-200 placeholder:text-ink-300 focus:ring-2 focus:ring-lane-500 aria-[invalid=true]:ring-flag-spike";
+  "block w-full rounded-lg border-0 bg-paper-raised px-3 py-2 text-sm text-ink-900 ring-1 ring-inset ring-ink-200 " +
+  "placeholder:text-ink-300 focus:ring-2 focus:ring-lane-500 aria-[invalid=true]:ring-flag-spike";
 
 export function Field({
   label,

@@ -36,7 +36,28 @@ export type AlertRow = AlertCandidate & {
   unread: boolean;
 };
 
-const FIELDS = ["id", "athleteId", "kind", "level", "metric", "value", "threshold", "date", "weekStart", "basis", "reason", "provisional", "flagged", "status", "note", "acknowledgedBy", "acknowledgedAt", "resolvedBy", "resolvedAt", "createdAt"] as const;
+const FIELDS = [
+  "id",
+  "athleteId",
+  "kind",
+  "level",
+  "metric",
+  "value",
+  "threshold",
+  "date",
+  "weekStart",
+  "basis",
+  "reason",
+  "provisional",
+  "flagged",
+  "status",
+  "note",
+  "acknowledgedBy",
+  "acknowledgedAt",
+  "resolvedBy",
+  "resolvedAt",
+  "createdAt",
+] as const;
 
 /**
  * Brings the stored alerts of one athlete-week in line with what the engine raises now, and returns the
@@ -57,7 +78,11 @@ export async function syncWeekAlerts(args: {
   const { transaction, teamId, athleteId, weekStart, basis } = args;
   const created: Array<{ id: number } & AlertCandidate> = [];
   // One read for the week; the newest row of each kind decides.
-  const rows = await Alert.findAll({ where: { athleteId, weekStart, kind: { [Op.in]: [...args.kinds] } }, order: [["id", "DESC"]], transaction });
+  const rows = await Alert.findAll({
+    where: { athleteId, weekStart, kind: { [Op.in]: [...args.kinds] } },
+    order: [["id", "DESC"]],
+    transaction,
+  });
   for (const kind of args.kinds) {
     const candidate = args.candidates.find((c) => c.kind === kind);
     const latest = rows.find((r) => r.kind === kind) ?? null;
@@ -81,7 +106,21 @@ export async function syncWeekAlerts(args: {
     // Resolved while the flag stayed up: the physio has dealt with this one.
     if (latest?.flagged) continue;
     const row = await Alert.create(
-      { teamId, athleteId, kind, weekStart, basis, ...facts, flagged: true, status: "open", note: null, acknowledgedBy: null, acknowledgedAt: null, resolvedBy: null, resolvedAt: null },
+      {
+        teamId,
+        athleteId,
+        kind,
+        weekStart,
+        basis,
+        ...facts,
+        flagged: true,
+        status: "open",
+        note: null,
+        acknowledgedBy: null,
+        acknowledgedAt: null,
+        resolvedBy: null,
+        resolvedAt: null,
+      },
       { transaction },
     );
     created.push({ id: row.id, ...candidate });
@@ -97,7 +136,10 @@ function statusWhere(status: AlertListQuery["status"]): WhereOptions {
 
 async function toRows(rows: Alert[], seenAt: Date | null): Promise<AlertRow[]> {
   const { Athlete } = await db();
-  const athletes = await Athlete.findAll({ where: { id: { [Op.in]: [...new Set(rows.map((r) => r.athleteId))] } }, attributes: ["id", "name"] });
+  const athletes = await Athlete.findAll({
+    where: { id: { [Op.in]: [...new Set(rows.map((r) => r.athleteId))] } },
+    attributes: ["id", "name"],
+  });
   const athleteName = new Map(athletes.map((a) => [a.id, a.name]));
   const people = await userNames(rows.flatMap((r) => [r.acknowledgedBy, r.resolvedBy]));
   return rows.map((r) => ({
@@ -127,7 +169,15 @@ async function toRows(rows: Alert[], seenAt: Date | null): Promise<AlertRow[]> {
 }
 
 /** The team's alerts, newest first; `unread` is relative to when this member last opened the inbox. */
-export async function listAlerts({ teamId, userId, query }: { teamId: number; userId: number; query: AlertListQuery }): Promise<AlertRow[]> {
+export async function listAlerts({
+  teamId,
+  userId,
+  query,
+}: {
+  teamId: number;
+  userId: number;
+  query: AlertListQuery;
+}): Promise<AlertRow[]> {
   const { Alert } = await db();
   const rows = await Alert.findAll({
     where: { teamId, ...statusWhere(query.status), ...(query.athleteId ? { athleteId: query.athleteId } : {}) },
@@ -162,22 +212,49 @@ const NEXT_STATUS: Record<AlertActionInput["action"], { to: AlertStatus; from: A
 };
 
 /** Moves an alert along open → acknowledged → resolved (or back to open); resolving needs a note. */
-export async function updateAlertStatus({ teamId, alertId, userId, input, now = new Date() }: { teamId: number; alertId: number; userId: number; input: AlertActionInput; now?: Date }): Promise<AlertRow> {
+export async function updateAlertStatus({
+  teamId,
+  alertId,
+  userId,
+  input,
+  now = new Date(),
+}: {
+  teamId: number;
+  alertId: number;
+  userId: number;
+  input: AlertActionInput;
+  now?: Date;
+}): Promise<AlertRow> {
   const { sequelize, Alert } = await db();
   await sequelize.transaction(async (transaction) => {
     const alert = await Alert.findOne({ where: { id: alertId, teamId }, transaction });
     if (!alert) throw new AppError("not_found", "No such alert");
     const step = NEXT_STATUS[input.action];
     if (!step.from.includes(alert.status)) {
-      throw new AppError("conflict", `This alert is ${alert.status}; it cannot be changed that way`, { fields: { action: [`Not possible while ${alert.status}`] } });
+      throw new AppError("conflict", `This alert is ${alert.status}; it cannot be changed that way`, {
+        fields: { action: [`Not possible while ${alert.status}`] },
+      });
     }
     if (input.action === "reopen" && alert.status === "resolved") {
       // The partial unique index allows one unresolved alert per athlete × kind × week.
-      const other = await Alert.count({ where: { athleteId: alert.athleteId, kind: alert.kind, weekStart: alert.weekStart, status: { [Op.ne]: "resolved" } }, transaction });
-      if (other > 0) throw new AppError("conflict", "A newer alert for this athlete, kind and week is still open", { fields: { action: ["A newer alert is open"] } });
+      const other = await Alert.count({
+        where: {
+          athleteId: alert.athleteId,
+          kind: alert.kind,
+          weekStart: alert.weekStart,
+          status: { [Op.ne]: "resolved" },
+        },
+        transaction,
+      });
+      if (other > 0)
+        throw new AppError("conflict", "A newer alert for this athlete, kind and week is still open", {
+          fields: { action: ["A newer alert is open"] },
+        });
     }
     const note = input.note?.trim() ? input.note.trim() : alert.note;
-    const changes: Partial<Pick<Alert, "status" | "note" | "acknowledgedBy" | "acknowledgedAt" | "resolvedBy" | "resolvedAt">> = { status: step.to, note };
+    const changes: Partial<
+      Pick<Alert, "status" | "note" | "acknowledgedBy" | "acknowledgedAt" | "resolvedBy" | "resolvedAt">
+    > = { status: step.to, note };
     if (input.action === "acknowledge") Object.assign(changes, { acknowledgedBy: userId, acknowledgedAt: now });
     if (input.action === "resolve") Object.assign(changes, { resolvedBy: userId, resolvedAt: now });
     if (input.action === "reopen") Object.assign(changes, { resolvedBy: null, resolvedAt: null });
@@ -189,7 +266,15 @@ export async function updateAlertStatus({ teamId, alertId, userId, input, now = 
 }
 
 /** Alerts a digest covers: created in (after, until]. */
-export async function listAlertsCreatedBetween({ teamId, after, until }: { teamId: number; after: Date; until: Date }): Promise<AlertRow[]> {
+export async function listAlertsCreatedBetween({
+  teamId,
+  after,
+  until,
+}: {
+  teamId: number;
+  after: Date;
+  until: Date;
+}): Promise<AlertRow[]> {
   const { Alert } = await db();
   const rows = await Alert.findAll({
     where: { teamId, createdAt: { [Op.gt]: after, [Op.lte]: until } },
@@ -200,7 +285,15 @@ export async function listAlertsCreatedBetween({ teamId, after, until }: { teamI
 }
 
 /** The date of one of the athlete's sessions (the week a log re-checks), or null. */
-export async function getAthleteSessionDate({ athleteId, sessionId, transaction }: { athleteId: number; sessionId: number; transaction?: Transaction }): Promise<string | null> {
+export async function getAthleteSessionDate({
+  athleteId,
+  sessionId,
+  transaction,
+}: {
+  athleteId: number;
+  sessionId: number;
+  transaction?: Transaction;
+}): Promise<string | null> {
   const { PlannedSession } = await db();
   const row = await PlannedSession.findOne({ where: { id: sessionId, athleteId }, attributes: ["date"], transaction });
   return row ? String(row.date).slice(0, 10) : null;

@@ -19,13 +19,33 @@ export type AthleteRow = {
   hasAccount: boolean;
 };
 
-const ATHLETE_FIELDS = ["id", "name", "groupId", "userId", "sex", "birthDate", "bodyMassKg", "vmaxMs", "vmaxTestedOn", "tauS", "stepLengthM", "plyoLevel"] as const;
+const ATHLETE_FIELDS = [
+  "id",
+  "name",
+  "groupId",
+  "userId",
+  "sex",
+  "birthDate",
+  "bodyMassKg",
+  "vmaxMs",
+  "vmaxTestedOn",
+  "tauS",
+  "stepLengthM",
+  "plyoLevel",
+] as const;
 
 export type GroupRow = { id: number; name: string; sortOrder: number };
 
 export async function listGroups({ teamId }: { teamId: number }): Promise<GroupRow[]> {
   const { TrainingGroup } = await db();
-  const groups = await TrainingGroup.findAll({ where: { teamId }, attributes: ["id", "name", "sortOrder"], order: [["sortOrder", "ASC"], ["name", "ASC"]] });
+  const groups = await TrainingGroup.findAll({
+    where: { teamId },
+    attributes: ["id", "name", "sortOrder"],
+    order: [
+      ["sortOrder", "ASC"],
+      ["name", "ASC"],
+    ],
+  });
   return groups.map((g) => ({ id: g.id, name: g.name, sortOrder: g.sortOrder }));
 }
 
@@ -34,7 +54,11 @@ export async function listSquad({ teamId, athleteId }: { teamId: number; athlete
   const { Athlete } = await db();
   const [groups, athletes] = await Promise.all([
     listGroups({ teamId }),
-    Athlete.findAll({ where: athleteId ? { teamId, id: athleteId } : { teamId }, attributes: [...ATHLETE_FIELDS], order: [["name", "ASC"]] }),
+    Athlete.findAll({
+      where: athleteId ? { teamId, id: athleteId } : { teamId },
+      attributes: [...ATHLETE_FIELDS],
+      order: [["name", "ASC"]],
+    }),
   ]);
   const byId = new Map(groups.map((g) => [g.id, g]));
   const order = (groupId: number | null) => (groupId && byId.has(groupId) ? byId.get(groupId)!.sortOrder : 1e9);
@@ -83,7 +107,15 @@ export async function createAthlete({ teamId, input }: { teamId: number; input: 
   return { id: athlete.id };
 }
 
-export async function updateAthlete({ teamId, athleteId, input }: { teamId: number; athleteId: number; input: AthleteInput }): Promise<{ id: number }> {
+export async function updateAthlete({
+  teamId,
+  athleteId,
+  input,
+}: {
+  teamId: number;
+  athleteId: number;
+  input: AthleteInput;
+}): Promise<{ id: number }> {
   const { Athlete } = await db();
   await assertGroupOfTeam({ teamId, groupId: input.groupId });
   const [count] = await Athlete.update(input, { where: { id: athleteId, teamId } });

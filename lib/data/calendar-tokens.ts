@@ -21,22 +21,52 @@ const NONE: CalendarFeedStatus = { active: false, url: null, webcalUrl: null, cr
 
 export async function getCalendarFeedStatus({ athleteId }: { athleteId: number }): Promise<CalendarFeedStatus> {
   const { CalendarToken } = await db();
-  const row = await CalendarToken.findOne({ where: { athleteId, revokedAt: null }, attributes: ["tokenSealed", "createdAt", "lastUsedAt"] });
+  const row = await CalendarToken.findOne({
+    where: { athleteId, revokedAt: null },
+    attributes: ["tokenSealed", "createdAt", "lastUsedAt"],
+  });
   if (!row) return NONE;
   const token = row.tokenSealed ? unsealToken(row.tokenSealed) : null;
   const url = token ? feedUrl(appUrl(), token) : null;
-  return { active: true, url, webcalUrl: url ? webcalUrl(url) : null, createdAt: row.createdAt.toISOString(), lastUsedAt: row.lastUsedAt ? row.lastUsedAt.toISOString() : null };
+  return {
+    active: true,
+    url,
+    webcalUrl: url ? webcalUrl(url) : null,
+    createdAt: row.createdAt.toISOString(),
+    lastUsedAt: row.lastUsedAt ? row.lastUsedAt.toISOString() : null,
+  };
 }
 
 /** Replaces the athlete's feed token (the old link stops working at once) and returns the new link. */
-export async function rotateCalendarToken({ athleteId, createdBy, transaction, now = new Date() }: { athleteId: number; createdBy: number | null; transaction?: Transaction; now?: Date }): Promise<CalendarFeedStatus & { token: string }> {
+export async function rotateCalendarToken({
+  athleteId,
+  createdBy,
+  transaction,
+  now = new Date(),
+}: {
+  athleteId: number;
+  createdBy: number | null;
+  transaction?: Transaction;
+  now?: Date;
+}): Promise<CalendarFeedStatus & { token: string }> {
   const { sequelize, CalendarToken, Athlete } = await db();
   const run = async (t: Transaction) => {
     const athlete = await Athlete.findByPk(athleteId, { attributes: ["id", "teamId"], transaction: t });
     if (!athlete) throw new Error(`No athlete ${athleteId}`);
     await CalendarToken.update({ revokedAt: now }, { where: { athleteId, revokedAt: null }, transaction: t });
     const { token, hash } = newToken(32);
-    const row = await CalendarToken.create({ teamId: athlete.teamId, athleteId, tokenHash: hash, tokenSealed: sealToken(token), createdBy, revokedAt: null, lastUsedAt: null }, { transaction: t });
+    const row = await CalendarToken.create(
+      {
+        teamId: athlete.teamId,
+        athleteId,
+        tokenHash: hash,
+        tokenSealed: sealToken(token),
+        createdBy,
+        revokedAt: null,
+        lastUsedAt: null,
+      },
+      { transaction: t },
+    );
     const url = feedUrl(appUrl(), token);
     return { token, active: true, url, webcalUrl: webcalUrl(url), createdAt: row.createdAt.toISOString(), lastUsedAt: null };
   };
@@ -65,7 +95,10 @@ const LAST_USED_GRANULARITY_MS = 60 * 60_000;
  */
 export async function getFeedByToken({ token, now = new Date() }: { token: string; now?: Date }): Promise<AthleteFeedData | null> {
   const { CalendarToken, Athlete, Team } = await db();
-  const row = await CalendarToken.findOne({ where: { tokenHash: hashToken(token), revokedAt: null }, attributes: ["id", "athleteId", "teamId", "lastUsedAt"] });
+  const row = await CalendarToken.findOne({
+    where: { tokenHash: hashToken(token), revokedAt: null },
+    attributes: ["id", "athleteId", "teamId", "lastUsedAt"],
+  });
   if (!row) return null;
   const [athlete, team] = await Promise.all([
     Athlete.findOne({ where: { id: row.athleteId, teamId: row.teamId }, attributes: ["id", "name"] }),
@@ -82,14 +115,30 @@ export async function getFeedByToken({ token, now = new Date() }: { token: strin
 export type AthleteSession = CalendarSession & {
   sessionId: number;
   plannedRpe: number;
-  log: { completion: "yes" | "partly" | "no"; rpe: number | null; minutes: number | null; completedReps: Record<string, number> | null; notes: string | null } | null;
+  log: {
+    completion: "yes" | "partly" | "no";
+    rpe: number | null;
+    minutes: number | null;
+    completedReps: Record<string, number> | null;
+    notes: string | null;
+  } | null;
 };
 
 /**
  * The sessions an athlete sees (published and cancelled, never drafts) with blocks in order and their log:
  * the calendar feed and the athlete's own training screen read the same list.
  */
-export async function listAthleteSessions({ teamId, athleteId, from, to }: { teamId: number; athleteId: number; from?: string; to?: string }): Promise<AthleteSession[]> {
+export async function listAthleteSessions({
+  teamId,
+  athleteId,
+  from,
+  to,
+}: {
+  teamId: number;
+  athleteId: number;
+  from?: string;
+  to?: string;
+}): Promise<AthleteSession[]> {
   const { PlannedSession, SessionBlock, SessionLog } = await db();
   const range = from && to ? { date: { [Op.between]: [from, to] } } : {};
   const rows = await PlannedSession.findAll({
@@ -115,8 +164,23 @@ export async function listAthleteSessions({ teamId, athleteId, from, to }: { tea
       sequence: s.sequence,
       updatedAt: s.updatedAt,
       notes: s.notes,
-      blocks: (s.blocks ?? []).map((b): BlockInput => ({ id: String(b.id), kind: b.kind, title: b.title, running: b.running ?? null, drills: b.drills ?? null, ...(b.notes ? { notes: b.notes } : {}) })),
-      log: log ? { completion: log.completion, rpe: log.rpe, minutes: log.minutes, completedReps: log.completedReps, notes: log.notes } : null,
+      blocks: (s.blocks ?? []).map((b): BlockInput => ({
+        id: String(b.id),
+        kind: b.kind,
+        title: b.title,
+        running: b.running ?? null,
+        drills: b.drills ?? null,
+        ...(b.notes ? { notes: b.notes } : {}),
+      })),
+      log: log
+        ? {
+            completion: log.completion,
+            rpe: log.rpe,
+            minutes: log.minutes,
+            completedReps: log.completedReps,
+            notes: log.notes,
+          }
+        : null,
     };
   });
 }

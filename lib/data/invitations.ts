@@ -40,13 +40,31 @@ export async function withdrawInvitation({ teamId, invitationId, now = new Date(
 }
 
 /** Spends every open invitation of this account to this team (a new one replaces them). */
-export async function spendTeamInvitations({ teamId, userId, transaction, now = new Date() }: { teamId: number; userId: number; transaction: Transaction; now?: Date }) {
+export async function spendTeamInvitations({
+  teamId,
+  userId,
+  transaction,
+  now = new Date(),
+}: {
+  teamId: number;
+  userId: number;
+  transaction: Transaction;
+  now?: Date;
+}) {
   const { Invitation } = await db();
   await Invitation.update({ usedAt: now }, { where: { teamId, userId, purpose: "invite", usedAt: null }, transaction });
 }
 
 /** The unused, unexpired link with this token, locked to the caller's transaction when given. */
-export async function openInvitationByToken({ token, transaction, now = new Date() }: { token: string; transaction?: Transaction; now?: Date }): Promise<Invitation | null> {
+export async function openInvitationByToken({
+  token,
+  transaction,
+  now = new Date(),
+}: {
+  token: string;
+  transaction?: Transaction;
+  now?: Date;
+}): Promise<Invitation | null> {
   const { Invitation } = await db();
   return Invitation.findOne({ where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: now } }, transaction });
 }
@@ -55,18 +73,45 @@ export async function openInvitationByToken({ token, transaction, now = new Date
  * Turns an accepted invitation into a membership (the only place one is created for an invitee) and links
  * the athlete profile the team prepared, unless someone else took it meanwhile.
  */
-export async function grantMembership({ invitation, transaction }: { invitation: Invitation; transaction: Transaction }): Promise<{ teamId: number }> {
+export async function grantMembership({
+  invitation,
+  transaction,
+}: {
+  invitation: Invitation;
+  transaction: Transaction;
+}): Promise<{ teamId: number }> {
   const { Membership, Athlete } = await db();
   const { teamId, userId, role } = invitation;
-  if (!role) throw new AppError("invalid", "This invitation no longer works. Ask your head coach for a new one.", { fields: { token: ["Expired or used"] } });
+  if (!role)
+    throw new AppError("invalid", "This invitation no longer works. Ask your head coach for a new one.", {
+      fields: { token: ["Expired or used"] },
+    });
   const existing = await Membership.findOne({ where: { teamId, userId }, attributes: ["id"], transaction });
   if (!existing) await Membership.create({ teamId, userId, role }, { transaction });
   if (role === "athlete") {
     const linked = await Athlete.findOne({ where: { teamId, userId }, attributes: ["id"], transaction });
     if (!linked) {
-      const profile = invitation.athleteId ? await Athlete.findOne({ where: { id: invitation.athleteId, teamId, userId: null }, transaction }) : null;
+      const profile = invitation.athleteId
+        ? await Athlete.findOne({ where: { id: invitation.athleteId, teamId, userId: null }, transaction })
+        : null;
       if (profile) await profile.update({ userId }, { transaction });
-      else await Athlete.create({ teamId, userId, name: invitation.name ?? "New athlete", groupId: null, sex: null, birthDate: null, bodyMassKg: null, vmaxMs: null, vmaxTestedOn: null, tauS: null, stepLengthM: null }, { transaction });
+      else
+        await Athlete.create(
+          {
+            teamId,
+            userId,
+            name: invitation.name ?? "New athlete",
+            groupId: null,
+            sex: null,
+            birthDate: null,
+            bodyMassKg: null,
+            vmaxMs: null,
+            vmaxTestedOn: null,
+            tauS: null,
+            stepLengthM: null,
+          },
+          { transaction },
+        );
     }
   }
   return { teamId };
@@ -80,8 +125,15 @@ export async function joinTeam({ token, userId, now = new Date() }: { token: str
   const { sequelize, Team } = await db();
   return sequelize.transaction(async (transaction) => {
     const invitation = await openInvitationByToken({ token, transaction, now });
-    if (!invitation || invitation.purpose !== "invite") throw new AppError("invalid", "This invitation has expired or was already used", { fields: { token: ["Expired or used"] } });
-    if (invitation.userId !== userId) throw new AppError("forbidden", "This invitation is for another account. Sign in with the address it was sent to.");
+    if (!invitation || invitation.purpose !== "invite")
+      throw new AppError("invalid", "This invitation has expired or was already used", {
+        fields: { token: ["Expired or used"] },
+      });
+    if (invitation.userId !== userId)
+      throw new AppError(
+        "forbidden",
+        "This invitation is for another account. Sign in with the address it was sent to.",
+      );
     const { teamId } = await grantMembership({ invitation, transaction });
     await invitation.update({ usedAt: now }, { transaction });
     const team = await Team.findByPk(teamId, { attributes: ["name"], transaction });

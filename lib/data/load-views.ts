@@ -65,7 +65,19 @@ export type SquadWeekDto = {
 };
 
 /** The squad's week: totals per metric, ACWR (provisional marked) and flags with reasons, one row per athlete. */
-export async function getSquadWeekLoad({ teamId, week, view, today, clock }: { teamId: number; week?: string; view: LoadView; today?: string; clock?: Clock }): Promise<SquadWeekDto> {
+export async function getSquadWeekLoad({
+  teamId,
+  week,
+  view,
+  today,
+  clock,
+}: {
+  teamId: number;
+  week?: string;
+  view: LoadView;
+  today?: string;
+  clock?: Clock;
+}): Promise<SquadWeekDto> {
   const probe = clock ?? (await getTeamClock({ teamId }));
   const now = today ?? teamToday({ timeZone: probe.timeZone, now: new Date() });
   const weekStart = startOfWeek(week ?? now, probe.weekStartDay);
@@ -73,7 +85,15 @@ export async function getSquadWeekLoad({ teamId, week, view, today, clock }: { t
   const inputs = await getLoadSeriesInputs({ teamId, through: weekEnd });
   const rows = computeSquadWeek(
     // Packed into columns once here, the two years of history are summed from typed arrays (lib/load/packed.ts).
-    inputs.athletes.map((a) => ({ id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions: a.sessions, logs: a.logs, packed: packSessions(a.sessions, a.logs) })),
+    inputs.athletes.map((a) => ({
+      id: String(a.id),
+      name: a.name,
+      group: a.groupName,
+      profile: a.profile,
+      sessions: a.sessions,
+      logs: a.logs,
+      packed: packSessions(a.sessions, a.logs),
+    })),
     inputs.settings,
     weekStart,
     now,
@@ -160,12 +180,36 @@ function defaultRange(today: string, weekStartDay: number): { from: string; to: 
  * `withDrafts: false` is the athlete's own view: a coach's drafts are invisible to athletes, so their figures must
  * not count (and so reveal) them; staff see the week being planned.
  */
-export async function getAthleteLoad({ teamId, athleteId, from, to, view, metric, today, clock, withDrafts = true }: { teamId: number; athleteId: number; from?: string; to?: string; view: LoadView; metric?: Metric; today?: string; clock?: Clock; withDrafts?: boolean }): Promise<AthleteLoadDto> {
+export async function getAthleteLoad({
+  teamId,
+  athleteId,
+  from,
+  to,
+  view,
+  metric,
+  today,
+  clock,
+  withDrafts = true,
+}: {
+  teamId: number;
+  athleteId: number;
+  from?: string;
+  to?: string;
+  view: LoadView;
+  metric?: Metric;
+  today?: string;
+  clock?: Clock;
+  withDrafts?: boolean;
+}): Promise<AthleteLoadDto> {
   const probe = clock ?? (await getTeamClock({ teamId }));
   const now = today ?? teamToday({ timeZone: probe.timeZone, now: new Date() });
   const fallback = defaultRange(now, probe.weekStartDay);
-  const range = { from: from ?? (to ? addDays(to, -69) : fallback.from), to: to ?? (from ? addDays(from, 69) : fallback.to) };
-  if (dayIndex(range.to) < dayIndex(range.from)) throw new AppError("invalid", "Invalid to", { fields: { to: ["Must be on or after from"] } });
+  const range = {
+    from: from ?? (to ? addDays(to, -69) : fallback.from),
+    to: to ?? (from ? addDays(from, 69) : fallback.to),
+  };
+  if (dayIndex(range.to) < dayIndex(range.from))
+    throw new AppError("invalid", "Invalid to", { fields: { to: ["Must be on or after from"] } });
   const weekStart = startOfWeek(now <= range.to ? now : range.to, probe.weekStartDay);
   // Through the end of next week as well: the "upcoming" summary reads it.
   const nextWeekEnd = addDays(weekStart, 13);
@@ -174,13 +218,30 @@ export async function getAthleteLoad({ teamId, athleteId, from, to, view, metric
   const { athlete, settings } = inputs;
   const chosen = metric ?? settings.acwrMetric;
   const sessions = withDrafts ? athlete.sessions : athlete.sessions.filter((s) => s.status !== "draft");
-  const base = { profile: athlete.profile, settings: { ...settings, acwrMetric: chosen }, sessions, from: range.from, to: range.to, weekStart };
+  const base = {
+    profile: athlete.profile,
+    settings: { ...settings, acwrMetric: chosen },
+    sessions,
+    from: range.from,
+    to: range.to,
+    weekStart,
+  };
   const load = computeAthleteLoad({ ...base, logs: athlete.logs, today: now, view });
   // "Planned": the engine's projected view with today before every session and no logs counts the whole plan.
   const plan = computeAthleteLoad({ ...base, logs: [], today: "1970-01-01", view: "projected" });
   // Flags judge the team's own metric, not the one charted.
-  const flagged = chosen === settings.acwrMetric ? load : computeAthleteLoad({ ...base, settings, logs: athlete.logs, today: now, view });
-  const next = computeAthleteLoad({ ...base, settings, logs: athlete.logs, today: now, view: "projected", weekStart: addDays(weekStart, 7) });
+  const flagged =
+    chosen === settings.acwrMetric
+      ? load
+      : computeAthleteLoad({ ...base, settings, logs: athlete.logs, today: now, view });
+  const next = computeAthleteLoad({
+    ...base,
+    settings,
+    logs: athlete.logs,
+    today: now,
+    view: "projected",
+    weekStart: addDays(weekStart, 7),
+  });
   return {
     athlete: { id: athlete.id, name: athlete.name, groupName: athlete.groupName, profile: athlete.profile },
     from: range.from,
@@ -239,7 +300,13 @@ export async function previewAthleteWeek({ input, today }: { input: LoadPreviewI
     durationMin: s.durationMin,
     plannedRpe: s.plannedRpe,
     status: s.status,
-    blocks: s.blocks.map((b) => ({ id: b.id === undefined ? undefined : String(b.id), kind: b.kind, title: b.title, running: b.running, drills: b.drills })),
+    blocks: s.blocks.map((b) => ({
+      id: b.id === undefined ? undefined : String(b.id),
+      kind: b.kind,
+      title: b.title,
+      running: b.running,
+      drills: b.drills,
+    })),
   }));
   const outside = athlete.sessions.filter((s) => s.date < weekStart || s.date > weekEnd);
   // Logs carry over to proposed sessions that are the same saved session (same id), per-block reps included:

@@ -112,11 +112,14 @@ const SESSION_FILTER = "s.team_id = :teamId AND s.date <= :through AND (:everyon
 const SQL = {
   team: `SELECT t.time_zone, t.week_start_day, ${SETTINGS_SQL_COLUMNS}
     FROM teams t LEFT JOIN team_load_settings s ON s.team_id = t.id WHERE t.id = :teamId`,
-  athletes: `SELECT a.id, a.name, a.group_id, g.name AS group_name, g.sort_order AS group_order, a.vmax_ms, a.tau_s, a.step_length_m, a.plyo_level
+  athletes: `SELECT a.id, a.name, a.group_id, g.name AS group_name, g.sort_order AS group_order,
+    a.vmax_ms, a.tau_s, a.step_length_m, a.plyo_level
     FROM athletes a LEFT JOIN training_groups g ON g.id = a.group_id
     WHERE a.team_id = :teamId AND (:everyone = 1 OR a.id IN (:athleteIds))`,
-  sessions: `SELECT s.id, s.athlete_id, s.date, s.start_time, s.duration_min, s.planned_rpe, s.status, l.completion, l.rpe, l.minutes, l.completed_reps,
-    (SELECT '[' || group_concat('[' || b.id || ',' || json_quote(b.kind) || ',' || json_quote(b.title) || ',' || coalesce(b.running, 'null') || ','
+  sessions: `SELECT s.id, s.athlete_id, s.date, s.start_time, s.duration_min, s.planned_rpe, s.status,
+    l.completion, l.rpe, l.minutes, l.completed_reps,
+    (SELECT '[' || group_concat('[' || b.id || ',' || json_quote(b.kind) || ',' || json_quote(b.title) || ','
+      || coalesce(b.running, 'null') || ','
       || coalesce(b.drills, 'null') || ']', ',' ORDER BY b.position, b.id) || ']' FROM session_blocks b WHERE b.session_id = s.id) AS blocks
     FROM planned_sessions s LEFT JOIN session_logs l ON l.session_id = s.id
     WHERE ${SESSION_FILTER} ORDER BY s.date, s.start_time, s.id`,
@@ -129,13 +132,28 @@ function toBlocks(packed: string | null): BlockInput[] {
 }
 
 /** The one reader of load inputs: every athlete of the team (or only `athleteIds`) with all sessions and logs up to `through`. */
-export async function getLoadSeriesInputs({ teamId, athleteIds, through, transaction }: Through & { teamId: number; athleteIds?: readonly number[] }): Promise<LoadInputs> {
+export async function getLoadSeriesInputs({
+  teamId,
+  athleteIds,
+  through,
+  transaction,
+}: Through & { teamId: number; athleteIds?: readonly number[] }): Promise<LoadInputs> {
   const { sequelize } = await db();
   // IN () is not SQL: an empty list becomes [0], which matches no row.
-  const replacements = { teamId, everyone: athleteIds ? 0 : 1, athleteIds: athleteIds && athleteIds.length > 0 ? [...athleteIds] : [0], through };
-  const select = <T extends object>(sql: string) => sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements, transaction });
+  const replacements = {
+    teamId,
+    everyone: athleteIds ? 0 : 1,
+    athleteIds: athleteIds && athleteIds.length > 0 ? [...athleteIds] : [0],
+    through,
+  };
+  const select = <T extends object>(sql: string) =>
+    sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements, transaction });
   // A constant three queries whatever the squad size: no query per athlete or per session.
-  const [[team], athletes, sessions] = await Promise.all([select<TeamRow>(SQL.team), select<AthleteRow>(SQL.athletes), select<SessionRow>(SQL.sessions)]);
+  const [[team], athletes, sessions] = await Promise.all([
+    select<TeamRow>(SQL.team),
+    select<AthleteRow>(SQL.athletes),
+    select<SessionRow>(SQL.sessions),
+  ]);
   if (!team) throw new AppError("not_found", "Not found");
   const settings = toEngineSettings(team.settings_id === null ? null : team);
 
@@ -164,7 +182,13 @@ export async function getLoadSeriesInputs({ teamId, athleteIds, through, transac
       blocks: toBlocks(s.blocks),
     });
     if (s.completion !== null) {
-      athlete.logs.push({ sessionId: String(s.id), completion: s.completion, rpe: num(s.rpe), minutes: num(s.minutes), completedReps: json<Record<string, number>>(s.completed_reps) });
+      athlete.logs.push({
+        sessionId: String(s.id),
+        completion: s.completion,
+        rpe: num(s.rpe),
+        minutes: num(s.minutes),
+        completedReps: json<Record<string, number>>(s.completed_reps),
+      });
     }
   }
   const order = new Map(athletes.map((a) => [a.id, a.group_order ?? 1e9]));
@@ -173,7 +197,11 @@ export async function getLoadSeriesInputs({ teamId, athleteIds, through, transac
 }
 
 /** One athlete's engine inputs (getLoadSeriesInputs for their team); 404 when the athlete does not exist. */
-export async function getAthleteLoadInputs({ athleteId, through, transaction }: Through & { athleteId: number }): Promise<LoadInputs & { athlete: LoadAthleteInputs }> {
+export async function getAthleteLoadInputs({
+  athleteId,
+  through,
+  transaction,
+}: Through & { athleteId: number }): Promise<LoadInputs & { athlete: LoadAthleteInputs }> {
   const { Athlete } = await db();
   const row = await Athlete.findByPk(athleteId, { attributes: ["teamId"], raw: true, transaction });
   if (!row) throw new AppError("not_found", "Not found");

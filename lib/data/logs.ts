@@ -35,7 +35,13 @@ export async function getLogTarget({ sessionId }: { sessionId: number }): Promis
   const blocks = await SessionBlock.findAll({ where: { sessionId }, attributes: ["id", "kind", "title", "running", "drills"] });
   const blockReps: Record<string, number> = {};
   for (const b of blocks) {
-    const input: BlockInput = { id: String(b.id), kind: b.kind as BlockKind, title: b.title, running: b.running as RunningPrescription | null, drills: b.drills as PlyoDrill[] | null };
+    const input: BlockInput = {
+      id: String(b.id),
+      kind: b.kind as BlockKind,
+      title: b.title,
+      running: b.running as RunningPrescription | null,
+      drills: b.drills as PlyoDrill[] | null,
+    };
     blockReps[String(b.id)] = prescribedReps(input);
   }
   return { id: session.id, teamId: session.teamId, athleteId: session.athleteId, date: session.date, status: session.status, blockReps };
@@ -44,9 +50,18 @@ export async function getLogTarget({ sessionId }: { sessionId: number }): Promis
 /** Rules that need the stored session; each failure names its field (400). */
 function checkLog(target: LogTarget, input: SessionLogInput, today: string): void {
   // A draft was never sent to the athlete: logging it would pin a session the coach is still shaping.
-  if (target.status === "draft") throw new AppError("invalid", "This session is still a draft", { fields: { session: ["Publish the session before it is logged"] } });
-  if (target.status === "cancelled") throw new AppError("invalid", "This session was cancelled", { fields: { session: ["A cancelled session cannot be logged"] } });
-  if (target.date > today) throw new AppError("invalid", "This session is still ahead", { fields: { session: [`Log it on ${target.date} or later`] } });
+  if (target.status === "draft")
+    throw new AppError("invalid", "This session is still a draft", {
+      fields: { session: ["Publish the session before it is logged"] },
+    });
+  if (target.status === "cancelled")
+    throw new AppError("invalid", "This session was cancelled", {
+      fields: { session: ["A cancelled session cannot be logged"] },
+    });
+  if (target.date > today)
+    throw new AppError("invalid", "This session is still ahead", {
+      fields: { session: [`Log it on ${target.date} or later`] },
+    });
   const fields: FieldErrors = {};
   for (const [blockId, reps] of Object.entries(input.completedReps ?? {})) {
     const prescribed = target.blockReps[blockId];
@@ -58,7 +73,16 @@ function checkLog(target: LogTarget, input: SessionLogInput, today: string): voi
   if (Object.keys(fields).length > 0) throw new AppError("invalid", `Invalid ${Object.keys(fields).join(", ")}`, { fields });
 }
 
-function toDto(log: { sessionId: number; athleteId: number; completion: SessionLogDto["completion"]; rpe: number | null; minutes: number | null; completedReps: Record<string, number> | null; notes: string | null; updatedAt: Date }): SessionLogDto {
+function toDto(log: {
+  sessionId: number;
+  athleteId: number;
+  completion: SessionLogDto["completion"];
+  rpe: number | null;
+  minutes: number | null;
+  completedReps: Record<string, number> | null;
+  notes: string | null;
+  updatedAt: Date;
+}): SessionLogDto {
   return {
     sessionId: log.sessionId,
     athleteId: log.athleteId,
@@ -72,12 +96,31 @@ function toDto(log: { sessionId: number; athleteId: number; completion: SessionL
 }
 
 /** Creates or replaces the session's log and tells notices, in one transaction. */
-export async function saveSessionLog({ target, input, actorUserId, today }: { target: LogTarget; input: SessionLogInput; actorUserId: number; today: string }): Promise<SessionLogDto> {
+export async function saveSessionLog({
+  target,
+  input,
+  actorUserId,
+  today,
+}: {
+  target: LogTarget;
+  input: SessionLogInput;
+  actorUserId: number;
+  today: string;
+}): Promise<SessionLogDto> {
   checkLog(target, input, today);
   const { SessionLog, sequelize } = await db();
   // A session not done has no RPE or duration to record.
-  const done = input.completion === "no" ? { rpe: null, minutes: null, completedReps: null } : { rpe: input.rpe, minutes: input.minutes, completedReps: input.completedReps };
-  const values = { sessionId: target.id, athleteId: target.athleteId, completion: input.completion, notes: input.notes, ...done };
+  const done =
+    input.completion === "no"
+      ? { rpe: null, minutes: null, completedReps: null }
+      : { rpe: input.rpe, minutes: input.minutes, completedReps: input.completedReps };
+  const values = {
+    sessionId: target.id,
+    athleteId: target.athleteId,
+    completion: input.completion,
+    notes: input.notes,
+    ...done,
+  };
   return sequelize.transaction(async (transaction) => {
     const existing = await SessionLog.findOne({ where: { sessionId: target.id }, transaction });
     const row = existing ? await existing.update(values, { transaction }) : await SessionLog.create(values, { transaction });
@@ -91,7 +134,14 @@ export async function deleteSessionLog({ target, actorUserId }: { target: LogTar
   const { SessionLog, sequelize } = await db();
   return sequelize.transaction(async (transaction) => {
     const removed = await SessionLog.destroy({ where: { sessionId: target.id }, transaction });
-    if (removed > 0) await afterLogChange({ transaction, teamId: target.teamId, athleteId: target.athleteId, sessionId: target.id, actorUserId });
+    if (removed > 0)
+      await afterLogChange({
+        transaction,
+        teamId: target.teamId,
+        athleteId: target.athleteId,
+        sessionId: target.id,
+        actorUserId,
+      });
     return removed > 0;
   });
 }

@@ -34,7 +34,14 @@ export async function listMembers({ teamId }: { teamId: number }): Promise<Membe
   const athletes = await Athlete.findAll({ where: { teamId, userId: { [Op.ne]: null } }, attributes: ["id", "userId"] });
   return rows.map((m) => {
     const user = (m as unknown as { user: { id: number; name: string; email: string } }).user;
-    return { membershipId: m.id, userId: user.id, name: user.name, email: user.email, role: m.role, athleteId: athletes.find((a) => a.userId === user.id)?.id ?? null };
+    return {
+      membershipId: m.id,
+      userId: user.id,
+      name: user.name,
+      email: user.email,
+      role: m.role,
+      athleteId: athletes.find((a) => a.userId === user.id)?.id ?? null,
+    };
   });
 }
 
@@ -46,7 +53,17 @@ export async function listMembers({ teamId }: { teamId: number }): Promise<Membe
  * athlete the team's profile is prepared now (typed name or an unlinked profile) and linked on acceptance.
  * The token is returned for tests; the action never passes it on.
  */
-export async function addMember({ teamId, input, invitedBy, now = new Date() }: { teamId: number; input: AddMemberInput; invitedBy?: number; now?: Date }) {
+export async function addMember({
+  teamId,
+  input,
+  invitedBy,
+  now = new Date(),
+}: {
+  teamId: number;
+  input: AddMemberInput;
+  invitedBy?: number;
+  now?: Date;
+}) {
   const { sequelize, User, Membership, Athlete, Invitation, Team } = await db();
   return sequelize.transaction(async (transaction) => {
     const [user] = await User.findOrCreate({
@@ -56,17 +73,47 @@ export async function addMember({ teamId, input, invitedBy, now = new Date() }: 
       transaction,
     });
     const existing = await Membership.findOne({ where: { teamId, userId: user.id }, attributes: ["id"], transaction });
-    if (existing) throw new AppError("conflict", "This person is already a member", { fields: { email: ["Already a member of this team"] } });
+    if (existing)
+      throw new AppError("conflict", "This person is already a member", {
+        fields: { email: ["Already a member of this team"] },
+      });
 
     let athleteId: number | null = null;
     if (input.role === "athlete") {
       if (input.athleteId) {
-        const athlete = await Athlete.findOne({ where: { id: input.athleteId, teamId }, attributes: ["id", "userId"], transaction });
-        if (!athlete) throw new AppError("invalid", "Choose an athlete of this team", { fields: { athleteId: ["Unknown athlete"] } });
-        if (athlete.userId) throw new AppError("conflict", "That athlete already has an account", { fields: { athleteId: ["Already linked"] } });
+        const athlete = await Athlete.findOne({
+          where: { id: input.athleteId, teamId },
+          attributes: ["id", "userId"],
+          transaction,
+        });
+        if (!athlete)
+          throw new AppError("invalid", "Choose an athlete of this team", {
+            fields: { athleteId: ["Unknown athlete"] },
+          });
+        if (athlete.userId)
+          throw new AppError("conflict", "That athlete already has an account", {
+            fields: { athleteId: ["Already linked"] },
+          });
         athleteId = athlete.id;
       } else {
-        athleteId = (await Athlete.create({ teamId, userId: null, name: input.name, groupId: null, sex: null, birthDate: null, bodyMassKg: null, vmaxMs: null, vmaxTestedOn: null, tauS: null, stepLengthM: null }, { transaction })).id;
+        athleteId = (
+          await Athlete.create(
+            {
+              teamId,
+              userId: null,
+              name: input.name,
+              groupId: null,
+              sex: null,
+              birthDate: null,
+              bodyMassKg: null,
+              vmaxMs: null,
+              vmaxTestedOn: null,
+              tauS: null,
+              stepLengthM: null,
+            },
+            { transaction },
+          )
+        ).id;
       }
     }
 
@@ -75,7 +122,18 @@ export async function addMember({ teamId, input, invitedBy, now = new Date() }: 
     const { token, hash } = newToken();
     const expiresAt = new Date(now.getTime() + INVITE_DAYS * 86_400_000);
     const invitation = await Invitation.create(
-      { teamId, userId: user.id, purpose: "invite", email: input.email, name: input.name, role: input.role, athleteId, tokenHash: hash, expiresAt, usedAt: null },
+      {
+        teamId,
+        userId: user.id,
+        purpose: "invite",
+        email: input.email,
+        name: input.name,
+        role: input.role,
+        athleteId,
+        tokenHash: hash,
+        expiresAt,
+        usedAt: null,
+      },
       { transaction },
     );
     const team = await Team.findByPk(teamId, { attributes: ["name", "timeZone"], transaction });
@@ -101,10 +159,26 @@ export async function addMember({ teamId, input, invitedBy, now = new Date() }: 
 }
 
 /** Who the invitation mail names: the inviting member, else the team's first head coach. */
-async function inviterNameFor({ teamId, invitedBy, transaction }: { teamId: number; invitedBy?: number; transaction: import("sequelize").Transaction }): Promise<string> {
+async function inviterNameFor({
+  teamId,
+  invitedBy,
+  transaction,
+}: {
+  teamId: number;
+  invitedBy?: number;
+  transaction: import("sequelize").Transaction;
+}): Promise<string> {
   const { User, Membership } = await db();
   const userId =
-    invitedBy ?? (await Membership.findOne({ where: { teamId, role: "head_coach" }, attributes: ["userId"], order: [["id", "ASC"]], transaction }))?.userId;
+    invitedBy ??
+    (
+      await Membership.findOne({
+        where: { teamId, role: "head_coach" },
+        attributes: ["userId"],
+        order: [["id", "ASC"]],
+        transaction,
+      })
+    )?.userId;
   const user = userId ? await User.findByPk(userId, { attributes: ["name"], transaction }) : null;
   return user?.name ?? "Your coach";
 }
@@ -133,10 +207,24 @@ export async function removeMember({ teamId, membershipId }: { teamId: number; m
   });
 }
 
-async function assertAnotherHeadCoach({ teamId, membershipId, transaction }: { teamId: number; membershipId: number; transaction: import("sequelize").Transaction }) {
+async function assertAnotherHeadCoach({
+  teamId,
+  membershipId,
+  transaction,
+}: {
+  teamId: number;
+  membershipId: number;
+  transaction: import("sequelize").Transaction;
+}) {
   const { Membership } = await db();
-  const others = await Membership.count({ where: { teamId, role: "head_coach", id: { [Op.ne]: membershipId } }, transaction });
-  if (others === 0) throw new AppError("conflict", "A team needs at least one head coach", { fields: { role: ["Keep at least one head coach"] } });
+  const others = await Membership.count({
+    where: { teamId, role: "head_coach", id: { [Op.ne]: membershipId } },
+    transaction,
+  });
+  if (others === 0)
+    throw new AppError("conflict", "A team needs at least one head coach", {
+      fields: { role: ["Keep at least one head coach"] },
+    });
 }
 
 /** Looks up an unused, unexpired link by its token (for the invitation page). */
@@ -174,7 +262,10 @@ export async function acceptInvitation({ token, password }: { token: string; pas
     if (!invitation) throw new AppError("invalid", "This link has expired or was already used", { fields: { token: ["Expired or used"] } });
     if (invitation.purpose === "invite") {
       const user = await User.findByPk(invitation.userId, { attributes: ["passwordHash"], transaction });
-      if (user?.passwordHash) throw new AppError("invalid", "This account has a password already: sign in and accept the invitation", { fields: { token: ["Sign in to accept"] } });
+      if (user?.passwordHash)
+        throw new AppError("invalid", "This account has a password already: sign in and accept the invitation", {
+          fields: { token: ["Sign in to accept"] },
+        });
       await grantMembership({ invitation, transaction });
     }
     await invitation.update({ usedAt: new Date() }, { transaction });

@@ -13,13 +13,31 @@ const STAFF_ROLES: Role[] = ["head_coach", "coach", "physio"];
 
 export type NotificationSettingsView = { alertEmail: AlertEmailMode; isDefault: boolean };
 
-export async function getNotificationSettings({ userId, teamId, role }: { userId: number; teamId: number; role: Role }): Promise<NotificationSettingsView> {
+export async function getNotificationSettings({
+  userId,
+  teamId,
+  role,
+}: {
+  userId: number;
+  teamId: number;
+  role: Role;
+}): Promise<NotificationSettingsView> {
   const { NotificationSetting } = await db();
   const row = await NotificationSetting.findOne({ where: { userId, teamId }, attributes: ["alertEmail"] });
   return row ? { alertEmail: row.alertEmail, isDefault: false } : { alertEmail: defaultAlertEmail(role), isDefault: true };
 }
 
-export async function updateNotificationSettings({ userId, teamId, alertEmail, now = new Date() }: { userId: number; teamId: number; alertEmail: AlertEmailMode; now?: Date }): Promise<NotificationSettingsView> {
+export async function updateNotificationSettings({
+  userId,
+  teamId,
+  alertEmail,
+  now = new Date(),
+}: {
+  userId: number;
+  teamId: number;
+  alertEmail: AlertEmailMode;
+  now?: Date;
+}): Promise<NotificationSettingsView> {
   const { sequelize, NotificationSetting } = await db();
   return sequelize.transaction(async (transaction) => {
     const row = await NotificationSetting.findOne({ where: { userId, teamId }, transaction });
@@ -41,7 +59,13 @@ export type AlertRecipient = { userId: number; name: string; email: string; role
 const JOINED = { passwordHash: { [Op.ne]: null } };
 
 /** Staff of the team who joined, with their alert e-mail choice (defaults applied). */
-export async function listAlertRecipients({ teamId, transaction }: { teamId: number; transaction?: Transaction }): Promise<AlertRecipient[]> {
+export async function listAlertRecipients({
+  teamId,
+  transaction,
+}: {
+  teamId: number;
+  transaction?: Transaction;
+}): Promise<AlertRecipient[]> {
   const { Membership, User, NotificationSetting } = await db();
   const memberships = await Membership.findAll({
     where: { teamId, role: { [Op.in]: STAFF_ROLES } },
@@ -54,7 +78,13 @@ export async function listAlertRecipients({ teamId, transaction }: { teamId: num
   const chosen = new Map(settings.map((s) => [s.userId, s.alertEmail]));
   return memberships.map((m) => {
     const user = (m as unknown as { user: { id: number; name: string; email: string } }).user;
-    return { userId: user.id, name: user.name, email: user.email, role: m.role, alertEmail: chosen.get(user.id) ?? defaultAlertEmail(m.role) };
+    return {
+      userId: user.id,
+      name: user.name,
+      email: user.email,
+      role: m.role,
+      alertEmail: chosen.get(user.id) ?? defaultAlertEmail(m.role),
+    };
   });
 }
 
@@ -75,16 +105,39 @@ export async function getAlertsSeenAt({ userId, teamId }: { userId: number; team
 }
 
 /** The member looked at the inbox: everything created until now counts as read. */
-export async function markAlertsSeen({ userId, teamId, role, now = new Date() }: { userId: number; teamId: number; role: Role; now?: Date }): Promise<void> {
+export async function markAlertsSeen({
+  userId,
+  teamId,
+  role,
+  now = new Date(),
+}: {
+  userId: number;
+  teamId: number;
+  role: Role;
+  now?: Date;
+}): Promise<void> {
   const { sequelize, NotificationSetting } = await db();
   await sequelize.transaction(async (transaction) => {
     const row = await NotificationSetting.findOne({ where: { userId, teamId }, transaction });
     if (row) await row.update({ alertsSeenAt: now }, { transaction });
-    else await NotificationSetting.create({ userId, teamId, alertEmail: defaultAlertEmail(role), lastDigestAt: null, alertsSeenAt: now }, { transaction });
+    else
+      await NotificationSetting.create(
+        { userId, teamId, alertEmail: defaultAlertEmail(role), lastDigestAt: null, alertsSeenAt: now },
+        { transaction },
+      );
   });
 }
 
-export type DigestSubscriber = { settingId: number; userId: number; teamId: number; name: string; email: string; timeZone: string; teamName: string; lastDigestAt: Date | null };
+export type DigestSubscriber = {
+  settingId: number;
+  userId: number;
+  teamId: number;
+  name: string;
+  email: string;
+  timeZone: string;
+  teamName: string;
+  lastDigestAt: Date | null;
+};
 
 export async function listDigestSubscribers(): Promise<DigestSubscriber[]> {
   const { NotificationSetting, User, Team, Membership } = await db();
@@ -105,13 +158,35 @@ export async function listDigestSubscribers(): Promise<DigestSubscriber[]> {
   return rows
     .filter((r) => isStaff.has(`${r.userId}:${r.teamId}`))
     .map((r) => {
-      const { user, team } = r as unknown as { user: { name: string; email: string }; team: { name: string; timeZone: string } };
-      return { settingId: r.id, userId: r.userId, teamId: r.teamId, name: user.name, email: user.email, timeZone: team.timeZone, teamName: team.name, lastDigestAt: r.lastDigestAt };
+      const { user, team } = r as unknown as {
+        user: { name: string; email: string };
+        team: { name: string; timeZone: string };
+      };
+      return {
+        settingId: r.id,
+        userId: r.userId,
+        teamId: r.teamId,
+        name: user.name,
+        email: user.email,
+        timeZone: team.timeZone,
+        teamName: team.name,
+        lastDigestAt: r.lastDigestAt,
+      };
     });
 }
 
 /** Moves a digest window forward if nobody else did since `previous` was read (two processes, one digest). */
-export async function claimDigestWindow({ settingId, previous, now, transaction }: { settingId: number; previous: Date | null; now: Date; transaction: Transaction }): Promise<boolean> {
+export async function claimDigestWindow({
+  settingId,
+  previous,
+  now,
+  transaction,
+}: {
+  settingId: number;
+  previous: Date | null;
+  now: Date;
+  transaction: Transaction;
+}): Promise<boolean> {
   const { NotificationSetting } = await db();
   const [count] = await NotificationSetting.update(
     { lastDigestAt: now },
@@ -129,7 +204,13 @@ export async function getNoticeTeam({ teamId, transaction }: { teamId: number; t
   return team ? { id: team.id, name: team.name, timeZone: team.timeZone, weekStartDay: team.weekStartDay } : null;
 }
 
-export async function getPerson({ userId, transaction }: { userId: number; transaction?: Transaction }): Promise<{ name: string; email: string } | null> {
+export async function getPerson({
+  userId,
+  transaction,
+}: {
+  userId: number;
+  transaction?: Transaction;
+}): Promise<{ name: string; email: string } | null> {
   const { User } = await db();
   const user = await User.findByPk(userId, { attributes: ["name", "email"], transaction });
   return user ? { name: user.name, email: user.email } : null;
@@ -138,7 +219,15 @@ export async function getPerson({ userId, transaction }: { userId: number; trans
 export type AthleteContact = { athleteId: number; name: string; email: string };
 
 /** Athletes of the team who joined with their own login (only they receive calendar invitations). */
-export async function listAthleteContacts({ teamId, athleteIds, transaction }: { teamId: number; athleteIds: readonly number[]; transaction?: Transaction }): Promise<Map<number, AthleteContact>> {
+export async function listAthleteContacts({
+  teamId,
+  athleteIds,
+  transaction,
+}: {
+  teamId: number;
+  athleteIds: readonly number[];
+  transaction?: Transaction;
+}): Promise<Map<number, AthleteContact>> {
   const { Athlete, User, Membership } = await db();
   if (athleteIds.length === 0) return new Map();
   const rows = await Athlete.findAll({
@@ -147,7 +236,11 @@ export async function listAthleteContacts({ teamId, athleteIds, transaction }: {
     include: [{ model: User, as: "user", attributes: ["email"], where: JOINED, required: true }],
     transaction,
   });
-  const members = await Membership.findAll({ where: { teamId, userId: { [Op.in]: rows.map((a) => a.userId as number) } }, attributes: ["userId"], transaction });
+  const members = await Membership.findAll({
+    where: { teamId, userId: { [Op.in]: rows.map((a) => a.userId as number) } },
+    attributes: ["userId"],
+    transaction,
+  });
   const joined = new Set(members.map((m) => m.userId));
   return new Map(
     rows.filter((a) => joined.has(a.userId as number)).map((a) => {

@@ -93,7 +93,12 @@ export async function claimDueMessages({ now, limit, leaseMs }: { now: Date; lim
   for (const { id } of candidates) {
     const leaseToken = randomUUID();
     const [count] = await OutboxMessage.update(
-      { status: "sending", leaseToken, leaseUntil: new Date(now.getTime() + leaseMs), attempts: literal("attempts + 1") as unknown as number },
+      {
+        status: "sending",
+        leaseToken,
+        leaseUntil: new Date(now.getTime() + leaseMs),
+        attempts: literal("attempts + 1") as unknown as number,
+      },
       { where: { [Op.and]: [{ id }, dueWhere(now)] } },
     );
     if (count !== 1) continue; // another worker was faster
@@ -122,7 +127,17 @@ function toClaimed(row: OutboxMessage, leaseToken: string): ClaimedMessage {
 }
 
 /** Records a delivery; only the worker holding the lease may. */
-export async function markMessageSent({ id, leaseToken, messageId, now }: { id: number; leaseToken: string; messageId: string; now: Date }): Promise<boolean> {
+export async function markMessageSent({
+  id,
+  leaseToken,
+  messageId,
+  now,
+}: {
+  id: number;
+  leaseToken: string;
+  messageId: string;
+  now: Date;
+}): Promise<boolean> {
   const { OutboxMessage } = await db();
   const [count] = await OutboxMessage.update(
     { status: "sent", sentAt: now, messageId, leaseToken: null, leaseUntil: null, lastError: null },
@@ -132,7 +147,17 @@ export async function markMessageSent({ id, leaseToken, messageId, now }: { id: 
 }
 
 /** Records a failed try: back to pending at `retryAt`, or failed for good when `retryAt` is null. */
-export async function markMessageAttemptFailed({ id, leaseToken, error, retryAt }: { id: number; leaseToken: string; error: string; retryAt: Date | null }): Promise<boolean> {
+export async function markMessageAttemptFailed({
+  id,
+  leaseToken,
+  error,
+  retryAt,
+}: {
+  id: number;
+  leaseToken: string;
+  error: string;
+  retryAt: Date | null;
+}): Promise<boolean> {
   const { OutboxMessage } = await db();
   const [count] = await OutboxMessage.update(
     retryAt
@@ -168,7 +193,11 @@ export type OutboxRow = {
 };
 
 /** Recent outbox rows (newest first), for the mailbox screen's delivery list and for tests. */
-export async function listOutbox({ teamId, limit = 50, status }: { teamId?: number; limit?: number; status?: OutboxStatus } = {}): Promise<OutboxRow[]> {
+export async function listOutbox({
+  teamId,
+  limit = 50,
+  status,
+}: { teamId?: number; limit?: number; status?: OutboxStatus } = {}): Promise<OutboxRow[]> {
   const { OutboxMessage } = await db();
   const where: WhereOptions = {};
   if (teamId !== undefined) Object.assign(where, { teamId });
@@ -199,7 +228,16 @@ export type DeliveryRow = Pick<OutboxRow, "id" | "kind" | "toEmail" | "status" |
 /** The team's recent outbox rows for the head coach's mailbox screen; only the team's own rows. */
 export async function listDeliveryQueue({ teamId, limit = 30 }: { teamId: number; limit?: number }): Promise<DeliveryRow[]> {
   const rows = await listOutbox({ teamId, limit });
-  return rows.map(({ id, kind, toEmail, status, attempts, nextAttemptAt, sentAt, createdAt }) => ({ id, kind, toEmail, status, attempts, nextAttemptAt, sentAt, createdAt }));
+  return rows.map(({ id, kind, toEmail, status, attempts, nextAttemptAt, sentAt, createdAt }) => ({
+    id,
+    kind,
+    toEmail,
+    status,
+    attempts,
+    nextAttemptAt,
+    sentAt,
+    createdAt,
+  }));
 }
 
 /** Puts a message that failed for good back in the queue (one more round of attempts). */

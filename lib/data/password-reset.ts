@@ -17,9 +17,18 @@ const RESEND_MINUTES = 2;
 export async function requestPasswordReset({ email, now = new Date() }: { email: string; now?: Date }): Promise<void> {
   const { sequelize, User, Membership, Invitation, Team } = await db();
   await sequelize.transaction(async (transaction) => {
-    const user = await User.findOne({ where: { email: email.trim().toLowerCase() }, attributes: ["id", "name", "email", "passwordHash"], transaction });
+    const user = await User.findOne({
+      where: { email: email.trim().toLowerCase() },
+      attributes: ["id", "name", "email", "passwordHash"],
+      transaction,
+    });
     if (!user?.passwordHash) return;
-    const membership = await Membership.findOne({ where: { userId: user.id }, attributes: ["teamId"], order: [["id", "ASC"]], transaction });
+    const membership = await Membership.findOne({
+      where: { userId: user.id },
+      attributes: ["teamId"],
+      order: [["id", "ASC"]],
+      transaction,
+    });
     if (!membership) return;
     const recent = await Invitation.count({
       where: { userId: user.id, purpose: "reset", usedAt: null, createdAt: { [Op.gt]: new Date(now.getTime() - RESEND_MINUTES * 60_000) } },
@@ -28,7 +37,10 @@ export async function requestPasswordReset({ email, now = new Date() }: { email:
     if (recent > 0) return;
     const { token, hash } = newToken();
     const expiresAt = new Date(now.getTime() + RESET_MINUTES * 60_000);
-    await Invitation.create({ teamId: membership.teamId, userId: user.id, purpose: "reset", tokenHash: hash, expiresAt, usedAt: null }, { transaction });
+    await Invitation.create(
+      { teamId: membership.teamId, userId: user.id, purpose: "reset", tokenHash: hash, expiresAt, usedAt: null },
+      { transaction },
+    );
     const team = await Team.findByPk(membership.teamId, { attributes: ["timeZone"], transaction });
     await enqueueMail({
       transaction,

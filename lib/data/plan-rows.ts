@@ -12,7 +12,21 @@ import { guardRestrictions, type Override } from "./restriction-guard";
 
 export type Loaded = { dto: PlanSession; updatedAt: Date };
 
-const SESSION_ATTRS = ["id", "athleteId", "date", "startTime", "durationMin", "title", "plannedRpe", "status", "notes", "version", "sequence", "publishedAt", "updatedAt"];
+const SESSION_ATTRS = [
+  "id",
+  "athleteId",
+  "date",
+  "startTime",
+  "durationMin",
+  "title",
+  "plannedRpe",
+  "status",
+  "notes",
+  "version",
+  "sequence",
+  "publishedAt",
+  "updatedAt",
+];
 const BLOCK_ATTRS = ["id", "templateId", "position", "kind", "title", "running", "drills", "notes"];
 
 /** Sessions with their blocks and whether a log exists; two joined tables, one query. */
@@ -44,13 +58,27 @@ export async function loadById(ids: readonly number[], transaction: Transaction)
  * The session as this transaction sees it (the write lock is already held: transactions are IMMEDIATE).
  * 404 when it is another team's; 409 "stale" with the current session when `version` is not the stored one.
  */
-export async function lockSession({ teamId, sessionId, version, transaction }: { teamId: number; sessionId: number; version?: number; transaction: Transaction }) {
+export async function lockSession({
+  teamId,
+  sessionId,
+  version,
+  transaction,
+}: {
+  teamId: number;
+  sessionId: number;
+  version?: number;
+  transaction: Transaction;
+}) {
   const { PlannedSession } = await db();
   const row = await PlannedSession.findOne({ where: { id: sessionId, teamId }, transaction });
   if (!row) throw new AppError("not_found", "That session was not found");
   const [loaded] = await loadSessions({ id: sessionId }, transaction);
   if (version !== undefined && row.version !== version) {
-    throw new AppError("stale", "Someone changed this session after you opened it. The grid now shows the current version.", { details: { current: loaded.dto } });
+    throw new AppError(
+      "stale",
+      "Someone changed this session after you opened it. The grid now shows the current version.",
+      { details: { current: loaded.dto } },
+    );
   }
   return { row, loaded };
 }
@@ -64,30 +92,65 @@ export function bumped(row: Pick<PlannedSession, "version" | "sequence" | "statu
   return { version: row.version + 1, sequence: row.status === "draft" ? row.sequence : row.sequence + 1 };
 }
 
-export async function assertAthletes({ teamId, athleteIds, transaction }: { teamId: number; athleteIds: readonly number[]; transaction: Transaction }) {
+export async function assertAthletes({
+  teamId,
+  athleteIds,
+  transaction,
+}: {
+  teamId: number;
+  athleteIds: readonly number[];
+  transaction: Transaction;
+}) {
   const { Athlete } = await db();
   const unique = [...new Set(athleteIds)];
   const found = await Athlete.count({ where: { teamId, id: { [Op.in]: unique } }, transaction });
-  if (found !== unique.length) throw new AppError("not_found", "That athlete was not found in this team", { fields: { athleteId: ["Not found in this team"] } });
+  if (found !== unique.length)
+    throw new AppError("not_found", "That athlete was not found in this team", {
+      fields: { athleteId: ["Not found in this team"] },
+    });
 }
 
 /** Template links must point at the team's own templates. */
-export async function assertTemplateLinks({ teamId, blocks, transaction }: { teamId: number; blocks: readonly BlockContent[]; transaction: Transaction }) {
+export async function assertTemplateLinks({
+  teamId,
+  blocks,
+  transaction,
+}: {
+  teamId: number;
+  blocks: readonly BlockContent[];
+  transaction: Transaction;
+}) {
   const ids = [...new Set(blocks.map((b) => b.templateId).filter((id): id is number => typeof id === "number"))];
   if (ids.length === 0) return;
   const { BlockTemplate } = await db();
   const found = await BlockTemplate.count({ where: { teamId, id: { [Op.in]: ids } }, transaction });
-  if (found !== ids.length) throw new AppError("not_found", "That template was not found in this team", { fields: { "blocks.templateId": ["Not found in this team"] } });
+  if (found !== ids.length)
+    throw new AppError("not_found", "That template was not found in this team", {
+      fields: { "blocks.templateId": ["Not found in this team"] },
+    });
 }
 
 /** Writes blocks at positions from `start` on, in order. */
-export async function insertBlocks({ teamId, sessionId, blocks, start = 0, transaction }: { teamId: number; sessionId: number; blocks: readonly BlockContent[]; start?: number; transaction: Transaction }) {
+export async function insertBlocks({
+  teamId,
+  sessionId,
+  blocks,
+  start = 0,
+  transaction,
+}: {
+  teamId: number;
+  sessionId: number;
+  blocks: readonly BlockContent[];
+  start?: number;
+  transaction: Transaction;
+}) {
   if (blocks.length === 0) return;
   await assertTemplateLinks({ teamId, blocks, transaction });
   const { SessionBlock } = await db();
   // One create per block, not bulkCreate: Sequelize's SQLite bulkCreate writes the values into the SQL text,
   // where a NUL ends the statement; create() binds them. A session holds at most 20 blocks.
-  for (const [i, raw] of blocks.entries()) await SessionBlock.create({ sessionId, position: start + i, ...blockValues(raw) }, { transaction });
+  for (const [i, raw] of blocks.entries())
+    await SessionBlock.create({ sessionId, position: start + i, ...blockValues(raw) }, { transaction });
 }
 
 /** The stored columns of a block, normalised. */
@@ -110,7 +173,19 @@ export function change(kind: SessionChange["kind"], before: Loaded | null, after
  * breaks one without a reason throws and rolls back), then notices are recorded, so a notice exists exactly
  * when the change commits.
  */
-export async function notify({ transaction, teamId, actorUserId, changes, override }: { transaction: Transaction; teamId: number; actorUserId: number; changes: SessionChange[]; override?: Override | null }) {
+export async function notify({
+  transaction,
+  teamId,
+  actorUserId,
+  changes,
+  override,
+}: {
+  transaction: Transaction;
+  teamId: number;
+  actorUserId: number;
+  changes: SessionChange[];
+  override?: Override | null;
+}) {
   if (changes.length === 0) return;
   await guardRestrictions({ transaction, teamId, actorUserId, changes, override });
   await afterPlanChange({ transaction, teamId, actorUserId, changes });

@@ -9,7 +9,21 @@ import type { AddBlockInput, CreateSessionInput, SessionBlockBody, UpdateSession
 import { db } from "@/models";
 import type { Override } from "./restriction-guard";
 import { getTemplate } from "./templates";
-import { assertAthletes, assertTemplateLinks, blockValues, bumped, change, insertBlocks, loadById, loadSessions, lockSession, notCancelled, notify, writeResult, type Loaded } from "./plan-rows";
+import {
+  assertAthletes,
+  assertTemplateLinks,
+  blockValues,
+  bumped,
+  change,
+  insertBlocks,
+  loadById,
+  loadSessions,
+  lockSession,
+  notCancelled,
+  notify,
+  writeResult,
+  type Loaded,
+} from "./plan-rows";
 
 type Actor = { teamId: number; actorUserId: number };
 
@@ -18,7 +32,16 @@ async function tx<T>(fn: (t: Transaction) => Promise<T>): Promise<T> {
   return sequelize.transaction(fn);
 }
 
-type NewSession = { athleteId: number; date: string; startTime: string; durationMin: number; title: string; plannedRpe: number; notes: string | null; blocks: BlockContent[] };
+type NewSession = {
+  athleteId: number;
+  date: string;
+  startTime: string;
+  durationMin: number;
+  title: string;
+  plannedRpe: number;
+  notes: string | null;
+  blocks: BlockContent[];
+};
 
 async function insertSession(teamId: number, s: NewSession, transaction: Transaction): Promise<number> {
   const { PlannedSession } = await db();
@@ -29,7 +52,13 @@ async function insertSession(teamId: number, s: NewSession, transaction: Transac
 }
 
 /** Appends blocks to an existing session as one write (version, and SEQUENCE when athletes were sent it). */
-async function appendBlocks(teamId: number, sessionId: number, blocks: BlockContent[], version: number | undefined, transaction: Transaction): Promise<Loaded> {
+async function appendBlocks(
+  teamId: number,
+  sessionId: number,
+  blocks: BlockContent[],
+  version: number | undefined,
+  transaction: Transaction,
+): Promise<Loaded> {
   const { row, loaded } = await lockSession({ teamId, sessionId, version, transaction });
   notCancelled(loaded.dto);
   const start = loaded.dto.blocks.reduce((max, b) => Math.max(max, b.position + 1), 0);
@@ -57,8 +86,30 @@ export async function createSessions({ teamId, actorUserId, input }: Actor & { i
       const { loaded } = await lockSession({ teamId, sessionId: input.sessionId, transaction });
       await assertAthletes({ teamId, athleteIds: [input.athleteId], transaction });
       const s = loaded.dto;
-      const blocks = s.blocks.map(({ templateId, kind, title, running, drills, notes }) => ({ templateId, kind, title, running, drills, notes }));
-      created.push(await insertSession(teamId, { athleteId: input.athleteId, date: input.date, startTime: s.startTime, durationMin: s.durationMin, title: s.title, plannedRpe: s.plannedRpe, notes: s.notes, blocks }, transaction));
+      const blocks = s.blocks.map(({ templateId, kind, title, running, drills, notes }) => ({
+        templateId,
+        kind,
+        title,
+        running,
+        drills,
+        notes,
+      }));
+      created.push(
+        await insertSession(
+          teamId,
+          {
+            athleteId: input.athleteId,
+            date: input.date,
+            startTime: s.startTime,
+            durationMin: s.durationMin,
+            title: s.title,
+            plannedRpe: s.plannedRpe,
+            notes: s.notes,
+            blocks,
+          },
+          transaction,
+        ),
+      );
     } else {
       const template = await getTemplate({ teamId, templateId: input.templateId, transaction });
       const fields = { ...sessionFieldsFromTemplate(template), notes: null, date: input.date, blocks: [blockFromTemplate(template)] };
@@ -88,14 +139,30 @@ export async function createSessions({ teamId, actorUserId, input }: Actor & { i
 async function groupAthletes(teamId: number, groupId: number, transaction: Transaction): Promise<number[]> {
   const { TrainingGroup, Athlete } = await db();
   const group = await TrainingGroup.findOne({ where: { id: groupId, teamId }, attributes: ["id"], transaction });
-  if (!group) throw new AppError("not_found", "That group was not found in this team", { fields: { groupId: ["Not found in this team"] } });
-  const athletes = await Athlete.findAll({ where: { teamId, groupId }, attributes: ["id"], order: [["name", "ASC"]], transaction });
-  if (athletes.length === 0) throw new AppError("invalid", "That group has no athletes yet", { fields: { groupId: ["No athletes in this group"] } });
+  if (!group)
+    throw new AppError("not_found", "That group was not found in this team", {
+      fields: { groupId: ["Not found in this team"] },
+    });
+  const athletes = await Athlete.findAll({
+    where: { teamId, groupId },
+    attributes: ["id"],
+    order: [["name", "ASC"]],
+    transaction,
+  });
+  if (athletes.length === 0)
+    throw new AppError("invalid", "That group has no athletes yet", {
+      fields: { groupId: ["No athletes in this group"] },
+    });
   return athletes.map((a) => a.id);
 }
 
 /** Changes a session (moving it = a new athlete or date). `blocks`, when sent, replaces the list. */
-export async function updateSession({ teamId, actorUserId, sessionId, input }: Actor & { sessionId: number; input: UpdateSessionInput }): Promise<PlanWriteResult> {
+export async function updateSession({
+  teamId,
+  actorUserId,
+  sessionId,
+  input,
+}: Actor & { sessionId: number; input: UpdateSessionInput }): Promise<PlanWriteResult> {
   return tx(async (transaction) => {
     const { row, loaded } = await lockSession({ teamId, sessionId, version: input.version, transaction });
     const before = loaded.dto;
@@ -104,15 +171,22 @@ export async function updateSession({ teamId, actorUserId, sessionId, input }: A
     const reinstate = status === "published" && before.status === "cancelled";
     const publish = status === "published" && before.status === "draft";
     if (!reinstate) notCancelled(before);
-    const moves = (fields.athleteId !== undefined && fields.athleteId !== before.athleteId) || (fields.date !== undefined && fields.date !== before.date);
-    if (moves && before.logged) throw new AppError("conflict", "The athlete has logged this session, so it stays on its day. Copy it instead.");
+    const moves =
+      (fields.athleteId !== undefined && fields.athleteId !== before.athleteId) ||
+      (fields.date !== undefined && fields.date !== before.date);
+    if (moves && before.logged)
+      throw new AppError("conflict", "The athlete has logged this session, so it stays on its day. Copy it instead.");
     if (fields.athleteId !== undefined) await assertAthletes({ teamId, athleteIds: [fields.athleteId], transaction });
     if (blocks) {
       const { SessionBlock } = await db();
       await SessionBlock.destroy({ where: { sessionId }, transaction });
       await insertBlocks({ teamId, sessionId, blocks: blocks as SessionBlockBody[], transaction });
     }
-    const statusFields = publish ? { status: "published" as const, publishedAt: new Date() } : reinstate ? { status: "published" as const } : {};
+    const statusFields = publish
+      ? { status: "published" as const, publishedAt: new Date() }
+      : reinstate
+        ? { status: "published" as const }
+        : {};
     await row.update({ ...fields, ...statusFields, ...bumped(row) }, { transaction });
     const after = (await loadById([sessionId], transaction)).get(sessionId)!;
     const changes = [change(publish ? "published" : "updated", loaded, after)];
@@ -125,7 +199,12 @@ export async function updateSession({ teamId, actorUserId, sessionId, input }: A
  * Deletes a draft outright. A session athletes were sent (published) is kept as cancelled so calendars get
  * STATUS:CANCELLED; a session with the athlete's log is kept too, so the log is never lost.
  */
-export async function deleteSession({ teamId, actorUserId, sessionId, version }: Actor & { sessionId: number; version: number }): Promise<PlanWriteResult> {
+export async function deleteSession({
+  teamId,
+  actorUserId,
+  sessionId,
+  version,
+}: Actor & { sessionId: number; version: number }): Promise<PlanWriteResult> {
   return tx(async (transaction) => {
     const { row, loaded } = await lockSession({ teamId, sessionId, version, transaction });
     if (loaded.dto.status === "cancelled") return writeResult([loaded], []);
@@ -144,9 +223,17 @@ export async function deleteSession({ teamId, actorUserId, sessionId, version }:
 }
 
 /** Appends a block (a template's content, or one written out) to a session. */
-export async function addBlock({ teamId, actorUserId, sessionId, input }: Actor & { sessionId: number; input: AddBlockInput }): Promise<PlanWriteResult> {
+export async function addBlock({
+  teamId,
+  actorUserId,
+  sessionId,
+  input,
+}: Actor & { sessionId: number; input: AddBlockInput }): Promise<PlanWriteResult> {
   return tx(async (transaction) => {
-    const block = input.templateId !== undefined ? blockFromTemplate(await getTemplate({ teamId, templateId: input.templateId, transaction })) : input.block!;
+    const block =
+      input.templateId !== undefined
+        ? blockFromTemplate(await getTemplate({ teamId, templateId: input.templateId, transaction }))
+        : input.block!;
     const before = await appendBlocks(teamId, sessionId, [block], input.version, transaction);
     const after = (await loadById([sessionId], transaction)).get(sessionId)!;
     const changes = [change("updated", before, after)];
@@ -156,7 +243,21 @@ export async function addBlock({ teamId, actorUserId, sessionId, input }: Actor 
 }
 
 /** Rewrites or removes one block of a session (`block` null removes it). */
-export async function changeBlock({ teamId, actorUserId, sessionId, blockId, version, block, override }: Actor & { sessionId: number; blockId: number; version: number; block: SessionBlockBody | null; override?: Override }): Promise<PlanWriteResult> {
+export async function changeBlock({
+  teamId,
+  actorUserId,
+  sessionId,
+  blockId,
+  version,
+  block,
+  override,
+}: Actor & {
+  sessionId: number;
+  blockId: number;
+  version: number;
+  block: SessionBlockBody | null;
+  override?: Override;
+}): Promise<PlanWriteResult> {
   return tx(async (transaction) => {
     const { row, loaded } = await lockSession({ teamId, sessionId, version, transaction });
     notCancelled(loaded.dto);

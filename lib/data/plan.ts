@@ -21,7 +21,13 @@ export { addBlock, changeBlock, createSessions, deleteSession, updateSession } f
 /** Who is looking: staff see the squad; an athlete ("own" scope) sees only their row and nothing in draft. */
 export type PlanAudience = { canEdit: boolean; ownAthleteId: number | null; scope: "team" | "own" };
 
-export async function teamWeek({ teamId, date }: { teamId: number; date: string }): Promise<{ weekStart: string; weekEnd: string; timeZone: string; weekStartDay: number }> {
+export async function teamWeek({
+  teamId,
+  date,
+}: {
+  teamId: number;
+  date: string;
+}): Promise<{ weekStart: string; weekEnd: string; timeZone: string; weekStartDay: number }> {
   const { Team } = await db();
   const team = await Team.findByPk(teamId, { attributes: ["timeZone", "weekStartDay"] });
   if (!team) throw new AppError("not_found", "Not found");
@@ -34,7 +40,17 @@ export async function teamWeek({ teamId, date }: { teamId: number; date: string 
  * the history the browser needs for the live preview, and the server's week totals and flags (the same engine
  * call the squad load screen makes, so the numbers agree everywhere).
  */
-export async function getPlanWeek({ teamId, date, today, audience }: { teamId: number; date: string; today: string; audience: PlanAudience }): Promise<PlanWeek> {
+export async function getPlanWeek({
+  teamId,
+  date,
+  today,
+  audience,
+}: {
+  teamId: number;
+  date: string;
+  today: string;
+  audience: PlanAudience;
+}): Promise<PlanWeek> {
   const frame = await teamWeek({ teamId, date });
   const { weekStart, weekEnd } = frame;
   const own = audience.scope === "own";
@@ -51,7 +67,15 @@ export async function getPlanWeek({ teamId, date, today, audience }: { teamId: n
     .filter((a) => !own || a.id === audience.ownAthleteId)
     .map((a) => {
       const sessions = a.sessions.filter(visible);
-      return { id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions, logs: a.logs, packed: packSessions(sessions, a.logs) };
+      return {
+        id: String(a.id),
+        name: a.name,
+        group: a.groupName,
+        profile: a.profile,
+        sessions,
+        logs: a.logs,
+        packed: packSessions(sessions, a.logs),
+      };
     });
   const rows = computeSquadWeek(squad, inputs.settings, weekStart, today, "projected");
   const weekSessions = new Map<number, PlanSession[]>();
@@ -68,7 +92,17 @@ export async function getPlanWeek({ teamId, date, today, audience }: { teamId: n
       profile: a.profile,
       sessions,
       logs: logsFor(a.logs, sessions),
-      context: compactContext(buildWeekPreviewContext({ profile: a.profile, settings: inputs.settings, sessions: a.sessions, logs: a.logs, weekStart, today }), inputs.settings.acwrMetric),
+      context: compactContext(
+        buildWeekPreviewContext({
+          profile: a.profile,
+          settings: inputs.settings,
+          sessions: a.sessions,
+          logs: a.logs,
+          weekStart,
+          today,
+        }),
+        inputs.settings.acwrMetric,
+      ),
       load: { week: rows[i].week, flags: rows[i].flags, topLevel: rows[i].topLevel },
     };
   });
@@ -100,7 +134,15 @@ export async function getPlanWeek({ teamId, date, today, audience }: { teamId: n
  * Adds the server's week numbers for every athlete a write touched (the team week of each touched day), so
  * the grid confirms a drop without refetching the whole week. The same engine call as getPlanWeek.
  */
-export async function withWeekRows({ teamId, today, result }: { teamId: number; today: string; result: PlanWriteResult }): Promise<PlanWriteResult> {
+export async function withWeekRows({
+  teamId,
+  today,
+  result,
+}: {
+  teamId: number;
+  today: string;
+  result: PlanWriteResult;
+}): Promise<PlanWriteResult> {
   const touched = result.touched ?? [];
   if (touched.length === 0) return { ...result, rows: [] };
   const { weekStartDay } = await teamWeek({ teamId, date: touched[0].date });
@@ -115,19 +157,33 @@ export async function withWeekRows({ teamId, today, result }: { teamId: number; 
     const inputs = await getLoadSeriesInputs({ teamId, athleteIds: [...ids], through: addDays(weekStart, 6) });
     const squad = inputs.athletes;
     const computed = computeSquadWeek(
-      squad.map((a) => ({ id: String(a.id), name: a.name, group: a.groupName, profile: a.profile, sessions: a.sessions, logs: a.logs, packed: packSessions(a.sessions, a.logs) })),
+      squad.map((a) => ({
+        id: String(a.id),
+        name: a.name,
+        group: a.groupName,
+        profile: a.profile,
+        sessions: a.sessions,
+        logs: a.logs,
+        packed: packSessions(a.sessions, a.logs),
+      })),
       inputs.settings,
       weekStart,
       today,
       "projected",
     );
-    computed.forEach((r, i) => rows.push({ athleteId: squad[i].id, weekStart, load: { week: r.week, flags: r.flags, topLevel: r.topLevel } }));
+    computed.forEach((r, i) =>
+      rows.push({ athleteId: squad[i].id, weekStart, load: { week: r.week, flags: r.flags, topLevel: r.topLevel } }),
+    );
   }
   return { ...result, rows };
 }
 
 /** Team and athlete of a session, for the permission check before anything else is read. */
-export async function findSessionRef({ sessionId }: { sessionId: number }): Promise<{ teamId: number; athleteId: number; status: string } | null> {
+export async function findSessionRef({
+  sessionId,
+}: {
+  sessionId: number;
+}): Promise<{ teamId: number; athleteId: number; status: string } | null> {
   const { PlannedSession } = await db();
   const row = await PlannedSession.findByPk(sessionId, { attributes: ["teamId", "athleteId", "status"] });
   return row ? { teamId: row.teamId, athleteId: row.athleteId, status: row.status } : null;
@@ -144,7 +200,9 @@ type WeekTool = { teamId: number; actorUserId: number; date: string; override?: 
 async function weekTx<T>({ teamId, date }: WeekTool, fn: (t: Transaction, weekStart: string, inWeek: Loaded[]) => Promise<T>): Promise<T> {
   const { weekStart, weekEnd } = await teamWeek({ teamId, date });
   const { sequelize } = await db();
-  return sequelize.transaction(async (t) => fn(t, weekStart, await loadSessions({ teamId, date: { [Op.between]: [weekStart, weekEnd] } }, t)));
+  return sequelize.transaction(async (t) =>
+    fn(t, weekStart, await loadSessions({ teamId, date: { [Op.between]: [weekStart, weekEnd] } }, t)),
+  );
 }
 
 /** Copies the week's sessions (cancelled ones left out) to the same days of the next week, as drafts. */
@@ -154,14 +212,31 @@ export async function copyWeekToNext(tool: WeekTool): Promise<PlanWriteResult> {
     const created: number[] = [];
     for (const { dto: s } of inWeek.filter((l) => l.dto.status !== "cancelled")) {
       const row = await PlannedSession.create(
-        { teamId: tool.teamId, athleteId: s.athleteId, date: addDays(s.date, 7), startTime: s.startTime, durationMin: s.durationMin, title: s.title, plannedRpe: s.plannedRpe, notes: s.notes, status: "draft", publishedAt: null },
+        {
+          teamId: tool.teamId,
+          athleteId: s.athleteId,
+          date: addDays(s.date, 7),
+          startTime: s.startTime,
+          durationMin: s.durationMin,
+          title: s.title,
+          plannedRpe: s.plannedRpe,
+          notes: s.notes,
+          status: "draft",
+          publishedAt: null,
+        },
         { transaction },
       );
       await insertBlocks({ teamId: tool.teamId, sessionId: row.id, blocks: s.blocks, transaction });
       created.push(row.id);
     }
     const after = await loadById(created, transaction);
-    await notify({ transaction, teamId: tool.teamId, actorUserId: tool.actorUserId, changes: created.map((id) => change("created", null, after.get(id)!)), override: tool.override });
+    await notify({
+      transaction,
+      teamId: tool.teamId,
+      actorUserId: tool.actorUserId,
+      changes: created.map((id) => change("created", null, after.get(id)!)),
+      override: tool.override,
+    });
     return { sessions: [...after.values()].map((l) => l.dto), removedIds: [] };
   });
 }
@@ -181,8 +256,14 @@ export async function clearWeek(tool: WeekTool): Promise<PlanWriteResult> {
     for (const l of cancelled) {
       await PlannedSession.update({ status: "cancelled", ...bumped(l.dto) }, { where: { id: l.dto.id }, transaction });
     }
-    const after = await loadById(cancelled.map((l) => l.dto.id), transaction);
-    const changes = [...removed.map((l) => change("deleted", l, null)), ...cancelled.map((l) => change("deleted", l, after.get(l.dto.id)!))];
+    const after = await loadById(
+      cancelled.map((l) => l.dto.id),
+      transaction,
+    );
+    const changes = [
+      ...removed.map((l) => change("deleted", l, null)),
+      ...cancelled.map((l) => change("deleted", l, after.get(l.dto.id)!)),
+    ];
     await notify({ transaction, teamId: tool.teamId, actorUserId: tool.actorUserId, changes });
     return { sessions: [...after.values()].map((l) => l.dto), removedIds: removed.map((l) => l.dto.id) };
   });
@@ -197,8 +278,16 @@ export async function publishWeek(tool: WeekTool): Promise<PlanWriteResult> {
     for (const l of drafts) {
       await PlannedSession.update({ status: "published", publishedAt, ...bumped(l.dto) }, { where: { id: l.dto.id }, transaction });
     }
-    const after = await loadById(drafts.map((l) => l.dto.id), transaction);
-    await notify({ transaction, teamId: tool.teamId, actorUserId: tool.actorUserId, changes: drafts.map((l) => change("published", l, after.get(l.dto.id)!)) });
+    const after = await loadById(
+      drafts.map((l) => l.dto.id),
+      transaction,
+    );
+    await notify({
+      transaction,
+      teamId: tool.teamId,
+      actorUserId: tool.actorUserId,
+      changes: drafts.map((l) => change("published", l, after.get(l.dto.id)!)),
+    });
     return { sessions: [...after.values()].map((l) => l.dto), removedIds: [] };
   });
 }

@@ -35,35 +35,108 @@ async function hitsOf(teamId: number, changes: readonly SessionChange[], transac
  * is refused (409 "restricted", with the hits) unless it carries the coach's reason. With a reason it is
  * saved, the override is recorded, and the medical staff get an alert and (by their e-mail choice) a mail.
  */
-export async function guardRestrictions({ transaction, teamId, actorUserId, changes, override }: { transaction: Transaction; teamId: number; actorUserId: number; changes: readonly SessionChange[]; override?: Override | null }): Promise<void> {
+export async function guardRestrictions({
+  transaction,
+  teamId,
+  actorUserId,
+  changes,
+  override,
+}: {
+  transaction: Transaction;
+  teamId: number;
+  actorUserId: number;
+  changes: readonly SessionChange[];
+  override?: Override | null;
+}): Promise<void> {
   const hits = await hitsOf(teamId, changes, transaction);
   if (hits.length === 0) return;
   if (!override) {
     const first = hits[0]!;
     const more = hits.length > 1 ? ` (and ${hits.length - 1} more)` : "";
-    throw new AppError("restricted", `This goes past a restriction from the medical staff: ${first.rule}. ${first.detail}${more}. Give a reason to plan it anyway.`, { details: { hits } });
+    throw new AppError(
+      "restricted",
+      `This goes past a restriction from the medical staff: ${first.rule}. ${first.detail}${more}. Give a reason to plan it anyway.`,
+      { details: { hits } },
+    );
   }
   await recordOverrides({ transaction, teamId, actorUserId, hits, reason: override.reason });
 }
 
-async function recordOverrides({ transaction, teamId, actorUserId, hits, reason }: { transaction: Transaction; teamId: number; actorUserId: number; hits: readonly Hit[]; reason: string }) {
+async function recordOverrides({
+  transaction,
+  teamId,
+  actorUserId,
+  hits,
+  reason,
+}: {
+  transaction: Transaction;
+  teamId: number;
+  actorUserId: number;
+  hits: readonly Hit[];
+  reason: string;
+}) {
   const { RestrictionOverride, Alert, Athlete } = await db();
   const team = await getNoticeTeam({ teamId, transaction });
   const coach = await getPerson({ userId: actorUserId, transaction });
-  const staff = (await listAlertRecipients({ teamId, transaction })).filter((r) => r.role === "physio" && r.alertEmail === "each" && r.userId !== actorUserId);
-  const athletes = await Athlete.findAll({ where: { id: [...new Set(hits.map((h) => h.athleteId))] }, attributes: ["id", "name"], transaction });
+  const staff = (await listAlertRecipients({ teamId, transaction })).filter(
+    (r) => r.role === "physio" && r.alertEmail === "each" && r.userId !== actorUserId,
+  );
+  const athletes = await Athlete.findAll({
+    where: { id: [...new Set(hits.map((h) => h.athleteId))] },
+    attributes: ["id", "name"],
+    transaction,
+  });
   const nameOf = new Map(athletes.map((a) => [a.id, a.name]));
   for (const h of hits) {
-    const row = await RestrictionOverride.create({ teamId, restrictionId: h.restrictionId, athleteId: h.athleteId, sessionId: h.sessionId, sessionDate: h.date, detail: h.detail, reason, userId: actorUserId }, { transaction });
+    const row = await RestrictionOverride.create(
+      {
+        teamId,
+        restrictionId: h.restrictionId,
+        athleteId: h.athleteId,
+        sessionId: h.sessionId,
+        sessionDate: h.date,
+        detail: h.detail,
+        reason,
+        userId: actorUserId,
+      },
+      { transaction },
+    );
     const athleteName = nameOf.get(h.athleteId) ?? "An athlete";
     const text = `${coach?.name ?? "A coach"} planned ${h.detail} on this day against "${h.rule}". Reason: ${reason}`;
     // One unresolved alert per athlete × kind × week (a database rule): a second override that week joins it.
     const weekStart = startOfWeek(h.date, team?.weekStartDay ?? 1);
-    const open = await Alert.findOne({ where: { athleteId: h.athleteId, kind: "restriction_override", weekStart, status: ["open", "acknowledged"] }, transaction });
-    if (open) await open.update({ reason: `${open.reason}\n${text}`, value: open.value + 1, date: h.date, flagged: true }, { transaction });
+    const open = await Alert.findOne({
+      where: { athleteId: h.athleteId, kind: "restriction_override", weekStart, status: ["open", "acknowledged"] },
+      transaction,
+    });
+    if (open)
+      await open.update(
+        { reason: `${open.reason}\n${text}`, value: open.value + 1, date: h.date, flagged: true },
+        { transaction },
+      );
     else {
       await Alert.create(
-        { teamId, athleteId: h.athleteId, kind: "restriction_override", level: "caution", metric: null, value: 1, threshold: 0, date: h.date, weekStart, basis: "planned", reason: text, provisional: false, flagged: true, status: "open", note: null, acknowledgedBy: null, acknowledgedAt: null, resolvedBy: null, resolvedAt: null },
+        {
+          teamId,
+          athleteId: h.athleteId,
+          kind: "restriction_override",
+          level: "caution",
+          metric: null,
+          value: 1,
+          threshold: 0,
+          date: h.date,
+          weekStart,
+          basis: "planned",
+          reason: text,
+          provisional: false,
+          flagged: true,
+          status: "open",
+          note: null,
+          acknowledgedBy: null,
+          acknowledgedAt: null,
+          resolvedBy: null,
+          resolvedAt: null,
+        },
         { transaction },
       );
     }
@@ -73,7 +146,17 @@ async function recordOverrides({ transaction, teamId, actorUserId, hits, reason 
         teamId,
         kind: "alert",
         to: r.email,
-        mail: restrictionOverrideEmail({ recipientName: r.name, teamName: team?.name ?? "your team", athleteName, coachName: coach?.name ?? "A coach", date: h.date, rule: h.rule, detail: h.detail, reason, athleteUrl: `${appUrl().replace(/\/+$/, "")}/squad/${h.athleteId}` }),
+        mail: restrictionOverrideEmail({
+          recipientName: r.name,
+          teamName: team?.name ?? "your team",
+          athleteName,
+          coachName: coach?.name ?? "A coach",
+          date: h.date,
+          rule: h.rule,
+          detail: h.detail,
+          reason,
+          athleteUrl: `${appUrl().replace(/\/+$/, "")}/squad/${h.athleteId}`,
+        }),
         dedupeKey: `override:${row.id}:user:${r.userId}`,
       });
     }

@@ -27,13 +27,26 @@ export function toRestriction(row: RestrictionRow, names: ReadonlyMap<number, st
  * Restrictions of a team (or some of its athletes) that still apply on or after `from`, oldest first.
  * Without `from`, every restriction ever set, lifted ones included.
  */
-export async function listRestrictions({ teamId, athleteIds, from, transaction }: { teamId: number; athleteIds?: readonly number[]; from?: string; transaction?: Transaction }): Promise<Restriction[]> {
+export async function listRestrictions({
+  teamId,
+  athleteIds,
+  from,
+  transaction,
+}: {
+  teamId: number;
+  athleteIds?: readonly number[];
+  from?: string;
+  transaction?: Transaction;
+}): Promise<Restriction[]> {
   const { Restriction } = await db();
   const where: WhereOptions = { teamId };
   if (athleteIds) Object.assign(where, { athleteId: { [Op.in]: [...athleteIds] } });
   if (from) {
     Object.assign(where, {
-      [Op.and]: [{ [Op.or]: [{ endsOn: null }, { endsOn: { [Op.gte]: from } }] }, { [Op.or]: [{ liftedOn: null }, { liftedOn: { [Op.gt]: from } }] }],
+      [Op.and]: [
+        { [Op.or]: [{ endsOn: null }, { endsOn: { [Op.gte]: from } }] },
+        { [Op.or]: [{ liftedOn: null }, { liftedOn: { [Op.gt]: from } }] },
+      ],
     });
   }
   const rows = await Restriction.findAll({ where, order: [["startsOn", "ASC"], ["id", "ASC"]], transaction });
@@ -47,12 +60,30 @@ export async function listAthleteRestrictions({ teamId, athleteId }: { teamId: n
 }
 
 /** What still applies to one athlete on `today` or later (their own page). */
-export async function listCurrentRestrictions({ teamId, athleteId, today }: { teamId: number; athleteId: number; today: string }): Promise<Restriction[]> {
+export async function listCurrentRestrictions({
+  teamId,
+  athleteId,
+  today,
+}: {
+  teamId: number;
+  athleteId: number;
+  today: string;
+}): Promise<Restriction[]> {
   return (await listRestrictions({ teamId, athleteIds: [athleteId], from: today })).filter((r) => isCurrent(r, today));
 }
 
 /** A physio sets a restriction on an athlete of their team (404 for an athlete elsewhere). */
-export async function createRestriction({ teamId, athleteId, actorUserId, input }: { teamId: number; athleteId: number; actorUserId: number; input: CreateRestrictionInput }): Promise<Restriction> {
+export async function createRestriction({
+  teamId,
+  athleteId,
+  actorUserId,
+  input,
+}: {
+  teamId: number;
+  athleteId: number;
+  actorUserId: number;
+  input: CreateRestrictionInput;
+}): Promise<Restriction> {
   const { Athlete, Restriction } = await db();
   const athlete = await Athlete.findOne({ where: { id: athleteId, teamId }, attributes: ["id"] });
   if (!athlete) throw new AppError("not_found", "No such athlete");
@@ -76,7 +107,17 @@ export async function createRestriction({ teamId, athleteId, actorUserId, input 
  * Lifts a restriction from `today`: days from today on are free again. One that has not begun is lifted on its
  * first day, so it never applies. Lifting again, or lifting one that already ended, changes nothing.
  */
-export async function liftRestriction({ teamId, restrictionId, actorUserId, today }: { teamId: number; restrictionId: number; actorUserId: number; today: string }): Promise<Restriction> {
+export async function liftRestriction({
+  teamId,
+  restrictionId,
+  actorUserId,
+  today,
+}: {
+  teamId: number;
+  restrictionId: number;
+  actorUserId: number;
+  today: string;
+}): Promise<Restriction> {
   const { Restriction } = await db();
   const row = await Restriction.findOne({ where: { id: restrictionId, teamId } });
   if (!row) throw new AppError("not_found", "No such restriction");

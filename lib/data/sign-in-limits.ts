@@ -33,7 +33,14 @@ function limiters(): Limiters {
     const opts = { keyPrefix, points, duration: WINDOW_S, blockDuration: BLOCK_S };
     const memory = new RateLimiterMemory(opts);
     if (!client) return memory;
-    return new RateLimiterSQLite({ ...opts, storeClient: client, storeType: "sqlite3", tableName: "sign_in_limits", tableCreated: true, insuranceLimiter: memory });
+    return new RateLimiterSQLite({
+      ...opts,
+      storeClient: client,
+      storeType: "sqlite3",
+      tableName: "sign_in_limits",
+      tableCreated: true,
+      insuranceLimiter: memory,
+    });
   };
   const fresh = { account: make("account", ACCOUNT_ATTEMPTS), address: make("address", ADDRESS_ATTEMPTS), client };
   cache.__sprintwrightSignInLimits = { storage, limiters: fresh };
@@ -77,5 +84,8 @@ export async function beginSignInAttempt({ email, address }: { email: string | n
 /** A right password: the account starts afresh and the address gets its point back. */
 export async function signInSucceeded({ email, address }: { email: string; address: string }): Promise<void> {
   const { account, address: byAddress, client } = limiters();
-  await Promise.allSettled([oneAtATime(client, () => account.delete(accountKey(email))), oneAtATime(client, () => byAddress.reward(address))]);
+  await Promise.allSettled([
+    oneAtATime(client, () => account.delete(accountKey(email))),
+    oneAtATime(client, () => byAddress.reward(address)),
+  ]);
 }

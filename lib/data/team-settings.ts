@@ -37,13 +37,20 @@ const FIELDS = [
 ] as const;
 
 /** The settings columns for a raw query over team_load_settings aliased `s` (lib/data/load.ts). */
-export const SETTINGS_SQL_COLUMNS = `s.id AS settings_id, s.hsr_speed_ms AS hsrSpeedMs, s.near_max_pct AS nearMaxPct, s.acwr_method AS acwrMethod,
+export const SETTINGS_SQL_COLUMNS = `s.id AS settings_id, s.hsr_speed_ms AS hsrSpeedMs,
+  s.near_max_pct AS nearMaxPct, s.acwr_method AS acwrMethod,
   s.acwr_metric AS acwrMetric, s.spike_ratio AS spikeRatio, s.rising_ratio AS risingRatio, s.low_ratio AS lowRatio,
   s.weekly_change_limit_pct AS weeklyChangeLimitPct, s.recovery_hours AS recoveryHours, s.speed_zones AS speedZones, s.hsr_pct AS hsrPct,
   s.sprint_speed_ms AS sprintSpeedMs, s.maximal_pct AS maximalPct, s.recovery_work AS recoveryWork, s.missing_logs AS missingLogs,
   s.monotony_limit AS monotonyLimit`;
 
-export type SettingsRow = { [K in (typeof FIELDS)[number]]: K extends "recoveryWork" ? string : K extends "acwrMethod" | "acwrMetric" | "speedZones" | "missingLogs" ? string : number };
+export type SettingsRow = {
+  [K in (typeof FIELDS)[number]]: K extends "recoveryWork"
+    ? string
+    : K extends "acwrMethod" | "acwrMetric" | "speedZones" | "missingLogs"
+      ? string
+      : number;
+};
 type StoredSettings = Pick<SettingsModel, (typeof FIELDS)[number]>;
 
 function isMethod(v: unknown): v is AcwrMethod {
@@ -71,7 +78,10 @@ function toRecoveryWork(v: unknown): RecoveryWork[] {
 }
 
 /** Engine shape from a stored row; unknown stored strings fall back to the defaults. */
-export function toEngineSettings(row: StoredSettings | SettingsRow | (Omit<StoredSettings, "recoveryWork"> & { recoveryWork: readonly string[] }) | null): TeamLoadSettings {
+export function toEngineSettings(
+  row:
+    StoredSettings | SettingsRow | (Omit<StoredSettings, "recoveryWork"> & { recoveryWork: readonly string[] }) | null,
+): TeamLoadSettings {
   if (!row) return { ...DEFAULT_TEAM_LOAD_SETTINGS, recoveryWork: [...DEFAULT_TEAM_LOAD_SETTINGS.recoveryWork] };
   const d = DEFAULT_TEAM_LOAD_SETTINGS;
   const n = (v: number | null | undefined, fallback: number) => (v === null || v === undefined ? fallback : Number(v));
@@ -96,7 +106,13 @@ export function toEngineSettings(row: StoredSettings | SettingsRow | (Omit<Store
 }
 
 /** The team's thresholds in the engine's shape; the defaults when the team has no row yet. */
-export async function getTeamLoadSettings({ teamId, transaction }: { teamId: number; transaction?: Transaction }): Promise<TeamLoadSettings> {
+export async function getTeamLoadSettings({
+  teamId,
+  transaction,
+}: {
+  teamId: number;
+  transaction?: Transaction;
+}): Promise<TeamLoadSettings> {
   const { TeamLoadSettings } = await db();
   const row = await TeamLoadSettings.findOne({ where: { teamId }, attributes: [...FIELDS], transaction });
   return toEngineSettings(row);

@@ -12,12 +12,29 @@ const FIELDS = ["id", "kind", "title", "running", "drills", "notes", "durationMi
 /** The team's block templates, by kind then title. */
 export async function listTemplates({ teamId, transaction }: { teamId: number; transaction?: Transaction }): Promise<PlanTemplate[]> {
   const { BlockTemplate } = await db();
-  const rows = await BlockTemplate.findAll({ where: { teamId }, attributes: [...FIELDS], order: [["kind", "ASC"], ["title", "ASC"], ["id", "ASC"]], transaction });
+  const rows = await BlockTemplate.findAll({
+    where: { teamId },
+    attributes: [...FIELDS],
+    order: [
+      ["kind", "ASC"],
+      ["title", "ASC"],
+      ["id", "ASC"],
+    ],
+    transaction,
+  });
   return rows.map((r) => toPlanTemplate(r.get({ plain: true }) as TemplateRow));
 }
 
 /** One template of the team; 404 when it belongs to another team or does not exist. */
-export async function getTemplate({ teamId, templateId, transaction }: { teamId: number; templateId: number; transaction?: Transaction }): Promise<PlanTemplate> {
+export async function getTemplate({
+  teamId,
+  templateId,
+  transaction,
+}: {
+  teamId: number;
+  templateId: number;
+  transaction?: Transaction;
+}): Promise<PlanTemplate> {
   const { BlockTemplate } = await db();
   const row = await BlockTemplate.findOne({ where: { id: templateId, teamId }, attributes: [...FIELDS], transaction });
   if (!row) throw new AppError("not_found", "That template was not found", { fields: { templateId: ["Not found in this team"] } });
@@ -38,14 +55,28 @@ export async function createTemplate({ teamId, input }: { teamId: number; input:
 }
 
 /** Replaces a template's content when `version` is the stored one; 409 "stale" with the current template otherwise. */
-export async function updateTemplate({ teamId, templateId, version, input }: { teamId: number; templateId: number; version: number; input: TemplateInput }): Promise<PlanTemplate> {
+export async function updateTemplate({
+  teamId,
+  templateId,
+  version,
+  input,
+}: {
+  teamId: number;
+  templateId: number;
+  version: number;
+  input: TemplateInput;
+}): Promise<PlanTemplate> {
   const { BlockTemplate, sequelize } = await db();
   return sequelize.transaction(async (transaction) => {
     const row = await BlockTemplate.findOne({ where: { id: templateId, teamId }, attributes: [...FIELDS, "teamId"], transaction });
     if (!row) throw new AppError("not_found", "That template was not found");
     if (row.version !== version) {
       const current = toPlanTemplate(row.get({ plain: true }) as TemplateRow);
-      throw new AppError("stale", "Someone changed this block after you opened it. Nothing was saved; reopen it to see the current version.", { details: { current } });
+      throw new AppError(
+        "stale",
+        "Someone changed this block after you opened it. Nothing was saved; reopen it to see the current version.",
+        { details: { current } },
+      );
     }
     await row.update({ ...normaliseBlock(input), version: version + 1 }, { transaction });
     return getTemplate({ teamId, templateId, transaction });

@@ -57,7 +57,19 @@ const PASSWORD_LINKS = ["reset"];
  * against the account's e-mail, spends every other outstanding reset link, and ends every
  * session of the account (a stolen cookie stops working). Hash the password before the transaction (bcrypt is slow).
  */
-export async function replacePassword({ userId, password, passwordHash, transaction, now = new Date() }: { userId: number; password: string; passwordHash: string; transaction: Transaction; now?: Date }) {
+export async function replacePassword({
+  userId,
+  password,
+  passwordHash,
+  transaction,
+  now = new Date(),
+}: {
+  userId: number;
+  password: string;
+  passwordHash: string;
+  transaction: Transaction;
+  now?: Date;
+}) {
   const { User, Invitation } = await db();
   const user = await User.findByPk(userId, { attributes: ["id", "email"], transaction });
   if (!user) throw new AppError("invalid", "This link has expired or was already used", { fields: { token: ["Expired or used"] } });

@@ -180,8 +180,9 @@ export function prescribedReps(block: BlockInput): number {
  * (τ by start type, BLOCKS_TAU_FACTOR); a flying rep's run-in is a build-up (buildUpReach) counted in running
  * and band metres but not in sprint metres; metres at or above a threshold are the metres after reaching it
  * (sprint-model.ts). Recovery: max-velocity blocks, accelerations at ≥ maximalPct, speed-endurance blocks and
- * high plyometrics make the session high-intensity, each as the team chose (recoveryWork). Running data counts only on running kinds and drills only on
- * plyometric blocks, so form state left over from a kind change never leaks into the numbers.
+ * high plyometrics make the session high-intensity, each as the team chose (recoveryWork). Running data counts
+ * only on running kinds and drills only on plyometric blocks, so form state left over from a kind change never
+ * leaks into the numbers.
  */
 export function addBlockInto(acc: Float64Array, block: BlockInput, rp: ResolvedProfile, scale: number): void {
   acc[SLOT_SCALE] = scale;

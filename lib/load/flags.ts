@@ -106,7 +106,9 @@ function zoneFlag(input: FlagInput, peak: Peak, first: number, early: boolean, m
       kind: "rising",
       level: "caution",
       threshold: settings.risingRatio,
-      reason: `${name} peaks at ${r} on ${on}, at or above the climbing threshold ${formatRatio(settings.risingRatio)} and below the spike threshold ${formatRatio(settings.spikeRatio)}.${note}`,
+      reason:
+        `${name} peaks at ${r} on ${on}, at or above the climbing threshold ${formatRatio(settings.risingRatio)} ` +
+        `and below the spike threshold ${formatRatio(settings.spikeRatio)}.${note}`,
     };
   }
   // No "underloaded" from early days (a short history compares with almost nothing), from a part-week (its
@@ -117,7 +119,9 @@ function zoneFlag(input: FlagInput, peak: Peak, first: number, early: boolean, m
       kind: "low",
       level: "info",
       threshold: settings.lowRatio,
-      reason: `${name} stays below ${formatRatio(settings.lowRatio)} all week (highest ${r} on ${on}): this week is light compared with recent training.`,
+      reason:
+        `${name} stays below ${formatRatio(settings.lowRatio)} all week (highest ${r} on ${on}): ` +
+        `this week is light compared with recent training.`,
     };
   }
   return null;
@@ -152,7 +156,10 @@ function monotonyFlag(input: FlagInput, w: number): Flag | null {
     metric: "srpe",
     value: m,
     threshold: limit,
-    reason: `Training monotony (sRPE, Foster) is ${formatNumber(m, 2)} this week, above ${formatNumber(limit, 1)}: the days are too alike to recover between them. Weekly load ${formatNumber(load)} AU, strain ${formatNumber(strain)}.`,
+    reason:
+      `Training monotony (sRPE, Foster) is ${formatNumber(m, 2)} this week, above ${formatNumber(limit, 1)}: ` +
+      `the days are too alike to recover between them. ` +
+      `Weekly load ${formatNumber(load)} AU, strain ${formatNumber(strain)}.`,
   };
 }
 
@@ -201,7 +208,10 @@ function jumpFlags(input: FlagInput, w: number): Flag[] {
       metric: m,
       value: change,
       threshold: settings.weeklyChangeLimitPct,
-      reason: `${info.label}: ${formatNumber(cur, info.decimals)} ${info.unit} this week, up ${formatNumber(change, 1)}% on last week's ${formatNumber(prev, info.decimals)} ${info.unit}, more than the ${formatNumber(settings.weeklyChangeLimitPct, 1)}% limit.`,
+      reason:
+        `${info.label}: ${formatNumber(cur, info.decimals)} ${info.unit} this week, up ${formatNumber(change, 1)}% ` +
+        `on last week's ${formatNumber(prev, info.decimals)} ${info.unit}, ` +
+        `more than the ${formatNumber(settings.weeklyChangeLimitPct, 1)}% limit.`,
     });
   }
   return out;
@@ -221,7 +231,8 @@ function plyoFlags(input: FlagInput, weekStartDay: number, weekEndDay: number): 
     const w = s.contactsByIntensity.weighted;
     weekWeighted = weekWeighted === null || w === undefined ? null : weekWeighted + w;
   }
-  const week = ` This week: ${formatNumber(weekTotal)} contacts in all${weekWeighted === null ? "" : ` (${formatNumber(weekWeighted)} weighted by intensity)`}.`;
+  const weighted = weekWeighted === null ? "" : ` (${formatNumber(weekWeighted)} weighted by intensity)`;
+  const week = ` This week: ${formatNumber(weekTotal)} contacts in all${weighted}.`;
   for (const s of input.sessions) {
     const day = dayIndex(s.date);
     const contacts = s.contactsByIntensity.total;
@@ -235,7 +246,10 @@ function plyoFlags(input: FlagInput, weekStartDay: number, weekEndDay: number): 
       value: contacts,
       threshold: band.max,
       // NSCA per-session ranges (Potach & Chu, Essentials 4th ed.) [from memory].
-      reason: `The session on ${formatDayLabel(s.date)} has ${formatNumber(contacts)} ground contacts, above ${band.max}, the top of the ${level} range (${band.min}–${band.max} per session, the NSCA's off-season guidance).${week}`,
+      reason:
+        `The session on ${formatDayLabel(s.date)} has ${formatNumber(contacts)} ground contacts, ` +
+        `above ${band.max}, the top of the ${level} range ` +
+        `(${band.min}–${band.max} per session, the NSCA's off-season guidance).${week}`,
     });
   }
   return out;
@@ -263,7 +277,11 @@ function recoveryFlags(input: FlagInput, weekStartDay: number, weekEndDay: numbe
       sessionId: cur.s.id,
       value: gapH,
       threshold: hours,
-      reason: `High-intensity sessions on ${formatDayLabel(prev.s.date)} ${prev.s.startTime} and ${formatDayLabel(cur.s.date)} ${cur.s.startTime} are ${formatNumber(gapH, gapH % 1 === 0 ? 0 : 1)} h apart, less than the ${formatNumber(hours)} h recovery window.`,
+      reason:
+        `High-intensity sessions on ${formatDayLabel(prev.s.date)} ${prev.s.startTime} ` +
+        `and ${formatDayLabel(cur.s.date)} ${cur.s.startTime} ` +
+        `are ${formatNumber(gapH, gapH % 1 === 0 ? 0 : 1)} h apart, ` +
+        `less than the ${formatNumber(hours)} h recovery window.`,
     });
   }
   return out;

@@ -21,7 +21,8 @@
  *   range the caller shows (README §5). Ratios with < 28 days on record are provisional; chronic 0 → null.
  * - Monotony = mean ÷ SD with the population SD by default (Foster 1998); SD 0 → null.
  * - Boundaries: ACWR ≥ spike (1.5) is a spike, [rising 1.3, spike) climbing, < low (0.8) underloaded, judged on
- *   the week's settled (non-provisional) days, early days giving at most a caution (Gabbett 2016 zones; README §7); weekly change strictly > 15% is a jump (so exactly 15% passes),
+ *   the week's settled (non-provisional) days, early days giving at most a caution (Gabbett 2016 zones; README §7);
+ *   weekly change strictly > 15% is a jump (so exactly 15% passes),
  *   checked on settings.jumpMetrics (default sRPE, HSR, near-max, contacts); contacts strictly above the NSCA
  *   band's top are an overload; high-intensity sessions (max-velocity block or high plyometrics) less than 48 h
  *   apart by wall clock are a short recovery (exactly 48 h passes). Comparisons allow 1e-9 of float noise.

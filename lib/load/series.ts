@@ -249,7 +249,10 @@ export interface DailySeries {
   values: Record<Metric, Float64Array>;
   /** 1 when the day's value came from at least one log. */
   logged: Uint8Array;
-  /** 1 where a published session before today has no log: unknown, not a rest day (its plan stands in as an estimate, or 0 with the day left out). */
+  /**
+   * 1 where a published session before today has no log: unknown, not a rest day (its plan stands in as an
+   * estimate, or 0 with the day left out).
+   */
   missing: Uint8Array;
   /** First day on record in the view (for acwrSeries' firstDataIndex); null when none. */
   firstDataIndex: number | null;

@@ -69,7 +69,10 @@ export interface AthleteProfile {
 export const DEFAULT_VMAX = 9.0;
 /** 1.2 s: mid-range for the Furusawa/Hill model in trained sprinters, about 1.0–1.4 s [from memory]; lib/load/README.md §1. */
 export const DEFAULT_TAU = 1.2;
-/** 2.1 m: low end of max-velocity step length 2.0–2.6 m [from memory], because sprint metres include the acceleration, where steps are shorter. */
+/**
+ * 2.1 m: low end of max-velocity step length 2.0–2.6 m [from memory], because sprint metres include the
+ * acceleration, where steps are shorter.
+ */
 export const DEFAULT_STEP_LENGTH = 2.1;
 
 export type AcwrMethod = "ewma" | "rolling_coupled" | "rolling_uncoupled";

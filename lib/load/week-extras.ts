@@ -2,7 +2,10 @@ import { weightedContacts } from "./plyo";
 import type { ContactsByIntensity, SpeedBands } from "./types";
 import { dayIndex } from "@/lib/dates/plain-date";
 
-/** The week's speed bands and contacts by intensity, summed over the sessions that count in the view (lib/load/README.md §11.1, §11.5). */
+/**
+ * The week's speed bands and contacts by intensity, summed over the sessions that count in the view
+ * (lib/load/README.md §11.1, §11.5).
+ */
 export interface WeekExtras {
   bands: SpeedBands;
   contactsByIntensity: ContactsByIntensity;

@@ -127,7 +127,8 @@ export class World {
     const now = sqlNow();
     const title = unique("Matrix session");
     await this.app.query(
-      "INSERT INTO planned_sessions (team_id, athlete_id, date, start_time, duration_min, title, planned_rpe, status, notes, version, sequence, published_at, created_at, updated_at) VALUES (?, ?, ?, '16:00', 45, ?, 5, 'published', NULL, 1, 0, ?, ?, ?)",
+      "INSERT INTO planned_sessions (team_id, athlete_id, date, start_time, duration_min, title, planned_rpe, status, notes, " +
+        "version, sequence, published_at, created_at, updated_at) VALUES (?, ?, ?, '16:00', 45, ?, 5, 'published', NULL, 1, 0, ?, ?, ?)",
       [this.teamId, athleteId, this.today(-1), title, now, now, now],
     );
     const [row] = await this.app.query<{ id: number; version: number }>(
@@ -135,7 +136,8 @@ export class World {
       [title],
     );
     await this.app.query(
-      "INSERT INTO session_blocks (session_id, template_id, position, kind, title, running, drills, notes, created_at, updated_at) VALUES (?, NULL, 0, ?, ?, NULL, NULL, NULL, ?, ?)",
+      "INSERT INTO session_blocks (session_id, template_id, position, kind, title, running, drills, notes, created_at, updated_at) " +
+        "VALUES (?, NULL, 0, ?, ?, NULL, NULL, NULL, ?, ?)",
       [row.id, STRENGTH_BLOCK.kind, STRENGTH_BLOCK.title, now, now],
     );
     const [block] = await this.app.query<{ id: number }>("SELECT id FROM session_blocks WHERE session_id = ?", [
@@ -173,7 +175,10 @@ export class World {
     const now = sqlNow();
     const week = new Date(Date.UTC(2030, 0, 7) + ++counter * 7 * 86_400_000).toISOString().slice(0, 10);
     await this.app.query(
-      "INSERT INTO alerts (team_id, athlete_id, kind, level, metric, value, threshold, date, week_start, basis, reason, provisional, flagged, status, created_at, updated_at) VALUES (?, ?, 'weekly_jump', 'caution', 'srpe', 1.4, 1.15, ?, ?, 'planned', 'Matrix check: planned load up 40 % on last week', 0, 1, 'open', ?, ?)",
+      "INSERT INTO alerts (team_id, athlete_id, kind, level, metric, value, threshold, date, week_start, basis, " +
+        "reason, provisional, flagged, status, created_at, updated_at) " +
+        "VALUES (?, ?, 'weekly_jump', 'caution', 'srpe', 1.4, 1.15, ?, ?, 'planned', 'Matrix check: planned load up 40 % on last week', " +
+        "0, 1, 'open', ?, ?)",
       [this.teamId, athleteId, week, week, now, now],
     );
     const [row] = await this.app.query<{ id: number }>(
@@ -253,7 +258,8 @@ export class World {
         .map((c) => c.name)
         .filter((c) => !skip || (skip === "all but id" ? c === "id" : !skip.includes(c)));
       const [row] = await this.app.query<{ j: string | null }>(
-        `SELECT json_group_array(json_array(${columns.map((c) => `"${c}"`).join(", ")})) AS j FROM (SELECT * FROM "${name}" ORDER BY rowid)`,
+        `SELECT json_group_array(json_array(${columns.map((c) => `"${c}"`).join(", ")})) AS j ` +
+          `FROM (SELECT * FROM "${name}" ORDER BY rowid)`,
       );
       hash.update(`${name}:${row.j ?? ""}\n`);
     }

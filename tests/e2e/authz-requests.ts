@@ -39,7 +39,8 @@ async function openInvitation(w: World): Promise<number> {
   );
   const [user] = await w.app.query<{ id: number }>("SELECT id FROM users WHERE email = ?", [email]);
   await w.app.query(
-    "INSERT INTO invitations (team_id, user_id, purpose, email, role, token_hash, expires_at, used_at, created_at, updated_at) VALUES (?, ?, 'invite', ?, 'coach', ?, '2099-01-01 00:00:00.000 +00:00', NULL, ?, ?)",
+    "INSERT INTO invitations (team_id, user_id, purpose, email, role, token_hash, expires_at, used_at, created_at, updated_at) " +
+      "VALUES (?, ?, 'invite', ?, 'coach', ?, '2099-01-01 00:00:00.000 +00:00', NULL, ?, ?)",
     [w.teamId, user.id, email, `matrix-${email}`, now, now],
   );
   const [row] = await w.app.query<{ id: number }>("SELECT id FROM invitations WHERE email = ?", [email]);

@@ -234,7 +234,8 @@ describe("fuzzed bodies and queries: 4xx with a message, never 5xx, nothing chan
             headers: { origin: app.url, ...(sent.body !== undefined ? { "content-type": "application/json" } : {}) },
           });
           const text = await res.text();
-          const what = `${sent.method} ${sent.path.slice(0, 200)} ${String(sent.body).slice(0, 300)} → ${res.status} ${text.slice(0, 300)}`;
+          const sentText = `${sent.method} ${sent.path.slice(0, 200)} ${String(sent.body).slice(0, 300)}`;
+          const what = `${sentText} → ${res.status} ${text.slice(0, 300)}`;
           expect(res.status, what).toBeLessThan(500);
           if (FOREIGN.has(key) || res.status < 400) {
             // A success may have spent the target and changed the tables: start again from fresh ones.

@@ -19,7 +19,8 @@ export function describeBrowser(name: string, fn: () => void) {
   if (!warned) {
     warned = true;
     console.warn(
-      `\n${"!".repeat(78)}\n!! Browser tests SKIPPED: no Chromium at ${CHROMIUM_PATH}.\n!! Install it with: sudo apt-get install -y chromium   (or set CHROMIUM_PATH)\n${"!".repeat(78)}\n`,
+      `\n${"!".repeat(78)}\n!! Browser tests SKIPPED: no Chromium at ${CHROMIUM_PATH}.\n` +
+        `!! Install it with: sudo apt-get install -y chromium   (or set CHROMIUM_PATH)\n${"!".repeat(78)}\n`,
     );
   }
   return describe.skip(name, fn);

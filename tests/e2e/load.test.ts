@@ -66,7 +66,8 @@ describeBrowser("load screens", () => {
       .then((chunks) => Buffer.concat(chunks).toString("utf8"));
     const lines = csv.trim().split(/\r?\n/);
     expect(lines[0]).toBe(
-      "Athlete,ACWR,Flags,HSR m,Near-max m,Sprint steps (est.),Plyo contacts,Contacts by intensity,≥ HSR speed m,≥ sprint speed m,≥ HSR % m,≥ near-max % m,≥ maximal % m,sRPE (AU),Weekly change",
+      "Athlete,ACWR,Flags,HSR m,Near-max m,Sprint steps (est.),Plyo contacts,Contacts by intensity," +
+        "≥ HSR speed m,≥ sprint speed m,≥ HSR % m,≥ near-max % m,≥ maximal % m,sRPE (AU),Weekly change",
     );
     expect(lines).toHaveLength(DEMO_ATHLETES.length + 1);
     await page.getByTestId("choose-columns").click();
@@ -113,33 +114,37 @@ describeBrowser("load screens", () => {
     await screenshot(page, "figures");
   });
 
-  it("over real HTTP, the squad table, the week plan and each athlete page give the same daily ratios (lib/load/README.md §5)", async () => {
-    const api = await apiSession(app, headCoach.email);
-    type Week = { dailyRatio: (number | null)[] };
-    const squad = (await (await api.fetch(`/api/teams/1/load?view=projected`)).json()) as {
-      weekStart: string;
-      rows: ({ id: number } & Week)[];
-    };
-    const plan = (await (await api.fetch(`/api/teams/1/plan?week=${squad.weekStart}`)).json()) as {
-      athletes: { id: number; load: { week: Week } }[];
-    };
-    for (const row of squad.rows) {
-      const page = (await (await api.fetch(`/api/athletes/${row.id}/load?view=projected&metric=srpe`)).json()) as {
-        days: { date: string; ratio: number | null }[];
+  it(
+    "over real HTTP, the squad table, the week plan and each athlete page give the same daily ratios " +
+      "(lib/load/README.md §5)",
+    async () => {
+      const api = await apiSession(app, headCoach.email);
+      type Week = { dailyRatio: (number | null)[] };
+      const squad = (await (await api.fetch(`/api/teams/1/load?view=projected`)).json()) as {
+        weekStart: string;
+        rows: ({ id: number } & Week)[];
       };
-      const start = page.days.findIndex((x) => x.date === squad.weekStart);
-      expect(start).toBeGreaterThanOrEqual(0);
-      const fromPage = page.days.slice(start, start + 7).map((x) => x.ratio);
-      const fromPlan = plan.athletes.find((a) => a.id === row.id)!.load.week.dailyRatio;
-      for (const other of [fromPage, fromPlan]) {
-        other.forEach((r, i) => {
-          const ref = row.dailyRatio[i];
-          expect(r === null).toBe(ref === null);
-          if (r !== null && ref !== null) expect(Math.abs(r - ref)).toBeLessThanOrEqual(1e-12);
-        });
+      const plan = (await (await api.fetch(`/api/teams/1/plan?week=${squad.weekStart}`)).json()) as {
+        athletes: { id: number; load: { week: Week } }[];
+      };
+      for (const row of squad.rows) {
+        const page = (await (await api.fetch(`/api/athletes/${row.id}/load?view=projected&metric=srpe`)).json()) as {
+          days: { date: string; ratio: number | null }[];
+        };
+        const start = page.days.findIndex((x) => x.date === squad.weekStart);
+        expect(start).toBeGreaterThanOrEqual(0);
+        const fromPage = page.days.slice(start, start + 7).map((x) => x.ratio);
+        const fromPlan = plan.athletes.find((a) => a.id === row.id)!.load.week.dailyRatio;
+        for (const other of [fromPage, fromPlan]) {
+          other.forEach((r, i) => {
+            const ref = row.dailyRatio[i];
+            expect(r === null).toBe(ref === null);
+            if (r !== null && ref !== null) expect(Math.abs(r - ref)).toBeLessThanOrEqual(1e-12);
+          });
+        }
       }
-    }
-  });
+    },
+  );
 
   it("lets an athlete open only their own load", async () => {
     const mayaPage = await browser.newPage({ viewport: { width: 390, height: 844 } });

@@ -37,27 +37,31 @@ describeBrowser("local mailbox: each member reads only their own mail", () => {
     resetId = mail.id;
   });
 
-  it("the mailbox API gives the athlete none of it: not in the list, 404 for the mail, raw and parts, 403 for another address", async () => {
-    const athlete = await apiSession(app, ATHLETE);
-    const list = await athlete.fetch("/api/mailbox");
-    expect(list.status).toBe(200);
-    const body = (await list.json()) as { mails: Array<{ id: string; subject: string }> };
-    expect(body.mails.map((m) => m.id)).not.toContain(resetId);
-    expect(JSON.stringify(body)).not.toContain(RESET_SUBJECT);
-    for (const path of [
-      `/api/mailbox/${resetId}`,
-      `/api/mailbox/${resetId}/raw`,
-      `/api/mailbox/${resetId}/attachments/0`,
-    ]) {
-      const res = await athlete.fetch(path);
-      expect(res.status, path).toBe(404);
-      expect(await res.text(), path).not.toMatch(/\/invite\//);
-    }
-    expect((await athlete.fetch(`/api/mailbox?to=${encodeURIComponent(HEAD)}`)).status).toBe(403);
-    // Another member of staff cannot read it either.
-    const coach = await apiSession(app, "coach@harbourvale.test");
-    expect((await coach.fetch(`/api/mailbox/${resetId}`)).status).toBe(404);
-  });
+  it(
+    "the mailbox API gives the athlete none of it: not in the list, 404 for the mail, raw and parts, " +
+      "403 for another address",
+    async () => {
+      const athlete = await apiSession(app, ATHLETE);
+      const list = await athlete.fetch("/api/mailbox");
+      expect(list.status).toBe(200);
+      const body = (await list.json()) as { mails: Array<{ id: string; subject: string }> };
+      expect(body.mails.map((m) => m.id)).not.toContain(resetId);
+      expect(JSON.stringify(body)).not.toContain(RESET_SUBJECT);
+      for (const path of [
+        `/api/mailbox/${resetId}`,
+        `/api/mailbox/${resetId}/raw`,
+        `/api/mailbox/${resetId}/attachments/0`,
+      ]) {
+        const res = await athlete.fetch(path);
+        expect(res.status, path).toBe(404);
+        expect(await res.text(), path).not.toMatch(/\/invite\//);
+      }
+      expect((await athlete.fetch(`/api/mailbox?to=${encodeURIComponent(HEAD)}`)).status).toBe(403);
+      // Another member of staff cannot read it either.
+      const coach = await apiSession(app, "coach@harbourvale.test");
+      expect((await coach.fetch(`/api/mailbox/${resetId}`)).status).toBe(404);
+    },
+  );
 
   it("the mailbox screen shows the athlete neither the mail nor a way to it, and says it exists only locally", async () => {
     const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });

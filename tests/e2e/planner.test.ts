@@ -305,7 +305,8 @@ describeBrowser("planner journeys", () => {
           );
         if (reached) return;
         console.warn(
-          `keyboard drag: ${key} did not reach ${where} yet; pressing again (live region: ${await page.locator('[id^="DndLiveRegion"]').textContent()})`,
+          `keyboard drag: ${key} did not reach ${where} yet; pressing again ` +
+            `(live region: ${await page.locator('[id^="DndLiveRegion"]').textContent()})`,
         );
       }
       throw new Error(`the keyboard drag did not reach ${where}`);

@@ -71,7 +71,8 @@ async function plantResetLink(dbPath: string, email: string): Promise<string> {
   const stamp = (d: Date) => d.toISOString().replace("T", " ").replace("Z", " +00:00");
   const now = new Date();
   await db.run(
-    "INSERT INTO invitations (team_id, user_id, purpose, token_hash, expires_at, used_at, created_at, updated_at) VALUES (?, ?, 'reset', ?, ?, NULL, ?, ?)",
+    "INSERT INTO invitations (team_id, user_id, purpose, token_hash, expires_at, used_at, created_at, updated_at) " +
+      "VALUES (?, ?, 'reset', ?, ?, NULL, ?, ?)",
     [user!.team_id, user!.id, hash, stamp(new Date(now.getTime() + 3_600_000)), stamp(now), stamp(now)],
   );
   await db.close();

@@ -75,41 +75,45 @@ describe("control characters in text fields", () => {
     expect(Object.keys(bad.body.error?.fields ?? {}).sort()).toEqual(["notes", "title"]);
   });
 
-  it("copies a week whose stored titles hold a NUL (rows written before the schema refused it): values are bound, not inlined", async () => {
-    const title = "Flying\u0000 30s";
-    const s = await d.PlannedSession.create({
-      teamId: a.teamId,
-      athleteId: ada,
-      date: addDays(week, 14),
-      startTime: "17:00",
-      durationMin: 50,
-      title,
-      plannedRpe: 7,
-      status: "published",
-      notes: null,
-      publishedAt: new Date(),
-    });
-    await d.SessionBlock.create({
-      sessionId: s.id,
-      templateId: null,
-      position: 0,
-      kind: "recovery",
-      title,
-      running: null,
-      drills: null,
-      notes: "a\u0000b",
-    });
-    const copied = await json(
-      await tools.POST(
-        post(`/api/teams/${T}/plan/copy-to-next`, { week: addDays(week, 14) }),
-        p({ teamId: T, tool: "copy-to-next" }),
-      ),
-    );
-    expect(copied.status).toBe(200);
-    expect(copied.body.sessions?.map((x) => [x.title, x.blocks.map((b) => b.title)])).toEqual([[title, [title]]]);
-    const stored = await d.SessionBlock.findOne({
-      where: { sessionId: copied.body.sessions && (copied.body.sessions[0] as unknown as { id: number }).id },
-    });
-    expect(stored?.notes).toBe("a\u0000b");
-  });
+  it(
+    "copies a week whose stored titles hold a NUL (rows written before the schema refused it): " +
+      "values are bound, not inlined",
+    async () => {
+      const title = "Flying\u0000 30s";
+      const s = await d.PlannedSession.create({
+        teamId: a.teamId,
+        athleteId: ada,
+        date: addDays(week, 14),
+        startTime: "17:00",
+        durationMin: 50,
+        title,
+        plannedRpe: 7,
+        status: "published",
+        notes: null,
+        publishedAt: new Date(),
+      });
+      await d.SessionBlock.create({
+        sessionId: s.id,
+        templateId: null,
+        position: 0,
+        kind: "recovery",
+        title,
+        running: null,
+        drills: null,
+        notes: "a\u0000b",
+      });
+      const copied = await json(
+        await tools.POST(
+          post(`/api/teams/${T}/plan/copy-to-next`, { week: addDays(week, 14) }),
+          p({ teamId: T, tool: "copy-to-next" }),
+        ),
+      );
+      expect(copied.status).toBe(200);
+      expect(copied.body.sessions?.map((x) => [x.title, x.blocks.map((b) => b.title)])).toEqual([[title, [title]]]);
+      const stored = await d.SessionBlock.findOne({
+        where: { sessionId: copied.body.sessions && (copied.body.sessions[0] as unknown as { id: number }).id },
+      });
+      expect(stored?.notes).toBe("a\u0000b");
+    },
+  );
 });

@@ -60,46 +60,51 @@ describe("SQLite writes", () => {
     expect(await d.BlockTemplate.count({ where: { teamId } })).toBe(before + 124);
   });
 
-  it("a lock another connection holds: the first write waits busy_timeout, the ones queued behind it give up with it, all answer 503", async () => {
-    const other = await otherConnection();
-    await exec(other, "BEGIN IMMEDIATE");
-    try {
-      expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("busy");
-      const started = Date.now();
-      const pending = Promise.all([
-        Promise.allSettled(Array.from({ length: 5 }, (_, i) => newTemplate(`Blocked ${i}`))),
-        runAction(() => newTemplate("Blocked in a form")),
-      ]);
-      // Now our own writer holds the turn, stuck at BEGIN: health still says busy, without waiting for it.
-      await new Promise((r) => setTimeout(r, 300));
-      const asked = Date.now();
-      expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("busy");
-      expect(Date.now() - asked).toBeLessThan(1000);
-      const [results, action] = await pending;
-      const elapsed = Date.now() - started;
-      // A server action's form shows the same plain message instead of failing.
-      expect(action).toEqual({ ok: false, message: expect.stringMatching(/busy.*Nothing was saved/) });
-      expect(results.every((r) => r.status === "rejected")).toBe(true);
-      // One busy_timeout in all, not one per queued write (nor Sequelize's five retries of each).
-      expect(elapsed).toBeGreaterThanOrEqual(BUSY_TIMEOUT_MS - 100);
-      expect(elapsed).toBeLessThan(2 * BUSY_TIMEOUT_MS);
-      for (const r of results) {
-        const res = errorResponse((r as PromiseRejectedResult).reason);
-        expect(res.status).toBe(503);
-        expect(res.headers.get("retry-after")).toMatch(/^[1-9]\d*$/);
-        expect(((await res.json()) as { error: { code: string } }).error.code).toBe("busy");
+  it(
+    "a lock another connection holds: the first write waits busy_timeout, the ones queued behind it give up with it, " +
+      "all answer 503",
+    async () => {
+      const other = await otherConnection();
+      await exec(other, "BEGIN IMMEDIATE");
+      try {
+        expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("busy");
+        const started = Date.now();
+        const pending = Promise.all([
+          Promise.allSettled(Array.from({ length: 5 }, (_, i) => newTemplate(`Blocked ${i}`))),
+          runAction(() => newTemplate("Blocked in a form")),
+        ]);
+        // Now our own writer holds the turn, stuck at BEGIN: health still says busy, without waiting for it.
+        await new Promise((r) => setTimeout(r, 300));
+        const asked = Date.now();
+        expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("busy");
+        expect(Date.now() - asked).toBeLessThan(1000);
+        const [results, action] = await pending;
+        const elapsed = Date.now() - started;
+        // A server action's form shows the same plain message instead of failing.
+        expect(action).toEqual({ ok: false, message: expect.stringMatching(/busy.*Nothing was saved/) });
+        expect(results.every((r) => r.status === "rejected")).toBe(true);
+        // One busy_timeout in all, not one per queued write (nor Sequelize's five retries of each).
+        expect(elapsed).toBeGreaterThanOrEqual(BUSY_TIMEOUT_MS - 100);
+        expect(elapsed).toBeLessThan(2 * BUSY_TIMEOUT_MS);
+        for (const r of results) {
+          const res = errorResponse((r as PromiseRejectedResult).reason);
+          expect(res.status).toBe(503);
+          expect(res.headers.get("retry-after")).toMatch(/^[1-9]\d*$/);
+          expect(((await res.json()) as { error: { code: string } }).error.code).toBe("busy");
+        }
+      } finally {
+        await exec(other, "ROLLBACK");
+        await new Promise((r) => other.close(r));
       }
-    } finally {
-      await exec(other, "ROLLBACK");
-      await new Promise((r) => other.close(r));
-    }
-    expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("ok");
-    // The connection of the transaction that never began is closed, not left open.
-    expect(
-      Object.keys((d.sequelize.connectionManager as unknown as { connections: Record<string, unknown> }).connections),
-    ).toEqual(["default"]);
-    await newTemplate("After the lock");
-    expect(await d.BlockTemplate.count({ where: { teamId, title: "After the lock" } })).toBe(1);
-    expect(await d.BlockTemplate.count({ where: { teamId, title: "Blocked 0" } })).toBe(0);
-  }, 30_000);
+      expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("ok");
+      // The connection of the transaction that never began is closed, not left open.
+      expect(
+        Object.keys((d.sequelize.connectionManager as unknown as { connections: Record<string, unknown> }).connections),
+      ).toEqual(["default"]);
+      await newTemplate("After the lock");
+      expect(await d.BlockTemplate.count({ where: { teamId, title: "After the lock" } })).toBe(1);
+      expect(await d.BlockTemplate.count({ where: { teamId, title: "Blocked 0" } })).toBe(0);
+    },
+    30_000,
+  );
 });

@@ -20,7 +20,8 @@ describe("migration 005-member-invitations", () => {
       [stamp, stamp],
     );
     await run(
-      "INSERT INTO users (id, email, name, password_hash, created_at, updated_at) VALUES (1, 'joined@old.test', 'Joined', 'x', ?, ?), (2, 'pending@old.test', 'Pending', NULL, ?, ?)",
+      "INSERT INTO users (id, email, name, password_hash, created_at, updated_at) " +
+        "VALUES (1, 'joined@old.test', 'Joined', 'x', ?, ?), (2, 'pending@old.test', 'Pending', NULL, ?, ?)",
       [stamp, stamp, stamp, stamp],
     );
     await run(
@@ -28,11 +29,13 @@ describe("migration 005-member-invitations", () => {
       [stamp, stamp, stamp, stamp],
     );
     await run(
-      "INSERT INTO athletes (id, team_id, user_id, name, plyo_level, created_at, updated_at) VALUES (7, 1, 2, 'Pending Runner', 'beginner', ?, ?)",
+      "INSERT INTO athletes (id, team_id, user_id, name, plyo_level, created_at, updated_at) " +
+        "VALUES (7, 1, 2, 'Pending Runner', 'beginner', ?, ?)",
       [stamp, stamp],
     );
     await run(
-      "INSERT INTO invitations (team_id, user_id, purpose, token_hash, expires_at, used_at, created_at, updated_at) VALUES (1, 2, 'invite', 'h1', '2026-11-08 10:00:00.000 +00:00', NULL, ?, ?)",
+      "INSERT INTO invitations (team_id, user_id, purpose, token_hash, expires_at, used_at, created_at, updated_at) " +
+        "VALUES (1, 2, 'invite', 'h1', '2026-11-08 10:00:00.000 +00:00', NULL, ?, ?)",
       [stamp, stamp],
     );
 

@@ -326,18 +326,22 @@ describe("dropping templates", () => {
 });
 
 describe("moving, copying, editing", () => {
-  it("moves a session to another day and athlete with the version it read; a stale version answers 409 with the current session", async () => {
-    const [s] = (await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: tue })).body
-      .sessions;
-    const moved = await patch(s.id, { version: 1, date: thu });
-    expect(moved.status).toBe(200);
-    expect(moved.body.sessions[0]).toMatchObject({ date: thu, version: 2, sequence: 0 });
-    const stale = await patch(s.id, { version: 1, athleteId: ben.athleteId });
-    expect(stale.status).toBe(409);
-    expect(stale.body.error).toMatchObject({ code: "stale", current: { id: s.id, date: thu, version: 2 } });
-    const other = await patch(s.id, { version: 2, athleteId: ben.athleteId });
-    expect(other.body.sessions[0]).toMatchObject({ athleteId: ben.athleteId, version: 3 });
-  });
+  it(
+    "moves a session to another day and athlete with the version it read; " +
+      "a stale version answers 409 with the current session",
+    async () => {
+      const [s] = (await create({ from: "template", templateId: maxV, athleteId: ada.athleteId, date: tue })).body
+        .sessions;
+      const moved = await patch(s.id, { version: 1, date: thu });
+      expect(moved.status).toBe(200);
+      expect(moved.body.sessions[0]).toMatchObject({ date: thu, version: 2, sequence: 0 });
+      const stale = await patch(s.id, { version: 1, athleteId: ben.athleteId });
+      expect(stale.status).toBe(409);
+      expect(stale.body.error).toMatchObject({ code: "stale", current: { id: s.id, date: thu, version: 2 } });
+      const other = await patch(s.id, { version: 2, athleteId: ben.athleteId });
+      expect(other.body.sessions[0]).toMatchObject({ athleteId: ben.athleteId, version: 3 });
+    },
+  );
 
   it("copies a session as a new draft with its blocks", async () => {
     const [s] = (await create({ from: "template", templateId: plyo, athleteId: ada.athleteId, date: tue })).body

@@ -32,7 +32,10 @@ export default async function FiguresPage() {
     <>
       <PageHeader
         title="How figures are worked out"
-        lead="What every load number and flag means, how it is computed, where the formula comes from, and the choices we made where the research leaves one open."
+        lead={
+          "What every load number and flag means, how it is computed, " +
+          "where the formula comes from, and the choices we made where the research leaves one open."
+        }
       />
       <div className="space-y-4">
         <FigureSection id="caution" title="Read this first">

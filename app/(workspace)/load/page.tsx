@@ -16,7 +16,10 @@ export default async function SquadLoadPage() {
     <>
       <PageHeader
         title="Squad load"
-        lead="The week for every athlete: high-speed and near-max metres, sprint steps, plyometric contacts and session RPE load, with the acute:chronic ratio and anything worth a second look."
+        lead={
+          "The week for every athlete: high-speed and near-max metres, sprint steps, plyometric contacts and session RPE load, " +
+          "with the acute:chronic ratio and anything worth a second look."
+        }
       />
       <SquadLoadTable teamId={viewer.teamId} initial={initial} />
     </>

@@ -1,5 +1,6 @@
 "use client";
 
+import { clsx } from "clsx";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -104,7 +105,10 @@ export function SessionLogForm({
           {LOG_COMPLETIONS.map((c) => (
             <label
               key={c}
-              className="flex cursor-pointer items-center gap-2 rounded-lg bg-paper-raised px-3 py-3 text-sm ring-1 ring-ink-200 ring-inset has-[:checked]:ring-2 has-[:checked]:ring-lane-500"
+              className={clsx(
+                "flex cursor-pointer items-center gap-2 rounded-lg bg-paper-raised px-3 py-3 text-sm",
+                "ring-1 ring-ink-200 ring-inset has-[:checked]:ring-2 has-[:checked]:ring-lane-500",
+              )}
             >
               <input
                 type="radio"

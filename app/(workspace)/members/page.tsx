@@ -20,7 +20,10 @@ export default async function MembersPage() {
     <>
       <PageHeader
         title="Members"
-        lead="Who can sign in to your club and what each role may do. Everyone you add gets an invitation by e-mail and becomes a member only when they accept it."
+        lead={
+          "Who can sign in to your club and what each role may do. " +
+          "Everyone you add gets an invitation by e-mail and becomes a member only when they accept it."
+        }
       />
       <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
         <div>

@@ -13,7 +13,10 @@ export default async function ThresholdsPage() {
     <>
       <PageHeader
         title="Thresholds"
-        lead="The lines the load engine draws for the whole team: what counts as high-speed and near-max running, how the acute:chronic ratio is worked out, and when a week earns a flag."
+        lead={
+          "The lines the load engine draws for the whole team: what counts as high-speed and near-max running, " +
+          "how the acute:chronic ratio is worked out, and when a week earns a flag."
+        }
       />
       <Card className="p-5">
         <ThresholdsForm teamId={viewer.teamId} initial={settings} />

@@ -169,8 +169,10 @@ describe("plyometric volume per session (NSCA bands [from memory])", () => {
       metric: "contacts",
     });
     expect(flags[0].reason).toBe(
-      // The week's total sits next to the band (lib/load/README.md §11.5): 120 + 150 = 270 (the 8 Mar session is before the week).
-      "The session on Wed 11 Mar has 150 ground contacts, above 120, the top of the intermediate range (100–120 per session, the NSCA's off-season guidance). This week: 270 contacts in all.",
+      // The week's total sits next to the band (lib/load/README.md §11.5): 120 + 150 = 270 (the 8 Mar session is
+      // before the week).
+      "The session on Wed 11 Mar has 150 ground contacts, above 120, the top of the intermediate range " +
+        "(100–120 per session, the NSCA's off-season guidance). This week: 270 contacts in all.",
     );
   });
 });
