@@ -7,6 +7,7 @@ import { Alert } from "./alert";
 import { Athlete } from "./athlete";
 import { AuthSession } from "./auth-session";
 import { BlockTemplate } from "./block-template";
+import { CalendarFeedRender } from "./calendar-feed-render";
 import { CalendarToken } from "./calendar-token";
 import { Invitation } from "./invitation";
 import { Membership } from "./membership";
@@ -23,7 +24,7 @@ import { TrainingGroup } from "./training-group";
 import { User } from "./user";
 
 export { Alert, CalendarToken, NotificationSetting, OutboxMessage, Restriction, RestrictionOverride };
-export { AuthSession };
+export { AuthSession, CalendarFeedRender };
 export {
   Athlete,
   BlockTemplate,
@@ -40,6 +41,7 @@ export {
 
 const models = {
   AuthSession,
+  CalendarFeedRender,
   Alert,
   CalendarToken,
   NotificationSetting,
@@ -133,6 +135,8 @@ function associate() {
   RestrictionOverride.belongsTo(Athlete, { foreignKey: "athleteId", as: "athlete" });
   Team.hasMany(RestrictionOverride, { foreignKey: "teamId", as: "restrictionOverrides", ...cascade });
   RestrictionOverride.belongsTo(Team, { foreignKey: "teamId", as: "team" });
+
+  Athlete.hasOne(CalendarFeedRender, { foreignKey: "athleteId", as: "feedRender", ...cascade });
 
   // Sign-in sessions (migration 006).
   User.hasMany(AuthSession, { foreignKey: "userId", as: "sessions", ...cascade });

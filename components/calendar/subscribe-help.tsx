@@ -33,6 +33,9 @@ export function SubscribeHelp() {
         </ol>
       </details>
       <p className="text-xs text-ink-500">
+        The calendar holds your sessions from the last 8 weeks and every session ahead; older ones stay on this page.
+      </p>
+      <p className="text-xs text-ink-500">
         The link is personal: anyone who has it can see your sessions. If it got out, make a new one; the old link stops
         working at once.
       </p>

@@ -1,3 +1,4 @@
+import { DateTime } from "luxon";
 import {
   addSessionEvent,
   assertTimeZone,
@@ -11,6 +12,21 @@ import type { CalendarPerson, CalendarSession, CalendarTeam, SessionUrlFn } from
 /** Content-Type for serving a feed or attaching an .ics file. */
 export const ICS_CONTENT_TYPE = "text/calendar; charset=utf-8";
 
+/** How far back a served feed reaches; every session ahead is always in it. */
+export const FEED_WEEKS_BACK = 8;
+
+/**
+ * Bump when the rendered text changes for the same data (wording, properties): stored renders
+ * (lib/notices/feed.ts) carry it in their stamp, so old ones are not served after a deploy.
+ */
+export const FEED_FORMAT = 1;
+
+/** The first date (YYYY-MM-DD, the team's zone) a feed served at `now` shows: 8 weeks before today. */
+export function feedStartDate({ now, timeZone }: { now: Date; timeZone: string }): string {
+  const today = DateTime.fromJSDate(now).setZone(timeZone);
+  return (today.isValid ? today : DateTime.fromJSDate(now).toUTC()).minus({ weeks: FEED_WEEKS_BACK }).toISODate()!;
+}
+
 export interface AthleteFeedInput {
   team: CalendarTeam;
   athlete: Pick<CalendarPerson, "name">;
@@ -18,7 +34,11 @@ export interface AthleteFeedInput {
   sessions: readonly CalendarSession[];
   appUrl: string;
   sessionUrl?: SessionUrlFn;
+  /** Set when `sessions` are only those from `feedStartDate` on: the description says so. */
+  bounded?: boolean;
 }
+
+const BOUND_NOTE = `: the last ${FEED_WEEKS_BACK} weeks and everything ahead`;
 
 /** The athlete's subscribable .ics feed (no METHOD: a plain published calendar, RFC 5545 §3.7.2). */
 export function buildAthleteFeed(input: AthleteFeedInput): string {
@@ -26,7 +46,7 @@ export function buildAthleteFeed(input: AthleteFeedInput): string {
   const sessionUrl = input.sessionUrl ?? defaultSessionUrl(input.appUrl);
   const cal = newCalendar()
     .name(escapeText(`${input.athlete.name} · Sprintwright`))
-    .description(escapeText(`Training sessions from ${input.team.name}`))
+    .description(escapeText(`Training sessions from ${input.team.name}${input.bounded ? BOUND_NOTE : ""}`))
     // REFRESH-INTERVAL (RFC 7986 §5.7) and X-PUBLISHED-TTL: ask subscribers to re-fetch hourly.
     .ttl(60 * 60);
   for (const session of input.sessions) {

@@ -80,20 +80,19 @@ export async function revokeCalendarToken({ athleteId, now = new Date() }: { ath
   return count > 0;
 }
 
-export type AthleteFeedData = {
-  team: { name: string; timeZone: string };
+export type FeedHead = {
+  team: { id: number; name: string; timeZone: string };
   athlete: { id: number; name: string };
-  sessions: CalendarSession[];
 };
 
 // Feed readers poll often; a write per poll is wasteful, so the "last used" time is kept to the hour.
 const LAST_USED_GRANULARITY_MS = 60 * 60_000;
 
 /**
- * Everything the feed of a token shows: the athlete's published and cancelled sessions (never drafts),
- * or null for an unknown or revoked token. The token is the credential here, so it is looked up by hash only.
+ * Whose feed a token opens (the athlete and the team fields the feed shows), or null for an unknown or revoked
+ * token. The token is the credential here, so it is looked up by hash only.
  */
-export async function getFeedByToken({ token, now = new Date() }: { token: string; now?: Date }): Promise<AthleteFeedData | null> {
+export async function getFeedHead({ token, now = new Date() }: { token: string; now?: Date }): Promise<FeedHead | null> {
   const { CalendarToken, Athlete, Team } = await db();
   const row = await CalendarToken.findOne({
     where: { tokenHash: hashToken(token), revokedAt: null },
@@ -102,14 +101,13 @@ export async function getFeedByToken({ token, now = new Date() }: { token: strin
   if (!row) return null;
   const [athlete, team] = await Promise.all([
     Athlete.findOne({ where: { id: row.athleteId, teamId: row.teamId }, attributes: ["id", "name"] }),
-    Team.findByPk(row.teamId, { attributes: ["name", "timeZone"] }),
+    Team.findByPk(row.teamId, { attributes: ["id", "name", "timeZone"] }),
   ]);
   if (!athlete || !team) return null;
   if (!row.lastUsedAt || now.getTime() - row.lastUsedAt.getTime() > LAST_USED_GRANULARITY_MS) {
     await CalendarToken.update({ lastUsedAt: now }, { where: { id: row.id } });
   }
-  const sessions = await listAthleteSessions({ teamId: row.teamId, athleteId: athlete.id });
-  return { team: { name: team.name, timeZone: team.timeZone }, athlete: { id: athlete.id, name: athlete.name }, sessions };
+  return { team: { id: team.id, name: team.name, timeZone: team.timeZone }, athlete: { id: athlete.id, name: athlete.name } };
 }
 
 export type AthleteSession = CalendarSession & {
@@ -126,7 +124,7 @@ export type AthleteSession = CalendarSession & {
 
 /**
  * The sessions an athlete sees (published and cancelled, never drafts) with blocks in order and their log:
- * the calendar feed and the athlete's own training screen read the same list.
+ * the calendar feed and the athlete's own training screen read the same list. `from`/`to` bound the dates (inclusive).
  */
 export async function listAthleteSessions({
   teamId,
@@ -140,7 +138,7 @@ export async function listAthleteSessions({
   to?: string;
 }): Promise<AthleteSession[]> {
   const { PlannedSession, SessionBlock, SessionLog } = await db();
-  const range = from && to ? { date: { [Op.between]: [from, to] } } : {};
+  const range = from || to ? { date: { ...(from ? { [Op.gte]: from } : {}), ...(to ? { [Op.lte]: to } : {}) } } : {};
   const rows = await PlannedSession.findAll({
     where: { athleteId, teamId, status: { [Op.in]: ["published", "cancelled"] }, ...range },
     attributes: ["id", "date", "startTime", "durationMin", "title", "plannedRpe", "status", "sequence", "updatedAt", "notes"],

@@ -1,7 +1,7 @@
 // The athlete's feed through its real route handler: token → data → ical-generator → ical.js (an independent
 // parser) and the RFC 5545 wire rules. Another athlete's, a rotated or a revoked token gives nothing.
 import ICAL from "ical.js";
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { GET } from "@/app/api/calendar/[token]/route";
 import { getCalendarFeedStatus, revokeCalendarToken, rotateCalendarToken } from "@/lib/data/calendar-tokens";
 import { hashToken } from "@/lib/auth/tokens";
@@ -9,6 +9,10 @@ import { updateSession } from "@/lib/data/plan-sessions";
 import { updateSessionSchema } from "@/lib/validations/plan";
 import { createTestTeam } from "../helpers/fixtures";
 import { setupNotices } from "./notices-setup";
+
+// The feed shows 8 weeks back and everything ahead: these March sessions are ahead of the clock set here.
+vi.useFakeTimers({ toFake: ["Date"], shouldAdvanceTime: true });
+vi.setSystemTime(new Date("2026-03-25T12:00:00Z"));
 
 const { d } = await setupNotices();
 const team = await createTestTeam(d, { name: "Feed Club" });
