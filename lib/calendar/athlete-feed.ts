@@ -1,4 +1,5 @@
-import { DateTime } from "luxon";
+import { addDays } from "@/lib/dates/plain-date";
+import { teamToday } from "@/lib/dates/zoned";
 import {
   addSessionEvent,
   assertTimeZone,
@@ -23,8 +24,7 @@ export const FEED_FORMAT = 1;
 
 /** The first date (YYYY-MM-DD, the team's zone) a feed served at `now` shows: 8 weeks before today. */
 export function feedStartDate({ now, timeZone }: { now: Date; timeZone: string }): string {
-  const today = DateTime.fromJSDate(now).setZone(timeZone);
-  return (today.isValid ? today : DateTime.fromJSDate(now).toUTC()).minus({ weeks: FEED_WEEKS_BACK }).toISODate()!;
+  return addDays(teamToday({ timeZone, now }), -7 * FEED_WEEKS_BACK);
 }
 
 export interface AthleteFeedInput {
