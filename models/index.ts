@@ -10,6 +10,7 @@ import { BlockTemplate } from "./block-template";
 import { CalendarFeedRender } from "./calendar-feed-render";
 import { CalendarToken } from "./calendar-token";
 import { Invitation } from "./invitation";
+import { LoadLedgerDay } from "./load-ledger-day";
 import { Membership } from "./membership";
 import { NotificationSetting } from "./notification-setting";
 import { OutboxMessage } from "./outbox-message";
@@ -24,7 +25,7 @@ import { TrainingGroup } from "./training-group";
 import { User } from "./user";
 
 export { Alert, CalendarToken, NotificationSetting, OutboxMessage, Restriction, RestrictionOverride };
-export { AuthSession, CalendarFeedRender };
+export { AuthSession, CalendarFeedRender, LoadLedgerDay };
 export {
   Athlete,
   BlockTemplate,
@@ -51,6 +52,7 @@ const models = {
   Athlete,
   BlockTemplate,
   Invitation,
+  LoadLedgerDay,
   Membership,
   PlannedSession,
   SessionBlock,
@@ -137,6 +139,9 @@ function associate() {
   RestrictionOverride.belongsTo(Team, { foreignKey: "teamId", as: "team" });
 
   Athlete.hasOne(CalendarFeedRender, { foreignKey: "athleteId", as: "feedRender", ...cascade });
+
+  // Load ledger (migration 011).
+  Athlete.hasMany(LoadLedgerDay, { foreignKey: "athleteId", as: "ledger", ...cascade });
 
   // Sign-in sessions (migration 006).
   User.hasMany(AuthSession, { foreignKey: "userId", as: "sessions", ...cascade });

@@ -1,5 +1,5 @@
 import "server-only";
-import { QueryTypes, type Transaction } from "sequelize";
+import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
 import type {
   AthleteProfile,
   BlockInput,
@@ -44,7 +44,14 @@ export type LoadInputs = {
  * caller shows). Nothing is cut at the start, so the engine's one daily series per athlete × metric × view
  * begins on the athlete's first day on record whichever screen asks (lib/load/README.md §5).
  */
-type Through = { through: string; transaction?: Transaction };
+type Through = {
+  through: string;
+  /** Only sessions from this day on (the ledger's refresh); the readers that compute figures leave it out. */
+  from?: string;
+  transaction?: Transaction;
+  /** The database to read (a migration passes its own); default the app's. */
+  sequelize?: Sequelize;
+};
 
 /** The team's zone and ISO week start; 404 when the team does not exist. */
 export async function getTeamClock({ teamId, transaction }: { teamId: number; transaction?: Transaction }): Promise<TeamClock> {
@@ -108,7 +115,12 @@ type PackedBlock = [number, BlockKind, string, RunningPrescription | null, PlyoD
 // Each session's blocks come packed into one JSON text: the sqlite3 driver pays per value it hands over, and
 // this cut the squad read by about a quarter. The text is built only from integer ids, json_quote()d strings
 // and the JSON columns as Sequelize stored them, so it is always valid JSON.
-const SESSION_FILTER = "s.team_id = :teamId AND s.date <= :through AND (:everyone = 1 OR s.athlete_id IN (:athleteIds))";
+// Two filters, not one with "(:everyone = 1 OR athlete_id IN …)": SQLite cannot use the (athlete_id, date) index
+// through an OR, and reading one athlete then scanned the whole squad's history.
+const SESSION_FILTER = {
+  team: "s.team_id = :teamId AND s.date <= :through AND s.date >= :from",
+  athletes: "s.athlete_id IN (:athleteIds) AND s.team_id = :teamId AND s.date <= :through AND s.date >= :from",
+};
 const SQL = {
   team: `SELECT t.time_zone, t.week_start_day, ${SETTINGS_SQL_COLUMNS}
     FROM teams t LEFT JOIN team_load_settings s ON s.team_id = t.id WHERE t.id = :teamId`,
@@ -122,7 +134,7 @@ const SQL = {
       || coalesce(b.running, 'null') || ','
       || coalesce(b.drills, 'null') || ']', ',' ORDER BY b.position, b.id) || ']' FROM session_blocks b WHERE b.session_id = s.id) AS blocks
     FROM planned_sessions s LEFT JOIN session_logs l ON l.session_id = s.id
-    WHERE ${SESSION_FILTER} ORDER BY s.date, s.start_time, s.id`,
+    WHERE {filter} ORDER BY s.date, s.start_time, s.id`,
 };
 
 function toBlocks(packed: string | null): BlockInput[] {
@@ -136,23 +148,27 @@ export async function getLoadSeriesInputs({
   teamId,
   athleteIds,
   through,
+  from,
   transaction,
+  sequelize: given,
 }: Through & { teamId: number; athleteIds?: readonly number[] }): Promise<LoadInputs> {
-  const { sequelize } = await db();
+  const sequelize = given ?? (await db()).sequelize;
   // IN () is not SQL: an empty list becomes [0], which matches no row.
   const replacements = {
     teamId,
     everyone: athleteIds ? 0 : 1,
     athleteIds: athleteIds && athleteIds.length > 0 ? [...athleteIds] : [0],
     through,
+    from: from ?? "0000-01-01",
   };
   const select = <T extends object>(sql: string) =>
     sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements, transaction });
+  const sessionsSql = SQL.sessions.replace("{filter}", athleteIds ? SESSION_FILTER.athletes : SESSION_FILTER.team);
   // A constant three queries whatever the squad size: no query per athlete or per session.
   const [[team], athletes, sessions] = await Promise.all([
     select<TeamRow>(SQL.team),
     select<AthleteRow>(SQL.athletes),
-    select<SessionRow>(SQL.sessions),
+    select<SessionRow>(sessionsSql),
   ]);
   if (!team) throw new AppError("not_found", "Not found");
   const settings = toEngineSettings(team.settings_id === null ? null : team);

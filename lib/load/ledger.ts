@@ -12,7 +12,14 @@
 // The running state (days on record, EWMA, prefix sums) is that of the settled series, every day up to the row
 // taken as past. A read for today T uses the stored state up to T − 1 and steps the days from T on with the
 // today/ahead values (ledgerWindow), so a day rolling over never leaves a stale ledger behind.
-import { ACUTE_DAYS, ACWR_MIN_HISTORY_DAYS, allocAcwrColumns, CHRONIC_DAYS, ewmaLambda, type AcwrColumns } from "./acwr";
+import {
+  ACUTE_DAYS,
+  ACWR_MIN_HISTORY_DAYS,
+  allocAcwrColumns,
+  CHRONIC_DAYS,
+  ewmaLambda,
+  type AcwrColumns,
+} from "./acwr";
 import { resolveProfile, type ResolvedProfile } from "./accumulate";
 import { alignLogs, type AlignedLogs } from "./align-logs";
 import type { PackedSessions } from "./packed";
@@ -75,7 +82,14 @@ function zeros(): number[] {
   return new Array<number>(NM).fill(0);
 }
 
-const EMPTY_STATE: LedgerState = { onRecord: 0, kept: 0, cum: zeros(), acute: zeros(), chronic: zeros(), ratio: zeros().fill(Number.NaN) };
+const EMPTY_STATE: LedgerState = {
+  onRecord: 0,
+  kept: 0,
+  cum: zeros(),
+  acute: zeros(),
+  chronic: zeros(),
+  ratio: zeros().fill(Number.NaN),
+};
 
 export interface LedgerSource {
   sessions: readonly SessionInput[];
@@ -94,7 +108,8 @@ export function ledgerDayValues(src: LedgerSource, fromDay: number, toDay: numbe
   const logFor: AlignedLogs = src.packed?.logFor ?? alignLogs(src.sessions, src.logs);
   const sessionDays = src.packed ? src.packed.day : sessionDayNumbers(src.sessions);
   const columns = (view: LoadView, todayDay: number, o: { rp?: ResolvedProfile; noLogs?: boolean } = {}) => {
-    const packed = src.packed && o.noLogs ? { ...src.packed, hasLog: new Uint8Array(src.packed.day.length) } : src.packed;
+    const packed =
+      src.packed && o.noLogs ? { ...src.packed, hasLog: new Uint8Array(src.packed.day.length) } : src.packed;
     return buildDailyColumns({
       startDay: fromDay,
       length,
@@ -125,7 +140,10 @@ export function ledgerDayValues(src: LedgerSource, fromDay: number, toDay: numbe
     const pick = (c: typeof past) => METRICS.map((m) => c.values[m][i]);
     out[i] = {
       day: fromDay + i,
-      flags: (past.logged[i] ? LEDGER_LOGGED : 0) | (past.missing[i] ? LEDGER_MISSING : 0) | (aheadHas[i] ? LEDGER_AHEAD_HAS : 0),
+      flags:
+        (past.logged[i] ? LEDGER_LOGGED : 0) |
+        (past.missing[i] ? LEDGER_MISSING : 0) |
+        (aheadHas[i] ? LEDGER_AHEAD_HAS : 0),
       past: pick(past),
       today: pick(today),
       ahead: pick(ahead),
@@ -136,13 +154,18 @@ export function ledgerDayValues(src: LedgerSource, fromDay: number, toDay: numbe
 }
 
 /** The value set a day counts with and whether it is on record, for a read on `todayDay` in `view`. */
-export function dayAs(row: LedgerDayValues, todayDay: number, view: LoadView): { values: readonly number[]; has: boolean; missing: boolean; logged: boolean } {
+export function dayAs(
+  row: LedgerDayValues,
+  todayDay: number,
+  view: LoadView,
+): { values: readonly number[]; has: boolean; missing: boolean; logged: boolean } {
   const logged = (row.flags & LEDGER_LOGGED) !== 0;
   if (row.day < todayDay) {
     const missing = (row.flags & LEDGER_MISSING) !== 0;
     return { values: row.past, has: logged || missing, missing, logged };
   }
-  if (view === "projected") return { values: row.ahead, has: (row.flags & LEDGER_AHEAD_HAS) !== 0, missing: false, logged };
+  if (view === "projected")
+    return { values: row.ahead, has: (row.flags & LEDGER_AHEAD_HAS) !== 0, missing: false, logged };
   if (row.day === todayDay) return { values: row.today, has: logged, missing: false, logged };
   return { values: ZERO_VALUES, has: false, missing: false, logged: false };
 }
@@ -157,7 +180,11 @@ const LC = ewmaLambda(CHRONIC_DAYS);
  * the day has no state, i.e. lies before the first day on record). The same operations in the same order as
  * acwr.ts (acwrInto / acwrSkipping over the series from the first day on record), so the numbers are identical.
  */
-export function stepLedger(back: (k: number) => LedgerState | null, day: { values: readonly number[]; has: boolean; missing: boolean }, m: LedgerMethod): LedgerState {
+export function stepLedger(
+  back: (k: number) => LedgerState | null,
+  day: { values: readonly number[]; has: boolean; missing: boolean },
+  m: LedgerMethod,
+): LedgerState {
   const prev = back(1) ?? EMPTY_STATE;
   if (prev.onRecord === 0 && !day.has) return EMPTY_STATE;
   const i = prev.onRecord; // index of this day in the series from the first day on record
@@ -228,27 +255,47 @@ export function stepLedger(back: (k: number) => LedgerState | null, day: { value
 
 /**
  * Runs the series over consecutive days. `before` holds the states of the days just before days[0] (oldest first,
- * up to 28 of them; fewer when the athlete's record starts later). Each day counts as `use(day)` says.
+ * up to 28 of them; fewer when the athlete's record starts later). Each day counts as `countAs(day)` says.
  */
 export function runLedger<D extends { day: number }>(
   before: readonly LedgerState[],
   days: readonly D[],
-  use: (d: D) => { values: readonly number[]; has: boolean; missing: boolean },
+  countAs: (d: D) => { values: readonly number[]; has: boolean; missing: boolean },
   m: LedgerMethod,
 ): LedgerState[] {
   const states: LedgerState[] = [...before];
   const offset = before.length;
   for (let j = 0; j < days.length; j++) {
     const at = offset + j;
-    states.push(stepLedger((k) => states[at - k] ?? null, use(days[j]), m));
+    states.push(stepLedger((k) => states[at - k] ?? null, countAs(days[j]), m));
   }
   return states.slice(offset);
 }
 
 /** Ledger rows of [fromDay, toDay] from the day values, continuing from the stored states of the 28 days before. */
-export function recomputeLedger(values: readonly LedgerDayValues[], before: readonly LedgerState[], m: LedgerMethod): LedgerRow[] {
+export function recomputeLedger(
+  values: readonly LedgerDayValues[],
+  before: readonly LedgerState[],
+  m: LedgerMethod,
+): LedgerRow[] {
   const states = runLedger(before, values, (d) => dayAs(d, Number.POSITIVE_INFINITY, "projected"), m);
-  return values.map((v, j) => ({ ...v, ...states[j] }));
+  return values.map((v, j) => {
+    const s = states[j];
+    return {
+      day: v.day,
+      flags: v.flags,
+      past: v.past,
+      today: v.today,
+      ahead: v.ahead,
+      planned: v.planned,
+      onRecord: s.onRecord,
+      kept: s.kept,
+      cum: s.cum,
+      acute: s.acute,
+      chronic: s.chronic,
+      ratio: s.ratio,
+    };
+  });
 }
 
 /** An athlete's whole ledger from scratch: rows from the first to the last day holding a session. */
@@ -296,7 +343,13 @@ export function ledgerReadRange(fromDay: number, toDay: number, todayDay: number
   return { from: Math.min(fromDay, todayDay) - CHRONIC_DAYS, to: toDay };
 }
 
-const NO_SESSIONS: Omit<LedgerDayValues, "day"> = { flags: 0, past: zeros(), today: zeros(), ahead: zeros(), planned: zeros() };
+const NO_SESSIONS: Omit<LedgerDayValues, "day"> = {
+  flags: 0,
+  past: zeros(),
+  today: zeros(),
+  ahead: zeros(),
+  planned: zeros(),
+};
 
 /**
  * The window from stored rows: days before today keep their stored state; from today on (and across days with no
@@ -337,5 +390,15 @@ export function ledgerWindow(input: LedgerWindowInput): LedgerWindow {
     });
   }
   const firstDataIndex = last.onRecord > 0 ? toDay - last.onRecord + 1 - fromDay : null;
-  return { startDay: fromDay, length, values, logged, missing, firstDataIndex, acwr, provisional, firstDate: dateFromDayIndex(fromDay) };
+  return {
+    startDay: fromDay,
+    length,
+    values,
+    logged,
+    missing,
+    firstDataIndex,
+    acwr,
+    provisional,
+    firstDate: dateFromDayIndex(fromDay),
+  };
 }

@@ -2,10 +2,24 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { computeAthleteColumns } from "@/lib/load/athlete-load";
 import { addDays, dayIndex } from "@/lib/load/dates";
-import { buildLedger, ledgerDayValues, ledgerMethod, ledgerReadRange, ledgerWindow, recomputeLedger, type LedgerRow } from "@/lib/load/ledger";
+import {
+  buildLedger,
+  ledgerDayValues,
+  ledgerMethod,
+  ledgerReadRange,
+  ledgerWindow,
+  recomputeLedger,
+  type LedgerRow,
+} from "@/lib/load/ledger";
 import { packSessions } from "@/lib/load/packed";
 import { alignLogs } from "@/lib/load/series";
-import { ACWR_METHODS, DEFAULT_TEAM_LOAD_SETTINGS, METRICS, type LoadView, type TeamLoadSettings } from "@/lib/load/types";
+import {
+  ACWR_METHODS,
+  DEFAULT_TEAM_LOAD_SETTINGS,
+  METRICS,
+  type LoadView,
+  type TeamLoadSettings,
+} from "@/lib/load/types";
 import { synthAthlete } from "./synth";
 
 // The ledger is a cache of the engine's one series (lib/load/README.md §5, §12): reading a window from stored rows
@@ -19,7 +33,9 @@ function storedRowsFor(all: readonly LedgerRow[], fromDay: number, toDay: number
   const range = ledgerReadRange(fromDay, toDay, todayDay);
   const before = all.filter((r) => r.day < range.from);
   const last = before.length > 0 ? before[before.length - 1].day : null;
-  return all.filter((r) => (r.day >= range.from && r.day <= range.to) || (last !== null && r.day <= last && r.day > last - 28));
+  return all.filter(
+    (r) => (r.day >= range.from && r.day <= range.to) || (last !== null && r.day <= last && r.day > last - 28),
+  );
 }
 
 function same(a: number, b: number): boolean {
@@ -43,7 +59,11 @@ describe("load ledger", () => {
       fc.property(caseArb, (c) => {
         const today = addDays(START, c.today);
         const a = synthAthlete(c.seed, START, DAYS, addDays(START, DAYS));
-        const settings: TeamLoadSettings = { ...DEFAULT_TEAM_LOAD_SETTINGS, acwrMethod: c.method, missingLogs: c.missingLogs };
+        const settings: TeamLoadSettings = {
+          ...DEFAULT_TEAM_LOAD_SETTINGS,
+          acwrMethod: c.method,
+          missingLogs: c.missingLogs,
+        };
         const packed = c.packed ? packSessions(a.sessions, a.logs) : undefined;
         const rows = buildLedger({ sessions: a.sessions, logs: a.logs, profile: a.profile, settings, packed });
         const fromDay = dayIndex(START) + c.from;
@@ -76,7 +96,12 @@ describe("load ledger", () => {
           expect(win.logged[i]).toBe(cols.logged[i + off]);
           for (const m of METRICS) {
             const got = [win.values[m][i], win.acwr[m].acute[i], win.acwr[m].chronic[i], win.acwr[m].ratio[i]];
-            const want = [cols.values[m][i + off], cols.acwr[m].acute[i + off], cols.acwr[m].chronic[i + off], cols.acwr[m].ratio[i + off]];
+            const want = [
+              cols.values[m][i + off],
+              cols.acwr[m].acute[i + off],
+              cols.acwr[m].chronic[i + off],
+              cols.acwr[m].ratio[i + off],
+            ];
             got.forEach((g, j) => {
               if (!same(g, want[j])) expect({ m, i, j, g }).toEqual({ m, i, j, g: want[j] });
             });
@@ -89,18 +114,23 @@ describe("load ledger", () => {
 
   it("recomputing from a changed day onward gives the same rows as a rebuild from scratch", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 10_000 }), fc.integer({ min: 0, max: DAYS - 1 }), fc.constantFrom(...ACWR_METHODS), (seed, cut, method) => {
-        const a = synthAthlete(seed, START, DAYS, addDays(START, DAYS));
-        const settings = { ...DEFAULT_TEAM_LOAD_SETTINGS, acwrMethod: method };
-        const src = { sessions: a.sessions, logs: a.logs, profile: a.profile, settings };
-        const full = buildLedger(src);
-        if (full.length === 0) return;
-        const from = Math.max(full[0].day, dayIndex(START) + cut);
-        const last = full[full.length - 1].day;
-        const before = full.filter((r) => r.day < from && r.day >= from - 28);
-        const tail = recomputeLedger(ledgerDayValues(src, from, last), before, ledgerMethod(settings));
-        expect(tail).toEqual(full.filter((r) => r.day >= from));
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 10_000 }),
+        fc.integer({ min: 0, max: DAYS - 1 }),
+        fc.constantFrom(...ACWR_METHODS),
+        (seed, cut, method) => {
+          const a = synthAthlete(seed, START, DAYS, addDays(START, DAYS));
+          const settings = { ...DEFAULT_TEAM_LOAD_SETTINGS, acwrMethod: method };
+          const src = { sessions: a.sessions, logs: a.logs, profile: a.profile, settings };
+          const full = buildLedger(src);
+          if (full.length === 0) return;
+          const from = Math.max(full[0].day, dayIndex(START) + cut);
+          const last = full[full.length - 1].day;
+          const before = full.filter((r) => r.day < from && r.day >= from - 28);
+          const tail = recomputeLedger(ledgerDayValues(src, from, last), before, ledgerMethod(settings));
+          expect(tail).toEqual(full.filter((r) => r.day >= from));
+        },
+      ),
       { numRuns: 40 },
     );
   });
