@@ -3,7 +3,7 @@
 import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { dayIndex } from "../lib/load/dates";
+import { dayIndex } from "../lib/dates/plain-date";
 
 const ATHLETES = Number(process.env.BENCH_ATHLETES ?? 60);
 const SEASONS = Number(process.env.BENCH_SEASONS ?? 5);
@@ -16,10 +16,10 @@ async function main() {
   const { seedSquad } = await import("../lib/seed/seed-squad");
   const { rebuildLedger } = await import("../lib/data/ledger-rebuild");
   const { refreshLedger } = await import("../lib/data/ledger");
-  const { teamToday } = await import("../lib/data/load");
+  const { teamToday } = await import("../lib/dates/zoned");
   const d = await db();
   await createMigrator(d.sequelize).up();
-  const today = teamToday({ timeZone: "Europe/London" });
+  const today = teamToday({ timeZone: "Europe/London", now: new Date() });
   let t = performance.now();
   const squad = await seedSquad(d, { name: "Bench Harriers", athletes: ATHLETES, seasons: SEASONS, today });
   console.log(

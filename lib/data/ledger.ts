@@ -1,7 +1,7 @@
 import "server-only";
 import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
 import type { Database } from "sqlite3";
-import { dateFromDayIndex, dayIndex } from "@/lib/load/dates";
+import { dateFromDayIndex, dayIndex } from "@/lib/dates/plain-date";
 import { ledgerDayValues, ledgerMethod, recomputeLedger, type LedgerRow, type LedgerState } from "@/lib/load/ledger";
 import { packSessions } from "@/lib/load/packed";
 import { METRICS } from "@/lib/load/types";

@@ -23,7 +23,7 @@ import {
 import { resolveProfile, type ResolvedProfile } from "./accumulate";
 import { alignLogs, type AlignedLogs } from "./align-logs";
 import type { PackedSessions } from "./packed";
-import { dateFromDayIndex } from "./dates";
+import { dateFromDayIndex } from "@/lib/dates/plain-date";
 import { buildDailyColumns, metricColumns, sessionDayNumbers } from "./series";
 import {
   METRICS,

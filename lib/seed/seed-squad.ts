@@ -1,5 +1,5 @@
 import type { CreationAttributes } from "sequelize";
-import { addDays, startOfWeek } from "@/lib/load/dates";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { mulberry32 } from "@/lib/random";
 import type { Db, PlannedSession, SessionBlock, SessionLog } from "@/models";
 import { DEMO_TEMPLATES, type TemplateKey } from "./load-templates";

@@ -2,14 +2,14 @@
 // logs, profiles and team settings; a refresh takes the marks in; the stored rows always equal a full rebuild.
 import { QueryTypes } from "sequelize";
 import { describe, expect, it } from "vitest";
-import { teamToday } from "@/lib/data/load";
+import { teamToday } from "@/lib/dates/zoned";
 import { seedDemo } from "@/lib/seed";
 import { setupTestDb } from "../helpers/db";
 
 const d = await setupTestDb();
 const { ensureLedgerFresh, ledgerHasMarks, refreshLedger } = await import("@/lib/data/ledger");
 const { rebuildLedger } = await import("@/lib/data/ledger-rebuild");
-const today = teamToday({ timeZone: "Europe/London" });
+const today = teamToday({ timeZone: "Europe/London", now: new Date() });
 await seedDemo(d, { today });
 
 /** Every stored row as hex text, for comparing two ledgers exactly. */

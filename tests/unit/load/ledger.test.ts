@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { computeAthleteColumns } from "@/lib/load/athlete-load";
-import { addDays, dayIndex } from "@/lib/load/dates";
+import { addDays, dayIndex } from "@/lib/dates/plain-date";
 import {
   buildLedger,
   ledgerDayValues,
