@@ -91,7 +91,8 @@ describeBrowser("athlete journey", () => {
     // The feed reaches 8 weeks back (the demo's history reaches 10) and holds everything ahead.
     const from = addDays(teamToday({ timeZone: "Europe/London", now: new Date() }), -56);
     const stored = await app.query<{ id: number }>(
-      "SELECT id FROM planned_sessions WHERE athlete_id = ? AND status IN ('published','cancelled') AND date >= ? ORDER BY date, start_time, id",
+      "SELECT id FROM planned_sessions WHERE athlete_id = ? AND status IN ('published','cancelled') AND date >= ? " +
+        "ORDER BY date, start_time, id",
       [id, from],
     );
     expect(stored.length).toBeGreaterThan(0);
