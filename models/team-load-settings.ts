@@ -7,9 +7,13 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from "sequelize";
+import { DEFAULT_TEAM_LOAD_SETTINGS as DEFAULTS } from "@/lib/load/types";
 import type { Team } from "./team";
 
-/** Per-team thresholds the load engine reads; defaults and sources: lib/load/README.md. */
+/**
+ * Per-team thresholds the load engine reads. The defaults are DEFAULT_TEAM_LOAD_SETTINGS (lib/load/types.ts;
+ * sources: lib/load/README.md); migrations 002 and 009 wrote the same values as they stood then.
+ */
 export class TeamLoadSettings extends Model<
   InferAttributes<TeamLoadSettings>,
   InferCreationAttributes<TeamLoadSettings>
@@ -40,27 +44,27 @@ export class TeamLoadSettings extends Model<
     TeamLoadSettings.init(
       {
         id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-        hsrSpeedMs: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 5.5 },
-        nearMaxPct: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 90 },
-        acwrMethod: { type: DataTypes.STRING(20), allowNull: false, defaultValue: "ewma" },
-        acwrMetric: { type: DataTypes.STRING(20), allowNull: false, defaultValue: "srpe" },
-        spikeRatio: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 1.5 },
-        risingRatio: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 1.3 },
-        lowRatio: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 0.8 },
-        weeklyChangeLimitPct: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 15 },
-        recoveryHours: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 48 },
+        hsrSpeedMs: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULTS.hsrSpeedMs },
+        nearMaxPct: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULTS.nearMaxPct },
+        acwrMethod: { type: DataTypes.STRING(20), allowNull: false, defaultValue: DEFAULTS.acwrMethod },
+        acwrMetric: { type: DataTypes.STRING(20), allowNull: false, defaultValue: DEFAULTS.acwrMetric },
+        spikeRatio: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULTS.spikeRatio },
+        risingRatio: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULTS.risingRatio },
+        lowRatio: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULTS.lowRatio },
+        weeklyChangeLimitPct: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULTS.weeklyChangeLimitPct },
+        recoveryHours: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULTS.recoveryHours },
         // Migration 009: the sprint-specific model's team choices.
-        speedZones: { type: DataTypes.STRING(10), allowNull: false, defaultValue: "absolute" },
-        hsrPct: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 75 },
-        sprintSpeedMs: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 7 },
-        maximalPct: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 95 },
+        speedZones: { type: DataTypes.STRING(10), allowNull: false, defaultValue: DEFAULTS.speedZones },
+        hsrPct: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULTS.hsrPct },
+        sprintSpeedMs: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULTS.sprintSpeedMs },
+        maximalPct: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULTS.maximalPct },
         recoveryWork: {
           type: DataTypes.TEXT,
           allowNull: false,
-          defaultValue: '["max_velocity","max_acceleration","speed_endurance","high_plyo"]',
+          defaultValue: JSON.stringify(DEFAULTS.recoveryWork),
         },
-        missingLogs: { type: DataTypes.STRING(10), allowNull: false, defaultValue: "estimate" },
-        monotonyLimit: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 2 },
+        missingLogs: { type: DataTypes.STRING(10), allowNull: false, defaultValue: DEFAULTS.missingLogs },
+        monotonyLimit: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULTS.monotonyLimit },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

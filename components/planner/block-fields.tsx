@@ -3,7 +3,8 @@
 import { useEffect } from "react";
 import { get, useFieldArray, useFormContext, useWatch, type FieldErrors } from "react-hook-form";
 import { BLOCK_KIND_LABEL } from "@/lib/format/block-summary";
-import { BLOCK_KINDS, RUNNING_KINDS, type BlockKind, type PlyoDrill, type RunningPrescription } from "@/lib/load/types";
+import { RUNNING_KINDS } from "@/lib/load/block-kinds";
+import { BLOCK_KINDS, type BlockKind, type PlyoDrill, type RunningPrescription } from "@/lib/load/types";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 

@@ -1,10 +1,12 @@
 // The engine's hot path: one session's numbers summed into a reusable Float64Array, with no allocation
 // per block or session. Everything the loop touches lives in this one module on purpose (cross-module
 // constants and calls cost extra under CommonJS transpilation, e.g. tsx in scripts and tests).
+import { BLOCK_KIND_RULES, type BlockKindRules } from "./block-kinds";
 import { distanceToReach } from "./sprint-model";
 import {
   DEFAULT_STEP_LENGTH,
   DEFAULT_TAU,
+  DEFAULT_TEAM_LOAD_SETTINGS as DEFAULTS,
   DEFAULT_VMAX,
   type AthleteProfile,
   type BlockInput,
@@ -89,20 +91,18 @@ function positive(value: number | null | undefined, fallback: number): number {
   return typeof value === "number" && value > 0 && Number.isFinite(value) ? value : fallback;
 }
 
-const DEFAULT_RECOVERY_WORK = ["max_velocity", "max_acceleration", "speed_endurance", "high_plyo"];
-
 export function resolveProfile(profile: AthleteProfile, settings: TeamLoadSettings): ResolvedProfile {
   const vmax = positive(profile.vmax, DEFAULT_VMAX);
   const share = (pct: number | undefined, fallback: number) => (nonNeg(pct ?? fallback) / 100) * vmax;
-  const nearMaxSpeed = share(settings.nearMaxPct, 90);
+  const nearMaxSpeed = share(settings.nearMaxPct, DEFAULTS.nearMaxPct);
   const bandSpeeds = new Float64Array(BANDS);
   bandSpeeds[0] = nonNeg(settings.hsrSpeedMs);
-  bandSpeeds[1] = nonNeg(settings.sprintSpeedMs ?? 7);
-  bandSpeeds[2] = share(settings.hsrPct, 75);
+  bandSpeeds[1] = nonNeg(settings.sprintSpeedMs ?? DEFAULTS.sprintSpeedMs);
+  bandSpeeds[2] = share(settings.hsrPct, DEFAULTS.hsrPct);
   bandSpeeds[3] = nearMaxSpeed;
-  bandSpeeds[4] = share(settings.maximalPct, 95);
+  bandSpeeds[4] = share(settings.maximalPct, DEFAULTS.maximalPct);
   const hsrBand = settings.speedZones === "relative" ? 2 : BAND_ABS_HSR;
-  const work: readonly string[] = settings.recoveryWork ?? DEFAULT_RECOVERY_WORK;
+  const work: readonly string[] = settings.recoveryWork ?? DEFAULTS.recoveryWork;
   return {
     vmax,
     tau: positive(profile.tau, DEFAULT_TAU),
@@ -116,7 +116,7 @@ export function resolveProfile(profile: AthleteProfile, settings: TeamLoadSettin
     hiMaxAcceleration: work.includes("max_acceleration"),
     hiSpeedEndurance: work.includes("speed_endurance"),
     hiPlyo: work.includes("high_plyo"),
-    maximalPct: nonNeg(settings.maximalPct ?? 95),
+    maximalPct: nonNeg(settings.maximalPct ?? DEFAULTS.maximalPct),
     estimateMissing: settings.missingLogs !== "exclude",
     reach: null,
   };
@@ -157,17 +157,19 @@ export function buildUpReach(allOut: number, runIn: number, speed: number, targe
   return gentle > allOut ? gentle : allOut;
 }
 
-function isRunningKind(kind: BlockInput["kind"]): boolean {
-  return kind === "acceleration" || kind === "max_velocity" || kind === "speed_endurance" || kind === "tempo";
-}
+// A module-local binding of the one rule table: reading it through the import would go through the module's
+// export getter on every block under CommonJS transpilation.
+const RULES: Readonly<Record<string, BlockKindRules | undefined>> = BLOCK_KIND_RULES;
 
 /** Reps a block prescribes: sets×reps for running, total reps across drills for plyometrics. */
 export function prescribedReps(block: BlockInput): number {
-  if (isRunningKind(block.kind)) {
+  const rules = RULES[block.kind];
+  if (rules === undefined) return 0;
+  if (rules.carries === "running") {
     const r = block.running;
     return r ? nonNeg(r.sets) * nonNeg(r.reps) : 0;
   }
-  if (block.kind === "plyometric" && block.drills) {
+  if (rules.carries === "drills" && block.drills) {
     let total = 0;
     for (const d of block.drills) total += nonNeg(d.sets) * nonNeg(d.reps);
     return total;
@@ -179,10 +181,10 @@ export function prescribedReps(block: BlockInput): number {
  * Adds `scale` × the block's prescription into `acc`. Each rep is run from rest approaching pct% of vmax
  * (τ by start type, BLOCKS_TAU_FACTOR); a flying rep's run-in is a build-up (buildUpReach) counted in running
  * and band metres but not in sprint metres; metres at or above a threshold are the metres after reaching it
- * (sprint-model.ts). Recovery: max-velocity blocks, accelerations at ≥ maximalPct, speed-endurance blocks and
- * high plyometrics make the session high-intensity, each as the team chose (recoveryWork). Running data counts
- * only on running kinds and drills only on plyometric blocks, so form state left over from a kind change never
- * leaks into the numbers.
+ * (sprint-model.ts). What each kind counts as (running, sprint metres, contacts, the recovery work that makes a
+ * session high-intensity, each as the team chose in recoveryWork) is BLOCK_KIND_RULES (block-kinds.ts). Running
+ * data counts only on running kinds and drills only on drill kinds, so form state left over from a kind change
+ * never leaks into the numbers.
  */
 export function addBlockInto(acc: Float64Array, block: BlockInput, rp: ResolvedProfile, scale: number): void {
   acc[SLOT_SCALE] = scale;
@@ -193,8 +195,9 @@ export function addBlockInto(acc: Float64Array, block: BlockInput, rp: ResolvedP
 function addScaledBlock(acc: Float64Array, block: BlockInput, rp: ResolvedProfile): void {
   const scale = acc[SLOT_SCALE];
   if (!(scale > 0)) return;
-  const kind = block.kind;
-  if (isRunningKind(kind)) {
+  const rules = RULES[block.kind];
+  if (rules === undefined) return;
+  if (rules.carries === "running") {
     const r = block.running;
     if (!r) return;
     const reps = nonNeg(r.sets) * nonNeg(r.reps) * scale;
@@ -219,28 +222,29 @@ function addScaledBlock(acc: Float64Array, block: BlockInput, rp: ResolvedProfil
       acc[SLOT_HSR] = acc[SLOT_ABS_HSR + rp.hsrBand];
       acc[SLOT_NEAR_MAX] = acc[SLOT_ABS_HSR + BAND_NEAR];
     }
-    if (kind !== "tempo") {
+    if (rules.sprintMetres) {
       // The run-in is a build-up, not sprinting: sprint metres and steps count the timed distance.
       acc[SLOT_SPRINT] += distance * reps;
       acc[SLOT_STEPS] += (distance * reps) / rp.stepLengthM;
     }
     if (pct > acc[SLOT_MAX_PCT]) acc[SLOT_MAX_PCT] = pct;
+    const work = rules.recoveryWork;
     if (
-      (kind === "max_velocity" && rp.hiMaxVelocity) ||
-      (kind === "acceleration" && rp.hiMaxAcceleration && pct >= rp.maximalPct - 1e-9) ||
-      (kind === "speed_endurance" && rp.hiSpeedEndurance)
+      (work === "max_velocity" && rp.hiMaxVelocity) ||
+      (work === "max_acceleration" && rp.hiMaxAcceleration && pct >= rp.maximalPct - 1e-9) ||
+      (work === "speed_endurance" && rp.hiSpeedEndurance)
     )
       acc[SLOT_HIGH_INTENSITY] = 1;
     return;
   }
-  if (kind !== "plyometric" || !block.drills) return;
+  if (rules.carries !== "drills" || !block.drills) return;
   for (const d of block.drills) {
     // NSCA (Potach & Chu): one contact per landing of one foot or both feet together.
     const contacts = nonNeg(d.sets) * nonNeg(d.reps) * nonNeg(d.contactsPerRep) * scale;
     if (contacts === 0) continue;
     if (d.intensity === "high") {
       acc[SLOT_HIGH] += contacts;
-      if (rp.hiPlyo) acc[SLOT_HIGH_INTENSITY] = 1;
+      if (rules.recoveryWork === "high_plyo" && rp.hiPlyo) acc[SLOT_HIGH_INTENSITY] = 1;
     } else if (d.intensity === "moderate") acc[SLOT_MODERATE] += contacts;
     else acc[SLOT_LOW] += contacts;
   }

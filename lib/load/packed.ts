@@ -4,6 +4,7 @@
 // arithmetic). The numbers are the prescription and the log as stored; all the load maths stays in the
 // engine (sumPackedSession), with the same operations in the same order as evaluateSessionInto, so both
 // paths give identical numbers (tests/unit/load/packed.test.ts checks it on an invented squad).
+import { blockKindRules } from "./block-kinds";
 import { BAND_NEAR, buildUpReach, memoOf, nonNeg, reachCell, srpe, type ResolvedProfile } from "./accumulate";
 import { dayIndex } from "@/lib/dates/plain-date";
 import { alignLogs, type AlignedLogs } from "./align-logs";
@@ -14,11 +15,11 @@ export const PACKED_CANCELLED = STATUS.cancelled;
 /** Status code → status, indexed by the codes above. */
 export const PACKED_STATUS: readonly SessionInput["status"][] = ["draft", "published", "cancelled"];
 
-/** Block kinds as the daily sums see them. */
+/** Block kinds as the daily sums see them, coded from BLOCK_KIND_RULES (block-kinds.ts) when packing. */
 const K_NONE = 0;
-const K_SPRINT = 1; // acceleration, max velocity, speed endurance: sprint metres and steps
-const K_TEMPO = 2; // running metres but not sprint metres
-const K_PLYO = 3;
+const K_SPRINT = 1; // running with sprint metres and steps (acceleration, max velocity, speed endurance)
+const K_TEMPO = 2; // running metres but not sprint metres (tempo)
+const K_PLYO = 3; // ground contacts from drills (plyometric)
 
 /** Log completion: 0 = no log; else the share of the prescription (yes 1, partly 0.5, no 0) in logFactor. */
 export interface PackedSessions {
@@ -56,18 +57,10 @@ export interface PackedSessions {
 }
 
 function kindCode(b: BlockInput): number {
-  switch (b.kind) {
-    case "acceleration":
-    case "max_velocity":
-    case "speed_endurance":
-      return b.running ? K_SPRINT : K_NONE;
-    case "tempo":
-      return b.running ? K_TEMPO : K_NONE;
-    case "plyometric":
-      return b.drills ? K_PLYO : K_NONE;
-    default:
-      return K_NONE;
-  }
+  const rules = blockKindRules(b.kind);
+  if (rules?.carries === "running") return b.running ? (rules.sprintMetres ? K_SPRINT : K_TEMPO) : K_NONE;
+  if (rules?.carries === "drills") return b.drills ? K_PLYO : K_NONE;
+  return K_NONE;
 }
 
 /** Packs sessions (and their logs) into columns; `logs` may come in any order (alignLogs pairs them). */
@@ -78,7 +71,7 @@ export function packSessions(sessions: readonly SessionInput[], logs: readonly L
   let nd = 0;
   for (const s of sessions) {
     nb += s.blocks.length;
-    for (const b of s.blocks) if (b.kind === "plyometric" && b.drills) nd += b.drills.length;
+    for (const b of s.blocks) if (kindCode(b) === K_PLYO && b.drills) nd += b.drills.length;
   }
   const p: PackedSessions = {
     sessions,

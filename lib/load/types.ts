@@ -14,11 +14,7 @@ export const BLOCK_KINDS: readonly BlockKind[] = [
   "recovery",
 ];
 
-/** Blocks whose `running` prescription produces running metres. */
-export const RUNNING_KINDS: readonly BlockKind[] = ["acceleration", "max_velocity", "speed_endurance", "tempo"];
-
-/** Running kinds whose metres count as sprint metres; tempo is deliberately excluded (sub-maximal work). */
-export const SPRINT_KINDS: readonly BlockKind[] = ["acceleration", "max_velocity", "speed_endurance"];
+// What each kind counts as (running, sprint metres, contacts, recovery): lib/load/block-kinds.ts.
 
 export type StartType = "standing" | "crouch" | "blocks" | "flying";
 export type PlyoIntensity = "low" | "moderate" | "high";

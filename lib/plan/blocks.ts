@@ -1,4 +1,5 @@
-import { RUNNING_KINDS, type BlockInput, type LogInput, type SessionInput } from "@/lib/load/types";
+import { DRILL_KINDS, RUNNING_KINDS } from "@/lib/load/block-kinds";
+import type { BlockInput, LogInput, SessionInput } from "@/lib/load/types";
 import type { BlockBody } from "@/lib/validations/template";
 import type { PlanBlock, PlanSession, PlanTemplate } from "./types";
 
@@ -14,7 +15,7 @@ export function normaliseBlock<T extends BlockContent>(block: T): T {
     RUNNING_KINDS.includes(block.kind) && block.running
       ? { ...block.running, runInM: block.running.start === "flying" ? block.running.runInM : 0 }
       : null;
-  const drills = block.kind === "plyometric" && block.drills && block.drills.length > 0 ? block.drills : null;
+  const drills = DRILL_KINDS.includes(block.kind) && block.drills && block.drills.length > 0 ? block.drills : null;
   const notes = block.notes?.trim() ? block.notes.trim() : null;
   return { ...block, running, drills, notes };
 }

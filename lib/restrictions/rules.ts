@@ -2,7 +2,8 @@
 // (before a write) run. Pure and isomorphic: no database, no clock, no React.
 import { addDays, formatDayLabel } from "@/lib/dates/plain-date";
 import { drillContacts } from "@/lib/load/plyo";
-import { RUNNING_KINDS, type BlockInput, type BlockKind } from "@/lib/load/types";
+import { DRILL_KINDS, RUNNING_KINDS } from "@/lib/load/block-kinds";
+import type { BlockInput, BlockKind } from "@/lib/load/types";
 import { BLOCK_KIND_LABEL } from "@/lib/format/block-summary";
 import { formatNumber } from "@/lib/format/number";
 
@@ -107,7 +108,7 @@ export function describeRestriction(r: Restriction): string {
 }
 
 function contactsOf(block: BlockInput): number {
-  if (block.kind !== "plyometric" || !block.drills) return 0;
+  if (!DRILL_KINDS.includes(block.kind) || !block.drills) return 0;
   return drillContacts(block.drills);
 }
 

@@ -1,11 +1,12 @@
 import { z } from "zod";
 import { noteText } from "./text";
-import { BLOCK_KINDS, RUNNING_KINDS, type BlockKind } from "@/lib/load/types";
+import { DRILL_KINDS, RUNNING_KINDS } from "@/lib/load/block-kinds";
+import { BLOCK_KINDS, type BlockKind } from "@/lib/load/types";
 import { idSchema, localDateSchema } from "./plan";
 
 /** Kinds a physio can leave out: the running kinds and plyometrics (strength and recovery are not checked). */
 export const RESTRICTABLE_KINDS: readonly BlockKind[] = BLOCK_KINDS.filter(
-  (k) => RUNNING_KINDS.includes(k) || k === "plyometric",
+  (k) => RUNNING_KINDS.includes(k) || DRILL_KINDS.includes(k),
 );
 
 export const athleteParamsSchema = z.object({ athleteId: idSchema });

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { lineText, noteText } from "./text";
-import { BLOCK_KINDS, RUNNING_KINDS } from "@/lib/load/types";
+import { DRILL_KINDS, RUNNING_KINDS } from "@/lib/load/block-kinds";
+import { BLOCK_KINDS } from "@/lib/load/types";
 
 // One schema per input, parsed by the handlers and used by the template editor through zodResolver.
 // Ranges are wide enough for any sprint group and narrow enough to catch a typo (300 reps, 950%).
@@ -67,7 +68,7 @@ function requirePrescription(b: BlockShape, ctx: z.RefinementCtx) {
   if (RUNNING_KINDS.includes(b.kind) && !b.running) {
     ctx.addIssue({ code: "custom", path: ["running"], message: "A running block needs sets, reps and a distance" });
   }
-  if (b.kind === "plyometric" && !(b.drills && b.drills.length > 0)) {
+  if (DRILL_KINDS.includes(b.kind) && !(b.drills && b.drills.length > 0)) {
     ctx.addIssue({ code: "custom", path: ["drills"], message: "Add at least one drill" });
   }
 }
