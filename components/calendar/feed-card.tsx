@@ -4,8 +4,7 @@ import { useState } from "react";
 import { Button, buttonClass } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { inputClass } from "@/components/ui/field";
-import { sendJson } from "@/components/notices/fetch-json";
-import { noticeKeys } from "@/components/notices/swr-keys";
+import { noticeApi } from "@/lib/client/api";
 import type { CalendarFeedStatus } from "@/lib/data/calendar-tokens";
 import { SubscribeHelp } from "./subscribe-help";
 
@@ -27,12 +26,11 @@ export function FeedCard({ athleteId, initial }: { athleteId: number; initial: C
   const [confirm, setConfirm] = useState<"rotate" | "revoke" | null>(null);
   const [busy, setBusy] = useState(false);
   const [input, setInput] = useState<HTMLInputElement | null>(null);
-  const url = noticeKeys.calendarToken(athleteId);
 
   async function run(kind: "rotate" | "revoke") {
     setBusy(true);
     try {
-      const next = await sendJson<CalendarFeedStatus>(url, kind === "rotate" ? "POST" : "DELETE");
+      const next = await (kind === "rotate" ? noticeApi.newCalendarLink : noticeApi.stopCalendarLink)(athleteId);
       setFeed(next);
       setMessage(
         kind === "rotate"

@@ -6,6 +6,8 @@ import { useState } from "react";
 import useSWR from "swr";
 import { Card } from "@/components/ui/card";
 import { LoadCaution } from "@/components/ui/caution";
+import { fetchJson } from "@/lib/client/fetcher";
+import { loadKeys } from "@/lib/client/keys";
 import { Select } from "@/components/ui/field";
 import type { AthleteLoadDto } from "@/lib/data/load-views";
 import { addDays } from "@/lib/dates/plain-date";
@@ -15,7 +17,6 @@ import { FlagList } from "./flag-list";
 import { LoadChart } from "./load-chart";
 import { RatioChart } from "./ratio-chart";
 import { Segmented } from "./segmented";
-import { fetchJson, loadKeys } from "./swr-keys";
 import { WeekTotals } from "./week-totals";
 
 const RANGES = [4, 8, 12, 26] as const;

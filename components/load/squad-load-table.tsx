@@ -10,6 +10,8 @@ import {
   type ColumnVisibilityState,
 } from "@tanstack/react-table";
 import { LoadCaution } from "@/components/ui/caution";
+import { fetchJson } from "@/lib/client/fetcher";
+import { loadKeys } from "@/lib/client/keys";
 import { Card, EmptyState } from "@/components/ui/card";
 import type { SquadWeekDto } from "@/lib/data/load-views";
 import type { LoadView } from "@/lib/load/types";
@@ -17,7 +19,6 @@ import { METRIC_INFO } from "@/lib/load/types";
 import { COLUMN_HINTS, NUMERIC_COLUMNS, squadColumns, squadFeatures, type SquadRow } from "./squad-load-columns";
 import { Segmented } from "./segmented";
 import { SquadToolbar } from "./squad-toolbar";
-import { fetchJson, loadKeys } from "./swr-keys";
 import { WeekNav } from "./week-nav";
 
 const NO_ROWS: SquadRow[] = [];

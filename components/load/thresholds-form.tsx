@@ -2,17 +2,19 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState, type ReactNode } from "react";
-import { useForm, useWatch } from "react-hook-form";
+import { useForm, useWatch, type FieldPath } from "react-hook-form";
 import { mutate } from "swr";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
+import { loadApi } from "@/lib/client/api";
+import { applyServerErrors } from "@/lib/client/form-errors";
+import { loadKeys } from "@/lib/client/keys";
 import { METRIC_INFO, METRICS, RECOVERY_WORK, type RecoveryWork, type TeamLoadSettings } from "@/lib/load/types";
 import {
   teamSettingsSchema,
   type TeamSettingsFormValues,
   type TeamSettingsInput,
 } from "@/lib/validations/team-settings";
-import { FetchError, fetchJson, loadKeys } from "./swr-keys";
 
 const METHODS: [TeamLoadSettings["acwrMethod"], string, string][] = [
   ["ewma", "EWMA (default)", "Exponentially weighted, 7 and 28 days (Williams et al. 2017)."],
@@ -170,20 +172,13 @@ export function ThresholdsForm({ teamId, initial }: { teamId: number; initial: T
   const onSubmit = handleSubmit(async (values) => {
     setMessage(undefined);
     try {
-      const { settings } = await fetchJson<{ settings: TeamLoadSettings }>(loadKeys.teamSettings(teamId), {
-        method: "PATCH",
-        body: JSON.stringify(values),
-      });
+      const { settings } = await loadApi.saveSettings(teamId, values);
       reset(settings);
       // Every load answer depends on these thresholds.
-      await mutate((key) => typeof key === "string" && key.includes("/load"), undefined, { revalidate: true });
+      await mutate(loadKeys.isLoad, undefined, { revalidate: true });
       setMessage({ tone: "ok", text: "Saved. Flags and ratios now use these thresholds." });
     } catch (err) {
-      if (err instanceof FetchError && err.fields) {
-        for (const [field, messages] of Object.entries(err.fields)) {
-          if (field in initial) setError(field as keyof TeamSettingsInput, { message: messages[0] });
-        }
-      }
+      applyServerErrors({ setError }, err, Object.keys(initial) as FieldPath<TeamSettingsFormValues>[]);
       setMessage({ tone: "error", text: err instanceof Error ? err.message : "Could not save" });
     }
   });

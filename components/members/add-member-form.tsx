@@ -7,6 +7,7 @@ import { addMemberAction } from "@/app/(workspace)/members/actions";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
 import { ROLES, ROLE_LABEL } from "@/lib/auth/roles";
+import { applyServerErrors } from "@/lib/client/form-errors";
 import { addMemberSchema, type AddMemberFormValues, type AddMemberInput } from "@/lib/validations/members";
 
 export function AddMemberForm({ unlinkedAthletes }: { unlinkedAthletes: { id: number; name: string }[] }) {
@@ -25,10 +26,7 @@ export function AddMemberForm({ unlinkedAthletes }: { unlinkedAthletes: { id: nu
     setMessage(undefined);
     const result = await addMemberAction({ ...values, athleteId: values.athleteId || undefined });
     if (!result.ok) {
-      for (const [field, messages] of Object.entries(result.fields ?? {})) {
-        if (field === "name" || field === "email" || field === "role" || field === "athleteId")
-          setError(field, { message: messages[0] });
-      }
+      applyServerErrors({ setError }, result, ["name", "email", "role", "athleteId"]);
       setMessage({ tone: "error", text: result.message });
       return;
     }

@@ -5,8 +5,10 @@ import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field, Textarea } from "@/components/ui/field";
 import { alertActionSchema, type AlertActionFormValues, type AlertActionInput } from "@/lib/validations/alerts";
+import { noticeApi } from "@/lib/client/api";
+import { ApiError } from "@/lib/client/fetcher";
+import { applyServerErrors } from "@/lib/client/form-errors";
 import type { AlertRow } from "@/lib/data/alerts";
-import { ApiError, sendJson } from "./fetch-json";
 
 type Action = AlertActionInput["action"];
 
@@ -31,11 +33,12 @@ export function AlertActionForm({
   const id = `alert-${alert.id}-note`;
   const submit = handleSubmit(async (values) => {
     try {
-      const { alert: updated } = await sendJson<{ alert: AlertRow }>(`/api/alerts/${alert.id}`, "PATCH", values);
+      const { alert: updated } = await noticeApi.act(alert.id, values);
       onDone(updated);
     } catch (err) {
-      const message = err instanceof ApiError ? (err.fields.note?.[0] ?? err.message) : "Could not save; try again";
-      setError("note", { message });
+      // The note is the form's only field: a refusal without a message for it is still shown under it.
+      if (!applyServerErrors({ setError }, err, ["note"]))
+        setError("note", { message: err instanceof ApiError ? err.message : "Could not save; try again" });
     }
   });
   return (

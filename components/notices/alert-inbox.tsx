@@ -5,11 +5,12 @@ import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState } from "react";
 import useSWR, { useSWRConfig } from "swr";
 import { EmptyState } from "@/components/ui/card";
+import { noticeApi } from "@/lib/client/api";
+import { fetchJson } from "@/lib/client/fetcher";
+import { noticeKeys } from "@/lib/client/keys";
 import type { AlertRow } from "@/lib/data/alerts";
 import type { AlertListQuery } from "@/lib/validations/alerts";
 import { AlertCard } from "./alert-card";
-import { fetchJson, sendJson } from "./fetch-json";
-import { noticeKeys } from "./swr-keys";
 
 type Filter = AlertListQuery["status"];
 const FILTERS: Array<{ value: Filter; label: string }> = [
@@ -43,7 +44,7 @@ export function AlertInbox({ canManage }: { canManage: boolean }) {
   useEffect(() => {
     if (!data || marked.current) return;
     marked.current = true;
-    if (data.unread > 0) void sendJson("/api/alerts/seen", "POST").then(() => router.refresh());
+    if (data.unread > 0) void noticeApi.markSeen().then(() => router.refresh());
   }, [data, router]);
 
   const onChange = (updated: AlertRow) => {

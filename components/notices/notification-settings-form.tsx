@@ -3,10 +3,11 @@
 import { useState } from "react";
 import useSWR from "swr";
 import { Card } from "@/components/ui/card";
+import { noticeApi } from "@/lib/client/api";
+import { fetchJson } from "@/lib/client/fetcher";
+import { noticeKeys } from "@/lib/client/keys";
 import type { NotificationSettingsView } from "@/lib/data/notification-settings";
 import { ALERT_EMAIL_CHOICES, notificationSettingsSchema } from "@/lib/validations/notifications";
-import { fetchJson, sendJson } from "./fetch-json";
-import { noticeKeys } from "./swr-keys";
 
 const CHOICE_TEXT: Record<(typeof ALERT_EMAIL_CHOICES)[number], { label: string; hint: string }> = {
   each: { label: "Each alert", hint: "An e-mail as soon as a plan change or a log raises a new flag." },
@@ -24,7 +25,7 @@ export function NotificationSettingsForm() {
     if (!parsed.success) return setStatus(parsed.error.issues[0]?.message ?? "Invalid choice");
     setStatus("Saving…");
     try {
-      await mutate(sendJson<NotificationSettingsView>(noticeKeys.notificationSettings, "PUT", parsed.data), {
+      await mutate(noticeApi.saveSettings(parsed.data), {
         optimisticData: { alertEmail: parsed.data.alertEmail, isDefault: false },
         rollbackOnError: true,
       });

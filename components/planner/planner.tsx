@@ -5,13 +5,13 @@ import { clsx } from "clsx";
 import { useCallback, useEffect, useMemo, useState, useSyncExternalStore } from "react";
 import useSWR from "swr";
 import { LoadCaution } from "@/components/ui/caution";
+import { fetchJson } from "@/lib/client/fetcher";
+import { planKeys } from "@/lib/client/keys";
 import { findSession, type PlanChange } from "@/lib/plan/drop";
-import { planWeekKey } from "@/lib/plan/keys";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
 import { typicalProfile } from "@/lib/plan/typical";
 import type { PlanSession, PlanTemplate, PlanWeek } from "@/lib/plan/types";
 import { startOfWeek } from "@/lib/dates/plain-date";
-import { fetchWeek } from "./api";
 import { BlockShelf } from "./block-shelf";
 import { ConfirmProvider, removeQuestion, useConfirm } from "./confirm";
 import { describeChange } from "./describe";
@@ -55,14 +55,14 @@ export function Planner(props: PlannerProps) {
 
 function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
   const [weekStart, setWeekStart] = useState(initialWeek);
-  const key = planWeekKey(teamId, weekStart);
+  const key = planKeys.week(teamId, weekStart);
   const seeded = initial !== null && initial.weekStart === weekStart;
   const {
     data: week,
     error,
     isLoading,
     isValidating,
-  } = useSWR<PlanWeek>(key, fetchWeek, {
+  } = useSWR<PlanWeek>(key, fetchJson<PlanWeek>, {
     fallbackData: seeded ? initial : undefined,
     revalidateOnMount: !seeded,
     revalidateOnFocus: false,

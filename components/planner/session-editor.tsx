@@ -2,7 +2,10 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { FormProvider, useFieldArray, useForm, useWatch, type Path } from "react-hook-form";
+import { FormProvider, useFieldArray, useForm, useWatch } from "react-hook-form";
+import { currentOf } from "@/lib/client/api";
+import { ApiError } from "@/lib/client/fetcher";
+import { applyServerErrors } from "@/lib/client/form-errors";
 import { BLOCK_KIND_LABEL, blockDescription, blockSummary } from "@/lib/format/block-summary";
 import { formatDayLong } from "@/lib/format/dates";
 import { formatMinutes } from "@/lib/format/duration";
@@ -11,7 +14,6 @@ import type { PlanSession, PlanTemplate } from "@/lib/plan/types";
 import { sessionEditSchema, type SessionEditValues } from "@/lib/validations/plan";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
-import { PlanApiError } from "./api";
 import { BlockFields } from "./block-fields";
 import { removeQuestion, useConfirm } from "./confirm";
 import { Dialog } from "./dialog";
@@ -97,18 +99,17 @@ function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { s
   const [addFrom, setAddFrom] = useState<string>("");
 
   const handleError = (e: unknown) => {
-    if (e instanceof PlanApiError && e.stale && e.current) {
-      setVersion(e.current.version);
+    const current = e instanceof ApiError && e.stale ? currentOf(e) : null;
+    if (current) {
+      setVersion(current.version);
       setNotice(
-        `This session was changed by someone else while you were editing ` +
-          `(it is now "${e.current.title}" at ${e.current.startTime}, ${e.current.blocks.length} blocks). ` +
-          `Save again to replace it with what you see here, or close to keep their version.`,
+        "This session was changed by someone else while you were editing " +
+          `(it is now "${current.title}" at ${current.startTime}, ${current.blocks.length} blocks). ` +
+          "Save again to replace it with what you see here, or close to keep their version.",
       );
       return;
     }
-    if (e instanceof PlanApiError)
-      for (const [field, m] of Object.entries(e.fields))
-        form.setError(field as Path<SessionEditValues>, { message: m[0] });
+    applyServerErrors(form, e);
     setNotice(e instanceof Error ? e.message : "Could not save the session");
   };
   const submit = form.handleSubmit(async (values) => {

@@ -2,13 +2,13 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { FormProvider, useForm, type Path } from "react-hook-form";
+import { FormProvider, useForm } from "react-hook-form";
 import type { AthleteProfile, TeamLoadSettings } from "@/lib/load/types";
 import type { PlanTemplate } from "@/lib/plan/types";
+import { applyServerErrors } from "@/lib/client/form-errors";
 import { templateSchema, type TemplateInput } from "@/lib/validations/template";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
-import { PlanApiError } from "./api";
 import { BlockFields } from "./block-fields";
 import { BlockLoadPreview } from "./block-preview";
 import { useConfirm } from "./confirm";
@@ -72,10 +72,7 @@ function TemplateForm({ template, onClose, onSave, onDelete, profile, settings }
       await onSave(values, template);
       onClose();
     } catch (e) {
-      if (e instanceof PlanApiError) {
-        for (const [field, messages] of Object.entries(e.fields))
-          form.setError(field as Path<TemplateInput>, { message: messages[0] });
-      }
+      applyServerErrors(form, e);
       setFailure(e instanceof Error ? e.message : "Could not save the block");
     }
   });

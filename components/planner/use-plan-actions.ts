@@ -4,16 +4,6 @@ import { useCallback, useState } from "react";
 import { useSWRConfig } from "swr";
 import { applyChange, mergeSaved, type TempIds } from "@/lib/plan/apply";
 import { findSession, type PlanChange } from "@/lib/plan/drop";
-import {
-  planWeekKey,
-  sessionBlockPath,
-  sessionBlocksPath,
-  sessionPath,
-  teamSessionsPath,
-  teamTemplatesPath,
-  templatePath,
-  weekToolPath,
-} from "@/lib/plan/keys";
 import { rowLoad } from "@/lib/plan/preview";
 import type { PlanSession, PlanTemplate, PlanWeek, PlanWriteResult } from "@/lib/plan/types";
 import {
@@ -28,7 +18,9 @@ import {
 import type { SessionEditValues } from "@/lib/validations/plan";
 import type { TemplateInput } from "@/lib/validations/template";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
-import { PlanApiError, requestJson, write } from "./api";
+import { currentOf, hitsOf, planApi } from "@/lib/client/api";
+import { ApiError } from "@/lib/client/fetcher";
+import { planKeys } from "@/lib/client/keys";
 import { describeChange } from "./describe";
 import { useLatest } from "./latest";
 
@@ -43,7 +35,7 @@ function request(week: PlanWeek, change: PlanChange, override?: Override): Promi
   const o = override ? { override } : {};
   switch (change.kind) {
     case "create":
-      return write("POST", teamSessionsPath(week.teamId), {
+      return planApi.createSession(week.teamId, {
         from: "template",
         templateId: change.templateId,
         athleteId: change.athleteId,
@@ -51,7 +43,7 @@ function request(week: PlanWeek, change: PlanChange, override?: Override): Promi
         ...o,
       });
     case "group":
-      return write("POST", teamSessionsPath(week.teamId), {
+      return planApi.createSession(week.teamId, {
         from: "template",
         templateId: change.templateId,
         groupId: change.groupId,
@@ -59,7 +51,7 @@ function request(week: PlanWeek, change: PlanChange, override?: Override): Promi
         ...o,
       });
     case "copy":
-      return write("POST", teamSessionsPath(week.teamId), {
+      return planApi.createSession(week.teamId, {
         from: "copy",
         sessionId: change.sessionId,
         athleteId: change.athleteId,
@@ -67,13 +59,13 @@ function request(week: PlanWeek, change: PlanChange, override?: Override): Promi
         ...o,
       });
     case "add-block":
-      return write("POST", sessionBlocksPath(change.sessionId), {
+      return planApi.addBlock(change.sessionId, {
         version: version(change.sessionId),
         templateId: change.templateId,
         ...o,
       });
     case "move":
-      return write("PATCH", sessionPath(change.sessionId), {
+      return planApi.updateSession(change.sessionId, {
         version: version(change.sessionId),
         athleteId: change.athleteId,
         date: change.date,
@@ -144,15 +136,15 @@ export function usePlanActions({
     async (e: unknown, what: string) => {
       if (e instanceof KeptAsItWas) {
         say("info", `Not planned: ${what}. The restriction stands.`);
-      } else if (e instanceof PlanApiError && e.stale) {
+      } else if (e instanceof ApiError && e.stale) {
         await refetch();
-        const s = e.current;
+        const s = currentOf(e);
         say(
           "refused",
           `${what} was not saved: someone else changed ${s ? `"${s.title}"` : "this session"} a moment ago. ` +
-            `The grid now shows the latest plan; try again if it is still needed.`,
+            "The grid now shows the latest plan; try again if it is still needed.",
         );
-      } else if (e instanceof PlanApiError && e.status === 404) {
+      } else if (e instanceof ApiError && e.status === 404) {
         await refetch();
         say("refused", `${what} was not saved: it is no longer in the plan. The grid has been refreshed.`);
       } else {
@@ -177,8 +169,8 @@ export function usePlanActions({
       try {
         return await fn(override);
       } catch (e) {
-        if (!(e instanceof PlanApiError && e.restricted) || override) throw e;
-        const reason = await askOverride(e.hits, what);
+        if (!(e instanceof ApiError && e.restricted) || override) throw e;
+        const reason = await askOverride(hitsOf(e), what);
         if (reason === null) throw new KeptAsItWas();
         return fn({ reason });
       }
@@ -235,7 +227,7 @@ export function usePlanActions({
       mutate<PlanWeek, PlanWriteResult>(swrKey, Promise.resolve(res), {
         populateCache: (r, data) => {
           const shown = current();
-          const base = data ?? (shown && planWeekKey(shown.teamId, shown.weekStart) === swrKey ? shown : undefined);
+          const base = data ?? (shown && planKeys.week(shown.teamId, shown.weekStart) === swrKey ? shown : undefined);
           return base ? withServerRows(base, r, []) : data!;
         },
         revalidate: (data) => data === undefined || needsRefetch(data),
@@ -254,21 +246,21 @@ export function usePlanActions({
       const o = override ? { override } : {};
       switch (op.op) {
         case "remove":
-          return write("DELETE", `${sessionPath(op.sessionId)}?version=${v(op.sessionId)}`);
+          return planApi.deleteSession(op.sessionId, v(op.sessionId));
         case "move":
-          return write("PATCH", sessionPath(op.sessionId), {
+          return planApi.updateSession(op.sessionId, {
             version: v(op.sessionId),
             athleteId: op.athleteId,
             date: op.date,
             ...o,
           });
         case "remove-block":
-          return write("DELETE", `${sessionBlockPath(op.sessionId, op.blockId)}?version=${v(op.sessionId)}`);
+          return planApi.removeBlock(op.sessionId, op.blockId, v(op.sessionId));
         case "reinstate":
-          return write("PATCH", sessionPath(op.sessionId), { version: v(op.sessionId), status: "published", ...o });
+          return planApi.updateSession(op.sessionId, { version: v(op.sessionId), status: "published", ...o });
         case "restore-fields": {
           const { blocks, ...fields } = op.fields;
-          return write("PATCH", sessionPath(op.sessionId), {
+          return planApi.updateSession(op.sessionId, {
             version: v(op.sessionId),
             ...fields,
             blocks: blockBodies({ blocks }),
@@ -277,7 +269,7 @@ export function usePlanActions({
         }
         case "recreate": {
           const s = op.session;
-          return write("POST", teamSessionsPath(week.teamId), {
+          return planApi.createSession(week.teamId, {
             from: "blank",
             athleteId: s.athleteId,
             date: s.date,
@@ -320,7 +312,7 @@ export function usePlanActions({
       const body = { version, ...values, notes: values.notes?.trim() ? values.notes : null };
       const res = await track(() =>
         withOverride(`the changes to "${values.title}"`, (o) =>
-          write("PATCH", sessionPath(before.id), o ? { ...body, override: o } : body),
+          planApi.updateSession(before.id, o ? { ...body, override: o } : body),
         ),
       );
       await settle(res);
@@ -332,7 +324,7 @@ export function usePlanActions({
 
   const deleteSession = useCallback(
     async (s: PlanSession, version = s.version) => {
-      const res = await track(() => write("DELETE", `${sessionPath(s.id)}?version=${version}`));
+      const res = await track(() => planApi.deleteSession(s.id, version));
       await settle(res);
       setUndoStack((st) => pushUndo(st, undoForDelete(s, res)));
       say(
@@ -352,7 +344,7 @@ export function usePlanActions({
       try {
         const res = await track(() =>
           withOverride("this copy of the week", (o) =>
-            write("POST", weekToolPath(week.teamId, tool), { week: week.weekStart, ...(o ? { override: o } : {}) }),
+            planApi.weekTool(week.teamId, tool, { week: week.weekStart, ...(o ? { override: o } : {}) }),
           ),
         );
         await refetch();
@@ -382,12 +374,12 @@ export function usePlanActions({
       try {
         await track(() =>
           template === null
-            ? requestJson("POST", teamTemplatesPath(week.teamId), values)
-            : requestJson("PUT", templatePath(template.id), { ...values, version: template.version }),
+            ? planApi.createTemplate(week.teamId, values)
+            : planApi.updateTemplate(template.id, { ...values, version: template.version }),
         );
       } catch (e) {
         // Someone else saved the block first: show their version on the shelf; the editor shows why.
-        if (e instanceof PlanApiError && e.stale) await refetch();
+        if (e instanceof ApiError && e.stale) await refetch();
         throw e;
       }
       await refetch();
@@ -398,7 +390,7 @@ export function usePlanActions({
 
   const deleteTemplate = useCallback(
     async (id: number, title: string) => {
-      await track(() => requestJson("DELETE", templatePath(id)));
+      await track(() => planApi.deleteTemplate(id));
       await refetch();
       say("saved", `Deleted the block "${title}".`);
     },

@@ -5,7 +5,9 @@ import { useState } from "react";
 import { useForm, useWatch, type FieldPath } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
-import { ApiError, sendJson } from "@/components/notices/fetch-json";
+import { restrictionApi } from "@/lib/client/api";
+import { ApiError } from "@/lib/client/fetcher";
+import { applyServerErrors } from "@/lib/client/form-errors";
 import { BLOCK_KIND_LABEL } from "@/lib/format/block-summary";
 import { RESTRICTION_RULES, RESTRICTION_RULE_LABEL, type Restriction } from "@/lib/restrictions/rules";
 import {
@@ -22,12 +24,10 @@ const emptyToNull = (v: unknown) => (v === "" || v === undefined ? null : v);
 export function RestrictionForm({
   athleteId,
   today,
-  url,
   onSaved,
 }: {
   athleteId: number;
   today: string;
-  url: string;
   onSaved: (r: Restriction) => Promise<void>;
 }) {
   const [message, setMessage] = useState<string | null>(null);
@@ -47,20 +47,14 @@ export function RestrictionForm({
   const submit = handleSubmit(async (values) => {
     setMessage(null);
     try {
-      const { restriction } = await sendJson<{ restriction: Restriction }>(url, "POST", values);
+      const { restriction } = await restrictionApi.create(athleteId, values);
       reset(defaults);
       await onSaved(restriction);
       setMessage("Saved. Coaches see it on the week plan.");
     } catch (err) {
       if (!(err instanceof ApiError)) return setMessage("Could not save; try again");
-      let placed = false;
-      for (const [path, messages] of Object.entries(err.fields)) {
-        const name = FIELDS.find((f) => path === f || path.startsWith(`${f}.`));
-        if (!name) continue;
-        setError(name as FieldPath<RestrictionFormValues>, { message: messages[0] });
-        placed = true;
-      }
-      if (!placed) setMessage(err.message);
+      if (!applyServerErrors({ setError }, err, FIELDS as readonly FieldPath<RestrictionFormValues>[]))
+        setMessage(err.message);
     }
   });
 

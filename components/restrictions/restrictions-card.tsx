@@ -3,14 +3,15 @@
 import { useState } from "react";
 import useSWR from "swr";
 import { Card } from "@/components/ui/card";
-import { fetchJson, sendJson } from "@/components/notices/fetch-json";
+import { restrictionApi } from "@/lib/client/api";
+import { fetchJson } from "@/lib/client/fetcher";
+import { restrictionKeys } from "@/lib/client/keys";
 import type { OverrideRow } from "@/lib/data/restrictions";
 import { isCurrent, type Restriction } from "@/lib/restrictions/rules";
 import { OverrideLog } from "./override-log";
 import { RestrictionCaution } from "./restriction-caution";
 import { RestrictionForm } from "./restriction-form";
 import { RestrictionItem } from "./restriction-item";
-import { restrictionKeys } from "./swr-keys";
 
 export type AthleteRestrictions = { restrictions: Restriction[]; overrides: OverrideRow[] };
 
@@ -42,7 +43,7 @@ export function RestrictionsCard({
   async function lift(r: Restriction) {
     setFailure(null);
     try {
-      await sendJson(`/api/restrictions/${r.id}`, "PATCH", { action: "lift" });
+      await restrictionApi.act(r.id, { action: "lift" });
     } catch (err) {
       setFailure((err as Error).message);
     }
@@ -91,7 +92,6 @@ export function RestrictionsCard({
           <RestrictionForm
             athleteId={athleteId}
             today={today}
-            url={url}
             onSaved={async () => {
               await mutate();
             }}

@@ -7,6 +7,7 @@ import { useForm } from "react-hook-form";
 import { saveAthleteAction } from "@/app/(workspace)/squad/actions";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
+import { applyServerErrors } from "@/lib/client/form-errors";
 import { athleteSchema, type AthleteFormValues, type AthleteInput } from "@/lib/validations/athlete";
 
 type Props = { athleteId: number | null; initial: AthleteFormValues; groups: { id: number; name: string }[] };
@@ -38,10 +39,7 @@ export function AthleteForm({ athleteId, initial, groups }: Props) {
     setMessage(undefined);
     const result = await saveAthleteAction(athleteId, values);
     if (!result.ok) {
-      for (const [field, messages] of Object.entries(result.fields ?? {})) {
-        if ((FIELDS as readonly string[]).includes(field))
-          setError(field as (typeof FIELDS)[number], { message: messages[0] });
-      }
+      applyServerErrors({ setError }, result, FIELDS);
       setMessage({ tone: "error", text: result.message });
       return;
     }

@@ -8,7 +8,9 @@ import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Textarea } from "@/components/ui/field";
-import { ApiError, sendJson } from "@/components/notices/fetch-json";
+import { planApi } from "@/lib/client/api";
+import { ApiError } from "@/lib/client/fetcher";
+import { applyServerErrors } from "@/lib/client/form-errors";
 import type { BlockInput } from "@/lib/load/types";
 import { LOG_COMPLETIONS, sessionLogSchema, type SessionLogInput } from "@/lib/validations/log";
 import { BlockChecklist, completedRepsOf, initialDone, type BlockDone } from "./block-checklist";
@@ -71,15 +73,12 @@ export function SessionLogForm({
       ? { ...values, rpe: values.rpe ?? 0, minutes: null }
       : { ...values, ...partly };
     try {
-      await sendJson(`/api/sessions/${sessionId}/log`, "PUT", body);
+      await planApi.saveLog(sessionId, body);
       setSaved("Saved. Thank you!");
       router.refresh();
     } catch (err) {
       if (err instanceof ApiError) {
-        for (const [field, messages] of Object.entries(err.fields)) {
-          if (field === "completion" || field === "rpe" || field === "minutes" || field === "notes")
-            setError(field, { message: messages[0] });
-        }
+        applyServerErrors({ setError }, err, ["completion", "rpe", "minutes", "notes"]);
         setBlockErrors(
           Object.fromEntries(
             Object.entries(err.fields)

@@ -1,0 +1,39 @@
+import type { LoadView, Metric } from "@/lib/load/types";
+import type { AlertListQuery } from "@/lib/validations/alerts";
+
+// Every URL the browser reads (SWR keys) or writes, so a write can `mutate` exactly the keys it changed.
+
+export const planKeys = {
+  week: (teamId: number, week: string) => `/api/teams/${teamId}/plan?week=${week}`,
+  teamSessions: (teamId: number) => `/api/teams/${teamId}/sessions`,
+  session: (sessionId: number) => `/api/sessions/${sessionId}`,
+  sessionBlocks: (sessionId: number) => `/api/sessions/${sessionId}/blocks`,
+  sessionBlock: (sessionId: number, blockId: number) => `/api/sessions/${sessionId}/blocks/${blockId}`,
+  sessionLog: (sessionId: number) => `/api/sessions/${sessionId}/log`,
+  teamTemplates: (teamId: number) => `/api/teams/${teamId}/templates`,
+  template: (templateId: number) => `/api/templates/${templateId}`,
+  weekTool: (teamId: number, tool: "copy-to-next" | "clear" | "publish") => `/api/teams/${teamId}/plan/${tool}`,
+};
+
+export const loadKeys = {
+  squadWeek: (teamId: number, week: string, view: LoadView) => `/api/teams/${teamId}/load?week=${week}&view=${view}`,
+  athlete: (athleteId: number, q: { from: string; to: string; view: LoadView; metric: Metric }) =>
+    `/api/athletes/${athleteId}/load?from=${q.from}&to=${q.to}&view=${q.view}&metric=${q.metric}`,
+  /** Matches every load answer (squad weeks and athletes): all of them depend on the team's thresholds. */
+  isLoad: (key: unknown) => typeof key === "string" && key.includes("/load"),
+  teamSettings: (teamId: number) => `/api/teams/${teamId}/settings`,
+};
+
+export const noticeKeys = {
+  alerts: (status: AlertListQuery["status"]) => `/api/alerts?status=${status}`,
+  isAlertList: (key: unknown) => typeof key === "string" && key.startsWith("/api/alerts?"),
+  alert: (alertId: number) => `/api/alerts/${alertId}`,
+  alertsSeen: "/api/alerts/seen",
+  notificationSettings: "/api/me/notification-settings",
+  calendarToken: (athleteId: number) => `/api/athletes/${athleteId}/calendar-token`,
+} as const;
+
+export const restrictionKeys = {
+  athlete: (athleteId: number) => `/api/athletes/${athleteId}/restrictions`,
+  restriction: (restrictionId: number) => `/api/restrictions/${restrictionId}`,
+} as const;
