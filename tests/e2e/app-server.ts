@@ -1,5 +1,5 @@
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { createServer } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
@@ -65,14 +65,19 @@ export async function ensureBuilt(): Promise<void> {
 
 export type App = { url: string; port: number; dbPath: string; env: Record<string, string>; stop: () => Promise<void> };
 
-/** Starts `next start` on a free port with its own migrated (and by default demo-seeded) SQLite database. */
+/**
+ * Starts `next start` on a free port with its own migrated (and by default demo-seeded) SQLite database;
+ * `database` starts from a copy of that file instead (benchmarks).
+ */
 export async function startApp({
   env = {},
   seed = true,
-}: { env?: Record<string, string>; seed?: boolean } = {}): Promise<App> {
+  database,
+}: { env?: Record<string, string>; seed?: boolean; database?: string } = {}): Promise<App> {
   await ensureBuilt();
   const dir = mkdtempSync(join(tmpdir(), "sprintwright-e2e-"));
   const dbPath = join(dir, "app.sqlite");
+  if (database) copyFileSync(database, dbPath);
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
   const appEnv: Record<string, string> = {
