@@ -182,13 +182,24 @@ export async function listAlerts({
   const rows = await Alert.findAll({
     where: { teamId, ...statusWhere(query.status), ...(query.athleteId ? { athleteId: query.athleteId } : {}) },
     attributes: [...FIELDS],
-    order: [["createdAt", "DESC"], ["id", "DESC"]],
+    order: [
+      ["createdAt", "DESC"],
+      ["id", "DESC"],
+    ],
     limit: query.limit,
   });
   return toRows(rows, await getAlertsSeenAt({ userId, teamId }));
 }
 
-export async function getAlert({ teamId, alertId, userId }: { teamId: number; alertId: number; userId: number }): Promise<AlertRow | null> {
+export async function getAlert({
+  teamId,
+  alertId,
+  userId,
+}: {
+  teamId: number;
+  alertId: number;
+  userId: number;
+}): Promise<AlertRow | null> {
   const { Alert } = await db();
   const row = await Alert.findOne({ where: { id: alertId, teamId }, attributes: [...FIELDS] });
   if (!row) return null;
@@ -201,7 +212,11 @@ export async function countUnreadAlerts({ teamId, userId }: { teamId: number; us
   const { Alert } = await db();
   const seenAt = await getAlertsSeenAt({ userId, teamId });
   return Alert.count({
-    where: { teamId, status: { [Op.in]: ["open", "acknowledged"] }, ...(seenAt ? { createdAt: { [Op.gt]: seenAt } } : {}) },
+    where: {
+      teamId,
+      status: { [Op.in]: ["open", "acknowledged"] },
+      ...(seenAt ? { createdAt: { [Op.gt]: seenAt } } : {}),
+    },
   });
 }
 
@@ -279,7 +294,10 @@ export async function listAlertsCreatedBetween({
   const rows = await Alert.findAll({
     where: { teamId, createdAt: { [Op.gt]: after, [Op.lte]: until } },
     attributes: [...FIELDS],
-    order: [["createdAt", "ASC"], ["id", "ASC"]],
+    order: [
+      ["createdAt", "ASC"],
+      ["id", "ASC"],
+    ],
   });
   return toRows(rows, null);
 }
@@ -297,4 +315,61 @@ export async function getAthleteSessionDate({
   const { PlannedSession } = await db();
   const row = await PlannedSession.findOne({ where: { id: sessionId, athleteId }, attributes: ["date"], transaction });
   return row ? String(row.date).slice(0, 10) : null;
+}
+
+/**
+ * Adds one override to the athlete's week: one unresolved alert per athlete × kind × week (a database rule), so a
+ * second override that week joins the open alert (its text appended, its count raised) instead of adding one.
+ */
+export async function addOverrideAlert({
+  transaction,
+  teamId,
+  athleteId,
+  date,
+  weekStart,
+  text,
+}: {
+  transaction: Transaction;
+  teamId: number;
+  athleteId: number;
+  date: string;
+  weekStart: string;
+  text: string;
+}): Promise<void> {
+  const { Alert } = await db();
+  const open = await Alert.findOne({
+    where: { athleteId, kind: "restriction_override", weekStart, status: ["open", "acknowledged"] },
+    transaction,
+  });
+  if (open) {
+    await open.update(
+      { reason: `${open.reason}\n${text}`, value: open.value + 1, date, flagged: true },
+      { transaction },
+    );
+    return;
+  }
+  await Alert.create(
+    {
+      teamId,
+      athleteId,
+      kind: "restriction_override",
+      level: "caution",
+      metric: null,
+      value: 1,
+      threshold: 0,
+      date,
+      weekStart,
+      basis: "planned",
+      reason: text,
+      provisional: false,
+      flagged: true,
+      status: "open",
+      note: null,
+      acknowledgedBy: null,
+      acknowledgedAt: null,
+      resolvedBy: null,
+      resolvedAt: null,
+    },
+    { transaction },
+  );
 }

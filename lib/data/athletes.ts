@@ -1,4 +1,5 @@
 import "server-only";
+import type { Transaction } from "sequelize";
 import { AppError } from "@/lib/errors";
 import type { AthleteInput } from "@/lib/validations/athlete";
 import { db } from "@/models";
@@ -81,14 +82,24 @@ export async function listSquad({ teamId, athleteId }: { teamId: number; athlete
     .sort((x, y) => order(x.groupId) - order(y.groupId) || x.name.localeCompare(y.name));
 }
 
-export async function getAthlete({ teamId, athleteId }: { teamId: number; athleteId: number }): Promise<AthleteRow | null> {
+export async function getAthlete({
+  teamId,
+  athleteId,
+}: {
+  teamId: number;
+  athleteId: number;
+}): Promise<AthleteRow | null> {
   const [row] = await listSquad({ teamId, athleteId });
   return row ?? null;
 }
 
 export async function listUnlinkedAthletes({ teamId }: { teamId: number }) {
   const { Athlete } = await db();
-  const rows = await Athlete.findAll({ where: { teamId, userId: null }, attributes: ["id", "name"], order: [["name", "ASC"]] });
+  const rows = await Athlete.findAll({
+    where: { teamId, userId: null },
+    attributes: ["id", "name"],
+    order: [["name", "ASC"]],
+  });
   return rows.map((a) => ({ id: a.id, name: a.name }));
 }
 
@@ -100,7 +111,13 @@ async function assertGroupOfTeam({ teamId, groupId }: { teamId: number; groupId:
   }
 }
 
-export async function createAthlete({ teamId, input }: { teamId: number; input: AthleteInput }): Promise<{ id: number }> {
+export async function createAthlete({
+  teamId,
+  input,
+}: {
+  teamId: number;
+  input: AthleteInput;
+}): Promise<{ id: number }> {
   const { Athlete } = await db();
   await assertGroupOfTeam({ teamId, groupId: input.groupId });
   const athlete = await Athlete.create({ teamId, userId: null, ...input });
@@ -121,4 +138,21 @@ export async function updateAthlete({
   const [count] = await Athlete.update(input, { where: { id: athleteId, teamId } });
   if (!count) throw new AppError("not_found", "No such athlete");
   return { id: athleteId };
+}
+
+/** Id → name of some of the team's athletes. */
+export async function athleteNames({
+  athleteIds,
+  transaction,
+}: {
+  athleteIds: readonly number[];
+  transaction?: Transaction;
+}): Promise<Map<number, string>> {
+  const { Athlete } = await db();
+  const athletes = await Athlete.findAll({
+    where: { id: [...new Set(athleteIds)] },
+    attributes: ["id", "name"],
+    transaction,
+  });
+  return new Map(athletes.map((a) => [a.id, a.name]));
 }

@@ -4,8 +4,8 @@ import type { CalendarSession } from "@/lib/calendar/types";
 import { hashToken, newToken } from "@/lib/auth/tokens";
 import { appUrl } from "@/lib/env";
 import type { BlockInput, SessionStatus } from "@/lib/load/types";
-import { feedUrl, webcalUrl } from "@/lib/notices/feed-url";
-import { sealToken, unsealToken } from "@/lib/notices/token-seal";
+import { feedUrl, webcalUrl } from "@/lib/calendar/feed-url";
+import { sealToken, unsealToken } from "@/lib/security/token-seal";
 import { db } from "@/models";
 
 export type CalendarFeedStatus = {
@@ -68,13 +68,26 @@ export async function rotateCalendarToken({
       { transaction: t },
     );
     const url = feedUrl(appUrl(), token);
-    return { token, active: true, url, webcalUrl: webcalUrl(url), createdAt: row.createdAt.toISOString(), lastUsedAt: null };
+    return {
+      token,
+      active: true,
+      url,
+      webcalUrl: webcalUrl(url),
+      createdAt: row.createdAt.toISOString(),
+      lastUsedAt: null,
+    };
   };
   return transaction ? run(transaction) : sequelize.transaction(run);
 }
 
 /** Revokes the athlete's feed token; the link answers 404 from now on. Returns whether one was active. */
-export async function revokeCalendarToken({ athleteId, now = new Date() }: { athleteId: number; now?: Date }): Promise<boolean> {
+export async function revokeCalendarToken({
+  athleteId,
+  now = new Date(),
+}: {
+  athleteId: number;
+  now?: Date;
+}): Promise<boolean> {
   const { CalendarToken } = await db();
   const [count] = await CalendarToken.update({ revokedAt: now }, { where: { athleteId, revokedAt: null } });
   return count > 0;
@@ -92,7 +105,13 @@ const LAST_USED_GRANULARITY_MS = 60 * 60_000;
  * Whose feed a token opens (the athlete and the team fields the feed shows), or null for an unknown or revoked
  * token. The token is the credential here, so it is looked up by hash only.
  */
-export async function getFeedHead({ token, now = new Date() }: { token: string; now?: Date }): Promise<FeedHead | null> {
+export async function getFeedHead({
+  token,
+  now = new Date(),
+}: {
+  token: string;
+  now?: Date;
+}): Promise<FeedHead | null> {
   const { CalendarToken, Athlete, Team } = await db();
   const row = await CalendarToken.findOne({
     where: { tokenHash: hashToken(token), revokedAt: null },
@@ -107,7 +126,10 @@ export async function getFeedHead({ token, now = new Date() }: { token: string; 
   if (!row.lastUsedAt || now.getTime() - row.lastUsedAt.getTime() > LAST_USED_GRANULARITY_MS) {
     await CalendarToken.update({ lastUsedAt: now }, { where: { id: row.id } });
   }
-  return { team: { id: team.id, name: team.name, timeZone: team.timeZone }, athlete: { id: athlete.id, name: athlete.name } };
+  return {
+    team: { id: team.id, name: team.name, timeZone: team.timeZone },
+    athlete: { id: athlete.id, name: athlete.name },
+  };
 }
 
 export type AthleteSession = CalendarSession & {
@@ -141,12 +163,32 @@ export async function listAthleteSessions({
   const range = from || to ? { date: { ...(from ? { [Op.gte]: from } : {}), ...(to ? { [Op.lte]: to } : {}) } } : {};
   const rows = await PlannedSession.findAll({
     where: { athleteId, teamId, status: { [Op.in]: ["published", "cancelled"] }, ...range },
-    attributes: ["id", "date", "startTime", "durationMin", "title", "plannedRpe", "status", "sequence", "updatedAt", "notes"],
+    attributes: [
+      "id",
+      "date",
+      "startTime",
+      "durationMin",
+      "title",
+      "plannedRpe",
+      "status",
+      "sequence",
+      "updatedAt",
+      "notes",
+    ],
     include: [
-      { model: SessionBlock, as: "blocks", attributes: ["id", "kind", "title", "running", "drills", "notes", "position"] },
+      {
+        model: SessionBlock,
+        as: "blocks",
+        attributes: ["id", "kind", "title", "running", "drills", "notes", "position"],
+      },
       { model: SessionLog, as: "log", attributes: ["completion", "rpe", "minutes", "completedReps", "notes"] },
     ],
-    order: [["date", "ASC"], ["startTime", "ASC"], ["id", "ASC"], [{ model: SessionBlock, as: "blocks" }, "position", "ASC"]],
+    order: [
+      ["date", "ASC"],
+      ["startTime", "ASC"],
+      ["id", "ASC"],
+      [{ model: SessionBlock, as: "blocks" }, "position", "ASC"],
+    ],
   });
   return rows.map((s) => {
     const log = (s as unknown as { log: AthleteSession["log"] }).log;
@@ -184,10 +226,20 @@ export async function listAthleteSessions({
 }
 
 /** Seeds or tests: a token for every athlete of the team who has none yet. */
-export async function ensureCalendarTokens({ teamId, transaction }: { teamId: number; transaction?: Transaction }): Promise<number> {
+export async function ensureCalendarTokens({
+  teamId,
+  transaction,
+}: {
+  teamId: number;
+  transaction?: Transaction;
+}): Promise<number> {
   const { Athlete, CalendarToken } = await db();
   const athletes = await Athlete.findAll({ where: { teamId }, attributes: ["id"], transaction });
-  const active = await CalendarToken.findAll({ where: { teamId, revokedAt: null }, attributes: ["athleteId"], transaction });
+  const active = await CalendarToken.findAll({
+    where: { teamId, revokedAt: null },
+    attributes: ["athleteId"],
+    transaction,
+  });
   const has = new Set(active.map((t) => t.athleteId));
   let created = 0;
   for (const a of athletes) {

@@ -1,14 +1,12 @@
 import "server-only";
 import { Op, type Transaction, type WhereOptions } from "sequelize";
 import { AppError } from "@/lib/errors";
-import { afterPlanChange, type SessionChange } from "@/lib/notices/hooks";
 import { normaliseBlock, type BlockContent } from "@/lib/plan/blocks";
-import { toPlanSession, toSnapshot, type SessionRow } from "@/lib/plan/dto";
-import type { PlanSession, PlanWriteResult, Touched } from "@/lib/plan/types";
-import { db, type PlannedSession } from "@/models";
-import { guardRestrictions, type Override } from "./restriction-guard";
+import { toPlanSession, type SessionRow } from "@/lib/plan/dto";
+import type { PlanSession } from "@/lib/plan/types";
+import { db } from "@/models";
 
-// Internals shared by the plan readers and writers (lib/data/plan.ts, lib/data/plan-sessions.ts).
+// Session rows as the plan readers (lib/data/plan.ts) and the plan services (lib/services/plan-*.ts) see them.
 
 export type Loaded = { dto: PlanSession; updatedAt: Date };
 
@@ -39,7 +37,11 @@ export async function loadSessions(where: WhereOptions, transaction?: Transactio
       { model: SessionBlock, as: "blocks", attributes: BLOCK_ATTRS },
       { model: SessionLog, as: "log", attributes: ["id"] },
     ],
-    order: [["date", "ASC"], ["startTime", "ASC"], ["id", "ASC"]],
+    order: [
+      ["date", "ASC"],
+      ["startTime", "ASC"],
+      ["id", "ASC"],
+    ],
     transaction,
   });
   return rows.map((r) => {
@@ -52,6 +54,21 @@ export async function loadById(ids: readonly number[], transaction: Transaction)
   if (ids.length === 0) return new Map();
   const list = await loadSessions({ id: { [Op.in]: [...ids] } }, transaction);
   return new Map(list.map((l) => [l.dto.id, l]));
+}
+
+/** The team's sessions dated `from`..`to` (inclusive). */
+export async function loadSessionsBetween({
+  teamId,
+  from,
+  to,
+  transaction,
+}: {
+  teamId: number;
+  from: string;
+  to: string;
+  transaction: Transaction;
+}): Promise<Loaded[]> {
+  return loadSessions({ teamId, date: { [Op.between]: [from, to] } }, transaction);
 }
 
 /**
@@ -68,28 +85,17 @@ export async function lockSession({
   sessionId: number;
   version?: number;
   transaction: Transaction;
-}) {
-  const { PlannedSession } = await db();
-  const row = await PlannedSession.findOne({ where: { id: sessionId, teamId }, transaction });
-  if (!row) throw new AppError("not_found", "That session was not found");
-  const [loaded] = await loadSessions({ id: sessionId }, transaction);
-  if (version !== undefined && row.version !== version) {
+}): Promise<Loaded> {
+  const [loaded] = await loadSessions({ id: sessionId, teamId }, transaction);
+  if (!loaded) throw new AppError("not_found", "That session was not found");
+  if (version !== undefined && loaded.dto.version !== version) {
     throw new AppError(
       "stale",
       "Someone changed this session after you opened it. The grid now shows the current version.",
       { details: { current: loaded.dto } },
     );
   }
-  return { row, loaded };
-}
-
-export function notCancelled(s: PlanSession) {
-  if (s.status === "cancelled") throw new AppError("conflict", "This session is cancelled. Bring it back before changing it.");
-}
-
-/** Every write bumps version; a write to a session athletes were sent also bumps the iCalendar SEQUENCE. */
-export function bumped(row: Pick<PlannedSession, "version" | "sequence" | "status">) {
-  return { version: row.version + 1, sequence: row.status === "draft" ? row.sequence : row.sequence + 1 };
+  return loaded;
 }
 
 export async function assertAthletes({
@@ -156,50 +162,12 @@ export async function insertBlocks({
 /** The stored columns of a block, normalised. */
 export function blockValues(raw: BlockContent) {
   const b = normaliseBlock(raw);
-  return { templateId: b.templateId ?? null, kind: b.kind, title: b.title, running: b.running, drills: b.drills, notes: b.notes };
-}
-
-export function snapshotOf(l: Loaded | undefined | null) {
-  return l ? toSnapshot(l.dto, l.updatedAt) : null;
-}
-
-export function change(kind: SessionChange["kind"], before: Loaded | null, after: Loaded | null): SessionChange {
-  const ref = (after ?? before)!.dto;
-  return { kind, athleteId: ref.athleteId, sessionId: ref.id, before: snapshotOf(before), after: snapshotOf(after) };
-}
-
-/**
- * Every plan write ends here, inside its transaction: physio restrictions are checked first (a write that
- * breaks one without a reason throws and rolls back), then notices are recorded, so a notice exists exactly
- * when the change commits.
- */
-export async function notify({
-  transaction,
-  teamId,
-  actorUserId,
-  changes,
-  override,
-}: {
-  transaction: Transaction;
-  teamId: number;
-  actorUserId: number;
-  changes: SessionChange[];
-  override?: Override | null;
-}) {
-  if (changes.length === 0) return;
-  await guardRestrictions({ transaction, teamId, actorUserId, changes, override });
-  await afterPlanChange({ transaction, teamId, actorUserId, changes });
-}
-
-/** The athletes' days a list of changes touched, each once. */
-export function touchedBy(changes: readonly SessionChange[]): Touched[] {
-  const seen = new Map<string, Touched>();
-  for (const c of changes) {
-    for (const s of [c.before, c.after]) if (s) seen.set(`${s.athleteId}:${s.date}`, { athleteId: s.athleteId, date: s.date });
-  }
-  return [...seen.values()];
-}
-
-export function writeResult(after: Iterable<Loaded>, changes: readonly SessionChange[], removedIds: number[] = []): PlanWriteResult {
-  return { sessions: [...after].map((l) => l.dto), removedIds, touched: touchedBy(changes) };
+  return {
+    templateId: b.templateId ?? null,
+    kind: b.kind,
+    title: b.title,
+    running: b.running,
+    drills: b.drills,
+    notes: b.notes,
+  };
 }

@@ -1,142 +1,119 @@
 import "server-only";
-import type { Transaction } from "sequelize";
+import { Op, type InferAttributes, type Transaction } from "sequelize";
 import { AppError } from "@/lib/errors";
-import type { SessionChange } from "@/lib/notices/hooks";
-import { blockFromTemplate, sessionFieldsFromTemplate, type BlockContent } from "@/lib/plan/blocks";
-import { groupTargets } from "@/lib/plan/drop";
-import type { PlanWriteResult } from "@/lib/plan/types";
-import type { AddBlockInput, CreateSessionInput, SessionBlockBody, UpdateSessionInput } from "@/lib/validations/plan";
-import { db } from "@/models";
-import type { Override } from "./restriction-guard";
-import { getTemplate } from "./templates";
-import {
-  assertAthletes,
-  assertTemplateLinks,
-  blockValues,
-  bumped,
-  change,
-  insertBlocks,
-  loadById,
-  loadSessions,
-  lockSession,
-  notCancelled,
-  notify,
-  writeResult,
-  type Loaded,
-} from "./plan-rows";
+import type { BlockContent } from "@/lib/plan/blocks";
+import { db, type PlannedSession } from "@/models";
+import { assertTemplateLinks, blockValues, insertBlocks } from "./plan-rows";
 
-type Actor = { teamId: number; actorUserId: number };
+// Row writes of planned sessions and their blocks. The workflows (transaction, rules, restriction guard,
+// notices) are the plan services' (lib/services/plan-sessions.ts, lib/services/plan-week.ts).
 
-async function tx<T>(fn: (t: Transaction) => Promise<T>): Promise<T> {
-  const { sequelize } = await db();
-  return sequelize.transaction(fn);
-}
+type Columns = InferAttributes<PlannedSession>;
 
-type NewSession = {
-  athleteId: number;
-  date: string;
-  startTime: string;
-  durationMin: number;
-  title: string;
-  plannedRpe: number;
-  notes: string | null;
-  blocks: BlockContent[];
+export type NewSession = Pick<
+  Columns,
+  "athleteId" | "date" | "startTime" | "durationMin" | "title" | "plannedRpe" | "notes"
+> & {
+  blocks: readonly BlockContent[];
 };
 
-async function insertSession(teamId: number, s: NewSession, transaction: Transaction): Promise<number> {
+/** The session columns a write may set. */
+export type SessionValues = Partial<
+  Omit<NewSession, "blocks"> & Pick<Columns, "status" | "publishedAt" | "version" | "sequence">
+>;
+
+/** A new draft with its blocks; its id. */
+export async function insertSession({
+  teamId,
+  session,
+  transaction,
+}: {
+  teamId: number;
+  session: NewSession;
+  transaction: Transaction;
+}): Promise<number> {
   const { PlannedSession } = await db();
-  const { blocks, ...fields } = s;
+  const { blocks, ...fields } = session;
   const row = await PlannedSession.create({ teamId, ...fields, status: "draft", publishedAt: null }, { transaction });
   await insertBlocks({ teamId, sessionId: row.id, blocks, transaction });
   return row.id;
 }
 
-/** Appends blocks to an existing session as one write (version, and SEQUENCE when athletes were sent it). */
-async function appendBlocks(
-  teamId: number,
-  sessionId: number,
-  blocks: BlockContent[],
-  version: number | undefined,
-  transaction: Transaction,
-): Promise<Loaded> {
-  const { row, loaded } = await lockSession({ teamId, sessionId, version, transaction });
-  notCancelled(loaded.dto);
-  const start = loaded.dto.blocks.reduce((max, b) => Math.max(max, b.position + 1), 0);
-  await insertBlocks({ teamId, sessionId, blocks, start, transaction });
-  await row.update(bumped(row), { transaction });
-  return loaded;
+export async function updateSessionRow({
+  sessionId,
+  values,
+  transaction,
+}: {
+  sessionId: number;
+  values: SessionValues;
+  transaction: Transaction;
+}): Promise<void> {
+  const { PlannedSession } = await db();
+  await PlannedSession.update(values, { where: { id: sessionId }, transaction });
 }
 
-/**
- * New sessions: written out in full, made from a template (for one athlete, or for every athlete of a group
- * in one transaction; a group athlete who already has a session that day gets the block added to it), or
- * copied from another session (always a new draft).
- */
-export async function createSessions({ teamId, actorUserId, input }: Actor & { input: CreateSessionInput }): Promise<PlanWriteResult> {
-  return tx(async (transaction) => {
-    const created: number[] = [];
-    const appended: Loaded[] = [];
-    if (input.from === "blank") {
-      await assertAthletes({ teamId, athleteIds: [input.athleteId], transaction });
-      const { from, override, ...fields } = input;
-      void from;
-      void override;
-      created.push(await insertSession(teamId, fields, transaction));
-    } else if (input.from === "copy") {
-      const { loaded } = await lockSession({ teamId, sessionId: input.sessionId, transaction });
-      await assertAthletes({ teamId, athleteIds: [input.athleteId], transaction });
-      const s = loaded.dto;
-      const blocks = s.blocks.map(({ templateId, kind, title, running, drills, notes }) => ({
-        templateId,
-        kind,
-        title,
-        running,
-        drills,
-        notes,
-      }));
-      created.push(
-        await insertSession(
-          teamId,
-          {
-            athleteId: input.athleteId,
-            date: input.date,
-            startTime: s.startTime,
-            durationMin: s.durationMin,
-            title: s.title,
-            plannedRpe: s.plannedRpe,
-            notes: s.notes,
-            blocks,
-          },
-          transaction,
-        ),
-      );
-    } else {
-      const template = await getTemplate({ teamId, templateId: input.templateId, transaction });
-      const fields = { ...sessionFieldsFromTemplate(template), notes: null, date: input.date, blocks: [blockFromTemplate(template)] };
-      if (input.athleteId !== undefined) {
-        await assertAthletes({ teamId, athleteIds: [input.athleteId], transaction });
-        created.push(await insertSession(teamId, { ...fields, athleteId: input.athleteId }, transaction));
-      } else {
-        const athleteIds = await groupAthletes(teamId, input.groupId!, transaction);
-        const onDay = await loadSessions({ teamId, date: input.date }, transaction);
-        const targets = groupTargets(athleteIds, (id) => onDay.filter((l) => l.dto.athleteId === id).map((l) => l.dto));
-        for (const t of targets) {
-          if (t.sessionId === null) created.push(await insertSession(teamId, { ...fields, athleteId: t.athleteId }, transaction));
-          else appended.push(await appendBlocks(teamId, t.sessionId, fields.blocks, undefined, transaction));
-        }
-      }
-    }
-    const after = await loadById([...created, ...appended.map((l) => l.dto.id)], transaction);
-    const changes: SessionChange[] = [
-      ...created.map((id) => change("created", null, after.get(id)!)),
-      ...appended.map((before) => change("updated", before, after.get(before.dto.id)!)),
-    ];
-    await notify({ transaction, teamId, actorUserId, changes, override: input.override });
-    return writeResult(after.values(), changes);
-  });
+export async function destroySessions({
+  sessionIds,
+  transaction,
+}: {
+  sessionIds: readonly number[];
+  transaction: Transaction;
+}): Promise<void> {
+  if (sessionIds.length === 0) return;
+  const { PlannedSession } = await db();
+  await PlannedSession.destroy({ where: { id: { [Op.in]: [...sessionIds] } }, transaction });
 }
 
-async function groupAthletes(teamId: number, groupId: number, transaction: Transaction): Promise<number[]> {
+/** Replaces the session's whole block list. */
+export async function replaceBlocks({
+  teamId,
+  sessionId,
+  blocks,
+  transaction,
+}: {
+  teamId: number;
+  sessionId: number;
+  blocks: readonly BlockContent[];
+  transaction: Transaction;
+}): Promise<void> {
+  const { SessionBlock } = await db();
+  await SessionBlock.destroy({ where: { sessionId }, transaction });
+  await insertBlocks({ teamId, sessionId, blocks, transaction });
+}
+
+/** Rewrites one block (`block` null removes it). */
+export async function writeBlock({
+  teamId,
+  sessionId,
+  blockId,
+  block,
+  transaction,
+}: {
+  teamId: number;
+  sessionId: number;
+  blockId: number;
+  block: BlockContent | null;
+  transaction: Transaction;
+}): Promise<void> {
+  const { SessionBlock } = await db();
+  if (block) {
+    await assertTemplateLinks({ teamId, blocks: [block], transaction });
+    await SessionBlock.update(blockValues(block), { where: { id: blockId, sessionId }, transaction });
+  } else {
+    await SessionBlock.destroy({ where: { id: blockId, sessionId }, transaction });
+  }
+}
+
+/** The athletes of one of the team's groups, by name; 404 for another team's group, 400 for an empty one. */
+export async function listGroupAthleteIds({
+  teamId,
+  groupId,
+  transaction,
+}: {
+  teamId: number;
+  groupId: number;
+  transaction: Transaction;
+}): Promise<number[]> {
   const { TrainingGroup, Athlete } = await db();
   const group = await TrainingGroup.findOne({ where: { id: groupId, teamId }, attributes: ["id"], transaction });
   if (!group)
@@ -154,126 +131,4 @@ async function groupAthletes(teamId: number, groupId: number, transaction: Trans
       fields: { groupId: ["No athletes in this group"] },
     });
   return athletes.map((a) => a.id);
-}
-
-/** Changes a session (moving it = a new athlete or date). `blocks`, when sent, replaces the list. */
-export async function updateSession({
-  teamId,
-  actorUserId,
-  sessionId,
-  input,
-}: Actor & { sessionId: number; input: UpdateSessionInput }): Promise<PlanWriteResult> {
-  return tx(async (transaction) => {
-    const { row, loaded } = await lockSession({ teamId, sessionId, version: input.version, transaction });
-    const before = loaded.dto;
-    const { version, blocks, status, override, ...fields } = input;
-    void version;
-    const reinstate = status === "published" && before.status === "cancelled";
-    const publish = status === "published" && before.status === "draft";
-    if (!reinstate) notCancelled(before);
-    const moves =
-      (fields.athleteId !== undefined && fields.athleteId !== before.athleteId) ||
-      (fields.date !== undefined && fields.date !== before.date);
-    if (moves && before.logged)
-      throw new AppError("conflict", "The athlete has logged this session, so it stays on its day. Copy it instead.");
-    if (fields.athleteId !== undefined) await assertAthletes({ teamId, athleteIds: [fields.athleteId], transaction });
-    if (blocks) {
-      const { SessionBlock } = await db();
-      await SessionBlock.destroy({ where: { sessionId }, transaction });
-      await insertBlocks({ teamId, sessionId, blocks: blocks as SessionBlockBody[], transaction });
-    }
-    const statusFields = publish
-      ? { status: "published" as const, publishedAt: new Date() }
-      : reinstate
-        ? { status: "published" as const }
-        : {};
-    await row.update({ ...fields, ...statusFields, ...bumped(row) }, { transaction });
-    const after = (await loadById([sessionId], transaction)).get(sessionId)!;
-    const changes = [change(publish ? "published" : "updated", loaded, after)];
-    await notify({ transaction, teamId, actorUserId, changes, override });
-    return writeResult([after], changes);
-  });
-}
-
-/**
- * Deletes a draft outright. A session athletes were sent (published) is kept as cancelled so calendars get
- * STATUS:CANCELLED; a session with the athlete's log is kept too, so the log is never lost.
- */
-export async function deleteSession({
-  teamId,
-  actorUserId,
-  sessionId,
-  version,
-}: Actor & { sessionId: number; version: number }): Promise<PlanWriteResult> {
-  return tx(async (transaction) => {
-    const { row, loaded } = await lockSession({ teamId, sessionId, version, transaction });
-    if (loaded.dto.status === "cancelled") return writeResult([loaded], []);
-    if (loaded.dto.status === "draft" && !loaded.dto.logged) {
-      await row.destroy({ transaction });
-      const changes = [change("deleted", loaded, null)];
-      await notify({ transaction, teamId, actorUserId, changes });
-      return writeResult([], changes, [sessionId]);
-    }
-    await row.update({ status: "cancelled", ...bumped(row) }, { transaction });
-    const after = (await loadById([sessionId], transaction)).get(sessionId)!;
-    const changes = [change("deleted", loaded, after)];
-    await notify({ transaction, teamId, actorUserId, changes });
-    return writeResult([after], changes);
-  });
-}
-
-/** Appends a block (a template's content, or one written out) to a session. */
-export async function addBlock({
-  teamId,
-  actorUserId,
-  sessionId,
-  input,
-}: Actor & { sessionId: number; input: AddBlockInput }): Promise<PlanWriteResult> {
-  return tx(async (transaction) => {
-    const block =
-      input.templateId !== undefined
-        ? blockFromTemplate(await getTemplate({ teamId, templateId: input.templateId, transaction }))
-        : input.block!;
-    const before = await appendBlocks(teamId, sessionId, [block], input.version, transaction);
-    const after = (await loadById([sessionId], transaction)).get(sessionId)!;
-    const changes = [change("updated", before, after)];
-    await notify({ transaction, teamId, actorUserId, changes, override: input.override });
-    return writeResult([after], changes);
-  });
-}
-
-/** Rewrites or removes one block of a session (`block` null removes it). */
-export async function changeBlock({
-  teamId,
-  actorUserId,
-  sessionId,
-  blockId,
-  version,
-  block,
-  override,
-}: Actor & {
-  sessionId: number;
-  blockId: number;
-  version: number;
-  block: SessionBlockBody | null;
-  override?: Override;
-}): Promise<PlanWriteResult> {
-  return tx(async (transaction) => {
-    const { row, loaded } = await lockSession({ teamId, sessionId, version, transaction });
-    notCancelled(loaded.dto);
-    const current = loaded.dto.blocks.find((b) => b.id === blockId);
-    if (!current) throw new AppError("not_found", "That block was not found in this session");
-    const { SessionBlock } = await db();
-    if (block) {
-      await assertTemplateLinks({ teamId, blocks: [block], transaction });
-      await SessionBlock.update(blockValues(block), { where: { id: blockId, sessionId }, transaction });
-    } else {
-      await SessionBlock.destroy({ where: { id: blockId, sessionId }, transaction });
-    }
-    await row.update(bumped(row), { transaction });
-    const after = (await loadById([sessionId], transaction)).get(sessionId)!;
-    const changes = [change("updated", loaded, after)];
-    await notify({ transaction, teamId, actorUserId, changes, override });
-    return writeResult([after], changes);
-  });
 }

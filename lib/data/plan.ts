@@ -1,5 +1,5 @@
 import "server-only";
-import { Op, type Transaction } from "sequelize";
+import { Op } from "sequelize";
 import { AppError } from "@/lib/errors";
 import { buildWeekPreviewContext } from "@/lib/load/week-preview";
 import { packSessions } from "@/lib/load/packed";
@@ -11,12 +11,9 @@ import { addDays, isoWeekOf, startOfWeek, weekDays } from "@/lib/dates/plain-dat
 import { db } from "@/models";
 import { listGroups } from "./athletes";
 import { getLoadSeriesInputs } from "./load";
-import { bumped, change, insertBlocks, loadById, loadSessions, notify, type Loaded } from "./plan-rows";
-import type { Override } from "./restriction-guard";
+import { loadSessions } from "./plan-rows";
 import { listRestrictions } from "./restrictions";
 import { listTemplates } from "./templates";
-
-export { addBlock, changeBlock, createSessions, deleteSession, updateSession } from "./plan-sessions";
 
 /** Who is looking: staff see the squad; an athlete ("own" scope) sees only their row and nothing in draft. */
 export type PlanAudience = { canEdit: boolean; ownAthleteId: number | null; scope: "team" | "own" };
@@ -54,12 +51,17 @@ export async function getPlanWeek({
   const frame = await teamWeek({ teamId, date });
   const { weekStart, weekEnd } = frame;
   const own = audience.scope === "own";
-  if (own && audience.ownAthleteId === null) throw new AppError("not_found", "No athlete profile is linked to your account");
+  if (own && audience.ownAthleteId === null)
+    throw new AppError("not_found", "No athlete profile is linked to your account");
   const visible = (s: { status: string }) => !own || s.status !== "draft";
   const [inputs, groups, weekRows, templates, restrictions] = await Promise.all([
     getLoadSeriesInputs({ teamId, through: weekEnd }),
     listGroups({ teamId }),
-    loadSessions({ teamId, date: { [Op.between]: [weekStart, weekEnd] }, ...(own ? { athleteId: audience.ownAthleteId! } : {}) }),
+    loadSessions({
+      teamId,
+      date: { [Op.between]: [weekStart, weekEnd] },
+      ...(own ? { athleteId: audience.ownAthleteId! } : {}),
+    }),
     own ? Promise.resolve([]) : listTemplates({ teamId }),
     listRestrictions({ teamId, from: weekStart, ...(own ? { athleteIds: [audience.ownAthleteId!] } : {}) }),
   ]);
@@ -79,7 +81,8 @@ export async function getPlanWeek({
     });
   const rows = computeSquadWeek(squad, inputs.settings, weekStart, today, "projected");
   const weekSessions = new Map<number, PlanSession[]>();
-  for (const { dto } of weekRows) if (visible(dto)) weekSessions.set(dto.athleteId, [...(weekSessions.get(dto.athleteId) ?? []), dto]);
+  for (const { dto } of weekRows)
+    if (visible(dto)) weekSessions.set(dto.athleteId, [...(weekSessions.get(dto.athleteId) ?? []), dto]);
 
   const athletes: PlanAthlete[] = squad.map((a, i) => {
     const id = Number(a.id);
@@ -193,101 +196,4 @@ export async function getSession({ teamId, sessionId }: { teamId: number; sessio
   const [loaded] = await loadSessions({ id: sessionId, teamId });
   if (!loaded) throw new AppError("not_found", "That session was not found");
   return loaded.dto;
-}
-
-type WeekTool = { teamId: number; actorUserId: number; date: string; override?: Override };
-
-async function weekTx<T>({ teamId, date }: WeekTool, fn: (t: Transaction, weekStart: string, inWeek: Loaded[]) => Promise<T>): Promise<T> {
-  const { weekStart, weekEnd } = await teamWeek({ teamId, date });
-  const { sequelize } = await db();
-  return sequelize.transaction(async (t) =>
-    fn(t, weekStart, await loadSessions({ teamId, date: { [Op.between]: [weekStart, weekEnd] } }, t)),
-  );
-}
-
-/** Copies the week's sessions (cancelled ones left out) to the same days of the next week, as drafts. */
-export async function copyWeekToNext(tool: WeekTool): Promise<PlanWriteResult> {
-  const { PlannedSession } = await db();
-  return weekTx(tool, async (transaction, _weekStart, inWeek) => {
-    const created: number[] = [];
-    for (const { dto: s } of inWeek.filter((l) => l.dto.status !== "cancelled")) {
-      const row = await PlannedSession.create(
-        {
-          teamId: tool.teamId,
-          athleteId: s.athleteId,
-          date: addDays(s.date, 7),
-          startTime: s.startTime,
-          durationMin: s.durationMin,
-          title: s.title,
-          plannedRpe: s.plannedRpe,
-          notes: s.notes,
-          status: "draft",
-          publishedAt: null,
-        },
-        { transaction },
-      );
-      await insertBlocks({ teamId: tool.teamId, sessionId: row.id, blocks: s.blocks, transaction });
-      created.push(row.id);
-    }
-    const after = await loadById(created, transaction);
-    await notify({
-      transaction,
-      teamId: tool.teamId,
-      actorUserId: tool.actorUserId,
-      changes: created.map((id) => change("created", null, after.get(id)!)),
-      override: tool.override,
-    });
-    return { sessions: [...after.values()].map((l) => l.dto), removedIds: [] };
-  });
-}
-
-/** Empties the week: drafts go, published sessions become cancelled, logged sessions stay (logs are never lost). */
-export async function clearWeek(tool: WeekTool): Promise<PlanWriteResult> {
-  const { PlannedSession } = await db();
-  return weekTx(tool, async (transaction, _weekStart, inWeek) => {
-    const removed: Loaded[] = [];
-    const cancelled: Loaded[] = [];
-    for (const l of inWeek) {
-      if (l.dto.logged || l.dto.status === "cancelled") continue;
-      if (l.dto.status === "draft") removed.push(l);
-      else cancelled.push(l);
-    }
-    if (removed.length > 0) await PlannedSession.destroy({ where: { id: { [Op.in]: removed.map((l) => l.dto.id) } }, transaction });
-    for (const l of cancelled) {
-      await PlannedSession.update({ status: "cancelled", ...bumped(l.dto) }, { where: { id: l.dto.id }, transaction });
-    }
-    const after = await loadById(
-      cancelled.map((l) => l.dto.id),
-      transaction,
-    );
-    const changes = [
-      ...removed.map((l) => change("deleted", l, null)),
-      ...cancelled.map((l) => change("deleted", l, after.get(l.dto.id)!)),
-    ];
-    await notify({ transaction, teamId: tool.teamId, actorUserId: tool.actorUserId, changes });
-    return { sessions: [...after.values()].map((l) => l.dto), removedIds: removed.map((l) => l.dto.id) };
-  });
-}
-
-/** Sends the week: every draft becomes published (SEQUENCE stays 0: the first invitation athletes get). */
-export async function publishWeek(tool: WeekTool): Promise<PlanWriteResult> {
-  const { PlannedSession } = await db();
-  return weekTx(tool, async (transaction, _weekStart, inWeek) => {
-    const drafts = inWeek.filter((l) => l.dto.status === "draft");
-    const publishedAt = new Date();
-    for (const l of drafts) {
-      await PlannedSession.update({ status: "published", publishedAt, ...bumped(l.dto) }, { where: { id: l.dto.id }, transaction });
-    }
-    const after = await loadById(
-      drafts.map((l) => l.dto.id),
-      transaction,
-    );
-    await notify({
-      transaction,
-      teamId: tool.teamId,
-      actorUserId: tool.actorUserId,
-      changes: drafts.map((l) => change("published", l, after.get(l.dto.id)!)),
-    });
-    return { sessions: [...after.values()].map((l) => l.dto), removedIds: [] };
-  });
 }

@@ -18,7 +18,8 @@ export function toRestriction(row: RestrictionRow, names: ReadonlyMap<number, st
     note: row.note,
     setByName: row.createdBy ? (names.get(row.createdBy) ?? "Medical staff") : "Medical staff",
   };
-  if (row.rule === "no_kind") return { ...base, rule: "no_kind", blockKinds: JSON.parse(row.blockKinds ?? "[]") as BlockKind[] };
+  if (row.rule === "no_kind")
+    return { ...base, rule: "no_kind", blockKinds: JSON.parse(row.blockKinds ?? "[]") as BlockKind[] };
   if (row.rule === "max_intensity") return { ...base, rule: "max_intensity", maxPct: row.limitValue ?? 100 };
   return { ...base, rule: "contact_cap", maxContacts: row.limitValue ?? 0 };
 }
@@ -49,13 +50,29 @@ export async function listRestrictions({
       ],
     });
   }
-  const rows = await Restriction.findAll({ where, order: [["startsOn", "ASC"], ["id", "ASC"]], transaction });
-  const names = await userNames(rows.map((r) => r.createdBy), transaction);
+  const rows = await Restriction.findAll({
+    where,
+    order: [
+      ["startsOn", "ASC"],
+      ["id", "ASC"],
+    ],
+    transaction,
+  });
+  const names = await userNames(
+    rows.map((r) => r.createdBy),
+    transaction,
+  );
   return rows.map((r) => toRestriction(r, names));
 }
 
 /** Every restriction ever set for one athlete, newest start first (the athlete page's history). */
-export async function listAthleteRestrictions({ teamId, athleteId }: { teamId: number; athleteId: number }): Promise<Restriction[]> {
+export async function listAthleteRestrictions({
+  teamId,
+  athleteId,
+}: {
+  teamId: number;
+  athleteId: number;
+}): Promise<Restriction[]> {
   return (await listRestrictions({ teamId, athleteIds: [athleteId] })).reverse();
 }
 
@@ -129,7 +146,11 @@ export async function liftRestriction({
 }
 
 /** The team id of a restriction's athlete, so a handler can check the asker against it; null when unknown. */
-export async function restrictionTeam({ restrictionId }: { restrictionId: number }): Promise<{ teamId: number; athleteId: number } | null> {
+export async function restrictionTeam({
+  restrictionId,
+}: {
+  restrictionId: number;
+}): Promise<{ teamId: number; athleteId: number } | null> {
   const { Restriction } = await db();
   const row = await Restriction.findByPk(restrictionId, { attributes: ["teamId", "athleteId"] });
   return row ? { teamId: row.teamId, athleteId: row.athleteId } : null;
@@ -148,12 +169,21 @@ export type OverrideRow = {
 };
 
 /** Every time a coach planned past one of the athlete's restrictions, newest first. */
-export async function listOverrides({ teamId, athleteId }: { teamId: number; athleteId: number }): Promise<OverrideRow[]> {
+export async function listOverrides({
+  teamId,
+  athleteId,
+}: {
+  teamId: number;
+  athleteId: number;
+}): Promise<OverrideRow[]> {
   const { RestrictionOverride, Restriction } = await db();
   const rows = await RestrictionOverride.findAll({
     where: { teamId, athleteId },
     include: [{ model: Restriction, as: "restriction" }],
-    order: [["createdAt", "DESC"], ["id", "DESC"]],
+    order: [
+      ["createdAt", "DESC"],
+      ["id", "DESC"],
+    ],
   });
   const names = await userNames(rows.flatMap((r) => [r.userId, restrictionOf(r)?.createdBy ?? null]));
   return rows.map((r) => {
@@ -173,4 +203,24 @@ export async function listOverrides({ teamId, athleteId }: { teamId: number; ath
 
 function restrictionOf(row: RestrictionOverrideRow): RestrictionRow | null {
   return (row.get("restriction") as RestrictionRow | undefined) ?? null;
+}
+
+/** Records that a coach planned past a restriction; the new row's id. */
+export async function insertOverride({
+  transaction,
+  ...values
+}: {
+  transaction: Transaction;
+  teamId: number;
+  restrictionId: number;
+  athleteId: number;
+  sessionId: number;
+  sessionDate: string;
+  detail: string;
+  reason: string;
+  userId: number;
+}): Promise<number> {
+  const { RestrictionOverride } = await db();
+  const row = await RestrictionOverride.create(values, { transaction });
+  return row.id;
 }

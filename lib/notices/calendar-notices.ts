@@ -10,7 +10,7 @@ import { getNoticeTeam, getPerson, listAthleteContacts, type NoticeTeam } from "
 import { enqueueMail } from "@/lib/data/outbox";
 import { appUrl } from "@/lib/env";
 import { startOfWeek } from "@/lib/dates/plain-date";
-import type { SessionChange, SessionSnapshot } from "./hooks";
+import type { SessionChange, SessionSnapshot } from "@/lib/plan/changes";
 
 export type CalendarAction =
   { method: "REQUEST"; update: boolean; session: CalendarSession } | { method: "CANCEL"; session: CalendarSession };

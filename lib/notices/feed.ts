@@ -4,7 +4,7 @@ import { buildAthleteFeed, FEED_FORMAT, feedStartDate } from "@/lib/calendar/ath
 import { feedSessionsStamp, readFeedRender, saveFeedRender } from "@/lib/data/calendar-feed";
 import { getFeedHead, listAthleteSessions } from "@/lib/data/calendar-tokens";
 import { appUrl } from "@/lib/env";
-import { tokenFromSegment } from "./feed-url";
+import { tokenFromSegment } from "@/lib/calendar/feed-url";
 
 export type ServedFeed = {
   ics: string;

@@ -1,41 +1,17 @@
 import "server-only";
 import type { Transaction } from "sequelize";
-import type { BlockInput } from "@/lib/load/types";
 import { getAthleteSessionDate } from "@/lib/data/alerts";
+import type { SessionChange } from "@/lib/plan/changes";
 import { queueCalendarNotices } from "./calendar-notices";
 import { evaluateLoadAlerts } from "./load-alerts";
 import { splitAthleteMoves } from "./session-changes";
 import { kickOutbox } from "./outbox-worker";
 
 /**
- * The seam between plan/log writes and notices (alerts, e-mail, calendar invitations). Writers call these
- * inside the same transaction as their change, so a notice is recorded exactly when the change commits
- * (and rolled back with it). Delivery happens later, from the outbox.
+ * The seam between plan/log writes and notices (alerts, e-mail, calendar invitations). The services
+ * (lib/services) call these inside the same transaction as their change, so a notice is recorded exactly when
+ * the change commits (and rolled back with it). Delivery happens later, from the outbox.
  */
-export type SessionSnapshot = {
-  id: number;
-  athleteId: number;
-  date: string;
-  startTime: string;
-  durationMin: number;
-  title: string;
-  plannedRpe: number;
-  status: "draft" | "published" | "cancelled";
-  sequence: number;
-  updatedAt: Date;
-  notes: string | null;
-  blocks: BlockInput[];
-};
-
-export type SessionChange = {
-  kind: "created" | "updated" | "deleted" | "published";
-  athleteId: number;
-  sessionId: number;
-  /** State before the change (null when created). */
-  before: SessionSnapshot | null;
-  /** State after the change (null when deleted). */
-  after: SessionSnapshot | null;
-};
 
 function wakeOutboxOnCommit(transaction: Transaction) {
   transaction.afterCommit(() => kickOutbox());

@@ -1,7 +1,7 @@
 import { newToken } from "@/lib/auth/tokens";
 import type { SeededClub } from "@/lib/seed/seed-club";
 import type { Db } from "@/models";
-import { sealToken } from "./token-seal";
+import { sealToken } from "@/lib/security/token-seal";
 
 /**
  * Demo notices setup: every athlete gets a calendar-feed link, the physio hears about each alert, the head

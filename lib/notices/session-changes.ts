@@ -1,4 +1,4 @@
-import type { SessionChange } from "./hooks";
+import type { SessionChange } from "@/lib/plan/changes";
 
 /**
  * A session moved to another athlete is, for notices, two changes: it left the first athlete (their load drops,

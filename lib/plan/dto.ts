@@ -1,4 +1,4 @@
-import type { SessionSnapshot } from "@/lib/notices/hooks";
+import type { SessionSnapshot } from "./changes";
 import type { BlockKind, PlyoDrill, RunningPrescription, SessionStatus } from "@/lib/load/types";
 import { toBlockInput } from "./blocks";
 import type { PlanBlock, PlanSession, PlanTemplate } from "./types";

@@ -7,7 +7,7 @@ import { describe, expect, it } from "vitest";
 import { GET } from "@/app/api/calendar/[token]/route";
 import { rotateCalendarToken } from "@/lib/data/calendar-tokens";
 import { serveFeedForSegment } from "@/lib/notices/feed";
-import { deleteSession, updateSession } from "@/lib/data/plan-sessions";
+import { deleteSession, updateSession } from "@/lib/services/plan-sessions";
 import { updateSessionSchema } from "@/lib/validations/plan";
 import { createTestTeam } from "../helpers/fixtures";
 import { setupNotices } from "./notices-setup";

@@ -5,7 +5,7 @@ import { describe, expect, it, vi } from "vitest";
 import { GET } from "@/app/api/calendar/[token]/route";
 import { getCalendarFeedStatus, revokeCalendarToken, rotateCalendarToken } from "@/lib/data/calendar-tokens";
 import { hashToken } from "@/lib/auth/tokens";
-import { updateSession } from "@/lib/data/plan-sessions";
+import { updateSession } from "@/lib/services/plan-sessions";
 import { updateSessionSchema } from "@/lib/validations/plan";
 import { createTestTeam } from "../helpers/fixtures";
 import { setupNotices } from "./notices-setup";

@@ -3,8 +3,8 @@
 import ICAL from "ical.js";
 import { describe, expect, it } from "vitest";
 import { readRawMail, type StoredMail } from "@/lib/mail/mailbox";
-import { publishWeek } from "@/lib/data/plan";
-import { createSessions, deleteSession, updateSession } from "@/lib/data/plan-sessions";
+import { publishWeek } from "@/lib/services/plan-week";
+import { createSessions, deleteSession, updateSession } from "@/lib/services/plan-sessions";
 import { createSessionSchema, updateSessionSchema } from "@/lib/validations/plan";
 import { createTestTeam } from "../helpers/fixtures";
 import { setupNotices } from "./notices-setup";

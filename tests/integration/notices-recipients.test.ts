@@ -6,7 +6,7 @@ import { teamToday } from "@/lib/dates/zoned";
 import { listAlertRecipients, listAthleteContacts, listDigestSubscribers } from "@/lib/data/notification-settings";
 import { addMember, removeMember } from "@/lib/data/members";
 import { enqueueMail, listOutbox } from "@/lib/data/outbox";
-import { createSessions } from "@/lib/data/plan-sessions";
+import { createSessions } from "@/lib/services/plan-sessions";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { addMemberSchema } from "@/lib/validations/members";
 import { createSessionSchema } from "@/lib/validations/plan";

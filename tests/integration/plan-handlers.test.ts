@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
-import type { SessionChange } from "@/lib/notices/hooks";
+import type { SessionChange } from "@/lib/plan/changes";
 import type { PlanSession, PlanWeek, PlanWriteResult } from "@/lib/plan/types";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { rowLoad } from "@/lib/plan/preview";

@@ -2,11 +2,11 @@ import { describe, expect, it } from "vitest";
 import type { Flag } from "@/lib/load";
 import { calendarActionFor } from "@/lib/notices/calendar-notices";
 import { lastDigestSlot } from "@/lib/notices/digests";
-import { feedUrl, tokenFromSegment, webcalUrl } from "@/lib/notices/feed-url";
-import type { SessionChange, SessionSnapshot } from "@/lib/notices/hooks";
+import { feedUrl, tokenFromSegment, webcalUrl } from "@/lib/calendar/feed-url";
+import type { SessionChange, SessionSnapshot } from "@/lib/plan/changes";
 import { strongestByKind } from "@/lib/notices/load-alerts";
 import { splitAthleteMoves } from "@/lib/notices/session-changes";
-import { sealToken, unsealToken } from "@/lib/notices/token-seal";
+import { sealToken, unsealToken } from "@/lib/security/token-seal";
 
 const snap = (over: Partial<SessionSnapshot> = {}): SessionSnapshot => ({
   id: 7,

@@ -1,6 +1,7 @@
 import { requireAthlete } from "@/lib/auth/access";
 import { scopeOf } from "@/lib/auth/permissions";
-import { deleteSession, findSessionRef, getSession, updateSession } from "@/lib/data/plan";
+import { findSessionRef, getSession } from "@/lib/data/plan";
+import { deleteSession, updateSession } from "@/lib/services/plan-sessions";
 import { AppError } from "@/lib/errors";
 import { parseJson, parseParams, parseQuery, route } from "@/lib/http";
 import { sessionParamsSchema, updateSessionSchema, versionQuerySchema } from "@/lib/validations/plan";

@@ -1,4 +1,4 @@
-import { addBlock } from "@/lib/data/plan";
+import { addBlock } from "@/lib/services/plan-sessions";
 import { parseJson, route } from "@/lib/http";
 import { addBlockSchema } from "@/lib/validations/plan";
 import { answer, sessionEditor } from "../session-access";

@@ -1,7 +1,8 @@
 import { requireAthlete } from "@/lib/auth/access";
 import { scopeOf } from "@/lib/auth/permissions";
 import { teamToday } from "@/lib/dates/zoned";
-import { deleteSessionLog, getLogTarget, saveSessionLog } from "@/lib/data/logs";
+import { getLogTarget } from "@/lib/data/logs";
+import { deleteSessionLog, saveSessionLog } from "@/lib/services/session-logs";
 import { AppError } from "@/lib/errors";
 import { parseJson, parseParams, route } from "@/lib/http";
 import { sessionLogSchema } from "@/lib/validations/log";

@@ -1,5 +1,5 @@
 import { requireMember } from "@/lib/auth/access";
-import { createSessions } from "@/lib/data/plan";
+import { createSessions } from "@/lib/services/plan-sessions";
 import { parseJson, parseParams, route } from "@/lib/http";
 import { answer } from "@/app/api/sessions/[sessionId]/session-access";
 import { createSessionSchema, teamParamsSchema } from "@/lib/validations/plan";

@@ -1,4 +1,4 @@
-import { changeBlock } from "@/lib/data/plan";
+import { changeBlock } from "@/lib/services/plan-sessions";
 import { parseJson, parseParams, parseQuery, route } from "@/lib/http";
 import { blockParamsSchema, updateBlockSchema, versionQuerySchema } from "@/lib/validations/plan";
 import { answer, sessionEditor } from "../../session-access";

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { requireMember } from "@/lib/auth/access";
-import { clearWeek, copyWeekToNext, publishWeek } from "@/lib/data/plan";
+import { clearWeek, copyWeekToNext, publishWeek } from "@/lib/services/plan-week";
 import { parseJson, parseParams, route } from "@/lib/http";
 import { idSchema, weekToolSchema } from "@/lib/validations/plan";
 

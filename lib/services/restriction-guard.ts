@@ -1,19 +1,17 @@
 import "server-only";
 import type { Transaction } from "sequelize";
 import { restrictionOverrideEmail } from "@/emails/restriction-override";
+import { addOverrideAlert } from "@/lib/data/alerts";
+import { athleteNames } from "@/lib/data/athletes";
+import { getNoticeTeam, getPerson, listAlertRecipients } from "@/lib/data/notification-settings";
+import { enqueueMail } from "@/lib/data/outbox";
+import { insertOverride, listRestrictions } from "@/lib/data/restrictions";
 import { AppError } from "@/lib/errors";
 import { appUrl } from "@/lib/env";
 import { startOfWeek } from "@/lib/dates/plain-date";
-import type { SessionChange } from "@/lib/notices/hooks";
 import { kickOutbox } from "@/lib/notices/outbox-worker";
+import type { Override, SessionChange } from "@/lib/plan/changes";
 import { newHits, restrictionHits, type RestrictionHit } from "@/lib/restrictions/rules";
-import { db } from "@/models";
-import { getNoticeTeam, getPerson, listAlertRecipients } from "./notification-settings";
-import { enqueueMail } from "./outbox";
-import { listRestrictions } from "./restrictions";
-
-/** A coach's reason to plan past a restriction, sent with the write. */
-export type Override = { reason: string };
 
 type Hit = RestrictionHit & { sessionId: number };
 
@@ -75,71 +73,28 @@ async function recordOverrides({
   hits: readonly Hit[];
   reason: string;
 }) {
-  const { RestrictionOverride, Alert, Athlete } = await db();
   const team = await getNoticeTeam({ teamId, transaction });
   const coach = await getPerson({ userId: actorUserId, transaction });
   const staff = (await listAlertRecipients({ teamId, transaction })).filter(
     (r) => r.role === "physio" && r.alertEmail === "each" && r.userId !== actorUserId,
   );
-  const athletes = await Athlete.findAll({
-    where: { id: [...new Set(hits.map((h) => h.athleteId))] },
-    attributes: ["id", "name"],
-    transaction,
-  });
-  const nameOf = new Map(athletes.map((a) => [a.id, a.name]));
+  const nameOf = await athleteNames({ athleteIds: hits.map((h) => h.athleteId), transaction });
   for (const h of hits) {
-    const row = await RestrictionOverride.create(
-      {
-        teamId,
-        restrictionId: h.restrictionId,
-        athleteId: h.athleteId,
-        sessionId: h.sessionId,
-        sessionDate: h.date,
-        detail: h.detail,
-        reason,
-        userId: actorUserId,
-      },
-      { transaction },
-    );
+    const overrideId = await insertOverride({
+      transaction,
+      teamId,
+      restrictionId: h.restrictionId,
+      athleteId: h.athleteId,
+      sessionId: h.sessionId,
+      sessionDate: h.date,
+      detail: h.detail,
+      reason,
+      userId: actorUserId,
+    });
     const athleteName = nameOf.get(h.athleteId) ?? "An athlete";
     const text = `${coach?.name ?? "A coach"} planned ${h.detail} on this day against "${h.rule}". Reason: ${reason}`;
-    // One unresolved alert per athlete × kind × week (a database rule): a second override that week joins it.
     const weekStart = startOfWeek(h.date, team?.weekStartDay ?? 1);
-    const open = await Alert.findOne({
-      where: { athleteId: h.athleteId, kind: "restriction_override", weekStart, status: ["open", "acknowledged"] },
-      transaction,
-    });
-    if (open)
-      await open.update(
-        { reason: `${open.reason}\n${text}`, value: open.value + 1, date: h.date, flagged: true },
-        { transaction },
-      );
-    else {
-      await Alert.create(
-        {
-          teamId,
-          athleteId: h.athleteId,
-          kind: "restriction_override",
-          level: "caution",
-          metric: null,
-          value: 1,
-          threshold: 0,
-          date: h.date,
-          weekStart,
-          basis: "planned",
-          reason: text,
-          provisional: false,
-          flagged: true,
-          status: "open",
-          note: null,
-          acknowledgedBy: null,
-          acknowledgedAt: null,
-          resolvedBy: null,
-          resolvedAt: null,
-        },
-        { transaction },
-      );
-    }
+    await addOverrideAlert({ transaction, teamId, athleteId: h.athleteId, date: h.date, weekStart, text });
     for (const r of staff) {
       await enqueueMail({
         transaction,
@@ -157,7 +112,7 @@ async function recordOverrides({
           reason,
           athleteUrl: `${appUrl().replace(/\/+$/, "")}/squad/${h.athleteId}`,
         }),
-        dedupeKey: `override:${row.id}:user:${r.userId}`,
+        dedupeKey: `override:${overrideId}:user:${r.userId}`,
       });
     }
   }

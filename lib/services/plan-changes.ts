@@ -1,0 +1,71 @@
+import "server-only";
+import type { Transaction } from "sequelize";
+import type { Loaded } from "@/lib/data/plan-rows";
+import { AppError } from "@/lib/errors";
+import { afterPlanChange } from "@/lib/notices/hooks";
+import type { Override, SessionChange } from "@/lib/plan/changes";
+import { toSnapshot } from "@/lib/plan/dto";
+import type { PlanSession, PlanWriteResult, Touched } from "@/lib/plan/types";
+import { guardRestrictions } from "./restriction-guard";
+
+// What a plan write changed, and the one step every plan write ends in (notify).
+
+export function notCancelled(s: PlanSession) {
+  if (s.status === "cancelled")
+    throw new AppError("conflict", "This session is cancelled. Bring it back before changing it.");
+}
+
+/** Every write bumps version; a write to a session athletes were sent also bumps the iCalendar SEQUENCE. */
+export function bumped(s: Pick<PlanSession, "version" | "sequence" | "status">) {
+  return { version: s.version + 1, sequence: s.status === "draft" ? s.sequence : s.sequence + 1 };
+}
+
+function snapshotOf(l: Loaded | undefined | null) {
+  return l ? toSnapshot(l.dto, l.updatedAt) : null;
+}
+
+export function change(kind: SessionChange["kind"], before: Loaded | null, after: Loaded | null): SessionChange {
+  const ref = (after ?? before)!.dto;
+  return { kind, athleteId: ref.athleteId, sessionId: ref.id, before: snapshotOf(before), after: snapshotOf(after) };
+}
+
+/**
+ * Every plan write ends here, inside its transaction: physio restrictions are checked first (a write that
+ * breaks one without a reason throws and rolls back), then notices are recorded, so a notice exists exactly
+ * when the change commits.
+ */
+export async function notify({
+  transaction,
+  teamId,
+  actorUserId,
+  changes,
+  override,
+}: {
+  transaction: Transaction;
+  teamId: number;
+  actorUserId: number;
+  changes: SessionChange[];
+  override?: Override | null;
+}) {
+  if (changes.length === 0) return;
+  await guardRestrictions({ transaction, teamId, actorUserId, changes, override });
+  await afterPlanChange({ transaction, teamId, actorUserId, changes });
+}
+
+/** The athletes' days a list of changes touched, each once. */
+export function touchedBy(changes: readonly SessionChange[]): Touched[] {
+  const seen = new Map<string, Touched>();
+  for (const c of changes) {
+    for (const s of [c.before, c.after])
+      if (s) seen.set(`${s.athleteId}:${s.date}`, { athleteId: s.athleteId, date: s.date });
+  }
+  return [...seen.values()];
+}
+
+export function writeResult(
+  after: Iterable<Loaded>,
+  changes: readonly SessionChange[],
+  removedIds: number[] = [],
+): PlanWriteResult {
+  return { sessions: [...after].map((l) => l.dto), removedIds, touched: touchedBy(changes) };
+}
