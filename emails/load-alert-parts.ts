@@ -23,12 +23,12 @@ export interface LoadAlertItem {
   explainUrl?: string | null;
 }
 
-export function formatMetricValue(value: number, unit?: string | null): string {
+function formatMetricValue(value: number, unit?: string | null): string {
   const u = unit?.trim();
   return u ? `${formatNumber(value, 2)} ${u}` : formatNumber(value, 2);
 }
 
-export function basisLabel(basis: LoadAlertItem["basis"]): string {
+function basisLabel(basis: LoadAlertItem["basis"]): string {
   return basis === "planned" ? "Planned sessions" : "Logged sessions";
 }
 

@@ -3,8 +3,6 @@ import { LOAD_FLAG_CAUTION } from "@/lib/format/load-caution";
 import { renderEmail, type RenderedEmail } from "./layout";
 import { alertFacts, type LoadAlertItem } from "./load-alert-parts";
 
-export type { LoadAlertItem } from "./load-alert-parts";
-
 export interface LoadAlertEmailInput extends LoadAlertItem {
   recipientName?: string | null;
   teamName: string;

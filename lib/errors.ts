@@ -45,7 +45,3 @@ export class AppError extends Error {
     this.details = opts.details;
   }
 }
-
-export const notFound = (what = "Not found") => new AppError("not_found", what);
-export const forbidden = (what = "You do not have access to this") => new AppError("forbidden", what);
-export const invalid = (message: string, fields?: FieldErrors) => new AppError("invalid", message, { fields });

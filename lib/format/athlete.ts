@@ -4,10 +4,3 @@ export function formatSpeed(ms: number | null | undefined): string {
   if (ms == null) return "untested";
   return `${ms.toFixed(2)} m/s · ${(ms * 3.6).toFixed(1)} km/h`;
 }
-
-export function ageOn(birthDate: string | null, onDate: string): number | null {
-  if (!birthDate) return null;
-  const [by, bm, bd] = birthDate.split("-").map(Number);
-  const [y, m, d] = onDate.split("-").map(Number);
-  return y - by - (m < bm || (m === bm && d < bd) ? 1 : 0);
-}

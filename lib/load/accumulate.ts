@@ -10,7 +10,6 @@ import {
   DEFAULT_VMAX,
   type AthleteProfile,
   type BlockInput,
-  type Completion,
   type LogInput,
   type PlyoLevel,
   type SessionInput,
@@ -44,7 +43,7 @@ export const ACC_SIZE = 17;
 const GRID = 201;
 /** Thresholds per memo cell, in this order: absolute HSR, absolute sprint, relative HSR, near-max, maximal. */
 const BANDS = 5;
-export const BAND_ABS_HSR = 0;
+const BAND_ABS_HSR = 0;
 export const BAND_NEAR = 3;
 /** Memo cells per start class: GRID grid cells and one scratch cell, BANDS thresholds each. */
 const CLASS_CELLS = (GRID + 1) * BANDS;
@@ -55,7 +54,7 @@ const CLASS_CELLS = (GRID + 1) * BANDS;
  * fitted from (Salo & Bezodis 2004, Sports Biomech 3:43, found no speed difference between them by 10 m).
  * Start class 1 = blocks, 0 = everything else.
  */
-export const BLOCKS_TAU_FACTOR = 0.95;
+const BLOCKS_TAU_FACTOR = 0.95;
 
 /** Profile with defaults filled in and the speed thresholds precomputed (m/s). */
 export interface ResolvedProfile {
@@ -250,9 +249,6 @@ function addScaledBlock(acc: Float64Array, block: BlockInput, rp: ResolvedProfil
   }
 }
 
-/** Share of the prescription a log without per-block reps stands for. */
-export const COMPLETION_FACTOR: Record<Completion, number> = { yes: 1, partly: 0.5, no: 0 };
-
 /** Session load in AU = session RPE (CR-10) × duration in minutes (Foster et al. 2001, JSCR 15:109). */
 export function srpe(rpe: number, minutes: number): number {
   return nonNeg(rpe) * nonNeg(minutes);
@@ -277,7 +273,7 @@ export function evaluateSessionInto(
   let factor = 1;
   if (log) {
     const c = log.completion;
-    factor = c === "yes" ? 1 : c === "partly" ? 0.5 : 0; // COMPLETION_FACTOR, spelt out for the hot path
+    factor = c === "yes" ? 1 : c === "partly" ? 0.5 : 0; // the share of the prescription a log without per-block reps stands for
     if (factor === 0) return;
   }
   const done = log ? log.completedReps : null;

@@ -14,7 +14,7 @@ export function ewmaLambda(n: number): number {
  * EWMA_t = λ·load_t + (1 − λ)·EWMA_{t−1} (Williams et al. 2017), seeded with the first value: the one seed the
  * app uses (lib/load/README.md §6), the same as pandas `ewm(span=N, adjust=False)`.
  */
-export function ewmaInto(values: ArrayLike<number>, n: number, out: Float64Array): Float64Array {
+function ewmaInto(values: ArrayLike<number>, n: number, out: Float64Array): Float64Array {
   const len = values.length;
   if (len === 0) return out;
   const lambda = ewmaLambda(n);
@@ -48,7 +48,7 @@ export function allocAcwrColumns(length: number): AcwrColumns {
  * subtraction would leave rounding residue and invent ratios). Early days average the days available
  * (SQLite's AVG over a short frame does the same); the uncoupled chronic window is empty (0) before day 8.
  */
-export function acwrInto(
+function acwrInto(
   values: ArrayLike<number>,
   method: AcwrMethod,
   out: AcwrColumns,
@@ -204,11 +204,7 @@ export interface AcwrSeries {
 }
 
 /** Fewer than minHistoryDays of history behind day i; firstDataIndex null = no data on record. */
-export function isProvisional(
-  i: number,
-  firstDataIndex: number | null,
-  minHistoryDays = ACWR_MIN_HISTORY_DAYS,
-): boolean {
+function isProvisional(i: number, firstDataIndex: number | null, minHistoryDays = ACWR_MIN_HISTORY_DAYS): boolean {
   return firstDataIndex === null || i - firstDataIndex + 1 < minHistoryDays;
 }
 

@@ -184,7 +184,7 @@ export function weekFromColumns(
   return { week: { ...week, ...weekExtras(sessions, weekStartDay) }, flags };
 }
 
-export interface AthleteLoadDay {
+interface AthleteLoadDay {
   date: string;
   values: MetricValues;
   acute: MetricValues;

@@ -19,7 +19,7 @@ import {
 import { weightedContacts } from "./plyo";
 import type { AthleteProfile, BlockInput, ContactsByIntensity, SpeedBands, TeamLoadSettings } from "./types";
 
-export { nonNeg, prescribedReps, resolveProfile, type ResolvedProfile } from "./accumulate";
+export { prescribedReps, resolveProfile } from "./accumulate";
 
 export interface BlockMetrics {
   /** All running metres, run-in included. */

@@ -1,7 +1,7 @@
 import type { FlagKind } from "./flags";
 
 /** The signed-in page that explains every figure ("How figures are worked out"). */
-export const FIGURES_PATH = "/figures";
+const FIGURES_PATH = "/figures";
 
 /** Sections of the explanation page; each is an anchor id on it. */
 export type FiguresTopic =

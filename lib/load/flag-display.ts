@@ -1,11 +1,11 @@
-import type { FlagKind, FlagLevel } from "./flags";
+import type { FlagKind } from "./flags";
 
 /** Shown wherever flags are shown. */
 export const LOAD_CAUTION =
   "Load flags are monitoring aids, not diagnoses. They describe training numbers only; decide with the athlete's " +
   "medical staff and follow your local rules.";
 
-export type FlagColour = "rose" | "amber" | "sky" | "orange" | "violet" | "teal";
+type FlagColour = "rose" | "amber" | "sky" | "orange" | "violet" | "teal";
 
 export interface FlagClasses {
   /** Badge background + text + border, e.g. for a pill. */
@@ -24,7 +24,7 @@ export interface FlagDisplay {
 }
 
 // Full class strings (not built by concatenation) so Tailwind's source scan finds them.
-export const FLAG_COLOUR_CLASSES: Record<FlagColour, FlagClasses> = {
+const FLAG_COLOUR_CLASSES: Record<FlagColour, FlagClasses> = {
   rose: { badge: "bg-rose-50 text-rose-800 border-rose-200", dot: "bg-rose-500", text: "text-rose-700" },
   amber: { badge: "bg-amber-50 text-amber-800 border-amber-200", dot: "bg-amber-500", text: "text-amber-700" },
   sky: { badge: "bg-sky-50 text-sky-800 border-sky-200", dot: "bg-sky-500", text: "text-sky-700" },
@@ -61,12 +61,6 @@ export const FLAG_DISPLAY: Record<FlagKind, FlagDisplay> = {
     hint: "Two high-intensity sessions closer together than the recovery window.",
     colour: "teal",
   },
-};
-
-export const FLAG_LEVEL_DISPLAY: Record<FlagLevel, { label: string; colour: FlagColour }> = {
-  alert: { label: "Alert", colour: "rose" },
-  caution: { label: "Caution", colour: "amber" },
-  info: { label: "Note", colour: "sky" },
 };
 
 export function flagClasses(kind: FlagKind): FlagClasses {

@@ -31,81 +31,11 @@
  *   packSessions(sessions, logs) (packed.ts), the same numbers in typed-array columns, which the daily sums
  *   read instead of the objects (identical results; tests/unit/load/packed.test.ts).
  */
+// Only what callers import from "@/lib/load"; everything else is imported from its own module.
 export * from "./types";
-export { formatNumber, formatRatio } from "./format";
-export {
-  velocityAt,
-  accelerationAt,
-  distanceAt,
-  timeToDistance,
-  metresAtOrAbove,
-  distanceToReach,
-  msToKmh,
-  kmhToMs,
-  averageSpeed,
-  percentOfVmax,
-  type RepShape,
-} from "./sprint-model";
-export { blockMetrics, resolveProfile, prescribedReps, type BlockMetrics, type ResolvedProfile } from "./block-metrics";
-export { srpe, sessionMetrics, actualSessionMetrics, COMPLETION_FACTOR, type SessionMetrics } from "./session-metrics";
-export {
-  dailySeries,
-  weeklyTotals,
-  sessionUse,
-  indexLogs,
-  alignLogs,
-  effectiveSessions,
-  type DailySeries,
-  type DailySeriesInput,
-  type WeeklyTotals,
-  type SessionUse,
-  type AlignedLogs,
-  type EffectiveSession,
-} from "./series";
-export {
-  ewma,
-  ewmaLambda,
-  acwrSeries,
-  coupledRatio,
-  uncoupledRatio,
-  uncoupledFromCoupled,
-  coupledFromUncoupled,
-  ACUTE_DAYS,
-  CHRONIC_DAYS,
-  ACWR_MIN_HISTORY_DAYS,
-  type AcwrSeries,
-  type AcwrOptions,
-} from "./acwr";
-export { monotony, monotonyOfWindow, strain, DEFAULT_SD_TYPE, type SdType } from "./monotony";
-export { weeklyChangePct, exceedsWeeklyLimit } from "./weekly-change";
-export { contactBand, aboveContactBand, drillContacts, PLYO_CONTACT_BANDS, type ContactBand } from "./plyo";
-export {
-  computeFlags,
-  topFlagLevel,
-  type Flag,
-  type FlagKind,
-  type FlagLevel,
-  type FlagInput,
-  type FlagSession,
-} from "./flags";
-export {
-  LOAD_CAUTION,
-  FLAG_DISPLAY,
-  FLAG_LEVEL_DISPLAY,
-  FLAG_COLOUR_CLASSES,
-  flagClasses,
-  type FlagColour,
-  type FlagDisplay,
-  type FlagClasses,
-} from "./flag-display";
-export { summariseWeek, type WeekSummary } from "./week-summary";
-export { computeAthleteLoad, type AthleteLoad, type AthleteLoadDay, type AthleteLoadInput } from "./athlete-load";
-export {
-  computeWeekPreview,
-  buildWeekPreviewContext,
-  type WeekPreviewInput,
-  type WeekPreviewContext,
-  type WeekPreviewContextInput,
-} from "./week-preview";
-export { computeSquadWeek, type SquadAthleteInput, type SquadWeekRow } from "./squad";
-export { packSessions, type PackedSessions } from "./packed";
+export { prescribedReps } from "./block-metrics";
+export type { Flag, FlagLevel } from "./flags";
+export type { WeekSummary } from "./week-summary";
+export { computeAthleteLoad, type AthleteLoad } from "./athlete-load";
+export { computeSquadWeek } from "./squad";
+export { packSessions } from "./packed";

@@ -11,7 +11,6 @@ import { alignLogs, type AlignedLogs } from "./align-logs";
 import type { BlockInput, LogInput, SessionInput } from "./types";
 
 const STATUS = { draft: 0, published: 1, cancelled: 2 } as const;
-export const PACKED_CANCELLED = STATUS.cancelled;
 /** Status code → status, indexed by the codes above. */
 export const PACKED_STATUS: readonly SessionInput["status"][] = ["draft", "published", "cancelled"];
 

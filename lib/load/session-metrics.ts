@@ -25,7 +25,7 @@ import type {
   TeamLoadSettings,
 } from "./types";
 
-export { COMPLETION_FACTOR, evaluateSessionInto, srpe } from "./accumulate";
+export { srpe } from "./accumulate";
 
 export interface SessionMetrics {
   metrics: MetricValues;

@@ -16,8 +16,8 @@ export const BLOCK_KINDS: readonly BlockKind[] = [
 
 // What each kind counts as (running, sprint metres, contacts, recovery): lib/load/block-kinds.ts.
 
-export type StartType = "standing" | "crouch" | "blocks" | "flying";
-export type PlyoIntensity = "low" | "moderate" | "high";
+type StartType = "standing" | "crouch" | "blocks" | "flying";
+type PlyoIntensity = "low" | "moderate" | "high";
 export type PlyoLevel = "beginner" | "intermediate" | "advanced";
 
 export interface RunningPrescription {

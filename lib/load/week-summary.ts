@@ -39,7 +39,7 @@ export function sumWindow(col: ArrayLike<number>, from: number, to: number): num
   return s;
 }
 
-export function ratioAt(ratio: ArrayLike<number | null>, i: number): number | null {
+function ratioAt(ratio: ArrayLike<number | null>, i: number): number | null {
   const r = ratio[i];
   return typeof r === "number" && Number.isFinite(r) ? r : null;
 }

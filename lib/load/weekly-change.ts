@@ -1,5 +1,5 @@
 /** Tolerance for threshold comparisons, so a value that prints as exactly the threshold is judged as equal. */
-export const THRESHOLD_EPSILON = 1e-9;
+const THRESHOLD_EPSILON = 1e-9;
 
 /** Δ% = (W_t − W_{t−1}) / W_{t−1} × 100; null when last week was 0 (undefined). Multiplying first keeps 15 exact. */
 export function weeklyChangePct(prev: number, cur: number): number | null {

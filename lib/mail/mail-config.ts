@@ -2,7 +2,7 @@ import path from "node:path";
 import { z } from "zod";
 
 const DEFAULT_SMTP_URL = "smtp://127.0.0.1:2525";
-export const DEFAULT_MAIL_FROM = "Sprintwright <no-reply@sprintwright.local>";
+const DEFAULT_MAIL_FROM = "Sprintwright <no-reply@sprintwright.local>";
 
 // Empty strings in .env files mean "not set".
 const optional = <T extends z.ZodType>(schema: T) =>
@@ -40,7 +40,7 @@ export interface MailConfig {
 
 const LOOPBACK = new Set(["127.0.0.1", "::1", "[::1]", "localhost"]);
 
-export function isLoopbackHost(host: string): boolean {
+function isLoopbackHost(host: string): boolean {
   return LOOPBACK.has(host.toLowerCase()) || /^127(\.\d{1,3}){3}$/.test(host);
 }
 

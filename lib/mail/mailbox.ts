@@ -35,7 +35,7 @@ export type MailSummary = Pick<StoredMail, "id" | "receivedAt" | "from" | "to" |
 const MAIL_ID = /^\d{8}T\d{9}Z-[0-9a-f]{8}$/;
 let lastStamp = 0;
 
-export class InvalidMailIdError extends RangeError {
+class InvalidMailIdError extends RangeError {
   constructor(id: string) {
     super(`Not a mailbox id: "${id.slice(0, 80)}"`);
     this.name = "InvalidMailIdError";

@@ -2,7 +2,7 @@ import nodemailer, { type Transporter } from "nodemailer";
 import type SMTPTransport from "nodemailer/lib/smtp-transport";
 import { readMailConfig, type MailConfig } from "./mail-config";
 
-export interface MailAttachment {
+interface MailAttachment {
   filename: string;
   content: string | Buffer;
   contentType?: string;
@@ -23,7 +23,7 @@ export interface OutgoingMail {
 let cached: { key: string; transport: Transporter<SMTPTransport.SentMessageInfo> } | null = null;
 
 /** The nodemailer transport for the configured SMTP server (cached while the settings stay the same). */
-export function getMailTransport(config: MailConfig = readMailConfig()): Transporter<SMTPTransport.SentMessageInfo> {
+function getMailTransport(config: MailConfig = readMailConfig()): Transporter<SMTPTransport.SentMessageInfo> {
   const options: SMTPTransport.Options = {
     host: config.host,
     port: config.port,

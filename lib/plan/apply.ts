@@ -128,7 +128,7 @@ export function sessionsAfter(week: PlanWeek, change: PlanChange, tempId: TempId
 }
 
 /** Replaces the touched athletes' sessions; untouched rows keep their identity (cheap re-renders). */
-export function withSessions(
+function withSessions(
   week: PlanWeek,
   changed: ReadonlyMap<number, PlanSession[]>,
   load?: (a: PlanAthlete, sessions: PlanSession[]) => PlanAthlete["load"],

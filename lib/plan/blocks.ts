@@ -26,7 +26,7 @@ export function blockFromTemplate(t: PlanTemplate): BlockContent {
 }
 
 /** Default start of a session made from a template. */
-export const DEFAULT_START_TIME = "16:00";
+const DEFAULT_START_TIME = "16:00";
 
 /** Fields of a new session made by dropping a template: title, duration and RPE come from the template. */
 export function sessionFieldsFromTemplate(t: PlanTemplate) {

@@ -48,7 +48,7 @@ export function findSession(week: PlanWeek, sessionId: number): PlanSession | nu
   return null;
 }
 
-export function sessionsOn(week: PlanWeek, athleteId: number, date: string): PlanSession[] {
+function sessionsOn(week: PlanWeek, athleteId: number, date: string): PlanSession[] {
   return week.athletes.find((a) => a.id === athleteId)?.sessions.filter((s) => s.date === date) ?? [];
 }
 

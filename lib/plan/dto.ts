@@ -6,7 +6,7 @@ import type { PlanBlock, PlanSession, PlanTemplate } from "./types";
 // Mapping from plain database rows (model.get({ plain: true })) to the JSON the grid reads.
 
 /** SQLite hands JSON columns back as text on some paths; accept both. */
-export function jsonValue<T>(value: unknown): T | null {
+function jsonValue<T>(value: unknown): T | null {
   if (value === null || value === undefined) return null;
   if (typeof value !== "string") return value as T;
   try {
@@ -16,7 +16,7 @@ export function jsonValue<T>(value: unknown): T | null {
   }
 }
 
-export type BlockRow = {
+type BlockRow = {
   id: number;
   templateId: number | null;
   position: number;
@@ -51,7 +51,7 @@ export type TemplateRow = Omit<BlockRow, "templateId" | "position"> & {
   version: number;
 };
 
-export function toPlanBlock(b: BlockRow): PlanBlock {
+function toPlanBlock(b: BlockRow): PlanBlock {
   return {
     id: b.id,
     templateId: b.templateId ?? null,

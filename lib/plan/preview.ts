@@ -40,7 +40,7 @@ function flagKey(f: Flag): string {
 }
 
 /** Flags the change would raise that the row does not have now: what the grid marks on a drop. */
-export function newFlags(before: readonly Flag[], after: readonly Flag[]): Flag[] {
+function newFlags(before: readonly Flag[], after: readonly Flag[]): Flag[] {
   const had = new Set(before.map(flagKey));
   return after.filter((f) => !had.has(flagKey(f)) && f.kind !== "low");
 }

@@ -113,6 +113,3 @@ export type WeekRow = { athleteId: number; weekStart: string; load: RowLoad };
  * the session handlers, the server's week numbers for the touched athletes (so no refetch is needed).
  */
 export type PlanWriteResult = { sessions: PlanSession[]; removedIds: number[]; touched?: Touched[]; rows?: WeekRow[] };
-
-/** The body of a 409 "stale" answer. */
-export type StaleError = { code: "stale"; message: string; current: PlanSession | null };

@@ -13,14 +13,11 @@ export type UndoOp =
   | { op: "reinstate"; sessionId: number }
   | { op: "restore-fields"; sessionId: number; fields: EditableFields };
 
-export type EditableFields = Pick<
-  PlanSession,
-  "startTime" | "durationMin" | "title" | "plannedRpe" | "notes" | "blocks"
->;
+type EditableFields = Pick<PlanSession, "startTime" | "durationMin" | "title" | "plannedRpe" | "notes" | "blocks">;
 
 export type UndoEntry = { label: string; ops: UndoOp[] };
 
-export const UNDO_LIMIT = 20;
+const UNDO_LIMIT = 20;
 
 export function pushUndo(stack: readonly UndoEntry[], entry: UndoEntry, limit = UNDO_LIMIT): UndoEntry[] {
   if (entry.ops.length === 0) return [...stack];

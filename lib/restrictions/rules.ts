@@ -81,7 +81,7 @@ function kindList(kinds: readonly BlockKind[]): string {
 }
 
 /** The rule alone: "No max velocity", "Running at most 85% of vmax", "At most 60 contacts per session". */
-export function describeRule(r: RestrictionRule): string {
+function describeRule(r: RestrictionRule): string {
   switch (r.rule) {
     case "no_kind": {
       const text = kindList(r.blockKinds);

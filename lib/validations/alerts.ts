@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { noteText } from "./text";
 
-export const ALERT_STATUS_FILTERS = ["open", "acknowledged", "resolved", "unresolved", "all"] as const;
+const ALERT_STATUS_FILTERS = ["open", "acknowledged", "resolved", "unresolved", "all"] as const;
 
 export const alertListQuerySchema = z.object({
   status: z.enum(ALERT_STATUS_FILTERS).default("unresolved"),

@@ -4,8 +4,8 @@ import { isLocalDate } from "@/lib/dates/plain-date";
 
 // Plans, logs, load views and restrictions live within these bounds: wide enough for any history a club keeps
 // and any plan it makes, and far enough from year 9999 that week and range arithmetic never leaves four-digit years.
-export const EARLIEST_DATE = "1900-01-01";
-export const LATEST_DATE = "2100-12-31";
+const EARLIEST_DATE = "1900-01-01";
+const LATEST_DATE = "2100-12-31";
 
 const FORMAT = "Enter a date as YYYY-MM-DD";
 

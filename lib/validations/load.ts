@@ -6,12 +6,12 @@ import { idSchema, localDateSchema, startTimeSchema } from "./plan";
 import { blockSchema } from "./template";
 
 /** Longest range one athlete request may cover (two years, the engine's benchmark size). */
-export const MAX_RANGE_DAYS = 731;
+const MAX_RANGE_DAYS = 731;
 
 export const athleteParamsSchema = z.object({ athleteId: idSchema });
 
-export const loadViewSchema = z.enum(["actual", "projected"], { error: 'Choose "actual" or "projected"' });
-export const metricSchema = z.enum(METRICS, { error: `Choose one of ${METRICS.join(", ")}` });
+const loadViewSchema = z.enum(["actual", "projected"], { error: 'Choose "actual" or "projected"' });
+const metricSchema = z.enum(METRICS, { error: `Choose one of ${METRICS.join(", ")}` });
 
 /** GET /api/athletes/[athleteId]/load: range defaults are filled in by the data layer around today. */
 export const athleteLoadQuerySchema = z
@@ -38,10 +38,10 @@ export const squadLoadQuerySchema = z.object({
 export type SquadLoadQuery = z.infer<typeof squadLoadQuerySchema>;
 
 /** A block of a proposed session; id is the saved block's, so reps logged against it still count. */
-export const previewBlockSchema = z.intersection(blockSchema, z.object({ id: idSchema.optional() }));
+const previewBlockSchema = z.intersection(blockSchema, z.object({ id: idSchema.optional() }));
 
 /** A session as the planner holds it while dragging; id is the saved session's id when it already exists. */
-export const previewSessionSchema = z.object({
+const previewSessionSchema = z.object({
   id: z.union([idSchema, lineText().min(1).max(40)]).optional(),
   date: localDateSchema,
   startTime: startTimeSchema.default("16:00"),

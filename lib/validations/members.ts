@@ -2,7 +2,7 @@ import { z } from "zod";
 import { emailText, lineText } from "./text";
 import { ROLES } from "@/lib/auth/roles";
 
-export const roleSchema = z.enum(ROLES, { message: "Choose a role" });
+const roleSchema = z.enum(ROLES, { message: "Choose a role" });
 
 export const addMemberSchema = z.object({
   name: lineText().min(2, "Enter the member's name").max(120, "Keep the name under 120 characters"),

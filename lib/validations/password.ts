@@ -7,8 +7,8 @@ import { COMMON_PASSWORDS } from "./common-passwords";
  * shipped with the app (also with digits or symbols added around it), not a few characters repeated, and not the
  * account's e-mail. Any printable character is allowed, spaces included; there are no composition rules (§2.1.9).
  */
-export const PASSWORD_MIN = 12;
-export const PASSWORD_MAX = 64;
+const PASSWORD_MIN = 12;
+const PASSWORD_MAX = 64;
 const BCRYPT_MAX_BYTES = 72;
 
 export const PASSWORD_HINT = `At least ${PASSWORD_MIN} characters. A few unrelated words make a good one.`;
@@ -41,7 +41,7 @@ export function resemblesEmail(password: string, email: string): boolean {
   return p.includes(e) || p === local || (local.length >= 4 && p.replace(/^[\d\W_]+|[\d\W_]+$/g, "") === local);
 }
 
-export const NOT_EMAIL_MESSAGE = "Do not use your e-mail address as your password";
+const NOT_EMAIL_MESSAGE = "Do not use your e-mail address as your password";
 
 /** The full rule for one account, e.g. `passwordFor(email).safeParse(password)`. */
 export function passwordFor(email: string) {

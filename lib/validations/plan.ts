@@ -42,9 +42,7 @@ export const weekQuerySchema = z.object({ week: localDateSchema.optional() });
 export const weekToolSchema = z.object({ week: localDateSchema, ...overrideField });
 
 /** A block inside a session; `templateId` says which shelf template it was copied from (JSON body: a number). */
-export const sessionBlockSchema = blockSchema.and(
-  z.object({ templateId: z.number().int().positive().nullable().optional() }),
-);
+const sessionBlockSchema = blockSchema.and(z.object({ templateId: z.number().int().positive().nullable().optional() }));
 export type SessionBlockBody = z.infer<typeof sessionBlockSchema>;
 
 /** POST /api/teams/[teamId]/sessions: what the grid or the editor asks for. */

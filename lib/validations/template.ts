@@ -13,11 +13,11 @@ const count = (what: string, max: number) =>
     .min(1, `At least 1`)
     .max(max, `At most ${max}`);
 
-export const startTypeSchema = z.enum(["standing", "crouch", "blocks", "flying"], { error: "Choose a start" });
-export const plyoIntensitySchema = z.enum(["low", "moderate", "high"], { error: "Choose an intensity" });
-export const blockKindSchema = z.enum(BLOCK_KINDS, { error: "Choose a kind" });
+const startTypeSchema = z.enum(["standing", "crouch", "blocks", "flying"], { error: "Choose a start" });
+const plyoIntensitySchema = z.enum(["low", "moderate", "high"], { error: "Choose an intensity" });
+const blockKindSchema = z.enum(BLOCK_KINDS, { error: "Choose a kind" });
 
-export const runningSchema = z
+const runningSchema = z
   .object({
     sets: count("sets", 10),
     reps: count("reps", 30),
@@ -40,7 +40,7 @@ export const runningSchema = z
     }
   });
 
-export const drillSchema = z.object({
+const drillSchema = z.object({
   name: lineText({ error: "Name the drill" }).min(1, "Name the drill").max(80, "Keep it under 80 characters"),
   sets: count("sets", 10),
   reps: count("reps", 30),

@@ -9,7 +9,7 @@ const SINGLE_LINE_FORBIDDEN = /[\p{Cc}\p{Cs}\u2028\u2029]/u;
 // Notes typed into a multi-line box keep their tabs and line breaks (CR, LF, CRLF); nothing else.
 const MULTI_LINE_FORBIDDEN = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F\p{Cs}]/u;
 
-export const CONTROL_MESSAGE = "Remove the control characters (such as NUL or a lone line break)";
+const CONTROL_MESSAGE = "Remove the control characters (such as NUL or a lone line break)";
 const MULTI_LINE_MESSAGE = "Remove the control characters (tabs and line breaks are fine)";
 
 /** A single-line text field (names, titles), trimmed; chain .min/.max for its limits. */

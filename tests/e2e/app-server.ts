@@ -33,7 +33,7 @@ const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
  * Builds the app once per test run into .next-e2e. Parallel test files take a lock directory; the others
  * wait for the marker. E2E_REUSE_BUILD=1 keeps an existing build (handy when iterating on tests only).
  */
-export async function ensureBuilt(): Promise<void> {
+async function ensureBuilt(): Promise<void> {
   const runId = process.env.SPRINTWRIGHT_RUN_ID ?? "manual";
   const marker = join(ROOT, DIST, "sprintwright-run");
   const ready = () =>

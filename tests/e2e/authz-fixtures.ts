@@ -2,7 +2,7 @@
 // own HTTP handlers (as the head coach or physio would) or, where no handler exists, straight in SQLite.
 import { createHash } from "node:crypto";
 import nodemailer from "nodemailer";
-import { DEMO_ATHLETES, DEMO_PASSWORD, DEMO_STAFF } from "@/lib/seed/demo-club";
+import { DEMO_ATHLETES, DEMO_STAFF } from "@/lib/seed/demo-club";
 import { hashPassword } from "@/lib/data/users";
 import { listMail, readMail } from "@/lib/mail/mailbox";
 import { apiSession } from "./harness";
@@ -279,5 +279,3 @@ export class World {
     return this.cached.sum;
   }
 }
-
-export { DEMO_PASSWORD };

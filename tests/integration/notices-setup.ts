@@ -9,7 +9,7 @@ import { listMail, readMail, type StoredMail } from "@/lib/mail/mailbox";
 import { createOutboxWorker, type OutboxWorkerOptions } from "@/lib/notices/outbox-worker";
 import { setupTestDb } from "../helpers/db";
 
-export const APP_URL = "http://sprintwright.test";
+const APP_URL = "http://sprintwright.test";
 
 export async function setupNotices(options: OutboxWorkerOptions = {}) {
   // Before anything reads lib/env (it caches): links in mails point here.

@@ -13,7 +13,7 @@ import { DEFAULT_TEAM_LOAD_SETTINGS } from "@/lib/load/types";
 export const PROFILE: AthleteProfile = { vmax: 10, tau: 1, stepLengthM: 2.2, plyoLevel: "intermediate" };
 export const SETTINGS: TeamLoadSettings = { ...DEFAULT_TEAM_LOAD_SETTINGS };
 
-export function running(overrides: Partial<RunningPrescription> = {}): RunningPrescription {
+function running(overrides: Partial<RunningPrescription> = {}): RunningPrescription {
   return { sets: 1, reps: 1, distanceM: 30, intensityPct: 95, start: "crouch", runInM: 0, restSec: 180, ...overrides };
 }
 

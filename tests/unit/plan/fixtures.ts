@@ -10,11 +10,11 @@ import { addDays, weekDays } from "@/lib/dates/plain-date";
 // Invented athletes and templates; the week is built the way lib/data/plan.ts builds it (same engine calls).
 
 export const WEEK = "2026-03-02"; // a Monday
-export const TODAY = "2026-03-01"; // the Sunday before: the whole week is plan
-export const settings = { ...DEFAULT_TEAM_LOAD_SETTINGS };
-export const profile: AthleteProfile = { vmax: 9.6, tau: 1.15, stepLengthM: 2.15, plyoLevel: "intermediate" };
+const TODAY = "2026-03-01"; // the Sunday before: the whole week is plan
+const settings = { ...DEFAULT_TEAM_LOAD_SETTINGS };
+const profile: AthleteProfile = { vmax: 9.6, tau: 1.15, stepLengthM: 2.15, plyoLevel: "intermediate" };
 
-export const templates: PlanTemplate[] = [
+const templates: PlanTemplate[] = [
   {
     id: 1,
     kind: "max_velocity",
