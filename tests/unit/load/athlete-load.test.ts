@@ -192,7 +192,9 @@ describe("computeWeekPreview (drag preview fast path)", () => {
     expect(after.week.monotony.srpe).not.toBe(before.week.monotony.srpe);
   });
 
-  it("runs well under 1 ms per athlete with two years of history", () => {
+  // Its speed (target < 1 ms per athlete with two years of history) is measured by npm run bench:load, which
+  // times this same call; here only what it computes.
+  it("with two years of history it equals computeAthleteLoad's week and flags", () => {
     const big = synthAthlete(11, "2024-01-01", 730, "2025-12-10");
     const ctx = buildWeekPreviewContext({
       profile: big.profile,
@@ -203,25 +205,30 @@ describe("computeWeekPreview (drag preview fast path)", () => {
       today: TODAY,
     });
     const weekSessions = big.sessions.filter(inWeek);
-    const run = () =>
-      computeWeekPreview({
-        ...ctx,
-        weekSessions,
-        weekLogs: [],
-        profile: big.profile,
-        settings: SETTINGS,
-        weekStart: WEEK,
-        today: TODAY,
-      });
-    for (let i = 0; i < 50; i++) run();
-    const times: number[] = [];
-    for (let i = 0; i < 200; i++) {
-      const t0 = performance.now();
-      run();
-      times.push(performance.now() - t0);
-    }
-    times.sort((x, y) => x - y);
-    expect(times[100]).toBeLessThan(1);
+    const ids = new Set(weekSessions.map((s) => s.id));
+    const preview = computeWeekPreview({
+      ...ctx,
+      weekSessions,
+      weekLogs: big.logs.filter((l) => ids.has(l.sessionId)),
+      profile: big.profile,
+      settings: SETTINGS,
+      weekStart: WEEK,
+      today: TODAY,
+    });
+    const full = computeAthleteLoad({
+      profile: big.profile,
+      settings: SETTINGS,
+      sessions: big.sessions,
+      logs: big.logs,
+      from: WEEK,
+      to: weekEnd,
+      today: TODAY,
+      view: "projected",
+      weekStart: WEEK,
+    });
+    expect(weekSessions.length).toBeGreaterThan(0);
+    expect(preview.week).toEqual(full.week);
+    expect(preview.flags).toEqual(full.flags);
   });
 });
 
