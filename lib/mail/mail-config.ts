@@ -47,7 +47,9 @@ function isLoopbackHost(host: string): boolean {
 /** The mailbox folder the fake writes and the app reads: MAILBOX_DIR, else data/mailbox. */
 export function defaultMailboxDir(env: Readonly<Record<string, string | undefined>> = process.env): string {
   const dir = env.MAILBOX_DIR?.trim();
-  return path.resolve(dir || path.join("data", "mailbox"));
+  // A folder chosen at run time: without the hint the build's file tracer cannot tell which files it reads and
+  // traces the whole project into the server output.
+  return path.resolve(/*turbopackIgnore: true*/ dir || path.join("data", "mailbox"));
 }
 
 /** Reads the SMTP settings from the environment; throws naming the wrong variable. */
