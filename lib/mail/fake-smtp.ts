@@ -62,7 +62,7 @@ function toStoredMail(id: string, parsed: ParsedMail, envelope: SMTPServerEnvelo
 
 export async function startFakeSmtp(options: FakeSmtpOptions = {}): Promise<FakeSmtp> {
   const host = options.host ?? "127.0.0.1";
-  const dir = options.dir ? path.resolve(options.dir) : defaultMailboxDir();
+  const dir = options.dir ? path.resolve(/*turbopackIgnore: true*/ options.dir) : defaultMailboxDir();
 
   const server = new SMTPServer({
     name: "sprintwright-mailbox",

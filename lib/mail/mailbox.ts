@@ -54,7 +54,7 @@ export function newMailId(now = Date.now()): string {
 }
 
 function resolveDir(dir?: string): string {
-  return dir ? path.resolve(dir) : defaultMailboxDir();
+  return dir ? path.resolve(/*turbopackIgnore: true*/ dir) : defaultMailboxDir();
 }
 
 async function writeAtomically(file: string, data: string | Buffer): Promise<void> {
@@ -159,7 +159,11 @@ export async function clearMailbox({ dir, to }: { dir?: string; to?: string } = 
   if (to !== undefined) {
     const mine = (await listMail({ dir: base, to })).map((m) => m.id);
     await Promise.all(
-      mine.flatMap((id) => [".json", ".eml"].map((ext) => fs.rm(path.join(base, `${id}${ext}`), { force: true }))),
+      mine.flatMap((id) =>
+        [".json", ".eml"].map((ext) =>
+          fs.rm(path.join(/*turbopackIgnore: true*/ base, `${id}${ext}`), { force: true }),
+        ),
+      ),
     );
     return mine.length;
   }
@@ -175,6 +179,6 @@ export async function clearMailbox({ dir, to }: { dir?: string; to?: string } = 
     const m = /^(.+)\.(eml|json)$/.exec(n) ?? /^\.(.+)\.(eml|json)\.[0-9a-f]{8}\.tmp$/.exec(n);
     return m !== null && m[1] !== undefined && isMailId(m[1]);
   });
-  await Promise.all(ours.map((n) => fs.rm(path.join(base, n), { force: true })));
+  await Promise.all(ours.map((n) => fs.rm(path.join(/*turbopackIgnore: true*/ base, n), { force: true })));
   return ids.length;
 }
