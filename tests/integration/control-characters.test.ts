@@ -1,15 +1,10 @@
-import { describe, expect, it, vi } from "vitest";
+import { describe, expect, it } from "vitest";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
+import { who } from "../helpers/handler-session";
 
-// The handlers run for real over a temp SQLite file; only next-auth's session lookup is replaced.
-const who: { userId: number | null } = { userId: null };
-vi.mock("next-auth", async (orig) => ({
-  ...(await orig<typeof import("next-auth")>()),
-  getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
-}));
-vi.mock("@/lib/notices/hooks", () => ({ afterPlanChange: async () => {}, afterLogChange: async () => {} }));
+// The handlers run for real over a temp SQLite file; only next-auth's session lookup is replaced (handler-session).
 
 const d = await setupTestDb();
 const { teamToday } = await import("@/lib/dates/zoned");

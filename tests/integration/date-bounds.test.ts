@@ -1,16 +1,11 @@
-import { describe, expect, it, vi } from "vitest";
+import { describe, expect, it } from "vitest";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
+import { who } from "../helpers/handler-session";
 
 // Plan and load dates are bounded to 1900-01-01..2100-12-31 (lib/validations/dates.ts): a date outside
 // answers 400 naming the field instead of reaching date arithmetic that overflows near year 9999.
-const who: { userId: number | null } = { userId: null };
-vi.mock("next-auth", async (orig) => ({
-  ...(await orig<typeof import("next-auth")>()),
-  getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
-}));
-vi.mock("@/lib/notices/hooks", () => ({ afterPlanChange: async () => {}, afterLogChange: async () => {} }));
 
 const d = await setupTestDb();
 const { teamToday } = await import("@/lib/dates/zoned");
