@@ -4,6 +4,7 @@ import sqlite3 from "sqlite3";
 import { newToken } from "@/lib/auth/tokens";
 import { DEMO_PASSWORD, DEMO_STAFF } from "@/lib/seed/demo-club";
 import { apiSession, describeBrowser, launchBrowser, signIn, startApp, type App } from "./harness";
+import { csrf, postAuthForm } from "../helpers/auth-http";
 
 const coach = DEMO_STAFF.find((s) => s.role === "coach")!;
 const physio = DEMO_STAFF.find((s) => s.role === "physio")!;
@@ -17,14 +18,8 @@ const sessionUser = async (app: App, cookie: string) =>
   ((await (await replay(app, cookie, "/api/auth/session")).json()) as { user?: { email: string } }).user?.email ?? null;
 
 async function signOutOverHttp(app: App, cookie: string) {
-  const csrf = await fetch(`${app.url}/api/auth/csrf`, { headers: { cookie } });
-  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const res = await fetch(`${app.url}/api/auth/signout`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "content-type": "application/x-www-form-urlencoded", cookie },
-    body: new URLSearchParams({ csrfToken, callbackUrl: "/", json: "true" }),
-  });
+  const { csrfToken } = await csrf(app, cookie);
+  const res = await postAuthForm(app, "/api/auth/signout", { cookie, fields: { csrfToken, callbackUrl: "/" } });
   expect(res.status).toBeLessThan(400);
 }
 

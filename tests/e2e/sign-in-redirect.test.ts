@@ -2,6 +2,7 @@ import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser } from "playwright-core";
 import { DEMO_PASSWORD, DEMO_STAFF } from "@/lib/seed/demo-club";
 import { describeBrowser, launchBrowser, startApp, type App } from "./harness";
+import { postCredentials } from "../helpers/auth-http";
 
 const coach = DEMO_STAFF.find((s) => s.role === "coach")!;
 
@@ -60,25 +61,8 @@ describeBrowser("sign-in keeps the browser on the site", () => {
   });
 
   it("answers next-auth's own sign-in endpoint with a same-site URL only", async () => {
-    const csrfRes = await fetch(`${app.url}/api/auth/csrf`);
-    const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
-    const cookie = csrfRes.headers
-      .getSetCookie()
-      .map((c) => c.split(";")[0])
-      .join("; ");
     for (const callbackUrl of ["/\\evil.test/phish", "/\t/evil.test", "https://evil.test/"]) {
-      const res = await fetch(`${app.url}/api/auth/callback/credentials`, {
-        method: "POST",
-        redirect: "manual",
-        headers: { "content-type": "application/x-www-form-urlencoded", cookie },
-        body: new URLSearchParams({
-          csrfToken,
-          email: coach.email,
-          password: DEMO_PASSWORD,
-          callbackUrl,
-          json: "true",
-        }),
-      });
+      const res = await postCredentials(app, { email: coach.email, password: DEMO_PASSWORD, callbackUrl });
       const target = res.headers.get("location") ?? ((await res.json()) as { url: string }).url;
       // A browser resolves the answer the same way: it must stay on the site.
       expect(new URL(target, app.url).origin, callbackUrl).toBe(app.url);

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser } from "playwright-core";
 import { DEMO_PASSWORD, DEMO_STAFF } from "@/lib/seed/demo-club";
 import { apiSession, describeBrowser, launchBrowser, startApp, type App } from "./harness";
+import { postCredentials } from "../helpers/auth-http";
 
 const coach = DEMO_STAFF.find((s) => s.role === "coach")!;
 const physio = DEMO_STAFF.find((s) => s.role === "physio")!;
@@ -13,18 +14,7 @@ type Answer = { signedIn: boolean; error: string | null };
  * client sends it: that is how the test stands in for clients at different addresses.
  */
 async function attempt(app: App, email: string, password: string, from: string): Promise<Answer> {
-  const csrfRes = await fetch(`${app.url}/api/auth/csrf`);
-  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
-  const cookie = csrfRes.headers
-    .getSetCookie()
-    .map((c) => c.split(";")[0])
-    .join("; ");
-  const res = await fetch(`${app.url}/api/auth/callback/credentials`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "content-type": "application/x-www-form-urlencoded", cookie, "x-forwarded-for": from },
-    body: new URLSearchParams({ csrfToken, email, password, json: "true" }),
-  });
+  const res = await postCredentials(app, { email, password }, { "x-forwarded-for": from });
   const signedIn = res.headers
     .getSetCookie()
     .some((c) => c.includes("next-auth.session-token=") && !c.includes("Max-Age=0"));
