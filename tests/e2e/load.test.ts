@@ -5,6 +5,8 @@ import { afterAll, beforeAll, expect, it } from "vitest";
 import { DEMO_ATHLETES, DEMO_STAFF } from "@/lib/seed/demo-club";
 import { SPIKE_ATHLETE } from "@/lib/seed/seed-load";
 import { apiSession, describeBrowser, launchBrowser, screenshot, signIn, startApp, type App } from "./harness";
+import { createAppTeam } from "../helpers/app-team";
+import { TEST_PASSWORD } from "../helpers/fixtures";
 
 const headCoach = DEMO_STAFF.find((s) => s.role === "head_coach")!;
 const maya = DEMO_ATHLETES.find((a) => a.name === "Maya Okafor")!;
@@ -30,13 +32,21 @@ describeBrowser("load screens", () => {
     await app?.stop();
   });
 
-  it("renders the demo club's week, one row per athlete, with the caution", async () => {
-    await page.goto(`${app.url}/load`);
-    await page.getByTestId("squad-load-table").waitFor();
-    const names = await page
+  it("renders the team's week, one row per athlete, with the caution", async () => {
+    // One row per athlete, counted on a team of this test's own (two athletes, no history yet).
+    await createAppTeam(app.dbPath, { name: "Load Track" });
+    const own = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await signIn(own, app, "head@loadtrack.test", TEST_PASSWORD);
+    await own.goto(`${app.url}/load`);
+    await own.getByTestId("squad-load-table").waitFor();
+    const names = await own
       .getByTestId("squad-load-row")
       .evaluateAll((rows) => rows.map((r) => r.getAttribute("data-athlete")));
-    expect(names.sort()).toEqual(DEMO_ATHLETES.map((a) => a.name).sort());
+    expect(names.sort()).toEqual(["Ada Athlete", "Ben Athlete"]);
+    await own.close();
+    // The demo club's week, with its designed history behind it.
+    await page.goto(`${app.url}/load`);
+    await page.getByTestId("squad-load-table").waitFor();
     expect(await page.getByTestId("load-caution").count()).toBe(1);
     // Eight weeks of logged history stand behind this week, so every athlete has a ratio.
     expect((await ratios(page)).every((r) => Number.isFinite(r) && r > 0)).toBe(true);
@@ -69,7 +79,7 @@ describeBrowser("load screens", () => {
       "Athlete,ACWR,Flags,HSR m,Near-max m,Sprint steps (est.),Plyo contacts,Contacts by intensity," +
         "≥ HSR speed m,≥ sprint speed m,≥ HSR % m,≥ near-max % m,≥ maximal % m,sRPE (AU),Weekly change",
     );
-    expect(lines).toHaveLength(DEMO_ATHLETES.length + 1);
+    expect(lines).toHaveLength((await page.getByTestId("squad-load-row").count()) + 1);
     await page.getByTestId("choose-columns").click();
     await page.getByRole("checkbox", { name: "Group" }).check();
     await page.getByTestId("choose-columns").click();
