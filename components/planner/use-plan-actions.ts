@@ -123,7 +123,7 @@ export function usePlanActions({
   current: () => PlanWeek | undefined;
   askOverride: AskOverride;
 }) {
-  const { mutate } = useSWRConfig();
+  const { mutate, cache } = useSWRConfig();
   const [notice, setNoticeState] = useState<Notice | null>(null);
   const [undoStack, setUndoStack] = useState<UndoEntry[]>([]);
   const [saving, setSaving] = useState(0);
@@ -183,6 +183,11 @@ export function usePlanActions({
     async (change: PlanChange, override?: Override) => {
       const before = current();
       if (!before) return;
+      // The week the server page seeded is fallback data, not cache, until the first write. Put it in the cache
+      // first: a rollback restores what the cache held, and restoring nothing would leave the optimistic card
+      // on screen (keepPreviousData keeps showing the last data when the cache is empty).
+      if (cache.get(swrKey)?.data === undefined && planKeys.week(before.teamId, before.weekStart) === swrKey)
+        await mutate(swrKey, before, { revalidate: false });
       const what = describeChange(before, change);
       let temps: number[] = [];
       try {
@@ -214,7 +219,7 @@ export function usePlanActions({
         await explain(e, what);
       }
     },
-    [current, explain, mutate, say, swrKey, track, withOverride],
+    [cache, current, explain, mutate, say, swrKey, track, withOverride],
   );
 
   /**
