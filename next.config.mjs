@@ -35,7 +35,7 @@ const nextConfig = {
   },
   // Sequelize requires every dialect statically; keep it (and the native sqlite3 addon) out of the bundle.
   // @touch4it/ical-timezones reads its VTIMEZONE files from its own folder at run time, so it stays external too.
-  serverExternalPackages: ["sequelize", "sqlite3", "@touch4it/ical-timezones"],
+  serverExternalPackages: ["sequelize", "sqlite3", "pg", "pg-hstore", "@touch4it/ical-timezones"],
   // Lets tests and parallel builds use their own output folder.
   distDir: process.env.NEXT_DIST_DIR || ".next",
   poweredByHeader: false,

@@ -43,6 +43,11 @@ export function appUrl(): string {
   return (e.APP_URL ?? e.NEXTAUTH_URL).replace(/\/$/, "");
 }
 
+/** "postgres" for a postgres:// (or postgresql://) DATABASE_URL, SQLite for anything else. */
+export function databaseDialect(url = env().DATABASE_URL): "sqlite" | "postgres" {
+  return /^postgres(ql)?:\/\//i.test(url) ? "postgres" : "sqlite";
+}
+
 /** Resolves DATABASE_URL (`file:./x.sqlite`, `sqlite:x.sqlite`, a bare path or `:memory:`) to a storage path. */
 export function databaseStorage(url = env().DATABASE_URL): string {
   return url.replace(/^(file|sqlite):(\/\/)?/, "");

@@ -16,8 +16,13 @@ export const up: MigrationFn<QueryInterface> = async ({ context: qi }) => {
     ics: { type: DataTypes.TEXT, allowNull: false },
     rendered_at: { type: DataTypes.DATE, allowNull: false },
   });
+  // sign_in_limits (006) holds epoch milliseconds in `expire`: INTEGER is 64-bit in SQLite, 32-bit in PostgreSQL.
+  if (qi.sequelize.getDialect() === "postgres") {
+    await qi.sequelize.query("ALTER TABLE sign_in_limits ALTER COLUMN expire TYPE BIGINT");
+  }
 };
 
+// BIGINT stays on the way down: narrowing could fail on stored values and is harmless to keep.
 export const down: MigrationFn<QueryInterface> = async ({ context: qi }) => {
   await qi.dropTable("calendar_feed_renders");
 };

@@ -2,7 +2,8 @@ import { mkdirSync } from "node:fs";
 import { dirname } from "node:path";
 import { Sequelize, Transaction } from "sequelize";
 import { queueWrites, sqliteDriver, writeQueue } from "@/lib/db/sqlite";
-import { databaseStorage } from "@/lib/env";
+import { openPostgres } from "@/lib/db/postgres";
+import { databaseDialect, databaseStorage, env } from "@/lib/env";
 import { Alert } from "./alert";
 import { Athlete } from "./athlete";
 import { AuthSession } from "./auth-session";
@@ -176,10 +177,15 @@ type Cache = { db?: Promise<Db> };
 const cache = globalThis as typeof globalThis & { __sprintwrightDb?: Cache };
 cache.__sprintwrightDb ??= {};
 
-/** The app's one database handle, created on first use and cached on globalThis across dev reloads. */
+/**
+ * The app's one database handle, created on first use and cached on globalThis across dev reloads: SQLite by
+ * default, PostgreSQL when DATABASE_URL is a postgres:// URL (lib/db/postgres.ts).
+ */
 export function db(): Promise<Db> {
   const c = cache.__sprintwrightDb!;
-  c.db ??= openDatabase(databaseStorage()).then((sequelize) => {
+  const url = env().DATABASE_URL;
+  const open = databaseDialect(url) === "postgres" ? openPostgres(url) : openDatabase(databaseStorage(url));
+  c.db ??= open.then((sequelize) => {
     initModels(sequelize);
     return { ...models, sequelize };
   });

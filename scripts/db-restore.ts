@@ -2,7 +2,7 @@
 // Without --yes it only checks the file and says what it would replace. Stop the app before restoring.
 import { inspectDatabase, restoreDatabase, type Inspection } from "@/lib/db/backup";
 import { migrationNames } from "@/lib/db/migrator";
-import { databaseStorage } from "@/lib/env";
+import { databaseDialect, databaseStorage } from "@/lib/env";
 
 const describe = (i: Inspection) =>
   `${Object.entries(i.counts)
@@ -10,6 +10,10 @@ const describe = (i: Inspection) =>
     .join(", ")}; last migration ${i.migrations.at(-1) ?? "none"}`;
 
 async function main(): Promise<number> {
+  if (databaseDialect() === "postgres") {
+    console.error("DATABASE_URL is PostgreSQL: restore with pg_restore (db:restore is for the SQLite file)");
+    return 2;
+  }
   const args = process.argv.slice(2);
   const file = args.find((a) => !a.startsWith("--"));
   if (!file) {

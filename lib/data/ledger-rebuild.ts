@@ -1,4 +1,5 @@
 import "server-only";
+import { jsonIds } from "@/lib/db/sql";
 import { QueryTypes, type Sequelize } from "sequelize";
 import { buildLedger } from "@/lib/load/ledger";
 import { packSessions } from "@/lib/load/packed";
@@ -34,7 +35,7 @@ export async function rebuildLedger({
   const sequelize = given ?? (await db()).sequelize;
   const teams = await sequelize.query<{ team_id: number; athletes: number }>(
     `SELECT t.id AS team_id, (SELECT count(*) FROM athletes a WHERE a.team_id = t.id) AS athletes FROM teams t
-      WHERE (:all = 1 OR t.id IN (SELECT value FROM json_each(:ids))) ORDER BY t.id`,
+      WHERE (:all = 1 OR t.id IN (${jsonIds(sequelize)})) ORDER BY t.id`,
     { type: QueryTypes.SELECT, replacements: { all: teamIds ? 0 : 1, ids: JSON.stringify(teamIds ?? []) } },
   );
   const total = teams.reduce((n, t) => n + Number(t.athletes), 0);

@@ -1,4 +1,5 @@
 import "server-only";
+import { jsonIds } from "@/lib/db/sql";
 import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
 import type { Database } from "sqlite3";
 import { dateFromDayIndex, dayIndex } from "@/lib/dates/plain-date";
@@ -82,7 +83,7 @@ export async function readLedgerRows({
   if (athleteIds.length === 0) return out;
   const sequelize = await handle(c);
   const rows = await sequelize.query<StoredRow>(
-    `WITH ids(id) AS (SELECT value FROM json_each(:ids)),
+    `WITH ids(id) AS (${jsonIds(sequelize)}),
       last AS (SELECT ids.id, (SELECT max(day) FROM load_ledger WHERE athlete_id = ids.id AND day < :from) AS day FROM ids)
     SELECT ${COLUMNS.join(", ")} FROM load_ledger l JOIN ids ON l.athlete_id = ids.id WHERE l.day BETWEEN :from AND :to
     UNION ALL
@@ -295,7 +296,7 @@ export async function ledgerHasMarks({
 }: Conn & { athleteIds?: readonly number[] }): Promise<boolean> {
   const sequelize = await handle(c);
   const rows = await sequelize.query<{ one: number }>(
-    `SELECT 1 AS one FROM load_ledger_dirty WHERE (:all = 1 OR athlete_id IN (SELECT value FROM json_each(:ids))) LIMIT 1`,
+    `SELECT 1 AS one FROM load_ledger_dirty WHERE (:all = 1 OR athlete_id IN (${jsonIds(sequelize)})) LIMIT 1`,
     {
       type: QueryTypes.SELECT,
       replacements: { all: athleteIds ? 0 : 1, ids: JSON.stringify(athleteIds ?? []) },

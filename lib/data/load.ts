@@ -130,11 +130,19 @@ const SQL = {
     WHERE a.team_id = :teamId AND (:everyone = 1 OR a.id IN (:athleteIds))`,
   sessions: `SELECT s.id, s.athlete_id, s.date, s.start_time, s.duration_min, s.planned_rpe, s.status,
     l.completion, l.rpe, l.minutes, l.completed_reps,
-    (SELECT '[' || group_concat('[' || b.id || ',' || json_quote(b.kind) || ',' || json_quote(b.title) || ','
-      || coalesce(b.running, 'null') || ','
-      || coalesce(b.drills, 'null') || ']', ',' ORDER BY b.position, b.id) || ']' FROM session_blocks b WHERE b.session_id = s.id) AS blocks
+    {blocks} AS blocks
     FROM planned_sessions s LEFT JOIN session_logs l ON l.session_id = s.id
     WHERE {filter} ORDER BY s.date, s.start_time, s.id`,
+};
+
+// The same packed text in each dialect's words (PostgreSQL: string_agg and to_json for json_quote).
+const BLOCKS_SQL = {
+  sqlite: `(SELECT '[' || group_concat('[' || b.id || ',' || json_quote(b.kind) || ',' || json_quote(b.title) || ','
+      || coalesce(b.running, 'null') || ',' || coalesce(b.drills, 'null') || ']', ',' ORDER BY b.position, b.id) || ']'
+      FROM session_blocks b WHERE b.session_id = s.id)`,
+  postgres: `(SELECT '[' || string_agg('[' || b.id || ',' || to_json(b.kind)::text || ',' || to_json(b.title)::text || ','
+      || coalesce(b.running::text, 'null') || ',' || coalesce(b.drills::text, 'null') || ']', ',' ORDER BY b.position, b.id)
+      || ']' FROM session_blocks b WHERE b.session_id = s.id)`,
 };
 
 function toBlocks(packed: string | null): BlockInput[] {
@@ -159,11 +167,14 @@ export async function getLoadSeriesInputs({
     everyone: athleteIds ? 0 : 1,
     athleteIds: athleteIds && athleteIds.length > 0 ? [...athleteIds] : [0],
     through,
-    from: from ?? "0000-01-01",
+    // Year 1, not 0: PostgreSQL has no year 0.
+    from: from ?? "0001-01-01",
   };
   const select = <T extends object>(sql: string) =>
     sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements, transaction });
-  const sessionsSql = SQL.sessions.replace("{filter}", athleteIds ? SESSION_FILTER.athletes : SESSION_FILTER.team);
+  const sessionsSql = SQL.sessions
+    .replace("{filter}", athleteIds ? SESSION_FILTER.athletes : SESSION_FILTER.team)
+    .replace("{blocks}", sequelize.getDialect() === "postgres" ? BLOCKS_SQL.postgres : BLOCKS_SQL.sqlite);
   // A constant three queries whatever the squad size: no query per athlete or per session.
   const [[team], athletes, sessions] = await Promise.all([
     select<TeamRow>(SQL.team),

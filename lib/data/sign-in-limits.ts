@@ -1,8 +1,15 @@
 import "server-only";
 import { createHash } from "node:crypto";
-import { RateLimiterMemory, RateLimiterRes, RateLimiterSQLite, type RateLimiterAbstract } from "rate-limiter-flexible";
+import {
+  RateLimiterMemory,
+  RateLimiterPostgres,
+  RateLimiterRes,
+  RateLimiterSQLite,
+  type RateLimiterAbstract,
+} from "rate-limiter-flexible";
 import sqlite3 from "sqlite3";
-import { databaseStorage } from "@/lib/env";
+import { postgresPool } from "@/lib/db/postgres";
+import { databaseDialect, databaseStorage, env } from "@/lib/env";
 
 /**
  * Sign-in throttling (OWASP ASVS 4.0 §2.2.1). Every attempt takes a point from two buckets before the password is
@@ -21,10 +28,33 @@ const BLOCK_S = 15 * 60;
 type Limiters = { account: RateLimiterAbstract; address: RateLimiterAbstract; client: sqlite3.Database | null };
 const cache = globalThis as typeof globalThis & { __sprintwrightSignInLimits?: { storage: string; limiters: Limiters } };
 
+/** PostgreSQL: the same table through RateLimiterPostgres on a small pool of its own (no SQLite savepoint issue). */
+function postgresLimiters(url: string): Limiters {
+  const pool = postgresPool(url);
+  const make = (keyPrefix: string, points: number): RateLimiterAbstract => {
+    const opts = { keyPrefix, points, duration: WINDOW_S, blockDuration: BLOCK_S };
+    return new RateLimiterPostgres({
+      ...opts,
+      storeClient: pool,
+      storeType: "pool",
+      tableName: "sign_in_limits",
+      tableCreated: true,
+      insuranceLimiter: new RateLimiterMemory(opts),
+    });
+  };
+  return { account: make("account", ACCOUNT_ATTEMPTS), address: make("address", ADDRESS_ATTEMPTS), client: null };
+}
+
 function limiters(): Limiters {
-  const storage = databaseStorage();
+  const url = env().DATABASE_URL;
+  const storage = databaseDialect(url) === "postgres" ? url : databaseStorage(url);
   const cached = cache.__sprintwrightSignInLimits;
   if (cached?.storage === storage) return cached.limiters;
+  if (storage === url && databaseDialect(url) === "postgres") {
+    const limiters = postgresLimiters(url);
+    cache.__sprintwrightSignInLimits = { storage, limiters };
+    return limiters;
+  }
   const client = storage === ":memory:" ? null : new sqlite3.Database(storage, sqlite3.OPEN_READWRITE);
   // Updates queue one at a time (below), so a long wait here would hold up every sign-in; the in-process counter
   // stands in when the file stays locked.

@@ -55,7 +55,8 @@ export async function databaseState({
   } catch {
     return "down";
   }
-  if (storage === ":memory:") return "ok";
+  // PostgreSQL has no file lock to probe and no write queue here: answering reads is the state.
+  if (storage === ":memory:" || sequelize.getDialect() !== "sqlite") return "ok";
   const queue = writeQueue(storage);
   const now = Date.now();
   const last = lastProbe.get(storage);
