@@ -21,6 +21,8 @@ const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 20);
 const DURATION_S = Number(process.env.BENCH_DURATION_S ?? 5);
 const SAMPLES = Number(process.env.BENCH_SAMPLES ?? 40);
 const SAMPLE_BUDGET_MS = 10_000;
+/** A single request slower than this counts as an error (the server may still be working off a load run). */
+const REQUEST_TIMEOUT_MS = 60_000;
 const CACHE = join(tmpdir(), "sprintwright-bench-scale");
 const DIST = ".next-bench";
 const TSX = ["--conditions=react-server", "--import", "tsx"];
@@ -169,20 +171,24 @@ async function once(app: App, t: Target): Promise<{ ms: number; status: number; 
     headers: t.headers,
     body: t.body?.(),
     redirect: "manual",
+    signal: AbortSignal.timeout(REQUEST_TIMEOUT_MS),
   });
   const bytes = (await res.arrayBuffer()).byteLength;
   return { ms: performance.now() - t0, status: res.status, bytes };
 }
 
+const failed = (ms: number) => ({ ms, status: 0, bytes: 0 });
+
 async function measure(set: BenchDataset, app: App, t: Target): Promise<Omit<Row, "share">> {
-  const first = await once(app, t);
-  if (!ok(t, first.status)) throw new Error(`${set.key} ${t.label}: ${t.path} answered ${first.status} before the run`);
-  for (let i = 0; i < 3; i++) await once(app, t);
+  const first = await once(app, t).catch(() => failed(REQUEST_TIMEOUT_MS));
+  const none = { set: set.key, endpoint: t.endpoint, label: t.label, bytes: 0, rps: 0 };
+  if (!ok(t, first.status)) return { ...none, p50: Number.NaN, p95: Number.NaN, p99: Number.NaN, errors: 1 };
+  for (let i = 0; i < 3; i++) await once(app, t).catch(() => undefined);
   const times: number[] = [];
   const started = performance.now();
   let errors = 0;
   while (times.length < SAMPLES && (times.length < 5 || performance.now() - started < SAMPLE_BUDGET_MS)) {
-    const r = await once(app, t);
+    const r = await once(app, t).catch(() => failed(REQUEST_TIMEOUT_MS));
     if (!ok(t, r.status)) errors++;
     times.push(r.ms);
   }
@@ -352,6 +358,11 @@ async function main() {
     process.stdout.write(`  measuring ${d.set.label} `);
     rows.push(...(await benchSet(d.set, d.file, d.meta)));
     console.log(" done");
+    // Each set's figures as soon as they exist: a later set that fails leaves these on screen.
+    printTable(
+      sets,
+      rows.filter((r) => r.set === d.set.key),
+    );
   }
   console.log(
     `\nload average ${loadavg()[0].toFixed(2)} at end (2 cores shared: compare shares of the floor, not raw figures)\n`,
