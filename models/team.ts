@@ -22,7 +22,12 @@ export class Team extends Model<InferAttributes<Team>, InferCreationAttributes<T
         id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
         name: { type: DataTypes.STRING(120), allowNull: false },
         timeZone: { type: DataTypes.STRING(64), allowNull: false },
-        weekStartDay: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+        weekStartDay: {
+          type: DataTypes.INTEGER,
+          allowNull: false,
+          defaultValue: 1,
+          validate: { isInt: true, min: 1, max: 7 },
+        },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

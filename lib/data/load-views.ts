@@ -56,7 +56,7 @@ export type SquadWeekDto = {
   previousWeek: string;
   nextWeek: string;
   today: string;
-  /** Engine convention: 0 = Sunday, 1 = Monday … */
+  /** ISO weekday the team's week starts on (1 = Monday … 7 = Sunday). */
   weekStartDay: number;
   view: LoadView;
   settings: TeamLoadSettings;

@@ -14,7 +14,9 @@ import {
   type SpeedZones,
   type TeamLoadSettings,
 } from "@/lib/load/types";
+import { AppError } from "@/lib/errors";
 import { teamSettingsSchema, type TeamSettingsPatch } from "@/lib/validations/team-settings";
+import type { TeamWeekInput } from "@/lib/validations/team-week";
 import { db, type TeamLoadSettings as SettingsModel } from "@/models";
 
 const FIELDS = [
@@ -129,4 +131,12 @@ export async function updateTeamLoadSettings({ teamId, input }: { teamId: number
     else await TeamLoadSettings.create({ teamId, ...stored }, { transaction });
     return toEngineSettings(merged);
   });
+}
+
+/** Sets the ISO weekday the team's week starts on; 404 when the team does not exist. */
+export async function updateTeamWeekStart({ teamId, input }: { teamId: number; input: TeamWeekInput }): Promise<TeamWeekInput> {
+  const { Team } = await db();
+  const [changed] = await Team.update({ weekStartDay: input.weekStartDay }, { where: { id: teamId } });
+  if (changed === 0) throw new AppError("not_found", "Not found");
+  return { weekStartDay: input.weekStartDay };
 }

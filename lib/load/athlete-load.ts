@@ -38,7 +38,7 @@ export interface AthleteLoadInput {
   view: LoadView;
   /** The week to summarise ("YYYY-MM-DD"); snapped back to weekStartDay when that is given. */
   weekStart: string;
-  /** 0 = Sunday, 1 = Monday … 6 = Saturday. */
+  /** ISO weekday: 1 = Monday … 7 = Sunday. */
   weekStartDay?: number;
 }
 

@@ -1,6 +1,6 @@
 import { ACC_SIZE, addAccToColumns, evaluateSessionInto, resolveProfile, type ResolvedProfile } from "./accumulate";
 import { alignLogs, type AlignedLogs } from "./align-logs";
-import { dateFromDayIndex, dayIndex, weekdayOfDay } from "@/lib/dates/plain-date";
+import { dateFromDayIndex, dayIndex, weekStartOfDay } from "@/lib/dates/plain-date";
 import { addPackedToColumns, PACKED_ACC_SIZE, PACKED_STATUS, sumPackedSession, type PackedSessions } from "./packed";
 import { toSessionMetrics, type SessionMetrics } from "./session-metrics";
 import {
@@ -289,7 +289,7 @@ export interface WeeklyTotals {
   days: Uint8Array;
 }
 
-/** Sums daily values into weeks starting on weekStartDay (0 = Sunday, 1 = Monday …); edge weeks may be partial. */
+/** Sums daily values into weeks starting on weekStartDay (ISO: 1 = Monday … 7 = Sunday); edge weeks may be partial. */
 export function weeklyTotals(
   dates: readonly string[],
   values: Record<Metric, ArrayLike<number>>,
@@ -298,7 +298,7 @@ export function weeklyTotals(
   const n = dates.length;
   if (n === 0) return { weekStarts: [], totals: emptyMetricColumns(0), days: new Uint8Array(0) };
   const first = dayIndex(dates[0]);
-  const lead = (weekdayOfDay(first) - weekStartDay + 7) % 7;
+  const lead = first - weekStartOfDay(first, weekStartDay);
   const weeks = Math.ceil((n + lead) / 7);
   const totals = emptyMetricColumns(weeks);
   const days = new Uint8Array(weeks);

@@ -60,6 +60,7 @@ const TABLE: Line[] = [
   ["POST /api/teams/[teamId]/sessions",                401,   403,   403,   403,   201,   201,   404],
   ["GET /api/teams/[teamId]/settings",                 401,   200,   200,   200,   200,   200,   404],
   ["PATCH /api/teams/[teamId]/settings",               401,   403,   403,   403,   403,   200,   404],
+  ["PATCH /api/teams/[teamId]/week-start",             401,   403,   403,   403,   403,   200,   404],
   ["GET /api/teams/[teamId]/templates",                401,   403,   403,   200,   200,   200,   404],
   ["POST /api/teams/[teamId]/templates",               401,   403,   403,   403,   201,   201,   404],
   ["GET /api/templates/[templateId]",                  401,   403,   403,   200,   200,   200,   404],

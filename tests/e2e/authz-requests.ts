@@ -147,6 +147,9 @@ export const REQUESTS: Record<string, Build> = {
   "GET /api/teams/[teamId]/settings": async (w) => api("GET", `/api/teams/${w.teamId}/settings`),
   "PATCH /api/teams/[teamId]/settings": async (w) =>
     api("PATCH", `/api/teams/${w.teamId}/settings`, { recoveryHours: 48 }),
+  // Monday is the demo club's own week start: the matrix checks who may ask without changing anyone's weeks.
+  "PATCH /api/teams/[teamId]/week-start": async (w) =>
+    api("PATCH", `/api/teams/${w.teamId}/week-start`, { weekStartDay: 1 }),
   "GET /api/teams/[teamId]/templates": async (w) => api("GET", `/api/teams/${w.teamId}/templates`),
   "POST /api/teams/[teamId]/templates": async (w) => api("POST", `/api/teams/${w.teamId}/templates`, template),
   "GET /api/templates/[templateId]": async (w) => api("GET", `/api/templates/${await w.template()}`),

@@ -1,4 +1,5 @@
 import { ThresholdsForm } from "@/components/load/thresholds-form";
+import { WeekStartForm } from "@/components/settings/week-start-form";
 import { Card, PageHeader } from "@/components/ui/card";
 import { LoadCaution } from "@/components/ui/caution";
 import { pageViewer } from "@/lib/auth/page-access";
@@ -18,6 +19,10 @@ export default async function ThresholdsPage() {
           "how the acute:chronic ratio is worked out, and when a week earns a flag."
         }
       />
+      <Card className="mb-4 p-5">
+        <h2 className="mb-3 text-sm font-semibold text-ink-900">Training week</h2>
+        <WeekStartForm teamId={viewer.teamId} initial={{ weekStartDay: viewer.weekStartDay === 7 ? 7 : 1 }} />
+      </Card>
       <Card className="p-5">
         <ThresholdsForm teamId={viewer.teamId} initial={settings} />
       </Card>

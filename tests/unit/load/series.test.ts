@@ -93,7 +93,7 @@ describe("weeklyTotals", () => {
     expect(mon.weekStarts).toEqual(["2026-03-02", "2026-03-09"]);
     expect(Array.from(mon.days)).toEqual([2, 5]);
     expect(Array.from(mon.totals.srpe)).toEqual([0, 860]);
-    const sun = weeklyTotals(s.dates, s.values, 0);
+    const sun = weeklyTotals(s.dates, s.values, 7); // ISO 7 = Sunday
     expect(sun.weekStarts).toEqual(["2026-03-01", "2026-03-08"]);
     expect(Array.from(sun.totals.srpe)).toEqual([0, 860]);
     expect(Array.from(sun.days)).toEqual([1, 6]);

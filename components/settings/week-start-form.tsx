@@ -1,0 +1,74 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { mutate } from "swr";
+import { FetchError, fetchJson } from "@/components/load/swr-keys";
+import { Button } from "@/components/ui/button";
+import { Field, Select } from "@/components/ui/field";
+import { WEEK_START_CHOICES, teamWeekSchema, type TeamWeekInput } from "@/lib/validations/team-week";
+
+export function WeekStartForm({ teamId, initial }: { teamId: number; initial: TeamWeekInput }) {
+  const router = useRouter();
+  const [message, setMessage] = useState<{ tone: "ok" | "error"; text: string }>();
+  const { register, handleSubmit, setError, reset, formState } = useForm<TeamWeekInput>({
+    resolver: zodResolver(teamWeekSchema),
+    defaultValues: initial,
+  });
+  const { errors, isSubmitting, isDirty } = formState;
+
+  const onSubmit = handleSubmit(async (values) => {
+    setMessage(undefined);
+    try {
+      const saved = await fetchJson<TeamWeekInput>(`/api/teams/${teamId}/week-start`, {
+        method: "PATCH",
+        body: JSON.stringify(values),
+      });
+      reset(saved);
+      // Week grids, week totals, weekly change and flags are all cut at the week start.
+      await mutate(() => true, undefined, { revalidate: true });
+      router.refresh();
+      setMessage({ tone: "ok", text: "Saved. Weeks now start on this day everywhere." });
+    } catch (err) {
+      const field = err instanceof FetchError ? err.fields?.weekStartDay?.[0] : undefined;
+      if (field) setError("weekStartDay", { message: field });
+      setMessage({ tone: "error", text: err instanceof Error ? err.message : "Could not save" });
+    }
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="space-y-4" data-testid="week-start-form">
+      <Field
+        label="Weeks start on"
+        htmlFor="weekStartDay"
+        error={errors.weekStartDay?.message}
+        hint="The planner's week, the squad table's week totals, week-to-week change and the alerts all use it."
+      >
+        <Select
+          id="weekStartDay"
+          aria-invalid={!!errors.weekStartDay}
+          data-testid="week-start-day"
+          {...register("weekStartDay", { setValueAs: (v: string | number) => Number(v) })}
+        >
+          {WEEK_START_CHOICES.map((c) => (
+            <option key={c.value} value={c.value}>
+              {c.label}
+            </option>
+          ))}
+        </Select>
+      </Field>
+      <div className="flex flex-wrap items-center gap-3">
+        <Button type="submit" disabled={isSubmitting || !isDirty} data-testid="save-week-start">
+          {isSubmitting ? "Saving…" : "Save week start"}
+        </Button>
+        {message ? (
+          <p role="status" className={message.tone === "ok" ? "text-sm text-flag-steady" : "text-sm text-flag-spike"}>
+            {message.text}
+          </p>
+        ) : null}
+      </div>
+    </form>
+  );
+}
