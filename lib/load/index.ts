@@ -3,7 +3,8 @@
  * planner's drag preview call the same functions, so the number a coach sees while dragging is the number stored.
  *
  * Model choices (sources and check values: lib/load/README.md; pinned by tests/unit/load):
- * - Dates are local calendar dates "YYYY-MM-DD" handled as integer day numbers; "today" is always an input.
+ * - Dates are local calendar dates "YYYY-MM-DD" handled as integer day numbers (lib/dates/plain-date.ts, ISO
+ *   weekdays 1 = Monday … 7 = Sunday); "today" is always an input.
  * - Running reps follow the mono-exponential model v(t) = target·(1 − e^(−t/τ)) from rest (Furusawa, Hill &
  *   Parkinson 1927), target = intensityPct% of vmax; a flying rep's run-in is run and counted. HSR and near-max
  *   metres are the analytic metres at or above the threshold; a threshold at or above the target gives 0.
