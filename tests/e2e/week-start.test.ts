@@ -30,6 +30,12 @@ describeBrowser("the team's week start", () => {
       now,
       now,
     ]);
+    // One athlete, so the planner shows its grid (an empty team gets a hint instead).
+    await app.query("INSERT INTO athletes (team_id, name, created_at, updated_at) VALUES (?, 'Wren Runner', ?, ?)", [
+      team.id,
+      now,
+      now,
+    ]);
     // The demo password's hash, so the harness can sign these invented people in.
     const [hash] = await app.query<{ password_hash: string }>("SELECT password_hash FROM users WHERE email = ?", [
       "head.coach@harbourvale.test",
