@@ -5,9 +5,10 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { mutate } from "swr";
-import { FetchError, fetchJson } from "@/components/load/swr-keys";
 import { Button } from "@/components/ui/button";
 import { Field, Select } from "@/components/ui/field";
+import { loadApi } from "@/lib/client/api";
+import { applyServerErrors } from "@/lib/client/form-errors";
 import { WEEK_START_CHOICES, teamWeekSchema, type TeamWeekInput } from "@/lib/validations/team-week";
 
 export function WeekStartForm({ teamId, initial }: { teamId: number; initial: TeamWeekInput }) {
@@ -22,18 +23,14 @@ export function WeekStartForm({ teamId, initial }: { teamId: number; initial: Te
   const onSubmit = handleSubmit(async (values) => {
     setMessage(undefined);
     try {
-      const saved = await fetchJson<TeamWeekInput>(`/api/teams/${teamId}/week-start`, {
-        method: "PATCH",
-        body: JSON.stringify(values),
-      });
+      const saved = await loadApi.saveWeekStart(teamId, values);
       reset(saved);
       // Week grids, week totals, weekly change and flags are all cut at the week start.
       await mutate(() => true, undefined, { revalidate: true });
       router.refresh();
       setMessage({ tone: "ok", text: "Saved. Weeks now start on this day everywhere." });
     } catch (err) {
-      const field = err instanceof FetchError ? err.fields?.weekStartDay?.[0] : undefined;
-      if (field) setError("weekStartDay", { message: field });
+      applyServerErrors({ setError }, err, ["weekStartDay"]);
       setMessage({ tone: "error", text: err instanceof Error ? err.message : "Could not save" });
     }
   });

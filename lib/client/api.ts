@@ -11,6 +11,7 @@ import type { notificationSettingsSchema } from "@/lib/validations/notifications
 import type { addBlockSchema, createSessionSchema, updateSessionSchema, weekToolSchema } from "@/lib/validations/plan";
 import type { createRestrictionSchema, restrictionActionSchema } from "@/lib/validations/restrictions";
 import type { teamSettingsPatchSchema } from "@/lib/validations/team-settings";
+import type { teamWeekSchema } from "@/lib/validations/team-week";
 import type { templateSchema, updateTemplateSchema } from "@/lib/validations/template";
 import { sendJson, type ApiError } from "./fetcher";
 import { loadKeys, noticeKeys, planKeys, restrictionKeys } from "./keys";
@@ -48,6 +49,8 @@ export const hitsOf = (e: ApiError) => (e.details.hits as RestrictionHit[] | und
 export const loadApi = {
   saveSettings: (teamId: number, body: Body<typeof teamSettingsPatchSchema>) =>
     sendJson<{ settings: TeamLoadSettings }>("PATCH", loadKeys.teamSettings(teamId), body),
+  saveWeekStart: (teamId: number, body: Body<typeof teamWeekSchema>) =>
+    sendJson<z.infer<typeof teamWeekSchema>>("PATCH", loadKeys.teamWeekStart(teamId), body),
 };
 
 export const noticeApi = {

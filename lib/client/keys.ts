@@ -22,6 +22,7 @@ export const loadKeys = {
   /** Matches every load answer (squad weeks and athletes): all of them depend on the team's thresholds. */
   isLoad: (key: unknown) => typeof key === "string" && key.includes("/load"),
   teamSettings: (teamId: number) => `/api/teams/${teamId}/settings`,
+  teamWeekStart: (teamId: number) => `/api/teams/${teamId}/week-start`,
 };
 
 export const noticeKeys = {
