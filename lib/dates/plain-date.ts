@@ -28,7 +28,7 @@ function daysFromCivil(y: number, m: number, d: number): number {
   return era * 146097 + doe - 719468;
 }
 
-export function daysInMonth(year: number, month: number): number {
+function daysInMonth(year: number, month: number): number {
   if (month === 2) return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0 ? 29 : 28;
   return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
 }
@@ -57,7 +57,7 @@ function pad2(n: number): string {
 }
 
 // civil_from_days, H. Hinnant (same source as daysFromCivil)
-export function civilFromDay(day: number): { year: number; month: number; day: number } {
+function civilFromDay(day: number): { year: number; month: number; day: number } {
   const z = day + 719468;
   const era = Math.floor(z / 146097);
   const doe = z - era * 146097;
@@ -93,10 +93,10 @@ export function diffDays(to: string, from: string): number {
   return dayIndex(to) - dayIndex(from);
 }
 
-export type IsoWeekday = 1 | 2 | 3 | 4 | 5 | 6 | 7;
+type IsoWeekday = 1 | 2 | 3 | 4 | 5 | 6 | 7;
 
 /** ISO 8601 weekday of a day number: 1 = Monday … 7 = Sunday. 1970-01-01 was a Thursday (4). */
-export function weekdayOfDay(day: number): IsoWeekday {
+function weekdayOfDay(day: number): IsoWeekday {
   return (((((day + 3) % 7) + 7) % 7) + 1) as IsoWeekday;
 }
 
@@ -104,7 +104,7 @@ export function weekday(date: string): IsoWeekday {
   return weekdayOfDay(dayIndex(date));
 }
 
-export function isIsoWeekday(value: unknown): value is IsoWeekday {
+function isIsoWeekday(value: unknown): value is IsoWeekday {
   return typeof value === "number" && Number.isInteger(value) && value >= 1 && value <= 7;
 }
 
@@ -134,10 +134,6 @@ export function shiftWeek(weekStart: string, weeks: number): string {
   return addDays(weekStart, weeks * 7);
 }
 
-export function isDateInWeek(date: string, weekStart: string): boolean {
-  return date >= weekStart && date <= addDays(weekStart, 6);
-}
-
 /**
  * ISO 8601 week number of a week. A Monday week is exactly one ISO week; a week starting on another day takes
  * the ISO week of its fourth day, which holds most of its days (the same rule ISO uses for years: week 1 holds
@@ -157,14 +153,6 @@ export function dateRange(from: string, to: string): string[] {
   const out: string[] = [];
   for (let i = 0; i < n; i++) out.push(dateFromDayIndex(start + i));
   return out;
-}
-
-export function minDate(a: string, b: string): string {
-  return a <= b ? a : b;
-}
-
-export function maxDate(a: string, b: string): string {
-  return a >= b ? a : b;
 }
 
 /** Minutes after midnight of "HH:MM" (00:00–23:59). Throws RangeError when malformed. */
