@@ -88,7 +88,7 @@ describeBrowser("the team's week start", () => {
     expect(headings[0]).toMatch(/^Sun/);
     expect(headings[6]).toMatch(/^Sat/);
     await page.close();
-  });
+  }, 60_000); // two sign-ins and three page loads on a shared machine
 
   it("a coach gets 403 and a bad value gets a 400 naming the field", async () => {
     const coach = await apiSession(app, COACH);
