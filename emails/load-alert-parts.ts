@@ -1,3 +1,4 @@
+import type { AlertBasis } from "@/lib/domain/alerts";
 import { formatDayLong } from "@/lib/format/dates";
 import { formatNumber } from "@/lib/format/number";
 
@@ -16,7 +17,7 @@ export interface LoadAlertItem {
   /** The day the flag concerns, YYYY-MM-DD. */
   date: string;
   /** Flags on the plan warn ahead; flags on logged sessions report what happened. */
-  basis: "planned" | "actual";
+  basis: AlertBasis;
   /** The athlete's load page in the app. */
   loadUrl: string;
   /** The section of "How figures are worked out" that explains this flag. */

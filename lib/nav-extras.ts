@@ -1,11 +1,9 @@
 import "server-only";
-import { createElement } from "react";
 import type { Viewer } from "@/lib/auth/access";
 import { can } from "@/lib/auth/permissions";
-import type { NavLink } from "@/components/shell/workspace-nav";
-import { UnreadBadge } from "@/components/notices/unread-badge";
 import { countUnreadAlerts } from "@/lib/data/alerts";
 import { isFakeMailbox } from "@/lib/mail/transport";
+import type { NavLink } from "@/lib/nav";
 
 /**
  * Navigation entries that depend on runtime state (e.g. the unread alert count, the local mailbox in
@@ -16,11 +14,7 @@ export async function extraNavLinks(viewer: Viewer): Promise<NavLink[]> {
   const links: NavLink[] = [];
   if (can(viewer.role, "alerts:view", "team")) {
     const unread = await countUnreadAlerts({ teamId: viewer.teamId, userId: viewer.userId });
-    links.push({
-      href: "/alerts",
-      label: "Alerts",
-      badge: unread > 0 ? createElement(UnreadBadge, { count: unread }) : undefined,
-    });
+    links.push({ href: "/alerts", label: "Alerts", ...(unread > 0 ? { unread } : {}) });
   }
   if (isFakeMailbox()) links.push({ href: "/mailbox", label: "Mailbox" });
   return links;

@@ -9,6 +9,9 @@ export type NavItem = {
   athleteHref?: (athleteId: number) => string;
 };
 
+/** One entry as the navigation shows it; `unread` puts a count beside the label (the alerts inbox). */
+export type NavLink = { href: string; label: string; unread?: number };
+
 /**
  * The signed-in navigation. An item shows when the role holds the action at the given scope, so an athlete
  * ("own" scope) never sees squad screens. Hiding an item is convenience only: every page checks again.

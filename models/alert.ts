@@ -1,20 +1,17 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
+import type { AlertBasis, AlertKind, AlertStatus } from "@/lib/domain/alerts";
 import type { Athlete } from "./athlete";
 import type { Team } from "./team";
-
-export const ALERT_KINDS = ["spike", "weekly_jump", "plyo_volume", "recovery", "restriction_override"] as const;
-export type AlertKind = (typeof ALERT_KINDS)[number];
-export const ALERT_STATUSES = ["open", "acknowledged", "resolved"] as const;
-export type AlertStatus = (typeof ALERT_STATUSES)[number];
-export type AlertBasis = "planned" | "actual";
 
 /** A load flag the engine raised for one athlete and week, for the physio (and opted-in coaches) to handle. */
 export class Alert extends Model<InferAttributes<Alert>, InferCreationAttributes<Alert>> {
@@ -43,6 +40,14 @@ export class Alert extends Model<InferAttributes<Alert>, InferCreationAttributes
   declare resolvedAt: Date | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare team?: NonAttribute<Team>;
+  declare athlete?: NonAttribute<Athlete>;
+  declare static associations: {
+    team: Association<Alert, Team>;
+    athlete: Association<Alert, Athlete>;
+  };
 
   static initModel(sequelize: Sequelize) {
     Alert.init(

@@ -1,18 +1,18 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
+import type { PlyoLevel, Sex } from "@/lib/domain/athletes";
 import type { Team } from "./team";
 import type { TrainingGroup } from "./training-group";
 import type { User } from "./user";
-
-export const SEXES = ["female", "male"] as const;
-export const PLYO_LEVELS = ["beginner", "intermediate", "advanced"] as const;
 
 export class Athlete extends Model<InferAttributes<Athlete>, InferCreationAttributes<Athlete>> {
   declare id: CreationOptional<number>;
@@ -20,7 +20,7 @@ export class Athlete extends Model<InferAttributes<Athlete>, InferCreationAttrib
   declare userId: ForeignKey<User["id"]> | null;
   declare groupId: ForeignKey<TrainingGroup["id"]> | null;
   declare name: string;
-  declare sex: (typeof SEXES)[number] | null;
+  declare sex: Sex | null;
   /** Local calendar date, YYYY-MM-DD. */
   declare birthDate: string | null;
   declare bodyMassKg: number | null;
@@ -31,9 +31,19 @@ export class Athlete extends Model<InferAttributes<Athlete>, InferCreationAttrib
   declare tauS: number | null;
   /** Step length at top speed, m. */
   declare stepLengthM: number | null;
-  declare plyoLevel: CreationOptional<(typeof PLYO_LEVELS)[number]>;
+  declare plyoLevel: CreationOptional<PlyoLevel>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare team?: NonAttribute<Team>;
+  declare group?: NonAttribute<TrainingGroup>;
+  declare user?: NonAttribute<User>;
+  declare static associations: {
+    team: Association<Athlete, Team>;
+    group: Association<Athlete, TrainingGroup>;
+    user: Association<Athlete, User>;
+  };
 
   static initModel(sequelize: Sequelize) {
     Athlete.init(

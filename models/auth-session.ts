@@ -1,10 +1,12 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
 import type { User } from "./user";
@@ -18,6 +20,12 @@ export class AuthSession extends Model<InferAttributes<AuthSession>, InferCreati
   declare expiresAt: Date;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare user?: NonAttribute<User>;
+  declare static associations: {
+    user: Association<AuthSession, User>;
+  };
 
   static initModel(sequelize: Sequelize) {
     AuthSession.init(

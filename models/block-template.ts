@@ -1,10 +1,12 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
 import type { BlockKind, PlyoDrill, RunningPrescription } from "@/lib/load/types";
@@ -26,6 +28,12 @@ export class BlockTemplate extends Model<InferAttributes<BlockTemplate>, InferCr
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare team?: NonAttribute<Team>;
+  declare static associations: {
+    team: Association<BlockTemplate, Team>;
+  };
 
   static initModel(sequelize: Sequelize) {
     BlockTemplate.init(

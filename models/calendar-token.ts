@@ -1,10 +1,12 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
 import type { Athlete } from "./athlete";
@@ -23,6 +25,14 @@ export class CalendarToken extends Model<InferAttributes<CalendarToken>, InferCr
   declare lastUsedAt: Date | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare athlete?: NonAttribute<Athlete>;
+  declare team?: NonAttribute<Team>;
+  declare static associations: {
+    athlete: Association<CalendarToken, Athlete>;
+    team: Association<CalendarToken, Team>;
+  };
 
   static initModel(sequelize: Sequelize) {
     CalendarToken.init(

@@ -1,10 +1,12 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
 import type { Role } from "@/lib/auth/roles";
@@ -34,6 +36,14 @@ export class Invitation extends Model<InferAttributes<Invitation>, InferCreation
   declare usedAt: Date | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare team?: NonAttribute<Team>;
+  declare user?: NonAttribute<User>;
+  declare static associations: {
+    team: Association<Invitation, Team>;
+    user: Association<Invitation, User>;
+  };
 
   static initModel(sequelize: Sequelize) {
     Invitation.init(

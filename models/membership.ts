@@ -1,10 +1,12 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
 import { ROLES, type Role } from "@/lib/auth/roles";
@@ -18,6 +20,14 @@ export class Membership extends Model<InferAttributes<Membership>, InferCreation
   declare role: Role;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare team?: NonAttribute<Team>;
+  declare user?: NonAttribute<User>;
+  declare static associations: {
+    team: Association<Membership, Team>;
+    user: Association<Membership, User>;
+  };
 
   static initModel(sequelize: Sequelize) {
     Membership.init(

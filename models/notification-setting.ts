@@ -1,17 +1,17 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
+import type { AlertEmailMode } from "@/lib/domain/alerts";
 import type { Team } from "./team";
 import type { User } from "./user";
-
-export const ALERT_EMAIL_MODES = ["each", "digest", "off"] as const;
-export type AlertEmailMode = (typeof ALERT_EMAIL_MODES)[number];
 
 /** How one member hears about load alerts in one team. No row = the role's default. */
 export class NotificationSetting extends Model<
@@ -27,6 +27,14 @@ export class NotificationSetting extends Model<
   declare alertsSeenAt: Date | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare team?: NonAttribute<Team>;
+  declare user?: NonAttribute<User>;
+  declare static associations: {
+    team: Association<NotificationSetting, Team>;
+    user: Association<NotificationSetting, User>;
+  };
 
   static initModel(sequelize: Sequelize) {
     NotificationSetting.init(

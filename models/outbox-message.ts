@@ -1,24 +1,16 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
+import type { OutboxKind, OutboxStatus } from "@/lib/domain/outbox";
 import type { Team } from "./team";
-
-export const OUTBOX_KINDS = [
-  "alert",
-  "digest",
-  "invitation",
-  "password_reset",
-  "calendar_request",
-  "calendar_cancel",
-] as const;
-export type OutboxKind = (typeof OUTBOX_KINDS)[number];
-export type OutboxStatus = "pending" | "sending" | "sent" | "failed";
 
 /** One e-mail to deliver, written in the same transaction as the change that caused it. */
 export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCreationAttributes<OutboxMessage>> {
@@ -45,6 +37,12 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
   declare sentAt: Date | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare team?: NonAttribute<Team>;
+  declare static associations: {
+    team: Association<OutboxMessage, Team>;
+  };
 
   static initModel(sequelize: Sequelize) {
     OutboxMessage.init(

@@ -1,6 +1,7 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
@@ -8,12 +9,11 @@ import {
   type NonAttribute,
   type Sequelize,
 } from "sequelize";
+import type { SessionStatus } from "@/lib/domain/sessions";
 import type { Athlete } from "./athlete";
 import type { SessionBlock } from "./session-block";
 import type { Team } from "./team";
-
-export const SESSION_STATUSES = ["draft", "published", "cancelled"] as const;
-export type SessionStatus = (typeof SESSION_STATUSES)[number];
+import type { SessionLog } from "./session-log";
 
 export class PlannedSession extends Model<InferAttributes<PlannedSession>, InferCreationAttributes<PlannedSession>> {
   declare id: CreationOptional<number>;
@@ -37,7 +37,17 @@ export class PlannedSession extends Model<InferAttributes<PlannedSession>, Infer
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare team?: NonAttribute<Team>;
+  declare athlete?: NonAttribute<Athlete>;
   declare blocks?: NonAttribute<SessionBlock[]>;
+  declare log?: NonAttribute<SessionLog | null>;
+  declare static associations: {
+    team: Association<PlannedSession, Team>;
+    athlete: Association<PlannedSession, Athlete>;
+    blocks: Association<PlannedSession, SessionBlock>;
+    log: Association<PlannedSession, SessionLog>;
+  };
 
   static initModel(sequelize: Sequelize) {
     PlannedSession.init(

@@ -1,10 +1,12 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
 import type { Athlete } from "./athlete";
@@ -28,6 +30,16 @@ export class RestrictionOverride extends Model<
   declare userId: number | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare restriction?: NonAttribute<Restriction>;
+  declare athlete?: NonAttribute<Athlete>;
+  declare team?: NonAttribute<Team>;
+  declare static associations: {
+    restriction: Association<RestrictionOverride, Restriction>;
+    athlete: Association<RestrictionOverride, Athlete>;
+    team: Association<RestrictionOverride, Team>;
+  };
 
   static initModel(sequelize: Sequelize) {
     RestrictionOverride.init(

@@ -1,10 +1,12 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
 import type { RestrictionRuleKind } from "@/lib/restrictions/rules";
@@ -29,6 +31,14 @@ export class Restriction extends Model<InferAttributes<Restriction>, InferCreati
   declare liftedBy: number | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare athlete?: NonAttribute<Athlete>;
+  declare team?: NonAttribute<Team>;
+  declare static associations: {
+    athlete: Association<Restriction, Athlete>;
+    team: Association<Restriction, Team>;
+  };
 
   static initModel(sequelize: Sequelize) {
     Restriction.init(

@@ -1,10 +1,12 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
 import type { BlockKind, PlyoDrill, RunningPrescription } from "@/lib/load/types";
@@ -24,6 +26,14 @@ export class SessionBlock extends Model<InferAttributes<SessionBlock>, InferCrea
   declare notes: string | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare session?: NonAttribute<PlannedSession>;
+  declare template?: NonAttribute<BlockTemplate | null>;
+  declare static associations: {
+    session: Association<SessionBlock, PlannedSession>;
+    template: Association<SessionBlock, BlockTemplate>;
+  };
 
   static initModel(sequelize: Sequelize) {
     SessionBlock.init(

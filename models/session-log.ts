@@ -1,17 +1,17 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
+import type { Completion } from "@/lib/domain/sessions";
 import type { Athlete } from "./athlete";
 import type { PlannedSession } from "./planned-session";
-
-export const COMPLETIONS = ["yes", "partly", "no"] as const;
-export type Completion = (typeof COMPLETIONS)[number];
 
 /** What the athlete actually did in a planned session. */
 export class SessionLog extends Model<InferAttributes<SessionLog>, InferCreationAttributes<SessionLog>> {
@@ -27,6 +27,14 @@ export class SessionLog extends Model<InferAttributes<SessionLog>, InferCreation
   declare notes: string | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare session?: NonAttribute<PlannedSession>;
+  declare athlete?: NonAttribute<Athlete>;
+  declare static associations: {
+    session: Association<SessionLog, PlannedSession>;
+    athlete: Association<SessionLog, Athlete>;
+  };
 
   static initModel(sequelize: Sequelize) {
     SessionLog.init(

@@ -1,10 +1,12 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
 import { DEFAULT_TEAM_LOAD_SETTINGS as DEFAULTS } from "@/lib/load/types";
@@ -39,6 +41,12 @@ export class TeamLoadSettings extends Model<
   declare monotonyLimit: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare team?: NonAttribute<Team>;
+  declare static associations: {
+    team: Association<TeamLoadSettings, Team>;
+  };
 
   static initModel(sequelize: Sequelize) {
     TeamLoadSettings.init(

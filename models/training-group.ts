@@ -1,10 +1,12 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
 import type { Team } from "./team";
@@ -16,6 +18,12 @@ export class TrainingGroup extends Model<InferAttributes<TrainingGroup>, InferCr
   declare sortOrder: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare team?: NonAttribute<Team>;
+  declare static associations: {
+    team: Association<TrainingGroup, Team>;
+  };
 
   static initModel(sequelize: Sequelize) {
     TrainingGroup.init(

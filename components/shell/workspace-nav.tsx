@@ -3,9 +3,8 @@
 import { clsx } from "clsx";
 import Link from "next/link";
 import { usePathname } from "next/navigation";
-import type { ReactNode } from "react";
-
-export type NavLink = { href: string; label: string; badge?: ReactNode };
+import { UnreadBadge } from "@/components/notices/unread-badge";
+import type { NavLink } from "@/lib/nav";
 
 export function WorkspaceNav({ links }: { links: NavLink[] }) {
   const pathname = usePathname();
@@ -24,7 +23,7 @@ export function WorkspaceNav({ links }: { links: NavLink[] }) {
             )}
           >
             <span>{link.label}</span>
-            {link.badge}
+            {link.unread ? <UnreadBadge count={link.unread} /> : null}
           </Link>
         );
       })}

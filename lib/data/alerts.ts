@@ -3,7 +3,7 @@ import { Op, type Transaction, type WhereOptions } from "sequelize";
 import { AppError } from "@/lib/errors";
 import type { AlertActionInput, AlertListQuery } from "@/lib/validations/alerts";
 import { db, type Alert } from "@/models";
-import type { AlertBasis, AlertKind, AlertStatus } from "@/models/alert";
+import type { AlertBasis, AlertKind, AlertStatus } from "@/lib/domain/alerts";
 import { getAlertsSeenAt } from "./notification-settings";
 import { userNames } from "./users";
 

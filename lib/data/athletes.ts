@@ -1,4 +1,5 @@
 import "server-only";
+import type { PlyoLevel, Sex } from "@/lib/domain/athletes";
 import type { Transaction } from "sequelize";
 import { AppError } from "@/lib/errors";
 import type { AthleteInput } from "@/lib/validations/athlete";
@@ -9,14 +10,14 @@ export type AthleteRow = {
   name: string;
   groupId: number | null;
   groupName: string | null;
-  sex: "female" | "male" | null;
+  sex: Sex | null;
   birthDate: string | null;
   bodyMassKg: number | null;
   vmaxMs: number | null;
   vmaxTestedOn: string | null;
   tauS: number | null;
   stepLengthM: number | null;
-  plyoLevel: "beginner" | "intermediate" | "advanced";
+  plyoLevel: PlyoLevel;
   hasAccount: boolean;
 };
 
@@ -103,39 +104,51 @@ export async function listUnlinkedAthletes({ teamId }: { teamId: number }) {
   return rows.map((a) => ({ id: a.id, name: a.name }));
 }
 
-async function assertGroupOfTeam({ teamId, groupId }: { teamId: number; groupId: number | null }) {
+async function assertGroupOfTeam({
+  teamId,
+  groupId,
+  transaction,
+}: {
+  teamId: number;
+  groupId: number | null;
+  transaction: Transaction;
+}) {
   if (groupId === null) return;
   const { TrainingGroup } = await db();
-  if (!(await TrainingGroup.count({ where: { id: groupId, teamId } }))) {
+  if (!(await TrainingGroup.count({ where: { id: groupId, teamId }, transaction }))) {
     throw new AppError("invalid", "Choose a training group of this team", { fields: { groupId: ["Unknown group"] } });
   }
 }
 
-export async function createAthlete({
+export async function insertAthlete({
   teamId,
   input,
+  transaction,
 }: {
   teamId: number;
   input: AthleteInput;
+  transaction: Transaction;
 }): Promise<{ id: number }> {
   const { Athlete } = await db();
-  await assertGroupOfTeam({ teamId, groupId: input.groupId });
-  const athlete = await Athlete.create({ teamId, userId: null, ...input });
+  await assertGroupOfTeam({ teamId, groupId: input.groupId, transaction });
+  const athlete = await Athlete.create({ teamId, userId: null, ...input }, { transaction });
   return { id: athlete.id };
 }
 
-export async function updateAthlete({
+export async function updateAthleteRow({
   teamId,
   athleteId,
   input,
+  transaction,
 }: {
   teamId: number;
   athleteId: number;
   input: AthleteInput;
+  transaction: Transaction;
 }): Promise<{ id: number }> {
   const { Athlete } = await db();
-  await assertGroupOfTeam({ teamId, groupId: input.groupId });
-  const [count] = await Athlete.update(input, { where: { id: athleteId, teamId } });
+  await assertGroupOfTeam({ teamId, groupId: input.groupId, transaction });
+  const [count] = await Athlete.update(input, { where: { id: athleteId, teamId }, transaction });
   if (!count) throw new AppError("not_found", "No such athlete");
   return { id: athleteId };
 }

@@ -40,10 +40,21 @@ export async function sessionWritesSettled(): Promise<void> {
  * True while the session is alive: its row exists, the absolute lifetime has not run out and it was used within
  * the idle timeout. Records the activity (at most once per `touchMs`). A dead session's row is removed.
  */
-export async function touchSession({ sid, userId, now = new Date() }: { sid: string; userId: number; now?: Date }): Promise<boolean> {
+export async function touchSession({
+  sid,
+  userId,
+  now = new Date(),
+}: {
+  sid: string;
+  userId: number;
+  now?: Date;
+}): Promise<boolean> {
   const { AuthSession } = await db();
   const { idleMs, touchMs } = sessionPolicy();
-  const row = await AuthSession.findOne({ where: { tokenHash: hashToken(sid) }, attributes: ["id", "userId", "lastSeenAt", "expiresAt"] });
+  const row = await AuthSession.findOne({
+    where: { tokenHash: hashToken(sid) },
+    attributes: ["id", "userId", "lastSeenAt", "expiresAt"],
+  });
   if (!row || row.userId !== userId) return false;
   const t = now.getTime();
   if (row.expiresAt.getTime() <= t || row.lastSeenAt.getTime() + idleMs <= t) {
@@ -51,7 +62,11 @@ export async function touchSession({ sid, userId, now = new Date() }: { sid: str
     return false;
   }
   if (t - row.lastSeenAt.getTime() >= touchMs) {
-    inBackground(row.id, () => AuthSession.update({ lastSeenAt: now }, { where: { id: row.id } }), Date.now() + touchMs);
+    inBackground(
+      row.id,
+      () => AuthSession.update({ lastSeenAt: now }, { where: { id: row.id } }),
+      Date.now() + touchMs,
+    );
   }
   return true;
 }
@@ -63,7 +78,13 @@ export async function endSession({ sid }: { sid: string }): Promise<void> {
 }
 
 /** Every browser of the account is signed out (after a password reset). */
-export async function endAllSessions({ userId, transaction }: { userId: number; transaction?: Transaction }): Promise<void> {
+export async function endAllSessions({
+  userId,
+  transaction,
+}: {
+  userId: number;
+  transaction?: Transaction;
+}): Promise<void> {
   const { AuthSession } = await db();
   await AuthSession.destroy({ where: { userId }, transaction });
 }

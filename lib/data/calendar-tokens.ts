@@ -1,4 +1,5 @@
 import "server-only";
+import type { Completion } from "@/lib/domain/sessions";
 import { Op, type Transaction } from "sequelize";
 import type { CalendarSession } from "@/lib/calendar/types";
 import { hashToken, newToken } from "@/lib/auth/tokens";
@@ -136,7 +137,7 @@ export type AthleteSession = CalendarSession & {
   sessionId: number;
   plannedRpe: number;
   log: {
-    completion: "yes" | "partly" | "no";
+    completion: Completion;
     rpe: number | null;
     minutes: number | null;
     completedReps: Record<string, number> | null;
@@ -191,7 +192,7 @@ export async function listAthleteSessions({
     ],
   });
   return rows.map((s) => {
-    const log = (s as unknown as { log: AthleteSession["log"] }).log;
+    const log = s.log;
     return {
       id: String(s.id),
       sessionId: s.id,

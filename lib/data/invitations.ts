@@ -15,7 +15,13 @@ export type InvitationRow = {
 };
 
 /** The team's invitations nobody accepted or withdrew yet, newest first (expired ones too, to send again). */
-export async function listInvitations({ teamId, now = new Date() }: { teamId: number; now?: Date }): Promise<InvitationRow[]> {
+export async function listInvitations({
+  teamId,
+  now = new Date(),
+}: {
+  teamId: number;
+  now?: Date;
+}): Promise<InvitationRow[]> {
   const { Invitation } = await db();
   const rows = await Invitation.findAll({
     where: { teamId, purpose: "invite", usedAt: null, role: { [Op.ne]: null } },
@@ -32,9 +38,20 @@ export async function listInvitations({ teamId, now = new Date() }: { teamId: nu
 }
 
 /** The head coach takes an invitation back: its link stops working at once. */
-export async function withdrawInvitation({ teamId, invitationId, now = new Date() }: { teamId: number; invitationId: number; now?: Date }) {
+export async function withdrawInvitation({
+  teamId,
+  invitationId,
+  now = new Date(),
+}: {
+  teamId: number;
+  invitationId: number;
+  now?: Date;
+}) {
   const { Invitation } = await db();
-  const [count] = await Invitation.update({ usedAt: now }, { where: { id: invitationId, teamId, purpose: "invite", usedAt: null } });
+  const [count] = await Invitation.update(
+    { usedAt: now },
+    { where: { id: invitationId, teamId, purpose: "invite", usedAt: null } },
+  );
   if (count !== 1) throw new AppError("not_found", "No such invitation");
   return { invitationId };
 }
@@ -66,7 +83,10 @@ export async function openInvitationByToken({
   now?: Date;
 }): Promise<Invitation | null> {
   const { Invitation } = await db();
-  return Invitation.findOne({ where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: now } }, transaction });
+  return Invitation.findOne({
+    where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: now } },
+    transaction,
+  });
 }
 
 /**

@@ -279,15 +279,23 @@ export type LoadPreviewDto = {
 };
 
 /** Projected totals and flags for a proposed week, without saving anything. */
-export async function previewAthleteWeek({ input, today }: { input: LoadPreviewInput; today?: string }): Promise<LoadPreviewDto> {
+export async function previewAthleteWeek({
+  input,
+  today,
+}: {
+  input: LoadPreviewInput;
+  today?: string;
+}): Promise<LoadPreviewDto> {
   const probe = await getTeamClock({ teamId: input.teamId });
   const weekStart = startOfWeek(input.week, probe.weekStartDay);
   const weekEnd = addDays(weekStart, 6);
   const fields: Record<string, string[]> = {};
   input.sessions.forEach((s, i) => {
-    if (s.date < weekStart || s.date > weekEnd) fields[`sessions.${i}.date`] = [`Must be inside the week ${weekStart} to ${weekEnd}`];
+    if (s.date < weekStart || s.date > weekEnd)
+      fields[`sessions.${i}.date`] = [`Must be inside the week ${weekStart} to ${weekEnd}`];
   });
-  if (Object.keys(fields).length > 0) throw new AppError("invalid", `Invalid ${Object.keys(fields).join(", ")}`, { fields });
+  if (Object.keys(fields).length > 0)
+    throw new AppError("invalid", `Invalid ${Object.keys(fields).join(", ")}`, { fields });
   const now = today ?? teamToday({ timeZone: probe.timeZone, now: new Date() });
   const inputs = await getAthleteLoadInputs({ athleteId: input.athleteId, through: weekEnd });
   // An athlete of another team is "not found", whatever the caller may do in its own team.
@@ -314,7 +322,15 @@ export async function previewAthleteWeek({ input, today }: { input: LoadPreviewI
   const proposedIds = new Set(proposed.map((s) => s.id));
   const outsideIds = new Set(outside.map((s) => s.id));
   const keptLogs = athlete.logs.filter((l) => outsideIds.has(l.sessionId) || proposedIds.has(l.sessionId));
-  const base = { profile: athlete.profile, settings, from: weekStart, to: weekEnd, today: now, view: "projected" as const, weekStart };
+  const base = {
+    profile: athlete.profile,
+    settings,
+    from: weekStart,
+    to: weekEnd,
+    today: now,
+    view: "projected" as const,
+    weekStart,
+  };
   const next = computeAthleteLoad({ ...base, sessions: [...outside, ...proposed], logs: keptLogs });
   const saved = computeAthleteLoad({ ...base, sessions: athlete.sessions, logs: athlete.logs });
   return {

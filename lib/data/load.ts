@@ -54,7 +54,13 @@ type Through = {
 };
 
 /** The team's zone and ISO week start; 404 when the team does not exist. */
-export async function getTeamClock({ teamId, transaction }: { teamId: number; transaction?: Transaction }): Promise<TeamClock> {
+export async function getTeamClock({
+  teamId,
+  transaction,
+}: {
+  teamId: number;
+  transaction?: Transaction;
+}): Promise<TeamClock> {
   const { Team } = await db();
   const team = await Team.findByPk(teamId, { attributes: ["timeZone", "weekStartDay"], raw: true, transaction });
   if (!team) throw new AppError("not_found", "Not found");
@@ -219,7 +225,9 @@ export async function getLoadSeriesInputs({
     }
   }
   const order = new Map(athletes.map((a) => [a.id, a.group_order ?? 1e9]));
-  const list = [...byAthlete.values()].sort((x, y) => order.get(x.id)! - order.get(y.id)! || x.name.localeCompare(y.name));
+  const list = [...byAthlete.values()].sort(
+    (x, y) => order.get(x.id)! - order.get(y.id)! || x.name.localeCompare(y.name),
+  );
   return { teamId, settings, timeZone: team.time_zone, weekStartDay: team.week_start_day, athletes: list };
 }
 

@@ -1,4 +1,5 @@
 import "server-only";
+import type { Completion, SessionStatus } from "@/lib/domain/sessions";
 import type { Transaction } from "sequelize";
 import { prescribedReps } from "@/lib/load";
 import type { BlockInput, BlockKind, PlyoDrill, RunningPrescription } from "@/lib/load/types";
@@ -9,7 +10,7 @@ export type LogTarget = {
   teamId: number;
   athleteId: number;
   date: string;
-  status: "draft" | "published" | "cancelled";
+  status: SessionStatus;
   /** Block id → prescribed reps (sets × reps; for plyometrics summed over drills). */
   blockReps: Record<string, number>;
 };
@@ -17,7 +18,7 @@ export type LogTarget = {
 export type SessionLogDto = {
   sessionId: number;
   athleteId: number;
-  completion: "yes" | "partly" | "no";
+  completion: Completion;
   rpe: number | null;
   minutes: number | null;
   completedReps: Record<string, number> | null;

@@ -29,11 +29,17 @@ export async function listMembers({ teamId }: { teamId: number }): Promise<Membe
     where: { teamId },
     attributes: ["id", "userId", "role"],
     include: [{ model: User, as: "user", attributes: ["id", "name", "email"] }],
-    order: [["role", "ASC"], ["id", "ASC"]],
+    order: [
+      ["role", "ASC"],
+      ["id", "ASC"],
+    ],
   });
-  const athletes = await Athlete.findAll({ where: { teamId, userId: { [Op.ne]: null } }, attributes: ["id", "userId"] });
+  const athletes = await Athlete.findAll({
+    where: { teamId, userId: { [Op.ne]: null } },
+    attributes: ["id", "userId"],
+  });
   return rows.map((m) => {
-    const user = (m as unknown as { user: { id: number; name: string; email: string } }).user;
+    const user = m.user!;
     return {
       membershipId: m.id,
       userId: user.id,
@@ -183,12 +189,21 @@ async function inviterNameFor({
   return user?.name ?? "Your coach";
 }
 
-export async function changeMemberRole({ teamId, membershipId, role }: { teamId: number; membershipId: number; role: Role }) {
+export async function changeMemberRole({
+  teamId,
+  membershipId,
+  role,
+}: {
+  teamId: number;
+  membershipId: number;
+  role: Role;
+}) {
   const { sequelize, Membership } = await db();
   return sequelize.transaction(async (transaction) => {
     const membership = await Membership.findOne({ where: { id: membershipId, teamId }, transaction });
     if (!membership) throw new AppError("not_found", "No such member");
-    if (membership.role === "head_coach" && role !== "head_coach") await assertAnotherHeadCoach({ teamId, membershipId, transaction });
+    if (membership.role === "head_coach" && role !== "head_coach")
+      await assertAnotherHeadCoach({ teamId, membershipId, transaction });
     await membership.update({ role }, { transaction });
     return { membershipId, role };
   });
@@ -259,7 +274,10 @@ export async function acceptInvitation({ token, password }: { token: string; pas
   const passwordHash = await hashPassword(password);
   return sequelize.transaction(async (transaction) => {
     const invitation = await openInvitationByToken({ token, transaction });
-    if (!invitation) throw new AppError("invalid", "This link has expired or was already used", { fields: { token: ["Expired or used"] } });
+    if (!invitation)
+      throw new AppError("invalid", "This link has expired or was already used", {
+        fields: { token: ["Expired or used"] },
+      });
     if (invitation.purpose === "invite") {
       const user = await User.findByPk(invitation.userId, { attributes: ["passwordHash"], transaction });
       if (user?.passwordHash)

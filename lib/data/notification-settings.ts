@@ -2,7 +2,7 @@ import "server-only";
 import { Op, type Transaction } from "sequelize";
 import type { Role } from "@/lib/auth/roles";
 import { db } from "@/models";
-import type { AlertEmailMode } from "@/models/notification-setting";
+import type { AlertEmailMode } from "@/lib/domain/alerts";
 
 /** Physios hear about every alert unless they say otherwise; coaches opt in; athletes never get load alerts. */
 export function defaultAlertEmail(role: Role): AlertEmailMode {
@@ -24,7 +24,9 @@ export async function getNotificationSettings({
 }): Promise<NotificationSettingsView> {
   const { NotificationSetting } = await db();
   const row = await NotificationSetting.findOne({ where: { userId, teamId }, attributes: ["alertEmail"] });
-  return row ? { alertEmail: row.alertEmail, isDefault: false } : { alertEmail: defaultAlertEmail(role), isDefault: true };
+  return row
+    ? { alertEmail: row.alertEmail, isDefault: false }
+    : { alertEmail: defaultAlertEmail(role), isDefault: true };
 }
 
 export async function updateNotificationSettings({
@@ -44,7 +46,11 @@ export async function updateNotificationSettings({
     // Switching to the digest starts its window now, so alerts already mailed one by one are not repeated.
     const lastDigestAt = alertEmail === "digest" && row?.alertEmail !== "digest" ? now : (row?.lastDigestAt ?? null);
     if (row) await row.update({ alertEmail, lastDigestAt }, { transaction });
-    else await NotificationSetting.create({ userId, teamId, alertEmail, lastDigestAt, alertsSeenAt: null }, { transaction });
+    else
+      await NotificationSetting.create(
+        { userId, teamId, alertEmail, lastDigestAt, alertsSeenAt: null },
+        { transaction },
+      );
     return { alertEmail, isDefault: false };
   });
 }
@@ -74,10 +80,14 @@ export async function listAlertRecipients({
     order: [["id", "ASC"]],
     transaction,
   });
-  const settings = await NotificationSetting.findAll({ where: { teamId }, attributes: ["userId", "alertEmail"], transaction });
+  const settings = await NotificationSetting.findAll({
+    where: { teamId },
+    attributes: ["userId", "alertEmail"],
+    transaction,
+  });
   const chosen = new Map(settings.map((s) => [s.userId, s.alertEmail]));
   return memberships.map((m) => {
-    const user = (m as unknown as { user: { id: number; name: string; email: string } }).user;
+    const user = m.user!;
     return {
       userId: user.id,
       name: user.name,
@@ -93,7 +103,15 @@ export async function isJoinedMember({ teamId, email }: { teamId: number; email:
   const { Membership, User } = await db();
   const count = await Membership.count({
     where: { teamId },
-    include: [{ model: User, as: "user", attributes: [], where: { ...JOINED, email: email.trim().toLowerCase() }, required: true }],
+    include: [
+      {
+        model: User,
+        as: "user",
+        attributes: [],
+        where: { ...JOINED, email: email.trim().toLowerCase() },
+        required: true,
+      },
+    ],
   });
   return count > 0;
 }
@@ -158,10 +176,8 @@ export async function listDigestSubscribers(): Promise<DigestSubscriber[]> {
   return rows
     .filter((r) => isStaff.has(`${r.userId}:${r.teamId}`))
     .map((r) => {
-      const { user, team } = r as unknown as {
-        user: { name: string; email: string };
-        team: { name: string; timeZone: string };
-      };
+      const user = r.user!;
+      const team = r.team!;
       return {
         settingId: r.id,
         userId: r.userId,
@@ -190,15 +206,29 @@ export async function claimDigestWindow({
   const { NotificationSetting } = await db();
   const [count] = await NotificationSetting.update(
     { lastDigestAt: now },
-    { where: { id: settingId, alertEmail: "digest", lastDigestAt: previous === null ? { [Op.is]: null } : previous }, transaction },
+    {
+      where: { id: settingId, alertEmail: "digest", lastDigestAt: previous === null ? { [Op.is]: null } : previous },
+      transaction,
+    },
   );
   return count === 1;
 }
 
-export type NoticeTeam = { id: number; name: string; timeZone: string; /** ISO weekday, 1 = Monday. */ weekStartDay: number };
+export type NoticeTeam = {
+  id: number;
+  name: string;
+  timeZone: string;
+  /** ISO weekday, 1 = Monday. */ weekStartDay: number;
+};
 
 /** The team facts a notice needs (name for the mail, zone for times, first day of the week). */
-export async function getNoticeTeam({ teamId, transaction }: { teamId: number; transaction?: Transaction }): Promise<NoticeTeam | null> {
+export async function getNoticeTeam({
+  teamId,
+  transaction,
+}: {
+  teamId: number;
+  transaction?: Transaction;
+}): Promise<NoticeTeam | null> {
   const { Team } = await db();
   const team = await Team.findByPk(teamId, { attributes: ["id", "name", "timeZone", "weekStartDay"], transaction });
   return team ? { id: team.id, name: team.name, timeZone: team.timeZone, weekStartDay: team.weekStartDay } : null;
@@ -243,9 +273,12 @@ export async function listAthleteContacts({
   });
   const joined = new Set(members.map((m) => m.userId));
   return new Map(
-    rows.filter((a) => joined.has(a.userId as number)).map((a) => {
-      const user = (a as unknown as { user: { email: string } | null }).user;
-      return [a.id, { athleteId: a.id, name: a.name, email: user?.email ?? "" }];
-    }).filter(([, c]) => (c as AthleteContact).email !== "") as Array<[number, AthleteContact]>,
+    rows
+      .filter((a) => joined.has(a.userId as number))
+      .map((a) => {
+        const user = a.user;
+        return [a.id, { athleteId: a.id, name: a.name, email: user?.email ?? "" }];
+      })
+      .filter(([, c]) => (c as AthleteContact).email !== "") as Array<[number, AthleteContact]>,
   );
 }

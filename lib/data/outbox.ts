@@ -3,7 +3,7 @@ import { randomUUID } from "node:crypto";
 import { Op, literal, type Transaction, type WhereOptions } from "sequelize";
 import type { RenderedEmail } from "@/emails/layout";
 import { db, type OutboxMessage } from "@/models";
-import type { OutboxKind, OutboxStatus } from "@/models/outbox-message";
+import type { OutboxKind, OutboxStatus } from "@/lib/domain/outbox";
 
 export type EnqueueMailInput = {
   /** Required on purpose: a notice is written in the same transaction as the change that causes it. */
@@ -24,7 +24,11 @@ export async function enqueueMail(input: EnqueueMailInput): Promise<number | nul
   const { OutboxMessage } = await db();
   const { transaction } = input;
   if (input.dedupeKey) {
-    const existing = await OutboxMessage.findOne({ where: { dedupeKey: input.dedupeKey }, attributes: ["id"], transaction });
+    const existing = await OutboxMessage.findOne({
+      where: { dedupeKey: input.dedupeKey },
+      attributes: ["id"],
+      transaction,
+    });
     if (existing) return null;
   }
   const row = await OutboxMessage.create(
@@ -81,12 +85,23 @@ function dueWhere(now: Date): WhereOptions {
  * Claims up to `limit` due messages for one worker. Each row is taken with a conditional UPDATE
  * (status and lease re-checked in the WHERE), so two workers never hold the same row at once.
  */
-export async function claimDueMessages({ now, limit, leaseMs }: { now: Date; limit: number; leaseMs: number }): Promise<ClaimedMessage[]> {
+export async function claimDueMessages({
+  now,
+  limit,
+  leaseMs,
+}: {
+  now: Date;
+  limit: number;
+  leaseMs: number;
+}): Promise<ClaimedMessage[]> {
   const { OutboxMessage } = await db();
   const candidates = await OutboxMessage.findAll({
     where: dueWhere(now),
     attributes: ["id"],
-    order: [["nextAttemptAt", "ASC"], ["id", "ASC"]],
+    order: [
+      ["nextAttemptAt", "ASC"],
+      ["id", "ASC"],
+    ],
     limit,
   });
   const claimed: ClaimedMessage[] = [];
@@ -97,7 +112,7 @@ export async function claimDueMessages({ now, limit, leaseMs }: { now: Date; lim
         status: "sending",
         leaseToken,
         leaseUntil: new Date(now.getTime() + leaseMs),
-        attempts: literal("attempts + 1") as unknown as number,
+        attempts: literal("attempts + 1"),
       },
       { where: { [Op.and]: [{ id }, dueWhere(now)] } },
     );
@@ -161,7 +176,13 @@ export async function markMessageAttemptFailed({
   const { OutboxMessage } = await db();
   const [count] = await OutboxMessage.update(
     retryAt
-      ? { status: "pending", nextAttemptAt: retryAt, lastError: error.slice(0, 2000), leaseToken: null, leaseUntil: null }
+      ? {
+          status: "pending",
+          nextAttemptAt: retryAt,
+          lastError: error.slice(0, 2000),
+          leaseToken: null,
+          leaseUntil: null,
+        }
       : { status: "failed", lastError: error.slice(0, 2000), leaseToken: null, leaseUntil: null },
     { where: { id, leaseToken, status: "sending" } },
   );
@@ -175,7 +196,9 @@ export async function nextOutboxDueAt(): Promise<Date | null> {
     OutboxMessage.min("nextAttemptAt", { where: { status: "pending" } }),
     OutboxMessage.min("leaseUntil", { where: { status: "sending" } }),
   ]);
-  const times = [pending, leased].filter((v): v is Date | string => v !== null && v !== undefined).map((v) => new Date(v).getTime());
+  const times = [pending, leased]
+    .filter((v): v is Date | string => v !== null && v !== undefined)
+    .map((v) => new Date(v).getTime());
   return times.length ? new Date(Math.min(...times)) : null;
 }
 
@@ -204,7 +227,18 @@ export async function listOutbox({
   if (status) Object.assign(where, { status });
   const rows = await OutboxMessage.findAll({
     where,
-    attributes: ["id", "kind", "toEmail", "subject", "status", "attempts", "nextAttemptAt", "lastError", "sentAt", "createdAt"],
+    attributes: [
+      "id",
+      "kind",
+      "toEmail",
+      "subject",
+      "status",
+      "attempts",
+      "nextAttemptAt",
+      "lastError",
+      "sentAt",
+      "createdAt",
+    ],
     order: [["id", "DESC"]],
     limit,
   });
@@ -223,10 +257,19 @@ export async function listOutbox({
 }
 
 /** One line of the team's delivery queue: who, what kind, how far it got. No subject, body or link. */
-export type DeliveryRow = Pick<OutboxRow, "id" | "kind" | "toEmail" | "status" | "attempts" | "nextAttemptAt" | "sentAt" | "createdAt">;
+export type DeliveryRow = Pick<
+  OutboxRow,
+  "id" | "kind" | "toEmail" | "status" | "attempts" | "nextAttemptAt" | "sentAt" | "createdAt"
+>;
 
 /** The team's recent outbox rows for the head coach's mailbox screen; only the team's own rows. */
-export async function listDeliveryQueue({ teamId, limit = 30 }: { teamId: number; limit?: number }): Promise<DeliveryRow[]> {
+export async function listDeliveryQueue({
+  teamId,
+  limit = 30,
+}: {
+  teamId: number;
+  limit?: number;
+}): Promise<DeliveryRow[]> {
   const rows = await listOutbox({ teamId, limit });
   return rows.map(({ id, kind, toEmail, status, attempts, nextAttemptAt, sentAt, createdAt }) => ({
     id,
@@ -241,7 +284,15 @@ export async function listDeliveryQueue({ teamId, limit = 30 }: { teamId: number
 }
 
 /** Puts a message that failed for good back in the queue (one more round of attempts). */
-export async function retryFailedMessage({ id, teamId, now = new Date() }: { id: number; teamId?: number; now?: Date }): Promise<boolean> {
+export async function retryFailedMessage({
+  id,
+  teamId,
+  now = new Date(),
+}: {
+  id: number;
+  teamId?: number;
+  now?: Date;
+}): Promise<boolean> {
   const { OutboxMessage } = await db();
   const [count] = await OutboxMessage.update(
     { status: "pending", nextAttemptAt: now, attempts: 0 },

@@ -31,7 +31,12 @@ export async function requestPasswordReset({ email, now = new Date() }: { email:
     });
     if (!membership) return;
     const recent = await Invitation.count({
-      where: { userId: user.id, purpose: "reset", usedAt: null, createdAt: { [Op.gt]: new Date(now.getTime() - RESEND_MINUTES * 60_000) } },
+      where: {
+        userId: user.id,
+        purpose: "reset",
+        usedAt: null,
+        createdAt: { [Op.gt]: new Date(now.getTime() - RESEND_MINUTES * 60_000) },
+      },
       transaction,
     });
     if (recent > 0) return;
@@ -47,7 +52,12 @@ export async function requestPasswordReset({ email, now = new Date() }: { email:
       teamId: membership.teamId,
       kind: "password_reset",
       to: user.email,
-      mail: passwordResetEmail({ name: user.name, resetUrl: `${appUrl()}/invite/${token}`, expiresAt, timeZone: team?.timeZone }),
+      mail: passwordResetEmail({
+        name: user.name,
+        resetUrl: `${appUrl()}/invite/${token}`,
+        expiresAt,
+        timeZone: team?.timeZone,
+      }),
     });
   });
 }

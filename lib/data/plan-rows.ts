@@ -45,8 +45,8 @@ export async function loadSessions(where: WhereOptions, transaction?: Transactio
     transaction,
   });
   return rows.map((r) => {
-    const plain = r.get({ plain: true }) as unknown as SessionRow;
-    return { dto: toPlanSession(plain), updatedAt: new Date(plain.updatedAt) };
+    const row: SessionRow = r;
+    return { dto: toPlanSession(row), updatedAt: new Date(row.updatedAt) };
   });
 }
 

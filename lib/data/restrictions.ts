@@ -89,60 +89,72 @@ export async function listCurrentRestrictions({
   return (await listRestrictions({ teamId, athleteIds: [athleteId], from: today })).filter((r) => isCurrent(r, today));
 }
 
-/** A physio sets a restriction on an athlete of their team (404 for an athlete elsewhere). */
-export async function createRestriction({
+/** A restriction on an athlete of the team (404 for an athlete elsewhere). */
+export async function insertRestriction({
   teamId,
   athleteId,
   actorUserId,
   input,
+  transaction,
 }: {
   teamId: number;
   athleteId: number;
   actorUserId: number;
   input: CreateRestrictionInput;
+  transaction: Transaction;
 }): Promise<Restriction> {
   const { Athlete, Restriction } = await db();
-  const athlete = await Athlete.findOne({ where: { id: athleteId, teamId }, attributes: ["id"] });
+  const athlete = await Athlete.findOne({ where: { id: athleteId, teamId }, attributes: ["id"], transaction });
   if (!athlete) throw new AppError("not_found", "No such athlete");
-  const row = await Restriction.create({
-    teamId,
-    athleteId,
-    rule: input.rule,
-    blockKinds: input.rule === "no_kind" ? JSON.stringify(input.blockKinds) : null,
-    limitValue: input.rule === "max_intensity" ? input.maxPct : input.rule === "contact_cap" ? input.maxContacts : null,
-    startsOn: input.startsOn,
-    endsOn: input.endsOn ?? null,
-    liftedOn: null,
-    note: input.note,
-    createdBy: actorUserId,
-    liftedBy: null,
-  });
-  return toRestriction(row, await userNames([actorUserId]));
+  const row = await Restriction.create(
+    {
+      teamId,
+      athleteId,
+      rule: input.rule,
+      blockKinds: input.rule === "no_kind" ? JSON.stringify(input.blockKinds) : null,
+      limitValue:
+        input.rule === "max_intensity" ? input.maxPct : input.rule === "contact_cap" ? input.maxContacts : null,
+      startsOn: input.startsOn,
+      endsOn: input.endsOn ?? null,
+      liftedOn: null,
+      note: input.note,
+      createdBy: actorUserId,
+      liftedBy: null,
+    },
+    { transaction },
+  );
+  return toRestriction(row, await userNames([actorUserId], transaction));
 }
 
-/**
- * Lifts a restriction from `today`: days from today on are free again. One that has not begun is lifted on its
- * first day, so it never applies. Lifting again, or lifting one that already ended, changes nothing.
- */
-export async function liftRestriction({
+/** One of the team's restrictions; 404 for another team's. */
+export async function getRestriction({
   teamId,
   restrictionId,
-  actorUserId,
-  today,
+  transaction,
 }: {
   teamId: number;
   restrictionId: number;
-  actorUserId: number;
-  today: string;
+  transaction: Transaction;
 }): Promise<Restriction> {
   const { Restriction } = await db();
-  const row = await Restriction.findOne({ where: { id: restrictionId, teamId } });
+  const row = await Restriction.findOne({ where: { id: restrictionId, teamId }, transaction });
   if (!row) throw new AppError("not_found", "No such restriction");
-  const ended = row.endsOn !== null && row.endsOn < today;
-  if (row.liftedOn === null && !ended) {
-    await row.update({ liftedOn: today < row.startsOn ? row.startsOn : today, liftedBy: actorUserId });
-  }
-  return toRestriction(row, await userNames([row.createdBy]));
+  return toRestriction(row, await userNames([row.createdBy], transaction));
+}
+
+export async function setRestrictionLifted({
+  restrictionId,
+  liftedOn,
+  liftedBy,
+  transaction,
+}: {
+  restrictionId: number;
+  liftedOn: string;
+  liftedBy: number;
+  transaction: Transaction;
+}): Promise<void> {
+  const { Restriction } = await db();
+  await Restriction.update({ liftedOn, liftedBy }, { where: { id: restrictionId }, transaction });
 }
 
 /** The team id of a restriction's athlete, so a handler can check the asker against it; null when unknown. */

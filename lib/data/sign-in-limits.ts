@@ -26,7 +26,9 @@ const WINDOW_S = 15 * 60;
 const BLOCK_S = 15 * 60;
 
 type Limiters = { account: RateLimiterAbstract; address: RateLimiterAbstract; client: sqlite3.Database | null };
-const cache = globalThis as typeof globalThis & { __sprintwrightSignInLimits?: { storage: string; limiters: Limiters } };
+const cache = globalThis as typeof globalThis & {
+  __sprintwrightSignInLimits?: { storage: string; limiters: Limiters };
+};
 
 /** PostgreSQL: the same table through RateLimiterPostgres on a small pool of its own (no SQLite savepoint issue). */
 function postgresLimiters(url: string): Limiters {
@@ -95,7 +97,13 @@ function oneAtATime<T>(client: sqlite3.Database | null, fn: () => Promise<T>): P
 }
 
 /** Takes one point from the account's and the address's buckets; refuses when either is used up. */
-export async function beginSignInAttempt({ email, address }: { email: string | null; address: string }): Promise<Attempt> {
+export async function beginSignInAttempt({
+  email,
+  address,
+}: {
+  email: string | null;
+  address: string;
+}): Promise<Attempt> {
   const { account, address: byAddress, client } = limiters();
   const results = await Promise.allSettled([
     email === null ? Promise.resolve(null) : oneAtATime(client, () => account.consume(accountKey(email))),

@@ -76,7 +76,9 @@ function toRecoveryWork(v: unknown): RecoveryWork[] {
       list = null;
     }
   }
-  return Array.isArray(list) ? RECOVERY_WORK.filter((w) => list.includes(w)) : [...DEFAULT_TEAM_LOAD_SETTINGS.recoveryWork];
+  return Array.isArray(list)
+    ? RECOVERY_WORK.filter((w) => list.includes(w))
+    : [...DEFAULT_TEAM_LOAD_SETTINGS.recoveryWork];
 }
 
 /** Engine shape from a stored row; unknown stored strings fall back to the defaults. */
@@ -121,16 +123,22 @@ export async function getTeamLoadSettings({
 }
 
 /** Merges a partial change into the team's settings; the merged record must pass teamSettingsSchema (else ZodError → 400). */
-export async function updateTeamLoadSettings({ teamId, input }: { teamId: number; input: TeamSettingsPatch }): Promise<TeamLoadSettings> {
-  const { TeamLoadSettings, sequelize } = await db();
-  return sequelize.transaction(async (transaction) => {
-    const row = await TeamLoadSettings.findOne({ where: { teamId }, transaction });
-    const merged = teamSettingsSchema.parse({ ...toEngineSettings(row), ...input });
-    const stored = { ...merged, recoveryWork: JSON.stringify(merged.recoveryWork) };
-    if (row) await row.update(stored, { transaction });
-    else await TeamLoadSettings.create({ teamId, ...stored }, { transaction });
-    return toEngineSettings(merged);
-  });
+export async function writeTeamLoadSettings({
+  teamId,
+  input,
+  transaction,
+}: {
+  teamId: number;
+  input: TeamSettingsPatch;
+  transaction: Transaction;
+}): Promise<TeamLoadSettings> {
+  const { TeamLoadSettings } = await db();
+  const row = await TeamLoadSettings.findOne({ where: { teamId }, transaction });
+  const merged = teamSettingsSchema.parse({ ...toEngineSettings(row), ...input });
+  const stored = { ...merged, recoveryWork: JSON.stringify(merged.recoveryWork) };
+  if (row) await row.update(stored, { transaction });
+  else await TeamLoadSettings.create({ teamId, ...stored }, { transaction });
+  return toEngineSettings(merged);
 }
 
 /** Sets the ISO weekday the team's week starts on; 404 when the team does not exist. */

@@ -10,7 +10,13 @@ import { db } from "@/models";
 const FIELDS = ["id", "kind", "title", "running", "drills", "notes", "durationMin", "plannedRpe", "version"] as const;
 
 /** The team's block templates, by kind then title. */
-export async function listTemplates({ teamId, transaction }: { teamId: number; transaction?: Transaction }): Promise<PlanTemplate[]> {
+export async function listTemplates({
+  teamId,
+  transaction,
+}: {
+  teamId: number;
+  transaction?: Transaction;
+}): Promise<PlanTemplate[]> {
   const { BlockTemplate } = await db();
   const rows = await BlockTemplate.findAll({
     where: { teamId },
@@ -37,7 +43,10 @@ export async function getTemplate({
 }): Promise<PlanTemplate> {
   const { BlockTemplate } = await db();
   const row = await BlockTemplate.findOne({ where: { id: templateId, teamId }, attributes: [...FIELDS], transaction });
-  if (!row) throw new AppError("not_found", "That template was not found", { fields: { templateId: ["Not found in this team"] } });
+  if (!row)
+    throw new AppError("not_found", "That template was not found", {
+      fields: { templateId: ["Not found in this team"] },
+    });
   return toPlanTemplate(row.get({ plain: true }) as TemplateRow);
 }
 
@@ -48,7 +57,13 @@ export async function findTemplateTeam({ templateId }: { templateId: number }): 
   return row?.teamId ?? null;
 }
 
-export async function createTemplate({ teamId, input }: { teamId: number; input: TemplateInput }): Promise<PlanTemplate> {
+export async function createTemplate({
+  teamId,
+  input,
+}: {
+  teamId: number;
+  input: TemplateInput;
+}): Promise<PlanTemplate> {
   const { BlockTemplate } = await db();
   const row = await BlockTemplate.create({ teamId, ...normaliseBlock(input) });
   return getTemplate({ teamId, templateId: row.id });
@@ -68,7 +83,11 @@ export async function updateTemplate({
 }): Promise<PlanTemplate> {
   const { BlockTemplate, sequelize } = await db();
   return sequelize.transaction(async (transaction) => {
-    const row = await BlockTemplate.findOne({ where: { id: templateId, teamId }, attributes: [...FIELDS, "teamId"], transaction });
+    const row = await BlockTemplate.findOne({
+      where: { id: templateId, teamId },
+      attributes: [...FIELDS, "teamId"],
+      transaction,
+    });
     if (!row) throw new AppError("not_found", "That template was not found");
     if (row.version !== version) {
       const current = toPlanTemplate(row.get({ plain: true }) as TemplateRow);

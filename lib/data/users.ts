@@ -14,7 +14,10 @@ let dummyHash: string | undefined;
 /** Checks a password; returns the public user fields only (never the hash). */
 export async function verifyCredentials({ email, password }: { email: string; password: string }) {
   const { User } = await db();
-  const user = await User.findOne({ where: { email: email.trim().toLowerCase() }, attributes: ["id", "name", "email", "passwordHash"] });
+  const user = await User.findOne({
+    where: { email: email.trim().toLowerCase() },
+    attributes: ["id", "name", "email", "passwordHash"],
+  });
   // Compare against a dummy hash when the user is unknown so timing does not reveal which e-mails exist.
   const hash = user?.passwordHash ?? (dummyHash ??= bcrypt.hashSync("no-such-user-password", 10));
   const ok = await bcrypt.compare(password, hash);
@@ -32,7 +35,7 @@ export async function listMembershipsOfUser({ userId }: { userId: number }): Pro
   });
   const athletes = await Athlete.findAll({ where: { userId }, attributes: ["id", "teamId"] });
   return rows.map((m) => {
-    const team = (m as unknown as { team: { name: string } }).team;
+    const team = m.team!;
     return {
       teamId: m.teamId,
       teamName: team.name,
@@ -72,20 +75,29 @@ export async function replacePassword({
 }) {
   const { User, Invitation } = await db();
   const user = await User.findByPk(userId, { attributes: ["id", "email"], transaction });
-  if (!user) throw new AppError("invalid", "This link has expired or was already used", { fields: { token: ["Expired or used"] } });
+  if (!user)
+    throw new AppError("invalid", "This link has expired or was already used", {
+      fields: { token: ["Expired or used"] },
+    });
   const checked = passwordFor(user.email).safeParse(password);
   if (!checked.success) {
     const messages = checked.error.issues.map((i) => i.message);
     throw new AppError("invalid", messages[0], { fields: { password: messages } });
   }
   await User.update({ passwordHash }, { where: { id: userId }, transaction });
-  await Invitation.update({ usedAt: now }, { where: { userId, usedAt: null, purpose: { [Op.in]: PASSWORD_LINKS } }, transaction });
+  await Invitation.update(
+    { usedAt: now },
+    { where: { userId, usedAt: null, purpose: { [Op.in]: PASSWORD_LINKS } }, transaction },
+  );
   await endAllSessions({ userId, transaction });
   return { email: user.email };
 }
 
 /** Display names of users by id (ids may repeat or be null), for "set by" and "acknowledged by" lines. */
-export async function userNames(ids: ReadonlyArray<number | null>, transaction?: Transaction): Promise<Map<number, string>> {
+export async function userNames(
+  ids: ReadonlyArray<number | null>,
+  transaction?: Transaction,
+): Promise<Map<number, string>> {
   const { User } = await db();
   const wanted = [...new Set(ids.filter((id): id is number => id !== null))];
   if (wanted.length === 0) return new Map();

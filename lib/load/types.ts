@@ -1,3 +1,8 @@
+import type { PlyoLevel } from "@/lib/domain/athletes";
+import type { Completion, SessionStatus } from "@/lib/domain/sessions";
+
+export type { Completion, PlyoLevel, SessionStatus };
+
 // Plain-data types shared by the load engine, route handlers and the week grid.
 // Everything here is serialisable JSON: no classes, no Dates (dates are local "YYYY-MM-DD" strings).
 
@@ -18,7 +23,6 @@ export const BLOCK_KINDS: readonly BlockKind[] = [
 
 type StartType = "standing" | "crouch" | "blocks" | "flying";
 type PlyoIntensity = "low" | "moderate" | "high";
-export type PlyoLevel = "beginner" | "intermediate" | "advanced";
 
 export interface RunningPrescription {
   sets: number;
@@ -208,8 +212,6 @@ export const DEFAULT_TEAM_LOAD_SETTINGS: TeamLoadSettings = {
   acwrMetric: "srpe",
 };
 
-export type SessionStatus = "draft" | "published" | "cancelled";
-
 export interface SessionInput {
   id: string;
   date: string;
@@ -220,8 +222,6 @@ export interface SessionInput {
   status: SessionStatus;
   blocks: BlockInput[];
 }
-
-export type Completion = "yes" | "partly" | "no";
 
 export interface LogInput {
   sessionId: string;

@@ -1,9 +1,9 @@
 // Plain words for alerts, shared by the inbox (browser) and the alert e-mails (server).
+import type { AlertBasis, AlertKind } from "@/lib/domain/alerts";
 import { figuresHref, type FiguresTopic } from "@/lib/load/figures-link";
 import { FLAG_DISPLAY } from "@/lib/load/flag-display";
 import { METRIC_INFO, type Metric } from "@/lib/load/types";
 import type { LoadAlertItem } from "@/emails/load-alert-parts";
-import type { AlertKind } from "@/models/alert";
 
 export const ALERT_KIND_LABEL: Record<AlertKind, string> = {
   spike: FLAG_DISPLAY.spike.label,
@@ -70,7 +70,7 @@ export type AlertForMail = AlertFacts & {
   value: number;
   threshold: number;
   date: string;
-  basis: "planned" | "actual";
+  basis: AlertBasis;
 };
 
 export function loadPageUrl(appUrl: string, athleteId: number): string {

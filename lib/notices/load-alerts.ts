@@ -9,7 +9,7 @@ import { getNoticeTeam, listAlertRecipients } from "@/lib/data/notification-sett
 import { appUrl } from "@/lib/env";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { computeAthleteLoad, type AthleteLoad, type Flag } from "@/lib/load";
-import type { AlertBasis, AlertKind } from "@/models/alert";
+import type { AlertBasis, AlertKind } from "@/lib/domain/alerts";
 import { toLoadAlertItem } from "./alert-display";
 
 /** Engine flags that become alerts ("rising" and "low" stay on the load screens). */

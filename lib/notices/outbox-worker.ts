@@ -7,7 +7,7 @@ import {
   nextOutboxDueAt,
   type ClaimedMessage,
 } from "@/lib/data/outbox";
-import type { OutboxKind } from "@/models/outbox-message";
+import type { OutboxKind } from "@/lib/domain/outbox";
 import { readMailConfig, type MailConfig } from "@/lib/mail/mail-config";
 import { sendMail } from "@/lib/mail/transport";
 import { backoffDelayMs, DEFAULT_BACKOFF, type BackoffPolicy } from "./backoff";

@@ -1,4 +1,5 @@
-import type { BlockInput, SessionStatus } from "@/lib/load/types";
+import type { SessionStatus } from "@/lib/domain/sessions";
+import type { BlockInput } from "@/lib/load/types";
 
 /** A planned session as a change saw it (before or after), with its blocks in engine form. */
 export type SessionSnapshot = {

@@ -1,4 +1,6 @@
 // The invented demo club. Every name here is made up; any likeness to real people or clubs is chance.
+import type { PlyoLevel, Sex } from "@/lib/domain/athletes";
+
 export const DEMO_PASSWORD = "sprint-demo-2026";
 
 export const DEMO_TEAM = { name: "Harbour Vale Sprint Club", timeZone: "Europe/London", weekStartDay: 1 };
@@ -15,13 +17,13 @@ type DemoAthlete = {
   name: string;
   email?: string;
   group: (typeof DEMO_GROUPS)[number];
-  sex: "female" | "male";
+  sex: Sex;
   birthDate: string;
   bodyMassKg: number;
   vmaxMs: number;
   tauS: number;
   stepLengthM: number;
-  plyoLevel: "beginner" | "intermediate" | "advanced";
+  plyoLevel: PlyoLevel;
 };
 
 // Plausible values: vmax 8.5–11 m/s, τ about 1.0–1.4 s, top-speed step length about 1.9–2.5 m.

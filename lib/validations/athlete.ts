@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { PLYO_LEVELS, SEXES } from "@/lib/domain/athletes";
 import { pastDateSchema } from "./dates";
 import { lineText } from "./text";
 
@@ -18,14 +19,14 @@ const optionalDate = z.preprocess((v) => (v === "" || v === undefined ? null : v
 export const athleteSchema = z.object({
   name: lineText().min(2, "Enter the athlete's name").max(120),
   groupId: z.preprocess((v) => (v === "" || v === undefined ? null : v), z.coerce.number().int().positive().nullable()),
-  sex: z.preprocess((v) => (v === "" || v === undefined ? null : v), z.enum(["female", "male"]).nullable()),
+  sex: z.preprocess((v) => (v === "" || v === undefined ? null : v), z.enum(SEXES).nullable()),
   birthDate: optionalDate,
   bodyMassKg: optionalNumber(25, 200, "Body mass"),
   vmaxMs: optionalNumber(4, 13, "Max velocity"),
   vmaxTestedOn: optionalDate,
   tauS: optionalNumber(0.4, 3, "τ"),
   stepLengthM: optionalNumber(1, 3.2, "Step length"),
-  plyoLevel: z.enum(["beginner", "intermediate", "advanced"], { message: "Choose an experience level" }),
+  plyoLevel: z.enum(PLYO_LEVELS, { message: "Choose an experience level" }),
 });
 
 export type AthleteInput = z.infer<typeof athleteSchema>;

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { SESSION_STATUSES } from "@/lib/domain/sessions";
 import { lineText } from "./text";
 import { dayIndex } from "@/lib/dates/plain-date";
 import { METRICS } from "@/lib/load/types";
@@ -51,9 +52,7 @@ const previewSessionSchema = z.object({
     .min(5, "At least 5 min")
     .max(300, "At most 300 min"),
   plannedRpe: z.number({ error: "Enter an RPE from 0 to 10" }).min(0, "CR-10: 0 to 10").max(10, "CR-10: 0 to 10"),
-  status: z
-    .enum(["draft", "published", "cancelled"], { error: "Choose draft, published or cancelled" })
-    .default("draft"),
+  status: z.enum(SESSION_STATUSES, { error: "Choose draft, published or cancelled" }).default("draft"),
   blocks: z.array(previewBlockSchema).max(20, "At most 20 blocks"),
 });
 export type PreviewSession = z.infer<typeof previewSessionSchema>;

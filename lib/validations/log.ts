@@ -1,8 +1,9 @@
 import { z } from "zod";
+import { COMPLETIONS } from "@/lib/domain/sessions";
 import { noteText } from "./text";
 
-// Kept literal (not imported from models/) so the browser bundle never pulls in Sequelize.
-export const LOG_COMPLETIONS = ["yes", "partly", "no"] as const;
+// From lib/domain (isomorphic), never from models/, so the browser bundle never pulls in Sequelize.
+export const LOG_COMPLETIONS = COMPLETIONS;
 
 /** PUT /api/sessions/[sessionId]/log: what the athlete did. Block ids are checked against the session on the server. */
 export const sessionLogSchema = z

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { createAthlete, getAthlete, listSquad, updateAthlete } from "@/lib/data/athletes";
+import { getAthlete, listSquad } from "@/lib/data/athletes";
+import { createAthlete, updateAthlete } from "@/lib/services/athletes";
 import { athleteSchema } from "@/lib/validations/athlete";
 import { createTestTeam } from "../helpers/fixtures";
 import { setupTestDb } from "../helpers/db";

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { getAthleteLoadInputs, getLoadSeriesInputs } from "@/lib/data/load";
 import { teamToday } from "@/lib/dates/zoned";
-import { getTeamLoadSettings, updateTeamLoadSettings } from "@/lib/data/team-settings";
+import { getTeamLoadSettings } from "@/lib/data/team-settings";
+import { updateTeamLoadSettings } from "@/lib/services/team-settings";
 import { DEFAULT_TEAM_LOAD_SETTINGS } from "@/lib/load/types";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";

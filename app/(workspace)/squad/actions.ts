@@ -4,7 +4,7 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { runAction } from "@/lib/action-result";
 import { requireAthlete, requireMember, requireViewer } from "@/lib/auth/access";
-import { createAthlete, updateAthlete } from "@/lib/data/athletes";
+import { createAthlete, updateAthlete } from "@/lib/services/athletes";
 import { athleteSchema, type AthleteFormValues } from "@/lib/validations/athlete";
 
 export async function saveAthleteAction(athleteId: number | null, input: AthleteFormValues) {

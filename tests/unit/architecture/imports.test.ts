@@ -64,6 +64,17 @@ describe("import layering", () => {
     expect(offending("lib/load", bad)).toEqual([]);
   });
 
+  it("lib/domain (the value sets models, validations and screens share) imports nothing but itself", () => {
+    expect(offending("lib/domain", (s) => !under(s, "@/lib/domain"))).toEqual([]);
+  });
+
+  it("models take their value sets from lib/domain instead of spelling them", () => {
+    const spelled = sourceFiles("models").filter((f) =>
+      /export const [A-Z_]+ = \[/.test(readFileSync(join(root, f), "utf8")),
+    );
+    expect(spelled).toEqual([]);
+  });
+
   it("the check would catch a wrong edge", () => {
     expect(importsOf("lib/services/plan-changes.ts")).toContain("@/lib/notices/hooks");
     expect(importsOf("lib/notices/hooks.ts")).toContain("@/lib/data/alerts");

@@ -1,6 +1,7 @@
 import { requireMember, requireViewer } from "@/lib/auth/access";
 import { teamToday } from "@/lib/dates/zoned";
-import { liftRestriction, restrictionTeam } from "@/lib/data/restrictions";
+import { restrictionTeam } from "@/lib/data/restrictions";
+import { liftRestriction } from "@/lib/services/restrictions";
 import { AppError } from "@/lib/errors";
 import { parseJson, parseParams, route } from "@/lib/http";
 import { restrictionActionSchema, restrictionParamsSchema } from "@/lib/validations/restrictions";

@@ -1,5 +1,6 @@
 import { requireAthlete } from "@/lib/auth/access";
-import { createRestriction, listAthleteRestrictions, listOverrides } from "@/lib/data/restrictions";
+import { listAthleteRestrictions, listOverrides } from "@/lib/data/restrictions";
+import { createRestriction } from "@/lib/services/restrictions";
 import { parseJson, parseParams, route } from "@/lib/http";
 import { athleteParamsSchema, createRestrictionSchema } from "@/lib/validations/restrictions";
 

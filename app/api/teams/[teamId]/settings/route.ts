@@ -1,5 +1,6 @@
 import { requireMember } from "@/lib/auth/access";
-import { getTeamLoadSettings, updateTeamLoadSettings } from "@/lib/data/team-settings";
+import { getTeamLoadSettings } from "@/lib/data/team-settings";
+import { updateTeamLoadSettings } from "@/lib/services/team-settings";
 import { parseJson, parseParams, route } from "@/lib/http";
 import { teamParamsSchema } from "@/lib/validations/plan";
 import { teamSettingsPatchSchema } from "@/lib/validations/team-settings";

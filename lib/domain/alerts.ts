@@ -1,0 +1,15 @@
+// Value sets of load alerts and of who gets them by e-mail.
+
+export const ALERT_KINDS = ["spike", "weekly_jump", "plyo_volume", "recovery", "restriction_override"] as const;
+export type AlertKind = (typeof ALERT_KINDS)[number];
+
+export const ALERT_STATUSES = ["open", "acknowledged", "resolved"] as const;
+export type AlertStatus = (typeof ALERT_STATUSES)[number];
+
+/** Whether an alert was raised on the planned sessions or on what the athlete logged. */
+export const ALERT_BASES = ["planned", "actual"] as const;
+export type AlertBasis = (typeof ALERT_BASES)[number];
+
+/** A member's choice of alert e-mail: one per alert, a daily digest, or none. */
+export const ALERT_EMAIL_MODES = ["each", "digest", "off"] as const;
+export type AlertEmailMode = (typeof ALERT_EMAIL_MODES)[number];

@@ -1,0 +1,19 @@
+import "server-only";
+import { writeTeamLoadSettings } from "@/lib/data/team-settings";
+import { inTransaction } from "@/lib/data/transaction";
+import type { TeamLoadSettings } from "@/lib/load/types";
+import type { TeamSettingsPatch } from "@/lib/validations/team-settings";
+
+// Threshold writes: every change of the team's load settings goes through here (derived state such as the load
+// ledger is brought up to date in the same transaction).
+
+/** Merges a partial change into the team's settings; the merged record must pass teamSettingsSchema (else 400). */
+export async function updateTeamLoadSettings({
+  teamId,
+  input,
+}: {
+  teamId: number;
+  input: TeamSettingsPatch;
+}): Promise<TeamLoadSettings> {
+  return inTransaction((transaction) => writeTeamLoadSettings({ teamId, input, transaction }));
+}
