@@ -169,3 +169,54 @@ export async function athleteNames({
   });
   return new Map(athletes.map((a) => [a.id, a.name]));
 }
+
+/** An athlete of the team and the account it is linked to, or null. */
+export async function findAthleteLink({
+  teamId,
+  athleteId,
+  transaction,
+}: {
+  teamId: number;
+  athleteId: number;
+  transaction: Transaction;
+}): Promise<{ id: number; userId: number | null } | null> {
+  const { Athlete } = await db();
+  const athlete = await Athlete.findOne({
+    where: { id: athleteId, teamId },
+    attributes: ["id", "userId"],
+    transaction,
+  });
+  return athlete ? { id: athlete.id, userId: athlete.userId } : null;
+}
+
+/** A profile with only a name (the rest is filled in by the staff later); its id. */
+export async function insertAthleteProfile({
+  teamId,
+  userId,
+  name,
+  transaction,
+}: {
+  teamId: number;
+  userId: number | null;
+  name: string;
+  transaction: Transaction;
+}): Promise<number> {
+  const { Athlete } = await db();
+  const empty = { groupId: null, sex: null, birthDate: null, bodyMassKg: null, vmaxMs: null, vmaxTestedOn: null };
+  const row = await Athlete.create({ teamId, userId, name, ...empty, tauS: null, stepLengthM: null }, { transaction });
+  return row.id;
+}
+
+/** Unlinks the account from the team's athlete profiles; the training history stays with the team. */
+export async function unlinkAthletes({
+  teamId,
+  userId,
+  transaction,
+}: {
+  teamId: number;
+  userId: number;
+  transaction: Transaction;
+}) {
+  const { Athlete } = await db();
+  await Athlete.update({ userId: null }, { where: { teamId, userId }, transaction });
+}

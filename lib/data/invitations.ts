@@ -1,9 +1,16 @@
 import "server-only";
-import { Op, type Transaction } from "sequelize";
+import { Op, type InferAttributes, type Transaction } from "sequelize";
 import { AppError } from "@/lib/errors";
 import { hashToken } from "@/lib/auth/tokens";
 import type { Role } from "@/lib/auth/roles";
 import { db, type Invitation } from "@/models";
+import { insertAthleteProfile } from "./athletes";
+
+/** An unused, unexpired link as the accept steps read it. */
+export type OpenInvitation = Pick<
+  InferAttributes<Invitation>,
+  "id" | "teamId" | "userId" | "purpose" | "role" | "athleteId" | "name"
+>;
 
 export type InvitationRow = {
   invitationId: number;
@@ -81,12 +88,50 @@ export async function openInvitationByToken({
   token: string;
   transaction?: Transaction;
   now?: Date;
-}): Promise<Invitation | null> {
+}): Promise<OpenInvitation | null> {
   const { Invitation } = await db();
-  return Invitation.findOne({
+  const row = await Invitation.findOne({
     where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: now } },
+    attributes: ["id", "teamId", "userId", "purpose", "role", "athleteId", "name"],
     transaction,
   });
+  if (!row) return null;
+  const { id, teamId, userId, purpose, role, athleteId, name } = row;
+  return { id, teamId, userId, purpose, role, athleteId, name };
+}
+
+/** Spends a link (it works once). */
+export async function markInvitationUsed({
+  invitationId,
+  now,
+  transaction,
+}: {
+  invitationId: number;
+  now: Date;
+  transaction: Transaction;
+}): Promise<void> {
+  const { Invitation } = await db();
+  await Invitation.update({ usedAt: now }, { where: { id: invitationId }, transaction });
+}
+
+/** An invitation to the team; its id. */
+export async function insertInvitation({
+  transaction,
+  ...values
+}: {
+  transaction: Transaction;
+  teamId: number;
+  userId: number;
+  email: string;
+  name: string;
+  role: Role;
+  athleteId: number | null;
+  tokenHash: string;
+  expiresAt: Date;
+}): Promise<number> {
+  const { Invitation } = await db();
+  const row = await Invitation.create({ ...values, purpose: "invite", usedAt: null }, { transaction });
+  return row.id;
 }
 
 /**
@@ -97,7 +142,7 @@ export async function grantMembership({
   invitation,
   transaction,
 }: {
-  invitation: Invitation;
+  invitation: OpenInvitation;
   transaction: Transaction;
 }): Promise<{ teamId: number }> {
   const { Membership, Athlete } = await db();
@@ -115,48 +160,8 @@ export async function grantMembership({
         ? await Athlete.findOne({ where: { id: invitation.athleteId, teamId, userId: null }, transaction })
         : null;
       if (profile) await profile.update({ userId }, { transaction });
-      else
-        await Athlete.create(
-          {
-            teamId,
-            userId,
-            name: invitation.name ?? "New athlete",
-            groupId: null,
-            sex: null,
-            birthDate: null,
-            bodyMassKg: null,
-            vmaxMs: null,
-            vmaxTestedOn: null,
-            tauS: null,
-            stepLengthM: null,
-          },
-          { transaction },
-        );
+      else await insertAthleteProfile({ teamId, userId, name: invitation.name ?? "New athlete", transaction });
     }
   }
   return { teamId };
-}
-
-/**
- * An existing account accepts an invitation: only its signed-in owner may, so nobody can be put into a team
- * by someone who merely saw the link.
- */
-export async function joinTeam({ token, userId, now = new Date() }: { token: string; userId: number; now?: Date }) {
-  const { sequelize, Team } = await db();
-  return sequelize.transaction(async (transaction) => {
-    const invitation = await openInvitationByToken({ token, transaction, now });
-    if (!invitation || invitation.purpose !== "invite")
-      throw new AppError("invalid", "This invitation has expired or was already used", {
-        fields: { token: ["Expired or used"] },
-      });
-    if (invitation.userId !== userId)
-      throw new AppError(
-        "forbidden",
-        "This invitation is for another account. Sign in with the address it was sent to.",
-      );
-    const { teamId } = await grantMembership({ invitation, transaction });
-    await invitation.update({ usedAt: now }, { transaction });
-    const team = await Team.findByPk(teamId, { attributes: ["name"], transaction });
-    return { teamId, teamName: team?.name ?? "" };
-  });
 }

@@ -104,3 +104,16 @@ export async function userNames(
   const users = await User.findAll({ where: { id: { [Op.in]: wanted } }, attributes: ["id", "name"], transaction });
   return new Map(users.map((u) => [u.id, u.name]));
 }
+
+/** Whether the account has a password (it can sign in). */
+export async function hasPassword({
+  userId,
+  transaction,
+}: {
+  userId: number;
+  transaction?: Transaction;
+}): Promise<boolean> {
+  const { User } = await db();
+  const user = await User.findByPk(userId, { attributes: ["passwordHash"], transaction });
+  return Boolean(user?.passwordHash);
+}

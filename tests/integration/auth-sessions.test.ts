@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { IDLE_MINUTES, MAX_HOURS } from "@/lib/auth/session-policy";
 import { endSession, sessionWritesSettled, startSession, touchSession as touchNow } from "@/lib/data/auth-sessions";
-import { acceptInvitation } from "@/lib/data/members";
-import { requestPasswordReset } from "@/lib/data/password-reset";
+import { acceptInvitation } from "@/lib/services/invitations";
+import { requestPasswordReset } from "@/lib/services/password-reset";
 import { createTestTeam } from "../helpers/fixtures";
 import { setupTestDb } from "../helpers/db";
 

@@ -2,8 +2,10 @@
 // sees only the address it typed, and the account gets none of the team's data (issue 10, defect 8).
 import { describe, expect, it } from "vitest";
 import { authorizeTeam } from "@/lib/auth/authorize";
-import { joinTeam, listInvitations, withdrawInvitation } from "@/lib/data/invitations";
-import { acceptInvitation, addMember, findOpenInvitation, listMembers } from "@/lib/data/members";
+import { listInvitations, withdrawInvitation } from "@/lib/data/invitations";
+import { findOpenInvitation, listMembers } from "@/lib/data/members";
+import { acceptInvitation, joinTeam } from "@/lib/services/invitations";
+import { addMember } from "@/lib/services/members";
 import { listAlertRecipients } from "@/lib/data/notification-settings";
 import { listOutbox } from "@/lib/data/outbox";
 import { listMembershipsOfUser, verifyCredentials } from "@/lib/data/users";

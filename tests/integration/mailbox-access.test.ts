@@ -3,7 +3,7 @@
 // Real parts: the fake SMTP server on a free port, the outbox worker, the route handlers; only next-auth's
 // session lookup is replaced by "who is asking".
 import { describe, expect, it, vi } from "vitest";
-import { requestPasswordReset } from "@/lib/data/password-reset";
+import { requestPasswordReset } from "@/lib/services/password-reset";
 import { enqueueMail, listDeliveryQueue } from "@/lib/data/outbox";
 import { listMail } from "@/lib/mail/mailbox";
 import { createTestTeam } from "../helpers/fixtures";

@@ -1,12 +1,7 @@
 import { describe, expect, it } from "vitest";
-import {
-  acceptInvitation,
-  addMember,
-  changeMemberRole,
-  findOpenInvitation,
-  listMembers,
-  removeMember,
-} from "@/lib/data/members";
+import { findOpenInvitation, listMembers } from "@/lib/data/members";
+import { acceptInvitation } from "@/lib/services/invitations";
+import { addMember, changeMemberRole, removeMember } from "@/lib/services/members";
 import { listMembershipsOfUser, verifyCredentials } from "@/lib/data/users";
 import { AppError } from "@/lib/errors";
 import { addMemberSchema } from "@/lib/validations/members";

@@ -2,7 +2,7 @@
 // workers, lease takeover after a crash, backoff and giving up, invitations and digests on the same path.
 import { describe, expect, it } from "vitest";
 import { renderEmail } from "@/emails/layout";
-import { addMember } from "@/lib/data/members";
+import { addMember } from "@/lib/services/members";
 import { updateNotificationSettings } from "@/lib/data/notification-settings";
 import { claimDueMessages, enqueueMail, listOutbox, markMessageSent, retryFailedMessage } from "@/lib/data/outbox";
 import { backoffDelayMs, DEFAULT_BACKOFF } from "@/lib/notices/backoff";

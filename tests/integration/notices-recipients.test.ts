@@ -4,7 +4,7 @@
 import { describe, expect, it } from "vitest";
 import { teamToday } from "@/lib/dates/zoned";
 import { listAlertRecipients, listAthleteContacts, listDigestSubscribers } from "@/lib/data/notification-settings";
-import { addMember, removeMember } from "@/lib/data/members";
+import { addMember, removeMember } from "@/lib/services/members";
 import { enqueueMail, listOutbox } from "@/lib/data/outbox";
 import { createSessions } from "@/lib/services/plan-sessions";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";

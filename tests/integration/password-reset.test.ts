@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { acceptInvitation, findOpenInvitation } from "@/lib/data/members";
-import { requestPasswordReset } from "@/lib/data/password-reset";
+import { findOpenInvitation } from "@/lib/data/members";
+import { acceptInvitation } from "@/lib/services/invitations";
+import { requestPasswordReset } from "@/lib/services/password-reset";
 import { verifyCredentials } from "@/lib/data/users";
 import { TEST_PASSWORD, createTestTeam } from "../helpers/fixtures";
 import { setupTestDb } from "../helpers/db";

@@ -2,7 +2,7 @@
 
 import { after } from "next/server";
 import { runAction } from "@/lib/action-result";
-import { requestPasswordReset } from "@/lib/data/password-reset";
+import { requestPasswordReset } from "@/lib/services/password-reset";
 import { forgotPasswordSchema, type ForgotPasswordInput } from "@/lib/validations/auth";
 
 // Public by design: it only ever sends a link to the address on file, and answers the same for any address.

@@ -4,8 +4,7 @@ import { z } from "zod";
 import { runAction } from "@/lib/action-result";
 import { sessionUserId } from "@/lib/auth/access";
 import { AppError } from "@/lib/errors";
-import { joinTeam } from "@/lib/data/invitations";
-import { acceptInvitation } from "@/lib/data/members";
+import { acceptInvitation, joinTeam } from "@/lib/services/invitations";
 import { setPasswordSchema, type SetPasswordInput } from "@/lib/validations/auth";
 
 // Public by design: the one-time token is the credential, checked and spent inside acceptInvitation.

@@ -5,7 +5,7 @@ import { z } from "zod";
 import { runAction } from "@/lib/action-result";
 import { requireViewer, requireMember } from "@/lib/auth/access";
 import { withdrawInvitation } from "@/lib/data/invitations";
-import { addMember, changeMemberRole, removeMember } from "@/lib/data/members";
+import { addMember, changeMemberRole, removeMember } from "@/lib/services/members";
 import { addMemberSchema, changeRoleSchema, type AddMemberInput } from "@/lib/validations/members";
 
 const idSchema = z.coerce.number().int().positive();
