@@ -2,8 +2,6 @@ import "server-only";
 import { addDays, dayIndex, startOfWeek } from "@/lib/dates/plain-date";
 import {
   computeAthleteLoad,
-  computeSquadWeek,
-  packSessions,
   type AthleteProfile,
   type Flag,
   type FlagLevel,
@@ -19,7 +17,8 @@ import {
 import { AppError } from "@/lib/errors";
 import type { LoadPreviewInput } from "@/lib/validations/load";
 import { teamToday, type TeamClock } from "@/lib/dates/zoned";
-import { getAthleteLoadInputs, getLoadSeriesInputs, getTeamClock } from "./load";
+import { getLedgerWeek } from "./load-ledger";
+import { getAthleteLoadInputs, getTeamClock } from "./load";
 
 /** The caller's already-known team clock (e.g. from the authorized viewer) saves a query on hot paths. */
 type Clock = Omit<TeamClock, "teamId">;
@@ -82,23 +81,9 @@ export async function getSquadWeekLoad({
   const now = today ?? teamToday({ timeZone: probe.timeZone, now: new Date() });
   const weekStart = startOfWeek(week ?? now, probe.weekStartDay);
   const weekEnd = addDays(weekStart, 6);
-  const inputs = await getLoadSeriesInputs({ teamId, through: weekEnd });
-  const rows = computeSquadWeek(
-    // Packed into columns once here, the two years of history are summed from typed arrays (lib/load/packed.ts).
-    inputs.athletes.map((a) => ({
-      id: String(a.id),
-      name: a.name,
-      group: a.groupName,
-      profile: a.profile,
-      sessions: a.sessions,
-      logs: a.logs,
-      packed: packSessions(a.sessions, a.logs),
-    })),
-    inputs.settings,
-    weekStart,
-    now,
-    view,
-  );
+  // From the ledger: the week and the one before it, whatever the length of the history (README §12).
+  const inputs = await getLedgerWeek({ teamId, weekStart, today: now, view });
+  const rows = inputs.athletes.map((a) => a.load);
   const groups = new Map<number, string>();
   for (const a of inputs.athletes) if (a.groupId !== null && a.groupName) groups.set(a.groupId, a.groupName);
   return {

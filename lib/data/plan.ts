@@ -7,10 +7,12 @@ import { computeSquadWeek, type SquadAthleteInput } from "@/lib/load/squad";
 import { logsFor } from "@/lib/plan/blocks";
 import { compactContext } from "@/lib/plan/context";
 import type { PlanAthlete, PlanGroup, PlanSession, PlanWeek, PlanWriteResult, WeekRow } from "@/lib/plan/types";
-import { addDays, isoWeekOf, startOfWeek, weekDays } from "@/lib/dates/plain-date";
+import { addDays, dayIndex, isoWeekOf, startOfWeek, weekDays } from "@/lib/dates/plain-date";
+import { ledgerPreviewContext } from "@/lib/load/ledger-week";
 import { db } from "@/models";
 import { listGroups } from "./athletes";
 import { getLoadSeriesInputs } from "./load";
+import { getLedgerWeek } from "./load-ledger";
 import { loadSessions } from "./plan-rows";
 import { listRestrictions } from "./restrictions";
 import { listTemplates } from "./templates";
@@ -55,7 +57,9 @@ export async function getPlanWeek({
     throw new AppError("not_found", "No athlete profile is linked to your account");
   const visible = (s: { status: string }) => !own || s.status !== "draft";
   const [inputs, groups, weekRows, templates, restrictions] = await Promise.all([
-    getLoadSeriesInputs({ teamId, through: weekEnd }),
+    // Staff read the ledger (README §12); an athlete's own view leaves drafts out of the whole history, which
+    // the ledger (drafts in) cannot give, so it reads that one athlete's history.
+    own ? getLoadSeriesInputs({ teamId, athleteIds: [audience.ownAthleteId!], through: weekEnd }) : null,
     listGroups({ teamId }),
     loadSessions({
       teamId,
@@ -65,7 +69,11 @@ export async function getPlanWeek({
     own ? Promise.resolve([]) : listTemplates({ teamId }),
     listRestrictions({ teamId, from: weekStart, ...(own ? { athleteIds: [audience.ownAthleteId!] } : {}) }),
   ]);
-  const squad: SquadAthleteInput[] = inputs.athletes
+  const ledger = own
+    ? null
+    : await getLedgerWeek({ teamId, weekStart, from: addDays(weekStart, -28), today, view: "projected" });
+  const source = own ? inputs! : ledger!;
+  const squad: SquadAthleteInput[] = source.athletes
     .filter((a) => !own || a.id === audience.ownAthleteId)
     .map((a) => {
       const sessions = a.sessions.filter(visible);
@@ -76,10 +84,12 @@ export async function getPlanWeek({
         profile: a.profile,
         sessions,
         logs: a.logs,
-        packed: packSessions(sessions, a.logs),
+        packed: own ? packSessions(sessions, a.logs) : undefined,
       };
     });
-  const rows = computeSquadWeek(squad, inputs.settings, weekStart, today, "projected");
+  const rows = own
+    ? computeSquadWeek(squad, source.settings, weekStart, today, "projected")
+    : ledger!.athletes.map((a) => a.load);
   const weekSessions = new Map<number, PlanSession[]>();
   for (const { dto } of weekRows)
     if (visible(dto)) weekSessions.set(dto.athleteId, [...(weekSessions.get(dto.athleteId) ?? []), dto]);
@@ -87,25 +97,35 @@ export async function getPlanWeek({
   const athletes: PlanAthlete[] = squad.map((a, i) => {
     const id = Number(a.id);
     const sessions = weekSessions.get(id) ?? [];
-    const source = inputs.athletes.find((x) => x.id === id)!;
+    const from = ledger?.athletes[i];
+    const context = from
+      ? ledgerPreviewContext(from.window, {
+          sessions: a.sessions,
+          logs: a.logs,
+          profile: a.profile,
+          settings: source.settings,
+          todayDay: dayIndex(today),
+          weekStart,
+        })
+      : compactContext(
+          buildWeekPreviewContext({
+            profile: a.profile,
+            settings: source.settings,
+            sessions: a.sessions,
+            logs: a.logs,
+            weekStart,
+            today,
+          }),
+          source.settings.acwrMetric,
+        );
     return {
       id,
       name: a.name,
-      groupId: source.groupId,
+      groupId: source.athletes.find((x) => x.id === id)!.groupId,
       profile: a.profile,
       sessions,
       logs: logsFor(a.logs, sessions),
-      context: compactContext(
-        buildWeekPreviewContext({
-          profile: a.profile,
-          settings: inputs.settings,
-          sessions: a.sessions,
-          logs: a.logs,
-          weekStart,
-          today,
-        }),
-        inputs.settings.acwrMetric,
-      ),
+      context,
       load: { week: rows[i].week, flags: rows[i].flags, topLevel: rows[i].topLevel },
     };
   });
@@ -123,7 +143,7 @@ export async function getPlanWeek({
     isoYear: iso.year,
     days: weekDays(weekStart),
     today,
-    settings: inputs.settings,
+    settings: source.settings,
     groups: planGroups,
     athletes,
     templates,
@@ -156,27 +176,15 @@ export async function withWeekRows({
   }
   const rows: WeekRow[] = [];
   for (const [weekStart, ids] of weeks) {
-    // A drop touches one or two athletes: read just their history, not the whole squad's.
-    const inputs = await getLoadSeriesInputs({ teamId, athleteIds: [...ids], through: addDays(weekStart, 6) });
-    const squad = inputs.athletes;
-    const computed = computeSquadWeek(
-      squad.map((a) => ({
-        id: String(a.id),
-        name: a.name,
-        group: a.groupName,
-        profile: a.profile,
-        sessions: a.sessions,
-        logs: a.logs,
-        packed: packSessions(a.sessions, a.logs),
-      })),
-      inputs.settings,
-      weekStart,
-      today,
-      "projected",
-    );
-    computed.forEach((r, i) =>
-      rows.push({ athleteId: squad[i].id, weekStart, load: { week: r.week, flags: r.flags, topLevel: r.topLevel } }),
-    );
+    // A drop touches one or two athletes: their ledger rows for the week, not the squad's.
+    const { athletes } = await getLedgerWeek({ teamId, athleteIds: [...ids], weekStart, today, view: "projected" });
+    for (const a of athletes) {
+      rows.push({
+        athleteId: a.id,
+        weekStart,
+        load: { week: a.load.week, flags: a.load.flags, topLevel: a.load.topLevel },
+      });
+    }
   }
   return { ...result, rows };
 }

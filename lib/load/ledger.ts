@@ -323,6 +323,8 @@ export interface LedgerWindow {
   acwr: Record<Metric, AcwrColumns>;
   provisional: Uint8Array;
   firstDate: string;
+  /** The series state at the end of each day of the window (what a drag preview continues from). */
+  states: LedgerState[];
 }
 
 export interface LedgerWindowInput {
@@ -369,6 +371,7 @@ export function ledgerWindow(input: LedgerWindowInput): LedgerWindow {
   const states: LedgerState[] = [];
   let r = 0;
   let last: LedgerState = EMPTY_STATE;
+  const shown: LedgerState[] = [];
   for (let d = startDay; d <= toDay; d++) {
     while (r < rows.length && rows[r].day < d) r++;
     const row = r < rows.length && rows[r].day === d ? rows[r] : null;
@@ -379,6 +382,7 @@ export function ledgerWindow(input: LedgerWindowInput): LedgerWindow {
     last = state;
     const i = d - fromDay;
     if (i < 0) continue;
+    shown.push(state);
     logged[i] = counted.logged ? 1 : 0;
     missing[i] = counted.missing ? 1 : 0;
     provisional[i] = state.onRecord < ACWR_MIN_HISTORY_DAYS ? 1 : 0;
@@ -400,5 +404,6 @@ export function ledgerWindow(input: LedgerWindowInput): LedgerWindow {
     acwr,
     provisional,
     firstDate: dateFromDayIndex(fromDay),
+    states: shown,
   };
 }

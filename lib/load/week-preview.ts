@@ -1,9 +1,10 @@
-import { acwrFromFirstDay, allocAcwrColumns, markProvisional } from "./acwr";
+import { ACWR_MIN_HISTORY_DAYS, acwrFromFirstDay, allocAcwrColumns, CHRONIC_DAYS, markProvisional } from "./acwr";
 import { computeAthleteColumns } from "./athlete-load";
 import { resolveProfile } from "./accumulate";
 import { dateFromDayIndex, dayIndex } from "@/lib/dates/plain-date";
 import { computeFlags, type Flag, type FlagSession } from "./flags";
-import { alignLogs, buildDailyColumns, effectiveSessions } from "./series";
+import { ledgerMethod, runLedger, type LedgerMethod, type LedgerState } from "./ledger";
+import { alignLogs, buildDailyColumns, effectiveSessions, sessionUse } from "./series";
 import {
   METRICS,
   type AthleteProfile,
@@ -33,6 +34,67 @@ export interface WeekPreviewInput {
   firstDataDate?: string | null;
   /** Sessions counted in the view shortly before the week, for the recovery-window check. */
   priorSessions?: readonly FlagSession[];
+  /**
+   * The team metric's series state on the days before the week (ledger, lib/load/README.md §12): the week then
+   * continues the one series from it, and the history needs only last week's values (weekly change).
+   */
+  seed?: PreviewSeed | null;
+}
+
+/** Series state of the team metric at the end of each day before the week, oldest first, ending weekStart − 1 (≤ 28). */
+export interface PreviewSeed {
+  onRecord: number[];
+  kept: number[];
+  cum: number[];
+  acute: number[];
+  chronic: number[];
+}
+
+/** The seed of a ledger window's days before the week, for the team metric (index k in METRICS). */
+export function previewSeedFrom(states: readonly LedgerState[], k: number): PreviewSeed {
+  const last = states.slice(-CHRONIC_DAYS);
+  return {
+    onRecord: last.map((s) => s.onRecord),
+    kept: last.map((s) => s.kept),
+    cum: last.map((s) => s.cum[k]),
+    acute: last.map((s) => s.acute[k]),
+    chronic: last.map((s) => s.chronic[k]),
+  };
+}
+
+/** The week's ratio and provisional marks (indices offset … offset + 6) continued from the seed, as the ledger does. */
+function seededRatios(
+  seed: PreviewSeed,
+  k: number,
+  week: { values: Record<Metric, Float64Array>; missing: Uint8Array },
+  has: Uint8Array,
+  method: LedgerMethod,
+  out: { ratio: Float64Array; provisional: Uint8Array; offset: number },
+): void {
+  const expand = (x: number) => METRICS.map((_, j) => (j === k ? x : 0));
+  const states: LedgerState[] = seed.onRecord.map((onRecord, i) => ({
+    onRecord,
+    kept: seed.kept[i],
+    cum: expand(seed.cum[i]),
+    acute: expand(seed.acute[i]),
+    chronic: expand(seed.chronic[i]),
+    ratio: expand(Number.NaN),
+  }));
+  const days = Array.from({ length: 7 }, (_, i) => i);
+  const stepped = runLedger(
+    states,
+    days.map((day) => ({ day })),
+    ({ day }) => ({
+      values: METRICS.map((m) => week.values[m][day]),
+      has: has[day] === 1,
+      missing: week.missing[day] === 1,
+    }),
+    method,
+  );
+  stepped.forEach((s, i) => {
+    out.ratio[out.offset + i] = s.ratio[k];
+    out.provisional[out.offset + i] = s.onRecord < ACWR_MIN_HISTORY_DAYS ? 1 : 0;
+  });
 }
 
 /**
@@ -68,16 +130,25 @@ export function computeWeekPreview(input: WeekPreviewInput): { week: WeekSummary
     firstData = offset + week.firstDataIndex;
   }
   const acwr = allocAcwrColumns(length);
-  acwrFromFirstDay(
-    values[settings.acwrMetric],
-    settings.acwrMethod,
-    acwr,
-    firstData,
-    undefined,
-    rp.estimateMissing ? undefined : missing,
-  );
   const provisional = new Uint8Array(length);
-  markProvisional(provisional, firstData);
+  if (input.seed) {
+    acwr.ratio.fill(Number.NaN);
+    provisional.fill(1);
+    const has = new Uint8Array(7);
+    weekSessionDays(input.weekSessions, logFor, todayDay, view, ws, has);
+    const k = METRICS.indexOf(settings.acwrMetric);
+    seededRatios(input.seed, k, week, has, ledgerMethod(settings), { ratio: acwr.ratio, provisional, offset });
+  } else {
+    acwrFromFirstDay(
+      values[settings.acwrMetric],
+      settings.acwrMethod,
+      acwr,
+      firstData,
+      undefined,
+      rp.estimateMissing ? undefined : missing,
+    );
+    markProvisional(provisional, firstData);
+  }
   const firstDate = dateFromDayIndex(historyStart);
   const summary = summariseWeek({
     firstDate,
@@ -104,6 +175,22 @@ export function computeWeekPreview(input: WeekPreviewInput): { week: WeekSummary
   return { week: { ...summary, ...weekExtras(weekSessions, ws) }, flags };
 }
 
+/** has[i] = 1 where a session of week day i counts in the view (the series' "on record" test, series.ts sessionUse). */
+function weekSessionDays(
+  sessions: readonly SessionInput[],
+  logFor: ReturnType<typeof alignLogs>,
+  todayDay: number,
+  view: LoadView,
+  ws: number,
+  has: Uint8Array,
+): void {
+  sessions.forEach((s, k) => {
+    const day = dayIndex(s.date);
+    if (day < ws || day > ws + 6) return;
+    if (sessionUse(s.status, logFor[k] !== undefined, day, todayDay, view) !== "none") has[day - ws] = 1;
+  });
+}
+
 export interface WeekPreviewContextInput {
   profile: AthleteProfile;
   settings: TeamLoadSettings;
@@ -123,6 +210,8 @@ export interface WeekPreviewContext {
   historyValues: Record<Metric, number[]>;
   firstDataDate: string | null;
   priorSessions: FlagSession[];
+  /** With a seed (from the ledger) the history holds last week only. */
+  seed?: PreviewSeed | null;
 }
 
 /** Everything computeWeekPreview needs besides the week itself; build once per athlete, reuse while dragging. */

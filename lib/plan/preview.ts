@@ -22,6 +22,7 @@ export function rowLoad(
     historyValues: ctx.historyValues,
     firstDataDate: ctx.firstDataDate,
     priorSessions: ctx.priorSessions,
+    seed: ctx.seed,
     weekSessions: sessions.map(toSessionInput),
     weekLogs: logsFor(athlete.logs, sessions),
     profile: athlete.profile,

@@ -1,0 +1,71 @@
+import "server-only";
+import { addDays, dayIndex } from "@/lib/dates/plain-date";
+import { ledgerMethod, ledgerReadRange, ledgerWindow, type LedgerWindow } from "@/lib/load/ledger";
+import { recoveryLookBackDays, weekFromLedger, type LedgerWeek } from "@/lib/load/ledger-week";
+import type { LoadView } from "@/lib/load/types";
+import { ensureLedgerFresh, readLedgerRows } from "./ledger";
+import { getLoadSeriesInputs, type LoadAthleteInputs, type LoadInputs } from "./load";
+
+/** The most days before a week the recovery rule can look back (recoveryHours is at most 120 h). */
+const MAX_LOOK_BACK_DAYS = 6;
+
+export type LedgerAthleteWeek = LoadAthleteInputs & { window: LedgerWindow; load: LedgerWeek };
+
+/**
+ * Every load figure of a week read from the ledger (lib/load/README.md §12): for each athlete (the team's, or
+ * `athleteIds`) the window [from, to] (default the week before and the week) and the week's summary and flags.
+ * Sessions are read for the week and the recovery look-back only; the ledger rows for the days shown and the 28
+ * before, so the cost follows the athletes and days shown, not the length of their history.
+ */
+export async function getLedgerWeek({
+  teamId,
+  athleteIds,
+  weekStart,
+  from,
+  to,
+  today,
+  view,
+}: {
+  teamId: number;
+  athleteIds?: readonly number[];
+  weekStart: string;
+  from?: string;
+  to?: string;
+  today: string;
+  view: LoadView;
+}): Promise<Omit<LoadInputs, "athletes"> & { athletes: LedgerAthleteWeek[] }> {
+  const ws = dayIndex(weekStart);
+  const fromDay = from ? Math.min(dayIndex(from), ws - 7) : ws - 7;
+  const toDay = to ? Math.max(dayIndex(to), ws + 6) : ws + 6;
+  await ensureLedgerFresh({});
+  const inputs = await getLoadSeriesInputs({
+    teamId,
+    athleteIds,
+    from: addDays(weekStart, -MAX_LOOK_BACK_DAYS),
+    through: addDays(weekStart, 6),
+  });
+  const todayDay = dayIndex(today);
+  const ids = inputs.athletes.map((a) => a.id);
+  const rows = await readLedgerRows({ athleteIds: ids, ...ledgerReadRange(fromDay, toDay, todayDay) });
+  const method = ledgerMethod(inputs.settings);
+  const lookBack = recoveryLookBackDays(inputs.settings);
+  return {
+    ...inputs,
+    athletes: inputs.athletes.map((a) => {
+      const window = ledgerWindow({ rows: rows.get(a.id) ?? [], fromDay, toDay, todayDay, view, method });
+      const first = addDays(weekStart, -lookBack);
+      const sessions = a.sessions.filter((s) => s.date >= first);
+      const load = weekFromLedger({
+        window,
+        sessions,
+        logs: a.logs,
+        profile: a.profile,
+        settings: inputs.settings,
+        view,
+        todayDay,
+        weekStartDay: ws,
+      });
+      return { ...a, window, load };
+    }),
+  };
+}

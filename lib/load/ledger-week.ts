@@ -1,0 +1,117 @@
+// The week's summary and flags from a ledger window (lib/load/README.md §12): the same week summary, flags and
+// judged peaks as computeSquadWeek, over the window's columns and only the sessions of the week and the recovery
+// look-back before it.
+import { resolveProfile } from "./accumulate";
+import { weekFromColumns, type AthleteColumns, type ColumnsRequest } from "./athlete-load";
+import { topFlagLevel, type Flag, type FlagLevel } from "./flags";
+import type { LedgerWindow } from "./ledger";
+import { metricRecord } from "./metric-record";
+import { alignLogs, effectiveSessions, sessionDayNumbers } from "./series";
+import {
+  METRICS,
+  type AthleteProfile,
+  type LoadView,
+  type LogInput,
+  type Metric,
+  type SessionInput,
+  type TeamLoadSettings,
+} from "./types";
+import { previewSeedFrom, type WeekPreviewContext } from "./week-preview";
+import { judgedPeak, type WeekSummary } from "./week-summary";
+import { dateFromDayIndex, dayIndex } from "@/lib/dates/plain-date";
+
+/** Days before the week whose sessions the recovery rule looks at (lib/load/README.md §8). */
+export function recoveryLookBackDays(settings: TeamLoadSettings): number {
+  return Math.ceil(settings.recoveryHours / 24) + 1;
+}
+
+export interface LedgerWeekInput {
+  /** A window from at least weekStartDay − 7 to weekStartDay + 6. */
+  window: LedgerWindow;
+  /** The athlete's sessions (and their logs) of [weekStartDay − recoveryLookBackDays, weekStartDay + 6]; more do no harm. */
+  sessions: readonly SessionInput[];
+  logs: readonly LogInput[];
+  profile: AthleteProfile;
+  settings: TeamLoadSettings;
+  view: LoadView;
+  todayDay: number;
+  weekStartDay: number;
+}
+
+export interface LedgerWeek {
+  week: WeekSummary;
+  flags: Flag[];
+  topLevel: FlagLevel | null;
+  /** The week's judged ACWR of every metric (team method). */
+  peakRatios: Record<Metric, number | null>;
+}
+
+export function weekFromLedger(input: LedgerWeekInput): LedgerWeek {
+  const { window: win, sessions, settings } = input;
+  const cols: AthleteColumns = {
+    ...win,
+    sessionDays: sessionDayNumbers(sessions),
+    rp: resolveProfile(input.profile, settings),
+  };
+  const req: ColumnsRequest = {
+    profile: input.profile,
+    settings,
+    sessions,
+    logFor: alignLogs(sessions, input.logs),
+    view: input.view,
+    todayDay: input.todayDay,
+    fromDay: win.startDay,
+    toDay: win.startDay + win.length - 1,
+  };
+  const { week, flags } = weekFromColumns(cols, req, input.weekStartDay);
+  const w = input.weekStartDay - win.startDay;
+  const peakRatios = metricRecord((m) => judgedPeak(win.acwr[m].ratio, win.provisional, w, w + 7)?.value ?? null);
+  return { week, flags, topLevel: topFlagLevel(flags), peakRatios };
+}
+
+/**
+ * The drag preview's context from a ledger window reaching at least 28 days before the week: last week's daily
+ * values, the team metric's series state on the 28 days before the week, and the high-intensity sessions of the
+ * recovery look-back. A few hundred numbers per athlete, whatever the history; computeWeekPreview continues the
+ * series from the seed exactly as the server does (tests/unit/load/ledger-preview.test.ts).
+ */
+export function ledgerPreviewContext(
+  win: LedgerWindow,
+  input: Omit<LedgerWeekInput, "window" | "weekStartDay" | "view"> & { weekStart: string },
+): WeekPreviewContext {
+  const ws = dayIndex(input.weekStart);
+  const end = ws - win.startDay; // index of the week's first day
+  const from = Math.max(0, end - 7);
+  const historyDates: string[] = [];
+  for (let i = from; i < end; i++) historyDates.push(dateFromDayIndex(win.startDay + i));
+  const historyValues = metricRecord((m) => Array.from(win.values[m].subarray(from, end)));
+  const before = win.states.slice(0, end);
+  const last = before[before.length - 1];
+  const rp = resolveProfile(input.profile, input.settings);
+  const lookBack = recoveryLookBackDays(input.settings);
+  const logFor = alignLogs(input.sessions, input.logs);
+  const priorSessions = effectiveSessions(
+    input.sessions,
+    logFor,
+    rp,
+    "projected",
+    input.todayDay,
+    ws - lookBack,
+    ws - 1,
+  )
+    .filter((s) => s.highIntensity)
+    .map((s) => ({
+      id: s.id,
+      date: s.date,
+      startTime: s.startTime,
+      contactsByIntensity: s.contactsByIntensity,
+      highIntensity: true,
+    }));
+  return {
+    historyDates,
+    historyValues,
+    firstDataDate: last && last.onRecord > 0 ? dateFromDayIndex(ws - last.onRecord) : null,
+    priorSessions,
+    seed: previewSeedFrom(before, METRICS.indexOf(input.settings.acwrMetric)),
+  };
+}
