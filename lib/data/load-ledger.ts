@@ -1,4 +1,5 @@
 import "server-only";
+import type { Transaction } from "sequelize";
 import { addDays, dayIndex } from "@/lib/dates/plain-date";
 import { ledgerMethod, ledgerReadRange, ledgerWindow, type LedgerWindow } from "@/lib/load/ledger";
 import { recoveryLookBackDays, weekFromLedger, type LedgerWeek } from "@/lib/load/ledger-week";
@@ -25,7 +26,9 @@ export async function getLedgerWeek({
   to,
   today,
   view,
+  transaction,
 }: {
+  transaction?: Transaction;
   teamId: number;
   athleteIds?: readonly number[];
   weekStart: string;
@@ -37,16 +40,17 @@ export async function getLedgerWeek({
   const ws = dayIndex(weekStart);
   const fromDay = from ? Math.min(dayIndex(from), ws - 7) : ws - 7;
   const toDay = to ? Math.max(dayIndex(to), ws + 6) : ws + 6;
-  await ensureLedgerFresh({});
+  await ensureLedgerFresh({ transaction });
   const inputs = await getLoadSeriesInputs({
     teamId,
     athleteIds,
     from: addDays(weekStart, -MAX_LOOK_BACK_DAYS),
     through: addDays(weekStart, 6),
+    transaction,
   });
   const todayDay = dayIndex(today);
   const ids = inputs.athletes.map((a) => a.id);
-  const rows = await readLedgerRows({ athleteIds: ids, ...ledgerReadRange(fromDay, toDay, todayDay) });
+  const rows = await readLedgerRows({ athleteIds: ids, ...ledgerReadRange(fromDay, toDay, todayDay), transaction });
   const method = ledgerMethod(inputs.settings);
   const lookBack = recoveryLookBackDays(inputs.settings);
   return {

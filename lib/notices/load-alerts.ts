@@ -2,7 +2,9 @@ import "server-only";
 import type { Transaction } from "sequelize";
 import { loadAlertEmail } from "@/emails/load-alert";
 import { syncWeekAlerts, type AlertCandidate } from "@/lib/data/alerts";
-import { getAthleteLoadInputs, type LoadAthleteInputs, type LoadInputs } from "@/lib/data/load";
+import { refreshLedger } from "@/lib/data/ledger";
+import { getTeamClock, type LoadAthleteInputs, type LoadInputs } from "@/lib/data/load";
+import { getLedgerWeek } from "@/lib/data/load-ledger";
 import { teamToday } from "@/lib/dates/zoned";
 import { enqueueMail } from "@/lib/data/outbox";
 import { getNoticeTeam, listAlertRecipients } from "@/lib/data/notification-settings";
@@ -96,21 +98,35 @@ export async function evaluateLoadAlerts(args: EvaluateArgs): Promise<number[]> 
   const { transaction, teamId, athleteId } = args;
   if (args.dates.length === 0) return [];
   const sorted = [...args.dates].sort();
-  // Wide enough for any week start day: the week before the first date to two weeks after the last.
-  const inputs = await getAthleteLoadInputs({ athleteId, through: addDays(sorted.at(-1)!, 14), transaction });
-  const weekStartDay = inputs.weekStartDay;
+  // The ledger takes this write in before anything is judged, inside the same transaction (README §12): every
+  // plan and log write passes through here, so the ledger commits with the change or not at all.
+  await refreshLedger({ transaction });
+  const clock = await getTeamClock({ teamId, transaction });
+  const weekStartDay = clock.weekStartDay;
   const weeks = new Map<string, Set<AlertKind>>();
   for (const w of new Set(sorted.map((d) => startOfWeek(d, weekStartDay)))) {
     weeks.set(w, new Set([...(weeks.get(w) ?? []), ...WEEK_KINDS]));
     const next = addDays(w, 7);
     weeks.set(next, new Set([...(weeks.get(next) ?? []), ...NEXT_WEEK_KINDS]));
   }
-  const today = args.today ?? teamToday({ timeZone: inputs.timeZone, now: new Date() });
+  const today = args.today ?? teamToday({ timeZone: clock.timeZone, now: new Date() });
+  let athleteName = "";
 
   const created: Array<{ id: number } & AlertCandidate> = [];
   for (const [weekStart, kindSet] of [...weeks.entries()].sort(([a], [b]) => a.localeCompare(b))) {
     const kinds = WEEK_KINDS.filter((k) => kindSet.has(k));
-    const load = alertWeekLoad({ inputs, weekStart, today });
+    const read = await getLedgerWeek({
+      teamId,
+      athleteIds: [athleteId],
+      weekStart,
+      today,
+      view: "projected",
+      transaction,
+    });
+    const athlete = read.athletes[0];
+    if (!athlete) continue;
+    athleteName = athlete.name;
+    const load = athlete.load;
     const candidates = strongestByKind(load.flags, kinds);
     const fresh = await syncWeekAlerts({
       transaction,
@@ -129,7 +145,7 @@ export async function evaluateLoadAlerts(args: EvaluateArgs): Promise<number[]> 
   const team = await getNoticeTeam({ teamId, transaction });
   const base = appUrl();
   for (const alert of created) {
-    const item = toLoadAlertItem({ ...alert, athleteId, athleteName: inputs.athlete.name, basis: args.basis }, base);
+    const item = toLoadAlertItem({ ...alert, athleteId, athleteName, basis: args.basis }, base);
     for (const r of recipients) {
       await enqueueMail({
         transaction,

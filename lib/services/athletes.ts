@@ -1,5 +1,6 @@
 import "server-only";
 import { insertAthlete, updateAthleteRow } from "@/lib/data/athletes";
+import { refreshLedger } from "@/lib/data/ledger";
 import { inTransaction } from "@/lib/data/transaction";
 import type { AthleteInput } from "@/lib/validations/athlete";
 
@@ -25,5 +26,10 @@ export async function updateAthlete({
   athleteId: number;
   input: AthleteInput;
 }): Promise<{ id: number }> {
-  return inTransaction((transaction) => updateAthleteRow({ teamId, athleteId, input, transaction }));
+  return inTransaction(async (transaction) => {
+    const row = await updateAthleteRow({ teamId, athleteId, input, transaction });
+    // vmax, τ, step length and plyo level change every day of the athlete's ledger.
+    await refreshLedger({ transaction });
+    return row;
+  });
 }

@@ -1,5 +1,6 @@
 import "server-only";
 import { writeTeamLoadSettings } from "@/lib/data/team-settings";
+import { refreshLedger } from "@/lib/data/ledger";
 import { inTransaction } from "@/lib/data/transaction";
 import type { TeamLoadSettings } from "@/lib/load/types";
 import type { TeamSettingsPatch } from "@/lib/validations/team-settings";
@@ -15,5 +16,10 @@ export async function updateTeamLoadSettings({
   teamId: number;
   input: TeamSettingsPatch;
 }): Promise<TeamLoadSettings> {
-  return inTransaction((transaction) => writeTeamLoadSettings({ teamId, input, transaction }));
+  return inTransaction(async (transaction) => {
+    const settings = await writeTeamLoadSettings({ teamId, input, transaction });
+    // Thresholds, speed zones, the ACWR method and the missing-log rule are in every ledger row of the team.
+    await refreshLedger({ transaction });
+    return settings;
+  });
 }
