@@ -22,17 +22,21 @@ export async function seedSquad(
   d: Db,
   {
     name,
+    teamId,
     athletes,
     seasons,
     today,
     seed = 7,
-  }: { name: string; athletes: number; seasons: number; today: string; seed?: number },
+  }: { name?: string; teamId?: number; athletes: number; seasons: number; today: string; seed?: number },
 ): Promise<SeededSquad> {
   const random = mulberry32(seed);
   const byKey = new Map(DEMO_TEMPLATES.map((t) => [t.key, t]));
-  const team = await d.Team.create({ name, timeZone: "Europe/London", weekStartDay: 1 });
-  await d.TeamLoadSettings.create({ teamId: team.id });
-  const group = await d.TrainingGroup.create({ teamId: team.id, name: "Sprint", sortOrder: 0 });
+  // A new team, or more athletes (in a group of their own) for an existing one.
+  const team = teamId
+    ? { id: teamId }
+    : await d.Team.create({ name: name ?? "Invented Squad", timeZone: "Europe/London", weekStartDay: 1 });
+  if (!teamId) await d.TeamLoadSettings.create({ teamId: team.id });
+  const group = await d.TrainingGroup.create({ teamId: team.id, name: teamId ? "Squad" : "Sprint", sortOrder: 99 });
   const athleteIds: number[] = [];
   for (let i = 0; i < athletes; i++) {
     const a = await d.Athlete.create({
