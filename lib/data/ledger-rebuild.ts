@@ -83,6 +83,8 @@ export async function rebuildLedger({
     });
   }
   if (done < total) show(total);
+  // Marks of athletes deleted since (their rows went with them).
+  await sequelize.query("DELETE FROM load_ledger_dirty WHERE athlete_id NOT IN (SELECT id FROM athletes)");
   const used = process.cpuUsage(cpu);
   return {
     teams: teams.length,

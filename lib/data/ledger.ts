@@ -209,13 +209,7 @@ export async function refreshLedger({
     WHERE (:team = 0 OR a.team_id = :team)`,
     { team: teamId ?? 0 },
   );
-  if (marked.length === 0) {
-    // Marks of athletes that no longer exist.
-    await sequelize.query("DELETE FROM load_ledger_dirty WHERE athlete_id NOT IN (SELECT id FROM athletes)", {
-      transaction,
-    });
-    return 0;
-  }
+  if (marked.length === 0) return 0;
   const byTeam = new Map<number, Bounds[]>();
   for (const b of marked) byTeam.set(b.team_id, [...(byTeam.get(b.team_id) ?? []), b]);
   for (const [team, list] of byTeam) {

@@ -2,7 +2,6 @@ import "server-only";
 import type { Transaction } from "sequelize";
 import { loadAlertEmail } from "@/emails/load-alert";
 import { syncWeekAlerts, type AlertCandidate } from "@/lib/data/alerts";
-import { refreshLedger } from "@/lib/data/ledger";
 import { getTeamClock, type LoadAthleteInputs, type LoadInputs } from "@/lib/data/load";
 import { getLedgerWeek } from "@/lib/data/load-ledger";
 import { teamToday } from "@/lib/dates/zoned";
@@ -98,9 +97,8 @@ export async function evaluateLoadAlerts(args: EvaluateArgs): Promise<number[]> 
   const { transaction, teamId, athleteId } = args;
   if (args.dates.length === 0) return [];
   const sorted = [...args.dates].sort();
-  // The ledger takes this write in before anything is judged, inside the same transaction (README §12): every
-  // plan and log write passes through here, so the ledger commits with the change or not at all.
-  await refreshLedger({ transaction });
+  // The writer has brought the ledger up to date in this transaction (README §12); getLedgerWeek would take in
+  // anything still marked.
   const clock = await getTeamClock({ teamId, transaction });
   const weekStartDay = clock.weekStartDay;
   const weeks = new Map<string, Set<AlertKind>>();

@@ -1,4 +1,5 @@
 import "server-only";
+import { refreshLedger } from "@/lib/data/ledger";
 import type { Transaction } from "sequelize";
 import type { Loaded } from "@/lib/data/plan-rows";
 import { AppError } from "@/lib/errors";
@@ -31,8 +32,8 @@ export function change(kind: SessionChange["kind"], before: Loaded | null, after
 
 /**
  * Every plan write ends here, inside its transaction: physio restrictions are checked first (a write that
- * breaks one without a reason throws and rolls back), then notices are recorded, so a notice exists exactly
- * when the change commits.
+ * breaks one without a reason throws and rolls back), then the load ledger is brought up to date, then notices
+ * are recorded, so a notice and the ledger's new rows exist exactly when the change commits.
  */
 export async function notify({
   transaction,
@@ -49,6 +50,8 @@ export async function notify({
 }) {
   if (changes.length === 0) return;
   await guardRestrictions({ transaction, teamId, actorUserId, changes, override });
+  // The load ledger takes the change in before anything reads a figure, and commits with it (README §12).
+  await refreshLedger({ transaction });
   await afterPlanChange({ transaction, teamId, actorUserId, changes });
 }
 

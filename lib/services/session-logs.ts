@@ -1,4 +1,5 @@
 import "server-only";
+import { refreshLedger } from "@/lib/data/ledger";
 import { destroySessionLog, writeSessionLog, type LogTarget, type SessionLogDto } from "@/lib/data/logs";
 import { inTransaction } from "@/lib/data/transaction";
 import { AppError, type FieldErrors } from "@/lib/errors";
@@ -54,6 +55,7 @@ export async function saveSessionLog({
   const values = { completion: input.completion, notes: input.notes, ...done };
   return inTransaction(async (transaction) => {
     const log = await writeSessionLog({ target, values, transaction });
+    await refreshLedger({ transaction });
     await afterLogChange({
       transaction,
       teamId: target.teamId,
@@ -75,6 +77,7 @@ export async function deleteSessionLog({
 }): Promise<boolean> {
   return inTransaction(async (transaction) => {
     const removed = await destroySessionLog({ sessionId: target.id, transaction });
+    await refreshLedger({ transaction });
     if (removed)
       await afterLogChange({
         transaction,

@@ -1,8 +1,9 @@
 // Child process for tests/integration/load-ledger-crash.test.ts: plan and log writes in a loop through the real
 // data path until it is killed. Prints one line per committed write.
 import { addDays } from "@/lib/dates/plain-date";
-import { getLogTarget, saveSessionLog } from "@/lib/data/logs";
-import { createSessions, updateSession } from "@/lib/data/plan-sessions";
+import { getLogTarget } from "@/lib/data/logs";
+import { createSessions, updateSession } from "@/lib/services/plan-sessions";
+import { saveSessionLog } from "@/lib/services/session-logs";
 import { createSessionSchema } from "@/lib/validations/plan";
 
 const teamId = Number(process.env.LEDGER_TEAM_ID);
