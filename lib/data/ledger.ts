@@ -251,8 +251,9 @@ export async function refreshLedger({
         const p = live[i];
         const a = inputs.athletes.find((x) => x.id === p.b.id);
         if (!a) continue;
+        // Rows before the first session (a first session moved later) are about to go: no state comes from them.
         const before: LedgerState[] = (stored[i].get(p.b.id) ?? []).filter(
-          (r) => r.day >= p.start! - 28 && r.day < p.start!,
+          (r) => r.day >= Math.max(p.start! - 28, p.first) && r.day < p.start!,
         );
         const values = ledgerDayValues(
           {
