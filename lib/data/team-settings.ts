@@ -142,7 +142,13 @@ export async function writeTeamLoadSettings({
 }
 
 /** Sets the ISO weekday the team's week starts on; 404 when the team does not exist. */
-export async function updateTeamWeekStart({ teamId, input }: { teamId: number; input: TeamWeekInput }): Promise<TeamWeekInput> {
+export async function updateTeamWeekStart({
+  teamId,
+  input,
+}: {
+  teamId: number;
+  input: TeamWeekInput;
+}): Promise<TeamWeekInput> {
   const { Team } = await db();
   const [changed] = await Team.update({ weekStartDay: input.weekStartDay }, { where: { id: teamId } });
   if (changed === 0) throw new AppError("not_found", "Not found");
