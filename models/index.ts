@@ -183,9 +183,11 @@ cache.__sprintwrightDb ??= {};
  */
 export function db(): Promise<Db> {
   const c = cache.__sprintwrightDb!;
+  if (c.db) return c.db;
+  // Open only on a cache miss: opening is a new connection (and on SQLite two PRAGMAs), never a side effect of a hit.
   const url = env().DATABASE_URL;
   const open = databaseDialect(url) === "postgres" ? openPostgres(url) : openDatabase(databaseStorage(url));
-  c.db ??= open.then((sequelize) => {
+  c.db = open.then((sequelize) => {
     initModels(sequelize);
     return { ...models, sequelize };
   });
