@@ -72,8 +72,20 @@ describeBrowser("the team's week start", () => {
 
     await page.goto(`${app.url}/settings`);
     const form = page.getByTestId("week-start-form");
-    await form.getByLabel("Weeks start on").selectOption({ label: "Sunday" });
-    await form.getByRole("button", { name: "Save week start" }).click();
+    // A choice made before the form has hydrated is lost (the button stays disabled): choose until the form sees it.
+    const choice = form.getByLabel("Weeks start on");
+    const save = form.getByRole("button", { name: "Save week start" });
+    await expect
+      .poll(
+        async () => {
+          await choice.selectOption({ label: "Monday" });
+          await choice.selectOption({ label: "Sunday" });
+          return save.isEnabled();
+        },
+        { timeout: 30_000 },
+      )
+      .toBe(true);
+    await save.click();
     await form.getByRole("status").getByText("Saved").waitFor();
     await screenshot(page, "settings-week-start");
     const [row] = await app.query<{ week_start_day: number }>("SELECT week_start_day FROM teams WHERE id = ?", [
