@@ -6,6 +6,7 @@ import {
   alignLogs,
   buildDailyColumns,
   effectiveSessions,
+  recoveryLookBackDays,
   firstDayOnRecord,
   sessionDayNumbers,
   type AlignedLogs,
@@ -159,7 +160,7 @@ export function weekFromColumns(
     settings: req.settings,
     weekStart,
   });
-  const lookBack = Math.ceil(req.settings.recoveryHours / 24) + 1;
+  const lookBack = recoveryLookBackDays(req.settings);
   const sessions = effectiveSessions(
     req.sessions,
     req.logFor,

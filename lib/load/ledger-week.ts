@@ -6,7 +6,7 @@ import { weekFromColumns, type AthleteColumns, type ColumnsRequest } from "./ath
 import { topFlagLevel, type Flag, type FlagLevel } from "./flags";
 import type { LedgerWindow } from "./ledger";
 import { metricRecord } from "./metric-record";
-import { alignLogs, effectiveSessions, sessionDayNumbers } from "./series";
+import { alignLogs, priorRecoverySessions, sessionDayNumbers } from "./series";
 import {
   METRICS,
   type AthleteProfile,
@@ -19,11 +19,6 @@ import {
 import { previewSeedFrom, type WeekPreviewContext } from "./week-preview";
 import { judgedPeak, type WeekSummary } from "./week-summary";
 import { dateFromDayIndex, dayIndex } from "@/lib/dates/plain-date";
-
-/** Days before the week whose sessions the recovery rule looks at (lib/load/README.md §8). */
-export function recoveryLookBackDays(settings: TeamLoadSettings): number {
-  return Math.ceil(settings.recoveryHours / 24) + 1;
-}
 
 export interface LedgerWeekInput {
   /** A window from at least weekStartDay − 7 to weekStartDay + 6. */
@@ -88,25 +83,16 @@ export function ledgerPreviewContext(
   const before = win.states.slice(0, end);
   const last = before[before.length - 1];
   const rp = resolveProfile(input.profile, input.settings);
-  const lookBack = recoveryLookBackDays(input.settings);
   const logFor = alignLogs(input.sessions, input.logs);
-  const priorSessions = effectiveSessions(
+  const priorSessions = priorRecoverySessions(
     input.sessions,
     logFor,
     rp,
     "projected",
     input.todayDay,
-    ws - lookBack,
-    ws - 1,
-  )
-    .filter((s) => s.highIntensity)
-    .map((s) => ({
-      id: s.id,
-      date: s.date,
-      startTime: s.startTime,
-      contactsByIntensity: s.contactsByIntensity,
-      highIntensity: true,
-    }));
+    ws,
+    input.settings,
+  );
   return {
     historyDates,
     historyValues,

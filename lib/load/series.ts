@@ -1,5 +1,6 @@
 import { ACC_SIZE, addAccToColumns, evaluateSessionInto, resolveProfile, type ResolvedProfile } from "./accumulate";
 import { alignLogs, type AlignedLogs } from "./align-logs";
+import type { FlagSession } from "./flags";
 import { dateFromDayIndex, dayIndex, weekStartOfDay } from "@/lib/dates/plain-date";
 import { addPackedToColumns, PACKED_ACC_SIZE, PACKED_STATUS, sumPackedSession, type PackedSessions } from "./packed";
 import { toSessionMetrics, type SessionMetrics } from "./session-metrics";
@@ -311,4 +312,34 @@ export function weeklyTotals(
   const weekStarts: string[] = [];
   for (let w = 0; w < weeks; w++) weekStarts.push(dateFromDayIndex(first - lead + w * 7));
   return { weekStarts, totals, days };
+}
+
+/** Days before the week whose sessions the recovery rule looks at (lib/load/README.md §8). */
+export function recoveryLookBackDays(settings: Pick<TeamLoadSettings, "recoveryHours">): number {
+  return Math.ceil(settings.recoveryHours / 24) + 1;
+}
+
+/**
+ * The high-intensity sessions in the recovery look-back before a week, shaped for computeFlags: the
+ * short-recovery flag of the week's first day needs them.
+ */
+export function priorRecoverySessions(
+  sessions: readonly SessionInput[],
+  logFor: AlignedLogs,
+  rp: ResolvedProfile,
+  view: LoadView,
+  todayDay: number,
+  weekStartDay: number,
+  settings: Pick<TeamLoadSettings, "recoveryHours">,
+): FlagSession[] {
+  const lookBack = recoveryLookBackDays(settings);
+  return effectiveSessions(sessions, logFor, rp, view, todayDay, weekStartDay - lookBack, weekStartDay - 1)
+    .filter((s) => s.highIntensity)
+    .map((s) => ({
+      id: s.id,
+      date: s.date,
+      startTime: s.startTime,
+      contactsByIntensity: s.contactsByIntensity,
+      highIntensity: true,
+    }));
 }

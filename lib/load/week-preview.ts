@@ -4,7 +4,7 @@ import { resolveProfile } from "./accumulate";
 import { dateFromDayIndex, dayIndex } from "@/lib/dates/plain-date";
 import { computeFlags, type Flag, type FlagSession } from "./flags";
 import { ledgerMethod, runLedger, type LedgerMethod, type LedgerState } from "./ledger";
-import { alignLogs, buildDailyColumns, effectiveSessions, sessionUse } from "./series";
+import { alignLogs, buildDailyColumns, effectiveSessions, priorRecoverySessions, sessionUse } from "./series";
 import {
   METRICS,
   type AthleteProfile,
@@ -238,17 +238,8 @@ export function buildWeekPreviewContext(input: WeekPreviewContextInput): WeekPre
   for (const m of METRICS) historyValues[m] = Array.from(cols.values[m].subarray(from));
   // History only: the week's own first day on record comes from the sessions being previewed.
   const firstDataDay = cols.firstDataIndex !== null ? cols.startDay + cols.firstDataIndex : null;
-  const lookBack = Math.ceil(input.settings.recoveryHours / 24) + 1;
   const rp = resolveProfile(input.profile, input.settings);
-  const priorSessions = effectiveSessions(input.sessions, logFor, rp, view, req.todayDay, ws - lookBack, ws - 1)
-    .filter((s) => s.highIntensity)
-    .map((s) => ({
-      id: s.id,
-      date: s.date,
-      startTime: s.startTime,
-      contactsByIntensity: s.contactsByIntensity,
-      highIntensity: true,
-    }));
+  const priorSessions = priorRecoverySessions(input.sessions, logFor, rp, view, req.todayDay, ws, input.settings);
   return {
     historyDates,
     historyValues,
