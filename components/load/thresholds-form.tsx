@@ -4,7 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState, type ReactNode } from "react";
 import { useForm, useWatch, type FieldPath } from "react-hook-form";
 import { mutate } from "swr";
-import { Button } from "@/components/ui/button";
+import { FormSaveRow, type SaveMessage } from "@/components/ui/form-save-row";
 import { Field, Input, Select } from "@/components/ui/field";
 import { loadApi } from "@/lib/client/api";
 import { applyServerErrors } from "@/lib/client/form-errors";
@@ -145,7 +145,7 @@ function Section({ title, lead, children }: { title: string; lead: string; child
 }
 
 export function ThresholdsForm({ teamId, initial }: { teamId: number; initial: TeamLoadSettings }) {
-  const [message, setMessage] = useState<{ tone: "ok" | "error"; text: string }>();
+  const [message, setMessage] = useState<SaveMessage>();
   const { register, handleSubmit, setError, reset, formState, control } = useForm<
     TeamSettingsFormValues,
     unknown,
@@ -272,16 +272,13 @@ export function ThresholdsForm({ teamId, initial }: { teamId: number; initial: T
           </Select>
         </Field>
       </Section>
-      <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" disabled={isSubmitting || !isDirty} data-testid="save-thresholds">
-          {isSubmitting ? "Saving…" : "Save thresholds"}
-        </Button>
-        {message ? (
-          <p role="status" className={message.tone === "ok" ? "text-sm text-flag-steady" : "text-sm text-flag-spike"}>
-            {message.text}
-          </p>
-        ) : null}
-      </div>
+      <FormSaveRow
+        label="Save thresholds"
+        saving={isSubmitting}
+        dirty={isDirty}
+        message={message}
+        testId="save-thresholds"
+      />
     </form>
   );
 }

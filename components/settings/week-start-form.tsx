@@ -5,7 +5,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { mutate } from "swr";
-import { Button } from "@/components/ui/button";
+import { FormSaveRow, type SaveMessage } from "@/components/ui/form-save-row";
 import { Field, Select } from "@/components/ui/field";
 import { loadApi } from "@/lib/client/api";
 import { applyServerErrors } from "@/lib/client/form-errors";
@@ -13,7 +13,7 @@ import { WEEK_START_CHOICES, teamWeekSchema, type TeamWeekInput } from "@/lib/va
 
 export function WeekStartForm({ teamId, initial }: { teamId: number; initial: TeamWeekInput }) {
   const router = useRouter();
-  const [message, setMessage] = useState<{ tone: "ok" | "error"; text: string }>();
+  const [message, setMessage] = useState<SaveMessage>();
   const { register, handleSubmit, setError, reset, formState } = useForm<TeamWeekInput>({
     resolver: zodResolver(teamWeekSchema),
     defaultValues: initial,
@@ -56,16 +56,13 @@ export function WeekStartForm({ teamId, initial }: { teamId: number; initial: Te
           ))}
         </Select>
       </Field>
-      <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" disabled={isSubmitting || !isDirty} data-testid="save-week-start">
-          {isSubmitting ? "Saving…" : "Save week start"}
-        </Button>
-        {message ? (
-          <p role="status" className={message.tone === "ok" ? "text-sm text-flag-steady" : "text-sm text-flag-spike"}>
-            {message.text}
-          </p>
-        ) : null}
-      </div>
+      <FormSaveRow
+        label="Save week start"
+        saving={isSubmitting}
+        dirty={isDirty}
+        message={message}
+        testId="save-week-start"
+      />
     </form>
   );
 }
