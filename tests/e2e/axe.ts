@@ -1,0 +1,27 @@
+import { readFileSync } from "node:fs";
+import { createRequire } from "node:module";
+import type { Page } from "playwright-core";
+
+// axe-core is the general-purpose accessibility rule engine (WCAG 2.x A/AA rules); one copy of its source is
+// evaluated into each page through the DevTools protocol, which the app's script CSP does not govern.
+const AXE_SOURCE = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
+
+export type AxeFinding = { id: string; impact: string; help: string; nodes: string[] };
+
+/** Runs axe on the page as it stands and returns the serious and critical violations, one line per rule. */
+export async function seriousAxeViolations(page: Page, options: { exclude?: string[] } = {}): Promise<AxeFinding[]> {
+  await page.evaluate(AXE_SOURCE);
+  const found = await page.evaluate(async (exclude: string[]) => {
+    const axe = (window as unknown as { axe: { run: (ctx: unknown, opts: unknown) => Promise<AxeRun> } }).axe;
+    type AxeRun = { violations: { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }[] };
+    const context = exclude.length ? { exclude: exclude.map((s) => [s]) } : document;
+    const run = await axe.run(context, { runOnly: { type: "tag", values: ["wcag2a", "wcag2aa", "wcag21aa"] } });
+    return run.violations.map((v) => ({
+      id: v.id,
+      impact: v.impact ?? "minor",
+      help: v.help,
+      nodes: v.nodes.slice(0, 5).map((n) => n.target.join(" ")),
+    }));
+  }, options.exclude ?? []);
+  return found.filter((f) => f.impact === "serious" || f.impact === "critical");
+}
