@@ -47,7 +47,7 @@ describe("import layering", () => {
     expect(offending("lib/data", (s) => under(s, "@/lib/notices") || under(s, "@/lib/services"))).toEqual([]);
   });
 
-  it("lib/load imports nothing server-side (no database, models, mail, env, Node built-ins or React)", () => {
+  it("lib/load and lib/speed import nothing server-side (no database, models, mail, env, Node built-ins or React)", () => {
     const server = [
       "@/models",
       "@/lib/data",
@@ -62,6 +62,7 @@ describe("import layering", () => {
     const bad = (s: string) =>
       server.some((f) => under(s, f)) || packages.some((p) => under(s, p)) || s.startsWith("node:");
     expect(offending("lib/load", bad)).toEqual([]);
+    expect(offending("lib/speed", bad)).toEqual([]);
   });
 
   it("lib/domain (the value sets models, validations and screens share) imports nothing but itself", () => {
