@@ -1,7 +1,11 @@
 import type { Config } from "tailwindcss";
 
 // Sprintwright's own identity: warm paper, deep ink, a clay accent taken from a track surface,
-// and a lane-line teal. Flag colours are separate tokens so they never collide with the brand.
+// and a lane-line teal. One colour, one meaning (DEVELOPERS.md, "Colour tokens"): clay is the brand and the
+// primary action, lane teal is "you can act here" (links, focus, drop target), kind-* name block kinds (always
+// with their code, components/ui/kind-mark.tsx), flag-* name load flags (always with their shape and label,
+// components/ui/flag-mark.tsx), state-* name a session's state. Text shades from ink-400 up are at least 4.5:1
+// on every paper background (tests/unit/ui/colour-tokens.test.ts).
 const config = {
   content: ["./app/**/*.{ts,tsx}", "./components/**/*.{ts,tsx}", "./lib/**/*.{ts,tsx}"],
   theme: {
@@ -13,7 +17,7 @@ const config = {
           100: "#e3e8ef",
           200: "#c5cfdc",
           300: "#9aa9bd",
-          400: "#6b7f99",
+          400: "#59697f",
           500: "#4d607a",
           600: "#3a4a61",
           700: "#2b384b",
@@ -45,18 +49,39 @@ const config = {
           800: "#184642",
           900: "#143a37",
         },
+        // Load flags (lib/load/flag-display.ts maps each flag kind to one of these and to a shape).
         flag: {
           spike: "#b4232f",
           "spike-soft": "#fbe6e7",
-          climb: "#b86a09",
+          climb: "#8f5200",
           "climb-soft": "#fdf0db",
           under: "#2f6f9f",
           "under-soft": "#e3eff8",
-          steady: "#3c7a4a",
+          jump: "#b0430c",
+          "jump-soft": "#fcebe0",
+          monotony: "#5f6b21",
+          "monotony-soft": "#eff2dc",
+          contacts: "#a1246a",
+          "contacts-soft": "#f9e4ef",
+          recovery: "#4f46a5",
+          "recovery-soft": "#ebe9f8",
+          steady: "#2f6b3d",
           "steady-soft": "#e4f2e7",
           note: "#6b5ca5",
           "note-soft": "#eeebf8",
         },
+        // Block kinds (components/ui/kind-mark.tsx: the fill behind the kind's code, white text on it).
+        kind: {
+          acceleration: { DEFAULT: "#1f6b3a", soft: "#e3f1e7" },
+          "max-velocity": { DEFAULT: "#1e4f8f", soft: "#e2ebf7" },
+          "speed-endurance": { DEFAULT: "#6a2c8a", soft: "#f1e6f6" },
+          plyometric: { DEFAULT: "#8a4b0f", soft: "#f6ebdd" },
+          tempo: { DEFAULT: "#0e6577", soft: "#ddf0f3" },
+          strength: { DEFAULT: "#3f3a36", soft: "#ebe8e5" },
+          recovery: { DEFAULT: "#6b6256", soft: "#efece7" },
+        },
+        // A session's state: published is a filled ink dot, draft a hollow ring (plus the word, never colour alone).
+        state: { published: "#2b384b", draft: "#59697f" },
       },
       fontFamily: {
         sans: ["Inter", "ui-sans-serif", "system-ui", "sans-serif"],

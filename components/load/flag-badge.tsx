@@ -1,10 +1,11 @@
 import { clsx } from "clsx";
 import Link from "next/link";
+import { FlagShapeIcon } from "@/components/ui/flag-mark";
 import { FLAG_TOPIC, figuresHref } from "@/lib/load/figures-link";
 import { FLAG_DISPLAY, flagClasses } from "@/lib/load/flag-display";
 import type { Flag, FlagKind } from "@/lib/load/flags";
 
-/** One flag kind as a small pill; the title carries the one-line hint. */
+/** One flag kind as a small pill with its shape and label; the title carries the one-line hint. */
 export function FlagBadge({
   kind,
   count,
@@ -28,7 +29,7 @@ export function FlagBadge({
         className,
       )}
     >
-      <span className={clsx("h-1.5 w-1.5 rounded-full", flagClasses(kind).dot)} aria-hidden />
+      <FlagShapeIcon kind={kind} />
       {d.label}
       {count && count > 1 ? <span className="opacity-70">×{count}</span> : null}
       {provisional ? <span className="opacity-70">(early)</span> : null}

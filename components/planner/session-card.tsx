@@ -11,7 +11,7 @@ import { toBlockInput } from "@/lib/plan/blocks";
 import type { PlanSession } from "@/lib/plan/types";
 import { CardMenu } from "./card-menu";
 import { dragId, type DragData } from "./dnd";
-import { KIND_STYLE } from "./kind-style";
+import { KIND_STYLE } from "@/components/ui/kind-style";
 
 const STATUS_WORD = { draft: "Draft", published: "Published", cancelled: "Cancelled" } as const;
 
@@ -25,9 +25,9 @@ export function sessionLabel(s: PlanSession, athleteName: string): string {
 export function StatusMark({ status }: { status: PlanSession["status"] }) {
   return (
     <span className="inline-flex items-center" title={STATUS_WORD[status]}>
-      {status === "published" ? <span aria-hidden className="h-1.5 w-1.5 rounded-full bg-lane-600" /> : null}
+      {status === "published" ? <span aria-hidden className="h-1.5 w-1.5 rounded-full bg-state-published" /> : null}
       {status === "draft" ? (
-        <span aria-hidden className="h-1.5 w-1.5 rounded-full ring-1 ring-ink-400 ring-inset" />
+        <span aria-hidden className="h-1.5 w-1.5 rounded-full ring-1 ring-state-draft ring-inset" />
       ) : null}
       {status === "cancelled" ? (
         <span aria-hidden className="text-2xs font-semibold text-flag-spike">

@@ -7,7 +7,7 @@ import { BLOCK_KIND_LABEL, blockSummary } from "@/lib/format/block-summary";
 import { toBlockInput } from "@/lib/plan/blocks";
 import type { PlanTemplate } from "@/lib/plan/types";
 import { dragId, type DragData } from "./dnd";
-import { KIND_STYLE } from "./kind-style";
+import { KIND_STYLE } from "@/components/ui/kind-style";
 
 export function templateLabel(t: PlanTemplate) {
   return `template ${t.title}, ${BLOCK_KIND_LABEL[t.kind]}`;

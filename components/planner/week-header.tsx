@@ -164,10 +164,10 @@ export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onToo
         )}
         <p className="flex items-center gap-3 text-2xs text-ink-500">
           <span className="inline-flex items-center gap-1">
-            <span aria-hidden className="h-1.5 w-1.5 rounded-full bg-lane-600" /> published
+            <span aria-hidden className="h-1.5 w-1.5 rounded-full bg-state-published" /> published
           </span>
           <span className="inline-flex items-center gap-1">
-            <span aria-hidden className="h-1.5 w-1.5 rounded-full ring-1 ring-ink-400 ring-inset" /> draft
+            <span aria-hidden className="h-1.5 w-1.5 rounded-full ring-1 ring-state-draft ring-inset" /> draft
           </span>
           {week ? <span>Days in {week.timeZone.replace(/_/g, " ")} time</span> : null}
         </p>

@@ -3,7 +3,7 @@ import type { ButtonHTMLAttributes } from "react";
 
 const VARIANTS = {
   primary: "bg-ink-900 text-paper hover:bg-ink-800 disabled:bg-ink-400",
-  accent: "bg-clay-500 text-white hover:bg-clay-600 disabled:bg-clay-300",
+  accent: "bg-clay-600 text-white hover:bg-clay-700 disabled:bg-clay-300",
   secondary: "bg-paper-raised text-ink-800 ring-1 ring-inset ring-ink-200 hover:bg-ink-50 disabled:text-ink-300",
   ghost: "text-ink-700 hover:bg-ink-100 disabled:text-ink-300",
   danger: "bg-paper-raised text-flag-spike ring-1 ring-inset ring-flag-spike/30 hover:bg-flag-spike-soft",

@@ -207,7 +207,7 @@ describe("ordering, levels and display", () => {
     expect(FLAG_DISPLAY.plyo_volume.label).toBe("Contact overload");
     expect(FLAG_DISPLAY.recovery.label).toBe("Short recovery");
     for (const kind of Object.keys(FLAG_DISPLAY) as (keyof typeof FLAG_DISPLAY)[]) {
-      expect(flagClasses(kind).badge).toMatch(/^bg-\w+-50 text-\w+-800 border-\w+-200$/);
+      expect(flagClasses(kind).badge).toMatch(/^bg-flag-(\w+)-soft text-flag-\1 border-flag-\1\/30$/);
     }
     expect(LOAD_CAUTION).toMatch(/not diagnoses/);
     expect(LOAD_CAUTION).toMatch(/medical staff/);
