@@ -10,16 +10,19 @@ import { AuthSession } from "./auth-session";
 import { BlockTemplate } from "./block-template";
 import { CalendarFeedRender } from "./calendar-feed-render";
 import { CalendarToken } from "./calendar-token";
+import { CheckIn } from "./check-in";
 import { Invitation } from "./invitation";
 import { LoadLedgerDay } from "./load-ledger-day";
 import { Membership } from "./membership";
 import { NotificationSetting } from "./notification-setting";
 import { OutboxMessage } from "./outbox-message";
+import { PainReport } from "./pain-report";
 import { PlannedSession } from "./planned-session";
 import { Restriction } from "./restriction";
 import { RestrictionOverride } from "./restriction-override";
 import { SessionBlock } from "./session-block";
 import { SessionLog } from "./session-log";
+import { SessionLogChange } from "./session-log-change";
 import { Team } from "./team";
 import { TeamLoadSettings } from "./team-load-settings";
 import { TrainingGroup } from "./training-group";
@@ -27,6 +30,7 @@ import { User } from "./user";
 
 export { Alert, CalendarToken, NotificationSetting, OutboxMessage, Restriction, RestrictionOverride };
 export { AuthSession, CalendarFeedRender, LoadLedgerDay };
+export { CheckIn, PainReport, SessionLogChange };
 export {
   Athlete,
   BlockTemplate,
@@ -62,6 +66,10 @@ const models = {
   TeamLoadSettings,
   TrainingGroup,
   User,
+  // Athlete reports (migration 013).
+  CheckIn,
+  PainReport,
+  SessionLogChange,
 };
 export type Models = typeof models;
 export type Db = Models & { sequelize: Sequelize };
@@ -143,6 +151,14 @@ function associate() {
 
   // Load ledger (migration 011).
   Athlete.hasMany(LoadLedgerDay, { foreignKey: "athleteId", as: "ledger", ...cascade });
+
+  // Athlete reports (migration 013): the session link of reports and history is kept as a plain column.
+  Athlete.hasMany(PainReport, { foreignKey: "athleteId", as: "painReports", ...cascade });
+  Team.hasMany(PainReport, { foreignKey: "teamId", as: "painReports", ...cascade });
+  Athlete.hasMany(CheckIn, { foreignKey: "athleteId", as: "checkIns", ...cascade });
+  Team.hasMany(CheckIn, { foreignKey: "teamId", as: "checkIns", ...cascade });
+  Athlete.hasMany(SessionLogChange, { foreignKey: "athleteId", as: "logChanges", ...cascade });
+  Team.hasMany(SessionLogChange, { foreignKey: "teamId", as: "logChanges", ...cascade });
 
   // Sign-in sessions (migration 006).
   User.hasMany(AuthSession, { foreignKey: "userId", as: "sessions", ...cascade });

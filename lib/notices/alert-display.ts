@@ -11,6 +11,7 @@ export const ALERT_KIND_LABEL: Record<AlertKind, string> = {
   plyo_volume: FLAG_DISPLAY.plyo_volume.label,
   recovery: FLAG_DISPLAY.recovery.label,
   restriction_override: "Restriction overridden",
+  pain: "Pain reported",
 };
 
 export const ALERT_KIND_HINT: Record<AlertKind, string> = {
@@ -19,6 +20,7 @@ export const ALERT_KIND_HINT: Record<AlertKind, string> = {
   plyo_volume: FLAG_DISPLAY.plyo_volume.hint,
   recovery: FLAG_DISPLAY.recovery.hint,
   restriction_override: "A session was planned against a restriction the medical staff set.",
+  pain: "The athlete reported pain or discomfort above the team's line with a session log.",
 };
 
 /** Where each alert kind is explained ("How figures are worked out"); overrides are not a load figure. */
@@ -28,6 +30,7 @@ export const ALERT_KIND_TOPIC: Record<AlertKind, FiguresTopic | null> = {
   plyo_volume: "contacts",
   recovery: "recovery",
   restriction_override: null,
+  pain: null,
 };
 
 function isMetric(value: string | null): value is Metric {
@@ -61,6 +64,8 @@ export function alertMeasure(alert: AlertFacts): {
       return { metricLabel: "Time between high-intensity sessions", unit: "h", direction: "below" };
     case "restriction_override":
       return { metricLabel: "Overrides that week", unit: null, direction: "count" };
+    case "pain":
+      return { metricLabel: "Pain (0–10)", unit: null, direction: "above" };
   }
 }
 
