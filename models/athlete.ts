@@ -4,6 +4,8 @@ import {
   type Association,
   type CreationOptional,
   type ForeignKey,
+  type HasManyGetAssociationsMixin,
+  type HasOneGetAssociationMixin,
   type InferAttributes,
   type InferCreationAttributes,
   type NonAttribute,
@@ -13,6 +15,14 @@ import type { PlyoLevel, Sex } from "@/lib/domain/athletes";
 import type { Team } from "./team";
 import type { TrainingGroup } from "./training-group";
 import type { User } from "./user";
+import type { PlannedSession } from "./planned-session";
+import type { SessionLog } from "./session-log";
+import type { Alert } from "./alert";
+import type { CalendarToken } from "./calendar-token";
+import type { Restriction } from "./restriction";
+import type { RestrictionOverride } from "./restriction-override";
+import type { CalendarFeedRender } from "./calendar-feed-render";
+import type { LoadLedgerDay } from "./load-ledger-day";
 
 export class Athlete extends Model<InferAttributes<Athlete>, InferCreationAttributes<Athlete>> {
   declare id: CreationOptional<number>;
@@ -39,10 +49,34 @@ export class Athlete extends Model<InferAttributes<Athlete>, InferCreationAttrib
   declare team?: NonAttribute<Team>;
   declare group?: NonAttribute<TrainingGroup>;
   declare user?: NonAttribute<User>;
+  declare sessions?: NonAttribute<PlannedSession[]>;
+  declare logs?: NonAttribute<SessionLog[]>;
+  declare alerts?: NonAttribute<Alert[]>;
+  declare calendarTokens?: NonAttribute<CalendarToken[]>;
+  declare restrictions?: NonAttribute<Restriction[]>;
+  declare restrictionOverrides?: NonAttribute<RestrictionOverride[]>;
+  declare feedRender?: NonAttribute<CalendarFeedRender | null>;
+  declare ledger?: NonAttribute<LoadLedgerDay[]>;
+  declare getSessions: HasManyGetAssociationsMixin<PlannedSession>;
+  declare getLogs: HasManyGetAssociationsMixin<SessionLog>;
+  declare getAlerts: HasManyGetAssociationsMixin<Alert>;
+  declare getCalendarTokens: HasManyGetAssociationsMixin<CalendarToken>;
+  declare getRestrictions: HasManyGetAssociationsMixin<Restriction>;
+  declare getRestrictionOverrides: HasManyGetAssociationsMixin<RestrictionOverride>;
+  declare getFeedRender: HasOneGetAssociationMixin<CalendarFeedRender>;
+  declare getLedger: HasManyGetAssociationsMixin<LoadLedgerDay>;
   declare static associations: {
     team: Association<Athlete, Team>;
     group: Association<Athlete, TrainingGroup>;
     user: Association<Athlete, User>;
+    sessions: Association<Athlete, PlannedSession>;
+    logs: Association<Athlete, SessionLog>;
+    alerts: Association<Athlete, Alert>;
+    calendarTokens: Association<Athlete, CalendarToken>;
+    restrictions: Association<Athlete, Restriction>;
+    restrictionOverrides: Association<Athlete, RestrictionOverride>;
+    feedRender: Association<Athlete, CalendarFeedRender>;
+    ledger: Association<Athlete, LoadLedgerDay>;
   };
 
   static initModel(sequelize: Sequelize) {

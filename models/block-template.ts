@@ -4,6 +4,7 @@ import {
   type Association,
   type CreationOptional,
   type ForeignKey,
+  type HasManyGetAssociationsMixin,
   type InferAttributes,
   type InferCreationAttributes,
   type NonAttribute,
@@ -11,6 +12,7 @@ import {
 } from "sequelize";
 import type { BlockKind, PlyoDrill, RunningPrescription } from "@/lib/load/types";
 import type { Team } from "./team";
+import type { SessionBlock } from "./session-block";
 
 /** A team's reusable block; dropping it on the week grid copies it into a SessionBlock. */
 export class BlockTemplate extends Model<InferAttributes<BlockTemplate>, InferCreationAttributes<BlockTemplate>> {
@@ -31,8 +33,11 @@ export class BlockTemplate extends Model<InferAttributes<BlockTemplate>, InferCr
 
   // Filled only when a query includes the association (models/index.ts wires them).
   declare team?: NonAttribute<Team>;
+  declare copies?: NonAttribute<SessionBlock[]>;
+  declare getCopies: HasManyGetAssociationsMixin<SessionBlock>;
   declare static associations: {
     team: Association<BlockTemplate, Team>;
+    copies: Association<BlockTemplate, SessionBlock>;
   };
 
   static initModel(sequelize: Sequelize) {

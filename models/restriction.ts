@@ -4,6 +4,7 @@ import {
   type Association,
   type CreationOptional,
   type ForeignKey,
+  type HasManyGetAssociationsMixin,
   type InferAttributes,
   type InferCreationAttributes,
   type NonAttribute,
@@ -12,6 +13,7 @@ import {
 import type { RestrictionRuleKind } from "@/lib/restrictions/rules";
 import type { Athlete } from "./athlete";
 import type { Team } from "./team";
+import type { RestrictionOverride } from "./restriction-override";
 
 /** A limit the medical staff put on one athlete's training for a span of days (lib/restrictions/rules.ts). */
 export class Restriction extends Model<InferAttributes<Restriction>, InferCreationAttributes<Restriction>> {
@@ -35,9 +37,12 @@ export class Restriction extends Model<InferAttributes<Restriction>, InferCreati
   // Filled only when a query includes the association (models/index.ts wires them).
   declare athlete?: NonAttribute<Athlete>;
   declare team?: NonAttribute<Team>;
+  declare overrides?: NonAttribute<RestrictionOverride[]>;
+  declare getOverrides: HasManyGetAssociationsMixin<RestrictionOverride>;
   declare static associations: {
     athlete: Association<Restriction, Athlete>;
     team: Association<Restriction, Team>;
+    overrides: Association<Restriction, RestrictionOverride>;
   };
 
   static initModel(sequelize: Sequelize) {

@@ -1,12 +1,29 @@
 import {
   DataTypes,
   Model,
+  type Association,
   type CreationOptional,
+  type HasManyGetAssociationsMixin,
+  type HasOneGetAssociationMixin,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from "sequelize";
 import { DEFAULT_PAIN_ALERT_ABOVE } from "@/lib/domain/wellbeing";
+import type { Membership } from "./membership";
+import type { TrainingGroup } from "./training-group";
+import type { Athlete } from "./athlete";
+import type { Invitation } from "./invitation";
+import type { TeamLoadSettings } from "./team-load-settings";
+import type { BlockTemplate } from "./block-template";
+import type { PlannedSession } from "./planned-session";
+import type { Alert } from "./alert";
+import type { OutboxMessage } from "./outbox-message";
+import type { CalendarToken } from "./calendar-token";
+import type { NotificationSetting } from "./notification-setting";
+import type { Restriction } from "./restriction";
+import type { RestrictionOverride } from "./restriction-override";
 
 export class Team extends Model<InferAttributes<Team>, InferCreationAttributes<Team>> {
   declare id: CreationOptional<number>;
@@ -20,6 +37,49 @@ export class Team extends Model<InferAttributes<Team>, InferCreationAttributes<T
   declare checkInsEnabled: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  // Filled only when a query includes the association (models/index.ts wires them).
+  declare memberships?: NonAttribute<Membership[]>;
+  declare groups?: NonAttribute<TrainingGroup[]>;
+  declare athletes?: NonAttribute<Athlete[]>;
+  declare invitations?: NonAttribute<Invitation[]>;
+  declare loadSettings?: NonAttribute<TeamLoadSettings | null>;
+  declare templates?: NonAttribute<BlockTemplate[]>;
+  declare sessions?: NonAttribute<PlannedSession[]>;
+  declare alerts?: NonAttribute<Alert[]>;
+  declare outbox?: NonAttribute<OutboxMessage[]>;
+  declare calendarTokens?: NonAttribute<CalendarToken[]>;
+  declare notificationSettings?: NonAttribute<NotificationSetting[]>;
+  declare restrictions?: NonAttribute<Restriction[]>;
+  declare restrictionOverrides?: NonAttribute<RestrictionOverride[]>;
+  declare getMemberships: HasManyGetAssociationsMixin<Membership>;
+  declare getGroups: HasManyGetAssociationsMixin<TrainingGroup>;
+  declare getAthletes: HasManyGetAssociationsMixin<Athlete>;
+  declare getInvitations: HasManyGetAssociationsMixin<Invitation>;
+  declare getLoadSettings: HasOneGetAssociationMixin<TeamLoadSettings>;
+  declare getTemplates: HasManyGetAssociationsMixin<BlockTemplate>;
+  declare getSessions: HasManyGetAssociationsMixin<PlannedSession>;
+  declare getAlerts: HasManyGetAssociationsMixin<Alert>;
+  declare getOutbox: HasManyGetAssociationsMixin<OutboxMessage>;
+  declare getCalendarTokens: HasManyGetAssociationsMixin<CalendarToken>;
+  declare getNotificationSettings: HasManyGetAssociationsMixin<NotificationSetting>;
+  declare getRestrictions: HasManyGetAssociationsMixin<Restriction>;
+  declare getRestrictionOverrides: HasManyGetAssociationsMixin<RestrictionOverride>;
+  declare static associations: {
+    memberships: Association<Team, Membership>;
+    groups: Association<Team, TrainingGroup>;
+    athletes: Association<Team, Athlete>;
+    invitations: Association<Team, Invitation>;
+    loadSettings: Association<Team, TeamLoadSettings>;
+    templates: Association<Team, BlockTemplate>;
+    sessions: Association<Team, PlannedSession>;
+    alerts: Association<Team, Alert>;
+    outbox: Association<Team, OutboxMessage>;
+    calendarTokens: Association<Team, CalendarToken>;
+    notificationSettings: Association<Team, NotificationSetting>;
+    restrictions: Association<Team, Restriction>;
+    restrictionOverrides: Association<Team, RestrictionOverride>;
+  };
 
   static initModel(sequelize: Sequelize) {
     Team.init(

@@ -4,12 +4,14 @@ import {
   type Association,
   type CreationOptional,
   type ForeignKey,
+  type HasManyGetAssociationsMixin,
   type InferAttributes,
   type InferCreationAttributes,
   type NonAttribute,
   type Sequelize,
 } from "sequelize";
 import type { Team } from "./team";
+import type { Athlete } from "./athlete";
 
 export class TrainingGroup extends Model<InferAttributes<TrainingGroup>, InferCreationAttributes<TrainingGroup>> {
   declare id: CreationOptional<number>;
@@ -21,8 +23,11 @@ export class TrainingGroup extends Model<InferAttributes<TrainingGroup>, InferCr
 
   // Filled only when a query includes the association (models/index.ts wires them).
   declare team?: NonAttribute<Team>;
+  declare athletes?: NonAttribute<Athlete[]>;
+  declare getAthletes: HasManyGetAssociationsMixin<Athlete>;
   declare static associations: {
     team: Association<TrainingGroup, Team>;
+    athletes: Association<TrainingGroup, Athlete>;
   };
 
   static initModel(sequelize: Sequelize) {

@@ -214,7 +214,7 @@ export async function listOverrides({
 }
 
 function restrictionOf(row: RestrictionOverrideRow): RestrictionRow | null {
-  return (row.get("restriction") as RestrictionRow | undefined) ?? null;
+  return row.restriction ?? null;
 }
 
 /** Records that a coach planned past a restriction; the new row's id. */

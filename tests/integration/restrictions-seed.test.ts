@@ -23,8 +23,8 @@ async function planSnapshot() {
     date: s.date,
     title: s.title,
     status: s.status,
-    blocks: (s.get("blocks") as InstanceType<typeof d.SessionBlock>[])
-      .sort((x, y) => x.position - y.position)
+    blocks: s
+      .blocks!.sort((x, y) => x.position - y.position)
       .map((b) => ({ id: String(b.id), kind: b.kind, title: b.title, running: b.running, drills: b.drills })),
   }));
 }
