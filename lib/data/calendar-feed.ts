@@ -1,5 +1,5 @@
 import "server-only";
-import { Op, col, fn } from "sequelize";
+import { QueryTypes } from "sequelize";
 import { db } from "@/models";
 
 export type FeedSessionsStamp = { count: string; latest: string; versions: string; ids: string };
@@ -18,17 +18,14 @@ export async function feedSessionsStamp({
   athleteId: number;
   from: string;
 }): Promise<FeedSessionsStamp> {
-  const { PlannedSession } = await db();
-  const row = (await PlannedSession.findOne({
-    where: { athleteId, teamId, date: { [Op.gte]: from }, status: { [Op.in]: ["published", "cancelled"] } },
-    attributes: [
-      [fn("COUNT", col("id")), "count"],
-      [fn("MAX", col("updated_at")), "latest"],
-      [fn("SUM", col("version")), "versions"],
-      [fn("SUM", col("id")), "ids"],
-    ],
-    raw: true,
-  })) as unknown as Record<keyof FeedSessionsStamp, unknown> | null;
+  const { sequelize } = await db();
+  // One aggregate row (COUNT always answers one); on PostgreSQL the sums come back as strings, on SQLite as numbers.
+  const row = await sequelize.query<Record<keyof FeedSessionsStamp, unknown>>(
+    `SELECT COUNT(id) AS count, MAX(updated_at) AS latest, SUM(version) AS versions, SUM(id) AS ids
+       FROM planned_sessions
+      WHERE athlete_id = :athleteId AND team_id = :teamId AND date >= :from AND status IN ('published', 'cancelled')`,
+    { type: QueryTypes.SELECT, plain: true, replacements: { athleteId, teamId, from } },
+  );
   const text = (v: unknown) => (v instanceof Date ? v.toISOString() : String(v ?? ""));
   return { count: text(row?.count), latest: text(row?.latest), versions: text(row?.versions), ids: text(row?.ids) };
 }

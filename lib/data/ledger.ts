@@ -1,7 +1,7 @@
 import "server-only";
 import { jsonIds } from "@/lib/db/sql";
 import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
-import type { Database } from "sqlite3";
+import { sqliteConnectionOf } from "@/lib/db/raw";
 import { dateFromDayIndex, dayIndex } from "@/lib/dates/plain-date";
 import { ledgerDayValues, ledgerMethod, recomputeLedger, type LedgerRow, type LedgerState } from "@/lib/load/ledger";
 import { packSessions } from "@/lib/load/packed";
@@ -109,8 +109,7 @@ async function insertRows(
 ): Promise<void> {
   const per = COLUMNS.length;
   const chunk = 400;
-  const raw =
-    sequelize.getDialect() === "sqlite" ? (transaction as unknown as { connection: Database }).connection : null;
+  const raw = sqliteConnectionOf(transaction);
   for (let at = 0; at < rows.length; at += chunk) {
     const part = rows.slice(at, at + chunk);
     const params: unknown[] = [];
