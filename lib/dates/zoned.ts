@@ -9,6 +9,14 @@ export function teamToday({ timeZone, now }: { timeZone: string; now: Date }): s
   return (dt.isValid ? dt : DateTime.fromJSDate(now).toUTC()).toISODate()!;
 }
 
+/** The latest instant at or before `now` whose local time in `timeZone` is `hour`:00 (today's, or yesterday's). */
+export function lastLocalHour({ now, timeZone, hour }: { now: Date; timeZone: string; hour: number }): Date {
+  const local = DateTime.fromJSDate(now).setZone(timeZone);
+  const zoned = local.isValid ? local : DateTime.fromJSDate(now).toUTC();
+  const slot = zoned.startOf("day").set({ hour });
+  return (slot > zoned ? slot.minus({ days: 1 }) : slot).toJSDate();
+}
+
 /** A team's zone and the ISO weekday its week starts on (1 = Monday … 7 = Sunday, as stored). */
 export type TeamClock = { teamId: number; timeZone: string; weekStartDay: number };
 

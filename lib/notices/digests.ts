@@ -1,9 +1,9 @@
 import "server-only";
-import { DateTime } from "luxon";
 import { alertDigestEmail } from "@/emails/alert-digest";
 import { listAlertsCreatedBetween } from "@/lib/data/alerts";
 import { claimDigestWindow, listDigestSubscribers } from "@/lib/data/notification-settings";
 import { enqueueMail } from "@/lib/data/outbox";
+import { lastLocalHour, teamToday } from "@/lib/dates/zoned";
 import { appUrl } from "@/lib/env";
 import { db } from "@/models";
 import { toLoadAlertItem } from "./alert-display";
@@ -13,11 +13,7 @@ export const DIGEST_HOUR = 7;
 
 /** The most recent digest time at or before `now` in the zone (today 07:00, or yesterday's before 07:00). */
 export function lastDigestSlot(now: Date, timeZone: string): Date {
-  const local = DateTime.fromJSDate(now).setZone(timeZone);
-  const zoned = local.isValid ? local : DateTime.fromJSDate(now).toUTC();
-  let slot = zoned.startOf("day").set({ hour: DIGEST_HOUR });
-  if (slot > zoned) slot = slot.minus({ days: 1 });
-  return slot.toJSDate();
+  return lastLocalHour({ now, timeZone, hour: DIGEST_HOUR });
 }
 
 /**
@@ -37,7 +33,7 @@ export async function queueDueDigests({ now }: { now: Date }): Promise<number> {
       const alerts = await listAlertsCreatedBetween({ teamId: s.teamId, after, until: now });
       if (alerts.length === 0) return;
       const base = appUrl();
-      const date = DateTime.fromJSDate(slot).setZone(s.timeZone).toISODate() ?? slot.toISOString().slice(0, 10);
+      const date = teamToday({ timeZone: s.timeZone, now: slot });
       const id = await enqueueMail({
         transaction,
         teamId: s.teamId,
