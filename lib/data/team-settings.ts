@@ -38,13 +38,14 @@ const FIELDS = [
   "monotonyLimit",
 ] as const;
 
-/** The settings columns for a raw query over team_load_settings aliased `s` (lib/data/load.ts). */
-export const SETTINGS_SQL_COLUMNS = `s.id AS settings_id, s.hsr_speed_ms AS hsrSpeedMs,
-  s.near_max_pct AS nearMaxPct, s.acwr_method AS acwrMethod,
-  s.acwr_metric AS acwrMetric, s.spike_ratio AS spikeRatio, s.rising_ratio AS risingRatio, s.low_ratio AS lowRatio,
-  s.weekly_change_limit_pct AS weeklyChangeLimitPct, s.recovery_hours AS recoveryHours, s.speed_zones AS speedZones, s.hsr_pct AS hsrPct,
-  s.sprint_speed_ms AS sprintSpeedMs, s.maximal_pct AS maximalPct, s.recovery_work AS recoveryWork, s.missing_logs AS missingLogs,
-  s.monotony_limit AS monotonyLimit`;
+/**
+ * The settings columns for a raw query over team_load_settings aliased `s` (lib/data/load.ts). The aliases are
+ * quoted: PostgreSQL folds unquoted names to lower case (hsrspeedms), and SQLite accepts the quotes.
+ */
+export const SETTINGS_SQL_COLUMNS = [
+  "s.id AS settings_id",
+  ...FIELDS.map((f) => `s.${f.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`)} AS "${f}"`),
+].join(", ");
 
 export type SettingsRow = {
   [K in (typeof FIELDS)[number]]: K extends "recoveryWork"
