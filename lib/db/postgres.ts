@@ -13,6 +13,14 @@ import { Sequelize, type Transaction, type TransactionOptions } from "sequelize"
  */
 const WRITE_LOCK_SQL = "SELECT pg_advisory_xact_lock(7203115)";
 
+// COUNT and SUM over integers answer int8, which pg hands over as text because it could pass 2^53. Our counts,
+// sums of ids and versions and epoch-millisecond expiries stay far below that, and SQLite answers numbers: parse
+// them the same way on both (a value past 2^53 stays text rather than lose digits).
+pg.types.setTypeParser(pg.types.builtins.INT8, (text: string) => {
+  const n = Number(text);
+  return Number.isSafeInteger(n) ? n : text;
+});
+
 type Begin = (options: TransactionOptions | undefined, fn?: (t: Transaction) => Promise<unknown>) => Promise<unknown>;
 
 function serializeWriters(sequelize: Sequelize): void {
