@@ -58,10 +58,11 @@ export const down: MigrationFn<QueryInterface> = async ({ context: qi }) => {
   // Open invitations become memberships again (the old model), with their athlete profile linked.
   const sequelize = qi.sequelize;
   const open = await sequelize.query<{ team_id: number; user_id: number; role: string; athlete_id: number | null }>(
+    // The latest open invitation per team and account (PostgreSQL refuses bare columns beside a GROUP BY).
     `SELECT team_id, user_id, role, athlete_id FROM invitations
-     WHERE purpose = 'invite' AND used_at IS NULL AND role IS NOT NULL
-       AND NOT EXISTS (SELECT 1 FROM memberships m WHERE m.team_id = invitations.team_id AND m.user_id = invitations.user_id)
-     GROUP BY team_id, user_id`,
+     WHERE id IN (SELECT MAX(id) FROM invitations WHERE purpose = 'invite' AND used_at IS NULL AND role IS NOT NULL
+                  GROUP BY team_id, user_id)
+       AND NOT EXISTS (SELECT 1 FROM memberships m WHERE m.team_id = invitations.team_id AND m.user_id = invitations.user_id)`,
     { type: QueryTypes.SELECT },
   );
   const now = new Date().toISOString().replace("T", " ").replace("Z", " +00:00");
