@@ -1,13 +1,13 @@
 // Any sequence of plan writes, logs, profile and threshold changes through the real data path leaves the ledger
 // equal, day by day, to a rebuild from scratch, with nothing left to take in (lib/load/README.md §12).
 import fc from "fast-check";
-import { QueryTypes } from "sequelize";
 import { describe, expect, it } from "vitest";
 import { addDays } from "@/lib/dates/plain-date";
 import { teamToday } from "@/lib/dates/zoned";
 import { createSessionSchema } from "@/lib/validations/plan";
 import { createTestTeam } from "../helpers/fixtures";
 import { setupTestDb } from "../helpers/db";
+import { ledgerSnapshot } from "../helpers/ledger-snapshot";
 
 const d = await setupTestDb();
 const { ledgerHasMarks } = await import("@/lib/data/ledger");
@@ -22,14 +22,7 @@ const athletes = Object.values(team.users).flatMap((u) => (u.athleteId ? [u.athl
 const coach = team.users.coach!.userId;
 const today = teamToday({ timeZone: "Europe/London", now: new Date() });
 
-async function snapshot(): Promise<string[]> {
-  const rows = await d.sequelize.query<Record<string, unknown>>(
-    `SELECT athlete_id, day, flags, on_record, kept, hex(past) || hex(today) || hex(ahead) || hex(planned) || hex(cum)
-      || hex(acute) || hex(chronic) || hex(ratio) AS v FROM load_ledger ORDER BY athlete_id, day`,
-    { type: QueryTypes.SELECT },
-  );
-  return rows.map((r) => Object.values(r).join("|"));
-}
+const snapshot = () => ledgerSnapshot(d.sequelize);
 
 async function sessionIds(): Promise<{ id: number; version: number; status: string; date: string }[]> {
   return d.PlannedSession.findAll({

@@ -1,10 +1,10 @@
 // The load ledger on a real SQLite file (lib/load/README.md §12): triggers mark every change to sessions, blocks,
 // logs, profiles and team settings; a refresh takes the marks in; the stored rows always equal a full rebuild.
-import { QueryTypes } from "sequelize";
 import { describe, expect, it } from "vitest";
 import { teamToday } from "@/lib/dates/zoned";
 import { seedDemo } from "@/lib/seed";
 import { setupTestDb } from "../helpers/db";
+import { ledgerSnapshot } from "../helpers/ledger-snapshot";
 
 const d = await setupTestDb();
 const { ensureLedgerFresh, ledgerHasMarks, refreshLedger } = await import("@/lib/data/ledger");
@@ -12,15 +12,7 @@ const { rebuildLedger } = await import("@/lib/data/ledger-rebuild");
 const today = teamToday({ timeZone: "Europe/London", now: new Date() });
 await seedDemo(d, { today });
 
-/** Every stored row as hex text, for comparing two ledgers exactly. */
-async function snapshot(): Promise<string[]> {
-  const rows = await d.sequelize.query<Record<string, unknown>>(
-    `SELECT athlete_id, day, flags, on_record, kept, hex(past) || hex(today) || hex(ahead) || hex(planned) || hex(cum) || hex(acute)
-      || hex(chronic) || hex(ratio) AS v FROM load_ledger ORDER BY athlete_id, day`,
-    { type: QueryTypes.SELECT },
-  );
-  return rows.map((r) => Object.values(r).join("|"));
-}
+const snapshot = () => ledgerSnapshot(d.sequelize);
 
 describe("load ledger storage", () => {
   it("the seed's writes are marked and a refresh takes them in; it then equals a rebuild from scratch", async () => {
