@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
-import { setupTestDb } from "../helpers/db";
+import { onPostgres, setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
 import { who } from "../helpers/handler-session";
 
@@ -70,7 +70,8 @@ describe("control characters in text fields", () => {
     expect(Object.keys(bad.body.error?.fields ?? {}).sort()).toEqual(["notes", "title"]);
   });
 
-  it(
+  // SQLite only: PostgreSQL's text type cannot hold a NUL at all, so such old rows cannot exist there.
+  it.skipIf(onPostgres)(
     "copies a week whose stored titles hold a NUL (rows written before the schema refused it): " +
       "values are bound, not inlined",
     async () => {

@@ -10,7 +10,7 @@ import { backupDatabase, inspectDatabase, restoreDatabase } from "@/lib/db/backu
 import { migrationNames } from "@/lib/db/migrator";
 import { all, closeRaw, exec, openRaw } from "@/lib/db/raw";
 import { createTestTeam } from "../helpers/fixtures";
-import { setupTestDb } from "../helpers/db";
+import { onPostgres, setupTestDb } from "../helpers/db";
 
 const d = await setupTestDb();
 const { teamId } = await createTestTeam(d, { name: "Backup Club" });
@@ -59,7 +59,9 @@ const until = async (ok: () => boolean) => {
   while (!ok()) await new Promise((r) => setTimeout(r, 10));
 };
 
-describe("backup and restore", () => {
+// SQLite only: the online backup API, integrity_check and file checks work on the database file; a PostgreSQL
+// service is backed up with its own tools (pg_dump, base backups), see DEVELOPERS.md.
+describe.skipIf(onPostgres)("backup and restore", () => {
   let backup = "";
   let before: string[] = [];
 
