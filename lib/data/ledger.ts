@@ -7,6 +7,7 @@ import { ledgerDayValues, ledgerMethod, recomputeLedger, type LedgerRow, type Le
 import { packSessions } from "@/lib/load/packed";
 import { METRICS } from "@/lib/load/types";
 import { db } from "@/models";
+import { transactionTeam } from "./transaction";
 import { getLoadSeriesInputs } from "./load";
 
 // The load ledger's rows (migration 011, lib/load/README.md §12). Plain SQL with bound values: a row is five
@@ -193,7 +194,8 @@ export async function refreshLedger({
     for (const id of athleteIds) {
       await sequelize.query(
         `INSERT INTO load_ledger_dirty (athlete_id, from_date) VALUES (:id, :from)
-          ON CONFLICT (athlete_id) DO UPDATE SET from_date = min(from_date, excluded.from_date)`,
+          ON CONFLICT (athlete_id) DO UPDATE SET from_date = CASE WHEN excluded.from_date < load_ledger_dirty.from_date
+            THEN excluded.from_date ELSE load_ledger_dirty.from_date END`,
         { replacements: { id, from }, transaction },
       );
     }
@@ -206,7 +208,8 @@ export async function refreshLedger({
       (SELECT max(day) FROM load_ledger WHERE athlete_id = a.id) AS lmax
     FROM load_ledger_dirty m JOIN athletes a ON a.id = m.athlete_id
     WHERE (:team = 0 OR a.team_id = :team)`,
-    { team: teamId ?? 0 },
+    // A transaction confined to one team takes in that team's marks only: another team's writer may hold its own.
+    { team: teamId ?? transactionTeam(transaction) ?? 0 },
   );
   if (marked.length === 0) return 0;
   const byTeam = new Map<number, Bounds[]>();

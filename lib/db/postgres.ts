@@ -5,41 +5,54 @@ import { Sequelize, type Transaction, type TransactionOptions } from "sequelize"
 // and migrations run on it; what differs from SQLite is wired here.
 
 /**
- * Every write transaction of every app process takes this lock first (pg_advisory_xact_lock, released at
+ * Every write transaction of every app process takes an advisory lock first (pg_advisory_xact_lock, released at
  * COMMIT/ROLLBACK). The data layer was written for SQLite, where a transaction is IMMEDIATE and so the only
  * writer: it reads a row, checks its version, then writes. Under PostgreSQL's READ COMMITTED two transactions
- * could both pass that check; one lock across processes keeps the SQLite rule, and so every read-modify-write,
- * the outbox and the ledger updates stay correct with several app servers. Reads never take it.
+ * could both pass that check; the lock keeps the SQLite rule across processes, so every read-modify-write, the
+ * outbox and the ledger updates stay correct with several app servers. Reads never take it.
+ *
+ * A write confined to one team (`teamId` in the options: lib/data/transaction.ts) takes the database-wide key
+ * shared and the team's key exclusive, so writers of different teams run side by side and writers of one team
+ * one at a time; any other write takes the database-wide key exclusive and so waits for all of them. Both take
+ * the database-wide key first, so no two writers can wait on each other. (A one-bigint key and a two-int key
+ * never collide: PostgreSQL keeps the two key spaces apart.)
  */
-const WRITE_LOCK_SQL = "SELECT pg_advisory_xact_lock(7203115)";
+const WRITE_LOCK_KEY = 7203115;
+const DATABASE_LOCK_SQL = `SELECT pg_advisory_xact_lock(${WRITE_LOCK_KEY})`;
+const SHARED_LOCK_SQL = `SELECT pg_advisory_xact_lock_shared(${WRITE_LOCK_KEY})`;
+const TEAM_LOCK_SQL = `SELECT pg_advisory_xact_lock(${WRITE_LOCK_KEY}, :teamId)`;
 
-// COUNT and SUM over integers answer int8, which pg hands over as text because it could pass 2^53. Our counts,
-// sums of ids and versions and epoch-millisecond expiries stay far below that, and SQLite answers numbers: parse
-// them the same way on both (a value past 2^53 stays text rather than lose digits).
-pg.types.setTypeParser(pg.types.builtins.INT8, (text: string) => {
-  const n = Number(text);
-  return Number.isSafeInteger(n) ? n : text;
-});
+declare module "sequelize/types/transaction" {
+  interface TransactionOptions {
+    /** The one team a write transaction changes: on PostgreSQL it locks that team only. */
+    teamId?: number;
+  }
+}
 
 type Begin = (options: TransactionOptions | undefined, fn?: (t: Transaction) => Promise<unknown>) => Promise<unknown>;
 
 function serializeWriters(sequelize: Sequelize): void {
   const begin = sequelize.transaction.bind(sequelize) as unknown as Begin;
-  const lock = (t: Transaction) => sequelize.query(WRITE_LOCK_SQL, { transaction: t });
+  const lock = async (t: Transaction, teamId: number | undefined) => {
+    if (teamId === undefined) return void (await sequelize.query(DATABASE_LOCK_SQL, { transaction: t }));
+    await sequelize.query(SHARED_LOCK_SQL, { transaction: t });
+    await sequelize.query(TEAM_LOCK_SQL, { transaction: t, replacements: { teamId } });
+  };
   const transaction = async (a?: unknown, b?: unknown): Promise<unknown> => {
     const fn = (typeof a === "function" ? a : b) as ((t: Transaction) => Promise<unknown>) | undefined;
     const options = (typeof a === "object" && a !== null ? a : undefined) as TransactionOptions | undefined;
     // A savepoint inside a transaction already holds the lock.
     if (options?.transaction) return begin(options, fn);
-    if (fn) return begin(options, async (t) => (await lock(t), fn(t)));
+    const teamId = options?.teamId;
+    if (fn) return begin(options, async (t) => (await lock(t, teamId), fn(t)));
     const t = (await begin(options)) as Transaction;
-    await lock(t);
+    await lock(t, teamId);
     return t;
   };
   Object.assign(sequelize, { transaction });
 }
 
-/** A Sequelize instance on PostgreSQL with the app's write rule (one writer at a time, across processes). */
+/** A Sequelize instance on PostgreSQL with the app's write rule (one writer per team at a time, across processes). */
 export async function openPostgres(url: string): Promise<Sequelize> {
   const sequelize = new Sequelize(url, {
     dialect: "postgres",

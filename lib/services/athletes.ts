@@ -1,7 +1,7 @@
 import "server-only";
 import { insertAthlete, updateAthleteRow } from "@/lib/data/athletes";
 import { refreshLedger } from "@/lib/data/ledger";
-import { inTransaction } from "@/lib/data/transaction";
+import { inTeamTransaction } from "@/lib/data/transaction";
 import type { AthleteInput } from "@/lib/validations/athlete";
 
 // Profile writes (the values the engine reads: vmax, τ, step length, plyometric level, group). Derived state
@@ -14,7 +14,7 @@ export async function createAthlete({
   teamId: number;
   input: AthleteInput;
 }): Promise<{ id: number }> {
-  return inTransaction((transaction) => insertAthlete({ teamId, input, transaction }));
+  return inTeamTransaction(teamId, (transaction) => insertAthlete({ teamId, input, transaction }));
 }
 
 export async function updateAthlete({
@@ -26,7 +26,7 @@ export async function updateAthlete({
   athleteId: number;
   input: AthleteInput;
 }): Promise<{ id: number }> {
-  return inTransaction(async (transaction) => {
+  return inTeamTransaction(teamId, async (transaction) => {
     const row = await updateAthleteRow({ teamId, athleteId, input, transaction });
     // vmax, τ, step length and plyo level change every day of the athlete's ledger.
     await refreshLedger({ transaction });

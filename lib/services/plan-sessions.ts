@@ -10,7 +10,7 @@ import {
   writeBlock,
 } from "@/lib/data/plan-sessions";
 import { getTemplate } from "@/lib/data/templates";
-import { inTransaction } from "@/lib/data/transaction";
+import { inTeamTransaction } from "@/lib/data/transaction";
 import { AppError } from "@/lib/errors";
 import { blockFromTemplate, sessionFieldsFromTemplate, type BlockContent } from "@/lib/plan/blocks";
 import type { Override, SessionChange } from "@/lib/plan/changes";
@@ -49,7 +49,7 @@ export async function createSessions({
   actorUserId,
   input,
 }: Actor & { input: CreateSessionInput }): Promise<PlanWriteResult> {
-  return inTransaction(async (transaction) => {
+  return inTeamTransaction(teamId, async (transaction) => {
     const created: number[] = [];
     const appended: Loaded[] = [];
     if (input.from === "blank") {
@@ -120,7 +120,7 @@ export async function updateSession({
   sessionId,
   input,
 }: Actor & { sessionId: number; input: UpdateSessionInput }): Promise<PlanWriteResult> {
-  return inTransaction(async (transaction) => {
+  return inTeamTransaction(teamId, async (transaction) => {
     const loaded = await lockSession({ teamId, sessionId, version: input.version, transaction });
     const before = loaded.dto;
     const { version, blocks, status, override, ...fields } = input;
@@ -158,7 +158,7 @@ export async function deleteSession({
   sessionId,
   version,
 }: Actor & { sessionId: number; version: number }): Promise<PlanWriteResult> {
-  return inTransaction(async (transaction) => {
+  return inTeamTransaction(teamId, async (transaction) => {
     const loaded = await lockSession({ teamId, sessionId, version, transaction });
     if (loaded.dto.status === "cancelled") return writeResult([loaded], []);
     if (loaded.dto.status === "draft" && !loaded.dto.logged) {
@@ -182,7 +182,7 @@ export async function addBlock({
   sessionId,
   input,
 }: Actor & { sessionId: number; input: AddBlockInput }): Promise<PlanWriteResult> {
-  return inTransaction(async (transaction) => {
+  return inTeamTransaction(teamId, async (transaction) => {
     const block =
       input.templateId !== undefined
         ? blockFromTemplate(await getTemplate({ teamId, templateId: input.templateId, transaction }))
@@ -211,7 +211,7 @@ export async function changeBlock({
   block: SessionBlockBody | null;
   override?: Override;
 }): Promise<PlanWriteResult> {
-  return inTransaction(async (transaction) => {
+  return inTeamTransaction(teamId, async (transaction) => {
     const loaded = await lockSession({ teamId, sessionId, version, transaction });
     notCancelled(loaded.dto);
     const current = loaded.dto.blocks.find((b) => b.id === blockId);

@@ -3,7 +3,7 @@ import type { Transaction } from "sequelize";
 import { teamWeek } from "@/lib/data/plan";
 import { loadById, loadSessionsBetween, type Loaded } from "@/lib/data/plan-rows";
 import { destroySessions, insertSession, updateSessionRow } from "@/lib/data/plan-sessions";
-import { inTransaction } from "@/lib/data/transaction";
+import { inTeamTransaction } from "@/lib/data/transaction";
 import type { Override } from "@/lib/plan/changes";
 import type { PlanWriteResult } from "@/lib/plan/types";
 import { addDays } from "@/lib/dates/plain-date";
@@ -18,7 +18,7 @@ async function weekTx<T>(
   fn: (t: Transaction, weekStart: string, inWeek: Loaded[]) => Promise<T>,
 ): Promise<T> {
   const { weekStart, weekEnd } = await teamWeek({ teamId, date });
-  return inTransaction(async (t) =>
+  return inTeamTransaction(teamId, async (t) =>
     fn(t, weekStart, await loadSessionsBetween({ teamId, from: weekStart, to: weekEnd, transaction: t })),
   );
 }

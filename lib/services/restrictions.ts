@@ -1,6 +1,6 @@
 import "server-only";
 import { getRestriction, insertRestriction, setRestrictionLifted } from "@/lib/data/restrictions";
-import { inTransaction } from "@/lib/data/transaction";
+import { inTeamTransaction } from "@/lib/data/transaction";
 import type { Restriction } from "@/lib/restrictions/rules";
 import type { CreateRestrictionInput } from "@/lib/validations/restrictions";
 
@@ -14,7 +14,7 @@ export async function createRestriction(args: {
   actorUserId: number;
   input: CreateRestrictionInput;
 }): Promise<Restriction> {
-  return inTransaction((transaction) => insertRestriction({ ...args, transaction }));
+  return inTeamTransaction(args.teamId, (transaction) => insertRestriction({ ...args, transaction }));
 }
 
 /**
@@ -32,7 +32,7 @@ export async function liftRestriction({
   actorUserId: number;
   today: string;
 }): Promise<Restriction> {
-  return inTransaction(async (transaction) => {
+  return inTeamTransaction(teamId, async (transaction) => {
     const restriction = await getRestriction({ teamId, restrictionId, transaction });
     const ended = restriction.endsOn !== null && restriction.endsOn < today;
     if (restriction.liftedOn !== null || ended) return restriction;

@@ -1,7 +1,7 @@
 import "server-only";
 import { refreshLedger } from "@/lib/data/ledger";
 import { destroySessionLog, writeSessionLog, type LogTarget, type SessionLogDto } from "@/lib/data/logs";
-import { inTransaction } from "@/lib/data/transaction";
+import { inTeamTransaction } from "@/lib/data/transaction";
 import { AppError, type FieldErrors } from "@/lib/errors";
 import { afterLogChange } from "@/lib/notices/hooks";
 import type { SessionLogInput } from "@/lib/validations/log";
@@ -53,7 +53,7 @@ export async function saveSessionLog({
       ? { rpe: null, minutes: null, completedReps: null }
       : { rpe: input.rpe, minutes: input.minutes, completedReps: input.completedReps };
   const values = { completion: input.completion, notes: input.notes, ...done };
-  return inTransaction(async (transaction) => {
+  return inTeamTransaction(target.teamId, async (transaction) => {
     const log = await writeSessionLog({ target, values, transaction });
     await refreshLedger({ transaction });
     await afterLogChange({
@@ -75,7 +75,7 @@ export async function deleteSessionLog({
   target: LogTarget;
   actorUserId: number;
 }): Promise<boolean> {
-  return inTransaction(async (transaction) => {
+  return inTeamTransaction(target.teamId, async (transaction) => {
     const removed = await destroySessionLog({ sessionId: target.id, transaction });
     await refreshLedger({ transaction });
     if (removed)

@@ -1,7 +1,7 @@
 import "server-only";
 import { writeTeamLoadSettings } from "@/lib/data/team-settings";
 import { refreshLedger } from "@/lib/data/ledger";
-import { inTransaction } from "@/lib/data/transaction";
+import { inTeamTransaction } from "@/lib/data/transaction";
 import type { TeamLoadSettings } from "@/lib/load/types";
 import type { TeamSettingsPatch } from "@/lib/validations/team-settings";
 
@@ -16,7 +16,7 @@ export async function updateTeamLoadSettings({
   teamId: number;
   input: TeamSettingsPatch;
 }): Promise<TeamLoadSettings> {
-  return inTransaction(async (transaction) => {
+  return inTeamTransaction(teamId, async (transaction) => {
     const settings = await writeTeamLoadSettings({ teamId, input, transaction });
     // Thresholds, speed zones, the ACWR method and the missing-log rule are in every ledger row of the team.
     await refreshLedger({ transaction });
