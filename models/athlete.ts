@@ -23,6 +23,9 @@ import type { Restriction } from "./restriction";
 import type { RestrictionOverride } from "./restriction-override";
 import type { CalendarFeedRender } from "./calendar-feed-render";
 import type { LoadLedgerDay } from "./load-ledger-day";
+import type { PainReport } from "./pain-report";
+import type { CheckIn } from "./check-in";
+import type { SessionLogChange } from "./session-log-change";
 
 export class Athlete extends Model<InferAttributes<Athlete>, InferCreationAttributes<Athlete>> {
   declare id: CreationOptional<number>;
@@ -57,6 +60,9 @@ export class Athlete extends Model<InferAttributes<Athlete>, InferCreationAttrib
   declare restrictionOverrides?: NonAttribute<RestrictionOverride[]>;
   declare feedRender?: NonAttribute<CalendarFeedRender | null>;
   declare ledger?: NonAttribute<LoadLedgerDay[]>;
+  declare painReports?: NonAttribute<PainReport[]>;
+  declare checkIns?: NonAttribute<CheckIn[]>;
+  declare logChanges?: NonAttribute<SessionLogChange[]>;
   declare getSessions: HasManyGetAssociationsMixin<PlannedSession>;
   declare getLogs: HasManyGetAssociationsMixin<SessionLog>;
   declare getAlerts: HasManyGetAssociationsMixin<Alert>;
@@ -65,6 +71,9 @@ export class Athlete extends Model<InferAttributes<Athlete>, InferCreationAttrib
   declare getRestrictionOverrides: HasManyGetAssociationsMixin<RestrictionOverride>;
   declare getFeedRender: HasOneGetAssociationMixin<CalendarFeedRender>;
   declare getLedger: HasManyGetAssociationsMixin<LoadLedgerDay>;
+  declare getPainReports: HasManyGetAssociationsMixin<PainReport>;
+  declare getCheckIns: HasManyGetAssociationsMixin<CheckIn>;
+  declare getLogChanges: HasManyGetAssociationsMixin<SessionLogChange>;
   declare static associations: {
     team: Association<Athlete, Team>;
     group: Association<Athlete, TrainingGroup>;
@@ -77,6 +86,9 @@ export class Athlete extends Model<InferAttributes<Athlete>, InferCreationAttrib
     restrictionOverrides: Association<Athlete, RestrictionOverride>;
     feedRender: Association<Athlete, CalendarFeedRender>;
     ledger: Association<Athlete, LoadLedgerDay>;
+    painReports: Association<Athlete, PainReport>;
+    checkIns: Association<Athlete, CheckIn>;
+    logChanges: Association<Athlete, SessionLogChange>;
   };
 
   static initModel(sequelize: Sequelize) {

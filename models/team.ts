@@ -24,6 +24,9 @@ import type { CalendarToken } from "./calendar-token";
 import type { NotificationSetting } from "./notification-setting";
 import type { Restriction } from "./restriction";
 import type { RestrictionOverride } from "./restriction-override";
+import type { PainReport } from "./pain-report";
+import type { CheckIn } from "./check-in";
+import type { SessionLogChange } from "./session-log-change";
 
 export class Team extends Model<InferAttributes<Team>, InferCreationAttributes<Team>> {
   declare id: CreationOptional<number>;
@@ -52,6 +55,9 @@ export class Team extends Model<InferAttributes<Team>, InferCreationAttributes<T
   declare notificationSettings?: NonAttribute<NotificationSetting[]>;
   declare restrictions?: NonAttribute<Restriction[]>;
   declare restrictionOverrides?: NonAttribute<RestrictionOverride[]>;
+  declare painReports?: NonAttribute<PainReport[]>;
+  declare checkIns?: NonAttribute<CheckIn[]>;
+  declare logChanges?: NonAttribute<SessionLogChange[]>;
   declare getMemberships: HasManyGetAssociationsMixin<Membership>;
   declare getGroups: HasManyGetAssociationsMixin<TrainingGroup>;
   declare getAthletes: HasManyGetAssociationsMixin<Athlete>;
@@ -65,6 +71,9 @@ export class Team extends Model<InferAttributes<Team>, InferCreationAttributes<T
   declare getNotificationSettings: HasManyGetAssociationsMixin<NotificationSetting>;
   declare getRestrictions: HasManyGetAssociationsMixin<Restriction>;
   declare getRestrictionOverrides: HasManyGetAssociationsMixin<RestrictionOverride>;
+  declare getPainReports: HasManyGetAssociationsMixin<PainReport>;
+  declare getCheckIns: HasManyGetAssociationsMixin<CheckIn>;
+  declare getLogChanges: HasManyGetAssociationsMixin<SessionLogChange>;
   declare static associations: {
     memberships: Association<Team, Membership>;
     groups: Association<Team, TrainingGroup>;
@@ -79,6 +88,9 @@ export class Team extends Model<InferAttributes<Team>, InferCreationAttributes<T
     notificationSettings: Association<Team, NotificationSetting>;
     restrictions: Association<Team, Restriction>;
     restrictionOverrides: Association<Team, RestrictionOverride>;
+    painReports: Association<Team, PainReport>;
+    checkIns: Association<Team, CheckIn>;
+    logChanges: Association<Team, SessionLogChange>;
   };
 
   static initModel(sequelize: Sequelize) {
