@@ -9,6 +9,8 @@ export type ErrorCode =
   | "stale"
   /** The change goes past a physio restriction and came without a reason to override it. */
   | "restricted"
+  /** The change goes past a plausibility limit (lib/plan/plausibility.ts) and came without `confirmed: true`. */
+  | "implausible"
   /** The request body is over the size limit (lib/http.ts). */
   | "too_large"
   | "internal";
@@ -21,6 +23,7 @@ const STATUS: Record<ErrorCode, number> = {
   conflict: 409,
   stale: 409,
   restricted: 409,
+  implausible: 422,
   too_large: 413,
   internal: 500,
 };

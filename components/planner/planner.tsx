@@ -9,6 +9,7 @@ import { fetchJson } from "@/lib/client/fetcher";
 import { planKeys } from "@/lib/client/keys";
 import { findSession, type PlanChange } from "@/lib/plan/drop";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
+import { plausibilityLines, type PlausibilityCheck } from "@/lib/plan/plausibility";
 import { typicalProfile } from "@/lib/plan/typical";
 import type { PlanSession, PlanTemplate, PlanWeek } from "@/lib/plan/types";
 import { startOfWeek } from "@/lib/dates/plain-date";
@@ -80,7 +81,17 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
       }),
     [askReason, weekBox],
   );
-  const act = usePlanActions({ swrKey: key, current, askOverride });
+  const confirm = useConfirm();
+  const askSure = useCallback(
+    (checks: PlausibilityCheck[], what: string) =>
+      confirm({
+        title: "Are you sure?",
+        body: `${plausibilityLines(checks)} Save ${what} with these numbers?`,
+        confirmLabel: "Yes, save these numbers",
+      }),
+    [confirm],
+  );
+  const act = usePlanActions({ swrKey: key, current, askOverride, askSure });
   const shown = week && week.weekStart === weekStart ? week : undefined;
   const hydrated = useHydrated();
 
@@ -153,7 +164,6 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
   );
 
   const { armCopy } = dnd;
-  const confirm = useConfirm();
   const actions: CardActions = useMemo(
     () => ({
       open: (s: PlanSession) => setEditing(s.id),
@@ -310,6 +320,7 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
             templates={shown.templates}
             onClose={() => setEditing(null)}
             onSave={act.saveSession}
+            askSure={askSure}
             onDelete={(s, version) => act.deleteSession(s, version)}
           />
           <TemplateEditor

@@ -10,6 +10,7 @@ import { BLOCK_KIND_LABEL, blockDescription, blockSummary } from "@/lib/format/b
 import { formatDayLong } from "@/lib/format/dates";
 import { formatMinutes } from "@/lib/format/duration";
 import { toBlockInput } from "@/lib/plan/blocks";
+import { newPlausibilityChecks, type PlausibilityCheck } from "@/lib/plan/plausibility";
 import type { PlanSession, PlanTemplate } from "@/lib/plan/types";
 import { sessionEditSchema, type SessionEditValues } from "@/lib/validations/plan";
 import { Button } from "@/components/ui/button";
@@ -25,7 +26,9 @@ type Props = {
   canEdit: boolean;
   templates: PlanTemplate[];
   onClose: () => void;
-  onSave: (s: PlanSession, values: SessionEditValues, version: number) => Promise<void>;
+  onSave: (s: PlanSession, values: SessionEditValues, version: number, goAhead?: { confirmed?: true }) => Promise<void>;
+  /** "Are you sure?" with the numbers past a plausibility limit (the planner's dialog). */
+  askSure: (checks: PlausibilityCheck[], what: string) => Promise<boolean>;
   onDelete: (s: PlanSession, version: number) => Promise<void>;
 };
 
@@ -86,7 +89,17 @@ function SessionDetails({ session: s }: { session: PlanSession }) {
   );
 }
 
-function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { session: PlanSession }) {
+/** The limits the edited blocks go past that the saved session did not (the server asks the same). */
+function checksOf(session: PlanSession, blocks: SessionEditValues["blocks"] | undefined): PlausibilityCheck[] {
+  if (!blocks) return [];
+  try {
+    return newPlausibilityChecks({ blocks: session.blocks.map(toBlockInput) }, { blocks: blocks.map(toBlockInput) });
+  } catch {
+    return []; // a half-typed block (a field cleared) has no numbers to check yet
+  }
+}
+
+function EditForm({ session, templates, onClose, onSave, onDelete, askSure }: Props & { session: PlanSession }) {
   const confirm = useConfirm();
   const form = useForm<SessionEditValues>({
     resolver: zodResolver(sessionEditSchema),
@@ -114,8 +127,11 @@ function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { s
   };
   const submit = form.handleSubmit(async (values) => {
     setNotice(null);
+    const checks = checksOf(session, values.blocks);
+    // Asked here, before sending, with the same checks the server runs; the server still asks if we did not.
+    if (checks.length > 0 && !(await askSure(checks, `the changes to "${values.title}"`))) return;
     try {
-      await onSave(session, values, version);
+      await onSave(session, values, version, checks.length > 0 ? { confirmed: true } : {});
       onClose();
     } catch (e) {
       handleError(e);
@@ -243,6 +259,7 @@ function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { s
             </Button>
           </div>
         </section>
+        <PlausibilityNote checks={checksOf(session, watched)} />
         <Field label="Notes for the athlete" htmlFor="s-notes" error={err.notes?.message}>
           <Textarea id="s-notes" rows={2} {...form.register("notes")} />
         </Field>
@@ -281,5 +298,24 @@ function EditForm({ session, templates, onClose, onSave, onDelete }: Props & { s
         />
       </form>
     </FormProvider>
+  );
+}
+
+/** Numbers past a plausibility limit, shown while typing; saving asks "Are you sure?" with them. */
+function PlausibilityNote({ checks }: { checks: PlausibilityCheck[] }) {
+  if (checks.length === 0) return null;
+  return (
+    <div
+      role="status"
+      data-testid="editor-plausibility"
+      className="rounded-md border-2 border-dashed border-flag-climb bg-flag-climb-soft px-3 py-2 text-sm text-ink-900"
+    >
+      <p className="font-semibold">Unusual numbers: saving asks you to confirm them.</p>
+      <ul className="mt-1 list-disc pl-5">
+        {checks.map((c) => (
+          <li key={`${c.field}:${c.limit}`}>{c.block ? `${c.block}: ${c.message}` : c.message}</li>
+        ))}
+      </ul>
+    </div>
   );
 }

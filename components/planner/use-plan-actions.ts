@@ -18,7 +18,8 @@ import {
 import type { SessionEditValues } from "@/lib/validations/plan";
 import type { TemplateInput } from "@/lib/validations/template";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
-import { currentOf, hitsOf, planApi } from "@/lib/client/api";
+import type { PlausibilityCheck } from "@/lib/plan/plausibility";
+import { checksOf, currentOf, hitsOf, planApi } from "@/lib/client/api";
 import { ApiError } from "@/lib/client/fetcher";
 import { planKeys } from "@/lib/client/keys";
 import { describeChange } from "./describe";
@@ -30,9 +31,8 @@ export type Notice = { tone: "saved" | "info" | "refused"; text: string; at: num
 let tempSeq = -1;
 const tempId: TempIds = () => tempSeq--;
 
-function request(week: PlanWeek, change: PlanChange, override?: Override): Promise<PlanWriteResult> {
+function request(week: PlanWeek, change: PlanChange, o: GoAhead): Promise<PlanWriteResult> {
   const version = (id: number) => findSession(week, id)?.version ?? 0;
-  const o = override ? { override } : {};
   switch (change.kind) {
     case "create":
       return planApi.createSession(week.teamId, {
@@ -75,11 +75,17 @@ function request(week: PlanWeek, change: PlanChange, override?: Override): Promi
 }
 
 type Override = { reason: string };
+/** What a write carries after a second look: the reason to go past a restriction, the confirmed numbers. */
+type GoAhead = { override?: Override; confirmed?: true };
 /** Asks the coach for a reason to go past restrictions the server found; null = keep the plan as it was. */
 export type AskOverride = (hits: RestrictionHit[], what: string) => Promise<string | null>;
+/** Asks "Are you sure?" with the numbers past a plausibility limit; false = keep the plan as it was. */
+export type AskSure = (checks: PlausibilityCheck[], what: string) => Promise<boolean>;
 
 /** Thrown when the coach chose not to override: nothing was saved, and nothing more needs saying. */
 class KeptAsItWas extends Error {}
+/** Thrown when the coach was not sure of the numbers: nothing was saved. */
+class NotSure extends Error {}
 
 /** The saved sessions in place, with the server's week numbers where the answer has them. */
 function withServerRows(week: PlanWeek, res: PlanWriteResult, temps: readonly number[]): PlanWeek {
@@ -118,10 +124,12 @@ export function usePlanActions({
   swrKey,
   current,
   askOverride,
+  askSure,
 }: {
   swrKey: string;
   current: () => PlanWeek | undefined;
   askOverride: AskOverride;
+  askSure: AskSure;
 }) {
   const { mutate, cache } = useSWRConfig();
   const [notice, setNoticeState] = useState<Notice | null>(null);
@@ -136,6 +144,8 @@ export function usePlanActions({
     async (e: unknown, what: string) => {
       if (e instanceof KeptAsItWas) {
         say("info", `Not planned: ${what}. The restriction stands.`);
+      } else if (e instanceof NotSure) {
+        say("info", `Not saved: ${what}. Nothing changed; check the numbers.`);
       } else if (e instanceof ApiError && e.stale) {
         await refetch();
         const s = currentOf(e);
@@ -163,19 +173,29 @@ export function usePlanActions({
     }
   }, []);
 
-  /** Runs a write; when the server says it goes past a restriction, asks for a reason and sends it again. */
-  const withOverride = useCallback(
-    async <T>(what: string, fn: (override?: Override) => Promise<T>, override?: Override): Promise<T> => {
-      try {
-        return await fn(override);
-      } catch (e) {
-        if (!(e instanceof ApiError && e.restricted) || override) throw e;
-        const reason = await askOverride(hitsOf(e), what);
-        if (reason === null) throw new KeptAsItWas();
-        return fn({ reason });
+  /**
+   * Runs a write; when the server asks for a second look (numbers past a plausibility limit, a physio
+   * restriction), asks the coach and sends it again with the answer; each question is asked once.
+   */
+  const withGoAhead = useCallback(
+    async <T>(what: string, fn: (goAhead: GoAhead) => Promise<T>, first: GoAhead = {}): Promise<T> => {
+      let goAhead = first;
+      for (;;) {
+        try {
+          return await fn(goAhead);
+        } catch (e) {
+          if (e instanceof ApiError && e.implausible && !goAhead.confirmed) {
+            if (!(await askSure(checksOf(e), what))) throw new NotSure();
+            goAhead = { ...goAhead, confirmed: true };
+          } else if (e instanceof ApiError && e.restricted && !goAhead.override) {
+            const reason = await askOverride(hitsOf(e), what);
+            if (reason === null) throw new KeptAsItWas();
+            goAhead = { ...goAhead, override: { reason } };
+          } else throw e;
+        }
       }
     },
-    [askOverride],
+    [askOverride, askSure],
   );
 
   /** A drop: shown at once, saved, then confirmed. `override` carries the reason the coach gave before the drop. */
@@ -191,7 +211,7 @@ export function usePlanActions({
       const what = describeChange(before, change);
       let temps: number[] = [];
       try {
-        const save = (o?: Override) =>
+        const save = (o: GoAhead) =>
           mutate<PlanWeek, PlanWriteResult>(swrKey, request(before, change, o), {
             optimisticData: (data) => {
               const base = data ?? before;
@@ -206,7 +226,7 @@ export function usePlanActions({
             rollbackOnError: true,
             revalidate: (data) => needsRefetch(data),
           });
-        const result = await track(() => withOverride(what, save, override));
+        const result = await track(() => withGoAhead(what, save, override ? { override } : {}));
         if (!result) return;
         setUndoStack((st) =>
           pushUndo(
@@ -219,7 +239,7 @@ export function usePlanActions({
         await explain(e, what);
       }
     },
-    [cache, current, explain, mutate, say, swrKey, track, withOverride],
+    [cache, current, explain, mutate, say, swrKey, track, withGoAhead],
   );
 
   /**
@@ -241,14 +261,8 @@ export function usePlanActions({
   );
 
   const runOp = useCallback(
-    async (
-      op: UndoOp,
-      versions: Map<number, number>,
-      week: PlanWeek,
-      override?: Override,
-    ): Promise<PlanWriteResult> => {
+    async (op: UndoOp, versions: Map<number, number>, week: PlanWeek, o: GoAhead): Promise<PlanWriteResult> => {
       const v = (id: number) => versions.get(id) ?? findSession(week, id)?.version ?? 0;
-      const o = override ? { override } : {};
       switch (op.op) {
         case "remove":
           return planApi.deleteSession(op.sessionId, v(op.sessionId));
@@ -301,7 +315,7 @@ export function usePlanActions({
     try {
       await track(async () => {
         for (const op of entry.ops) {
-          const res = await withOverride(`the undo of the ${entry.label}`, (o) => runOp(op, versions, week, o));
+          const res = await withGoAhead(`the undo of the ${entry.label}`, (o) => runOp(op, versions, week, o));
           for (const s of res.sessions) versions.set(s.id, s.version);
           await settle(res);
         }
@@ -310,21 +324,23 @@ export function usePlanActions({
     } catch (e) {
       await explain(e, `Undo of the ${entry.label}`);
     }
-  }, [current, explain, runOp, say, settle, track, undoBox, withOverride]);
+  }, [current, explain, runOp, say, settle, track, undoBox, withGoAhead]);
 
   const saveSession = useCallback(
-    async (before: PlanSession, values: SessionEditValues, version: number) => {
+    async (before: PlanSession, values: SessionEditValues, version: number, first: GoAhead = {}) => {
       const body = { version, ...values, notes: values.notes?.trim() ? values.notes : null };
       const res = await track(() =>
-        withOverride(`the changes to "${values.title}"`, (o) =>
-          planApi.updateSession(before.id, o ? { ...body, override: o } : body),
+        withGoAhead(
+          `the changes to "${values.title}"`,
+          (o) => planApi.updateSession(before.id, { ...body, ...o }),
+          first,
         ),
       );
       await settle(res);
       setUndoStack((st) => pushUndo(st, undoForEdit(before)));
       say("saved", `Saved "${values.title}".`);
     },
-    [say, settle, track, withOverride],
+    [say, settle, track, withGoAhead],
   );
 
   const deleteSession = useCallback(
@@ -348,8 +364,8 @@ export function usePlanActions({
       if (!week) return;
       try {
         const res = await track(() =>
-          withOverride("this copy of the week", (o) =>
-            planApi.weekTool(week.teamId, tool, { week: week.weekStart, ...(o ? { override: o } : {}) }),
+          withGoAhead("this copy of the week", (o) =>
+            planApi.weekTool(week.teamId, tool, { week: week.weekStart, ...o }),
           ),
         );
         await refetch();
@@ -369,7 +385,7 @@ export function usePlanActions({
         await explain(e, "The week tool");
       }
     },
-    [current, explain, refetch, say, track, withOverride],
+    [current, explain, refetch, say, track, withGoAhead],
   );
 
   const saveTemplate = useCallback(

@@ -3,6 +3,7 @@ import type { AlertRow } from "@/lib/data/alerts";
 import type { CalendarFeedStatus } from "@/lib/data/calendar-tokens";
 import type { NotificationSettingsView } from "@/lib/data/notification-settings";
 import type { TeamLoadSettings } from "@/lib/load/types";
+import type { PlausibilityCheck } from "@/lib/plan/plausibility";
 import type { PlanSession, PlanTemplate, PlanWriteResult } from "@/lib/plan/types";
 import type { Restriction, RestrictionHit } from "@/lib/restrictions/rules";
 import type { alertActionSchema } from "@/lib/validations/alerts";
@@ -45,6 +46,8 @@ export const planApi = {
 export const currentOf = (e: ApiError) => (e.details.current as PlanSession | undefined) ?? null;
 /** On 409 "restricted": what the change would break. */
 export const hitsOf = (e: ApiError) => (e.details.hits as RestrictionHit[] | undefined) ?? [];
+/** On 422 "implausible": the plausibility limits the change goes past, with the numbers. */
+export const checksOf = (e: ApiError) => (e.details.checks as PlausibilityCheck[] | undefined) ?? [];
 
 export const loadApi = {
   saveSettings: (teamId: number, body: Body<typeof teamSettingsPatchSchema>) =>

@@ -32,6 +32,9 @@ export class ApiError extends Error {
   get restricted() {
     return this.code === "restricted";
   }
+  get implausible() {
+    return this.code === "implausible";
+  }
   get busy() {
     return this.code === "busy";
   }

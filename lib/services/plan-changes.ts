@@ -6,6 +6,7 @@ import { AppError } from "@/lib/errors";
 import { afterPlanChange } from "@/lib/notices/hooks";
 import type { Override, SessionChange } from "@/lib/plan/changes";
 import { toSnapshot } from "@/lib/plan/dto";
+import { newPlausibilityChecks, plausibilityFields, plausibilityQuestion } from "@/lib/plan/plausibility";
 import type { PlanSession, PlanWriteResult, Touched } from "@/lib/plan/types";
 import { guardRestrictions } from "./restriction-guard";
 
@@ -31,7 +32,24 @@ export function change(kind: SessionChange["kind"], before: Loaded | null, after
 }
 
 /**
- * Every plan write ends here, inside its transaction: physio restrictions are checked first (a write that
+ * A change that goes past a plausibility limit it did not already go past is refused (422 "implausible", the
+ * checks with their numbers, each field named with its limit) unless the body said `confirmed: true`.
+ */
+export function guardPlausibility(changes: readonly SessionChange[], confirmed: boolean | undefined) {
+  if (confirmed) return;
+  const checks = changes.flatMap((c) =>
+    newPlausibilityChecks(c.before, c.after).map((check) => ({ ...check, sessionId: c.sessionId })),
+  );
+  if (checks.length === 0) return;
+  throw new AppError("implausible", plausibilityQuestion(checks), {
+    fields: plausibilityFields(checks),
+    details: { checks },
+  });
+}
+
+/**
+ * Every plan write ends here, inside its transaction: plausibility limits first (asked before anything else,
+ * as they are most likely a typo), then physio restrictions are checked first (a write that
  * breaks one without a reason throws and rolls back), then the load ledger is brought up to date, then notices
  * are recorded, so a notice and the ledger's new rows exist exactly when the change commits.
  */
@@ -41,14 +59,18 @@ export async function notify({
   actorUserId,
   changes,
   override,
+  confirmed,
 }: {
   transaction: Transaction;
   teamId: number;
   actorUserId: number;
   changes: SessionChange[];
   override?: Override | null;
+  /** The coach confirmed the numbers past a plausibility limit ("Are you sure?"). */
+  confirmed?: boolean;
 }) {
   if (changes.length === 0) return;
+  guardPlausibility(changes, confirmed);
   await guardRestrictions({ transaction, teamId, actorUserId, changes, override });
   // The load ledger takes the change in before anything reads a figure, and commits with it (README §12).
   await refreshLedger({ transaction });

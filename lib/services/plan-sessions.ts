@@ -54,9 +54,10 @@ export async function createSessions({
     const appended: Loaded[] = [];
     if (input.from === "blank") {
       await assertAthletes({ teamId, athleteIds: [input.athleteId], transaction });
-      const { from, override, ...fields } = input;
+      const { from, override, confirmed, ...fields } = input;
       void from;
       void override;
+      void confirmed;
       created.push(await insertSession({ teamId, session: fields, transaction }));
     } else if (input.from === "copy") {
       const loaded = await lockSession({ teamId, sessionId: input.sessionId, transaction });
@@ -108,7 +109,7 @@ export async function createSessions({
       ...created.map((id) => change("created", null, after.get(id)!)),
       ...appended.map((before) => change("updated", before, after.get(before.dto.id)!)),
     ];
-    await notify({ transaction, teamId, actorUserId, changes, override: input.override });
+    await notify({ transaction, teamId, actorUserId, changes, override: input.override, confirmed: input.confirmed });
     return writeResult(after.values(), changes);
   });
 }
@@ -123,7 +124,7 @@ export async function updateSession({
   return inTeamTransaction(teamId, async (transaction) => {
     const loaded = await lockSession({ teamId, sessionId, version: input.version, transaction });
     const before = loaded.dto;
-    const { version, blocks, status, override, ...fields } = input;
+    const { version, blocks, status, override, confirmed, ...fields } = input;
     void version;
     const reinstate = status === "published" && before.status === "cancelled";
     const publish = status === "published" && before.status === "draft";
@@ -143,7 +144,7 @@ export async function updateSession({
     await updateSessionRow({ sessionId, values: { ...fields, ...statusFields, ...bumped(before) }, transaction });
     const after = (await loadById([sessionId], transaction)).get(sessionId)!;
     const changes = [change(publish ? "published" : "updated", loaded, after)];
-    await notify({ transaction, teamId, actorUserId, changes, override });
+    await notify({ transaction, teamId, actorUserId, changes, override, confirmed });
     return writeResult([after], changes);
   });
 }
@@ -190,7 +191,7 @@ export async function addBlock({
     const before = await appendBlocks(teamId, sessionId, [block], input.version, transaction);
     const after = (await loadById([sessionId], transaction)).get(sessionId)!;
     const changes = [change("updated", before, after)];
-    await notify({ transaction, teamId, actorUserId, changes, override: input.override });
+    await notify({ transaction, teamId, actorUserId, changes, override: input.override, confirmed: input.confirmed });
     return writeResult([after], changes);
   });
 }
@@ -204,12 +205,14 @@ export async function changeBlock({
   version,
   block,
   override,
+  confirmed,
 }: Actor & {
   sessionId: number;
   blockId: number;
   version: number;
   block: SessionBlockBody | null;
   override?: Override;
+  confirmed?: boolean;
 }): Promise<PlanWriteResult> {
   return inTeamTransaction(teamId, async (transaction) => {
     const loaded = await lockSession({ teamId, sessionId, version, transaction });
@@ -220,7 +223,7 @@ export async function changeBlock({
     await updateSessionRow({ sessionId, values: bumped(loaded.dto), transaction });
     const after = (await loadById([sessionId], transaction)).get(sessionId)!;
     const changes = [change("updated", loaded, after)];
-    await notify({ transaction, teamId, actorUserId, changes, override });
+    await notify({ transaction, teamId, actorUserId, changes, override, confirmed });
     return writeResult([after], changes);
   });
 }

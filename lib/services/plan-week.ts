@@ -11,7 +11,7 @@ import { bumped, change, notify } from "./plan-changes";
 
 // The week tools: one transaction over the team week, ending in notify() like every plan write.
 
-type WeekTool = { teamId: number; actorUserId: number; date: string; override?: Override };
+type WeekTool = { teamId: number; actorUserId: number; date: string; override?: Override; confirmed?: boolean };
 
 async function weekTx<T>(
   { teamId, date }: WeekTool,
@@ -48,6 +48,7 @@ export async function copyWeekToNext(tool: WeekTool): Promise<PlanWriteResult> {
       actorUserId,
       changes: created.map((id) => change("created", null, after.get(id)!)),
       override: tool.override,
+      confirmed: tool.confirmed,
     });
     return { sessions: [...after.values()].map((l) => l.dto), removedIds: [] };
   });

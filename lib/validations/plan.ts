@@ -28,7 +28,14 @@ export const overrideSchema = z.object({
     .max(500, "Keep the reason under 500 characters"),
 });
 export type OverrideInput = z.infer<typeof overrideSchema>;
-const overrideField = { override: overrideSchema.optional() };
+/**
+ * What a write may carry after a second look: a reason to go past a restriction, and `confirmed: true` for
+ * numbers past a plausibility limit (lib/plan/plausibility.ts; without it the server answers 422 "implausible").
+ */
+const goAheadFields = {
+  override: overrideSchema.optional(),
+  confirmed: z.literal(true, { error: "confirmed is true or left out" }).optional(),
+};
 
 export const teamParamsSchema = z.object({ teamId: idSchema });
 export const sessionParamsSchema = z.object({ sessionId: idSchema });
@@ -39,7 +46,7 @@ export const templateParamsSchema = z.object({ templateId: idSchema });
 export const weekQuerySchema = z.object({ week: localDateSchema.optional() });
 
 /** Body of the week tools (copy to next, clear, publish). */
-export const weekToolSchema = z.object({ week: localDateSchema, ...overrideField });
+export const weekToolSchema = z.object({ week: localDateSchema, ...goAheadFields });
 
 /** A block inside a session; `templateId` says which shelf template it was copied from (JSON body: a number). */
 const sessionBlockSchema = blockSchema.and(z.object({ templateId: z.number().int().positive().nullable().optional() }));
@@ -61,7 +68,7 @@ export const createSessionSchema = z
         plannedRpe: rpeSchema,
         notes: notesSchema.default(null),
         blocks: z.array(sessionBlockSchema).max(20, "At most 20 blocks"),
-        ...overrideField,
+        ...goAheadFields,
       }),
       /** A template dropped on an athlete's day or on a group's day. */
       z.object({
@@ -70,7 +77,7 @@ export const createSessionSchema = z
         date: localDateSchema,
         athleteId: idSchema.optional(),
         groupId: idSchema.optional(),
-        ...overrideField,
+        ...goAheadFields,
       }),
       /** A copy of an existing session onto another day or athlete (always a new draft). */
       z.object({
@@ -78,7 +85,7 @@ export const createSessionSchema = z
         sessionId: idSchema,
         athleteId: idSchema,
         date: localDateSchema,
-        ...overrideField,
+        ...goAheadFields,
       }),
     ],
     { error: 'Say where the session comes from: "blank", "template" or "copy"' },
@@ -112,7 +119,7 @@ export const updateSessionSchema = sessionEditSchema
     status: z
       .literal("published", { error: "Only published can be set here; delete a session to cancel it" })
       .optional(),
-    ...overrideField,
+    ...goAheadFields,
   })
   .strict();
 export type UpdateSessionInput = z.infer<typeof updateSessionSchema>;
@@ -128,7 +135,7 @@ export const addBlockSchema = z
     version: versionSchema,
     templateId: idSchema.optional(),
     block: sessionBlockSchema.optional(),
-    ...overrideField,
+    ...goAheadFields,
   })
   .strict()
   .superRefine((v, ctx) => {
@@ -139,4 +146,4 @@ export const addBlockSchema = z
 export type AddBlockInput = z.infer<typeof addBlockSchema>;
 
 /** PATCH /api/sessions/[id]/blocks/[blockId] */
-export const updateBlockSchema = z.object({ version: versionSchema, block: sessionBlockSchema, ...overrideField });
+export const updateBlockSchema = z.object({ version: versionSchema, block: sessionBlockSchema, ...goAheadFields });

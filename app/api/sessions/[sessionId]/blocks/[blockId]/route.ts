@@ -10,8 +10,8 @@ type Params = { sessionId: string; blockId: string };
 export const PATCH = route<Params>(async (req, { params }) => {
   const { blockId } = parseParams(await params, blockParamsSchema);
   const ctx = await sessionEditor(params);
-  const { version, block, override } = await parseJson(req, updateBlockSchema);
-  return answer(ctx, await changeBlock({ ...ctx, blockId, version, block, override }));
+  const { version, block, override, confirmed } = await parseJson(req, updateBlockSchema);
+  return answer(ctx, await changeBlock({ ...ctx, blockId, version, block, override, confirmed }));
 });
 
 /** DELETE ?version= */

@@ -13,6 +13,6 @@ const paramsSchema = z.object({ teamId: idSchema, tool: z.enum(["copy-to-next", 
 export const POST = route<{ teamId: string; tool: string }>(async (req, { params }) => {
   const { teamId, tool } = parseParams(await params, paramsSchema);
   const viewer = await requireMember({ teamId, can: "plan:edit" });
-  const { week, override } = await parseJson(req, weekToolSchema);
-  return Response.json(await TOOLS[tool]({ teamId, actorUserId: viewer.userId, date: week, override }));
+  const { week, override, confirmed } = await parseJson(req, weekToolSchema);
+  return Response.json(await TOOLS[tool]({ teamId, actorUserId: viewer.userId, date: week, override, confirmed }));
 });
