@@ -151,7 +151,7 @@ describe("impossible athlete dates", () => {
     bodyMassKg: "",
     tauS: "",
     stepLengthM: "",
-    plyoLevel: "beginner",
+    plyoLevel: "beginner" as const,
   };
   it("refuses a birth date or a test date in the future, and a test before birth, naming the field", async () => {
     const future = `${Number(teamToday({ timeZone: "UTC", now: new Date() }).slice(0, 4)) + 4}-05-01`;
