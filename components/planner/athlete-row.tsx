@@ -4,6 +4,7 @@ import { clsx } from "clsx";
 import { memo } from "react";
 import type { Flag } from "@/lib/load/flags";
 import { formatDayShort } from "@/lib/format/dates";
+import { dayHeading } from "@/lib/dates/plain-date";
 import { sessionHits } from "@/lib/plan/restrictions";
 import type { PlanAthlete } from "@/lib/plan/types";
 import { describeRestriction, type Restriction } from "@/lib/restrictions/rules";
@@ -54,7 +55,8 @@ export const AthleteRow = memo(function AthleteRow({
         scope="row"
         className="sticky left-0 z-10 w-52 min-w-52 bg-paper-raised px-3 py-2 text-left align-top font-normal"
       >
-        <span className="block truncate text-sm font-medium text-ink-900">{athlete.name}</span>
+        {/* Long names wrap between words, never inside one. */}
+        <span className="block text-sm font-medium break-normal text-ink-900">{athlete.name}</span>
         <RestrictionChip restrictions={restrictions} />
         <RowLoadSummary load={athlete.load} preview={preview?.after ?? null} raised={preview?.warnings ?? NO_FLAGS} />
       </th>
@@ -72,7 +74,11 @@ export const AthleteRow = memo(function AthleteRow({
   );
 });
 
-const RestrictionChip = memo(function RestrictionChip({ restrictions }: { restrictions: readonly Restriction[] }) {
+export const RestrictionChip = memo(function RestrictionChip({
+  restrictions,
+}: {
+  restrictions: readonly Restriction[];
+}) {
   if (restrictions.length === 0) return null;
   const limitsText = restrictions.map((r) => `${describeRestriction(r)} (${r.setByName}): ${r.note}`).join("\n");
   return (
@@ -80,8 +86,8 @@ const RestrictionChip = memo(function RestrictionChip({ restrictions }: { restri
       data-testid="row-restriction"
       title={limitsText}
       className={clsx(
-        "mt-0.5 inline-flex max-w-full items-center gap-1 truncate rounded-full border border-flag-climb/30",
-        "bg-flag-climb-soft px-1.5 py-px text-2xs font-medium text-flag-climb",
+        "mt-0.5 inline-flex max-w-full items-center gap-1 rounded-full border border-dashed border-flag-climb",
+        "bg-flag-climb-soft px-1.5 py-px text-2xs font-medium text-ink-900",
       )}
     >
       <span aria-hidden>⚕</span>
@@ -91,8 +97,11 @@ const RestrictionChip = memo(function RestrictionChip({ restrictions }: { restri
   );
 });
 
-/** The row's day cells: memoised apart from the preview, so hovering a row does not re-render its cards. */
-const RowDays = memo(function RowDays({
+/**
+ * The row's day cells: memoised apart from the preview, so hovering a row does not re-render its cards. `stacked`:
+ * the phone's week, one list item per day with its heading.
+ */
+export const RowDays = memo(function RowDays({
   athlete,
   restrictions,
   days,
@@ -101,7 +110,8 @@ const RowDays = memo(function RowDays({
   hoverStore,
   copyArmedId,
   actions,
-}: Props) {
+  stacked = false,
+}: Props & { stacked?: boolean }) {
   const bySession = flagsBySession(athlete.load.flags);
   const restrictedText = (s: PlanAthlete["sessions"][number]) => {
     const hits = sessionHits({ restrictions }, s);
@@ -117,8 +127,10 @@ const RowDays = memo(function RowDays({
           label={`${athlete.name}, ${formatDayShort(date)}`}
           enabled={canEdit}
           today={date === today}
+          as={stacked ? "li" : "td"}
         >
-          <div className="flex min-h-16 flex-col gap-1 p-0.5">
+          {stacked ? <StackedDayHeading date={date} today={date === today} /> : null}
+          <div className={clsx("flex flex-col gap-1 p-0.5", stacked ? "min-h-12" : "min-h-16")}>
             {athlete.sessions
               .filter((s) => s.date === date)
               .map((s) => (
@@ -139,3 +151,13 @@ const RowDays = memo(function RowDays({
     </>
   );
 });
+
+function StackedDayHeading({ date, today }: { date: string; today: boolean }) {
+  const h = dayHeading(date);
+  return (
+    <h3 className={clsx("px-2 pt-1.5 text-xs font-medium", today ? "text-clay-700" : "text-ink-600")}>
+      <span className="tracking-wider uppercase">{h.weekday}</span> <span className="tabular-nums">{h.date}</span>
+      {today ? <span className="ml-1 rounded bg-clay-100 px-1 text-2xs text-clay-700">today</span> : null}
+    </h3>
+  );
+}

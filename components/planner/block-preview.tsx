@@ -65,7 +65,7 @@ export function BlockLoadPreview({ profile, settings }: Props) {
           <div key={label} data-testid={`preview-${label.toLowerCase().replace(/[^a-z]+/g, "-")}`}>
             <dt className="text-2xs tracking-wider text-ink-500 uppercase">{label}</dt>
             <dd className="text-sm font-semibold text-ink-900 tabular-nums">{value}</dd>
-            <dd className="text-2xs leading-4 text-ink-400">{note}</dd>
+            <dd className="text-2xs leading-4 text-ink-500">{note}</dd>
           </div>
         ))}
       </dl>

@@ -35,10 +35,11 @@ export const BlockShelf = memo(function BlockShelf({
   return (
     <aside
       id="block-shelf"
+      tabIndex={-1}
       aria-label="Block shelf"
       data-testid="block-shelf"
       className={clsx(
-        "order-first flex min-w-0 flex-col gap-3 rounded-card bg-paper-raised p-3 shadow-card",
+        "order-first flex min-w-0 flex-col gap-3 rounded-card bg-paper-raised p-3 shadow-card outline-none",
         "ring-1 ring-ink-100 xl:sticky xl:top-4 xl:order-none xl:max-h-[calc(100dvh-2rem)]",
       )}
     >
@@ -92,7 +93,7 @@ export const BlockShelf = memo(function BlockShelf({
         ) : null}
       </ul>
       {canEdit ? (
-        <p className="text-2xs leading-4 text-ink-400">
+        <p className="text-2xs leading-4 text-ink-500">
           Drag a block onto a day. On a group&apos;s row it goes to every athlete in the group.
         </p>
       ) : null}

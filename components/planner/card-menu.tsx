@@ -32,7 +32,7 @@ export function CardMenu({ label, items }: { label: string; items: MenuItem[] })
         aria-controls={id}
         data-testid="card-menu"
         onClick={() => setOpen((o) => !o)}
-        className="grid h-5 w-5 place-items-center rounded text-ink-400 hover:bg-ink-100 hover:text-ink-800"
+        className="grid h-5 w-5 place-items-center rounded text-ink-500 hover:bg-ink-100 hover:text-ink-800"
       >
         <svg viewBox="0 0 16 16" aria-hidden className="h-3.5 w-3.5 fill-current">
           <circle cx="3" cy="8" r="1.4" />

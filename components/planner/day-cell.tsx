@@ -31,6 +31,7 @@ export function DropCell({
   hint,
   children,
   className,
+  as: Tag = "td",
 }: {
   store: HoverStore;
   target: DropTarget;
@@ -40,10 +41,12 @@ export function DropCell({
   hint?: string;
   children?: ReactNode;
   className?: string;
+  /** A table cell in the grid; a list item in the phone's stacked week. */
+  as?: "td" | "li";
 }) {
   const isOver = useIsOver(store, target);
   return (
-    <td
+    <Tag
       data-testid={target.type === "cell" ? "day-cell" : "group-cell"}
       data-athlete-id={target.type === "cell" ? target.athleteId : undefined}
       data-group-id={target.type === "group" ? target.groupId : undefined}
@@ -52,7 +55,8 @@ export function DropCell({
       data-over={isOver || undefined}
       aria-label={label}
       className={clsx(
-        "relative border-l border-ink-100 align-top transition-colors",
+        "relative align-top transition-colors",
+        Tag === "td" ? "border-l border-ink-100" : "rounded-lg bg-paper-raised ring-1 ring-ink-100",
         today && "bg-clay-50/40",
         "group-data-[dragging=true]/grid:bg-ink-50/40",
         isOver && "!bg-lane-50 outline-2 -outline-offset-2 outline-lane-400 outline-dashed",
@@ -70,6 +74,6 @@ export function DropCell({
           {hint}
         </span>
       ) : null}
-    </td>
+    </Tag>
   );
 }

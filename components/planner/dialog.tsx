@@ -52,7 +52,7 @@ export function Dialog({
               type="button"
               onClick={onClose}
               aria-label="Close"
-              className="rounded p-1 text-ink-400 hover:bg-ink-100 hover:text-ink-800"
+              className="rounded p-1 text-ink-500 hover:bg-ink-100 hover:text-ink-800"
             >
               <svg viewBox="0 0 16 16" aria-hidden className="h-4 w-4 stroke-current" strokeWidth="1.8">
                 <path d="M4 4l8 8M12 4l-8 8" />

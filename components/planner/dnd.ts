@@ -17,13 +17,23 @@ export const rowKey = (t: DropTarget) => (t.type === "cell" ? `athlete:${t.athle
 
 export type DragData = { source: DragSource; label: string };
 
-/** The cell element of a target, as the grid renders it (data-testid day-cell / group-cell). */
+/** The cell element of a target, as the grid (or the phone's week) renders it (data-testid day-cell / group-cell). */
 export function cellElement(t: DropTarget): HTMLElement | null {
   const sel =
     t.type === "cell"
       ? `[data-testid="day-cell"][data-athlete-id="${t.athleteId}"]`
       : `[data-testid="group-cell"][data-group-id="${t.groupId}"]`;
   return document.querySelector<HTMLElement>(`${sel}[data-date="${t.date}"]`);
+}
+
+/** Keeps the cell the keyboard aims at on screen (page and the grid's own sideways scroll), then its box. */
+function revealCell(t: DropTarget): DOMRect | null {
+  const el = cellElement(t);
+  if (!el) return null;
+  const r = el.getBoundingClientRect();
+  const off = r.top < 0 || r.bottom > window.innerHeight || r.left < 0 || r.right > window.innerWidth;
+  if (off) el.scrollIntoView({ block: "nearest", inline: "nearest" });
+  return el.getBoundingClientRect();
 }
 
 /** The drop cell at a viewport point, or null (the drag overlay ignores the pointer, so it never hides a cell). */
@@ -39,8 +49,15 @@ export function cellAtPoint(x: number, y: number): DropTarget | null {
 
 const ARROWS = ["ArrowRight", "ArrowLeft", "ArrowDown", "ArrowUp"];
 
-/** Rows (group headers and athletes, as rendered) and days: the grid the keyboard walks over. */
-export type GridLayout = { rows: { key: string; target: (date: string) => DropTarget }[]; days: string[] };
+/**
+ * Rows (group headers and athletes, as rendered) and days: the grid the keyboard walks over. `vertical`: the
+ * days are stacked (the phone's week of one athlete), so up and down change the day.
+ */
+export type GridLayout = {
+  rows: { key: string; target: (date: string) => DropTarget }[];
+  days: string[];
+  vertical?: boolean;
+};
 
 /**
  * Arrow keys move the dragged item one day left/right or one row up/down, landing on the centre of that cell
@@ -55,7 +72,7 @@ export function gridKeyboardCoordinates(
   let last: DropTarget | null = null;
   return (event, { context, currentCoordinates }) => {
     if (!ARROWS.includes(event.code)) return undefined;
-    const { rows, days } = layout();
+    const { rows, days, vertical = false } = layout();
     if (rows.length === 0 || days.length === 0) return undefined;
     event.preventDefault();
     // The first press starts from the card's own day (a session) or lands on the first athlete's first day
@@ -74,13 +91,14 @@ export function gridKeyboardCoordinates(
         rows.findIndex((row) => row.key.startsWith("athlete:")),
       );
       d = 0;
-    } else if (event.code === "ArrowRight") d = Math.min(days.length - 1, d + 1);
-    else if (event.code === "ArrowLeft") d = Math.max(0, d - 1);
+    } else if (event.code === "ArrowRight" || (vertical && event.code === "ArrowDown"))
+      d = Math.min(days.length - 1, d + 1);
+    else if (event.code === "ArrowLeft" || (vertical && event.code === "ArrowUp")) d = Math.max(0, d - 1);
     else if (event.code === "ArrowDown") r = Math.min(rows.length - 1, r + 1);
     else r = Math.max(0, r - 1);
     last = rows[r].target(days[d]);
     aimed.set(last);
-    const rect = cellElement(last)?.getBoundingClientRect();
+    const rect = revealCell(last);
     const size = context.collisionRect;
     if (!rect || !size) return currentCoordinates;
     return { x: rect.left + rect.width / 2 - size.width / 2, y: rect.top + rect.height / 2 - size.height / 2 };

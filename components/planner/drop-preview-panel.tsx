@@ -55,7 +55,7 @@ function PreviewCard({
         )}
       >
         {refusal ? (
-          <p className="text-flag-climb">{refusal}</p>
+          <p className="font-medium text-ink-900">{refusal}</p>
         ) : (
           <>
             <p className="text-ink-800">

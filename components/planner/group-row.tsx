@@ -57,7 +57,7 @@ export const GroupRow = memo(function GroupRow({
             <path d="M2 4l4 4 4-4z" />
           </svg>
           {group.name}
-          <span className="font-normal tracking-normal text-ink-400 normal-case">· {count}</span>
+          <span className="font-normal tracking-normal text-ink-500 normal-case">· {count}</span>
         </button>
       </th>
       {days.map((date) =>

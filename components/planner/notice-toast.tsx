@@ -23,7 +23,7 @@ export function NoticeToast({ notice }: { notice: Notice | null }) {
           className={clsx(
             "pointer-events-auto flex max-w-2xl items-start gap-3 rounded-lg px-4 py-2.5 text-sm shadow-lift ring-1",
             notice.tone === "refused"
-              ? "bg-flag-climb-soft text-flag-climb ring-flag-climb/20"
+              ? "bg-flag-climb-soft text-ink-900 ring-flag-climb/40"
               : notice.tone === "saved"
                 ? "bg-paper-raised text-ink-800 ring-ink-100"
                 : "bg-lane-50 text-lane-800 ring-lane-200",

@@ -20,6 +20,7 @@ import { DropPreviewPanel } from "./drop-preview-panel";
 import { useLatest } from "./latest";
 import { NoticeToast } from "./notice-toast";
 import { OverrideProvider, useOverrideReason } from "./override-dialog";
+import { PhoneWeek } from "./phone-week";
 import { SessionCard, type CardActions } from "./session-card";
 import { SessionEditor } from "./session-editor";
 import { TemplateCard } from "./template-card";
@@ -32,7 +33,34 @@ import { WeekHeader } from "./week-header";
 // Only the page scrolls while dragging (vertically); watching the grid's own scroll box costs frames.
 const AUTO_SCROLL = { threshold: { x: 0, y: 0.12 }, canScroll: (el: Element) => el === document.scrollingElement };
 const noop = () => {};
+// Off screen until focused (the first Tab on the page lands on it), then a plain visible link.
+const SKIP_LINK =
+  "sr-only rounded-md bg-ink-900 px-3 py-1.5 text-sm font-medium text-paper focus:not-sr-only focus:mb-2 focus:inline-block";
 const subscribeNothing = () => noop;
+
+const PHONE_QUERY = "(max-width: 767.98px)";
+const subscribePhone = (cb: () => void) => {
+  const m = window.matchMedia(PHONE_QUERY);
+  m.addEventListener("change", cb);
+  return () => m.removeEventListener("change", cb);
+};
+
+/** Below tablet width (Tailwind's md): the phone's week of one athlete instead of the grid. */
+function usePhone() {
+  return useSyncExternalStore(
+    subscribePhone,
+    () => window.matchMedia(PHONE_QUERY).matches,
+    () => false,
+  );
+}
+
+/** Moves focus to a landmark of the planner (skip links and their shortcuts), and shows it. */
+function focusRegion(id: string) {
+  const el = document.getElementById(id);
+  if (!el) return;
+  el.focus({ preventScroll: true });
+  el.scrollIntoView({ block: "start" });
+}
 
 function useHydrated() {
   return useSyncExternalStore(
@@ -103,6 +131,10 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
     template: null,
   });
   const collapsedBox = useLatest(collapsed);
+  const phone = usePhone();
+  const [phoneAthleteId, setPhoneAthleteId] = useState<number | null>(null);
+  const phoneAthlete = phone ? (phoneAthleteId ?? shown?.athletes[0]?.id ?? null) : null;
+  const phoneAthleteBox = useLatest(phoneAthlete);
   const { say, saveChange, deleteSession, clearUndo } = act;
 
   const onDrop = useCallback(
@@ -121,7 +153,33 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
     [askOverride, saveChange, say, weekBox],
   );
   const onRefused = useCallback((reason: string) => say("refused", reason), [say]);
-  const dnd = usePlannerDnd({ week: weekBox, collapsed: collapsedBox, onDrop, onRefused });
+  const dnd = usePlannerDnd({
+    week: weekBox,
+    collapsed: collapsedBox,
+    phoneAthlete: phoneAthleteBox,
+    onDrop,
+    onRefused,
+  });
+
+  // Skip-link shortcuts: Alt+Shift+B to the block shelf, Alt+Shift+G to the days (the key, whatever the layout).
+  const openShelf = useCallback(() => {
+    setShelfOpen(true);
+    requestAnimationFrame(() => focusRegion("block-shelf"));
+  }, []);
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      if (!e.altKey || !e.shiftKey || e.ctrlKey || e.metaKey) return;
+      if (e.code === "KeyB") {
+        e.preventDefault();
+        openShelf();
+      } else if (e.code === "KeyG") {
+        e.preventDefault();
+        focusRegion("plan-days");
+      }
+    };
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [openShelf]);
 
   // Ctrl/⌘+Z undoes the last change (not while typing in a field or in a dialog).
   const undoBox = useLatest(act.undo);
@@ -204,7 +262,36 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
       data-save-state={act.saving > 0 ? "saving" : isValidating ? "confirming" : "idle"}
       data-week={weekStart}
       data-ready={hydrated || undefined}
+      data-layout={phone ? "phone" : "grid"}
     >
+      <nav aria-label="Skip to" className="flex gap-2" data-testid="skip-links">
+        {shown?.canEdit ? (
+          <a
+            href="#block-shelf"
+            onClick={(e) => {
+              e.preventDefault();
+              openShelf();
+            }}
+            className={SKIP_LINK}
+            data-testid="skip-shelf"
+            aria-keyshortcuts="Alt+Shift+B"
+          >
+            Skip to the block shelf (Alt+Shift+B)
+          </a>
+        ) : null}
+        <a
+          href="#plan-days"
+          onClick={(e) => {
+            e.preventDefault();
+            focusRegion("plan-days");
+          }}
+          className={SKIP_LINK}
+          data-testid="skip-days"
+          aria-keyshortcuts="Alt+Shift+G"
+        >
+          Skip to the days (Alt+Shift+G)
+        </a>
+      </nav>
       <WeekHeader
         week={shown}
         weekStart={weekStart}
@@ -257,12 +344,33 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
               </button>
             ) : null}
           </div>
-          <div className={clsx("grid gap-4", shown.canEdit && shelfOpen ? "xl:grid-cols-[minmax(0,1fr)_13.5rem]" : "")}>
-            <div className="min-w-0 space-y-3">
+          <div
+            className={clsx(
+              // One column that never grows past the screen (the shelf's row of cards scrolls inside it).
+              "grid grid-cols-[minmax(0,1fr)] gap-4",
+              shown.canEdit && shelfOpen ? "xl:grid-cols-[minmax(0,1fr)_13.5rem]" : "",
+            )}
+          >
+            <div
+              id="plan-days"
+              role="region"
+              tabIndex={-1}
+              className="min-w-0 space-y-3 outline-none"
+              aria-label="Days"
+            >
               {shown.athletes.length === 0 ? (
                 <p className="rounded-card border border-dashed border-ink-200 px-6 py-10 text-center text-sm text-ink-500">
                   No athletes in the team yet. Add them on the squad screen.
                 </p>
+              ) : phoneAthlete !== null ? (
+                <PhoneWeek
+                  week={shown}
+                  athleteId={phoneAthlete}
+                  onAthlete={setPhoneAthleteId}
+                  hoverStore={hoverStore}
+                  copyArmedId={dnd.copyArmedId}
+                  actions={actions}
+                />
               ) : (
                 <WeekGrid
                   week={shown}
@@ -276,7 +384,7 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
                 />
               )}
               <LoadCaution />
-              <p className="text-2xs text-ink-400">
+              <p className="text-2xs text-ink-500">
                 Totals are for the week as planned (logged work up to today, the plan after). HSR and near-max metres
                 and sprint steps are model estimates from each athlete&apos;s tested max velocity.
               </p>
@@ -361,7 +469,7 @@ function DragHint({
     <p
       data-testid="drag-hint"
       data-active={active ? "true" : undefined}
-      className={clsx("min-h-4 text-xs", active ? "text-ink-600" : "text-ink-400")}
+      className={clsx("min-h-4 text-xs", active ? "text-ink-600" : "text-ink-500")}
     >
       {text}
     </p>

@@ -56,13 +56,13 @@ export const RowLoadSummary = memo(function RowLoadSummary({
               <dd className={clsx("font-medium tabular-nums", changed ? "text-lane-700" : "text-ink-800")}>
                 {changed ? (
                   <>
-                    <span className="text-ink-400 line-through decoration-ink-300">{formatNumber(now, 0)}</span>{" "}
+                    <span className="text-ink-500 line-through decoration-ink-300">{formatNumber(now, 0)}</span>{" "}
                     {formatNumber(next, 0)}
                   </>
                 ) : (
                   formatNumber(next, 0)
                 )}
-                {f.unit ? <span className="font-normal text-ink-400"> {f.unit}</span> : null}
+                {f.unit ? <span className="font-normal text-ink-500"> {f.unit}</span> : null}
               </dd>
             </div>
           );
@@ -75,7 +75,7 @@ export const RowLoadSummary = memo(function RowLoadSummary({
           title={zone?.reason ?? "ACWR within the comfortable range this week."}
           className={clsx(
             "inline-flex items-center gap-1 rounded-full border px-1.5 py-px text-2xs font-medium",
-            zone ? flagClasses(zone.kind).badge : "border-flag-steady/20 bg-flag-steady-soft text-flag-steady",
+            zone ? flagClasses(zone.kind).badge : "border-flag-steady/40 bg-flag-steady-soft text-ink-900",
             zone && isNew(zone.kind) && "ring-2 ring-flag-spike/50 ring-offset-1",
           )}
         >
@@ -87,7 +87,7 @@ export const RowLoadSummary = memo(function RowLoadSummary({
         </span>
         <Link
           href={figuresHref(zone ? "zones" : "acwr")}
-          className="text-2xs text-ink-400 underline hover:text-lane-700"
+          className="text-2xs text-ink-500 underline hover:text-lane-700"
           data-testid="row-figures-link"
           aria-label="How these figures are worked out"
         >

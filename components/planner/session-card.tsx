@@ -21,6 +21,12 @@ export function sessionLabel(s: PlanSession, athleteName: string): string {
   return `${what} for ${athleteName}, ${formatDayShort(s.date)} ${s.startTime}, ${STATUS_WORD[s.status].toLowerCase()}`;
 }
 
+/** What a card's visible text leaves to the eye: whose it is, which day, its kind. */
+function contextOf(s: PlanSession, athleteName: string): string {
+  const kind = mainBlockKind(s.blocks);
+  return `${kind ? `${BLOCK_KIND_LABEL[kind]} ` : ""}for ${athleteName || "the athlete"}, ${formatDayShort(s.date)}`;
+}
+
 /** Published: a filled dot; draft: a hollow one (the card is also hatched); cancelled: a cross. */
 export function StatusMark({ status }: { status: PlanSession["status"] }) {
   return (
@@ -87,8 +93,11 @@ export const SessionCard = memo(function SessionCard({
       data-session-id={s.id}
       data-status={s.status}
       data-pending={pending || undefined}
+      data-restricted={restricted ? "true" : undefined}
       className={clsx(
-        "group relative flex overflow-hidden rounded-md bg-paper-raised text-left shadow-card ring-1 transition-opacity",
+        "group relative flex flex-col overflow-hidden rounded-md bg-paper-raised text-left shadow-card transition-opacity",
+        // A conflict with a physio restriction is a thick dashed border and a label, never colour alone.
+        restricted ? "border-2 border-dashed border-flag-climb" : "ring-1",
         s.status === "draft"
           ? "[background-image:repeating-linear-gradient(135deg,transparent_0_6px,rgba(154,169,189,0.08)_6px_12px)] ring-ink-200"
           : "ring-ink-100",
@@ -99,61 +108,62 @@ export const SessionCard = memo(function SessionCard({
         overlay && "w-40 rotate-1 shadow-lift",
       )}
     >
-      <button
-        type="button"
-        ref={setNodeRef}
-        {...dragProps}
-        aria-label={label}
-        onClick={() => !overlay && actions.open(s)}
-        className={clsx(
-          "flex min-w-0 flex-1 text-left",
-          canEdit && !cancelled ? "cursor-grab active:cursor-grabbing" : "cursor-pointer",
-        )}
-      >
-        <CardBody session={s} />
-      </button>
-      {flags.length > 0 ? <CardFlags flags={flags} /> : null}
       {restricted ? (
         <span
           data-testid="card-restricted"
           title={restricted}
-          className="absolute top-0.5 left-1.5 text-2xs font-semibold text-flag-climb"
+          className="flex items-center gap-1 bg-flag-climb-soft px-1.5 py-0.5 text-2xs font-semibold text-ink-900"
         >
-          <span aria-hidden>⚕</span>
-          <span className="sr-only">Goes past a physio restriction: {restricted}</span>
+          <span aria-hidden>⚕</span> Past a physio limit
+          <span className="sr-only">: {restricted}</span>
         </span>
       ) : null}
+      {/* The name is the visible text plus the context a screen reader needs (athlete, day, state), so the
+          accessible name contains what sighted users read (WCAG 2.5.3). */}
+      <button
+        type="button"
+        ref={setNodeRef}
+        {...dragProps}
+        onClick={() => !overlay && actions.open(s)}
+        data-testid="card-open"
+        className={clsx(
+          "flex min-w-0 flex-1 touch-manipulation text-left",
+          canEdit && !cancelled ? "cursor-grab active:cursor-grabbing" : "cursor-pointer",
+        )}
+      >
+        <CardBody session={s} />
+        <span className="sr-only">, {contextOf(s, athleteName)}</span>
+      </button>
+      {flags.length > 0 ? <CardFlags flags={flags} /> : null}
       {canEdit && !overlay && !pending ? <CardActionsMenu session={s} label={label} actions={actions} /> : null}
     </div>
   );
 });
 
+/** The whole prescription, every block, wrapped (never clipped), in ink dark enough for the track (≥ 4.5:1). */
 const CardBody = memo(function CardBody({ session: s }: { session: PlanSession }) {
   const kind = mainBlockKind(s.blocks);
-  const first = s.blocks[0];
-  const more = s.blocks.length - 1;
   return (
     <>
       <span aria-hidden className={clsx("w-1 shrink-0", kind ? KIND_STYLE[kind].bar : "bg-ink-100")} />
       <span className="block min-w-0 flex-1 px-1.5 py-1">
-        <span className="flex items-center gap-1 text-2xs text-ink-500">
+        <span className="flex items-center gap-1 text-2xs text-ink-700">
           <span className="tabular-nums">{s.startTime}</span>
           <StatusMark status={s.status} />
         </span>
         <span
           className={clsx(
-            "line-clamp-2 text-xs leading-4 font-medium break-words hyphens-auto text-ink-900",
+            "block text-xs leading-4 font-medium break-words text-ink-900",
             s.status === "cancelled" && "line-through",
           )}
         >
           {s.title}
         </span>
-        {first ? (
-          <span className="mt-0.5 line-clamp-2 text-2xs leading-[0.95rem] text-ink-600">
-            {blockSummary(toBlockInput(first))}
+        {s.blocks.map((b) => (
+          <span key={b.id} data-testid="card-block" className="mt-0.5 block text-xs leading-4 break-words text-ink-700">
+            {blockSummary(toBlockInput(b))}
           </span>
-        ) : null}
-        {more > 0 ? <span className="text-2xs text-ink-400">+{more} more</span> : null}
+        ))}
       </span>
     </>
   );

@@ -267,7 +267,7 @@ function EditForm({ session, templates, onClose, onSave, onDelete, askSure }: Pr
           <p
             role="alert"
             data-testid="editor-notice"
-            className="rounded-md bg-flag-climb-soft px-3 py-2 text-sm text-flag-climb"
+            className="rounded-md bg-flag-climb-soft px-3 py-2 text-sm text-ink-900"
           >
             {notice}
           </p>

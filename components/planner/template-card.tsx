@@ -47,15 +47,17 @@ export const TemplateCard = memo(function TemplateCard({
         type="button"
         ref={setNodeRef}
         {...(canEdit && !overlay ? { ...attributes, ...listeners } : {})}
-        aria-label={`Drag ${templateLabel(t)}: ${blockSummary(toBlockInput(t))}`}
+        data-testid="template-drag"
         className={clsx(
-          "min-w-0 flex-1 px-2.5 py-2 text-left",
+          "min-w-0 flex-1 touch-manipulation px-2.5 py-2 text-left",
           canEdit ? "cursor-grab active:cursor-grabbing" : "cursor-default",
         )}
       >
-        <span className="line-clamp-2 text-sm leading-5 font-medium text-ink-900">{t.title}</span>
+        {/* Named by its visible text (WCAG 2.5.3), with "Drag template" for screen readers only. */}
+        <span className="sr-only">Drag template </span>
+        <span className="block text-sm leading-5 font-medium break-words text-ink-900">{t.title}</span>
         <span className="mt-0.5 block text-xs leading-4 text-ink-600">{blockSummary(toBlockInput(t))}</span>
-        <span className="mt-1 flex items-center gap-1.5 text-2xs text-ink-400">
+        <span className="mt-1 flex items-center gap-1.5 text-2xs text-ink-500">
           <span className={clsx("rounded px-1 ring-1 ring-inset", KIND_STYLE[t.kind].chip)}>
             {BLOCK_KIND_LABEL[t.kind]}
           </span>
@@ -68,7 +70,7 @@ export const TemplateCard = memo(function TemplateCard({
           onClick={() => onEdit(t)}
           aria-label={`Edit template ${t.title}`}
           data-testid="edit-template"
-          className="px-2 text-ink-300 hover:bg-ink-50 hover:text-ink-700"
+          className="px-2 text-ink-500 hover:bg-ink-50 hover:text-ink-700"
         >
           <svg viewBox="0 0 16 16" aria-hidden className="h-3.5 w-3.5 fill-current">
             <path d="M11.3 1.7a1.5 1.5 0 012.1 0l.9.9a1.5 1.5 0 010 2.1L6 13l-3.5.9.9-3.5z" />

@@ -2,7 +2,8 @@
 
 import {
   KeyboardSensor,
-  PointerSensor,
+  MouseSensor,
+  TouchSensor,
   useSensor,
   useSensors,
   type DragEndEvent,
@@ -43,6 +44,8 @@ type Preview = {
 type Args = {
   week: Latest<PlanWeek | undefined>;
   collapsed: Latest<ReadonlySet<string>>;
+  /** On a phone the week of one athlete, days stacked: the keyboard walks that athlete's days up and down. */
+  phoneAthlete: Latest<number | null>;
   /** `hits`: the physio restrictions the change would go past (the caller asks for a reason first). */
   onDrop: (change: PlanChange, hits: RestrictionHit[]) => void;
   onRefused: (reason: string) => void;
@@ -52,7 +55,7 @@ type Args = {
  * Everything about dragging: sensors (pointer, and keyboard moving cell by cell), the copy modifier, the
  * in-browser load preview of the cell under the item, screen-reader announcements, and the drop itself.
  */
-export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
+export function usePlannerDnd({ week, collapsed, phoneAthlete, onDrop, onRefused }: Args) {
   const [active, setActive] = useState<DragData | null>(null);
   const hoverStore = useHoverStore();
   const setHover = hoverStore.set;
@@ -108,6 +111,13 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
   const layout = useCallback((): GridLayout => {
     const w = week.get();
     if (!w) return { rows: [], days: [] };
+    const one = phoneAthlete.get();
+    if (one !== null)
+      return {
+        rows: [{ key: `athlete:${one}`, target: (date) => ({ type: "cell", athleteId: one, date }) }],
+        days: w.days,
+        vertical: true,
+      };
     const rows: GridLayout["rows"] = [];
     for (const g of w.groups) {
       if (g.id !== null && w.scope === "team")
@@ -117,7 +127,7 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
         rows.push({ key: `athlete:${id}`, target: (date) => ({ type: "cell", athleteId: id, date }) });
     }
     return { rows, days: w.days };
-  }, [week, collapsed]);
+  }, [week, collapsed, phoneAthlete]);
 
   const keyboardStart = useCallback(() => {
     const src = dragging.get()?.source;
@@ -133,8 +143,11 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
     () => gridKeyboardCoordinates(layout, keyboardStart, aimed),
     [layout, keyboardStart, aimed],
   );
+  // A mouse drags after 5 px; a finger after holding still for 250 ms (moving 8 px sooner scrolls the page
+  // instead), the long-press convention of touch screens, so a swipe over the cards still scrolls.
   const sensors = useSensors(
-    useSensor(PointerSensor, { activationConstraint: { distance: 5 } }),
+    useSensor(MouseSensor, { activationConstraint: { distance: 5 } }),
+    useSensor(TouchSensor, { activationConstraint: { delay: 250, tolerance: 8 } }),
     useSensor(KeyboardSensor, { coordinateGetter }),
   );
 
@@ -244,13 +257,22 @@ export function usePlannerDnd({ week, collapsed, onDrop, onRefused }: Args) {
       pointer.set({ x: e.clientX, y: e.clientY });
       on(e);
     };
+    // A finger: the browser may stop sending pointer events once it thinks a touch is a scroll; touch events go on.
+    const touch = (e: TouchEvent) => {
+      const t = e.touches[0];
+      if (t) pointer.set({ x: t.clientX, y: t.clientY });
+    };
     window.addEventListener("keydown", on);
     window.addEventListener("keyup", on);
     window.addEventListener("pointermove", move, { capture: true });
+    window.addEventListener("touchstart", touch, { capture: true, passive: true });
+    window.addEventListener("touchmove", touch, { capture: true, passive: true });
     return () => {
       window.removeEventListener("keydown", on);
       window.removeEventListener("keyup", on);
       window.removeEventListener("pointermove", move, { capture: true });
+      window.removeEventListener("touchstart", touch, { capture: true });
+      window.removeEventListener("touchmove", touch, { capture: true });
     };
   }, [alt, armed, dragging, pointer, previewNow]);
 

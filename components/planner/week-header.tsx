@@ -62,7 +62,7 @@ export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onToo
         <div>
           <p className="text-xs font-medium tracking-wider text-clay-700 uppercase" data-testid="iso-week">
             {iso}
-            {week ? <span className="text-ink-400"> · {week.isoYear}</span> : null}
+            {week ? <span className="text-ink-500"> · {week.isoYear}</span> : null}
           </p>
           <h1 className="text-2xl font-semibold text-ink-950" data-testid="week-range">
             {weekRangeLabel(weekStart)}
@@ -75,26 +75,14 @@ export function WeekHeader({ week, weekStart, onGo, onToday, undo, onUndo, onToo
             "p-1 whitespace-nowrap ring-1 ring-ink-100 xl:self-auto",
           )}
         >
-          <Button
-            variant="ghost"
-            size="sm"
-            onClick={() => onGo(shiftWeek(weekStart, -1))}
-            aria-label="Previous week"
-            data-testid="prev-week"
-          >
-            ‹ Prev
+          <Button variant="ghost" size="sm" onClick={() => onGo(shiftWeek(weekStart, -1))} data-testid="prev-week">
+            ‹ Previous<span className="sr-only"> week</span>
           </Button>
           <Button variant="ghost" size="sm" onClick={onToday} data-testid="this-week">
             This week
           </Button>
-          <Button
-            variant="ghost"
-            size="sm"
-            onClick={() => onGo(shiftWeek(weekStart, 1))}
-            aria-label="Next week"
-            data-testid="next-week"
-          >
-            Next ›
+          <Button variant="ghost" size="sm" onClick={() => onGo(shiftWeek(weekStart, 1))} data-testid="next-week">
+            Next<span className="sr-only"> week</span> ›
           </Button>
           <form
             className="flex items-center gap-1 border-l border-ink-100 pl-1"

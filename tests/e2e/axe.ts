@@ -8,20 +8,47 @@ const AXE_SOURCE = readFileSync(createRequire(import.meta.url).resolve("axe-core
 
 export type AxeFinding = { id: string; impact: string; help: string; nodes: string[] };
 
-/** Runs axe on the page as it stands and returns the serious and critical violations, one line per rule. */
-export async function seriousAxeViolations(page: Page, options: { exclude?: string[] } = {}): Promise<AxeFinding[]> {
+/**
+ * Runs axe on the page as it stands and returns the serious and critical violations, one line per rule.
+ * `rules`: rules to run on top of the WCAG tags, e.g. the experimental "label-content-name-mismatch" (2.5.3).
+ */
+export async function seriousAxeViolations(
+  page: Page,
+  options: { exclude?: string[]; rules?: string[] } = {},
+): Promise<AxeFinding[]> {
   await page.evaluate(AXE_SOURCE);
-  const found = await page.evaluate(async (exclude: string[]) => {
-    const axe = (window as unknown as { axe: { run: (ctx: unknown, opts: unknown) => Promise<AxeRun> } }).axe;
-    type AxeRun = { violations: { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }[] };
-    const context = exclude.length ? { exclude: exclude.map((s) => [s]) } : document;
-    const run = await axe.run(context, { runOnly: { type: "tag", values: ["wcag2a", "wcag2aa", "wcag21aa"] } });
-    return run.violations.map((v) => ({
-      id: v.id,
-      impact: v.impact ?? "minor",
-      help: v.help,
-      nodes: v.nodes.slice(0, 5).map((n) => n.target.join(" ")),
-    }));
-  }, options.exclude ?? []);
+  const found = await page.evaluate(
+    async ([exclude, extra]: [string[], string[]]) => {
+      const axe = (window as unknown as { axe: { run: (ctx: unknown, opts: unknown) => Promise<AxeRun> } }).axe;
+      type AxeRun = {
+        violations: { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }[];
+      };
+      const context = exclude.length ? { exclude: exclude.map((s) => [s]) } : document;
+      const tags = ["wcag2a", "wcag2aa", "wcag21aa"];
+      // runOnly by tag skips rules outside the tags; extra rules are run as well by naming them with the tags' rules.
+      const opts = extra.length
+        ? {
+            runOnly: {
+              type: "rule",
+              values: [
+                ...(axe as unknown as { getRules: (t: string[]) => { ruleId: string }[] })
+                  .getRules(tags)
+                  .map((r) => r.ruleId),
+                ...extra,
+              ],
+            },
+            rules: Object.fromEntries(extra.map((id) => [id, { enabled: true }])),
+          }
+        : { runOnly: { type: "tag", values: tags } };
+      const run = await axe.run(context, opts);
+      return run.violations.map((v) => ({
+        id: v.id,
+        impact: v.impact ?? "minor",
+        help: v.help,
+        nodes: v.nodes.slice(0, 5).map((n) => n.target.join(" ")),
+      }));
+    },
+    [options.exclude ?? [], options.rules ?? []] as [string[], string[]],
+  );
   return found.filter((f) => f.impact === "serious" || f.impact === "critical");
 }

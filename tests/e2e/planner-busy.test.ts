@@ -3,43 +3,18 @@
 // same drop saves. Pins the browser side of the busy answer (the HTTP side is in concurrency.test.ts).
 import { DateTime } from "luxon";
 import sqlite3 from "sqlite3";
-import type { Browser, Locator, Page } from "playwright-core";
+import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, expect, it } from "vitest";
 import { BUSY_MESSAGE } from "@/lib/db/busy";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { DEMO_STAFF } from "@/lib/seed/demo-club";
 import type { PlanWeek } from "@/lib/plan/types";
 import { describeBrowser, launchBrowser, signIn, startApp, type App } from "./harness";
+import { cards, cell, mouseDrag as drag, settled } from "./planner-page";
 
 const coach = DEMO_STAFF.find((s) => s.role === "coach")!;
 // Four weeks ahead of the demo's plan: an empty week.
 const week = addDays(startOfWeek(DateTime.now().setZone("Europe/London").toISODate()!, 1), 28);
-
-const cell = (page: Page, athleteId: number, date: string) =>
-  page.locator(`[data-testid="day-cell"][data-athlete-id="${athleteId}"][data-date="${date}"]`);
-const cards = (page: Page, athleteId: number, date: string) => cell(page, athleteId, date).getByTestId("session-card");
-
-async function drag(page: Page, from: Locator, to: Locator) {
-  await from.scrollIntoViewIfNeeded();
-  const a = (await from.boundingBox())!;
-  await page.mouse.move(a.x + a.width / 2, a.y + a.height / 2);
-  await page.mouse.down();
-  await page.mouse.move(a.x + a.width / 2 + 8, a.y + a.height / 2 + 8, { steps: 3 });
-  const b = (await to.boundingBox())!;
-  await page.mouse.move(b.x + b.width / 2, b.y + Math.min(b.height / 2, 30), { steps: 12 });
-  await page.mouse.move(b.x + b.width / 2 + 2, b.y + Math.min(b.height / 2, 30) + 1, { steps: 2 });
-  await page.mouse.up();
-}
-
-async function settled(page: Page) {
-  await page.waitForFunction(
-    () =>
-      !document.querySelector('[data-pending="true"]') &&
-      document.querySelector('[data-testid="planner"]')?.getAttribute("data-save-state") === "idle",
-    undefined,
-    { timeout: 20_000 },
-  );
-}
 
 const openRaw = (file: string) =>
   new Promise<sqlite3.Database>((resolve, reject) => {
