@@ -1,15 +1,10 @@
-import { beforeEach, describe, expect, it, vi } from "vitest";
+import { beforeEach, describe, expect, it } from "vitest";
+import { who } from "../helpers/handler-session";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
 
 // The handlers run for real over a temp SQLite file; only next-auth's session lookup is replaced.
-const who: { userId: number | null } = { userId: null };
-vi.mock("next-auth", async (orig) => ({
-  ...(await orig<typeof import("next-auth")>()),
-  getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
-}));
-vi.mock("@/lib/notices/hooks", () => ({ afterPlanChange: async () => {}, afterLogChange: async () => {} }));
 
 process.env.APP_URL = "https://club.sprintwright.test";
 const d = await setupTestDb();

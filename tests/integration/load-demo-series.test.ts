@@ -2,7 +2,8 @@
 // browser's drag preview over the context it sends), the athlete page and the alert evaluation must give the
 // same ACWR for every athlete and every day of the last 10 weeks (one series, lib/load/README.md §5), and the
 // demo history must raise no flag that comes from how a series starts (§6, §7).
-import { beforeEach, describe, expect, it, vi } from "vitest";
+import { beforeEach, describe, expect, it } from "vitest";
+import { notices, who } from "../helpers/handler-session";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import type { Flag } from "@/lib/load/flags";
 import type { WeekSummary } from "@/lib/load/week-summary";
@@ -12,11 +13,8 @@ import { DEMO_ATHLETES, DEMO_STAFF } from "@/lib/seed/demo-club";
 import { HISTORY_WEEKS } from "@/lib/seed/seed-load";
 import { setupTestDb } from "../helpers/db";
 
-const who: { userId: number | null } = { userId: null };
-vi.mock("next-auth", async (orig) => ({
-  ...(await orig<typeof import("next-auth")>()),
-  getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
-}));
+// Alerts, calendar invitations and their e-mails run for real here.
+notices.hooks = "on";
 
 const d = await setupTestDb();
 const { getAthleteLoadInputs } = await import("@/lib/data/load");

@@ -1,19 +1,15 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
+import { notices, who } from "../helpers/handler-session";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
 
 // The route handlers run for real; only next-auth's session lookup is replaced by "who is asking".
-const who: { userId: number | null } = { userId: null };
-vi.mock("next-auth", async (orig) => ({
-  ...(await orig<typeof import("next-auth")>()),
-  getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
-}));
 const logHook = vi.fn();
-vi.mock("@/lib/notices/hooks", () => ({
+notices.hooks = {
   afterLogChange: (args: unknown) => logHook(args),
   afterPlanChange: async () => {},
-}));
+};
 
 const d = await setupTestDb();
 const { teamToday } = await import("@/lib/dates/zoned");

@@ -1,16 +1,11 @@
-import { describe, expect, it, vi } from "vitest";
+import { describe, expect, it } from "vitest";
+import { who } from "../helpers/handler-session";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
 
 // The sprint-specific modelling choices (lib/load/README.md §11) checked end to end through the route handlers, with
 // hand-computed values. Only next-auth's session lookup is replaced by "who is asking".
-const who: { userId: number | null } = { userId: null };
-vi.mock("next-auth", async (orig) => ({
-  ...(await orig<typeof import("next-auth")>()),
-  getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
-}));
-vi.mock("@/lib/notices/hooks", () => ({ afterLogChange: async () => {}, afterPlanChange: async () => {} }));
 
 const d = await setupTestDb();
 const { teamToday } = await import("@/lib/dates/zoned");

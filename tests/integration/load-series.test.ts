@@ -1,17 +1,15 @@
 // One daily series per athlete, seeded on the first day on record, read the same by every handler; a settled
 // spike is an alert even when an early day peaks higher; the preview keeps logged per-block reps.
 // Check values: lib/load/README.md §6 (E2, E4), hand-computed from Williams et al. 2017's recurrence.
-import { beforeEach, describe, expect, it, vi } from "vitest";
+import { beforeEach, describe, expect, it } from "vitest";
+import { notices, who } from "../helpers/handler-session";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import type { WeekSummary } from "@/lib/load/week-summary";
 import { createTestTeam } from "../helpers/fixtures";
 import { setupNotices } from "./notices-setup";
 
-const who: { userId: number | null } = { userId: null };
-vi.mock("next-auth", async (orig) => ({
-  ...(await orig<typeof import("next-auth")>()),
-  getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
-}));
+// Alerts, calendar invitations and their e-mails run for real here.
+notices.hooks = "on";
 
 const n = await setupNotices();
 const { d } = n;

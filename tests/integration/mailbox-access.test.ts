@@ -2,18 +2,16 @@
 // read only what was delivered to their own address; the head coach sees the team's queue without bodies.
 // Real parts: the fake SMTP server on a free port, the outbox worker, the route handlers; only next-auth's
 // session lookup is replaced by "who is asking".
-import { describe, expect, it, vi } from "vitest";
+import { describe, expect, it } from "vitest";
+import { notices, who } from "../helpers/handler-session";
 import { requestPasswordReset } from "@/lib/services/password-reset";
 import { enqueueMail, listDeliveryQueue } from "@/lib/data/outbox";
 import { listMail } from "@/lib/mail/mailbox";
 import { createTestTeam } from "../helpers/fixtures";
 import { setupNotices } from "./notices-setup";
 
-const who: { userId: number | null } = { userId: null };
-vi.mock("next-auth", async (orig) => ({
-  ...(await orig<typeof import("next-auth")>()),
-  getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
-}));
+// Alerts, calendar invitations and their e-mails run for real here.
+notices.hooks = "on";
 
 process.env.MAIL_FAKE = "1";
 const n = await setupNotices();

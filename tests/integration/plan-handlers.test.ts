@@ -1,4 +1,5 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
+import { notices, who } from "../helpers/handler-session";
 import type { SessionChange } from "@/lib/plan/changes";
 import type { PlanSession, PlanWeek, PlanWriteResult } from "@/lib/plan/types";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
@@ -8,14 +9,9 @@ import { createTestTeam } from "../helpers/fixtures";
 
 // The route handlers run for real over a temp SQLite file; only next-auth's session lookup is replaced by
 // "who is asking", and the notices hook records what it is told instead of queueing mail.
-const who: { userId: number | null } = { userId: null };
-vi.mock("next-auth", async (orig) => ({
-  ...(await orig<typeof import("next-auth")>()),
-  getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
-}));
 const told: SessionChange[][] = [];
 const failNotice = { next: false };
-vi.mock("@/lib/notices/hooks", () => ({
+notices.hooks = {
   afterPlanChange: async ({ changes }: { changes: SessionChange[] }) => {
     if (failNotice.next) {
       failNotice.next = false;
@@ -24,7 +20,7 @@ vi.mock("@/lib/notices/hooks", () => ({
     told.push(changes);
   },
   afterLogChange: async () => {},
-}));
+};
 
 const d = await setupTestDb();
 const { teamToday } = await import("@/lib/dates/zoned");

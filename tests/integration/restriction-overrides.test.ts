@@ -1,7 +1,8 @@
 // Physio restrictions on the plan's write path, end to end: route handler → the one guard in the write
 // transaction → 409 "restricted" (nothing saved) or, with the coach's reason, the session saved, the override
 // recorded, an alert raised and a mail delivered through the outbox to the real fake SMTP server.
-import { describe, expect, it, vi } from "vitest";
+import { describe, expect, it } from "vitest";
+import { notices, who } from "../helpers/handler-session";
 import { listAlerts } from "@/lib/data/alerts";
 import { teamToday } from "@/lib/dates/zoned";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
@@ -10,11 +11,8 @@ import type { RestrictionHit } from "@/lib/restrictions/rules";
 import { createTestTeam } from "../helpers/fixtures";
 import { setupNotices } from "./notices-setup";
 
-const who: { userId: number | null } = { userId: null };
-vi.mock("next-auth", async (orig) => ({
-  ...(await orig<typeof import("next-auth")>()),
-  getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
-}));
+// Alerts, calendar invitations and their e-mails run for real here.
+notices.hooks = "on";
 
 const n = await setupNotices();
 const { d } = n;

@@ -1,15 +1,14 @@
-import { beforeEach, describe, expect, it, vi } from "vitest";
+import { beforeEach, describe, expect, it } from "vitest";
+import { notices, who } from "../helpers/handler-session";
 import { addDays } from "@/lib/dates/plain-date";
 import type { Restriction } from "@/lib/restrictions/rules";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
 
+// Alerts, calendar invitations and their e-mails run for real here.
+notices.hooks = "on";
+
 // The route handlers run for real; only next-auth's session lookup is replaced by "who is asking".
-const who: { userId: number | null } = { userId: null };
-vi.mock("next-auth", async (orig) => ({
-  ...(await orig<typeof import("next-auth")>()),
-  getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
-}));
 
 const d = await setupTestDb();
 const { teamToday } = await import("@/lib/dates/zoned");

@@ -4,7 +4,8 @@
 // Weekdays are checked with luxon (an independent ISO 8601 implementation: 1 = Monday … 7 = Sunday).
 import ICAL from "ical.js";
 import { DateTime } from "luxon";
-import { beforeEach, describe, expect, it, vi } from "vitest";
+import { beforeEach, describe, expect, it } from "vitest";
+import { notices, who } from "../helpers/handler-session";
 import { addDays, startOfWeek, weekDays } from "@/lib/dates/plain-date";
 import { formatDayLong, formatDayShort } from "@/lib/format/dates";
 import type { AthleteLoadDto, SquadWeekDto } from "@/lib/data/load-views";
@@ -12,11 +13,8 @@ import type { PlanWeek, PlanWriteResult } from "@/lib/plan/types";
 import { createTestTeam } from "../helpers/fixtures";
 import { setupNotices } from "./notices-setup";
 
-const who: { userId: number | null } = { userId: null };
-vi.mock("next-auth", async (orig) => ({
-  ...(await orig<typeof import("next-auth")>()),
-  getServerSession: async () => (who.userId ? { user: { id: who.userId } } : null),
-}));
+// Alerts, calendar invitations and their e-mails run for real here.
+notices.hooks = "on";
 
 const n = await setupNotices();
 const { d } = n;
