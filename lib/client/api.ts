@@ -1,11 +1,17 @@
 import type { z } from "zod";
-import type { AlertRow } from "@/lib/data/alerts";
-import type { CalendarFeedStatus } from "@/lib/data/calendar-tokens";
-import type { NotificationSettingsView } from "@/lib/data/notification-settings";
-import type { TeamLoadSettings } from "@/lib/load/types";
+import type { updateAlertStatus } from "@/lib/data/alerts";
+import type { getCalendarFeedStatus, revokeCalendarToken, rotateCalendarToken } from "@/lib/data/calendar-tokens";
+import type { updateNotificationSettings } from "@/lib/data/notification-settings";
+import type { updateTeamWeekStart } from "@/lib/data/team-settings";
+import type { createTemplate, updateTemplate } from "@/lib/data/templates";
 import type { PlausibilityCheck } from "@/lib/plan/plausibility";
-import type { PlanSession, PlanTemplate, PlanWriteResult } from "@/lib/plan/types";
-import type { Restriction, RestrictionHit } from "@/lib/restrictions/rules";
+import type { PlanSession } from "@/lib/plan/types";
+import type { RestrictionHit } from "@/lib/restrictions/rules";
+import type { withWeekRows } from "@/lib/data/plan";
+import type { clearWeek, copyWeekToNext, publishWeek } from "@/lib/services/plan-week";
+import type { createRestriction, liftRestriction } from "@/lib/services/restrictions";
+import type { saveSessionLog } from "@/lib/services/session-logs";
+import type { updateTeamLoadSettings } from "@/lib/services/team-settings";
 import type { alertActionSchema } from "@/lib/validations/alerts";
 import type { sessionLogSchema } from "@/lib/validations/log";
 import type { notificationSettingsSchema } from "@/lib/validations/notifications";
@@ -17,29 +23,39 @@ import type { templateSchema, updateTemplateSchema } from "@/lib/validations/tem
 import { sendJson, type ApiError } from "./fetcher";
 import { loadKeys, noticeKeys, planKeys, restrictionKeys } from "./keys";
 
-// Every write the browser sends, each body typed from the schema its handler parses (z.input: before coercion).
+// Every write the browser sends, each body typed from the schema its handler parses (z.input: before coercion),
+// each answer from what the lib/ function behind its handler returns (as JSON: Dates arrive as strings), so a
+// change on the server side breaks the caller at compile time. The wrappers ({ template }, { log }…) are the
+// handlers' own.
 type Body<S extends z.ZodType> = z.input<S>;
+type Returned<F extends (...args: never[]) => Promise<unknown>> = Awaited<ReturnType<F>>;
+/** A session or block write: the service's result with the server's week rows (answer(), session-access.ts). */
+type SessionWrite = Returned<typeof withWeekRows>;
 
 export const planApi = {
   createSession: (teamId: number, body: Body<typeof createSessionSchema>) =>
-    sendJson<PlanWriteResult>("POST", planKeys.teamSessions(teamId), body),
+    sendJson<SessionWrite>("POST", planKeys.teamSessions(teamId), body),
   updateSession: (sessionId: number, body: Body<typeof updateSessionSchema>) =>
-    sendJson<PlanWriteResult>("PATCH", planKeys.session(sessionId), body),
+    sendJson<SessionWrite>("PATCH", planKeys.session(sessionId), body),
   deleteSession: (sessionId: number, version: number) =>
-    sendJson<PlanWriteResult>("DELETE", `${planKeys.session(sessionId)}?version=${version}`),
+    sendJson<SessionWrite>("DELETE", `${planKeys.session(sessionId)}?version=${version}`),
   addBlock: (sessionId: number, body: Body<typeof addBlockSchema>) =>
-    sendJson<PlanWriteResult>("POST", planKeys.sessionBlocks(sessionId), body),
+    sendJson<SessionWrite>("POST", planKeys.sessionBlocks(sessionId), body),
   removeBlock: (sessionId: number, blockId: number, version: number) =>
-    sendJson<PlanWriteResult>("DELETE", `${planKeys.sessionBlock(sessionId, blockId)}?version=${version}`),
+    sendJson<SessionWrite>("DELETE", `${planKeys.sessionBlock(sessionId, blockId)}?version=${version}`),
   weekTool: (teamId: number, tool: "copy-to-next" | "clear" | "publish", body: Body<typeof weekToolSchema>) =>
-    sendJson<PlanWriteResult>("POST", planKeys.weekTool(teamId, tool), body),
+    sendJson<Returned<typeof copyWeekToNext | typeof clearWeek | typeof publishWeek>>(
+      "POST",
+      planKeys.weekTool(teamId, tool),
+      body,
+    ),
   createTemplate: (teamId: number, body: Body<typeof templateSchema>) =>
-    sendJson<{ template: PlanTemplate }>("POST", planKeys.teamTemplates(teamId), body),
+    sendJson<{ template: Returned<typeof createTemplate> }>("POST", planKeys.teamTemplates(teamId), body),
   updateTemplate: (templateId: number, body: Body<typeof updateTemplateSchema>) =>
-    sendJson<{ template: PlanTemplate }>("PUT", planKeys.template(templateId), body),
+    sendJson<{ template: Returned<typeof updateTemplate> }>("PUT", planKeys.template(templateId), body),
   deleteTemplate: (templateId: number) => sendJson<{ deleted: true }>("DELETE", planKeys.template(templateId)),
   saveLog: (sessionId: number, body: Body<typeof sessionLogSchema>) =>
-    sendJson<unknown>("PUT", planKeys.sessionLog(sessionId), body),
+    sendJson<{ log: Returned<typeof saveSessionLog> }>("PUT", planKeys.sessionLog(sessionId), body),
 };
 
 /** On 409 "stale": the session (or template) as it now is on the server. */
@@ -51,24 +67,36 @@ export const checksOf = (e: ApiError) => (e.details.checks as PlausibilityCheck[
 
 export const loadApi = {
   saveSettings: (teamId: number, body: Body<typeof teamSettingsPatchSchema>) =>
-    sendJson<{ settings: TeamLoadSettings }>("PATCH", loadKeys.teamSettings(teamId), body),
+    sendJson<{ settings: Returned<typeof updateTeamLoadSettings> }>("PATCH", loadKeys.teamSettings(teamId), body),
   saveWeekStart: (teamId: number, body: Body<typeof teamWeekSchema>) =>
-    sendJson<z.infer<typeof teamWeekSchema>>("PATCH", loadKeys.teamWeekStart(teamId), body),
+    sendJson<Returned<typeof updateTeamWeekStart>>("PATCH", loadKeys.teamWeekStart(teamId), body),
 };
+
+type FeedStatus = Returned<typeof getCalendarFeedStatus>;
 
 export const noticeApi = {
   act: (alertId: number, body: Body<typeof alertActionSchema>) =>
-    sendJson<{ alert: AlertRow }>("PATCH", noticeKeys.alert(alertId), body),
+    sendJson<{ alert: Returned<typeof updateAlertStatus> }>("PATCH", noticeKeys.alert(alertId), body),
   markSeen: () => sendJson<{ unread: number }>("POST", noticeKeys.alertsSeen),
   saveSettings: (body: Body<typeof notificationSettingsSchema>) =>
-    sendJson<NotificationSettingsView>("PUT", noticeKeys.notificationSettings, body),
-  newCalendarLink: (athleteId: number) => sendJson<CalendarFeedStatus>("POST", noticeKeys.calendarToken(athleteId)),
-  stopCalendarLink: (athleteId: number) => sendJson<CalendarFeedStatus>("DELETE", noticeKeys.calendarToken(athleteId)),
+    sendJson<Returned<typeof updateNotificationSettings>>("PUT", noticeKeys.notificationSettings, body),
+  // The handler leaves the token out of its answer.
+  newCalendarLink: (athleteId: number) =>
+    sendJson<Omit<Returned<typeof rotateCalendarToken>, "token">>("POST", noticeKeys.calendarToken(athleteId)),
+  stopCalendarLink: (athleteId: number) =>
+    sendJson<FeedStatus & { revoked: Returned<typeof revokeCalendarToken> }>(
+      "DELETE",
+      noticeKeys.calendarToken(athleteId),
+    ),
 };
 
 export const restrictionApi = {
   create: (athleteId: number, body: Body<typeof createRestrictionSchema>) =>
-    sendJson<{ restriction: Restriction }>("POST", restrictionKeys.athlete(athleteId), body),
+    sendJson<{ restriction: Returned<typeof createRestriction> }>("POST", restrictionKeys.athlete(athleteId), body),
   act: (restrictionId: number, body: Body<typeof restrictionActionSchema>) =>
-    sendJson<{ restriction: Restriction }>("PATCH", restrictionKeys.restriction(restrictionId), body),
+    sendJson<{ restriction: Returned<typeof liftRestriction> }>(
+      "PATCH",
+      restrictionKeys.restriction(restrictionId),
+      body,
+    ),
 };
