@@ -29,6 +29,14 @@ declare module "sequelize/types/transaction" {
   }
 }
 
+// COUNT and SUM over integers answer int8, which pg hands over as text because it could pass 2^53. Our counts,
+// sums of ids and versions and epoch-millisecond expiries stay far below that, and SQLite answers numbers: parse
+// them the same way on both (a value past 2^53 stays text rather than lose digits).
+pg.types.setTypeParser(pg.types.builtins.INT8, (text: string) => {
+  const n = Number(text);
+  return Number.isSafeInteger(n) ? n : text;
+});
+
 type Begin = (options: TransactionOptions | undefined, fn?: (t: Transaction) => Promise<unknown>) => Promise<unknown>;
 
 function serializeWriters(sequelize: Sequelize): void {
@@ -66,5 +74,9 @@ export async function openPostgres(url: string): Promise<Sequelize> {
 
 /** A plain pg pool on the same database, for the sign-in limiter's own table (rate-limiter-flexible). */
 export function postgresPool(url: string): pg.Pool {
-  return new pg.Pool({ connectionString: url, max: 2 });
+  const pool = new pg.Pool({ connectionString: url, max: 2 });
+  // An idle connection the server ended (a restart, a dropped database) is an 'error' event on the pool, which
+  // would end the process unheard; the pool has already let the connection go and opens a new one when asked.
+  pool.on("error", (err) => console.warn(`[sprintwright] sign-in limiter lost a database connection: ${err.message}`));
+  return pool;
 }
