@@ -10,11 +10,8 @@ import {
 } from "./session-event";
 import type { CalendarPerson, CalendarSession, CalendarTeam, SessionUrlFn } from "./types";
 
-/** Content-Type for serving a feed or attaching an .ics file. */
-export const ICS_CONTENT_TYPE = "text/calendar; charset=utf-8";
-
 /** How far back a served feed reaches; every session ahead is always in it. */
-export const FEED_WEEKS_BACK = 8;
+const FEED_WEEKS_BACK = 8;
 
 /**
  * Bump when the rendered text changes for the same data (wording, properties): stored renders

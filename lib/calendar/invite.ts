@@ -10,7 +10,7 @@ import {
 } from "./session-event";
 import type { CalendarPerson, CalendarSession, CalendarTeam, SessionUrlFn } from "./types";
 
-export type InviteMethod = "REQUEST" | "CANCEL";
+type InviteMethod = "REQUEST" | "CANCEL";
 
 export interface InviteInput {
   method: InviteMethod;

@@ -5,13 +5,13 @@ import { blockDescription } from "@/lib/format/block-summary";
 import { sessionHeadline } from "@/lib/format/session-line";
 import type { CalendarSession, CalendarTeam, SessionUrlFn } from "./types";
 
-export const PROD_ID = { company: "Sprintwright", product: "Training calendar", language: "EN" } as const;
+const PROD_ID = { company: "Sprintwright", product: "Training calendar", language: "EN" } as const;
 
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
 const TIME = /^([01]\d|2[0-3]):[0-5]\d$/;
 
 /** Stable across feed and invitations, so a client updates the same event (RFC 5545 §3.8.4.7). */
-export function sessionUid(sessionId: string | number): string {
+function sessionUid(sessionId: string | number): string {
   return `session-${sessionId}@sprintwright`;
 }
 
@@ -27,7 +27,7 @@ const LINE_BREAK = /\r\n|\r|\n|\u2028|\u2029/g;
 const CONTROL = /[\u0000-\u0008\u000B-\u001F\u007F-\u009F]/g;
 
 /** Text with every line break as "\n" and no other control character: safe for ical-generator to escape. */
-export function plainText(value: string): string {
+function plainText(value: string): string {
   return value.replace(LINE_BREAK, "\n").replace(CONTROL, "");
 }
 
@@ -76,7 +76,7 @@ function sessionTimes(session: CalendarSession, timeZone: string): { start: Date
   return { start, end: start.plus({ minutes: session.durationMin }) };
 }
 
-export function sessionDescription(session: CalendarSession, url: string): string {
+function sessionDescription(session: CalendarSession, url: string): string {
   const paragraphs: string[] = [];
   if (session.status === "cancelled") paragraphs.push("This session is cancelled.");
   for (const block of session.blocks) paragraphs.push(blockDescription(block).join("\n"));
