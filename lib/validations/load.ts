@@ -29,14 +29,12 @@ export const athleteLoadQuerySchema = z
     else if (days >= MAX_RANGE_DAYS)
       ctx.addIssue({ code: "custom", path: ["to"], message: `At most ${MAX_RANGE_DAYS} days from from` });
   });
-export type AthleteLoadQuery = z.infer<typeof athleteLoadQuerySchema>;
 
 /** GET /api/teams/[teamId]/load: any date inside the wanted week; the team's current week when absent. */
 export const squadLoadQuerySchema = z.object({
   week: localDateSchema.optional(),
   view: loadViewSchema.default("projected"),
 });
-export type SquadLoadQuery = z.infer<typeof squadLoadQuerySchema>;
 
 /** A block of a proposed session; id is the saved block's, so reps logged against it still count. */
 const previewBlockSchema = z.intersection(blockSchema, z.object({ id: idSchema.optional() }));
@@ -55,7 +53,6 @@ const previewSessionSchema = z.object({
   status: z.enum(SESSION_STATUSES, { error: "Choose draft, published or cancelled" }).default("draft"),
   blocks: z.array(previewBlockSchema).max(20, "At most 20 blocks"),
 });
-export type PreviewSession = z.infer<typeof previewSessionSchema>;
 
 /** POST /api/load/preview: the athlete's week as proposed (not saved); it replaces the saved week. */
 export const loadPreviewSchema = z.object({

@@ -15,4 +15,3 @@ export type AddMemberInput = z.infer<typeof addMemberSchema>;
 export type AddMemberFormValues = z.input<typeof addMemberSchema>;
 
 export const changeRoleSchema = z.object({ role: roleSchema });
-export type ChangeRoleInput = z.infer<typeof changeRoleSchema>;

@@ -7,5 +7,3 @@ export const ALERT_EMAIL_CHOICES = ALERT_EMAIL_MODES;
 export const notificationSettingsSchema = z.object({
   alertEmail: z.enum(ALERT_EMAIL_CHOICES, { error: "Choose each alert, a daily digest, or no e-mail" }),
 });
-
-export type NotificationSettingsInput = z.infer<typeof notificationSettingsSchema>;

@@ -68,4 +68,3 @@ export type RestrictionFormValues = z.input<typeof createRestrictionSchema>;
 
 /** PATCH /api/restrictions/[restrictionId]: lift it from today (or before it starts). */
 export const restrictionActionSchema = z.object({ action: z.literal("lift", { error: 'Send action "lift"' }) });
-export type RestrictionActionInput = z.infer<typeof restrictionActionSchema>;
