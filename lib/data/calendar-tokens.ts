@@ -225,28 +225,3 @@ export async function listAthleteSessions({
     };
   });
 }
-
-/** Seeds or tests: a token for every athlete of the team who has none yet. */
-export async function ensureCalendarTokens({
-  teamId,
-  transaction,
-}: {
-  teamId: number;
-  transaction?: Transaction;
-}): Promise<number> {
-  const { Athlete, CalendarToken } = await db();
-  const athletes = await Athlete.findAll({ where: { teamId }, attributes: ["id"], transaction });
-  const active = await CalendarToken.findAll({
-    where: { teamId, revokedAt: null },
-    attributes: ["athleteId"],
-    transaction,
-  });
-  const has = new Set(active.map((t) => t.athleteId));
-  let created = 0;
-  for (const a of athletes) {
-    if (has.has(a.id)) continue;
-    await rotateCalendarToken({ athleteId: a.id, createdBy: null, transaction });
-    created += 1;
-  }
-  return created;
-}

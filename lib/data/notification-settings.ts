@@ -5,7 +5,7 @@ import { db } from "@/models";
 import type { AlertEmailMode } from "@/lib/domain/alerts";
 
 /** Physios hear about every alert unless they say otherwise; coaches opt in; athletes never get load alerts. */
-export function defaultAlertEmail(role: Role): AlertEmailMode {
+function defaultAlertEmail(role: Role): AlertEmailMode {
   return role === "physio" ? "each" : "off";
 }
 

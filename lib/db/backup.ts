@@ -4,7 +4,7 @@ import sqlite3 from "sqlite3";
 import { all, closeRaw, copyInto, exec, openRaw } from "./raw";
 
 /** Where backups go unless BACKUP_DIR says otherwise: `backups/` beside the database file. */
-export function backupDir(storage: string, env = process.env.BACKUP_DIR): string {
+function backupDir(storage: string, env = process.env.BACKUP_DIR): string {
   return resolve(env || join(dirname(storage), "backups"));
 }
 

@@ -6,7 +6,7 @@ export const LOAD_CAUTION =
   "medical staff and follow your local rules.";
 
 /** A flag's own colour token (tailwind.config.ts `flag.*`); each is used for that flag kind only. */
-export type FlagTone = "spike" | "climb" | "under" | "jump" | "monotony" | "contacts" | "recovery";
+type FlagTone = "spike" | "climb" | "under" | "jump" | "monotony" | "contacts" | "recovery";
 
 /** The shape drawn beside a flag's label (components/ui/flag-mark.tsx), so no flag is told apart by colour alone. */
 export type FlagShape =

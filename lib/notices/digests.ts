@@ -9,7 +9,7 @@ import { db } from "@/models";
 import { toLoadAlertItem } from "./alert-display";
 
 /** Local hour the daily digest goes out, in each team's own zone. */
-export const DIGEST_HOUR = 7;
+const DIGEST_HOUR = 7;
 
 /** The most recent digest time at or before `now` in the zone (today 07:00, or yesterday's before 07:00). */
 export function lastDigestSlot(now: Date, timeZone: string): Date {
