@@ -23,6 +23,10 @@ import { RestrictionOverride } from "./restriction-override";
 import { SessionBlock } from "./session-block";
 import { SessionLog } from "./session-log";
 import { SessionLogChange } from "./session-log-change";
+import { SpeedLabSettings } from "./speed-lab-settings";
+import { SpeedProfileEntry } from "./speed-profile-entry";
+import { SpeedTest } from "./speed-test";
+import { SpeedUpload } from "./speed-upload";
 import { Team } from "./team";
 import { TeamLoadSettings } from "./team-load-settings";
 import { TrainingGroup } from "./training-group";
@@ -31,6 +35,7 @@ import { User } from "./user";
 export { Alert, CalendarToken, NotificationSetting, OutboxMessage, Restriction, RestrictionOverride };
 export { AuthSession, CalendarFeedRender, LoadLedgerDay };
 export { CheckIn, PainReport, SessionLogChange };
+export { SpeedLabSettings, SpeedProfileEntry, SpeedTest, SpeedUpload };
 export {
   Athlete,
   BlockTemplate,
@@ -70,6 +75,10 @@ const models = {
   CheckIn,
   PainReport,
   SessionLogChange,
+  SpeedLabSettings,
+  SpeedProfileEntry,
+  SpeedTest,
+  SpeedUpload,
 };
 export type Models = typeof models;
 export type Db = Models & { sequelize: Sequelize };
@@ -148,6 +157,19 @@ function associate() {
   RestrictionOverride.belongsTo(Team, { foreignKey: "teamId", as: "team" });
 
   Athlete.hasOne(CalendarFeedRender, { foreignKey: "athleteId", as: "feedRender", ...cascade });
+
+  Team.hasMany(SpeedUpload, { foreignKey: "teamId", ...cascade });
+  User.hasMany(SpeedUpload, { foreignKey: "uploadedByUserId", ...setNull });
+  Team.hasMany(SpeedTest, { foreignKey: "teamId", ...cascade });
+  Athlete.hasMany(SpeedTest, { foreignKey: "athleteId", ...cascade });
+  SpeedUpload.hasMany(SpeedTest, { foreignKey: "uploadId", ...setNull });
+  PlannedSession.hasMany(SpeedTest, { foreignKey: "plannedSessionId", ...setNull });
+  User.hasMany(SpeedTest, { foreignKey: "createdByUserId", ...setNull });
+  Team.hasMany(SpeedProfileEntry, { foreignKey: "teamId", ...cascade });
+  Athlete.hasMany(SpeedProfileEntry, { foreignKey: "athleteId", ...cascade });
+  SpeedTest.hasMany(SpeedProfileEntry, { foreignKey: "speedTestId", ...setNull });
+  User.hasMany(SpeedProfileEntry, { foreignKey: "acceptedByUserId", ...setNull });
+  Team.hasOne(SpeedLabSettings, { foreignKey: "teamId", ...cascade });
 
   // Load ledger (migration 011).
   Athlete.hasMany(LoadLedgerDay, { foreignKey: "athleteId", as: "ledger", ...cascade });

@@ -38,6 +38,11 @@ export async function rebuildLedger({
       WHERE (:all = 1 OR t.id IN (${jsonIds(sequelize)})) ORDER BY t.id`,
     { type: QueryTypes.SELECT, replacements: { all: teamIds ? 0 : 1, ids: JSON.stringify(teamIds ?? []) } },
   );
+  // Migration 011 rebuilds before migration 015 has made the speed profile history: none to read then.
+  const tables = await sequelize.getQueryInterface().showAllTables();
+  const profileHistory = tables
+    .map((t) => (typeof t === "string" ? t : (t as { tableName: string }).tableName))
+    .includes("speed_profile_entries");
   const total = teams.reduce((n, t) => n + Number(t.athletes), 0);
   const show = progressBar(total, progress);
   let done = 0;
@@ -58,6 +63,7 @@ export async function rebuildLedger({
           athleteIds: [id],
           through: "9999-12-31",
           transaction,
+          profileHistory,
         });
         const a = inputs.athletes[0];
         const ledger = a

@@ -2,6 +2,7 @@ import "server-only";
 import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
 import type {
   AthleteProfile,
+  EarlierProfile,
   BlockInput,
   BlockKind,
   Completion,
@@ -51,6 +52,8 @@ type Through = {
   transaction?: Transaction;
   /** The database to read (a migration passes its own); default the app's. */
   sequelize?: Sequelize;
+  /** false: leave accepted speed tests out (a migration older than 015 reads a database without them). */
+  profileHistory?: boolean;
 };
 
 /** The team's zone and ISO week start; 404 when the team does not exist. */
@@ -97,6 +100,8 @@ type AthleteRow = {
   tau_s: number | null;
   step_length_m: number | null;
   plyo_level: PlyoLevel;
+  /** JSON text [[effective_from, vmax, tau, step length], …] of the athlete's speed profile entries, or null. */
+  earlier: string | null;
 };
 type SessionRow = {
   id: number;
@@ -131,7 +136,7 @@ const SQL = {
   team: `SELECT t.time_zone, t.week_start_day, ${SETTINGS_SQL_COLUMNS}
     FROM teams t LEFT JOIN team_load_settings s ON s.team_id = t.id WHERE t.id = :teamId`,
   athletes: `SELECT a.id, a.name, a.group_id, g.name AS group_name, g.sort_order AS group_order,
-    a.vmax_ms, a.tau_s, a.step_length_m, a.plyo_level
+    a.vmax_ms, a.tau_s, a.step_length_m, a.plyo_level, {earlier} AS earlier
     FROM athletes a LEFT JOIN training_groups g ON g.id = a.group_id
     WHERE a.team_id = :teamId AND (:everyone = 1 OR a.id IN (:athleteIds))`,
   sessions: `SELECT s.id, s.athlete_id, s.date, s.start_time, s.duration_min, s.planned_rpe, s.status,
@@ -151,6 +156,31 @@ const BLOCKS_SQL = {
       || ']' FROM session_blocks b WHERE b.session_id = s.id)`,
 };
 
+// Accepted speed tests (migration 015, lib/speed/README.md §4), packed like the blocks: one value per athlete.
+const EARLIER_SQL = {
+  sqlite: `(SELECT json_group_array(json_array(p.effective_from, p.vmax_ms, p.tau_s, p.step_length_m))
+      FROM speed_profile_entries p WHERE p.athlete_id = a.id)`,
+  postgres: `(SELECT json_agg(json_build_array(p.effective_from, p.vmax_ms, p.tau_s, p.step_length_m))::text
+      FROM speed_profile_entries p WHERE p.athlete_id = a.id)`,
+};
+
+/**
+ * Each entry is in force until the next one's date; the last one is the athlete row's current values (accepting
+ * a test copies it there), so only the entries before it become `earlier`.
+ */
+function earlierProfiles(packed: string | null): EarlierProfile[] | undefined {
+  const list = json<[string, number | null, number | null, number | null][]>(packed);
+  if (!list || list.length < 2) return undefined;
+  const sorted = list.map(([from, vmax, tau, step]) => ({ from: String(from).slice(0, 10), vmax, tau, step }));
+  sorted.sort((x, y) => (x.from < y.from ? -1 : x.from > y.from ? 1 : 0));
+  return sorted.slice(0, -1).map((e, i) => ({
+    until: sorted[i + 1].from,
+    vmax: num(e.vmax),
+    tau: num(e.tau),
+    stepLengthM: num(e.step),
+  }));
+}
+
 function toBlocks(packed: string | null): BlockInput[] {
   const list = json<PackedBlock[]>(packed);
   if (!list) return [];
@@ -165,6 +195,7 @@ export async function getLoadSeriesInputs({
   from,
   transaction,
   sequelize: given,
+  profileHistory = true,
 }: Through & { teamId: number; athleteIds?: readonly number[] }): Promise<LoadInputs> {
   const sequelize = given ?? (await db()).sequelize;
   // IN () is not SQL: an empty list becomes [0], which matches no row.
@@ -178,13 +209,15 @@ export async function getLoadSeriesInputs({
   };
   const select = <T extends object>(sql: string) =>
     sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements, transaction });
+  const dialect = sequelize.getDialect() === "postgres" ? "postgres" : "sqlite";
+  const athletesSql = SQL.athletes.replace("{earlier}", profileHistory ? EARLIER_SQL[dialect] : "NULL");
   const sessionsSql = SQL.sessions
     .replace("{filter}", athleteIds ? SESSION_FILTER.athletes : SESSION_FILTER.team)
     .replace("{blocks}", sequelize.getDialect() === "postgres" ? BLOCKS_SQL.postgres : BLOCKS_SQL.sqlite);
   // A constant three queries whatever the squad size: no query per athlete or per session.
   const [[team], athletes, sessions] = await Promise.all([
     select<TeamRow>(SQL.team),
-    select<AthleteRow>(SQL.athletes),
+    select<AthleteRow>(athletesSql),
     select<SessionRow>(sessionsSql),
   ]);
   if (!team) throw new AppError("not_found", "Not found");
@@ -192,12 +225,19 @@ export async function getLoadSeriesInputs({
 
   const byAthlete = new Map<number, LoadAthleteInputs>();
   for (const a of athletes) {
+    const earlier = earlierProfiles(a.earlier);
     byAthlete.set(a.id, {
       id: a.id,
       name: a.name,
       groupId: a.group_id,
       groupName: a.group_name,
-      profile: { vmax: num(a.vmax_ms), tau: num(a.tau_s), stepLengthM: num(a.step_length_m), plyoLevel: a.plyo_level },
+      profile: {
+        vmax: num(a.vmax_ms),
+        tau: num(a.tau_s),
+        stepLengthM: num(a.step_length_m),
+        plyoLevel: a.plyo_level,
+        ...(earlier ? { earlier } : {}),
+      },
       sessions: [],
       logs: [],
     });

@@ -1,6 +1,7 @@
 // The engine's hot path: one session's numbers summed into a reusable Float64Array, with no allocation
 // per block or session. Everything the loop touches lives in this one module on purpose (cross-module
 // constants and calls cost extra under CommonJS transpilation, e.g. tsx in scripts and tests).
+import { dayIndex } from "@/lib/dates/plain-date";
 import { BLOCK_KIND_RULES, type BlockKindRules } from "./block-kinds";
 import { distanceToReach } from "./sprint-model";
 import {
@@ -78,6 +79,8 @@ export interface ResolvedProfile {
   estimateMissing: boolean;
   /** Lazily built memo: per start class, [cell · BANDS + band]; NaN = not computed yet. */
   reach: Float64Array | null;
+  /** Profiles in force before accepted speed tests, ascending (AthleteProfile.earlier); null without any. */
+  earlier: { untilDay: number; rp: ResolvedProfile }[] | null;
 }
 
 /** Non-negative finite number, else 0: stored data should be validated, but the maths never sees NaN. */
@@ -118,7 +121,23 @@ export function resolveProfile(profile: AthleteProfile, settings: TeamLoadSettin
     maximalPct: nonNeg(settings.maximalPct ?? DEFAULTS.maximalPct),
     estimateMissing: settings.missingLogs !== "exclude",
     reach: null,
+    earlier: profile.earlier?.length
+      ? [...profile.earlier]
+          .map((e) => ({
+            untilDay: dayIndex(e.until),
+            rp: resolveProfile({ ...e, plyoLevel: profile.plyoLevel }, settings),
+          }))
+          .sort((a, b) => a.untilDay - b.untilDay)
+      : null,
   };
+}
+
+/** The profile in force on `day` (lib/speed/README.md §4): the first earlier one it falls before, else the current. */
+export function profileOn(rp: ResolvedProfile, day: number): ResolvedProfile {
+  const earlier = rp.earlier;
+  if (earlier === null) return rp;
+  for (let i = 0; i < earlier.length; i++) if (day < earlier[i].untilDay) return earlier[i].rp;
+  return rp;
 }
 
 export function memoOf(rp: ResolvedProfile): Float64Array {
@@ -269,6 +288,7 @@ export function evaluateSessionInto(
   log: LogInput | undefined,
   rp: ResolvedProfile,
 ): void {
+  if (rp.earlier !== null) rp = profileOn(rp, dayIndex(session.date));
   for (let k = 0; k < SLOT_SCALE; k++) acc[k] = 0;
   let factor = 1;
   if (log) {

@@ -5,7 +5,16 @@
 // engine (sumPackedSession), with the same operations in the same order as evaluateSessionInto, so both
 // paths give identical numbers (tests/unit/load/packed.test.ts checks it on an invented squad).
 import { blockKindRules } from "./block-kinds";
-import { BAND_NEAR, buildUpReach, memoOf, nonNeg, reachCell, srpe, type ResolvedProfile } from "./accumulate";
+import {
+  BAND_NEAR,
+  buildUpReach,
+  memoOf,
+  nonNeg,
+  profileOn,
+  reachCell,
+  srpe,
+  type ResolvedProfile,
+} from "./accumulate";
 import { dayIndex } from "@/lib/dates/plain-date";
 import { alignLogs, type AlignedLogs } from "./align-logs";
 import type { BlockInput, LogInput, SessionInput } from "./types";
@@ -175,6 +184,7 @@ export function sumPackedSession(
   logged: boolean,
   rp: ResolvedProfile,
 ): void {
+  if (rp.earlier !== null) rp = profileOn(rp, p.day[k]);
   // Eight stores beat TypedArray#fill's call for so short an array.
   acc[0] = 0;
   acc[1] = 0;

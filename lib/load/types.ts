@@ -62,6 +62,21 @@ export interface AthleteProfile {
   /** Step length at max velocity, m; null until measured. */
   stepLengthM: number | null;
   plyoLevel: PlyoLevel;
+  /**
+   * Speed profiles in force before accepted speed tests, ascending by `until` (lib/speed/README.md §4): a session
+   * dated before an entry's `until` (and on or after the previous one's) uses that entry's values; from the
+   * last `until` on, the fields above apply. Absent: the fields above apply on every day.
+   */
+  earlier?: readonly EarlierProfile[];
+}
+
+/** A speed profile as it stood until a later accepted test (plyo level is not part of it). */
+export interface EarlierProfile {
+  /** "YYYY-MM-DD": the first day it no longer applied (the next test's date). */
+  until: string;
+  vmax: number | null;
+  tau: number | null;
+  stepLengthM: number | null;
 }
 
 // Defaults used while an athlete is untested. They only shape estimates; the UI should say "estimated".

@@ -1,18 +1,12 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { T4_GATES } from "./fixtures";
 import { distanceAt, timeToDistance } from "@/lib/load/sprint-model";
 import { forceVelocityProfile } from "@/lib/speed/force-velocity";
 import { FIT_BOUNDS, fitSprint } from "@/lib/speed/sprint-fit";
 import { analyseTimingTrial } from "@/lib/speed/timing-trial";
 
-// T4 splits: vmax 9.5 m/s, τ 1.1 s (lib/speed/README.md §1 [C], model of Furusawa, Hill & Parkinson 1927).
-const T4 = [
-  { distanceM: 0, timeS: 0 },
-  { distanceM: 10, timeS: 1.969 },
-  { distanceM: 20, timeS: 3.142 },
-  { distanceM: 30, timeS: 4.2345 },
-  { distanceM: 40, timeS: 5.3017 },
-];
+const T4 = T4_GATES;
 
 describe("split and interval speeds (lib/speed/README.md §1)", () => {
   it("T1: 20 m in 2.000 s = 10.0 m/s = 36.0 km/h; 10 m in 1.05 s = 9.523810 m/s = 34.285714 km/h", () => {

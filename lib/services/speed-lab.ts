@@ -1,0 +1,146 @@
+import "server-only";
+import { dayIndex } from "@/lib/dates/plain-date";
+import { refreshLedger } from "@/lib/data/ledger";
+import {
+  BASELINE_FROM,
+  copyCurrentProfile,
+  getAthleteSpeedRow,
+  insertProfileEntry,
+  listProfileEntries,
+} from "@/lib/data/speed-profiles";
+import { getSpeedTest, insertSpeedTests, insertSpeedUpload } from "@/lib/data/speed-tests";
+import { inTransaction } from "@/lib/data/transaction";
+import { AppError } from "@/lib/errors";
+import {
+  mergeProfile,
+  PROFILE_VALUE_KEYS,
+  timingProfileValues,
+  type SpeedProfileValues,
+} from "@/lib/speed/profile-values";
+import { analyseTimingTrial, type TimingTrialAnalysis } from "@/lib/speed/timing-trial";
+import type { TimingTrialInput } from "@/lib/validations/speed";
+
+// Accepting a speed test: the athlete's profile changes from the test's date on, earlier days keep the profile
+// that was in force (lib/speed/README.md §4), and the load ledger is refreshed from that date inside the same
+// transaction.
+
+const NO_VALUES: SpeedProfileValues = Object.fromEntries(
+  PROFILE_VALUE_KEYS.map((k) => [k, null]),
+) as SpeedProfileValues;
+
+/**
+ * Saves timing trials (typed in, or read from an uploaded file that is kept as it came) with their results, all
+ * or nothing. A trial without body mass takes the athlete's.
+ */
+export async function recordTimingTrials({
+  teamId,
+  userId,
+  trials,
+  upload,
+}: {
+  teamId: number;
+  userId: number;
+  trials: readonly TimingTrialInput[];
+  upload?: { fileName: string; content: string } | null;
+}): Promise<{ testIds: number[]; uploadId: number | null }> {
+  return inTransaction(async (transaction) => {
+    const uploadId = upload
+      ? (await insertSpeedUpload({ teamId, userId, kind: "timing", ...upload, transaction })).id
+      : null;
+    const tests = [];
+    for (const t of trials) {
+      const row = await getAthleteSpeedRow({ teamId, athleteId: t.athleteId, transaction });
+      const bodyMassKg = t.bodyMassKg ?? row.bodyMassKg;
+      const data = { gates: t.gates, flying: t.flying ?? null };
+      tests.push({
+        athleteId: t.athleteId,
+        kind: "timing" as const,
+        testDate: t.testDate,
+        startType: t.startType,
+        bodyMassKg,
+        plannedSessionId: null,
+        data,
+        result: analyseTimingTrial({ ...data, bodyMassKg }),
+      });
+    }
+    const testIds = await insertSpeedTests({ teamId, userId, uploadId, tests, transaction });
+    return { testIds, uploadId };
+  });
+}
+
+export async function acceptSpeedTest({
+  teamId,
+  testId,
+  userId,
+  now,
+}: {
+  teamId: number;
+  testId: number;
+  userId: number;
+  now: Date;
+}): Promise<{ entryId: number; effectiveFrom: string; values: SpeedProfileValues }> {
+  return inTransaction(async (transaction) => {
+    const test = await getSpeedTest({ teamId, testId, transaction });
+    const measured = test.kind === "timing" ? timingProfileValues(test.result as TimingTrialAnalysis) : null;
+    if (!measured)
+      throw new AppError("invalid", "This test has no result to accept", { fields: { testId: ["No fitted result"] } });
+    // The athlete form's bounds (lib/validations/athlete.ts): an accepted profile must stay editable there.
+    if (measured.vmaxMs! < 4 || measured.vmaxMs! > 13 || measured.tauS! < 0.4 || measured.tauS! > 3) {
+      throw new AppError("invalid", "The fitted vmax or τ is outside the accepted range (vmax 4–13 m/s, τ 0.4–3 s)", {
+        fields: { testId: ["Fitted values out of range"] },
+      });
+    }
+    const { athleteId, testDate } = test;
+    let entries = await listProfileEntries({ teamId, athleteId, transaction });
+    if (entries.some((e) => e.speedTestId === testId))
+      throw new AppError("conflict", "This result is already accepted");
+    if (entries.some((e) => e.effectiveFrom === testDate)) {
+      throw new AppError("conflict", `A result is already in force from ${testDate}`, {
+        fields: { testId: ["Same date"] },
+      });
+    }
+    const row = await getAthleteSpeedRow({ teamId, athleteId, transaction });
+    if (entries.length === 0) {
+      // The hand-typed values stay in force before the first accepted test.
+      await insertProfileEntry({
+        teamId,
+        athleteId,
+        effectiveFrom: BASELINE_FROM,
+        speedTestId: null,
+        acceptedByUserId: null,
+        acceptedAt: now,
+        values: { ...NO_VALUES, vmaxMs: row.vmaxMs, tauS: row.tauS, stepLengthM: row.stepLengthM },
+        transaction,
+      });
+      entries = await listProfileEntries({ teamId, athleteId, transaction });
+    }
+    const inForce = entries.filter((e) => e.effectiveFrom < testDate).at(-1)!;
+    const values = mergeProfile(pick(inForce), measured);
+    const { id } = await insertProfileEntry({
+      teamId,
+      athleteId,
+      effectiveFrom: testDate,
+      speedTestId: testId,
+      acceptedByUserId: userId,
+      acceptedAt: now,
+      values,
+      transaction,
+    });
+    const latest = entries.every((e) => e.effectiveFrom < testDate);
+    if (latest) {
+      await copyCurrentProfile({
+        athleteId,
+        values: { vmaxMs: values.vmaxMs, tauS: values.tauS, stepLengthM: values.stepLengthM },
+        testedOn: testDate,
+        fromDate: testDate,
+        transaction,
+      });
+    }
+    await refreshLedger({ transaction, athleteIds: [athleteId], fromDay: dayIndex(testDate) });
+    return { entryId: id, effectiveFrom: testDate, values };
+  });
+}
+
+function pick(v: SpeedProfileValues): SpeedProfileValues {
+  return Object.fromEntries(PROFILE_VALUE_KEYS.map((k) => [k, v[k]])) as SpeedProfileValues;
+}
