@@ -22,7 +22,10 @@ export type Action =
   /** The local mailbox: "own" is mail delivered to the member's own address, nothing else. */
   | "mailbox:view"
   /** The team's delivery queue (recipient, kind, status; never a body or link). */
-  | "mailbox:queue";
+  | "mailbox:queue"
+  /** Speed-lab tests and profiles (lib/speed/README.md): view them; upload tests and accept results. */
+  | "speed:view"
+  | "speed:edit";
 
 export type Scope = "team" | "own";
 
@@ -42,6 +45,8 @@ export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
     "calendar:manage": "team",
     "mailbox:view": "own",
     "mailbox:queue": "team",
+    "speed:view": "team",
+    "speed:edit": "team",
   },
   coach: {
     "team:view": "team",
@@ -55,6 +60,8 @@ export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
     "alerts:manage": "team",
     "calendar:manage": "team",
     "mailbox:view": "own",
+    "speed:view": "team",
+    "speed:edit": "team",
   },
   physio: {
     "team:view": "team",
@@ -65,6 +72,7 @@ export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
     "alerts:manage": "team",
     "restrictions:edit": "team",
     "mailbox:view": "own",
+    "speed:view": "team",
   },
   athlete: {
     "team:view": "team",

@@ -2,6 +2,7 @@ import { z } from "zod";
 import "./jitless";
 import { SPEED_START_TYPES } from "@/lib/domain/speed";
 import { pastDateSchema } from "./dates";
+import { idSchema } from "./plan";
 
 // Speed-lab inputs (lib/speed/README.md §1). Ranges are generous bounds for sprinting humans, not norms.
 
@@ -61,4 +62,16 @@ export const timingTrialsSchema = z.object({
   trials: z.array(timingTrialSchema).min(1, "Enter at least one trial").max(200),
 });
 
-export const acceptSpeedTestSchema = z.object({ testId: z.coerce.number().int().positive() });
+/** The largest speed-lab file we take: a 40-minute force trace at 1000 Hz as CSV is about 1.5 MB. */
+export const SPEED_UPLOAD_MAX_BYTES = 2 * 1024 * 1024;
+
+export const speedUploadSchema = z.object({
+  fileName: z
+    .string({ message: "Name the file" })
+    .trim()
+    .min(1, "Name the file")
+    .max(200, "The file name is over 200 characters"),
+  content: z.string({ message: "The file's text is missing" }),
+});
+
+export const speedTestParamsSchema = z.object({ teamId: idSchema, testId: idSchema });

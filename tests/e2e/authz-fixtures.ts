@@ -82,6 +82,7 @@ const DERIVED_TABLES = new Set(["load_ledger", "load_ledger_dirty", "calendar_fe
 let counter = 0;
 /** Timestamps as Sequelize writes them to SQLite, so rows made here read back like the app's own. */
 const sqlNow = () => new Date().toISOString().replace("T", " ").replace("Z", " +00:00");
+let speedTestDays = 0;
 const unique = (what: string) => `${what} ${Date.now().toString(36)}-${++counter}`;
 const json = (body: unknown): RequestInit => ({
   body: JSON.stringify(body),
@@ -127,6 +128,29 @@ export class World {
   today(offsetDays = 0): string {
     const d = new Date(Date.now() + offsetDays * 86_400_000);
     return d.toLocaleDateString("en-CA", { timeZone: "Europe/London" });
+  }
+
+  /** A fresh timing test with a fitted result (lib/speed/README.md T4), each on a day of its own so it can be accepted. */
+  async speedTest(athleteId: number): Promise<number> {
+    const now = sqlNow();
+    const day = new Date(Date.UTC(2019, 0, 1) + ++speedTestDays * 86_400_000).toISOString().slice(0, 10);
+    const result = JSON.stringify({
+      fit: { vmax: 9.5, tau: 1.1, residuals: [], rmseTimeS: 0, iterations: 1 },
+      profile: null,
+    });
+    await this.app.query(
+      "INSERT INTO speed_tests (team_id, athlete_id, kind, test_date, start_type, data, result, created_at, updated_at) " +
+        "VALUES (?, ?, 'timing', ?, 'standing', '{}', ?, ?, ?)",
+      [this.teamId, athleteId, day, result, now, now],
+    );
+    const [row] = await this.app.query<{ id: number }>("SELECT max(id) AS id FROM speed_tests");
+    return row.id;
+  }
+
+  /** The athlete's name as the team spelled it (a CSV upload names athletes). */
+  async athleteName(athleteId: number): Promise<string> {
+    const [row] = await this.app.query<{ name: string }>("SELECT name FROM athletes WHERE id = ?", [athleteId]);
+    return row.name;
   }
 
   /** A fresh published session (yesterday, so it can be logged) with one block, written straight to SQLite. */

@@ -133,6 +133,13 @@ export const REQUESTS: Record<string, Build> = {
   "GET /api/teams/[teamId]/plan": async (w) => api("GET", `/api/teams/${w.teamId}/plan`),
   "POST /api/teams/[teamId]/plan/[tool]": async (w) =>
     api("POST", `/api/teams/${w.teamId}/plan/publish`, { week: farWeek }),
+  "POST /api/teams/[teamId]/speed/tests/[testId]/accept": async (w, s) =>
+    api("POST", `/api/teams/${w.teamId}/speed/tests/${await w.speedTest(athlete(w, s))}/accept`),
+  "POST /api/teams/[teamId]/speed/timing-uploads": async (w, s) =>
+    api("POST", `/api/teams/${w.teamId}/speed/timing-uploads`, {
+      fileName: "matrix.csv",
+      content: `athlete,date,start,distance_m,time_s\n${await w.athleteName(athlete(w, s))},2020-01-01,standing,10,1.969\n`,
+    }),
   "POST /api/teams/[teamId]/sessions": async (w, s) =>
     api("POST", `/api/teams/${w.teamId}/sessions`, {
       from: "blank",
@@ -173,6 +180,8 @@ export const REQUESTS: Record<string, Build> = {
   "PAGE /not-allowed": async () => page("/not-allowed"),
   "PAGE /plan": async () => page("/plan"),
   "PAGE /settings": async () => page("/settings"),
+  "PAGE /speed": async () => page("/speed"),
+  "PAGE /speed/[athleteId]": async (w, s) => page(`/speed/${athlete(w, s)}`),
   "PAGE /squad": async () => page("/squad"),
   "PAGE /squad/[athleteId]": async (w, s) => page(`/squad/${athlete(w, s)}`),
   "PAGE /squad/new": async () => page("/squad/new"),

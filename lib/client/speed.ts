@@ -1,0 +1,49 @@
+import type { z } from "zod";
+import type { speedUploadSchema } from "@/lib/validations/speed";
+import { ApiError, OFFLINE_MESSAGE, sendJson, toApiError } from "./fetcher";
+
+// The speed lab's requests from the browser. The upload goes through XMLHttpRequest: fetch reports no upload
+// progress, and the coach should see a large file going up.
+
+export const speedKeys = {
+  timingUploads: (teamId: number) => `/api/teams/${teamId}/speed/timing-uploads`,
+  accept: (teamId: number, testId: number) => `/api/teams/${teamId}/speed/tests/${testId}/accept`,
+  template: "/speed-timing-template.csv",
+};
+
+export type TimingUploadResult = {
+  testIds: number[];
+  uploadId: number | null;
+  trials: { testId: number; athleteName: string; testDate: string }[];
+};
+
+export const speedApi = {
+  accept: (teamId: number, testId: number) =>
+    sendJson<{ entryId: number; effectiveFrom: string }>("POST", speedKeys.accept(teamId, testId)),
+
+  /** Sends the file, calling `onProgress` with the share sent (0–1); rejects with an ApiError like sendJson. */
+  uploadTiming(
+    teamId: number,
+    body: z.input<typeof speedUploadSchema>,
+    onProgress: (share: number) => void,
+  ): Promise<TimingUploadResult> {
+    return new Promise((resolve, reject) => {
+      const xhr = new XMLHttpRequest();
+      xhr.open("POST", speedKeys.timingUploads(teamId));
+      xhr.setRequestHeader("content-type", "application/json");
+      xhr.upload.onprogress = (e) => {
+        if (e.lengthComputable && e.total > 0) onProgress(e.loaded / e.total);
+      };
+      xhr.onerror = () => reject(new ApiError(0, "offline", OFFLINE_MESSAGE));
+      xhr.onload = () => {
+        const res = new Response(xhr.responseText, {
+          status: xhr.status,
+          headers: { "content-type": xhr.getResponseHeader("content-type") ?? "application/json" },
+        });
+        if (res.ok) res.json().then((b) => resolve(b as TimingUploadResult), reject);
+        else toApiError(res).then(reject, reject);
+      };
+      xhr.send(JSON.stringify(body));
+    });
+  },
+};
