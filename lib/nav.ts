@@ -22,6 +22,7 @@ export const NAV: NavItem[] = [
   { href: "/load", label: "Squad load", can: "load:view", scope: "team" },
   { href: "/alerts", label: "Alerts", can: "alerts:view", scope: "team" },
   { href: "/squad", label: "Squad", can: "athletes:view", scope: "team" },
+  { href: "/speed", label: "Speed lab", can: "speed:view", scope: "team" },
   { href: "/me", label: "My training", can: "log:write", scope: "own" },
   { href: "/load", label: "My load", can: "load:view", scope: "own" },
   { href: "/members", label: "Members", can: "members:manage", scope: "team" },

@@ -1,0 +1,162 @@
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { Badge } from "@/components/ui/badge";
+import { Card, PageHeader } from "@/components/ui/card";
+import { AcceptResultButton } from "@/components/speed/accept-button";
+import { FitChart } from "@/components/speed/fit-chart";
+import { HistoryChart } from "@/components/speed/history-chart";
+import { pageAthlete } from "@/lib/auth/page-access";
+import { scopeOf } from "@/lib/auth/permissions";
+import { BASELINE_FROM } from "@/lib/data/speed-profiles";
+import { getAthleteSpeed } from "@/lib/data/speed-views";
+import type { SpeedProfileValues } from "@/lib/speed/profile-values";
+import type { TimingTrialAnalysis } from "@/lib/speed/timing-trial";
+
+export const metadata = { title: "Speed profile" };
+
+const VALUES: { key: keyof SpeedProfileValues; label: string; unit: string; digits: number }[] = [
+  { key: "vmaxMs", label: "Max velocity", unit: "m/s", digits: 2 },
+  { key: "tauS", label: "τ (acceleration time constant)", unit: "s", digits: 2 },
+  { key: "f0N", label: "F0 (no air drag)", unit: "N", digits: 0 },
+  { key: "pmaxW", label: "Pmax (no air drag)", unit: "W", digits: 0 },
+  { key: "stepLengthM", label: "Step length", unit: "m", digits: 2 },
+  { key: "stepFrequencyHz", label: "Step frequency", unit: "Hz", digits: 2 },
+  { key: "contactTimeS", label: "Contact time", unit: "s", digits: 3 },
+  { key: "stanceForceBw", label: "Mean stance force", unit: "× BW", digits: 2 },
+];
+
+export default async function SpeedProfilePage({ params }: { params: Promise<{ athleteId: string }> }) {
+  const { athleteId } = await params;
+  const viewer = await pageAthlete(Number(athleteId), "speed:view");
+  const { athlete, entries, tests, squadRange } = await getAthleteSpeed({
+    teamId: viewer.teamId,
+    athleteId: viewer.athlete.id,
+  });
+  if (!athlete) notFound();
+  const canEdit = scopeOf(viewer.role, "speed:edit") === "team";
+  const tested = entries.filter((e) => e.effectiveFrom !== BASELINE_FROM);
+  const current = entries.at(-1);
+  const previous = entries.at(-2);
+  const fallback: Partial<SpeedProfileValues> = {
+    vmaxMs: athlete.vmaxMs,
+    tauS: athlete.tauS,
+    stepLengthM: athlete.stepLengthM,
+  };
+  return (
+    <>
+      <PageHeader
+        title={`${athlete.name}: speed profile`}
+        lead="Each value against this athlete's own earlier tests; the squad's range is shown only as context."
+        actions={
+          <Link href="/speed" className="text-sm font-medium text-lane-700 underline">
+            Speed lab
+          </Link>
+        }
+      />
+      <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-4" data-testid="speed-profile">
+        {VALUES.map(({ key, label, unit, digits }) => {
+          const now = current ? current[key] : (fallback[key] ?? null);
+          const before = previous ? previous[key] : null;
+          const change = now !== null && before !== null && current?.speedTestId ? now - before : null;
+          const points = tested
+            .filter((e) => e[key] !== null)
+            .map((e) => ({ date: e.effectiveFrom, value: e[key] as number }));
+          const range = key in squadRange ? squadRange[key as keyof typeof squadRange] : null;
+          return (
+            <Card key={key} className="p-4" data-testid={`profile-${key}`}>
+              <h2 className="text-sm font-medium text-ink-500">{label}</h2>
+              <p className="text-2xl font-semibold text-ink-900 tabular-nums" data-testid={`current-${key}`}>
+                {now === null ? "not measured yet" : `${now.toFixed(digits)} ${unit}`}
+              </p>
+              <p className="text-xs text-ink-500">
+                {change === null
+                  ? "No change on record yet"
+                  : `${change >= 0 ? "+" : "−"}${Math.abs(change).toFixed(digits)} ${unit} since the test before`}
+              </p>
+              {points.length > 1 ? <HistoryChart points={points} unit={unit} label={label} /> : null}
+              {range ? (
+                <p className="mt-1 text-xs text-ink-400">
+                  Squad now: {range.min.toFixed(digits)}–{range.max.toFixed(digits)} {unit} ({range.n} athletes)
+                </p>
+              ) : null}
+            </Card>
+          );
+        })}
+      </div>
+      <h2 className="mt-6 mb-2 text-lg font-semibold text-ink-900">Profile history</h2>
+      <Card className="p-4">
+        {entries.length === 0 ? (
+          <p className="text-sm text-ink-700">
+            No test accepted yet: the load figures use the values typed on the athlete form.
+          </p>
+        ) : (
+          <ul className="divide-y divide-ink-100 text-sm" data-testid="profile-history">
+            {entries.map((e) => (
+              <li key={e.id} className="flex flex-wrap justify-between gap-2 py-2">
+                <span className="font-medium text-ink-900">
+                  {e.effectiveFrom === BASELINE_FROM ? "Before the first test" : `From ${e.effectiveFrom}`}
+                </span>
+                <span className="text-ink-700 tabular-nums">
+                  vmax {e.vmaxMs?.toFixed(2) ?? "–"} m/s · τ {e.tauS?.toFixed(2) ?? "–"} s
+                </span>
+                <span className="text-xs text-ink-500">
+                  {e.speedTestId
+                    ? `accepted by ${e.acceptedByName ?? "a former member"} on ${e.acceptedAt.toISOString().slice(0, 10)}`
+                    : "typed in"}
+                </span>
+              </li>
+            ))}
+          </ul>
+        )}
+      </Card>
+      <h2 className="mt-6 mb-2 text-lg font-semibold text-ink-900">Tests</h2>
+      <div className="space-y-4">
+        {tests.map((t) => {
+          const r = t.result as TimingTrialAnalysis;
+          return (
+            <Card key={t.id} id={`test-${t.id}`} className="p-4" data-testid={`test-${t.id}`}>
+              <div className="flex flex-wrap items-center justify-between gap-2">
+                <h3 className="font-semibold text-ink-900">
+                  Timing trial · {t.testDate} · {t.startType ?? ""} start
+                </h3>
+                {t.accepted ? (
+                  <Badge tone="steady">In use from {t.testDate}</Badge>
+                ) : canEdit && r.fit ? (
+                  <AcceptResultButton teamId={viewer.teamId} testId={t.id} testDate={t.testDate} />
+                ) : null}
+              </div>
+              {r.fit ? (
+                <>
+                  <p className="mt-1 text-sm text-ink-800 tabular-nums" data-testid={`fit-${t.id}`}>
+                    Fit: vmax {r.fit.vmax.toFixed(2)} m/s ({(r.fit.vmax * 3.6).toFixed(1)} km/h) · τ{" "}
+                    {r.fit.tau.toFixed(2)} s · time residuals RMS {(r.fit.rmseTimeS * 1000).toFixed(1)} ms
+                    {r.profile
+                      ? ` · F0 ${r.profile.f0N.toFixed(0)} N · Pmax ${r.profile.pmaxW.toFixed(0)} W (no air drag)`
+                      : ""}
+                  </p>
+                  <FitChart vmax={r.fit.vmax} tau={r.fit.tau} intervals={r.intervals} gates={r.splits} />
+                </>
+              ) : (
+                <p className="mt-1 text-sm text-ink-700">No fit: at least two timed gates are needed.</p>
+              )}
+              <ul className="mt-2 grid gap-1 text-xs text-ink-700 sm:grid-cols-2">
+                {r.intervals.map((iv) => (
+                  <li key={`${iv.fromM}-${iv.toM}`} className="tabular-nums">
+                    {iv.fromM}–{iv.toM} m: {iv.seconds.toFixed(3)} s · {iv.speed.ms.toFixed(2)} m/s (
+                    {iv.speed.kmh.toFixed(1)} km/h)
+                  </li>
+                ))}
+                {r.bestFlying ? (
+                  <li className="font-medium">
+                    Best flying: {r.bestFlying.fromM}–{r.bestFlying.toM} m at {r.bestFlying.speed.ms.toFixed(2)} m/s
+                  </li>
+                ) : null}
+              </ul>
+            </Card>
+          );
+        })}
+        {tests.length === 0 ? <p className="text-sm text-ink-700">No tests yet.</p> : null}
+      </div>
+    </>
+  );
+}

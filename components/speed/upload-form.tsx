@@ -1,0 +1,83 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { inputClass } from "@/components/ui/field";
+import { ApiError } from "@/lib/client/fetcher";
+import { speedApi, speedKeys } from "@/lib/client/speed";
+
+type Problem = { line: number; column: string | null; message: string };
+
+/** Uploads a timing-gate CSV with a progress bar; shows every problem line by line when it is refused. */
+export function TimingUploadForm({ teamId }: { teamId: number }) {
+  const router = useRouter();
+  const [share, setShare] = useState<number | null>(null);
+  const [message, setMessage] = useState<string | null>(null);
+  const [problems, setProblems] = useState<Problem[]>([]);
+
+  async function onFile(file: File | undefined) {
+    if (!file) return;
+    setMessage(null);
+    setProblems([]);
+    setShare(0);
+    try {
+      const content = await file.text();
+      const result = await speedApi.uploadTiming(teamId, { fileName: file.name, content }, setShare);
+      setShare(1);
+      setMessage(
+        `Saved ${result.trials.length} trial${result.trials.length === 1 ? "" : "s"}. Accept a result below to use it.`,
+      );
+      router.refresh();
+    } catch (e) {
+      setShare(null);
+      setMessage(e instanceof Error ? e.message : "The upload failed");
+      if (e instanceof ApiError && Array.isArray(e.details.problems)) setProblems(e.details.problems as Problem[]);
+    }
+  }
+
+  return (
+    <div className="space-y-3" data-testid="timing-upload">
+      <label htmlFor="timing-file" className="block text-sm font-medium text-ink-800">
+        Timing-gate file (CSV)
+      </label>
+      <input
+        id="timing-file"
+        type="file"
+        accept=".csv,text/csv"
+        className={inputClass}
+        aria-describedby="timing-file-hint"
+        onChange={(e) => void onFile(e.target.files?.[0])}
+      />
+      <p id="timing-file-hint" className="text-xs text-ink-500">
+        One row per gate: athlete, date, trial, start, distance_m, time_s, body_mass_kg.{" "}
+        <a href={speedKeys.template} download className="font-medium text-lane-700 underline">
+          Download the template
+        </a>
+        . Nothing is saved unless every line is right.
+      </p>
+      {share !== null ? (
+        <div>
+          <progress className="h-2 w-full" value={Math.round(share * 100)} max={100} aria-label="Upload progress" />
+          <p className="text-xs text-ink-500" aria-live="polite">
+            {share < 1 ? `Sending… ${Math.round(share * 100)} %` : "Sent"}
+          </p>
+        </div>
+      ) : null}
+      {message ? (
+        <p role="status" className="text-sm text-ink-800" data-testid="upload-message">
+          {message}
+        </p>
+      ) : null}
+      {problems.length ? (
+        <ul className="space-y-1 text-sm text-flag-spike" data-testid="upload-problems">
+          {problems.map((p, i) => (
+            <li key={i}>
+              Line {p.line}
+              {p.column ? ` (${p.column})` : ""}: {p.message}
+            </li>
+          ))}
+        </ul>
+      ) : null}
+    </div>
+  );
+}

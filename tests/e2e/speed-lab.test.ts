@@ -1,0 +1,100 @@
+// The speed lab in a real browser against the built app and the demo club: upload a timing CSV, see the fit and
+// its chart, accept it, and see the athlete's vmax change and the plan's HSR change for weeks after the test
+// only (lib/speed/README.md §4). Phone width, axe-clean.
+import type { Browser, Page } from "playwright-core";
+import { afterAll, beforeAll, expect, it } from "vitest";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
+import { teamToday } from "@/lib/dates/zoned";
+import { DEMO_ATHLETES, DEMO_STAFF } from "@/lib/seed/demo-club";
+import type { PlanWeek } from "@/lib/plan/types";
+import { seriousAxeViolations } from "./axe";
+import { apiSession, describeBrowser, launchBrowser, screenshot, signIn, startApp, type App } from "./harness";
+
+const headCoach = DEMO_STAFF.find((s) => s.role === "head_coach")!;
+const maya = DEMO_ATHLETES.find((a) => a.name === "Maya Okafor")!;
+
+async function noSidewaysScroll(page: Page) {
+  expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth + 1)).toBe(true);
+}
+
+describeBrowser("speed lab", () => {
+  let app: App;
+  let browser: Browser;
+  let page: Page;
+  let api: Awaited<ReturnType<typeof apiSession>>;
+
+  beforeAll(async () => {
+    app = await startApp();
+    browser = await launchBrowser();
+    page = await browser.newPage({ viewport: { width: 390, height: 844 } });
+    await signIn(page, app, headCoach.email);
+    api = await apiSession(app, headCoach.email);
+  }, 300_000);
+  afterAll(async () => {
+    await browser?.close();
+    await app?.stop();
+  });
+
+  it("upload → fit and chart → accept → vmax and the plan's HSR change from the test date on only", async () => {
+    const today = teamToday({ timeZone: "Europe/London", now: new Date() });
+    const thisWeek = startOfWeek(today, 1);
+    const lastWeek = addDays(thisWeek, -7);
+    const nextWeek = addDays(thisWeek, 7);
+    await page.goto(`${app.url}/plan`);
+    const teamId = await page.getByTestId("planner").getAttribute("data-team-id");
+    const hsrOf = async (week: string) => {
+      const plan = (await (await api.fetch(`/api/teams/${teamId}/plan?week=${week}`)).json()) as PlanWeek;
+      return plan.athletes.find((a) => a.name === maya.name)!.load.week.totals.hsrM;
+    };
+    const [lastBefore, nextBefore] = [await hsrOf(lastWeek), await hsrOf(nextWeek)];
+    expect(nextBefore).toBeGreaterThan(0);
+
+    await page.goto(`${app.url}/speed`);
+    await page.getByTestId("retest-due").waitFor();
+    expect(await seriousAxeViolations(page)).toEqual([]);
+    await noSidewaysScroll(page);
+
+    // A file with a problem: the row is named and nothing is saved.
+    const header = "athlete,date,trial,start,distance_m,time_s,body_mass_kg";
+    await page.setInputFiles("#timing-file", {
+      name: "bad.csv",
+      mimeType: "text/csv",
+      buffer: Buffer.from(`${header}\nNobody,${thisWeek},1,standing,10,1.9,\n`),
+    });
+    await page.getByTestId("upload-problems").waitFor();
+    expect(await page.getByTestId("upload-problems").innerText()).toContain(
+      'Line 2 (athlete): Unknown athlete "Nobody"',
+    );
+
+    // T4 splits (lib/speed/README.md §1): vmax 9.5 m/s, τ 1.1 s, dated the first day of this week.
+    const rows = ["0,0", "10,1.969", "20,3.142", "30,4.2345", "40,5.3017"].map(
+      (g) => `${maya.name},${thisWeek},1,standing,${g},`,
+    );
+    await page.setInputFiles("#timing-file", {
+      name: "gates.csv",
+      mimeType: "text/csv",
+      buffer: Buffer.from([header, ...rows].join("\n")),
+    });
+    await page.getByTestId("upload-message").filter({ hasText: "Saved 1 trial" }).waitFor();
+    await page.getByRole("link", { name: `${maya.name} · ${thisWeek}` }).click();
+    await page.getByTestId("speed-profile").waitFor();
+    const fit = page.locator('[data-testid^="fit-"]').first();
+    expect(await fit.innerText()).toContain("vmax 9.50 m/s");
+    expect(await fit.innerText()).toContain("τ 1.10 s");
+    await page.getByTestId("fit-chart").locator("svg").first().waitFor();
+    expect(await seriousAxeViolations(page)).toEqual([]);
+    await noSidewaysScroll(page);
+    await screenshot(page, "speed-profile-before");
+
+    await page.locator('[data-testid^="accept-"]').first().click();
+    await page.getByText(`In use from ${thisWeek}`).waitFor();
+    expect(await page.getByTestId("current-vmaxMs").innerText()).toBe("9.50 m/s");
+    expect(await page.getByTestId("profile-history").innerText()).toContain(`accepted by ${headCoach.name}`);
+    expect(await seriousAxeViolations(page)).toEqual([]);
+    await screenshot(page, "speed-profile-accepted");
+
+    // The plan: last week's HSR as it was; next week's follows the new vmax.
+    expect(await hsrOf(lastWeek)).toBe(lastBefore);
+    expect(await hsrOf(nextWeek)).not.toBe(nextBefore);
+  }, 240_000);
+});
