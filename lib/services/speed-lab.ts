@@ -9,7 +9,7 @@ import {
   listProfileEntries,
 } from "@/lib/data/speed-profiles";
 import { getSpeedTest, insertSpeedTests, insertSpeedUpload } from "@/lib/data/speed-tests";
-import { inTransaction } from "@/lib/data/transaction";
+import { inTeamTransaction } from "@/lib/data/transaction";
 import { AppError } from "@/lib/errors";
 import {
   mergeProfile,
@@ -43,7 +43,7 @@ export async function recordTimingTrials({
   trials: readonly TimingTrialInput[];
   upload?: { fileName: string; content: string } | null;
 }): Promise<{ testIds: number[]; uploadId: number | null }> {
-  return inTransaction(async (transaction) => {
+  return inTeamTransaction(teamId, async (transaction) => {
     const uploadId = upload
       ? (await insertSpeedUpload({ teamId, userId, kind: "timing", ...upload, transaction })).id
       : null;
@@ -79,7 +79,7 @@ export async function acceptSpeedTest({
   userId: number;
   now: Date;
 }): Promise<{ entryId: number; effectiveFrom: string; values: SpeedProfileValues }> {
-  return inTransaction(async (transaction) => {
+  return inTeamTransaction(teamId, async (transaction) => {
     const test = await getSpeedTest({ teamId, testId, transaction });
     const measured = test.kind === "timing" ? timingProfileValues(test.result as TimingTrialAnalysis) : null;
     if (!measured)
