@@ -87,7 +87,7 @@ const TABLE: Line[] = [
   ["PAGE /plan",              "sign-in", "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
   ["PAGE /settings",          "sign-in", "not-allowed", "not-allowed", "not-allowed", "not-allowed", "ok",          "ok"],
   ["PAGE /speed",             "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "ok"],
-  ["PAGE /speed/[athleteId]", "sign-in", "not-allowed", "not-found",   "ok",          "ok",          "ok",          "not-found"],
+  ["PAGE /speed/[athleteId]", "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "not-found"],
   ["PAGE /squad",             "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "ok"],
   ["PAGE /squad/[athleteId]", "sign-in", "ok",          "not-found",   "ok",          "ok",          "ok",          "not-found"],
   ["PAGE /squad/new",         "sign-in", "not-allowed", "not-allowed", "not-allowed", "ok",          "ok",          "ok"],
