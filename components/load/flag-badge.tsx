@@ -31,8 +31,8 @@ export function FlagBadge({
     >
       <FlagShapeIcon kind={kind} />
       {d.label}
-      {count && count > 1 ? <span className="opacity-70">×{count}</span> : null}
-      {provisional ? <span className="opacity-70">(early)</span> : null}
+      {count && count > 1 ? <span className="font-normal">×{count}</span> : null}
+      {provisional ? <span className="font-normal">(early)</span> : null}
     </span>
   );
 }

@@ -5,7 +5,7 @@ import type { ReactTable } from "@tanstack/react-table";
 import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/field";
 import { toCsv } from "@/lib/format/csv";
-import { FLAG_DISPLAY } from "@/lib/load/flag-display";
+import { FLAG_DISPLAY, LOAD_CAUTION } from "@/lib/load/flag-display";
 import type { FlagKind } from "@/lib/load/flags";
 import { COLUMN_LABELS, csvValue, type FlagFilter, type SquadRow, type squadFeatures } from "./squad-load-columns";
 
@@ -17,9 +17,11 @@ const FLAG_KINDS = Object.keys(FLAG_DISPLAY) as FlagKind[];
 function exportCsv(table: Table, week: string) {
   const columns = table.getVisibleLeafColumns().map((c) => c.id);
   const data = table.getRowModel().rows.map((r) => columns.map((id) => csvValue(r.original, id)));
+  // The caution travels with the figures (flags are monitoring aids, not diagnoses).
   const csv = toCsv(
     columns.map((id) => COLUMN_LABELS[id] ?? id),
     data,
+    { note: LOAD_CAUTION },
   );
   const url = URL.createObjectURL(new Blob([csv], { type: "text/csv;charset=utf-8" }));
   const a = document.createElement("a");
@@ -41,7 +43,7 @@ export function SquadToolbar({
   const group = table.getColumn("group");
   const flags = table.getColumn("flags");
   return (
-    <div className="flex flex-wrap items-end gap-3">
+    <div className="relative flex flex-wrap items-end gap-3">
       <label className="flex flex-col gap-1 text-xs font-medium text-ink-600">
         Group
         <Select
@@ -75,7 +77,8 @@ export function SquadToolbar({
           ))}
         </Select>
       </label>
-      <details className="relative">
+      {/* Below sm the list spans the toolbar (it may sit at the right edge); from sm it hangs under its button. */}
+      <details className="sm:relative">
         <summary
           className={clsx(
             "flex h-10 cursor-pointer list-none items-center rounded-lg px-3 text-sm",
@@ -85,7 +88,12 @@ export function SquadToolbar({
         >
           Columns
         </summary>
-        <div className="absolute z-10 mt-1 w-56 space-y-1 rounded-lg bg-paper-raised p-3 shadow-lift ring-1 ring-ink-100">
+        <div
+          className={clsx(
+            "absolute inset-x-0 z-10 mt-1 space-y-1 rounded-lg bg-paper-raised p-3 shadow-lift ring-1 ring-ink-100",
+            "sm:right-auto sm:w-56",
+          )}
+        >
           {table
             .getAllLeafColumns()
             .filter((c) => c.getCanHide())

@@ -39,7 +39,13 @@ export function AlertCard({
         <div>
           <div className="flex flex-wrap items-center gap-2">
             {alert.unread ? (
-              <span className="h-2 w-2 rounded-full bg-flag-spike" aria-label="New" data-testid="alert-new" />
+              <span
+                className="inline-flex items-center gap-1 text-2xs font-semibold text-flag-spike"
+                data-testid="alert-new"
+              >
+                <span aria-hidden className="h-2 w-2 rounded-full bg-flag-spike" />
+                New
+              </span>
             ) : null}
             <h3 className="font-semibold text-ink-950">
               <Link href={`/load/${alert.athleteId}`} className="hover:underline" data-testid="alert-athlete">

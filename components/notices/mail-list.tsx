@@ -26,7 +26,7 @@ export function MailList({ mails }: { mails: MailSummary[] }) {
       {mails.map((m) => (
         <Link key={m.id} href={`/mailbox/${m.id}`} className="block px-4 py-3 hover:bg-ink-50" data-testid="mail-row">
           <div className="flex items-baseline justify-between gap-3">
-            <p className="truncate font-medium text-ink-900" data-testid="mail-subject">
+            <p className="min-w-0 truncate font-medium text-ink-900" data-testid="mail-subject">
               {m.subject || "(no subject)"}
             </p>
             <time className="shrink-0 text-xs text-ink-500 tabular-nums" dateTime={m.receivedAt}>
@@ -34,7 +34,7 @@ export function MailList({ mails }: { mails: MailSummary[] }) {
             </time>
           </div>
           <div className="mt-0.5 flex flex-wrap items-center gap-2 text-xs text-ink-500">
-            <span className="truncate">To {m.to.join(", ") || "(nobody)"}</span>
+            <span className="min-w-0 truncate">To {m.to.join(", ") || "(nobody)"}</span>
             {m.hasCalendar ? <Badge tone="lane">calendar</Badge> : null}
             {m.attachmentCount > 0 && !m.hasCalendar ? <Badge>{m.attachmentCount} attachment(s)</Badge> : null}
           </div>

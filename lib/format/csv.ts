@@ -6,7 +6,12 @@ import Papa from "papaparse";
 // character only. Numbers are never escaped (Papa leaves number cells alone), so -12.5 stays a number.
 const FORMULA_START = /^[=+\-@\t\r\n\uFF1D\uFF0B\uFF0D\uFF20]/;
 
-/** CSV text for a header row and data rows; text cells that a spreadsheet would run get a leading apostrophe. */
-export function toCsv(fields: string[], data: (string | number)[][]): string {
-  return Papa.unparse({ fields, data }, { escapeFormulae: FORMULA_START });
+/**
+ * CSV text for a header row and data rows; text cells that a spreadsheet would run get a leading apostrophe.
+ * `note` goes first as a one-cell line (e.g. the load caution), so it travels with the figures into a spreadsheet.
+ */
+export function toCsv(fields: string[], data: (string | number)[][], options: { note?: string } = {}): string {
+  const table = Papa.unparse({ fields, data }, { escapeFormulae: FORMULA_START });
+  if (!options.note) return table;
+  return `${Papa.unparse([[options.note]], { escapeFormulae: FORMULA_START })}\r\n${table}`;
 }

@@ -16,7 +16,7 @@ export default async function AlertsPage() {
         lead="Load flags raised by the plan (ahead of time) or by what athletes logged. One alert per athlete, flag and week."
       />
       <LoadCaution className="mb-5" />
-      <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
         <AlertInbox canManage={can(viewer.role, "alerts:manage", "team")} />
         <aside className="space-y-4">
           <NotificationSettingsForm />

@@ -30,7 +30,7 @@ export default async function MailboxPage() {
           </span>
         }
       />
-      <div className={outbox ? "grid items-start gap-6 lg:grid-cols-[1fr_20rem]" : undefined}>
+      <div className={outbox ? "grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]" : undefined}>
         <MailList mails={mails} />
         {outbox ? (
           <aside>

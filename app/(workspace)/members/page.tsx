@@ -25,7 +25,7 @@ export default async function MembersPage() {
           "Everyone you add gets an invitation by e-mail and becomes a member only when they accept it."
         }
       />
-      <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div>
           <MemberList members={members} viewerUserId={viewer.userId} />
           <InvitationList invitations={invitations} />
