@@ -4,6 +4,7 @@ import { DndContext, DragOverlay } from "@dnd-kit/core";
 import { clsx } from "clsx";
 import { useCallback, useEffect, useMemo, useState, useSyncExternalStore } from "react";
 import useSWR from "swr";
+import { WeekPrint } from "@/components/print/week-print";
 import { LoadCaution } from "@/components/ui/caution";
 import { fetchJson } from "@/lib/client/fetcher";
 import { planKeys } from "@/lib/client/keys";
@@ -257,6 +258,7 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
 
   return (
     <div
+      className="print:*:hidden"
       data-testid="planner"
       data-team-id={teamId}
       data-save-state={act.saving > 0 ? "saving" : isValidating ? "confirming" : "idle"}
@@ -442,6 +444,7 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
           />
         </>
       ) : null}
+      {shown ? <WeekPrint week={shown} /> : null}
     </div>
   );
 }
