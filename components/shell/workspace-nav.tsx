@@ -7,7 +7,7 @@ import { useEffect, useId, useRef, type KeyboardEvent, type ReactNode } from "re
 import { UnreadBadge } from "@/components/notices/unread-badge";
 import type { NavLink } from "@/lib/nav";
 
-function NavLinks({ links, onFollow }: { links: NavLink[]; onFollow?: () => void }) {
+function NavLinks({ links, onFollow, sheet }: { links: NavLink[]; onFollow?: () => void; sheet?: boolean }) {
   const pathname = usePathname();
   return (
     <ul className="flex flex-col gap-1">
@@ -25,7 +25,7 @@ function NavLinks({ links, onFollow }: { links: NavLink[]; onFollow?: () => void
               )}
             >
               <span>{link.label}</span>
-              {link.unread ? <UnreadBadge count={link.unread} /> : null}
+              {link.unread ? <UnreadBadge count={link.unread} testId={!sheet} /> : null}
             </Link>
           </li>
         );
@@ -89,7 +89,7 @@ export function WorkspaceNav({ links, footer }: { links: NavLink[]; footer?: Rea
         </svg>
         Menu
         {current ? <span className="sr-only">, on {current.label}</span> : null}
-        {unread > 0 ? <UnreadBadge count={unread} /> : null}
+        {unread > 0 ? <UnreadBadge count={unread} testId={false} /> : null}
       </button>
       <dialog
         ref={sheet}
@@ -119,7 +119,7 @@ export function WorkspaceNav({ links, footer }: { links: NavLink[]; footer?: Rea
               Close
             </button>
           </div>
-          <NavLinks links={links} onFollow={close} />
+          <NavLinks links={links} onFollow={close} sheet />
           {footer ? <div className="mt-auto border-t border-ink-100 pt-4">{footer}</div> : null}
         </div>
       </dialog>

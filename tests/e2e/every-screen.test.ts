@@ -219,5 +219,5 @@ describeBrowser("every main screen", () => {
     expect(first).toBe(`"${LOAD_CAUTION}"`);
     expect(header).toMatch(/Athlete/);
     await context.close();
-  });
+  }, 120_000);
 });

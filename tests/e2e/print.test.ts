@@ -148,7 +148,7 @@ describeBrowser("printing a week", () => {
     expect(Number(box[1])).toBeCloseTo(841.89, -1);
     expect(Number(box[2])).toBeCloseTo(595.28, -1);
     await page.close();
-  });
+  }, 120_000);
 
   it("prints one athlete's week, chosen by the coach, and the athlete's own week", async () => {
     const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
@@ -175,5 +175,5 @@ describeBrowser("printing a week", () => {
     expect(printed.cut).toEqual([]);
     expect(printed.sessions.map((s) => s.text).join(" ")).toContain("Acceleration – Standing starts");
     await mine.close();
-  });
+  }, 120_000);
 });
