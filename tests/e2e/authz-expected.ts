@@ -55,6 +55,7 @@ const TABLE: Line[] = [
   ["PUT /api/sessions/[sessionId]/log",                401,   200,   404,   403,   200,   200,   404],
   ["DELETE /api/sessions/[sessionId]/log",             401,   200,   404,   403,   200,   200,   404],
   ["GET /api/teams/[teamId]/load",                     401,   403,   403,   200,   200,   200,   404],
+  ["GET /api/teams/[teamId]/plan-vs-actual",           401,   403,   403,   200,   200,   200,   404],
   ["GET /api/teams/[teamId]/plan",                     401,   200,   200,   200,   200,   200,   404],
   ["POST /api/teams/[teamId]/plan/[tool]",             401,   403,   403,   403,   200,   200,   404],
   ["POST /api/teams/[teamId]/sessions",                401,   403,   403,   403,   201,   201,   404],

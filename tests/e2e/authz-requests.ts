@@ -130,6 +130,7 @@ export const REQUESTS: Record<string, Build> = {
     return api("DELETE", `/api/sessions/${id}/log`);
   },
   "GET /api/teams/[teamId]/load": async (w) => api("GET", `/api/teams/${w.teamId}/load`),
+  "GET /api/teams/[teamId]/plan-vs-actual": async (w) => api("GET", `/api/teams/${w.teamId}/plan-vs-actual`),
   "GET /api/teams/[teamId]/plan": async (w) => api("GET", `/api/teams/${w.teamId}/plan`),
   "POST /api/teams/[teamId]/plan/[tool]": async (w) =>
     api("POST", `/api/teams/${w.teamId}/plan/publish`, { week: farWeek }),
