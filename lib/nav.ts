@@ -20,6 +20,7 @@ export const NAV: NavItem[] = [
   { href: "/home", label: "Today", can: "team:view", scope: "own" },
   { href: "/plan", label: "Week plan", can: "plan:view", scope: "team" },
   { href: "/load", label: "Squad load", can: "load:view", scope: "team" },
+  { href: "/plan-vs-actual", label: "Plan vs actual", can: "load:view", scope: "team" },
   { href: "/alerts", label: "Alerts", can: "alerts:view", scope: "team" },
   { href: "/squad", label: "Squad", can: "athletes:view", scope: "team" },
   { href: "/speed", label: "Speed lab", can: "speed:view", scope: "team" },

@@ -13,6 +13,7 @@ import { LoadCaution } from "@/components/ui/caution";
 import { fetchJson } from "@/lib/client/fetcher";
 import { loadKeys } from "@/lib/client/keys";
 import { Card, EmptyState } from "@/components/ui/card";
+import { SortHeader } from "@/components/ui/sort-header";
 import type { SquadWeekDto } from "@/lib/data/load-views";
 import type { LoadView } from "@/lib/load/types";
 import { METRIC_INFO } from "@/lib/load/types";
@@ -94,32 +95,23 @@ export function SquadLoadTable({ teamId, initial }: { teamId: number; initial: S
                   const sorted = header.column.getIsSorted();
                   const id = header.column.id;
                   return (
-                    <th
+                    <SortHeader
                       key={header.id}
-                      scope="col"
+                      sorted={sorted}
+                      onSort={header.column.getToggleSortingHandler()}
+                      testId={`sort-${id}`}
                       title={COLUMN_HINTS[id]}
-                      aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : "none"}
                       className={clsx(
-                        "px-3 py-2.5 font-medium",
+                        "px-3 py-2.5",
                         NUMERIC_COLUMNS.has(id) ? "text-right" : "text-left",
                         id === "name" && "sticky left-0 bg-paper-raised",
                       )}
                     >
-                      <button
-                        type="button"
-                        onClick={header.column.getToggleSortingHandler()}
-                        className={clsx("inline-flex items-center gap-1 hover:text-ink-900", sorted && "text-ink-900")}
-                        data-testid={`sort-${id}`}
-                      >
-                        <table.FlexRender header={header} />
-                        {id === "ratio" || id === "change" ? (
-                          <span className="font-normal text-ink-400">({metric})</span>
-                        ) : null}
-                        <span aria-hidden className="w-3 text-ink-400">
-                          {sorted === "asc" ? "↑" : sorted === "desc" ? "↓" : ""}
-                        </span>
-                      </button>
-                    </th>
+                      <table.FlexRender header={header} />
+                      {id === "ratio" || id === "change" ? (
+                        <span className="font-normal text-ink-400">({metric})</span>
+                      ) : null}
+                    </SortHeader>
                   );
                 })}
               </tr>

@@ -85,6 +85,7 @@ const TABLE: Line[] = [
   ["PAGE /me",                "sign-in", "ok",          "ok",          "not-allowed", "ok",          "ok",          "ok"],
   ["PAGE /members",           "sign-in", "not-allowed", "not-allowed", "not-allowed", "not-allowed", "ok",          "ok"],
   ["PAGE /not-allowed",       "sign-in", "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
+  ["PAGE /plan-vs-actual",    "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "ok"],
   ["PAGE /plan",              "sign-in", "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
   ["PAGE /settings",          "sign-in", "not-allowed", "not-allowed", "not-allowed", "not-allowed", "ok",          "ok"],
   ["PAGE /speed",             "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "ok"],

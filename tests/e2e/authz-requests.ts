@@ -180,6 +180,7 @@ export const REQUESTS: Record<string, Build> = {
   "PAGE /members": async () => page("/members"),
   "PAGE /not-allowed": async () => page("/not-allowed"),
   "PAGE /plan": async () => page("/plan"),
+  "PAGE /plan-vs-actual": async () => page("/plan-vs-actual"),
   "PAGE /settings": async () => page("/settings"),
   "PAGE /speed": async () => page("/speed"),
   "PAGE /speed/[athleteId]": async (w, s) => page(`/speed/${athlete(w, s)}`),

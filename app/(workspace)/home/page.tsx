@@ -1,8 +1,13 @@
 import Link from "next/link";
+import { CoachToday } from "@/components/coach/coach-today";
 import { Card, PageHeader } from "@/components/ui/card";
 import { pageViewer } from "@/lib/auth/page-access";
+import { can } from "@/lib/auth/permissions";
 import { ROLE_LABEL } from "@/lib/auth/roles";
 import { listSquad } from "@/lib/data/athletes";
+import { getCoachToday } from "@/lib/data/coach-today";
+import { formatDayLabel } from "@/lib/dates/plain-date";
+import { viewerClock } from "@/lib/dates/zoned";
 import { navFor } from "@/lib/nav";
 
 export const metadata = { title: "Today" };
@@ -10,6 +15,7 @@ export const metadata = { title: "Today" };
 const BLURB: Record<string, string> = {
   "/plan": "Drag blocks onto the week and watch the load respond.",
   "/load": "HSR metres, contacts, sRPE and ACWR for every athlete this week.",
+  "/plan-vs-actual": "What was prescribed against what the logs say was done.",
   "/alerts": "Spikes and jumps the plan or the logs have raised.",
   "/squad": "Profiles, tested max velocity and training groups.",
   "/me": "Your sessions, your log and your calendar feed.",
@@ -19,6 +25,24 @@ const BLURB: Record<string, string> = {
 
 export default async function HomePage() {
   const viewer = await pageViewer("team:view", "own");
+  // The planners (plan:edit for the team) get their day; everyone else keeps the links for now.
+  if (can(viewer.role, "plan:edit", "team")) {
+    const today = await getCoachToday({ teamId: viewer.teamId, userId: viewer.userId, clock: viewerClock(viewer) });
+    return (
+      <>
+        <PageHeader
+          title={`Hello, ${viewer.name.split(" ")[0]}`}
+          lead={`${formatDayLabel(today.today)} · ${viewer.teamName}`}
+          actions={
+            <Link href="/plan-vs-actual" className="text-sm font-medium text-lane-700 underline">
+              Plan versus actual
+            </Link>
+          }
+        />
+        <CoachToday data={today} />
+      </>
+    );
+  }
   const squad = viewer.role === "athlete" ? [] : await listSquad({ teamId: viewer.teamId });
   const links = navFor(viewer.role).filter((l) => l.href !== "/home");
   return (

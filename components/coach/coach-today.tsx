@@ -1,0 +1,146 @@
+import { Badge } from "@/components/ui/badge";
+import { LoadCaution } from "@/components/ui/caution";
+import type { CoachTodayDto, TodaySession } from "@/lib/data/coach-today";
+import { formatDayLabel } from "@/lib/dates/plain-date";
+import { formatNumber } from "@/lib/format/number";
+import { ALERT_KIND_LABEL } from "@/lib/notices/alert-display";
+import { METRIC_INFO, type Metric } from "@/lib/load/types";
+import { TodayItem, TodaySection } from "./today-section";
+
+const planHref = (week: string) => `/plan?week=${week}`;
+
+function SessionLine({ s, withDate }: { s: TodaySession; withDate?: boolean }) {
+  return (
+    <>
+      <span className="w-12 shrink-0 text-ink-500 tabular-nums">{withDate ? formatDayLabel(s.date) : s.startTime}</span>
+      <span className="font-medium text-ink-900">{s.athleteName}</span>
+      <span className="min-w-0 truncate text-ink-600">{s.title}</span>
+      <span className="ml-auto">
+        {s.status === "draft" ? (
+          <Badge>Draft, not published</Badge>
+        ) : s.logged ? (
+          <Badge tone="steady">Logged</Badge>
+        ) : (
+          <Badge tone="climb">Not logged</Badge>
+        )}
+      </span>
+    </>
+  );
+}
+
+/** The coach's day: each list links to the screen where its items are handled. */
+export function CoachToday({ data }: { data: CoachTodayDto }) {
+  const published = data.sessions.filter((s) => s.status === "published");
+  const logged = published.filter((s) => s.logged).length;
+  const metric = METRIC_INFO[data.acwrMetric as Metric]?.short ?? data.acwrMetric;
+  const week = planHref(data.weekStart);
+  return (
+    <div className="grid gap-4 lg:grid-cols-2" data-testid="coach-today">
+      <TodaySection
+        id="sessions"
+        title={`Today's sessions · ${logged} of ${published.length} logged`}
+        count={data.sessions.length}
+        more={{ href: week, label: "Week plan" }}
+        empty="No sessions planned for today."
+      >
+        {data.sessions.map((s) => (
+          <TodayItem key={s.id} href={week} testId="today-session">
+            <SessionLine s={s} />
+          </TodayItem>
+        ))}
+      </TodaySection>
+
+      <TodaySection
+        id="unlogged"
+        title="Not logged earlier this week"
+        count={data.unlogged.length}
+        more={{ href: week, label: "Week plan" }}
+        empty="Every past session of this week is logged."
+      >
+        {data.unlogged.map((s) => (
+          <TodayItem key={s.id} href={`/load/${s.athleteId}`} testId="today-unlogged">
+            <SessionLine s={s} withDate />
+          </TodayItem>
+        ))}
+      </TodaySection>
+
+      <TodaySection
+        id="alerts"
+        title="Open alerts"
+        count={data.alertCount}
+        more={{ href: "/alerts", label: "Alerts" }}
+        empty="No open alerts."
+      >
+        {data.alerts.map((a) => (
+          <TodayItem key={a.id} href="/alerts" testId="today-alert">
+            <Badge tone={a.level === "alert" ? "spike" : "climb"}>{ALERT_KIND_LABEL[a.kind]}</Badge>
+            <span className="font-medium text-ink-900">{a.athleteName}</span>
+            {a.status === "acknowledged" ? <span className="text-xs text-ink-500">seen</span> : null}
+            <span className="w-full text-xs text-ink-600">{a.reason}</span>
+          </TodayItem>
+        ))}
+      </TodaySection>
+
+      <TodaySection
+        id="spikes"
+        title="Spikes ahead in the next 7 days"
+        count={data.spikes.length}
+        more={{ href: "/load", label: "Squad load" }}
+        empty={`No ACWR (${metric}) at or above ${formatNumber(data.spikeRatio, 2)} in the current plan.`}
+      >
+        {data.spikes.map((s) => (
+          <TodayItem key={s.athleteId} href={planHref(s.weekStart)} testId="today-spike">
+            <Badge tone={s.provisional ? "climb" : "spike"}>Spike{s.provisional ? " (early)" : ""}</Badge>
+            <span className="font-medium text-ink-900">{s.athleteName}</span>
+            <span className="text-ink-600">
+              ACWR ({metric}) {s.ratio.toFixed(2)} on {formatDayLabel(s.date)}
+            </span>
+          </TodayItem>
+        ))}
+      </TodaySection>
+
+      <TodaySection
+        id="restrictions"
+        title="Restrictions starting or ending this week"
+        count={data.restrictions.length}
+        empty="No restriction starts or ends this week."
+      >
+        {data.restrictions.map((r) => (
+          <TodayItem key={`${r.id}-${r.change}`} href={`/squad/${r.athleteId}`} testId="today-restriction">
+            <Badge tone={r.change === "starts" ? "note" : "lane"}>
+              {r.change === "starts" ? "Starts" : "Ends"} {formatDayLabel(r.date)}
+            </Badge>
+            <span className="font-medium text-ink-900">{r.athleteName}</span>
+            <span className="w-full text-xs text-ink-600">{r.description}</span>
+          </TodayItem>
+        ))}
+      </TodaySection>
+
+      <TodaySection
+        id="retests"
+        title="Due a speed re-test"
+        count={data.retests.length}
+        more={{ href: "/squad", label: "Squad" }}
+        empty="Every athlete's max velocity was tested in the last six weeks."
+      >
+        {data.retests.map((r) => (
+          <TodayItem key={r.athleteId} href={`/squad/${r.athleteId}`} testId="today-retest">
+            <span className="font-medium text-ink-900">{r.athleteName}</span>
+            <span className="text-ink-600">
+              {r.lastTestedOn
+                ? `last tested ${formatDayLabel(r.lastTestedOn)} (${r.daysSince} days ago)`
+                : "never tested"}
+            </span>
+          </TodayItem>
+        ))}
+      </TodaySection>
+
+      {/* Slot: recent athlete log notes (lib/data/log-notes.ts, being added with the physio's screens). */}
+      <TodaySection id="notes" title="Notes from athletes" empty="Athletes' notes on their logs will show here." />
+
+      <div className="lg:col-span-2">
+        <LoadCaution />
+      </div>
+    </div>
+  );
+}

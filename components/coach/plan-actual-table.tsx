@@ -1,0 +1,98 @@
+"use client";
+
+import { clsx } from "clsx";
+import { useMemo, useState } from "react";
+import { useTable, type SortingState } from "@tanstack/react-table";
+import { Card, EmptyState } from "@/components/ui/card";
+import { SortHeader } from "@/components/ui/sort-header";
+import type { PlanActualDto } from "@/lib/data/plan-vs-actual";
+import { formatNumber } from "@/lib/format/number";
+import type { Metric } from "@/lib/load/types";
+import {
+  DifferenceText,
+  NUMERIC,
+  completionText,
+  planActualColumns,
+  planActualFeatures,
+  type PlanActualRow,
+} from "./plan-actual-columns";
+
+/** The chosen week, one row per athlete and the squad's line, for one metric. */
+export function PlanActualTable({ data, metric, unit }: { data: PlanActualDto; metric: Metric; unit: string }) {
+  const last = data.weeks.length - 1;
+  const rows = useMemo<PlanActualRow[]>(
+    () => data.athletes.map((a) => ({ ...a.weeks[last], id: a.id, name: a.name, metric })),
+    [data, last, metric],
+  );
+  const [sorting, setSorting] = useState<SortingState>([]);
+  const table = useTable({
+    features: planActualFeatures,
+    columns: planActualColumns,
+    data: rows,
+    state: { sorting },
+    onSortingChange: setSorting,
+    getRowId: (r) => String(r.id),
+  });
+  const squad = data.squad[last];
+  if (rows.length === 0) return <EmptyState title="No athletes yet" />;
+  return (
+    <Card className="overflow-x-auto [contain:inline-size]">
+      <table className="w-full text-sm" data-testid="plan-actual-table">
+        <caption className="sr-only">
+          Prescribed against done per athlete, {unit}, week of {data.weekStart}
+        </caption>
+        <thead className="border-b border-ink-100 text-xs text-ink-500">
+          {table.getHeaderGroups().map((group) => (
+            <tr key={group.id}>
+              {group.headers.map((header) => {
+                const sorted = header.column.getIsSorted();
+                return (
+                  <SortHeader
+                    key={header.id}
+                    sorted={sorted}
+                    onSort={header.column.getToggleSortingHandler()}
+                    className={clsx("px-2 py-2 sm:px-3", NUMERIC.has(header.column.id) ? "text-right" : "text-left")}
+                  >
+                    <table.FlexRender header={header} />
+                  </SortHeader>
+                );
+              })}
+            </tr>
+          ))}
+        </thead>
+        <tbody className="divide-y divide-ink-50">
+          {table.getRowModel().rows.map((row) => (
+            <tr key={row.id} data-testid="plan-actual-row" data-athlete={row.original.name}>
+              {row.getAllCells().map((cell) => (
+                <td
+                  key={cell.id}
+                  className={clsx("px-2 py-2 align-middle sm:px-3", NUMERIC.has(cell.column.id) && "text-right")}
+                >
+                  <table.FlexRender cell={cell} />
+                </td>
+              ))}
+            </tr>
+          ))}
+        </tbody>
+        <tfoot className="border-t-2 border-ink-100 font-semibold" data-testid="plan-actual-squad">
+          <tr>
+            <th scope="row" className="px-2 py-2 text-left sm:px-3">
+              Squad
+            </th>
+            <td className="px-2 py-2 text-right text-ink-500 tabular-nums sm:px-3">
+              {formatNumber(squad.prescribed[metric], 0)}
+            </td>
+            <td className="px-2 py-2 text-right tabular-nums sm:px-3">
+              {formatNumber(squad.prescribedToDate[metric], 0)}
+            </td>
+            <td className="px-2 py-2 text-right tabular-nums sm:px-3">{formatNumber(squad.done[metric], 0)}</td>
+            <td className="px-2 py-2 text-right sm:px-3">
+              <DifferenceText f={squad} m={metric} />
+            </td>
+            <td className="px-2 py-2 text-right tabular-nums sm:px-3">{completionText(squad)}</td>
+          </tr>
+        </tfoot>
+      </table>
+    </Card>
+  );
+}

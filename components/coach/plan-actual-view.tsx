@@ -1,0 +1,75 @@
+"use client";
+
+import { useId, useState } from "react";
+import { Segmented } from "@/components/load/segmented";
+import { shortDate } from "@/components/load/chart-theme";
+import { Card } from "@/components/ui/card";
+import type { PlanActualDto } from "@/lib/data/plan-vs-actual";
+import { formatNumber } from "@/lib/format/number";
+import { PLAN_ACTUAL_METRICS } from "@/lib/load/plan-vs-actual";
+import { METRIC_INFO, type Metric } from "@/lib/load/types";
+import { PlanActualChart } from "./plan-actual-chart";
+import { PlanActualTable } from "./plan-actual-table";
+
+const METRIC_OPTIONS = PLAN_ACTUAL_METRICS.map((m): [Metric, string] => [m, METRIC_INFO[m].short]);
+
+/** The week's table and the last weeks' chart, for one metric at a time (so the table fits a phone). */
+export function PlanActualView({ data }: { data: PlanActualDto }) {
+  const [metric, setMetric] = useState<Metric>("hsrM");
+  const [who, setWho] = useState("squad");
+  const selectId = useId();
+  const info = METRIC_INFO[metric];
+  const athlete = data.athletes.find((a) => String(a.id) === who);
+  const weeks = athlete ? athlete.weeks : data.squad;
+  return (
+    <div className="space-y-5">
+      <Segmented label="Metric compared" value={metric} onChange={setMetric} options={METRIC_OPTIONS} />
+      <section aria-labelledby="pva-week" className="space-y-2">
+        <h2 id="pva-week" className="text-base font-semibold text-ink-900">
+          {info.label} this week, per athlete ({info.unit})
+        </h2>
+        <PlanActualTable data={data} metric={metric} unit={info.unit} />
+        <p className="text-xs text-ink-500">
+          &ldquo;Due so far&rdquo; is the plan of the days already past (and today once logged); the difference is done
+          minus due so far. More than 10 % either way is marked. Logged work only: a session without a log counts
+          nothing here. Metres are estimates from each athlete&apos;s tested max velocity.
+        </p>
+      </section>
+      <section aria-labelledby="pva-trend" className="space-y-2">
+        <div className="flex flex-wrap items-end justify-between gap-2">
+          <h2 id="pva-trend" className="text-base font-semibold text-ink-900">
+            Last {data.weeks.length} weeks
+          </h2>
+          <label htmlFor={selectId} className="flex items-center gap-2 text-sm text-ink-600">
+            Show
+            <select
+              id={selectId}
+              value={who}
+              onChange={(e) => setWho(e.target.value)}
+              className="rounded-lg border border-ink-200 bg-paper-raised px-2 py-1.5 text-sm text-ink-900"
+              data-testid="plan-actual-who"
+            >
+              <option value="squad">Whole squad</option>
+              {data.athletes.map((a) => (
+                <option key={a.id} value={a.id}>
+                  {a.name}
+                </option>
+              ))}
+            </select>
+          </label>
+        </div>
+        <Card className="p-3 sm:p-4">
+          <PlanActualChart weeks={weeks} metric={metric} unit={info.unit} />
+          <ul className="sr-only">
+            {weeks.map((w) => (
+              <li key={w.weekStart}>
+                Week of {shortDate(w.weekStart)}: {formatNumber(w.done[metric], 0)} {info.unit} done of{" "}
+                {formatNumber(w.prescribedToDate[metric], 0)} due
+              </li>
+            ))}
+          </ul>
+        </Card>
+      </section>
+    </div>
+  );
+}

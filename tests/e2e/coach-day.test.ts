@@ -1,0 +1,132 @@
+// The coach's day in a real browser against the built app and the demo club: Today's lists (each a link to where
+// it is handled) and plan versus actual, on a desktop and at 390 px with no sideways scroll, axe-clean, with the
+// figures equal to the squad week's and the plan-versus-actual handler's.
+import type { Browser, Page } from "playwright-core";
+import { afterAll, beforeAll, expect, it } from "vitest";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
+import { DEMO_STAFF } from "@/lib/seed/demo-club";
+import { seriousAxeViolations } from "./axe";
+import { apiSession, describeBrowser, launchBrowser, screenshot, signIn, startApp, type App } from "./harness";
+
+const coach = DEMO_STAFF.find((s) => s.role === "coach")!;
+
+type SquadWeek = {
+  today: string;
+  weekStartDay: number;
+  settings: { spikeRatio: number };
+  rows: { id: number; name: string; dailyRatio: (number | null)[] }[];
+};
+type PlanActual = {
+  weekStart: string;
+  athletes: {
+    id: number;
+    name: string;
+    weeks: { done: Record<string, number>; prescribed: Record<string, number> }[];
+  }[];
+  squad: { done: Record<string, number>; prescribedToDate: Record<string, number> }[];
+};
+
+async function noSidewaysScroll(page: Page): Promise<boolean> {
+  return page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth);
+}
+
+describeBrowser("the coach's day", () => {
+  let app: App;
+  let browser: Browser;
+  let page: Page;
+  let api: Awaited<ReturnType<typeof apiSession>>;
+  let teamId: number;
+
+  beforeAll(async () => {
+    app = await startApp();
+    browser = await launchBrowser();
+    page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await signIn(page, app, coach.email);
+    api = await apiSession(app, coach.email);
+    await page.goto(`${app.url}/plan`);
+    teamId = Number(await page.getByTestId("planner").getAttribute("data-team-id"));
+  }, 300_000);
+  afterAll(async () => {
+    await browser?.close();
+    await app?.stop();
+  });
+
+  it("Today lists the day's sessions, logs, alerts, spikes ahead, restrictions and re-tests, each a link", async () => {
+    await page.goto(`${app.url}/home`);
+    await page.getByTestId("coach-today").waitFor();
+    for (const id of ["sessions", "unlogged", "alerts", "spikes", "restrictions", "retests", "notes"])
+      expect(await page.getByTestId(`today-${id}`).count()).toBe(1);
+    // Flags appear here (alerts, spikes), so the caution does too.
+    expect(await page.getByTestId("load-caution").count()).toBe(1);
+    // Every item is a link to the screen that handles it.
+    const hrefs = await page
+      .locator('[data-testid="coach-today"] li a')
+      .evaluateAll((els) => els.map((e) => e.getAttribute("href") ?? ""));
+    expect(hrefs.length).toBeGreaterThan(0);
+    for (const h of hrefs) expect(h).toMatch(/^\/(plan\?week=\d{4}-\d{2}-\d{2}|alerts|load\/\d+|squad\/\d+)$/);
+    await screenshot(page, "coach-today");
+    expect(await seriousAxeViolations(page)).toEqual([]);
+  });
+
+  it("the spikes ahead are the squad week's own projected ratios at or above the spike line", async () => {
+    const shown = await page.getByTestId("today-spike").evaluateAll((els) => els.map((e) => e.textContent ?? ""));
+    const weekRes = await api.fetch(`/api/teams/${teamId}/load?view=projected`);
+    const thisWeek = (await weekRes.json()) as SquadWeek;
+    const next = (await (
+      await api.fetch(
+        `/api/teams/${teamId}/load?view=projected&week=${addDays(startOfWeek(thisWeek.today, thisWeek.weekStartDay), 7)}`,
+      )
+    ).json()) as SquadWeek;
+    const ws = startOfWeek(thisWeek.today, thisWeek.weekStartDay);
+    const offset = (Date.parse(thisWeek.today) - Date.parse(ws)) / 86_400_000;
+    const expected = thisWeek.rows
+      .filter((r) => {
+        const nextRow = next.rows.find((n) => n.id === r.id)!;
+        const window = [...r.dailyRatio, ...nextRow.dailyRatio].slice(offset, offset + 7);
+        return window.some((x) => x !== null && x - thisWeek.settings.spikeRatio >= -1e-9);
+      })
+      .map((r) => r.name)
+      .sort();
+    const names = expected.filter((n) => shown.some((t) => t.includes(n)));
+    expect(names).toEqual(expected);
+    expect(shown).toHaveLength(expected.length);
+  });
+
+  it("plan versus actual shows the handler's figures: a row per athlete, the squad's line and the chart", async () => {
+    const dto = (await (await api.fetch(`/api/teams/${teamId}/plan-vs-actual`)).json()) as PlanActual;
+    await page.goto(`${app.url}/plan-vs-actual`);
+    await page.getByTestId("plan-actual-table").waitFor();
+    await page.getByTestId("plan-actual-chart").locator("svg").first().waitFor();
+    const rows = await page
+      .getByTestId("plan-actual-row")
+      .evaluateAll((els) => els.map((e) => e.getAttribute("data-athlete")));
+    expect(rows).toEqual(dto.athletes.map((a) => a.name));
+    // The squad's line, HSR metres (the default metric): done as the handler computed it.
+    const squadText = await page.getByTestId("plan-actual-squad").textContent();
+    const done = Math.round(dto.squad[dto.squad.length - 1].done.hsrM).toLocaleString("en-GB");
+    expect(squadText).toContain(done);
+    // Another metric and one athlete's eight weeks.
+    await page.getByRole("button", { name: "sRPE" }).click();
+    await page.getByTestId("plan-actual-who").selectOption(String(dto.athletes[0].id));
+    await page.getByTestId("plan-actual-chart").locator("svg").first().waitFor();
+    await screenshot(page, "plan-vs-actual");
+    expect(await seriousAxeViolations(page)).toEqual([]);
+  });
+
+  it("both screens fit a 390 px phone without sideways scrolling and stay axe-clean", async () => {
+    const phone = await browser.newPage({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
+    await signIn(phone, app, coach.email);
+    await phone.goto(`${app.url}/home`);
+    await phone.getByTestId("coach-today").waitFor();
+    expect(await noSidewaysScroll(phone)).toBe(true);
+    expect(await seriousAxeViolations(phone)).toEqual([]);
+    await screenshot(phone, "coach-today-390");
+    await phone.goto(`${app.url}/plan-vs-actual`);
+    await phone.getByTestId("plan-actual-table").waitFor();
+    await phone.getByTestId("plan-actual-chart").locator("svg").first().waitFor();
+    expect(await noSidewaysScroll(phone)).toBe(true);
+    expect(await seriousAxeViolations(phone)).toEqual([]);
+    await screenshot(phone, "plan-vs-actual-390");
+    await phone.close();
+  });
+});
