@@ -1,5 +1,6 @@
 import { Badge } from "@/components/ui/badge";
 import { LoadCaution } from "@/components/ui/caution";
+import { FlagMark } from "@/components/ui/flag-mark";
 import type { CoachTodayDto, TodaySession } from "@/lib/data/coach-today";
 import { formatDayLabel } from "@/lib/dates/plain-date";
 import { formatNumber } from "@/lib/format/number";
@@ -21,7 +22,7 @@ function SessionLine({ s, withDate }: { s: TodaySession; withDate?: boolean }) {
         ) : s.logged ? (
           <Badge tone="steady">Logged</Badge>
         ) : (
-          <Badge tone="climb">Not logged</Badge>
+          <Badge>Not logged</Badge>
         )}
       </span>
     </>
@@ -73,7 +74,7 @@ export function CoachToday({ data }: { data: CoachTodayDto }) {
       >
         {data.alerts.map((a) => (
           <TodayItem key={a.id} href="/alerts" testId="today-alert">
-            <Badge tone={a.level === "alert" ? "spike" : "climb"}>{ALERT_KIND_LABEL[a.kind]}</Badge>
+            {a.kind === "restriction_override" ? <Badge>{ALERT_KIND_LABEL[a.kind]}</Badge> : <FlagMark kind={a.kind} />}
             <span className="font-medium text-ink-900">{a.athleteName}</span>
             {a.status === "acknowledged" ? <span className="text-xs text-ink-500">seen</span> : null}
             <span className="w-full text-xs text-ink-600">{a.reason}</span>
@@ -90,7 +91,8 @@ export function CoachToday({ data }: { data: CoachTodayDto }) {
       >
         {data.spikes.map((s) => (
           <TodayItem key={s.athleteId} href={planHref(s.weekStart)} testId="today-spike">
-            <Badge tone={s.provisional ? "climb" : "spike"}>Spike{s.provisional ? " (early)" : ""}</Badge>
+            <FlagMark kind="spike" />
+            {s.provisional ? <span className="text-2xs text-ink-500">(early: under 28 days on record)</span> : null}
             <span className="font-medium text-ink-900">{s.athleteName}</span>
             <span className="text-ink-600">
               ACWR ({metric}) {s.ratio.toFixed(2)} on {formatDayLabel(s.date)}
@@ -107,7 +109,7 @@ export function CoachToday({ data }: { data: CoachTodayDto }) {
       >
         {data.restrictions.map((r) => (
           <TodayItem key={`${r.id}-${r.change}`} href={`/squad/${r.athleteId}`} testId="today-restriction">
-            <Badge tone={r.change === "starts" ? "note" : "lane"}>
+            <Badge tone={r.change === "starts" ? "note" : "neutral"}>
               {r.change === "starts" ? "Starts" : "Ends"} {formatDayLabel(r.date)}
             </Badge>
             <span className="font-medium text-ink-900">{r.athleteName}</span>

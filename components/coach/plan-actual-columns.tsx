@@ -44,8 +44,8 @@ export function DifferenceText({ f, m }: { f: PlanActualFigures; m: Metric }) {
       data-off-plan={off ?? "on"}
       className={clsx(
         "whitespace-nowrap tabular-nums",
-        off === "under" && "font-semibold text-flag-under",
-        off === "over" && "font-semibold text-flag-climb",
+        // Words, not a flag colour: being off the plan is not a load flag.
+        off && "font-semibold text-ink-950",
       )}
     >
       {signed(f.difference[m])}
