@@ -13,21 +13,27 @@ const planHref = (week: string) => `/plan?week=${week}`;
 function SessionLine({ s, withDate }: { s: TodaySession; withDate?: boolean }) {
   return (
     <>
-      <span className="w-12 shrink-0 text-ink-500 tabular-nums">{withDate ? formatDayLabel(s.date) : s.startTime}</span>
-      <span className="font-medium text-ink-900">{s.athleteName}</span>
-      <span className="min-w-0 truncate text-ink-600">{s.title}</span>
-      <span className="ml-auto">
-        {s.status === "draft" ? (
-          <Badge>Draft, not published</Badge>
-        ) : s.logged ? (
-          <Badge tone="steady">Logged</Badge>
-        ) : (
-          <Badge>Not logged</Badge>
-        )}
+      {withDate ? null : <span className="w-11 shrink-0 text-ink-500 tabular-nums">{s.startTime}</span>}
+      <span className="min-w-0 flex-1">
+        <span className="block font-medium text-ink-900">{s.athleteName}</span>
+        <span className="block truncate text-xs text-ink-600">
+          {withDate ? `${formatDayLabel(s.date)} · ` : ""}
+          {s.title}
+        </span>
       </span>
+      {s.status === "draft" ? (
+        <Badge>Draft, not published</Badge>
+      ) : s.logged ? (
+        <Badge tone="steady">Logged</Badge>
+      ) : (
+        <Badge>Not logged</Badge>
+      )}
     </>
   );
 }
+
+/** Long lists show their first few here; the rest are on the screen that handles them. */
+const SHOWN = 6;
 
 /** The coach's day: each list links to the screen where its items are handled. */
 export function CoachToday({ data }: { data: CoachTodayDto }) {
@@ -36,11 +42,12 @@ export function CoachToday({ data }: { data: CoachTodayDto }) {
   const metric = METRIC_INFO[data.acwrMetric as Metric]?.short ?? data.acwrMetric;
   const week = planHref(data.weekStart);
   return (
-    <div className="grid gap-4 lg:grid-cols-2" data-testid="coach-today">
+    <div className="grid items-start gap-4 lg:grid-cols-2" data-testid="coach-today">
       <TodaySection
         id="sessions"
-        title={`Today's sessions · ${logged} of ${published.length} logged`}
+        title="Today's sessions"
         count={data.sessions.length}
+        summary={`${logged} of ${published.length} logged`}
         more={{ href: week, label: "Week plan" }}
         empty="No sessions planned for today."
       >
@@ -59,7 +66,7 @@ export function CoachToday({ data }: { data: CoachTodayDto }) {
         empty="Every past session of this week is logged."
       >
         {data.unlogged.map((s) => (
-          <TodayItem key={s.id} href={`/load/${s.athleteId}`} testId="today-unlogged">
+          <TodayItem key={s.id} href={`/load/${s.athleteId}`} testId="today-unlogged-session">
             <SessionLine s={s} withDate />
           </TodayItem>
         ))}
@@ -125,7 +132,7 @@ export function CoachToday({ data }: { data: CoachTodayDto }) {
         more={{ href: "/squad", label: "Squad" }}
         empty="Every athlete's max velocity was tested in the last six weeks."
       >
-        {data.retests.map((r) => (
+        {data.retests.slice(0, SHOWN).map((r) => (
           <TodayItem key={r.athleteId} href={`/squad/${r.athleteId}`} testId="today-retest">
             <span className="font-medium text-ink-900">{r.athleteName}</span>
             <span className="text-ink-600">
@@ -135,6 +142,11 @@ export function CoachToday({ data }: { data: CoachTodayDto }) {
             </span>
           </TodayItem>
         ))}
+        {data.retests.length > SHOWN ? (
+          <TodayItem href="/squad">
+            <span className="text-ink-600">and {data.retests.length - SHOWN} more on the squad page</span>
+          </TodayItem>
+        ) : null}
       </TodaySection>
 
       {/* Slot: recent athlete log notes (lib/data/log-notes.ts, being added with the physio's screens). */}

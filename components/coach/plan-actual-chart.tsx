@@ -29,7 +29,7 @@ export function PlanActualChart({ weeks, metric, unit }: { weeks: PlanActualWeek
           />
           <YAxis
             tick={{ fontSize: 11, fill: CHART.axis }}
-            width={40}
+            width={48}
             tickLine={false}
             axisLine={false}
             tickFormatter={(v: number) => formatNumber(v, 0)}
@@ -39,7 +39,8 @@ export function PlanActualChart({ weeks, metric, unit }: { weeks: PlanActualWeek
             labelFormatter={(l) => `Week of ${shortDate(String(l))}`}
             contentStyle={{ borderRadius: 8, fontSize: 12 }}
           />
-          <Legend wrapperStyle={{ fontSize: 12 }} />
+          {/* Legend words in the axis ink: the plan's bar colour is too light to read as text. */}
+          <Legend wrapperStyle={{ fontSize: 12 }} formatter={(v) => <span style={{ color: CHART.axis }}>{v}</span>} />
           <Bar dataKey="prescribed" name="Prescribed (due)" fill={CHART.planned} isAnimationActive={false} />
           <Bar dataKey="done" name="Done" fill={CHART.actual} isAnimationActive={false} />
         </BarChart>

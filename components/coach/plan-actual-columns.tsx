@@ -49,17 +49,26 @@ export function DifferenceText({ f, m }: { f: PlanActualFigures; m: Metric }) {
       )}
     >
       {signed(f.difference[m])}
-      {pct === null ? "" : ` (${signed(pct)} %)`}
-      {off ? <span className="ml-1 text-2xs font-medium uppercase">{off === "under" ? "under" : "over"}</span> : null}
+      {/* On a phone the percentage and the word go under the figure, so the table keeps to the screen's width. */}
+      {pct === null ? null : <span className="block sm:ml-1 sm:inline">{`${signed(pct)} %`}</span>}
+      {off ? <span className="block text-2xs font-medium uppercase sm:ml-1 sm:inline">{off}</span> : null}
     </span>
   );
 }
 
-export function completionText(f: PlanActualFigures): string {
+export function CompletionText({ f }: { f: PlanActualFigures }) {
   const s = f.sessions;
-  if (s.due === 0) return s.planned === 0 ? "–" : `0 of ${s.planned} due yet`;
-  return `${s.full + s.partly} of ${s.due} · ${formatNumber(f.completionPct ?? 0, 0)} %`;
+  if (s.due === 0) return <span className="text-ink-500">{s.planned === 0 ? "–" : "none due yet"}</span>;
+  return (
+    <span className="whitespace-nowrap tabular-nums">
+      {s.full + s.partly} of {s.due}
+      <span className="block sm:ml-1 sm:inline">{formatNumber(f.completionPct ?? 0, 0)} %</span>
+    </span>
+  );
 }
+
+/** Columns a phone leaves out (the comparison itself is "due so far" against "done"). */
+export const PHONE_HIDDEN = new Set(["prescribed"]);
 
 const helper = createColumnHelper<typeof planActualFeatures, PlanActualRow>();
 
@@ -97,7 +106,7 @@ export const planActualColumns = helper.columns([
   }),
   helper.accessor((r) => r.completionPct ?? -1, {
     id: "completion",
-    header: "Sessions done",
-    cell: (c) => <span className="whitespace-nowrap tabular-nums">{completionText(c.row.original)}</span>,
+    header: "Sessions",
+    cell: (c) => <CompletionText f={c.row.original} />,
   }),
 ]);

@@ -11,7 +11,8 @@ import type { Metric } from "@/lib/load/types";
 import {
   DifferenceText,
   NUMERIC,
-  completionText,
+  CompletionText,
+  PHONE_HIDDEN,
   planActualColumns,
   planActualFeatures,
   type PlanActualRow,
@@ -51,7 +52,11 @@ export function PlanActualTable({ data, metric, unit }: { data: PlanActualDto; m
                     key={header.id}
                     sorted={sorted}
                     onSort={header.column.getToggleSortingHandler()}
-                    className={clsx("px-2 py-2 sm:px-3", NUMERIC.has(header.column.id) ? "text-right" : "text-left")}
+                    className={clsx(
+                      "px-2 py-2 sm:px-3",
+                      NUMERIC.has(header.column.id) ? "text-right" : "text-left",
+                      PHONE_HIDDEN.has(header.column.id) && "hidden sm:table-cell",
+                    )}
                   >
                     <table.FlexRender header={header} />
                   </SortHeader>
@@ -66,7 +71,11 @@ export function PlanActualTable({ data, metric, unit }: { data: PlanActualDto; m
               {row.getAllCells().map((cell) => (
                 <td
                   key={cell.id}
-                  className={clsx("px-2 py-2 align-middle sm:px-3", NUMERIC.has(cell.column.id) && "text-right")}
+                  className={clsx(
+                    "px-2 py-2 align-middle sm:px-3",
+                    NUMERIC.has(cell.column.id) && "text-right",
+                    PHONE_HIDDEN.has(cell.column.id) && "hidden sm:table-cell",
+                  )}
                 >
                   <table.FlexRender cell={cell} />
                 </td>
@@ -79,7 +88,7 @@ export function PlanActualTable({ data, metric, unit }: { data: PlanActualDto; m
             <th scope="row" className="px-2 py-2 text-left sm:px-3">
               Squad
             </th>
-            <td className="px-2 py-2 text-right text-ink-500 tabular-nums sm:px-3">
+            <td className="hidden px-2 py-2 text-right text-ink-500 tabular-nums sm:table-cell sm:px-3">
               {formatNumber(squad.prescribed[metric], 0)}
             </td>
             <td className="px-2 py-2 text-right tabular-nums sm:px-3">
@@ -89,7 +98,9 @@ export function PlanActualTable({ data, metric, unit }: { data: PlanActualDto; m
             <td className="px-2 py-2 text-right sm:px-3">
               <DifferenceText f={squad} m={metric} />
             </td>
-            <td className="px-2 py-2 text-right tabular-nums sm:px-3">{completionText(squad)}</td>
+            <td className="px-2 py-2 text-right tabular-nums sm:px-3">
+              <CompletionText f={squad} />
+            </td>
           </tr>
         </tfoot>
       </table>

@@ -7,6 +7,7 @@ export function TodaySection({
   id,
   title,
   count,
+  summary,
   more,
   empty,
   children,
@@ -14,6 +15,8 @@ export function TodaySection({
   id: string;
   title: string;
   count?: number;
+  /** Said in place of the bare count, e.g. "3 of 5 logged". */
+  summary?: string;
   /** The screen that handles the whole list. */
   more?: { href: string; label: string };
   empty: string;
@@ -26,7 +29,9 @@ export function TodaySection({
         <div className="flex items-baseline justify-between gap-2">
           <h2 id={`today-${id}-title`} className="font-semibold text-ink-950">
             {title}
-            {count !== undefined ? <span className="ml-1.5 text-sm font-normal text-ink-500">({count})</span> : null}
+            {count !== undefined ? (
+              <span className="ml-1.5 text-sm font-normal text-ink-500">({summary ?? count})</span>
+            ) : null}
           </h2>
           {more ? (
             <Link href={more.href} className="shrink-0 text-sm font-medium text-lane-700 underline">
@@ -51,7 +56,9 @@ export function TodayItem({ href, children, testId }: { href: string; children: 
       <Link
         href={href}
         data-testid={testId}
-        className="flex min-h-11 flex-wrap items-center gap-x-2 gap-y-0.5 py-2 text-sm text-ink-800 hover:bg-paper-sunk/60"
+        className={
+          "flex min-h-11 flex-wrap items-center gap-x-2 gap-y-0.5 py-2 text-sm text-ink-800 hover:bg-paper-sunk/60"
+        }
       >
         {children}
       </Link>

@@ -31,9 +31,12 @@ export function SortHeader({
         data-testid={testId}
       >
         {children}
-        <span aria-hidden className="w-3 text-ink-400">
-          {sorted === "asc" ? "↑" : sorted === "desc" ? "↓" : ""}
-        </span>
+        {/* No placeholder while unsorted: on a phone every column's width counts. */}
+        {sorted ? (
+          <span aria-hidden className="text-ink-400">
+            {sorted === "asc" ? "↑" : "↓"}
+          </span>
+        ) : null}
       </button>
     </th>
   );
