@@ -4,9 +4,14 @@ import { FlagMark } from "@/components/ui/flag-mark";
 import type { CoachTodayDto, TodaySession } from "@/lib/data/coach-today";
 import { formatDayLabel } from "@/lib/dates/plain-date";
 import { formatNumber } from "@/lib/format/number";
+import { FLAG_DISPLAY } from "@/lib/load/flag-display";
+import type { FlagKind } from "@/lib/load/flags";
 import { ALERT_KIND_LABEL } from "@/lib/notices/alert-display";
 import { METRIC_INFO, type Metric } from "@/lib/load/types";
 import { TodayItem, TodaySection } from "./today-section";
+
+/** Alerts raised by a load flag show the flag's mark; the others (overrides, pain) their own words. */
+const isFlagKind = (kind: string): kind is FlagKind => Object.prototype.hasOwnProperty.call(FLAG_DISPLAY, kind);
 
 const planHref = (week: string) => `/plan?week=${week}`;
 
@@ -81,7 +86,7 @@ export function CoachToday({ data }: { data: CoachTodayDto }) {
       >
         {data.alerts.map((a) => (
           <TodayItem key={a.id} href="/alerts" testId="today-alert">
-            {a.kind === "restriction_override" ? <Badge>{ALERT_KIND_LABEL[a.kind]}</Badge> : <FlagMark kind={a.kind} />}
+            {isFlagKind(a.kind) ? <FlagMark kind={a.kind} /> : <Badge>{ALERT_KIND_LABEL[a.kind]}</Badge>}
             <span className="font-medium text-ink-900">{a.athleteName}</span>
             {a.status === "acknowledged" ? <span className="text-xs text-ink-500">seen</span> : null}
             <span className="w-full text-xs text-ink-600">{a.reason}</span>
