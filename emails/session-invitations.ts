@@ -2,6 +2,7 @@ import { formatDayLong, formatDayShort } from "@/lib/format/dates";
 import { plural } from "@/lib/format/number";
 import { byStart, sessionLine, type SessionLineInput } from "@/lib/format/session-line";
 import { renderEmail, type EmailPart, type RenderedEmail } from "./layout";
+import { medicalParts } from "./medical-notes";
 
 export interface SessionInvitationsEmailInput {
   athleteName: string;
@@ -14,6 +15,8 @@ export interface SessionInvitationsEmailInput {
   planUrl: string;
   /** The athlete's personal calendar feed, offered as an always-current alternative. */
   feedUrl?: string | null;
+  /** Sessions the coach planned past a restriction from the medical staff, in words (./medical-notes.ts). */
+  medicalNotes?: readonly string[];
 }
 
 export function sessionInvitationsEmail(input: SessionInvitationsEmailInput): RenderedEmail {
@@ -34,6 +37,7 @@ export function sessionInvitationsEmail(input: SessionInvitationsEmailInput): Re
       { kind: "paragraph", text: `Hello ${input.athleteName},` },
       { kind: "paragraph", text: `${from} ${count} for you in ${input.teamName}:` },
       { kind: "list", items: sessions.map(sessionLine) },
+      ...medicalParts(input.medicalNotes),
       {
         kind: "paragraph",
         text: "The attached calendar invitation adds them to your phone's calendar. Changes arrive as updates.",

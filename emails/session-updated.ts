@@ -1,6 +1,7 @@
 import { plural } from "@/lib/format/number";
 import { byStart, sessionLine, type SessionLineInput } from "@/lib/format/session-line";
 import { renderEmail, type RenderedEmail } from "./layout";
+import { medicalParts } from "./medical-notes";
 
 export interface SessionUpdatedEmailInput {
   athleteName: string;
@@ -9,6 +10,8 @@ export interface SessionUpdatedEmailInput {
   /** The sessions as they are now. */
   sessions: readonly SessionLineInput[];
   planUrl: string;
+  /** Sessions the coach planned past a restriction from the medical staff, in words (./medical-notes.ts). */
+  medicalNotes?: readonly string[];
 }
 
 /** A published session moved or changed: the attached REQUEST (higher SEQUENCE) updates the calendar entry. */
@@ -30,6 +33,7 @@ export function sessionUpdatedEmail(input: SessionUpdatedEmailInput): RenderedEm
         text: `${who} changed ${single ? "a session" : "sessions"} in your plan. This is how ${single ? "it looks" : "they look"} now:`,
       },
       { kind: "list", items: sessions.map(sessionLine) },
+      ...medicalParts(input.medicalNotes),
       { kind: "paragraph", text: "The attached calendar update changes the entry in your phone's calendar." },
       { kind: "button", label: "Open my week", url: input.planUrl },
     ],

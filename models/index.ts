@@ -6,6 +6,7 @@ import { openPostgres } from "@/lib/db/postgres";
 import { databaseDialect, databaseStorage, env } from "@/lib/env";
 import { Alert } from "./alert";
 import { Athlete } from "./athlete";
+import { AthleteAvailability } from "./athlete-availability";
 import { AuthSession } from "./auth-session";
 import { BlockTemplate } from "./block-template";
 import { CalendarFeedRender } from "./calendar-feed-render";
@@ -27,6 +28,7 @@ import { SpeedLabSettings } from "./speed-lab-settings";
 import { SpeedProfileEntry } from "./speed-profile-entry";
 import { SpeedTest } from "./speed-test";
 import { SpeedUpload } from "./speed-upload";
+import { SessionMessage } from "./session-message";
 import { Team } from "./team";
 import { TeamLoadSettings } from "./team-load-settings";
 import { TrainingGroup } from "./training-group";
@@ -36,6 +38,7 @@ export { Alert, CalendarToken, NotificationSetting, OutboxMessage, Restriction, 
 export { AuthSession, CalendarFeedRender, LoadLedgerDay };
 export { CheckIn, PainReport, SessionLogChange };
 export { SpeedLabSettings, SpeedProfileEntry, SpeedTest, SpeedUpload };
+export { AthleteAvailability, SessionMessage };
 export {
   Athlete,
   BlockTemplate,
@@ -79,6 +82,9 @@ const models = {
   SpeedProfileEntry,
   SpeedTest,
   SpeedUpload,
+  // Availability and session threads (migration 014): plain id columns, no associations needed.
+  AthleteAvailability,
+  SessionMessage,
 };
 export type Models = typeof models;
 export type Db = Models & { sequelize: Sequelize };

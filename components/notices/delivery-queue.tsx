@@ -11,6 +11,7 @@ const KIND_LABEL: Record<DeliveryRow["kind"], string> = {
   password_reset: "Password reset",
   calendar_request: "Calendar invite",
   calendar_cancel: "Calendar cancellation",
+  session_message: "Session message",
 };
 
 /**

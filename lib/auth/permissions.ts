@@ -18,6 +18,12 @@ export type Action =
   | "alerts:view"
   | "alerts:manage"
   | "restrictions:edit"
+  /** The medical staff's availability level of an athlete (full / modified / unavailable). */
+  | "availability:edit"
+  /** The squad status screen and the medical view of one athlete. */
+  | "status:view"
+  /** A session's thread: read the athlete's log note and the messages, and answer. */
+  | "sessions:discuss"
   | "calendar:manage"
   /** The local mailbox: "own" is mail delivered to the member's own address, nothing else. */
   | "mailbox:view"
@@ -43,6 +49,8 @@ export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
     "alerts:view": "team",
     "alerts:manage": "team",
     "calendar:manage": "team",
+    "status:view": "team",
+    "sessions:discuss": "team",
     "mailbox:view": "own",
     "mailbox:queue": "team",
     "speed:view": "team",
@@ -59,6 +67,8 @@ export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
     "alerts:view": "team",
     "alerts:manage": "team",
     "calendar:manage": "team",
+    "status:view": "team",
+    "sessions:discuss": "team",
     "mailbox:view": "own",
     "speed:view": "team",
     "speed:edit": "team",
@@ -71,6 +81,9 @@ export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
     "alerts:view": "team",
     "alerts:manage": "team",
     "restrictions:edit": "team",
+    "availability:edit": "team",
+    "status:view": "team",
+    "sessions:discuss": "team",
     "mailbox:view": "own",
     "speed:view": "team",
   },
@@ -81,6 +94,7 @@ export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
     "load:view": "own",
     "log:write": "own",
     "calendar:manage": "own",
+    "sessions:discuss": "own",
     "mailbox:view": "own",
   },
 };

@@ -318,8 +318,9 @@ export async function getAthleteSessionDate({
 }
 
 /**
- * Adds one override to the athlete's week: one unresolved alert per athlete × kind × week (a database rule), so a
- * second override that week joins the open alert (its text appended, its count raised) instead of adding one.
+ * Adds one override (or, with kind "restriction_conflict", one new restriction's conflicts) to the athlete's week:
+ * one unresolved alert per athlete × kind × week (a database rule), so a second one that week joins the open
+ * alert (its text appended, its count raised) instead of adding one.
  */
 export async function addOverrideAlert({
   transaction,
@@ -328,6 +329,8 @@ export async function addOverrideAlert({
   date,
   weekStart,
   text,
+  kind = "restriction_override",
+  count = 1,
 }: {
   transaction: Transaction;
   teamId: number;
@@ -335,15 +338,17 @@ export async function addOverrideAlert({
   date: string;
   weekStart: string;
   text: string;
+  kind?: Extract<AlertKind, "restriction_override" | "restriction_conflict">;
+  count?: number;
 }): Promise<void> {
   const { Alert } = await db();
   const open = await Alert.findOne({
-    where: { athleteId, kind: "restriction_override", weekStart, status: ["open", "acknowledged"] },
+    where: { athleteId, kind, weekStart, status: ["open", "acknowledged"] },
     transaction,
   });
   if (open) {
     await open.update(
-      { reason: `${open.reason}\n${text}`, value: open.value + 1, date, flagged: true },
+      { reason: `${open.reason}\n${text}`, value: open.value + count, date, flagged: true },
       { transaction },
     );
     return;
@@ -352,10 +357,10 @@ export async function addOverrideAlert({
     {
       teamId,
       athleteId,
-      kind: "restriction_override",
+      kind,
       level: "caution",
       metric: null,
-      value: 1,
+      value: count,
       threshold: 0,
       date,
       weekStart,

@@ -2,7 +2,7 @@ import "server-only";
 import { Op, type Transaction, type WhereOptions } from "sequelize";
 import type { BlockKind } from "@/lib/load/types";
 import { AppError } from "@/lib/errors";
-import { describeRestriction, isCurrent, type Restriction } from "@/lib/restrictions/rules";
+import { describeRestriction, isCurrent, type Restriction, type RestrictionRule } from "@/lib/restrictions/rules";
 import type { CreateRestrictionInput } from "@/lib/validations/restrictions";
 import { db, type Restriction as RestrictionRow, type RestrictionOverride as RestrictionOverrideRow } from "@/models";
 import { userNames } from "./users";
@@ -20,6 +20,7 @@ export function toRestriction(row: RestrictionRow, names: ReadonlyMap<number, st
   };
   if (row.rule === "no_kind")
     return { ...base, rule: "no_kind", blockKinds: JSON.parse(row.blockKinds ?? "[]") as BlockKind[] };
+  if (row.rule === "no_training") return { ...base, rule: "no_training" };
   if (row.rule === "max_intensity") return { ...base, rule: "max_intensity", maxPct: row.limitValue ?? 100 };
   return { ...base, rule: "contact_cap", maxContacts: row.limitValue ?? 0 };
 }
@@ -89,6 +90,9 @@ export async function listCurrentRestrictions({
   return (await listRestrictions({ teamId, athleteIds: [athleteId], from: today })).filter((r) => isCurrent(r, today));
 }
 
+/** What a new restriction row holds: the physio's form, or the rule an availability level implies. */
+export type RestrictionValues = RestrictionRule & { startsOn: string; endsOn?: string | null; note: string };
+
 /** A restriction on an athlete of the team (404 for an athlete elsewhere). */
 export async function insertRestriction({
   teamId,
@@ -100,7 +104,7 @@ export async function insertRestriction({
   teamId: number;
   athleteId: number;
   actorUserId: number;
-  input: CreateRestrictionInput;
+  input: CreateRestrictionInput | RestrictionValues;
   transaction: Transaction;
 }): Promise<Restriction> {
   const { Athlete, Restriction } = await db();

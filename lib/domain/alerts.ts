@@ -1,7 +1,15 @@
 // Value sets of load alerts and of who gets them by e-mail.
 
 /** "pain": an athlete's pain report above the team's line (lib/domain/wellbeing.ts), not a load figure. */
-export const ALERT_KINDS = ["spike", "weekly_jump", "plyo_volume", "recovery", "restriction_override", "pain"] as const;
+export const ALERT_KINDS = [
+  "spike",
+  "weekly_jump",
+  "plyo_volume",
+  "recovery",
+  "restriction_override",
+  "pain",
+  "restriction_conflict",
+] as const;
 export type AlertKind = (typeof ALERT_KINDS)[number];
 
 export const ALERT_STATUSES = ["open", "acknowledged", "resolved"] as const;

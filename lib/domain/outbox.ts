@@ -7,6 +7,7 @@ export const OUTBOX_KINDS = [
   "password_reset",
   "calendar_request",
   "calendar_cancel",
+  "session_message",
 ] as const;
 export type OutboxKind = (typeof OUTBOX_KINDS)[number];
 

@@ -12,6 +12,7 @@ export const ALERT_KIND_LABEL: Record<AlertKind, string> = {
   recovery: FLAG_DISPLAY.recovery.label,
   restriction_override: "Restriction overridden",
   pain: "Pain reported",
+  restriction_conflict: "Plan against a new restriction",
 };
 
 export const ALERT_KIND_HINT: Record<AlertKind, string> = {
@@ -21,6 +22,8 @@ export const ALERT_KIND_HINT: Record<AlertKind, string> = {
   recovery: FLAG_DISPLAY.recovery.hint,
   restriction_override: "A session was planned against a restriction the medical staff set.",
   pain: "The athlete reported pain or discomfort above the team's line with a session log.",
+  restriction_conflict:
+    "The medical staff set a restriction that sessions already planned break: change or confirm them.",
 };
 
 /** Where each alert kind is explained ("How figures are worked out"); overrides are not a load figure. */
@@ -31,6 +34,7 @@ export const ALERT_KIND_TOPIC: Record<AlertKind, FiguresTopic | null> = {
   recovery: "recovery",
   restriction_override: null,
   pain: null,
+  restriction_conflict: null,
 };
 
 function isMetric(value: string | null): value is Metric {
@@ -66,6 +70,8 @@ export function alertMeasure(alert: AlertFacts): {
       return { metricLabel: "Overrides that week", unit: null, direction: "count" };
     case "pain":
       return { metricLabel: "Pain (0–10)", unit: null, direction: "above" };
+    case "restriction_conflict":
+      return { metricLabel: "Planned sessions that break it", unit: null, direction: "count" };
   }
 }
 

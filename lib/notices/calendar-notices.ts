@@ -11,6 +11,11 @@ import { enqueueMail } from "@/lib/data/outbox";
 import { appUrl } from "@/lib/env";
 import { startOfWeek } from "@/lib/dates/plain-date";
 import type { SessionChange, SessionSnapshot } from "@/lib/plan/changes";
+import type { RestrictionHit } from "@/lib/restrictions/rules";
+import { medicalNote } from "@/emails/medical-notes";
+
+/** Restrictions a change was let past with the coach's reason (lib/services/restriction-guard.ts). */
+export type PlannedPast = { hits: ReadonlyArray<RestrictionHit & { sessionId: number }>; reason: string };
 
 export type CalendarAction =
   { method: "REQUEST"; update: boolean; session: CalendarSession } | { method: "CANCEL"; session: CalendarSession };
@@ -82,11 +87,13 @@ export async function queueCalendarNotices({
   teamId,
   actorUserId,
   changes,
+  overrides = null,
 }: {
   transaction: Transaction;
   teamId: number;
   actorUserId: number;
   changes: readonly SessionChange[];
+  overrides?: PlannedPast | null;
 }): Promise<number> {
   const actions = changes
     .map((c) => ({ athleteId: c.athleteId, action: calendarActionFor(c) }))
@@ -109,6 +116,12 @@ export async function queueCalendarNotices({
 
   for (const [athleteId, contact] of contacts) {
     const mine = actions.filter((a) => a.athleteId === athleteId).map((a) => a.action);
+    const medicalNotesOf = (sessions: readonly CalendarSession[]) => {
+      const ids = new Set(sessions.map((s) => Number(s.id)));
+      return (overrides?.hits ?? [])
+        .filter((h) => h.athleteId === athleteId && ids.has(h.sessionId))
+        .map((h) => medicalNote(h, overrides!.reason));
+    };
     const send = async (method: "REQUEST" | "CANCEL", sessions: CalendarSession[], mail: RenderedEmail) => {
       let icalEvent: { method: typeof method; content: string } | null = null;
       try {
@@ -153,6 +166,7 @@ export async function queueCalendarNotices({
           sessions,
           planUrl: meUrl(base),
           feedUrl: `${meUrl(base)}#calendar`,
+          medicalNotes: medicalNotesOf(sessions),
         }),
       );
     }
@@ -167,6 +181,7 @@ export async function queueCalendarNotices({
           coachName: organizer.name,
           sessions: updates,
           planUrl: meUrl(base),
+          medicalNotes: medicalNotesOf(updates),
         }),
       );
     const cancels = mine.filter((a) => a.method === "CANCEL").map((a) => a.session);

@@ -2,7 +2,7 @@ import "server-only";
 import type { Transaction } from "sequelize";
 import { getAthleteSessionDate } from "@/lib/data/alerts";
 import type { SessionChange } from "@/lib/plan/changes";
-import { queueCalendarNotices } from "./calendar-notices";
+import { queueCalendarNotices, type PlannedPast } from "./calendar-notices";
 import { evaluateLoadAlerts } from "./load-alerts";
 import { splitAthleteMoves } from "./session-changes";
 import { kickOutbox } from "./outbox-worker";
@@ -23,8 +23,10 @@ export async function afterPlanChange(args: {
   teamId: number;
   actorUserId: number;
   changes: SessionChange[];
+  /** Sessions planned past a restriction with the coach's reason: the athlete's mail mentions them. */
+  overrides?: PlannedPast | null;
 }): Promise<void> {
-  const { transaction, teamId, actorUserId } = args;
+  const { transaction, teamId, actorUserId, overrides } = args;
   const changes = splitAthleteMoves(args.changes);
   if (changes.length === 0) return;
   const datesByAthlete = new Map<number, Set<string>>();
@@ -37,7 +39,7 @@ export async function afterPlanChange(args: {
   for (const [athleteId, dates] of datesByAthlete) {
     await evaluateLoadAlerts({ transaction, teamId, athleteId, dates: [...dates], basis: "planned" });
   }
-  await queueCalendarNotices({ transaction, teamId, actorUserId, changes });
+  await queueCalendarNotices({ transaction, teamId, actorUserId, changes, overrides });
   wakeOutboxOnCommit(transaction);
 }
 

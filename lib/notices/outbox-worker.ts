@@ -47,7 +47,13 @@ function describeError(err: unknown): string {
 }
 
 /** Team mail that only members may read; invitations and reset links go to people who are not (yet) members. */
-const MEMBERS_ONLY: ReadonlySet<OutboxKind> = new Set(["alert", "digest", "calendar_request", "calendar_cancel"]);
+const MEMBERS_ONLY: ReadonlySet<OutboxKind> = new Set([
+  "alert",
+  "digest",
+  "calendar_request",
+  "calendar_cancel",
+  "session_message",
+]);
 
 function domainOf(from: string): string {
   return /@([^>\s]+)>?\s*$/.exec(from)?.[1] ?? "sprintwright.local";

@@ -11,15 +11,18 @@ import { formatNumber } from "@/lib/format/number";
  * What a restriction limits:
  * - "no_kind": no blocks of the listed kinds (e.g. no max-velocity running while a hamstring settles);
  * - "max_intensity": running blocks at most this % of the athlete's vmax;
- * - "contact_cap": at most this many plyometric ground contacts in one session.
+ * - "contact_cap": at most this many plyometric ground contacts in one session;
+ * - "no_training": no blocks at all (the athlete is unavailable).
  */
 export const RESTRICTION_RULES = ["no_kind", "max_intensity", "contact_cap"] as const;
-export type RestrictionRuleKind = (typeof RESTRICTION_RULES)[number];
+/** The form's rules, and "no_training": no session at all, set only through an athlete's availability (lib/availability). */
+export type RestrictionRuleKind = (typeof RESTRICTION_RULES)[number] | "no_training";
 
 export type RestrictionRule =
   | { rule: "no_kind"; blockKinds: BlockKind[] }
   | { rule: "max_intensity"; maxPct: number }
-  | { rule: "contact_cap"; maxContacts: number };
+  | { rule: "contact_cap"; maxContacts: number }
+  | { rule: "no_training" };
 
 export type Restriction = RestrictionRule & {
   id: number;
@@ -55,6 +58,7 @@ export const RESTRICTION_RULE_LABEL: Record<RestrictionRuleKind, string> = {
   no_kind: "Leave out block kinds",
   max_intensity: "Cap running intensity",
   contact_cap: "Cap ground contacts per session",
+  no_training: "No training",
 };
 
 /** The last day the restriction applies, or null when it is open-ended. */
@@ -91,6 +95,8 @@ function describeRule(r: RestrictionRule): string {
       return `Running at most ${formatNumber(r.maxPct)}% of vmax`;
     case "contact_cap":
       return `At most ${formatNumber(r.maxContacts)} ground contacts per session`;
+    case "no_training":
+      return "No training (unavailable)";
   }
 }
 
@@ -127,6 +133,8 @@ export function ruleBreaches(r: RestrictionRule, blocks: readonly BlockInput[]):
       const total = blocks.reduce((t, b) => t + contactsOf(b), 0);
       return total > r.maxContacts ? [`${formatNumber(total)} ground contacts in the session`] : [];
     }
+    case "no_training":
+      return blocks.map((b) => `${b.title}: ${BLOCK_KIND_LABEL[b.kind].toLowerCase()}`);
   }
 }
 

@@ -71,10 +71,11 @@ export async function notify({
 }) {
   if (changes.length === 0) return;
   guardPlausibility(changes, confirmed);
-  await guardRestrictions({ transaction, teamId, actorUserId, changes, override });
+  const overridden = await guardRestrictions({ transaction, teamId, actorUserId, changes, override });
   // The load ledger takes the change in before anything reads a figure, and commits with it (README §12).
   await refreshLedger({ transaction });
-  await afterPlanChange({ transaction, teamId, actorUserId, changes });
+  const overrides = override && overridden.length > 0 ? { hits: overridden, reason: override.reason } : null;
+  await afterPlanChange({ transaction, teamId, actorUserId, changes, overrides });
 }
 
 /** The athletes' days a list of changes touched, each once. */

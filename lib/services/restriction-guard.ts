@@ -13,7 +13,7 @@ import { kickOutbox } from "@/lib/notices/outbox-worker";
 import type { Override, SessionChange } from "@/lib/plan/changes";
 import { newHits, restrictionHits, type RestrictionHit } from "@/lib/restrictions/rules";
 
-type Hit = RestrictionHit & { sessionId: number };
+export type Hit = RestrictionHit & { sessionId: number };
 
 /** What the changes add against the athletes' restrictions (sessions already let through are not asked again). */
 async function hitsOf(teamId: number, changes: readonly SessionChange[], transaction: Transaction): Promise<Hit[]> {
@@ -32,6 +32,7 @@ async function hitsOf(teamId: number, changes: readonly SessionChange[], transac
  * The one check every plan write passes, inside its transaction: a change that breaks a physio restriction
  * is refused (409 "restricted", with the hits) unless it carries the coach's reason. With a reason it is
  * saved, the override is recorded, and the medical staff get an alert and (by their e-mail choice) a mail.
+ * Returns the hits let through, so the athlete's calendar mail can say which restriction was planned past.
  */
 export async function guardRestrictions({
   transaction,
@@ -45,9 +46,9 @@ export async function guardRestrictions({
   actorUserId: number;
   changes: readonly SessionChange[];
   override?: Override | null;
-}): Promise<void> {
+}): Promise<Hit[]> {
   const hits = await hitsOf(teamId, changes, transaction);
-  if (hits.length === 0) return;
+  if (hits.length === 0) return hits;
   if (!override) {
     const first = hits[0]!;
     const more = hits.length > 1 ? ` (and ${hits.length - 1} more)` : "";
@@ -58,6 +59,7 @@ export async function guardRestrictions({
     );
   }
   await recordOverrides({ transaction, teamId, actorUserId, hits, reason: override.reason });
+  return hits;
 }
 
 async function recordOverrides({

@@ -1,20 +1,33 @@
 import "server-only";
 import { getRestriction, insertRestriction, setRestrictionLifted } from "@/lib/data/restrictions";
 import { inTeamTransaction } from "@/lib/data/transaction";
+import type { SessionConflict } from "@/lib/restrictions/conflicts";
 import type { Restriction } from "@/lib/restrictions/rules";
 import type { CreateRestrictionInput } from "@/lib/validations/restrictions";
+import { reportNewRestriction } from "./restriction-conflicts";
 
 // The medical staff's restriction writes. The check every plan write passes against them is the guard
 // (./restriction-guard.ts).
 
-/** A physio sets a restriction on an athlete of their team (404 for an athlete elsewhere). */
-export async function createRestriction(args: {
+/**
+ * A physio sets a restriction on an athlete of their team (404 for an athlete elsewhere). The sessions already
+ * planned that break it come back as `conflicts` and reach the coaches (./restriction-conflicts.ts).
+ */
+export async function createRestriction({
+  today,
+  ...args
+}: {
   teamId: number;
   athleteId: number;
   actorUserId: number;
   input: CreateRestrictionInput;
-}): Promise<Restriction> {
-  return inTeamTransaction(args.teamId, (transaction) => insertRestriction({ ...args, transaction }));
+  today: string;
+}): Promise<{ restriction: Restriction; conflicts: SessionConflict[] }> {
+  return inTeamTransaction(args.teamId, async (transaction) => {
+    const restriction = await insertRestriction({ ...args, transaction });
+    const conflicts = await reportNewRestriction({ transaction, teamId: args.teamId, restriction, today });
+    return { restriction, conflicts };
+  });
 }
 
 /**

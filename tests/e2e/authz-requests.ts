@@ -59,6 +59,9 @@ export const REQUESTS: Record<string, Build> = {
     api("POST", `/api/athletes/${athlete(w, s)}/calendar-token`),
   "DELETE /api/athletes/[athleteId]/calendar-token": async (w, s) =>
     api("DELETE", `/api/athletes/${athlete(w, s)}/calendar-token`),
+  // Full training: the matrix checks who may set it without putting a restriction on anyone's plan.
+  "POST /api/athletes/[athleteId]/availability": async (w, s) =>
+    api("POST", `/api/athletes/${athlete(w, s)}/availability`, { level: "full", startsOn: w.today(), note: "Matrix" }),
   "GET /api/athletes/[athleteId]/load": async (w, s) => api("GET", `/api/athletes/${athlete(w, s)}/load`),
   "GET /api/athletes/[athleteId]/restrictions": async (w, s) =>
     api("GET", `/api/athletes/${athlete(w, s)}/restrictions`),
@@ -121,6 +124,10 @@ export const REQUESTS: Record<string, Build> = {
     const { id, version, blockId } = await w.session(athlete(w, s));
     return api("DELETE", `/api/sessions/${id}/blocks/${blockId}?version=${version}`);
   },
+  "GET /api/sessions/[sessionId]/messages": async (w, s) =>
+    api("GET", `/api/sessions/${(await w.session(athlete(w, s))).id}/messages`),
+  "POST /api/sessions/[sessionId]/messages": async (w, s) =>
+    api("POST", `/api/sessions/${(await w.session(athlete(w, s))).id}/messages`, { body: "Matrix message" }),
   "PUT /api/sessions/[sessionId]/log": async (w, s) =>
     api("PUT", `/api/sessions/${(await w.session(athlete(w, s))).id}/log`, { completion: "yes", rpe: 6, minutes: 45 }),
   "DELETE /api/sessions/[sessionId]/log": async (w, s) => {

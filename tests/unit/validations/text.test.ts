@@ -10,6 +10,8 @@ import { createSessionSchema, overrideSchema } from "@/lib/validations/plan";
 import { createRestrictionSchema } from "@/lib/validations/restrictions";
 import { templateSchema } from "@/lib/validations/template";
 import { lineText, noteText } from "@/lib/validations/text";
+import { availabilitySchema } from "@/lib/validations/availability";
+import { sessionMessageSchema } from "@/lib/validations/session-messages";
 
 // Control characters are Unicode category Cc (U+0000–U+001F, U+007F–U+009F), Unicode 15 §4.5 / UAX #44.
 const CONTROLS = ["\u0000", "\u0001", "\u0008", "\u000b", "\u001b", "\u007f", "\u0085", "\u009f"];
@@ -123,6 +125,8 @@ const cases: [string, z.ZodType, unknown, (string | number)[]][] = [
     { rule: "contact_cap", maxContacts: 50, startsOn: "2026-03-02", note: "ankle" },
     ["note"],
   ],
+  ["availability note", availabilitySchema, { level: "modified", startsOn: "2026-03-02", note: "ankle" }, ["note"]],
+  ["session message", sessionMessageSchema, { body: "see you at 9" }, ["body"]],
   ["template title", templateSchema, { ...plyo, durationMin: 20, plannedRpe: 4 }, ["title"]],
   ["drill name", templateSchema, { ...plyo, durationMin: 20, plannedRpe: 4 }, ["drills", 0, "name"]],
 ];

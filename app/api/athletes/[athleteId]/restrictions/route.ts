@@ -1,4 +1,5 @@
 import { requireAthlete } from "@/lib/auth/access";
+import { teamToday } from "@/lib/dates/zoned";
 import { listAthleteRestrictions, listOverrides } from "@/lib/data/restrictions";
 import { createRestriction } from "@/lib/services/restrictions";
 import { parseJson, parseParams, route } from "@/lib/http";
@@ -19,11 +20,18 @@ export const GET = route<Params>(async (_req, { params }) => {
   return Response.json({ restrictions, overrides });
 });
 
-/** The medical staff set a new restriction. */
+/** The medical staff set a new restriction; `conflicts` lists the sessions already planned that break it. */
 export const POST = route<Params>(async (req, { params }) => {
   const { athleteId } = parseParams(await params, athleteParamsSchema);
   const viewer = await requireAthlete({ athleteId, can: "restrictions:edit" });
   const input = await parseJson(req, createRestrictionSchema);
-  const restriction = await createRestriction({ teamId: viewer.teamId, athleteId, actorUserId: viewer.userId, input });
-  return Response.json({ restriction }, { status: 201 });
+  const today = teamToday({ timeZone: viewer.timeZone, now: new Date() });
+  const { restriction, conflicts } = await createRestriction({
+    teamId: viewer.teamId,
+    athleteId,
+    actorUserId: viewer.userId,
+    input,
+    today,
+  });
+  return Response.json({ restriction, conflicts }, { status: 201 });
 });

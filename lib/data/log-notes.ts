@@ -1,0 +1,74 @@
+import "server-only";
+import { Op } from "sequelize";
+import type { Completion } from "@/lib/domain/sessions";
+import { db } from "@/models";
+import { countSessionMessages } from "./session-messages";
+
+export type LogNote = {
+  sessionId: number;
+  athleteId: number;
+  athleteName: string;
+  /** The session's day, YYYY-MM-DD. */
+  date: string;
+  title: string;
+  note: string;
+  completion: Completion;
+  rpe: number | null;
+  /** When the athlete last saved the log (ISO). */
+  loggedAt: string;
+  /** Messages in the session's thread. */
+  messages: number;
+};
+
+/**
+ * Notes athletes wrote in their logs, newest session first: what staff screens show so a note such as "felt a
+ * twinge in the left hamstring" reaches the coach and the physio. Only logs with a note; `since` is a session day.
+ */
+export async function recentLogNotes({
+  teamId,
+  athleteIds,
+  since,
+  limit = 20,
+}: {
+  teamId: number;
+  athleteIds?: readonly number[];
+  since?: string;
+  limit?: number;
+}): Promise<LogNote[]> {
+  const { SessionLog, PlannedSession, Athlete } = await db();
+  const rows = await SessionLog.findAll({
+    where: {
+      notes: { [Op.and]: [{ [Op.ne]: null }, { [Op.ne]: "" }] },
+      ...(athleteIds ? { athleteId: { [Op.in]: [...athleteIds] } } : {}),
+    },
+    attributes: ["sessionId", "athleteId", "notes", "completion", "rpe", "updatedAt"],
+    include: [
+      {
+        model: PlannedSession,
+        as: "session",
+        attributes: ["id", "date", "title", "teamId"],
+        where: { teamId, ...(since ? { date: { [Op.gte]: since } } : {}) },
+        required: true,
+      },
+      { model: Athlete, as: "athlete", attributes: ["id", "name"], required: true },
+    ],
+    order: [
+      [{ model: PlannedSession, as: "session" }, "date", "DESC"],
+      ["updatedAt", "DESC"],
+    ],
+    limit,
+  });
+  const counts = await countSessionMessages({ sessionIds: rows.map((r) => r.sessionId) });
+  return rows.map((r) => ({
+    sessionId: r.sessionId,
+    athleteId: r.athleteId,
+    athleteName: r.athlete!.name,
+    date: String(r.session!.date).slice(0, 10),
+    title: r.session!.title,
+    note: r.notes ?? "",
+    completion: r.completion,
+    rpe: r.rpe,
+    loggedAt: r.updatedAt.toISOString(),
+    messages: counts.get(r.sessionId) ?? 0,
+  }));
+}
