@@ -22,6 +22,7 @@ export const NAV: NavItem[] = [
   { href: "/load", label: "Squad load", can: "load:view", scope: "team" },
   { href: "/plan-vs-actual", label: "Plan vs actual", can: "load:view", scope: "team" },
   { href: "/alerts", label: "Alerts", can: "alerts:view", scope: "team" },
+  { href: "/status", label: "Squad status", can: "status:view", scope: "team" },
   { href: "/squad", label: "Squad", can: "athletes:view", scope: "team" },
   { href: "/speed", label: "Speed lab", can: "speed:view", scope: "team" },
   { href: "/me", label: "My training", can: "log:write", scope: "own" },

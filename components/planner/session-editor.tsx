@@ -13,6 +13,7 @@ import { toBlockInput } from "@/lib/plan/blocks";
 import { newPlausibilityChecks, type PlausibilityCheck } from "@/lib/plan/plausibility";
 import type { PlanSession, PlanTemplate } from "@/lib/plan/types";
 import { sessionEditSchema, type SessionEditValues } from "@/lib/validations/plan";
+import { SessionThread } from "@/components/sessions/session-thread";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { BlockFields } from "./block-fields";
@@ -63,6 +64,7 @@ export function SessionEditor(props: Props) {
           <SessionDetails session={session} />
         )
       ) : null}
+      {session ? <SessionThread sessionId={session.id} className="mt-5 border-t border-ink-100 pt-4" /> : null}
     </Dialog>
   );
 }

@@ -18,6 +18,11 @@ import {
 } from "@/lib/validations/restrictions";
 
 const FIELDS = ["rule", "blockKinds", "maxPct", "maxContacts", "startsOn", "endsOn", "note"] as const;
+/** What the physio is told about sessions planned before the restriction that break it (the coaches were sent them). */
+export function conflictsLine(count: number): string {
+  if (count === 0) return "";
+  return ` ${count === 1 ? "1 session already planned breaks it" : `${count} sessions already planned break it`}: the coaches were told.`;
+}
 const emptyToNull = (v: unknown) => (v === "" || v === undefined ? null : v);
 
 /** The physio's form: what to limit, from when to when, and a note for the coaches. Same schema as the handler. */
@@ -47,10 +52,10 @@ export function RestrictionForm({
   const submit = handleSubmit(async (values) => {
     setMessage(null);
     try {
-      const { restriction } = await restrictionApi.create(athleteId, values);
+      const { restriction, conflicts } = await restrictionApi.create(athleteId, values);
       reset(defaults);
       await onSaved(restriction);
-      setMessage("Saved. Coaches see it on the week plan.");
+      setMessage(`Saved. Coaches see it on the week plan.${conflictsLine(conflicts.length)}`);
     } catch (err) {
       if (!(err instanceof ApiError)) return setMessage("Could not save; try again");
       if (!applyServerErrors({ setError }, err, FIELDS as readonly FieldPath<RestrictionFormValues>[]))

@@ -21,7 +21,12 @@ import type { teamSettingsPatchSchema } from "@/lib/validations/team-settings";
 import type { teamWeekSchema } from "@/lib/validations/team-week";
 import type { templateSchema, updateTemplateSchema } from "@/lib/validations/template";
 import { sendJson, type ApiError } from "./fetcher";
-import { loadKeys, noticeKeys, planKeys, restrictionKeys } from "./keys";
+import type { Availability } from "@/lib/availability/levels";
+import type { SessionMessageDto } from "@/lib/data/session-messages";
+import type { SessionConflict } from "@/lib/restrictions/conflicts";
+import type { availabilitySchema } from "@/lib/validations/availability";
+import type { sessionMessageSchema } from "@/lib/validations/session-messages";
+import { loadKeys, medicalKeys, noticeKeys, planKeys, restrictionKeys } from "./keys";
 
 // Every write the browser sends, each body typed from the schema its handler parses (z.input: before coercion),
 // each answer from what the lib/ function behind its handler returns (as JSON: Dates arrive as strings), so a
@@ -92,11 +97,22 @@ export const noticeApi = {
 
 export const restrictionApi = {
   create: (athleteId: number, body: Body<typeof createRestrictionSchema>) =>
-    sendJson<{ restriction: Returned<typeof createRestriction> }>("POST", restrictionKeys.athlete(athleteId), body),
+    sendJson<Returned<typeof createRestriction>>("POST", restrictionKeys.athlete(athleteId), body),
   act: (restrictionId: number, body: Body<typeof restrictionActionSchema>) =>
     sendJson<{ restriction: Returned<typeof liftRestriction> }>(
       "PATCH",
       restrictionKeys.restriction(restrictionId),
       body,
     ),
+};
+
+export const medicalApi = {
+  setAvailability: (athleteId: number, body: Body<typeof availabilitySchema>) =>
+    sendJson<{ availability: Availability; conflicts: SessionConflict[] }>(
+      "POST",
+      medicalKeys.availability(athleteId),
+      body,
+    ),
+  postMessage: (sessionId: number, body: Body<typeof sessionMessageSchema>) =>
+    sendJson<{ messages: SessionMessageDto[] }>("POST", medicalKeys.thread(sessionId), body),
 };

@@ -38,3 +38,8 @@ export const restrictionKeys = {
   athlete: (athleteId: number) => `/api/athletes/${athleteId}/restrictions`,
   restriction: (restrictionId: number) => `/api/restrictions/${restrictionId}`,
 } as const;
+
+export const medicalKeys = {
+  availability: (athleteId: number) => `/api/athletes/${athleteId}/availability`,
+  thread: (sessionId: number) => `/api/sessions/${sessionId}/messages`,
+} as const;

@@ -1,6 +1,7 @@
 import type { Db } from "@/models";
 import { seedClub, type SeededClub } from "./seed-club";
 import { seedLoad } from "./seed-load";
+import { seedMedical } from "./seed-medical";
 import { seedRestrictions } from "./seed-restrictions";
 import { seedNotices } from "@/lib/notices/seed";
 
@@ -18,6 +19,7 @@ export async function seedDemo(d: Db, options: SeedOptions = {}): Promise<Seeded
   await seedLoad(d, club, options);
   await seedNotices(d, club);
   await seedRestrictions(d, club, options);
+  await seedMedical(d, club, options);
   void options;
   return club;
 }

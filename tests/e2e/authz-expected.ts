@@ -95,6 +95,8 @@ const TABLE: Line[] = [
   ["PAGE /speed/[athleteId]", "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "not-found"],
   ["PAGE /squad",             "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "ok"],
   ["PAGE /squad/[athleteId]", "sign-in", "ok",          "not-found",   "ok",          "ok",          "ok",          "not-found"],
+  ["PAGE /status",             "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "ok"],
+  ["PAGE /status/[athleteId]", "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "not-found"],
   ["PAGE /squad/new",         "sign-in", "not-allowed", "not-allowed", "not-allowed", "ok",          "ok",          "ok"],
 
   ["ACTION /forgot-password#forgotPasswordAction", "ok",      "ok",      "ok",      "ok",      "ok",      "ok",      "ok"],

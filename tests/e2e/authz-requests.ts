@@ -194,6 +194,8 @@ export const REQUESTS: Record<string, Build> = {
   "PAGE /squad": async () => page("/squad"),
   "PAGE /squad/[athleteId]": async (w, s) => page(`/squad/${athlete(w, s)}`),
   "PAGE /squad/new": async () => page("/squad/new"),
+  "PAGE /status": async () => page("/status"),
+  "PAGE /status/[athleteId]": async (w, s) => page(`/status/${athlete(w, s)}`),
 
   "ACTION /forgot-password#forgotPasswordAction": async () => action({ email: "nobody-here@nowhere.test" }),
   "ACTION /invite#joinTeamAction": async () => action({ token: "no-such-invitation-token-0123456789" }),

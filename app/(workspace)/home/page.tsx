@@ -17,6 +17,7 @@ const BLURB: Record<string, string> = {
   "/load": "HSR metres, contacts, sRPE and ACWR for every athlete this week.",
   "/plan-vs-actual": "What was prescribed against what the logs say was done.",
   "/alerts": "Spikes and jumps the plan or the logs have raised.",
+  "/status": "Availability, restrictions, alerts and log notes for every athlete.",
   "/squad": "Profiles, tested max velocity and training groups.",
   "/me": "Your sessions, your log and your calendar feed.",
   "/members": "Who is in the club and what they may do.",

@@ -1,0 +1,95 @@
+import "server-only";
+import { Op } from "sequelize";
+import type { Completion, SessionStatus } from "@/lib/domain/sessions";
+import { blockSummary } from "@/lib/format/block-summary";
+import { addDays } from "@/lib/dates/plain-date";
+import { toBlockInput } from "@/lib/plan/blocks";
+import { db } from "@/models";
+import { loadSessions } from "./plan-rows";
+import { countSessionMessages } from "./session-messages";
+
+export type MedicalLogRow = {
+  sessionId: number;
+  date: string;
+  title: string;
+  completion: Completion;
+  rpe: number | null;
+  minutes: number | null;
+  note: string | null;
+  messages: number;
+};
+
+/** The athlete's logs of the last `days` days up to today, newest first (the physio's athlete page). */
+export async function recentAthleteLogs({
+  teamId,
+  athleteId,
+  today,
+  days = 21,
+}: {
+  teamId: number;
+  athleteId: number;
+  today: string;
+  days?: number;
+}): Promise<MedicalLogRow[]> {
+  const { SessionLog, PlannedSession } = await db();
+  const rows = await SessionLog.findAll({
+    where: { athleteId },
+    attributes: ["sessionId", "completion", "rpe", "minutes", "notes"],
+    include: [
+      {
+        model: PlannedSession,
+        as: "session",
+        attributes: ["id", "date", "title"],
+        where: { teamId, date: { [Op.between]: [addDays(today, -days), today] } },
+        required: true,
+      },
+    ],
+    order: [[{ model: PlannedSession, as: "session" }, "date", "DESC"]],
+  });
+  const counts = await countSessionMessages({ sessionIds: rows.map((r) => r.sessionId) });
+  return rows.map((r) => ({
+    sessionId: r.sessionId,
+    date: String(r.session!.date).slice(0, 10),
+    title: r.session!.title,
+    completion: r.completion,
+    rpe: r.rpe,
+    minutes: r.minutes,
+    note: r.notes?.trim() ? r.notes : null,
+    messages: counts.get(r.sessionId) ?? 0,
+  }));
+}
+
+export type PlannedDayRow = {
+  sessionId: number;
+  date: string;
+  startTime: string;
+  title: string;
+  status: SessionStatus;
+  blocks: string[];
+};
+
+/** The athlete's planned and published sessions of the next 7 days from today (drafts included: staff see them). */
+export async function nextPlannedDays({
+  teamId,
+  athleteId,
+  today,
+}: {
+  teamId: number;
+  athleteId: number;
+  today: string;
+}): Promise<PlannedDayRow[]> {
+  const sessions = await loadSessions({
+    teamId,
+    athleteId,
+    date: { [Op.between]: [today, addDays(today, 6)] },
+    status: { [Op.ne]: "cancelled" },
+  });
+  return sessions.map(({ dto }) => ({
+    sessionId: dto.id,
+    date: dto.date,
+    startTime: dto.startTime,
+    title: dto.title,
+    status: dto.status,
+    blocks: dto.blocks.map((b) => blockSummary(toBlockInput(b))),
+  }));
+}

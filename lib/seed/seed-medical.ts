@@ -1,0 +1,83 @@
+import { Op } from "sequelize";
+import { AVAILABILITY_LABEL, MODIFIED_MAX_PCT } from "@/lib/availability/levels";
+import { refreshLedger } from "@/lib/data/ledger";
+import { addDays, startOfWeek } from "@/lib/dates/plain-date";
+import { teamToday } from "@/lib/dates/zoned";
+import { evaluateLoadAlerts } from "@/lib/notices/load-alerts";
+import type { Db } from "@/models";
+import { DEMO_STAFF, DEMO_TEAM } from "./demo-club";
+import type { SeededClub } from "./seed-club";
+import { SPIKE_ATHLETE } from "./seed-load";
+
+/** The athlete on modified training, from today for ten days. */
+export const MODIFIED_ATHLETE = "Priya Castellane";
+const MODIFIED_NOTE = "Calf strain settling. Running up to 85% of vmax and full strength work; no sprints yet.";
+
+/**
+ * Something for the physio to do when the demo opens: MODIFIED_ATHLETE on modified training (her running from
+ * today capped at the level's intensity, so the plan breaks nothing), and the open spike alert that
+ * SPIKE_ATHLETE's planned next week raises, filed as the planner would have filed it (no mail is sent for it).
+ */
+export async function seedMedical(d: Db, club: SeededClub, options: { today?: string } = {}): Promise<void> {
+  const today = options.today ?? teamToday({ timeZone: DEMO_TEAM.timeZone, now: new Date() });
+  const physio = club.userIds[DEMO_STAFF.find((s) => s.role === "physio")!.email];
+  const priya = club.athleteIds[MODIFIED_ATHLETE];
+  const returnOn = addDays(today, 10);
+  await d.sequelize.transaction(async (transaction) => {
+    const sessions = await d.PlannedSession.findAll({
+      where: { teamId: club.teamId, athleteId: priya, date: { [Op.between]: [today, addDays(returnOn, -1)] } },
+      attributes: ["id"],
+      transaction,
+    });
+    const blocks = await d.SessionBlock.findAll({
+      where: { sessionId: { [Op.in]: sessions.map((s) => s.id) } },
+      transaction,
+    });
+    for (const b of blocks) {
+      if (b.running && b.running.intensityPct > MODIFIED_MAX_PCT)
+        await b.update({ running: { ...b.running, intensityPct: MODIFIED_MAX_PCT } }, { transaction });
+    }
+    const restriction = await d.Restriction.create(
+      {
+        teamId: club.teamId,
+        athleteId: priya,
+        rule: "max_intensity",
+        blockKinds: null,
+        limitValue: MODIFIED_MAX_PCT,
+        startsOn: today,
+        endsOn: addDays(returnOn, -1),
+        liftedOn: null,
+        note: `${AVAILABILITY_LABEL.modified}: ${MODIFIED_NOTE}`,
+        createdBy: physio,
+        liftedBy: null,
+      },
+      { transaction },
+    );
+    await d.AthleteAvailability.create(
+      {
+        teamId: club.teamId,
+        athleteId: priya,
+        level: "modified",
+        startsOn: today,
+        returnOn,
+        note: MODIFIED_NOTE,
+        restrictionId: restriction.id,
+        createdBy: physio,
+      },
+      { transaction },
+    );
+    await refreshLedger({ transaction });
+    const nextWeek = addDays(startOfWeek(today, DEMO_TEAM.weekStartDay), 7);
+    const ids = await evaluateLoadAlerts({
+      transaction,
+      teamId: club.teamId,
+      athleteId: club.athleteIds[SPIKE_ATHLETE],
+      dates: [nextWeek],
+      basis: "planned",
+      today,
+    });
+    // Filed before anyone was watching: the demo's mailboxes start empty.
+    for (const id of ids)
+      await d.OutboxMessage.destroy({ where: { dedupeKey: { [Op.like]: `alert:${id}:user:%` } }, transaction });
+  });
+}
