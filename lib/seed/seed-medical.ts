@@ -79,5 +79,11 @@ export async function seedMedical(d: Db, club: SeededClub, options: { today?: st
     // Filed before anyone was watching: the demo's mailboxes start empty.
     for (const id of ids)
       await d.OutboxMessage.destroy({ where: { dedupeKey: { [Op.like]: `alert:${id}:user:%` } }, transaction });
+    // Like every seeder, leave the ledger to its first reader: the team's athletes marked from their first day.
+    await d.sequelize.query(
+      "INSERT INTO load_ledger_dirty (athlete_id, from_date) SELECT id, '0000-01-01' FROM athletes WHERE team_id = ? " +
+        "ON CONFLICT (athlete_id) DO UPDATE SET from_date = excluded.from_date",
+      { replacements: [club.teamId], transaction },
+    );
   });
 }
