@@ -15,6 +15,7 @@ import { AcwrCell } from "@/components/load/acwr-cell";
 import { FlagBadges } from "@/components/load/flag-badge";
 import { Badge } from "@/components/ui/badge";
 import { AVAILABILITY_LEVELS, type AvailabilityLevel } from "@/lib/availability/levels";
+import { BODY_REGION_LABEL } from "@/lib/domain/wellbeing";
 import type { SquadStatusRow } from "@/lib/data/squad-status";
 import { formatDayLabel } from "@/lib/dates/plain-date";
 import { AvailabilityBadge } from "./availability-badge";
@@ -35,6 +36,8 @@ export const STATUS_COLUMN_LABELS: Record<string, string> = {
   restrictions: "Restrictions",
   alerts: "Open alerts",
   note: "Latest log note",
+  pain: "Latest pain report",
+  checkIn: "Latest check-in",
   ratio: "ACWR this week",
   flags: "Flags",
 };
@@ -136,6 +139,41 @@ export const statusColumns = helper.columns([
             {formatDayLabel(n.date)} · {n.title}
           </span>
           <span className="block text-ink-900">&ldquo;{n.note}&rdquo;</span>
+        </span>
+      );
+    },
+  }),
+  helper.accessor((r) => r.latestPain?.date ?? "", {
+    id: "pain",
+    header: STATUS_COLUMN_LABELS.pain,
+    sortDescFirst: true,
+    cell: (c) => {
+      const p = c.row.original.latestPain;
+      if (!p) return <span className="text-ink-500">None</span>;
+      return (
+        <span className="flex flex-col items-start gap-0.5">
+          <Badge tone={p.severity >= 4 ? "spike" : "climb"}>
+            {BODY_REGION_LABEL[p.region]} {p.severity}/10
+          </Badge>
+          <span className="text-xs text-ink-500">
+            {formatDayLabel(p.date)}
+            {p.stoppedSession ? " · stopped the session" : ""}
+          </span>
+        </span>
+      );
+    },
+  }),
+  helper.accessor((r) => r.latestCheckIn?.date ?? "", {
+    id: "checkIn",
+    header: STATUS_COLUMN_LABELS.checkIn,
+    sortDescFirst: true,
+    cell: (c) => {
+      const k = c.row.original.latestCheckIn;
+      if (!k) return <span className="text-ink-500">None</span>;
+      return (
+        <span className="flex flex-col">
+          <span className="text-ink-900 tabular-nums">{k.total}/25</span>
+          <span className="text-xs text-ink-500">{formatDayLabel(k.date)}</span>
         </span>
       );
     },

@@ -16,6 +16,7 @@ const SORTS: Array<[string, string, boolean]> = [
   ["level", "Availability", true],
   ["ratio", "ACWR, highest first", true],
   ["note", "Latest log note", true],
+  ["pain", "Latest pain report", true],
 ];
 
 /**

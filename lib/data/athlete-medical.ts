@@ -5,6 +5,7 @@ import { blockSummary } from "@/lib/format/block-summary";
 import { addDays } from "@/lib/dates/plain-date";
 import { toBlockInput } from "@/lib/plan/blocks";
 import { db } from "@/models";
+import { painReportsBySession, type PainReportDto } from "./pain-reports";
 import { loadSessions } from "./plan-rows";
 import { countSessionMessages } from "./session-messages";
 
@@ -17,6 +18,7 @@ export type MedicalLogRow = {
   minutes: number | null;
   note: string | null;
   messages: number;
+  pain: Pick<PainReportDto, "region" | "severity" | "stoppedSession"> | null;
 };
 
 /** The athlete's logs of the last `days` days up to today, newest first (the physio's athlete page). */
@@ -46,7 +48,11 @@ export async function recentAthleteLogs({
     ],
     order: [[{ model: PlannedSession, as: "session" }, "date", "DESC"]],
   });
-  const counts = await countSessionMessages({ sessionIds: rows.map((r) => r.sessionId) });
+  const ids = rows.map((r) => r.sessionId);
+  const [counts, pains] = await Promise.all([
+    countSessionMessages({ sessionIds: ids }),
+    painReportsBySession({ sessionIds: ids }),
+  ]);
   return rows.map((r) => ({
     sessionId: r.sessionId,
     date: String(r.session!.date).slice(0, 10),
@@ -56,6 +62,7 @@ export async function recentAthleteLogs({
     minutes: r.minutes,
     note: r.notes?.trim() ? r.notes : null,
     messages: counts.get(r.sessionId) ?? 0,
+    pain: pains.get(r.sessionId) ?? null,
   }));
 }
 

@@ -3,6 +3,7 @@ import { AVAILABILITY_LABEL, MODIFIED_MAX_PCT } from "@/lib/availability/levels"
 import { refreshLedger } from "@/lib/data/ledger";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { teamToday } from "@/lib/dates/zoned";
+import { DEFAULT_PAIN_ALERT_ABOVE } from "@/lib/domain/wellbeing";
 import { evaluateLoadAlerts } from "@/lib/notices/load-alerts";
 import type { Db } from "@/models";
 import { DEMO_STAFF, DEMO_TEAM } from "./demo-club";
@@ -11,11 +12,14 @@ import { SPIKE_ATHLETE } from "./seed-load";
 
 /** The athlete on modified training, from today for ten days. */
 export const MODIFIED_ATHLETE = "Priya Castellane";
+/** The athlete whose latest log carries a mild calf pain report (at the team's line, so no alert). */
+export const PAIN_ATHLETE = "Kofi Brannagh";
 const MODIFIED_NOTE = "Calf strain settling. Running up to 85% of vmax and full strength work; no sprints yet.";
 
 /**
  * Something for the physio to do when the demo opens: MODIFIED_ATHLETE on modified training (her running from
- * today capped at the level's intensity, so the plan breaks nothing), and the open spike alert that
+ * today capped at the level's intensity, so the plan breaks nothing), PAIN_ATHLETE's mild calf pain report on his
+ * latest log (at the team's line, so it raises no alert), and the open spike alert that
  * SPIKE_ATHLETE's planned next week raises, filed as the planner would have filed it (no mail is sent for it).
  */
 export async function seedMedical(d: Db, club: SeededClub, options: { today?: string } = {}): Promise<void> {
@@ -66,6 +70,28 @@ export async function seedMedical(d: Db, club: SeededClub, options: { today?: st
       },
       { transaction },
     );
+    const logged = await d.SessionLog.findOne({
+      where: { athleteId: club.athleteIds[PAIN_ATHLETE], completion: { [Op.ne]: "no" } },
+      include: [{ model: d.PlannedSession, as: "session", where: { date: { [Op.lt]: today } }, required: true }],
+      order: [[{ model: d.PlannedSession, as: "session" }, "date", "DESC"]],
+      transaction,
+    });
+    if (logged?.session) {
+      await d.PainReport.create(
+        {
+          teamId: club.teamId,
+          athleteId: logged.athleteId,
+          sessionId: logged.sessionId,
+          date: logged.session.date,
+          region: "calf",
+          severity: DEFAULT_PAIN_ALERT_ABOVE,
+          stoppedSession: false,
+          alertId: null,
+        },
+        { transaction },
+      );
+      await logged.update({ notes: "Left calf a bit tight on the last run." }, { transaction });
+    }
     await refreshLedger({ transaction });
     const nextWeek = addDays(startOfWeek(today, DEMO_TEAM.weekStartDay), 7);
     const ids = await evaluateLoadAlerts({

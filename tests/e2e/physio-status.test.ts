@@ -6,7 +6,7 @@
 import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { SPIKE_ATHLETE } from "@/lib/seed/seed-load";
-import { MODIFIED_ATHLETE } from "@/lib/seed/seed-medical";
+import { MODIFIED_ATHLETE, PAIN_ATHLETE } from "@/lib/seed/seed-medical";
 import { seriousAxeViolations } from "./axe";
 import { describeBrowser, launchBrowser, screenshot, signIn } from "./harness";
 import { startMailApp, type MailApp } from "./notices-app";
@@ -44,6 +44,8 @@ describeBrowser("physio squad status journey", () => {
     const row = (name: string) => page.locator(`[data-testid="status-row"][data-athlete="${name}"]`);
     expect(await row(MODIFIED_ATHLETE).getByTestId("availability-level").getAttribute("data-level")).toBe("modified");
     expect(await row(SPIKE_ATHLETE).textContent()).toMatch(/\d+ open/);
+    // The seeded pain report on his latest log, in the squad's row.
+    expect(await row(PAIN_ATHLETE).textContent()).toContain("Calf 3/10");
     // Sorted by what needs attention: the athlete with the open alert comes first.
     expect(await page.getByTestId("status-row").first().getAttribute("data-athlete")).toBe(SPIKE_ATHLETE);
     expect(await noSidewaysScroll(page)).toBe(true);

@@ -6,7 +6,7 @@ import { listSessionConflicts } from "@/lib/data/session-conflicts";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { seedDemo } from "@/lib/seed";
 import { SPIKE_ATHLETE } from "@/lib/seed/seed-load";
-import { MODIFIED_ATHLETE } from "@/lib/seed/seed-medical";
+import { MODIFIED_ATHLETE, PAIN_ATHLETE } from "@/lib/seed/seed-medical";
 import { setupTestDb } from "../helpers/db";
 
 // The demo club opens with something for the physio to do (issue #13): an open spike alert from next week's
@@ -41,6 +41,14 @@ describe("demo medical seed", () => {
     ]);
     expect(levels[0]!.returnOn! > today).toBe(true);
     expect(await listSessionConflicts({ teamId: club.teamId, from: today })).toEqual([]);
+  });
+
+  it("has one pain report on the pain athlete's latest log, at the team's line", async () => {
+    const reports = await d.PainReport.findAll();
+    expect(reports.map((r) => ({ athleteId: r.athleteId, region: r.region, severity: r.severity }))).toEqual([
+      { athleteId: club.athleteIds[PAIN_ATHLETE], region: "calf", severity: 3 },
+    ]);
+    expect(reports[0]!.date < today).toBe(true);
   });
 
   it("shows the demo's log notes to staff", async () => {

@@ -17,6 +17,7 @@ import { currentAvailability } from "@/lib/data/availability";
 import { getAthleteLoad } from "@/lib/data/load-views";
 import { listSessionConflicts } from "@/lib/data/session-conflicts";
 import { formatDayLabel } from "@/lib/dates/plain-date";
+import { BODY_REGION_LABEL } from "@/lib/domain/wellbeing";
 import { teamToday } from "@/lib/dates/zoned";
 import { METRIC_INFO } from "@/lib/load/types";
 
@@ -106,9 +107,10 @@ export default async function AthleteStatusPage({ params }: { params: Promise<{ 
             <li
               key={l.sessionId}
               id={`session-${l.sessionId}`}
-              className={l.note ? "-mx-2 my-1 rounded-lg bg-flag-climb-soft px-2 py-2.5" : "py-2.5"}
+              className={l.note || l.pain ? "-mx-2 my-1 rounded-lg bg-flag-climb-soft px-2 py-2.5" : "py-2.5"}
               data-testid="recent-log"
               data-noted={l.note ? "yes" : "no"}
+              data-pain={l.pain ? "yes" : "no"}
             >
               <p className="text-sm">
                 <span className="font-medium text-ink-900">
@@ -120,6 +122,14 @@ export default async function AthleteStatusPage({ params }: { params: Promise<{ 
                   {l.minutes !== null ? ` · ${l.minutes} min` : ""}
                 </span>
               </p>
+              {l.pain ? (
+                <p className="mt-1">
+                  <Badge tone={l.pain.severity >= 4 ? "spike" : "climb"}>
+                    Pain: {BODY_REGION_LABEL[l.pain.region]} {l.pain.severity}/10
+                    {l.pain.stoppedSession ? ", stopped the session" : ""}
+                  </Badge>
+                </p>
+              ) : null}
               {l.note ? <p className="mt-1 text-sm font-medium text-ink-900">&ldquo;{l.note}&rdquo;</p> : null}
               {l.note || l.messages > 0 ? (
                 <details className="mt-2">
