@@ -14,6 +14,7 @@ import { CalendarToken } from "./calendar-token";
 import { CheckIn } from "./check-in";
 import { Invitation } from "./invitation";
 import { LoadLedgerDay } from "./load-ledger-day";
+import { Meet } from "./meet";
 import { Membership } from "./membership";
 import { NotificationSetting } from "./notification-setting";
 import { OutboxMessage } from "./outbox-message";
@@ -21,6 +22,7 @@ import { PainReport } from "./pain-report";
 import { PlannedSession } from "./planned-session";
 import { Restriction } from "./restriction";
 import { RestrictionOverride } from "./restriction-override";
+import { SeasonPhase } from "./season-phase";
 import { SessionBlock } from "./session-block";
 import { SessionLog } from "./session-log";
 import { SessionLogChange } from "./session-log-change";
@@ -39,6 +41,7 @@ export { AuthSession, CalendarFeedRender, LoadLedgerDay };
 export { CheckIn, PainReport, SessionLogChange };
 export { SpeedLabSettings, SpeedProfileEntry, SpeedTest, SpeedUpload };
 export { AthleteAvailability, SessionMessage };
+export { Meet, SeasonPhase };
 export {
   Athlete,
   BlockTemplate,
@@ -85,6 +88,9 @@ const models = {
   // Availability and session threads (migration 014): plain id columns, no associations needed.
   AthleteAvailability,
   SessionMessage,
+  // The season plan (migration 023).
+  Meet,
+  SeasonPhase,
 };
 export type Models = typeof models;
 export type Db = Models & { sequelize: Sequelize };

@@ -104,7 +104,7 @@ export async function listUnlinkedAthletes({ teamId }: { teamId: number }) {
   return rows.map((a) => ({ id: a.id, name: a.name }));
 }
 
-async function assertGroupOfTeam({
+export async function assertGroupOfTeam({
   teamId,
   groupId,
   transaction,

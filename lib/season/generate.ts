@@ -1,20 +1,21 @@
 // Draft weeks generated from one source week and a progression rule. The drafts are ordinary plan sessions once
 // saved: the coach drags and edits them like any other. Pure.
 import { addDays, shiftWeek } from "@/lib/dates/plain-date";
-import type { BlockInput } from "@/lib/load/types";
 import { progressionFactors, type ProgressionRule } from "./progression";
-import { scaleSession, type DraftSession } from "./scale-session";
+import { scaleSession, type DraftSession, type ScalableBlock } from "./scale-session";
 
-export type GeneratedSession<B extends BlockInput = BlockInput> = Omit<DraftSession<B>, "dayOffset"> & { date: string };
+export type GeneratedSession<B extends ScalableBlock = ScalableBlock> = Omit<DraftSession<B>, "dayOffset"> & {
+  date: string;
+};
 
-export type GeneratedWeek<B extends BlockInput = BlockInput> = {
+export type GeneratedWeek<B extends ScalableBlock = ScalableBlock> = {
   weekStart: string;
   /** Volume factor against the source week (1.08 = 8 % more). */
   factor: number;
   sessions: GeneratedSession<B>[];
 };
 
-export function generateWeeks<B extends BlockInput>(input: {
+export function generateWeeks<B extends ScalableBlock>(input: {
   source: DraftSession<B>[];
   /** First day of the first generated week (a team week start). */
   firstWeekStart: string;

@@ -1,9 +1,12 @@
 // Scales one session's volume by a factor for a generated draft week, keeping intensity: distances, % of vmax,
 // starts and rests stay; the number of reps (or sets) and the minutes change. Pure.
 import { blockKindRules } from "@/lib/load/block-kinds";
-import type { BlockInput, PlyoDrill, RunningPrescription } from "@/lib/load/types";
+import type { PlyoDrill, RunningPrescription } from "@/lib/load/types";
 
-export type DraftSession<B extends BlockInput = BlockInput> = {
+/** What scaling reads of a block: plan blocks, engine blocks and stored blocks all fit. */
+export type ScalableBlock = { kind: string; running?: RunningPrescription | null; drills?: PlyoDrill[] | null };
+
+export type DraftSession<B extends ScalableBlock = ScalableBlock> = {
   /** Days from the week's first day (0–6). */
   dayOffset: number;
   startTime: string;
@@ -35,7 +38,7 @@ function scaleDrill(drill: PlyoDrill, factor: number): PlyoDrill {
   return { ...drill, ...scaleCounts(drill.sets, drill.reps, factor) };
 }
 
-export function scaleBlock<B extends BlockInput>(block: B, factor: number): B {
+export function scaleBlock<B extends ScalableBlock>(block: B, factor: number): B {
   const rules = blockKindRules(block.kind);
   if (rules?.carries === "running" && block.running) return { ...block, running: scaleRunning(block.running, factor) };
   if (rules?.carries === "drills" && block.drills)
@@ -49,7 +52,7 @@ export function scaleMinutes(durationMin: number, factor: number): number {
   return Math.max(Math.min(durationMin, MIN_SESSION_MIN), scaled);
 }
 
-export function scaleSession<B extends BlockInput>(session: DraftSession<B>, factor: number): DraftSession<B> {
+export function scaleSession<B extends ScalableBlock>(session: DraftSession<B>, factor: number): DraftSession<B> {
   if (factor === 1) return session;
   return {
     ...session,

@@ -201,6 +201,39 @@ export class World {
     return ((await this.ok(res, "create restriction")).restriction as { id: number }).id;
   }
 
+  /** A fresh Monday far ahead, two weeks after the last one handed out: phases there never overlap. */
+  farMonday(): string {
+    return new Date(Date.UTC(2032, 0, 5) + ++counter * 14 * 86_400_000).toISOString().slice(0, 10);
+  }
+
+  /** A fresh team-wide season phase of one far week, written straight to SQLite. */
+  async phase(): Promise<{ id: number; startsOn: string; endsOn: string }> {
+    const now = sqlNow();
+    const startsOn = this.farMonday();
+    const endsOn = new Date(Date.parse(startsOn) + 6 * 86_400_000).toISOString().slice(0, 10);
+    const name = unique("Matrix phase");
+    await this.app.query(
+      "INSERT INTO season_phases (team_id, group_id, kind, name, starts_on, ends_on, goal, targets, version, created_at, updated_at) " +
+        "VALUES (?, NULL, 'general_preparation', ?, ?, ?, '', '{}', 1, ?, ?)",
+      [this.teamId, name, startsOn, endsOn, now, now],
+    );
+    const [row] = await this.app.query<{ id: number }>("SELECT id FROM season_phases WHERE name = ?", [name]);
+    return { id: row.id, startsOn, endsOn };
+  }
+
+  /** A fresh team-wide meet on a far date. */
+  async meet(): Promise<number> {
+    const now = sqlNow();
+    const name = unique("Matrix meet");
+    await this.app.query(
+      "INSERT INTO meets (team_id, group_id, athlete_id, name, date, priority, created_at, updated_at) " +
+        "VALUES (?, NULL, NULL, ?, ?, 'C', ?, ?)",
+      [this.teamId, name, this.farMonday(), now, now],
+    );
+    const [row] = await this.app.query<{ id: number }>("SELECT id FROM meets WHERE name = ?", [name]);
+    return row.id;
+  }
+
   /** A fresh open alert about the athlete (a far week, so no real flag shares its key). */
   async alert(athleteId: number): Promise<number> {
     const now = sqlNow();

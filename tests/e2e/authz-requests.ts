@@ -159,6 +159,43 @@ export const REQUESTS: Record<string, Build> = {
       notes: null,
       blocks: [],
     }),
+  "GET /api/teams/[teamId]/season": async (w) => api("GET", `/api/teams/${w.teamId}/season?weeks=2`),
+  "GET /api/teams/[teamId]/season/export": async (w) => api("GET", `/api/teams/${w.teamId}/season/export?weeks=2`),
+  "POST /api/teams/[teamId]/season/phases": async (w) => {
+    const startsOn = w.farMonday();
+    return api("POST", `/api/teams/${w.teamId}/season/phases`, {
+      kind: "taper",
+      name: "Matrix taper",
+      startsOn,
+      endsOn: startsOn,
+    });
+  },
+  "POST /api/teams/[teamId]/season/meets": async (w) =>
+    api("POST", `/api/teams/${w.teamId}/season/meets`, { name: "Matrix meet", date: w.farMonday(), priority: "C" }),
+  // An empty source week: the generator has nothing to copy, so nothing else the matrix reads changes.
+  "POST /api/teams/[teamId]/season/progression": async (w) =>
+    api("POST", `/api/teams/${w.teamId}/season/progression`, {
+      sourceWeek: farWeek,
+      firstWeek: w.farMonday(),
+      weeks: 2,
+      rule: { kind: "taper", reductionPct: 40, shape: "linear" },
+    }),
+  "PATCH /api/season-phases/[phaseId]": async (w) => {
+    const { id, startsOn, endsOn } = await w.phase();
+    return api("PATCH", `/api/season-phases/${id}`, {
+      kind: "transition",
+      name: "Matrix rest",
+      startsOn,
+      endsOn,
+      version: 1,
+    });
+  },
+  "DELETE /api/season-phases/[phaseId]": async (w) => api("DELETE", `/api/season-phases/${(await w.phase()).id}`),
+  "POST /api/season-phases/[phaseId]/copy": async (w) =>
+    api("POST", `/api/season-phases/${(await w.phase()).id}/copy`, { weeksLater: 1 }),
+  "PATCH /api/meets/[meetId]": async (w) =>
+    api("PATCH", `/api/meets/${await w.meet()}`, { name: "Matrix meet (moved)", date: w.farMonday(), priority: "B" }),
+  "DELETE /api/meets/[meetId]": async (w) => api("DELETE", `/api/meets/${await w.meet()}`),
   "GET /api/teams/[teamId]/settings": async (w) => api("GET", `/api/teams/${w.teamId}/settings`),
   "PATCH /api/teams/[teamId]/settings": async (w) =>
     api("PATCH", `/api/teams/${w.teamId}/settings`, { recoveryHours: 48 }),

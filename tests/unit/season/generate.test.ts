@@ -16,7 +16,7 @@ const bounds: BlockInput = {
   drills: [{ name: "Bounds", sets: 3, reps: 4, contactsPerRep: 10, intensity: "high" }],
 };
 const stretch: BlockInput = { kind: "recovery", title: "Mobility" };
-const tuesday: DraftSession = {
+const tuesday: DraftSession<BlockInput> = {
   dayOffset: 1,
   startTime: "17:00",
   durationMin: 90,

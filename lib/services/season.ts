@@ -1,0 +1,147 @@
+import "server-only";
+import { diffDays, shiftWeek } from "@/lib/dates/plain-date";
+import { listSquad } from "@/lib/data/athletes";
+import { teamWeek } from "@/lib/data/plan";
+import { loadById, loadSessionsBetween, type Loaded } from "@/lib/data/plan-rows";
+import { destroySessions, insertSession } from "@/lib/data/plan-sessions";
+import * as seasonRows from "@/lib/data/season";
+import { inTransaction } from "@/lib/data/transaction";
+import type { PlanWriteResult } from "@/lib/plan/types";
+import { generateWeeks } from "@/lib/season/generate";
+import type { DraftSession } from "@/lib/season/scale-session";
+import type { MeetInput, PhaseInput, ProgressionInput } from "@/lib/validations/season";
+import { change, notify } from "./plan-changes";
+
+// Season workflows: phases and meets are plain rows; generated weeks and copied phases are plan writes, so they
+// end in notify() like every other (restriction guard, load ledger, notices) inside one transaction.
+
+type Team = { teamId: number };
+
+export const createPhase = ({ teamId, input }: Team & { input: PhaseInput }) =>
+  inTransaction((transaction) => seasonRows.insertPhase({ teamId, input, transaction }));
+
+export const updatePhase = (args: Team & { phaseId: number; version: number; input: PhaseInput }) =>
+  inTransaction((transaction) => seasonRows.updatePhaseRow({ ...args, transaction }));
+
+export const createMeet = ({ teamId, input }: Team & { input: MeetInput }) =>
+  inTransaction((transaction) => seasonRows.insertMeet({ teamId, input, transaction }));
+
+export const updateMeet = (args: Team & { meetId: number; input: MeetInput }) =>
+  inTransaction((transaction) => seasonRows.updateMeetRow({ ...args, transaction }));
+
+function draftOf(l: Loaded, weekStart: string): DraftSession<Loaded["dto"]["blocks"][number]> {
+  const s = l.dto;
+  return {
+    dayOffset: diffDays(s.date, weekStart),
+    startTime: s.startTime,
+    durationMin: s.durationMin,
+    title: s.title,
+    plannedRpe: s.plannedRpe,
+    notes: s.notes,
+    blocks: s.blocks,
+  };
+}
+
+export type ProgressionResult = PlanWriteResult & { weeks: { weekStart: string; factor: number }[] };
+
+/**
+ * Writes `weeks` draft weeks from the source week by the rule (lib/season/README.md). Drafts already in those
+ * weeks for the same athletes are replaced, so generating again updates rather than doubles; published and
+ * logged sessions are never touched.
+ */
+export async function generateProgression({
+  teamId,
+  actorUserId,
+  input,
+}: Team & { actorUserId: number; input: ProgressionInput }): Promise<ProgressionResult> {
+  const source = await teamWeek({ teamId, date: input.sourceWeek });
+  const first = await teamWeek({ teamId, date: input.firstWeek });
+  const lastDay = shiftWeek(first.weekEnd, input.weeks - 1);
+  const only = input.athleteIds ? new Set(input.athleteIds) : null;
+  const wanted = (l: Loaded) => !only || only.has(l.dto.athleteId);
+  return inTransaction(async (transaction) => {
+    const inSource = (
+      await loadSessionsBetween({ teamId, from: source.weekStart, to: source.weekEnd, transaction })
+    ).filter((l) => wanted(l) && l.dto.status !== "cancelled");
+    const athletes = new Set(inSource.map((l) => l.dto.athleteId));
+    const replaced = (await loadSessionsBetween({ teamId, from: first.weekStart, to: lastDay, transaction })).filter(
+      (l) => athletes.has(l.dto.athleteId) && l.dto.status === "draft" && !l.dto.logged,
+    );
+    await destroySessions({ sessionIds: replaced.map((l) => l.dto.id), transaction });
+    const created: number[] = [];
+    let weeks: { weekStart: string; factor: number }[] = [];
+    for (const athleteId of athletes) {
+      const drafts = inSource.filter((l) => l.dto.athleteId === athleteId).map((l) => draftOf(l, source.weekStart));
+      const generated = generateWeeks({
+        source: drafts,
+        firstWeekStart: first.weekStart,
+        weeks: input.weeks,
+        rule: input.rule,
+      });
+      weeks = generated.map(({ weekStart, factor }) => ({ weekStart, factor }));
+      for (const week of generated)
+        for (const session of week.sessions)
+          created.push(await insertSession({ teamId, session: { athleteId, ...session }, transaction }));
+    }
+    const after = await loadById(created, transaction);
+    await notify({
+      transaction,
+      teamId,
+      actorUserId,
+      changes: [
+        ...replaced.map((l) => change("deleted", l, null)),
+        ...created.map((id) => change("created", null, after.get(id)!)),
+      ],
+      override: input.override,
+    });
+    return { sessions: [...after.values()].map((l) => l.dto), removedIds: replaced.map((l) => l.dto.id), weeks };
+  });
+}
+
+/**
+ * Copies a phase `weeksLater` weeks on (52 keeps the weekdays): the phase row, and its sessions (cancelled ones
+ * left out) as drafts at the same weekday, so next season starts from this one's plan.
+ */
+export async function copyPhase({
+  teamId,
+  actorUserId,
+  phaseId,
+  weeksLater,
+}: Team & { actorUserId: number; phaseId: number; weeksLater: number }) {
+  const phase = await seasonRows.getPhase({ teamId, phaseId });
+  const inGroup =
+    phase.groupId === null
+      ? null
+      : new Set((await listSquad({ teamId })).filter((a) => a.groupId === phase.groupId).map((a) => a.id));
+  const shift = (d: string) => shiftWeek(d, weeksLater);
+  return inTransaction(async (transaction) => {
+    const copy = await seasonRows.insertPhase({
+      teamId,
+      input: { ...phase, startsOn: shift(phase.startsOn), endsOn: shift(phase.endsOn) },
+      transaction,
+    });
+    const inPhase = (await loadSessionsBetween({ teamId, from: phase.startsOn, to: phase.endsOn, transaction })).filter(
+      (l) => l.dto.status !== "cancelled" && (!inGroup || inGroup.has(l.dto.athleteId)),
+    );
+    const created: number[] = [];
+    for (const { dto: s } of inPhase) {
+      const { athleteId, startTime, durationMin, title, plannedRpe, notes, blocks } = s;
+      const date = shiftWeek(s.date, weeksLater);
+      created.push(
+        await insertSession({
+          teamId,
+          session: { athleteId, date, startTime, durationMin, title, plannedRpe, notes, blocks },
+          transaction,
+        }),
+      );
+    }
+    const after = await loadById(created, transaction);
+    await notify({
+      transaction,
+      teamId,
+      actorUserId,
+      changes: created.map((id) => change("created", null, after.get(id)!)),
+    });
+    return { phase: copy, sessionsCopied: created.length };
+  });
+}
