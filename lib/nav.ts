@@ -19,6 +19,7 @@ export type NavLink = { href: string; label: string; unread?: number };
 export const NAV: NavItem[] = [
   { href: "/home", label: "Today", can: "team:view", scope: "own" },
   { href: "/plan", label: "Week plan", can: "plan:view", scope: "team" },
+  { href: "/season", label: "Season", can: "plan:view", scope: "team" },
   { href: "/load", label: "Squad load", can: "load:view", scope: "team" },
   { href: "/plan-vs-actual", label: "Plan vs actual", can: "load:view", scope: "team" },
   { href: "/alerts", label: "Alerts", can: "alerts:view", scope: "team" },

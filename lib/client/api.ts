@@ -20,6 +20,9 @@ import type { createRestrictionSchema, restrictionActionSchema } from "@/lib/val
 import type { teamSettingsPatchSchema } from "@/lib/validations/team-settings";
 import type { teamWeekSchema } from "@/lib/validations/team-week";
 import type { templateSchema, updateTemplateSchema } from "@/lib/validations/template";
+import type { SeasonMeet, SeasonPhase } from "@/lib/data/season";
+import type { ProgressionResult } from "@/lib/services/season";
+import type { copyPhaseSchema, meetInputSchema, phaseInputSchema, progressionSchema } from "@/lib/validations/season";
 import { sendJson, type ApiError } from "./fetcher";
 import type { Availability } from "@/lib/availability/levels";
 import type { SessionMessageDto } from "@/lib/data/session-messages";
@@ -27,6 +30,7 @@ import type { SessionConflict } from "@/lib/restrictions/conflicts";
 import type { availabilitySchema } from "@/lib/validations/availability";
 import type { sessionMessageSchema } from "@/lib/validations/session-messages";
 import { loadKeys, medicalKeys, noticeKeys, planKeys, restrictionKeys } from "./keys";
+import { loadKeys, noticeKeys, planKeys, restrictionKeys, seasonKeys } from "./keys";
 
 // Every write the browser sends, each body typed from the schema its handler parses (z.input: before coercion),
 // each answer from what the lib/ function behind its handler returns (as JSON: Dates arrive as strings), so a
@@ -115,4 +119,14 @@ export const medicalApi = {
     ),
   postMessage: (sessionId: number, body: Body<typeof sessionMessageSchema>) =>
     sendJson<{ messages: SessionMessageDto[] }>("POST", medicalKeys.thread(sessionId), body),
+export const seasonApi = {
+  createPhase: (teamId: number, body: Body<typeof phaseInputSchema>) =>
+    sendJson<{ phase: SeasonPhase }>("POST", seasonKeys.phases(teamId), body),
+  deletePhase: (phaseId: number) => sendJson<{ ok: true }>("DELETE", seasonKeys.phase(phaseId)),
+  copyPhase: (phaseId: number, body: Body<typeof copyPhaseSchema>) =>
+    sendJson<{ phase: SeasonPhase; sessionsCopied: number }>("POST", seasonKeys.copyPhase(phaseId), body),
+  createMeet: (teamId: number, body: Body<typeof meetInputSchema>) =>
+    sendJson<{ meet: SeasonMeet }>("POST", seasonKeys.meets(teamId), body),
+  generate: (teamId: number, body: Body<typeof progressionSchema>) =>
+    sendJson<ProgressionResult>("POST", seasonKeys.progression(teamId), body),
 };

@@ -42,4 +42,14 @@ export const restrictionKeys = {
 export const medicalKeys = {
   availability: (athleteId: number) => `/api/athletes/${athleteId}/availability`,
   thread: (sessionId: number) => `/api/sessions/${sessionId}/messages`,
+export const seasonKeys = {
+  view: (teamId: number, from: string, weeks: number) => `/api/teams/${teamId}/season?from=${from}&weeks=${weeks}`,
+  export: (teamId: number, from: string, weeks: number) =>
+    `/api/teams/${teamId}/season/export?from=${from}&weeks=${weeks}`,
+  phases: (teamId: number) => `/api/teams/${teamId}/season/phases`,
+  phase: (phaseId: number) => `/api/season-phases/${phaseId}`,
+  copyPhase: (phaseId: number) => `/api/season-phases/${phaseId}/copy`,
+  meets: (teamId: number) => `/api/teams/${teamId}/season/meets`,
+  meet: (meetId: number) => `/api/meets/${meetId}`,
+  progression: (teamId: number) => `/api/teams/${teamId}/season/progression`,
 } as const;

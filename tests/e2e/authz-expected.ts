@@ -100,6 +100,7 @@ const TABLE: Line[] = [
   ["PAGE /not-allowed",       "sign-in", "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
   ["PAGE /plan-vs-actual",    "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "ok"],
   ["PAGE /plan",              "sign-in", "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
+  ["PAGE /season",           "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "ok"],
   ["PAGE /settings",          "sign-in", "not-allowed", "not-allowed", "not-allowed", "not-allowed", "ok",          "ok"],
   ["PAGE /speed",             "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "ok"],
   ["PAGE /speed/[athleteId]", "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "not-found"],

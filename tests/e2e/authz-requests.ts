@@ -225,6 +225,7 @@ export const REQUESTS: Record<string, Build> = {
   "PAGE /not-allowed": async () => page("/not-allowed"),
   "PAGE /plan": async () => page("/plan"),
   "PAGE /plan-vs-actual": async () => page("/plan-vs-actual"),
+  "PAGE /season": async () => page("/season"),
   "PAGE /settings": async () => page("/settings"),
   "PAGE /speed": async () => page("/speed"),
   "PAGE /speed/[athleteId]": async (w, s) => page(`/speed/${athlete(w, s)}`),

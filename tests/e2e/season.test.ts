@@ -1,0 +1,108 @@
+// The coach's season journey in Chromium against next start on the demo club: add a phase, write five draft weeks
+// from one week (+10 % for three weeks, then a 40 % unload), see the forecast warn about the week that jumps
+// after the unload, write them again with a lighter unload and see the warning clear. Far-future weeks keep the
+// demo's own plan out of the figures. axe on the screen; no sideways scroll on a phone.
+import { afterAll, beforeAll, expect, it } from "vitest";
+import type { Browser, Page } from "playwright-core";
+import { addDays, shiftWeek, startOfWeek } from "@/lib/dates/plain-date";
+import { seriousAxeViolations } from "./axe";
+import { apiSession, describeBrowser, launchBrowser, screenshot, signIn } from "./harness";
+import { startMailApp, type MailApp } from "./notices-app";
+
+const HEAD = "head.coach@harbourvale.test";
+
+describeBrowser("the season view", () => {
+  let app: MailApp;
+  let browser: Browser;
+  let source: string;
+
+  beforeAll(async () => {
+    app = await startMailApp();
+    browser = await launchBrowser();
+    const today = new Date().toLocaleDateString("en-CA", { timeZone: "Europe/London" });
+    source = shiftWeek(startOfWeek(today, 1), 30);
+    const head = await apiSession(app, HEAD);
+    const [maya] = await app.query<{ id: number; team_id: number }>(
+      "SELECT id, team_id FROM athletes WHERE name LIKE 'Maya%'",
+    );
+    const team = { id: maya.team_id };
+    for (const day of [1, 3]) {
+      const res = await head.fetch(`/api/teams/${team.id}/sessions`, {
+        method: "POST",
+        headers: { "content-type": "application/json", origin: app.url },
+        body: JSON.stringify({
+          from: "blank",
+          athleteId: maya.id,
+          date: addDays(source, day),
+          title: "Speed",
+          durationMin: 60,
+          plannedRpe: 7,
+          blocks: [
+            {
+              kind: "max_velocity",
+              title: "Flying 30s",
+              running: { sets: 2, reps: 5, distanceM: 30, intensityPct: 95, start: "flying", runInM: 20, restSec: 240 },
+              drills: null,
+              notes: null,
+            },
+          ],
+        }),
+      });
+      expect(res.status).toBe(201);
+    }
+  }, 300_000);
+  afterAll(async () => {
+    await browser?.close();
+    await app?.stop();
+  });
+
+  async function write(page: Page, unloadPct: string) {
+    const form = page.getByTestId("progression-form");
+    await form.getByLabel("Copy the week of").fill(source);
+    await form.getByLabel("Start in the week of").fill(shiftWeek(source, 1));
+    await form.getByLabel("Weeks", { exact: true }).fill("5");
+    await form.getByLabel("Rise each week (%)").fill("10");
+    await form.getByLabel("Build weeks").fill("3");
+    await form.getByLabel("Unload cut (%)").fill(unloadPct);
+    await form.getByRole("button", { name: "Write draft weeks" }).click();
+    await form.getByTestId("progression-message").getByText("10 draft sessions written over 5 weeks").waitFor();
+  }
+
+  it("adds a phase, writes weeks, warns about the jump after the unload and clears it", async () => {
+    const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    await signIn(page, app, HEAD);
+    await page.goto(`${app.url}/season?from=${source}`);
+    await page.getByTestId("season-grid").waitFor();
+
+    const phase = page.getByTestId("phase-form");
+    await phase.getByLabel("Name").fill("Speed build");
+    await phase.getByLabel("Kind").selectOption({ label: "Specific preparation" });
+    await phase.getByLabel("First day").fill(shiftWeek(source, 1));
+    await phase.getByLabel("Last day").fill(addDays(shiftWeek(source, 5), 6));
+    await phase.getByRole("button", { name: "Add phase" }).click();
+    await page.getByTestId("season-phases").getByText("Speed build · Specific preparation").waitFor();
+
+    await write(page, "40");
+    const jump = page.getByTestId("season-warning").filter({ hasText: "after an unload week" });
+    await jump.waitFor();
+    expect(await jump.textContent()).toMatch(/^Maya/);
+    const cell = page.locator(`[data-testid=season-row] [data-week="${shiftWeek(source, 5)}"]`).first();
+    expect(await cell.getAttribute("href")).toBe(`/plan?week=${shiftWeek(source, 5)}`);
+    await screenshot(page, "season-warned");
+    expect(await seriousAxeViolations(page)).toEqual([]);
+
+    await write(page, "10");
+    await page.getByTestId("no-season-warnings").waitFor();
+    await page.close();
+  }, 180_000);
+
+  it("fits a phone without sideways scrolling", async () => {
+    const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
+    await signIn(page, app, HEAD);
+    await page.goto(`${app.url}/season?from=${source}`);
+    await page.getByTestId("season-grid").waitFor();
+    const widths = await page.evaluate(() => [document.documentElement.scrollWidth, window.innerWidth]);
+    expect(widths[0]).toBeLessThanOrEqual(widths[1]);
+    await page.close();
+  }, 90_000);
+});
