@@ -120,8 +120,9 @@ export function SeasonGrid({ view }: { view: SeasonViewDto }) {
     { key: "none", name: "No group", rows: view.athletes.filter((a) => a.groupId === null) },
   ].filter((g) => g.rows.length > 0);
   return (
+    // relative: the cells' sr-only labels are placed absolutely; outside a positioned box they widen the page.
     <div
-      className="max-w-full overflow-x-auto rounded-xl bg-paper-raised ring-1 ring-ink-100"
+      className="relative max-w-full overflow-x-auto rounded-xl bg-paper-raised ring-1 ring-ink-100"
       data-testid="season-grid"
     >
       <table className="min-w-full border-collapse text-left">

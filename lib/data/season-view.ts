@@ -1,10 +1,12 @@
 import "server-only";
-import { addDays, isoWeekOf, shiftWeek, startOfWeek } from "@/lib/dates/plain-date";
+import { addDays, dayIndex, isoWeekOf, shiftWeek, startOfWeek } from "@/lib/dates/plain-date";
 import { teamToday, type TeamClock } from "@/lib/dates/zoned";
+import { ledgerMethod, ledgerReadRange, ledgerWindow } from "@/lib/load/ledger";
+import { weekFromLedger } from "@/lib/load/ledger-week";
 import type { TeamLoadSettings } from "@/lib/load/types";
-import { seasonRow, type GridMeet, type SeasonRow } from "@/lib/season/season-grid";
-import { getTeamClock } from "./load";
-import { getLedgerWeek } from "./load-ledger";
+import { seasonRow, type GridMeet, type LedgerWeekFigures, type SeasonRow } from "@/lib/season/season-grid";
+import { ensureLedgerFresh, readLedgerRows } from "./ledger";
+import { getLoadSeriesInputs, getTeamClock } from "./load";
 import { listMeets, listPhases, type SeasonMeet, type SeasonPhase } from "./season";
 
 export type SeasonViewDto = {
@@ -45,18 +47,13 @@ export async function getSeasonView({
     listPhases({ teamId, from: first, to: last }),
     listMeets({ teamId, from: first, to: last }),
   ]);
-  const perWeek: Awaited<ReturnType<typeof getLedgerWeek>>[] = [];
-  for (const weekStart of starts) perWeek.push(await getLedgerWeek({ teamId, weekStart, today, view: "projected" }));
-  const settings = perWeek[0].settings;
+  const { settings, athletes: inputs } = await ledgerWeeks({ teamId, starts, today });
   const groups = new Map<number, string>();
-  const athletes = perWeek[0].athletes.map((a, i) => {
+  const athletes = inputs.map(({ athlete: a, weeks: figures }) => {
     if (a.groupId !== null && a.groupName) groups.set(a.groupId, a.groupName);
     const row = seasonRow({
       athlete: a,
-      weeks: perWeek.map((w) => {
-        const { week, flags, topLevel } = w.athletes[i].load;
-        return { ...week, flags, topLevel };
-      }),
+      weeks: figures,
       phases,
       meets: meets as GridMeet[],
       acwrMetric: settings.acwrMetric,
@@ -80,5 +77,45 @@ export async function getSeasonView({
     meets,
     groups: [...groups].map(([id, name]) => ({ id, name })),
     athletes,
+  };
+}
+
+/** The most days before a week the recovery rule can look back (recoveryHours is at most 120 h). */
+const MAX_LOOK_BACK_DAYS = 6;
+
+/**
+ * Every athlete's weeks from one read of the ledger and the sessions of the whole span (lib/load/README.md §12):
+ * each week is weekFromLedger over one window, in the projected view, as getLedgerWeek answers it week by week.
+ */
+async function ledgerWeeks({ teamId, starts, today }: { teamId: number; starts: string[]; today: string }) {
+  const first = starts[0];
+  const last = addDays(starts[starts.length - 1], 6);
+  await ensureLedgerFresh({});
+  const inputs = await getLoadSeriesInputs({ teamId, from: addDays(first, -MAX_LOOK_BACK_DAYS - 7), through: last });
+  const todayDay = dayIndex(today);
+  const fromDay = dayIndex(first) - 7;
+  const toDay = dayIndex(last);
+  const ids = inputs.athletes.map((a) => a.id);
+  const rows = await readLedgerRows({ athleteIds: ids, ...ledgerReadRange(fromDay, toDay, todayDay) });
+  const method = ledgerMethod(inputs.settings);
+  return {
+    settings: inputs.settings,
+    athletes: inputs.athletes.map((a) => {
+      const window = ledgerWindow({ rows: rows.get(a.id) ?? [], fromDay, toDay, todayDay, view: "projected", method });
+      const weeks = starts.map((weekStart): LedgerWeekFigures => {
+        const { week, flags, topLevel } = weekFromLedger({
+          window,
+          sessions: a.sessions,
+          logs: a.logs,
+          profile: a.profile,
+          settings: inputs.settings,
+          view: "projected",
+          todayDay,
+          weekStartDay: dayIndex(weekStart),
+        });
+        return { ...week, flags, topLevel };
+      });
+      return { athlete: a, weeks };
+    }),
   };
 }
