@@ -29,8 +29,7 @@ import type { SessionMessageDto } from "@/lib/data/session-messages";
 import type { SessionConflict } from "@/lib/restrictions/conflicts";
 import type { availabilitySchema } from "@/lib/validations/availability";
 import type { sessionMessageSchema } from "@/lib/validations/session-messages";
-import { loadKeys, medicalKeys, noticeKeys, planKeys, restrictionKeys } from "./keys";
-import { loadKeys, noticeKeys, planKeys, restrictionKeys, seasonKeys } from "./keys";
+import { loadKeys, medicalKeys, noticeKeys, planKeys, restrictionKeys, seasonKeys } from "./keys";
 
 // Every write the browser sends, each body typed from the schema its handler parses (z.input: before coercion),
 // each answer from what the lib/ function behind its handler returns (as JSON: Dates arrive as strings), so a
@@ -119,6 +118,8 @@ export const medicalApi = {
     ),
   postMessage: (sessionId: number, body: Body<typeof sessionMessageSchema>) =>
     sendJson<{ messages: SessionMessageDto[] }>("POST", medicalKeys.thread(sessionId), body),
+};
+
 export const seasonApi = {
   createPhase: (teamId: number, body: Body<typeof phaseInputSchema>) =>
     sendJson<{ phase: SeasonPhase }>("POST", seasonKeys.phases(teamId), body),

@@ -42,6 +42,8 @@ export const restrictionKeys = {
 export const medicalKeys = {
   availability: (athleteId: number) => `/api/athletes/${athleteId}/availability`,
   thread: (sessionId: number) => `/api/sessions/${sessionId}/messages`,
+} as const;
+
 export const seasonKeys = {
   view: (teamId: number, from: string, weeks: number) => `/api/teams/${teamId}/season?from=${from}&weeks=${weeks}`,
   export: (teamId: number, from: string, weeks: number) =>
