@@ -170,18 +170,20 @@ function associate() {
 
   Athlete.hasOne(CalendarFeedRender, { foreignKey: "athleteId", as: "feedRender", ...cascade });
 
-  Team.hasMany(SpeedUpload, { foreignKey: "teamId", ...cascade });
-  User.hasMany(SpeedUpload, { foreignKey: "uploadedByUserId", ...setNull });
-  Team.hasMany(SpeedTest, { foreignKey: "teamId", ...cascade });
-  Athlete.hasMany(SpeedTest, { foreignKey: "athleteId", ...cascade });
-  SpeedUpload.hasMany(SpeedTest, { foreignKey: "uploadId", ...setNull });
-  PlannedSession.hasMany(SpeedTest, { foreignKey: "plannedSessionId", ...setNull });
-  User.hasMany(SpeedTest, { foreignKey: "createdByUserId", ...setNull });
-  Team.hasMany(SpeedProfileEntry, { foreignKey: "teamId", ...cascade });
-  Athlete.hasMany(SpeedProfileEntry, { foreignKey: "athleteId", ...cascade });
-  SpeedTest.hasMany(SpeedProfileEntry, { foreignKey: "speedTestId", ...setNull });
-  User.hasMany(SpeedProfileEntry, { foreignKey: "acceptedByUserId", ...setNull });
-  Team.hasOne(SpeedLabSettings, { foreignKey: "teamId", ...cascade });
+  Team.hasMany(SpeedUpload, { foreignKey: "teamId", as: "speedUploads", ...cascade });
+  User.hasMany(SpeedUpload, { foreignKey: "uploadedByUserId", as: "speedUploads", ...setNull });
+  Team.hasMany(SpeedTest, { foreignKey: "teamId", as: "speedTests", ...cascade });
+  Athlete.hasMany(SpeedTest, { foreignKey: "athleteId", as: "speedTests", ...cascade });
+  SpeedUpload.hasMany(SpeedTest, { foreignKey: "uploadId", as: "tests", ...setNull });
+  PlannedSession.hasMany(SpeedTest, { foreignKey: "plannedSessionId", as: "speedTests", ...setNull });
+  User.hasMany(SpeedTest, { foreignKey: "createdByUserId", as: "speedTests", ...setNull });
+  Team.hasMany(SpeedProfileEntry, { foreignKey: "teamId", as: "speedProfileEntries", ...cascade });
+  Athlete.hasMany(SpeedProfileEntry, { foreignKey: "athleteId", as: "speedProfileEntries", ...cascade });
+  SpeedTest.hasMany(SpeedProfileEntry, { foreignKey: "speedTestId", as: "profileEntries", ...setNull });
+  User.hasMany(SpeedProfileEntry, { foreignKey: "acceptedByUserId", as: "acceptedSpeedEntries", ...setNull });
+  // Every association names its alias: without one Sequelize takes the class name, which the production bundle
+  // minifies (an empty or short name made a has-one getter replace Model#get and every write failed).
+  Team.hasOne(SpeedLabSettings, { foreignKey: "teamId", as: "speedLabSettings", ...cascade });
 
   // Load ledger (migration 011).
   Athlete.hasMany(LoadLedgerDay, { foreignKey: "athleteId", as: "ledger", ...cascade });
