@@ -75,6 +75,8 @@ describeBrowser("load screens", () => {
       .toArray()
       .then((chunks) => Buffer.concat(chunks).toString("utf8"));
     const lines = csv.trim().split(/\r?\n/);
+    // The load caution travels with the figures as the first line (a monitoring aid, not a diagnosis).
+    expect(lines.shift()).toContain("Load flags are monitoring aids, not diagnoses");
     expect(lines[0]).toBe(
       "Athlete,ACWR,Flags,HSR m,Near-max m,Sprint steps (est.),Plyo contacts,Contacts by intensity," +
         "≥ HSR speed m,≥ sprint speed m,≥ HSR % m,≥ near-max % m,≥ maximal % m,sRPE (AU),Weekly change",
