@@ -4,6 +4,7 @@ import { FlagMark } from "@/components/ui/flag-mark";
 import type { CoachTodayDto, TodaySession } from "@/lib/data/coach-today";
 import { formatDayLabel } from "@/lib/dates/plain-date";
 import { formatNumber } from "@/lib/format/number";
+import { figuresHref } from "@/lib/load/figures-link";
 import { FLAG_DISPLAY } from "@/lib/load/flag-display";
 import type { FlagKind } from "@/lib/load/flags";
 import { ALERT_KIND_LABEL } from "@/lib/notices/alert-display";
@@ -98,7 +99,7 @@ export function CoachToday({ data }: { data: CoachTodayDto }) {
         id="spikes"
         title="Spikes ahead in the next 7 days"
         count={data.spikes.length}
-        more={{ href: "/load", label: "Squad load" }}
+        more={{ href: figuresHref("spikes-ahead"), label: "How it is judged" }}
         empty={`No ACWR (${metric}) at or above ${formatNumber(data.spikeRatio, 2)} in the current plan.`}
       >
         {data.spikes.map((s) => (

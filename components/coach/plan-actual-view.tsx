@@ -1,11 +1,13 @@
 "use client";
 
+import Link from "next/link";
 import { useId, useState } from "react";
 import { Segmented } from "@/components/load/segmented";
 import { shortDate } from "@/components/load/chart-theme";
 import { Card } from "@/components/ui/card";
 import type { PlanActualDto } from "@/lib/data/plan-vs-actual";
 import { formatNumber } from "@/lib/format/number";
+import { figuresHref } from "@/lib/load/figures-link";
 import { PLAN_ACTUAL_METRICS } from "@/lib/load/plan-vs-actual";
 import { METRIC_INFO, type Metric } from "@/lib/load/types";
 import { PlanActualChart } from "./plan-actual-chart";
@@ -32,7 +34,10 @@ export function PlanActualView({ data }: { data: PlanActualDto }) {
         <p className="text-xs text-ink-500">
           &ldquo;Due so far&rdquo; is the plan of the days already past (and today once logged); the difference is done
           minus due so far. More than 10 % either way is marked. Logged work only: a session without a log counts
-          nothing here. Metres are estimates from each athlete&apos;s tested max velocity.
+          nothing here. Metres are estimates from each athlete&apos;s tested max velocity.{" "}
+          <Link href={figuresHref("plan-vs-actual")} className="font-medium text-lane-700 underline">
+            How plan versus actual is worked out
+          </Link>
         </p>
       </section>
       <section aria-labelledby="pva-trend" className="space-y-2">

@@ -16,6 +16,8 @@ export type FiguresTopic =
   | "weekly-change"
   | "monotony"
   | "recovery"
+  | "plan-vs-actual"
+  | "spikes-ahead"
   | "thresholds"
   | "caution";
 

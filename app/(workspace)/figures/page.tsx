@@ -8,6 +8,7 @@ import {
   StartFigures,
 } from "@/components/figures/model-figures";
 import { AcwrFigures, ProvisionalFigures, SeriesFigures, ZoneFigures } from "@/components/figures/ratio-figures";
+import { PlanVersusActualFigures, SpikesAheadFigures } from "@/components/figures/plan-figures";
 import { TeamThresholds } from "@/components/figures/team-thresholds";
 import {
   ContactFigures,
@@ -58,6 +59,8 @@ export default async function FiguresPage() {
         <MissingLogFigures settings={settings} />
         <WeeklyChangeFigures settings={settings} />
         <MonotonyFigures />
+        <PlanVersusActualFigures />
+        <SpikesAheadFigures settings={settings} />
         <MonotonyFlagFigures settings={settings} />
         <RecoveryFigures settings={settings} />
         <RecoveryWorkFigures settings={settings} />
