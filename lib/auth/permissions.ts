@@ -15,6 +15,10 @@ export type Action =
   | "plan:edit"
   | "load:view"
   | "log:write"
+  /** Reopen an athlete's log after its 48-hour lock. */
+  | "log:unlock"
+  /** The athlete's own daily check-in. */
+  | "checkin:write"
   | "alerts:view"
   | "alerts:manage"
   | "restrictions:edit"
@@ -46,6 +50,7 @@ export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
     "plan:edit": "team",
     "load:view": "team",
     "log:write": "team",
+    "log:unlock": "team",
     "alerts:view": "team",
     "alerts:manage": "team",
     "calendar:manage": "team",
@@ -64,6 +69,7 @@ export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
     "plan:edit": "team",
     "load:view": "team",
     "log:write": "team",
+    "log:unlock": "team",
     "alerts:view": "team",
     "alerts:manage": "team",
     "calendar:manage": "team",
@@ -93,6 +99,7 @@ export const PERMISSIONS: Record<Role, Partial<Record<Action, Scope>>> = {
     "plan:view": "own",
     "load:view": "own",
     "log:write": "own",
+    "checkin:write": "own",
     "calendar:manage": "own",
     "sessions:discuss": "own",
     "mailbox:view": "own",

@@ -11,6 +11,9 @@ export type LogTarget = {
   athleteId: number;
   date: string;
   status: SessionStatus;
+  title: string;
+  startTime: string;
+  durationMin: number;
   /** Block id → prescribed reps (sets × reps; for plyometrics summed over drills). */
   blockReps: Record<string, number>;
 };
@@ -30,7 +33,7 @@ export type SessionLogDto = {
 export async function getLogTarget({ sessionId }: { sessionId: number }): Promise<LogTarget | null> {
   const { PlannedSession, SessionBlock } = await db();
   const session = await PlannedSession.findByPk(sessionId, {
-    attributes: ["id", "teamId", "athleteId", "date", "status"],
+    attributes: ["id", "teamId", "athleteId", "date", "status", "title", "startTime", "durationMin"],
   });
   if (!session) return null;
   const blocks = await SessionBlock.findAll({
@@ -54,6 +57,9 @@ export async function getLogTarget({ sessionId }: { sessionId: number }): Promis
     athleteId: session.athleteId,
     date: session.date,
     status: session.status,
+    title: session.title,
+    startTime: session.startTime,
+    durationMin: session.durationMin,
     blockReps,
   };
 }
@@ -116,4 +122,16 @@ export async function getSessionLog({ sessionId }: { sessionId: number }): Promi
   const { SessionLog } = await db();
   const row = await SessionLog.findOne({ where: { sessionId } });
   return row ? toDto(row) : null;
+}
+
+/** Whether the session has a log (inside a write, to tell a first log from an edit). */
+export async function hasSessionLog({
+  sessionId,
+  transaction,
+}: {
+  sessionId: number;
+  transaction: Transaction;
+}): Promise<boolean> {
+  const { SessionLog } = await db();
+  return (await SessionLog.count({ where: { sessionId }, transaction })) > 0;
 }

@@ -161,3 +161,76 @@ export async function linkPainReportAlert({
   const { PainReport } = await db();
   await PainReport.update({ alertId }, { where: { id }, transaction });
 }
+
+/**
+ * Files a pain alert for one report: one unresolved alert per athlete × kind × week (a database rule), so a second
+ * report that week joins the open alert (its text appended, the worst level kept). Returns the alert's id.
+ */
+export async function addPainAlert({
+  transaction,
+  teamId,
+  athleteId,
+  date,
+  weekStart,
+  severity,
+  threshold,
+  level,
+  region,
+  text,
+}: {
+  transaction: Transaction;
+  teamId: number;
+  athleteId: number;
+  date: string;
+  weekStart: string;
+  severity: number;
+  threshold: number;
+  level: "alert" | "caution";
+  region: BodyRegion;
+  text: string;
+}): Promise<number> {
+  const { Alert } = await db();
+  const open = await Alert.findOne({
+    where: { athleteId, kind: "pain", weekStart, status: ["open", "acknowledged"] },
+    transaction,
+  });
+  if (open) {
+    const worse = severity >= open.value;
+    await open.update(
+      {
+        reason: `${open.reason}\n${text}`,
+        value: Math.max(open.value, severity),
+        level: open.level === "alert" || level === "alert" ? "alert" : "caution",
+        ...(worse ? { date, metric: region } : {}),
+        flagged: true,
+      },
+      { transaction },
+    );
+    return open.id;
+  }
+  const row = await Alert.create(
+    {
+      teamId,
+      athleteId,
+      kind: "pain",
+      level,
+      metric: region,
+      value: severity,
+      threshold,
+      date,
+      weekStart,
+      basis: "actual",
+      reason: text,
+      provisional: false,
+      flagged: true,
+      status: "open",
+      note: null,
+      acknowledgedBy: null,
+      acknowledgedAt: null,
+      resolvedBy: null,
+      resolvedAt: null,
+    },
+    { transaction },
+  );
+  return row.id;
+}

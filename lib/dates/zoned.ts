@@ -24,3 +24,16 @@ export type TeamClock = { teamId: number; timeZone: string; weekStartDay: number
 export function viewerClock(viewer: { timeZone: string; weekStartDay: number }): Omit<TeamClock, "teamId"> {
   return { timeZone: viewer.timeZone, weekStartDay: viewer.weekStartDay };
 }
+
+/** The instant of a local date and "HH:MM" time in `timeZone` (an unknown zone falls back to UTC). */
+export function zonedInstant({ date, time, timeZone }: { date: string; time: string; timeZone: string }): Date {
+  const dt = DateTime.fromISO(`${date}T${time}`, { zone: timeZone });
+  return (dt.isValid ? dt : DateTime.fromISO(`${date}T${time}`, { zone: "utc" })).toJSDate();
+}
+
+/** The local date and "HH:MM" of an instant in `timeZone`, for messages ("2026-12-04 18:30"). */
+export function zonedLabel({ instant, timeZone }: { instant: Date; timeZone: string }): { date: string; time: string } {
+  const dt = DateTime.fromJSDate(instant).setZone(timeZone);
+  const ok = dt.isValid ? dt : DateTime.fromJSDate(instant).toUTC();
+  return { date: ok.toISODate()!, time: ok.toFormat("HH:mm") };
+}

@@ -3,7 +3,13 @@ import type { PlyoLevel, Sex } from "@/lib/domain/athletes";
 
 export const DEMO_PASSWORD = "sprint-demo-2026";
 
-export const DEMO_TEAM = { name: "Harbour Vale Sprint Club", timeZone: "Europe/London", weekStartDay: 1 };
+export const DEMO_TEAM = {
+  name: "Harbour Vale Sprint Club",
+  timeZone: "Europe/London",
+  weekStartDay: 1,
+  // The demo asks its athletes for the daily check-in (migration 013), so the squad's status has some to show.
+  checkInsEnabled: true,
+};
 
 export const DEMO_STAFF = [
   { name: "Rosalind Achterberg", email: "head.coach@harbourvale.test", role: "head_coach" },

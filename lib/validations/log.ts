@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { COMPLETIONS } from "@/lib/domain/sessions";
+import { painReportSchema } from "./athlete-reports";
 import { noteText } from "./text";
 
 // From lib/domain (isomorphic), never from models/, so the browser bundle never pulls in Sequelize.
@@ -31,6 +32,8 @@ export const sessionLogSchema = z
       .nullable()
       .default(null),
     notes: noteText().max(2000, "Keep notes under 2000 characters").nullable().default(null),
+    /** Pain or discomfort during the session; null (or left out) for none. */
+    pain: painReportSchema.nullable().default(null),
   })
   .strict();
 export type SessionLogInput = z.infer<typeof sessionLogSchema>;

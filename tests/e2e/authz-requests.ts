@@ -62,6 +62,9 @@ export const REQUESTS: Record<string, Build> = {
   // Full training: the matrix checks who may set it without putting a restriction on anyone's plan.
   "POST /api/athletes/[athleteId]/availability": async (w, s) =>
     api("POST", `/api/athletes/${athlete(w, s)}/availability`, { level: "full", startsOn: w.today(), note: "Matrix" }),
+  "GET /api/athletes/[athleteId]/check-ins": async (w, s) => api("GET", `/api/athletes/${athlete(w, s)}/check-ins`),
+  "PUT /api/athletes/[athleteId]/check-ins": async (w, s) =>
+    api("PUT", `/api/athletes/${athlete(w, s)}/check-ins`, { sleep: 4, fatigue: 3, soreness: 3, stress: 4, mood: 4 }),
   "GET /api/athletes/[athleteId]/load": async (w, s) => api("GET", `/api/athletes/${athlete(w, s)}/load`),
   "GET /api/athletes/[athleteId]/restrictions": async (w, s) =>
     api("GET", `/api/athletes/${athlete(w, s)}/restrictions`),
@@ -128,6 +131,10 @@ export const REQUESTS: Record<string, Build> = {
     api("GET", `/api/sessions/${(await w.session(athlete(w, s))).id}/messages`),
   "POST /api/sessions/[sessionId]/messages": async (w, s) =>
     api("POST", `/api/sessions/${(await w.session(athlete(w, s))).id}/messages`, { body: "Matrix message" }),
+  "GET /api/sessions/[sessionId]/log": async (w, s) =>
+    api("GET", `/api/sessions/${(await w.session(athlete(w, s))).id}/log`),
+  "POST /api/sessions/[sessionId]/log/unlock": async (w, s) =>
+    api("POST", `/api/sessions/${(await w.session(athlete(w, s))).id}/log/unlock`),
   "PUT /api/sessions/[sessionId]/log": async (w, s) =>
     api("PUT", `/api/sessions/${(await w.session(athlete(w, s))).id}/log`, { completion: "yes", rpe: 6, minutes: 45 }),
   "DELETE /api/sessions/[sessionId]/log": async (w, s) => {
@@ -136,6 +143,10 @@ export const REQUESTS: Record<string, Build> = {
     if (logged.status !== 200) throw new Error(`fixture log answered ${logged.status}`);
     return api("DELETE", `/api/sessions/${id}/log`);
   },
+  "GET /api/teams/[teamId]/athlete-reports": async (w) => api("GET", `/api/teams/${w.teamId}/athlete-reports`),
+  // The demo club's own line: the matrix checks who may ask without changing when the physio is alerted.
+  "PATCH /api/teams/[teamId]/athlete-reports": async (w) =>
+    api("PATCH", `/api/teams/${w.teamId}/athlete-reports`, { painAlertAbove: 3 }),
   "GET /api/teams/[teamId]/load": async (w) => api("GET", `/api/teams/${w.teamId}/load`),
   "GET /api/teams/[teamId]/plan-vs-actual": async (w) => api("GET", `/api/teams/${w.teamId}/plan-vs-actual`),
   "GET /api/teams/[teamId]/plan": async (w) => api("GET", `/api/teams/${w.teamId}/plan`),
