@@ -27,7 +27,8 @@ export const NAV: NavItem[] = [
   { href: "/squad", label: "Squad", can: "athletes:view", scope: "team" },
   { href: "/speed", label: "Speed lab", can: "speed:view", scope: "team" },
   { href: "/me", label: "My training", can: "log:write", scope: "own" },
-  { href: "/load", label: "My load", can: "load:view", scope: "own" },
+  // The phone-first weekly figures; the day-by-day chart (/load/[own]) is linked from there.
+  { href: "/me/load", label: "My load", can: "load:view", scope: "own" },
   { href: "/members", label: "Members", can: "members:manage", scope: "team" },
   { href: "/settings", label: "Thresholds", can: "settings:edit", scope: "team" },
   { href: "/figures", label: "How figures work", can: "team:view", scope: "own" },

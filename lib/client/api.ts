@@ -12,7 +12,12 @@ import type { clearWeek, copyWeekToNext, publishWeek } from "@/lib/services/plan
 import type { createRestriction, liftRestriction } from "@/lib/services/restrictions";
 import type { saveSessionLog } from "@/lib/services/session-logs";
 import type { updateTeamLoadSettings } from "@/lib/services/team-settings";
+import type { PlanSession, PlanTemplate, PlanWriteResult } from "@/lib/plan/types";
+import type { Restriction, RestrictionHit } from "@/lib/restrictions/rules";
+import type { AthleteReportSettings } from "@/lib/data/athlete-report-settings";
+import type { CheckInDto } from "@/lib/data/check-ins";
 import type { alertActionSchema } from "@/lib/validations/alerts";
+import type { athleteReportSettingsSchema, checkInSchema } from "@/lib/validations/athlete-reports";
 import type { sessionLogSchema } from "@/lib/validations/log";
 import type { notificationSettingsSchema } from "@/lib/validations/notifications";
 import type { addBlockSchema, createSessionSchema, updateSessionSchema, weekToolSchema } from "@/lib/validations/plan";
@@ -30,6 +35,7 @@ import type { SessionConflict } from "@/lib/restrictions/conflicts";
 import type { availabilitySchema } from "@/lib/validations/availability";
 import type { sessionMessageSchema } from "@/lib/validations/session-messages";
 import { loadKeys, medicalKeys, noticeKeys, planKeys, restrictionKeys, seasonKeys } from "./keys";
+import { athleteReportKeys, loadKeys, noticeKeys, planKeys, restrictionKeys } from "./keys";
 
 // Every write the browser sends, each body typed from the schema its handler parses (z.input: before coercion),
 // each answer from what the lib/ function behind its handler returns (as JSON: Dates arrive as strings), so a
@@ -130,4 +136,13 @@ export const seasonApi = {
     sendJson<{ meet: SeasonMeet }>("POST", seasonKeys.meets(teamId), body),
   generate: (teamId: number, body: Body<typeof progressionSchema>) =>
     sendJson<ProgressionResult>("POST", seasonKeys.progression(teamId), body),
+};
+
+export const athleteReportApi = {
+  saveCheckIn: (athleteId: number, body: Body<typeof checkInSchema>) =>
+    sendJson<{ checkIn: CheckInDto }>("PUT", athleteReportKeys.checkIns(athleteId), body),
+  unlockLog: (sessionId: number) =>
+    sendJson<{ lock: { locked: boolean; locksAt: string } }>("POST", athleteReportKeys.unlockLog(sessionId)),
+  saveSettings: (teamId: number, body: Body<typeof athleteReportSettingsSchema>) =>
+    sendJson<{ settings: AthleteReportSettings }>("PATCH", athleteReportKeys.teamSettings(teamId), body),
 };

@@ -54,4 +54,9 @@ export const seasonKeys = {
   meets: (teamId: number) => `/api/teams/${teamId}/season/meets`,
   meet: (meetId: number) => `/api/meets/${meetId}`,
   progression: (teamId: number) => `/api/teams/${teamId}/season/progression`,
+/** The athlete's own reports: check-ins, a locked log reopened by a coach, the team's report settings. */
+export const athleteReportKeys = {
+  checkIns: (athleteId: number) => `/api/athletes/${athleteId}/check-ins`,
+  unlockLog: (sessionId: number) => `/api/sessions/${sessionId}/log/unlock`,
+  teamSettings: (teamId: number) => `/api/teams/${teamId}/athlete-reports`,
 } as const;

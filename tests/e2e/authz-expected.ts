@@ -102,6 +102,7 @@ const TABLE: Line[] = [
   ["PAGE /mailbox",           "sign-in", "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
   ["PAGE /mailbox/[mailId]",  "sign-in", "ok",          "not-found",   "not-found",   "not-found",   "not-found",   "not-found"],
   ["PAGE /me",                "sign-in", "ok",          "ok",          "not-allowed", "ok",          "ok",          "ok"],
+  ["PAGE /me/load",           "sign-in", "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
   ["PAGE /members",           "sign-in", "not-allowed", "not-allowed", "not-allowed", "not-allowed", "ok",          "ok"],
   ["PAGE /not-allowed",       "sign-in", "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
   ["PAGE /plan-vs-actual",    "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "ok"],

@@ -232,6 +232,7 @@ export const REQUESTS: Record<string, Build> = {
   "PAGE /mailbox": async () => page("/mailbox"),
   "PAGE /mailbox/[mailId]": async (w, s) => page(`/mailbox/${await w.mail(w.target(s).email)}`),
   "PAGE /me": async () => page("/me"),
+  "PAGE /me/load": async () => page("/me/load"),
   "PAGE /members": async () => page("/members"),
   "PAGE /not-allowed": async () => page("/not-allowed"),
   "PAGE /plan": async () => page("/plan"),

@@ -40,7 +40,15 @@ async function session(athleteId: number, date: string, title = "Acceleration") 
     status: "published",
     publishedAt: new Date(),
   });
-  const running = { sets: 1, reps: 4, distanceM: 30, intensityPct: 95, start: "crouch" as const, runInM: 0, restSec: 180 };
+  const running = {
+    sets: 1,
+    reps: 4,
+    distanceM: 30,
+    intensityPct: 95,
+    start: "crouch" as const,
+    runInM: 0,
+    restSec: 180,
+  };
   for (const [position, t] of ["Starts", "Flys", "Tempo"].entries())
     await d.SessionBlock.create({
       sessionId: s.id,

@@ -1,46 +1,24 @@
+import Link from "next/link";
+import { CheckInCard } from "@/components/athlete/check-in-card";
+import { CheckInTrend } from "@/components/athlete/check-in-trend";
+import { getMyLoad } from "@/components/athlete/my-load";
+import { MyLoadCards } from "@/components/athlete/my-load-cards";
+import { listMySessions } from "@/components/athlete/my-sessions";
+import { myWeeks } from "@/components/athlete/my-weeks";
+import { TodayCard, WeekList } from "@/components/athlete/today-card";
 import { FeedCard } from "@/components/calendar/feed-card";
 import { MyRestrictions } from "@/components/restrictions/my-restrictions";
 import { EmptyState, PageHeader } from "@/components/ui/card";
 import { pageViewer } from "@/lib/auth/page-access";
-import { getCalendarFeedStatus, listAthleteSessions, type AthleteSession } from "@/lib/data/calendar-tokens";
+import { getAthleteReportSettings } from "@/lib/data/athlete-report-settings";
+import { getCalendarFeedStatus } from "@/lib/data/calendar-tokens";
+import { listCheckIns } from "@/lib/data/check-ins";
+import { addDays } from "@/lib/dates/plain-date";
 import { teamToday } from "@/lib/dates/zoned";
 import { formatDayShort } from "@/lib/format/dates";
-import { addDays, startOfWeek } from "@/lib/dates/plain-date";
-import { SessionCard } from "./session-card";
 
 export const metadata = { title: "My training" };
 export const dynamic = "force-dynamic";
-
-function Week({
-  title,
-  from,
-  sessions,
-  today,
-  testId,
-}: {
-  title: string;
-  from: string;
-  sessions: AthleteSession[];
-  today: string;
-  testId: string;
-}) {
-  return (
-    <section data-testid={testId}>
-      <h2 className="mb-2 text-sm font-semibold tracking-wider text-ink-500 uppercase">
-        {title} <span className="font-normal tracking-normal normal-case">· from {formatDayShort(from)}</span>
-      </h2>
-      {sessions.length === 0 ? (
-        <EmptyState title="No sessions published yet">Your coach&apos;s plan shows up here once it is sent.</EmptyState>
-      ) : (
-        <div className="space-y-3">
-          {sessions.map((s) => (
-            <SessionCard key={s.id} session={s} today={today} />
-          ))}
-        </div>
-      )}
-    </section>
-  );
-}
 
 export default async function MyTrainingPage() {
   const viewer = await pageViewer("log:write", "own");
@@ -54,44 +32,76 @@ export default async function MyTrainingPage() {
       </>
     );
   }
-  const today = teamToday({ timeZone: viewer.timeZone, now: new Date() });
-  const thisWeek = startOfWeek(today, viewer.weekStartDay);
-  const nextWeek = addDays(thisWeek, 7);
-  const [sessions, feed] = await Promise.all([
-    listAthleteSessions({
+  const athleteId = viewer.athleteId;
+  const now = new Date();
+  const today = teamToday({ timeZone: viewer.timeZone, now });
+  const { thisWeek, nextWeek, end } = myWeeks(today, viewer.weekStartDay);
+  const [sessions, feed, settings, checkIns, load] = await Promise.all([
+    listMySessions({
       teamId: viewer.teamId,
-      athleteId: viewer.athleteId,
+      athleteId,
       from: thisWeek,
-      to: addDays(nextWeek, 6),
+      to: end,
+      today,
+      timeZone: viewer.timeZone,
+      now,
     }),
-    getCalendarFeedStatus({ athleteId: viewer.athleteId }),
+    getCalendarFeedStatus({ athleteId }),
+    getAthleteReportSettings({ teamId: viewer.teamId }),
+    listCheckIns({ athleteId, from: addDays(today, -27), to: today }),
+    getMyLoad({
+      teamId: viewer.teamId,
+      athleteId,
+      today,
+      timeZone: viewer.timeZone,
+      weekStartDay: viewer.weekStartDay,
+    }),
   ]);
+  const hero =
+    sessions.find((s) => s.date === today && s.status !== "cancelled") ??
+    sessions.find((s) => s.date >= today && s.status === "published");
+  const rest = sessions.filter((s) => s !== hero);
+  const todays = checkIns.find((c) => c.date === today) ?? null;
   return (
     <>
       <PageHeader
         title="My training"
-        lead="This week and next, as your coach published them. Log each session after you did it."
+        lead="Today first, then the rest of this week and next as your coach sent them."
       />
-      <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
-        <div className="space-y-6">
-          <MyRestrictions teamId={viewer.teamId} athleteId={viewer.athleteId} today={today} />
-          <Week
-            title="This week"
-            from={thisWeek}
-            sessions={sessions.filter((s) => s.date < nextWeek)}
+      <div className="grid gap-5 lg:grid-cols-[1fr_22rem]">
+        <div className="min-w-0 space-y-5">
+          {settings.checkInsEnabled ? <CheckInCard athleteId={athleteId} today={todays} /> : null}
+          <MyRestrictions teamId={viewer.teamId} athleteId={athleteId} today={today} />
+          {hero ? (
+            <TodayCard session={hero} today={today} />
+          ) : (
+            <EmptyState title="No sessions ahead yet">Your coach&apos;s plan shows up here once it is sent.</EmptyState>
+          )}
+          <section aria-label="My load this week" className="space-y-2">
+            <div className="flex items-baseline justify-between">
+              <h2 className="text-sm font-semibold tracking-wider text-ink-500 uppercase">My load this week</h2>
+              <Link href="/me/load" className="text-sm font-medium text-lane-700 underline" data-testid="my-load-link">
+                See the trend
+              </Link>
+            </div>
+            <MyLoadCards load={load} compact />
+          </section>
+          <WeekList
+            title={`This week · from ${formatDayShort(thisWeek)}`}
+            sessions={rest.filter((s) => s.date < nextWeek)}
             today={today}
             testId="week-this"
           />
-          <Week
-            title="Next week"
-            from={nextWeek}
-            sessions={sessions.filter((s) => s.date >= nextWeek)}
+          <WeekList
+            title={`Next week · from ${formatDayShort(nextWeek)}`}
+            sessions={rest.filter((s) => s.date >= nextWeek)}
             today={today}
             testId="week-next"
           />
         </div>
-        <aside>
-          <FeedCard athleteId={viewer.athleteId} initial={feed} />
+        <aside className="min-w-0 space-y-5">
+          {settings.checkInsEnabled ? <CheckInTrend checkIns={checkIns} /> : null}
+          <FeedCard athleteId={athleteId} initial={feed} />
         </aside>
       </div>
     </>

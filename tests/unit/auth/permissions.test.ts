@@ -32,8 +32,8 @@ describe("permission table", () => {
 describe("navigation", () => {
   it("never shows an athlete a squad screen", () => {
     const hrefs = navFor("athlete").map((n) => n.href);
-    expect(hrefs).toEqual(["/home", "/me", "/load", "/figures"]);
-    expect(navFor("athlete").find((n) => n.href === "/load")?.label).toBe("My load");
+    expect(hrefs).toEqual(["/home", "/me", "/me/load", "/figures"]);
+    expect(navFor("athlete").find((n) => n.href === "/me/load")?.label).toBe("My load");
   });
 
   it("shows the head coach members and thresholds, not the athlete's own screen", () => {
@@ -41,6 +41,7 @@ describe("navigation", () => {
     expect(hrefs).toContain("/members");
     expect(hrefs).toContain("/settings");
     expect(hrefs).not.toContain("/me");
+    expect(hrefs).not.toContain("/me/load");
     expect(
       navFor("head_coach")
         .filter((n) => n.href === "/load")

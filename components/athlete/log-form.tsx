@@ -12,11 +12,14 @@ import { planApi } from "@/lib/client/api";
 import { ApiError } from "@/lib/client/fetcher";
 import { applyServerErrors } from "@/lib/client/form-errors";
 import type { BlockInput } from "@/lib/load/types";
+import type { PainReportInput } from "@/lib/validations/athlete-reports";
 import { LOG_COMPLETIONS, sessionLogSchema, type SessionLogInput } from "@/lib/validations/log";
-import { BlockChecklist, completedRepsOf, initialDone, type BlockDone } from "./block-checklist";
+import { BlockChecklist, completedRepsOf, countableBlocks, initialDone, type BlockDone } from "./block-checklist";
+import { PainFields } from "./pain-fields";
+import { RpeScale } from "./rpe-scale";
 
 type FormValues = z.input<typeof sessionLogSchema>;
-type Log = {
+export type LoggedSession = {
   completion: SessionLogInput["completion"];
   rpe: number | null;
   minutes: number | null;
@@ -31,26 +34,40 @@ const COMPLETION_LABEL: Record<(typeof LOG_COMPLETIONS)[number], string> = {
 };
 const blankToNull = (v: unknown) => (v === "" || v === null || v === undefined ? null : Number(v));
 
+/** Whether every block was ticked with at least its prescribed reps. */
+function allDone(blocks: readonly BlockInput[], done: Record<string, BlockDone>): boolean {
+  return countableBlocks(blocks).every((b) => done[b.id]?.ticked && done[b.id].reps >= b.prescribed);
+}
+
 /**
- * What the athlete did in one session: completion, the blocks (and reps) done when only part of it was done,
- * session RPE (CR-10), minutes and a note. Per-block reps replace the engine's "half of every block" default.
+ * The log sheet's form: what was done block by block (pre-filled from the plan; the load engine counts exactly
+ * these reps), session RPE on CR-10, minutes, a note and any pain. Saving replaces the session's log.
  */
-export function SessionLogForm({
+export function LogForm({
   sessionId,
   plannedMinutes,
-  blocks = [],
+  blocks,
   log,
+  pain,
+  onSaved,
 }: {
   sessionId: number;
   plannedMinutes: number;
-  blocks?: readonly BlockInput[];
-  log: Log | null;
+  blocks: readonly BlockInput[];
+  log: LoggedSession | null;
+  pain: PainReportInput | null;
+  onSaved: () => void;
 }) {
   const router = useRouter();
-  const [saved, setSaved] = useState<string | null>(null);
+  const [message, setMessage] = useState<string | null>(null);
   const [done, setDone] = useState<Record<string, BlockDone>>(() => initialDone(blocks, log?.completedReps));
-  const [blockErrors, setBlockErrors] = useState<Record<string, string>>({});
-  const { register, handleSubmit, setError, formState, control } = useForm<FormValues, unknown, SessionLogInput>({
+  const [painReport, setPainReport] = useState<PainReportInput | null>(pain);
+  const [fieldErrors, setFieldErrors] = useState<Record<string, string>>({});
+  const { register, handleSubmit, setError, setValue, formState, control } = useForm<
+    FormValues,
+    unknown,
+    SessionLogInput
+  >({
     resolver: zodResolver(sessionLogSchema),
     defaultValues: {
       completion: log?.completion ?? "yes",
@@ -58,6 +75,7 @@ export function SessionLogForm({
       minutes: log?.minutes ?? plannedMinutes,
       completedReps: null,
       notes: log?.notes ?? null,
+      pain: null,
     },
   });
   const errors = formState.errors;
@@ -65,39 +83,33 @@ export function SessionLogForm({
   const didNotTrain = completion === "no";
   const id = (name: string) => `log-${sessionId}-${name}`;
 
+  const changeBlocks = (next: Record<string, BlockDone>) => {
+    setDone(next);
+    setValue("completion", allDone(blocks, next) ? "yes" : "partly");
+  };
+
   const submit = handleSubmit(async (values) => {
-    setSaved(null);
-    setBlockErrors({});
-    const partly = values.completion === "partly" ? { completedReps: completedRepsOf(done) } : { completedReps: null };
+    setMessage(null);
+    setFieldErrors({});
+    const reps = countableBlocks(blocks).length > 0 ? completedRepsOf(done) : null;
     const body: SessionLogInput = didNotTrain
-      ? { ...values, rpe: values.rpe ?? 0, minutes: null }
-      : { ...values, ...partly };
+      ? { ...values, rpe: null, minutes: null, completedReps: null, pain: painReport }
+      : { ...values, completedReps: reps, pain: painReport };
     try {
       await planApi.saveLog(sessionId, body);
-      setSaved("Saved. Thank you!");
       router.refresh();
+      onSaved();
     } catch (err) {
       if (err instanceof ApiError) {
         applyServerErrors({ setError }, err, ["completion", "rpe", "minutes", "notes"]);
-        setBlockErrors(
-          Object.fromEntries(
-            Object.entries(err.fields)
-              .filter(([f]) => f.startsWith("completedReps"))
-              .map(([f, m]) => [f, m[0]]),
-          ),
-        );
-        setSaved(err.message);
-      } else setSaved("Could not save; check your connection and try again.");
+        setFieldErrors(Object.fromEntries(Object.entries(err.fields).map(([f, m]) => [f, m[0]])));
+        setMessage(err.message);
+      } else setMessage("Could not save; check your connection and try again.");
     }
   });
 
   return (
-    <form
-      onSubmit={submit}
-      className="mt-4 space-y-4 rounded-lg bg-paper-sunk p-3 sm:p-4"
-      data-testid="log-form"
-      noValidate
-    >
+    <form onSubmit={submit} className="space-y-4" data-testid="log-form" noValidate>
       <fieldset>
         <legend className="text-sm font-medium text-ink-800">How did it go?</legend>
         <div className="mt-2 grid gap-2 sm:grid-cols-3">
@@ -105,7 +117,7 @@ export function SessionLogForm({
             <label
               key={c}
               className={clsx(
-                "flex cursor-pointer items-center gap-2 rounded-lg bg-paper-raised px-3 py-3 text-sm",
+                "flex min-h-11 cursor-pointer items-center gap-2 rounded-lg bg-paper-raised px-3 text-sm",
                 "ring-1 ring-ink-200 ring-inset has-[:checked]:ring-2 has-[:checked]:ring-lane-500",
               )}
             >
@@ -120,35 +132,17 @@ export function SessionLogForm({
             </label>
           ))}
         </div>
-        {errors.completion ? (
-          <p role="alert" className="mt-1 text-xs font-medium text-flag-spike">
-            {errors.completion.message}
-          </p>
-        ) : null}
       </fieldset>
-      {completion === "partly" ? (
-        <BlockChecklist sessionId={sessionId} blocks={blocks} done={done} onChange={setDone} errors={blockErrors} />
-      ) : null}
       {didNotTrain ? null : (
-        <div className="grid grid-cols-2 gap-3">
-          <Field
-            label="Effort (RPE 0–10)"
-            htmlFor={id("rpe")}
-            error={errors.rpe?.message}
-            hint="How hard the whole session felt, about 30 min after."
-          >
-            <Input
-              id={id("rpe")}
-              type="number"
-              inputMode="decimal"
-              min={0}
-              max={10}
-              step={0.5}
-              aria-invalid={Boolean(errors.rpe)}
-              {...register("rpe", { setValueAs: blankToNull })}
-              data-testid="log-rpe"
-            />
-          </Field>
+        <>
+          <BlockChecklist
+            sessionId={sessionId}
+            blocks={blocks}
+            done={done}
+            onChange={changeBlocks}
+            errors={fieldErrors}
+          />
+          <RpeScale field={register("rpe", { setValueAs: blankToNull })} error={errors.rpe?.message} />
           <Field label="Minutes" htmlFor={id("minutes")} error={errors.minutes?.message}>
             <Input
               id={id("minutes")}
@@ -158,11 +152,13 @@ export function SessionLogForm({
               max={600}
               aria-invalid={Boolean(errors.minutes)}
               {...register("minutes", { setValueAs: blankToNull })}
+              className="w-28"
               data-testid="log-minutes"
             />
           </Field>
-        </div>
+        </>
       )}
+      <PainFields idPrefix={id("pain")} value={painReport} onChange={setPainReport} errors={fieldErrors} />
       <Field label="Anything to tell your coach? (optional)" htmlFor={id("notes")} error={errors.notes?.message}>
         <Textarea
           id={id("notes")}
@@ -171,12 +167,12 @@ export function SessionLogForm({
           data-testid="log-notes"
         />
       </Field>
-      <div className="flex items-center gap-3">
-        <Button type="submit" disabled={formState.isSubmitting} className="w-full sm:w-auto" data-testid="log-save">
+      <div className="space-y-2">
+        <Button type="submit" size="lg" disabled={formState.isSubmitting} className="w-full" data-testid="log-save">
           {log ? "Update my log" : "Save my log"}
         </Button>
-        <p aria-live="polite" className="text-sm text-lane-700" data-testid="log-status">
-          {saved}
+        <p aria-live="polite" className="text-sm font-medium text-flag-spike" data-testid="log-status">
+          {message}
         </p>
       </div>
     </form>

@@ -1,0 +1,50 @@
+import { blockDescription } from "@/lib/format/block-summary";
+import { formatMinutes } from "@/lib/format/duration";
+import type { MySession } from "./my-session";
+
+/** A session in plain words: start time, blocks, the coach's notes and any limit from the medical staff. */
+export function SessionDetails({ session }: { session: MySession }) {
+  return (
+    <div className="space-y-3">
+      <p className="text-sm text-ink-700" data-testid="session-start">
+        Starts {session.startTime} · about {formatMinutes(session.durationMin)} · planned effort RPE{" "}
+        {session.plannedRpe}
+      </p>
+      {session.breaches.length > 0 ? (
+        <p
+          role="note"
+          className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm font-medium text-flag-spike"
+          data-testid="session-breach"
+        >
+          Changed by your medical staff: check with your coach. ({session.breaches.join("; ")})
+        </p>
+      ) : null}
+      <ol className="space-y-2 text-sm text-ink-700" data-testid="session-blocks">
+        {session.blocks.map((b, i) => (
+          <li key={b.id ?? i} className="space-y-0.5">
+            {blockDescription(b).map((line, j) => (
+              <p key={j} className={j === 0 ? "font-medium text-ink-800" : "pl-3"}>
+                {line}
+              </p>
+            ))}
+          </li>
+        ))}
+      </ol>
+      {session.notes?.trim() ? (
+        <p className="rounded-lg bg-paper-sunk px-3 py-2 text-sm text-ink-700" data-testid="session-coach-notes">
+          Coach&apos;s notes: {session.notes}
+        </p>
+      ) : null}
+      {session.restrictions.length > 0 ? (
+        <div className="rounded-lg bg-paper-sunk px-3 py-2 text-sm text-ink-700" data-testid="session-restrictions">
+          <p className="font-medium text-ink-800">Limits from your medical staff that day</p>
+          <ul className="mt-1 list-disc pl-5">
+            {session.restrictions.map((r) => (
+              <li key={r}>{r}</li>
+            ))}
+          </ul>
+        </div>
+      ) : null}
+    </div>
+  );
+}
