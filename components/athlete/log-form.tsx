@@ -4,7 +4,7 @@ import { clsx } from "clsx";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm, useWatch } from "react-hook-form";
+import { Controller, useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Textarea } from "@/components/ui/field";
@@ -142,7 +142,18 @@ export function LogForm({
             onChange={changeBlocks}
             errors={fieldErrors}
           />
-          <RpeScale field={register("rpe", { setValueAs: blankToNull })} error={errors.rpe?.message} />
+          <Controller
+            control={control}
+            name="rpe"
+            render={({ field }) => (
+              <RpeScale
+                name={id("rpe")}
+                value={typeof field.value === "number" ? field.value : null}
+                onChange={field.onChange}
+                error={errors.rpe?.message}
+              />
+            )}
+          />
           <Field label="Minutes" htmlFor={id("minutes")} error={errors.minutes?.message}>
             <Input
               id={id("minutes")}

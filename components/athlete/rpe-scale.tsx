@@ -1,16 +1,19 @@
 "use client";
 
 import { clsx } from "clsx";
-import type { UseFormRegisterReturn } from "react-hook-form";
 import { CR10_ANCHORS, CR10_SOURCE, CR10_STEPS } from "@/lib/domain/rpe";
 
 /** Session RPE as eleven big choices with the scale's own words beside them (Foster et al. 2001, Table 1). */
 export function RpeScale({
-  field,
+  name,
+  value,
+  onChange,
   error,
   testId = "log-rpe",
 }: {
-  field: UseFormRegisterReturn;
+  name: string;
+  value: number | null;
+  onChange: (rpe: number) => void;
   error?: string;
   testId?: string;
 }) {
@@ -27,7 +30,15 @@ export function RpeScale({
               "ring-1 ring-ink-200 ring-inset has-[:checked]:ring-2 has-[:checked]:ring-lane-500",
             )}
           >
-            <input type="radio" value={step} {...field} className="accent-lane-600" data-testid={`log-rpe-${step}`} />
+            <input
+              type="radio"
+              name={name}
+              value={step}
+              checked={value === step}
+              onChange={() => onChange(step)}
+              className="accent-lane-600"
+              data-testid={`log-rpe-${step}`}
+            />
             <span className="w-5 text-right font-semibold tabular-nums">{step}</span>
             <span className="text-ink-700">{CR10_ANCHORS[step] ?? ""}</span>
           </label>

@@ -83,7 +83,7 @@ describeBrowser("athlete's day on the phone", () => {
     );
     browser = await launchBrowser();
     context = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
-  }, 300_000);
+  }, 900_000);
   afterAll(async () => {
     await context?.close();
     await browser?.close();
@@ -149,7 +149,7 @@ describeBrowser("athlete's day on the phone", () => {
     expect(await app.query("SELECT id FROM alerts WHERE kind = 'pain' AND team_id = ?", [team.teamId])).toEqual([]);
     await screenshot(page, "athlete-day-logged");
     await page.close();
-  });
+  }, 120_000);
 
   it("shows my load on the phone: only my own weekly figures, with no serious axe finding", async () => {
     const page = await context.newPage();
@@ -168,7 +168,7 @@ describeBrowser("athlete's day on the phone", () => {
     expect(await seriousAxeViolations(page)).toEqual([]);
     await screenshot(page, "athlete-day-my-load");
     await page.close();
-  });
+  }, 60_000);
 
   it("starts 'this week' on Sunday for a Sunday-start team", async () => {
     await app.query("UPDATE teams SET week_start_day = 7 WHERE id = ?", [team.teamId]);
@@ -180,9 +180,9 @@ describeBrowser("athlete's day on the phone", () => {
     await page.goto(`${app.url}/me`);
     const week = page.getByTestId("week-this");
     await week.waitFor();
-    expect(await week.innerText()).toContain(`from ${formatDayShort(sunday)}`);
+    expect(await week.textContent()).toContain(`from ${formatDayShort(sunday)}`);
     expect(await page.getByText("Saturday before the week").count()).toBe(0);
     await app.query("UPDATE teams SET week_start_day = 1 WHERE id = ?", [team.teamId]);
     await page.close();
-  });
+  }, 60_000);
 });
