@@ -99,3 +99,21 @@ describe("actualSessionMetrics (as logged)", () => {
     expect(all.metrics.sprintM).toBeCloseTo(acc.sprintM + mv.sprintM / 2, 12);
   });
 });
+
+describe("a partial session logged block by block (the athlete's log sheet)", () => {
+  it("counts only the blocks done: two of three blocks at their planned reps, the third at 0; sRPE 7 × 60", () => {
+    const s = session("2026-03-10", { plannedRpe: 6, durationMin: 50, blocks });
+    const done = actualSessionMetrics(
+      s,
+      log(s.id, { completion: "partly", rpe: 7, minutes: 60, completedReps: { "b-acc": 8, "b-mv": 4, "b-plyo": 0 } }),
+      PROFILE,
+      SETTINGS,
+    );
+    const twoBlocks = sessionMetrics(session("2026-03-10", { blocks: blocks.slice(0, 2) }), PROFILE, SETTINGS);
+    expect(done.metrics.hsrM).toBeCloseTo(twoBlocks.metrics.hsrM, 12);
+    expect(done.metrics.sprintM).toBe(160 + 120);
+    expect(done.metrics.contacts).toBe(0);
+    // Foster et al. 2001: session RPE × minutes.
+    expect(done.metrics.srpe).toBe(420);
+  });
+});
