@@ -12,8 +12,6 @@ import type { clearWeek, copyWeekToNext, publishWeek } from "@/lib/services/plan
 import type { createRestriction, liftRestriction } from "@/lib/services/restrictions";
 import type { saveSessionLog } from "@/lib/services/session-logs";
 import type { updateTeamLoadSettings } from "@/lib/services/team-settings";
-import type { PlanSession, PlanTemplate, PlanWriteResult } from "@/lib/plan/types";
-import type { Restriction, RestrictionHit } from "@/lib/restrictions/rules";
 import type { AthleteReportSettings } from "@/lib/data/athlete-report-settings";
 import type { CheckInDto } from "@/lib/data/check-ins";
 import type { alertActionSchema } from "@/lib/validations/alerts";
@@ -34,8 +32,7 @@ import type { SessionMessageDto } from "@/lib/data/session-messages";
 import type { SessionConflict } from "@/lib/restrictions/conflicts";
 import type { availabilitySchema } from "@/lib/validations/availability";
 import type { sessionMessageSchema } from "@/lib/validations/session-messages";
-import { loadKeys, medicalKeys, noticeKeys, planKeys, restrictionKeys, seasonKeys } from "./keys";
-import { athleteReportKeys, loadKeys, noticeKeys, planKeys, restrictionKeys } from "./keys";
+import { athleteReportKeys, loadKeys, medicalKeys, noticeKeys, planKeys, restrictionKeys, seasonKeys } from "./keys";
 
 // Every write the browser sends, each body typed from the schema its handler parses (z.input: before coercion),
 // each answer from what the lib/ function behind its handler returns (as JSON: Dates arrive as strings), so a
