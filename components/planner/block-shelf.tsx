@@ -76,10 +76,11 @@ export const BlockShelf = memo(function BlockShelf({
           </button>
         ))}
       </div>
-      {/* A row that scrolls sideways above the grid on narrower screens; a column beside it on wide ones. */}
+      {/* A row that scrolls sideways above the grid on narrower screens; a column beside it on wide ones. Positioned,
+          so the cards' absolutely placed screen-reader text stays inside the scroll box instead of widening the page. */}
       <ul
         className={clsx(
-          "-mb-1 flex gap-1.5 overflow-x-auto pb-1 xl:-mr-1 xl:mb-0 xl:flex-col",
+          "relative -mb-1 flex gap-1.5 overflow-x-auto pb-1 xl:-mr-1 xl:mb-0 xl:flex-col",
           "xl:overflow-x-visible xl:overflow-y-auto xl:pr-1 xl:pb-0",
         )}
       >

@@ -43,7 +43,8 @@ export const WeekGrid = memo(function WeekGrid({
     return out;
   }, [week.restrictions]);
   return (
-    <div className="overflow-x-auto rounded-card bg-paper-raised shadow-card ring-1 ring-ink-100">
+    // Positioned, so absolutely placed screen-reader text in the cells stays inside this scroll box (not the page).
+    <div className="relative overflow-x-auto rounded-card bg-paper-raised shadow-card ring-1 ring-ink-100">
       <table
         data-testid="plan-grid"
         data-dragging={dragging || undefined}

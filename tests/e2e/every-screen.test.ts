@@ -117,10 +117,7 @@ describeBrowser("every main screen", () => {
       const context = await browser.newContext({ viewport: PHONE });
       const page = await context.newPage();
       await signIn(page, app, email);
-      // The week plan for staff is a known gap at 390 px (its template row widens the page), pinned with it.fails
-      // in planner-devices.test.ts ("has no sideways scroll at 390 px"); that test turns red the day it is fixed.
-      const known = role === "head_coach" || role === "coach" ? ["/plan"] : [];
-      for (const path of pagesOf(role).filter((p) => !known.includes(p))) {
+      for (const path of pagesOf(role)) {
         await visit(page, `${app.url}${path}`);
         await expectNoSideways(page, `${path} (${role})`);
         if (path === "/load" && role !== "athlete") {
