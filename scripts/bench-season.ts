@@ -8,7 +8,7 @@ import { shiftWeek, startOfWeek } from "../lib/dates/plain-date";
 
 const ATHLETES = Number(process.env.BENCH_ATHLETES ?? 30);
 const WEEKS = 40;
-const RUNS = 5;
+const RUNS = Number(process.env.BENCH_RUNS ?? 5);
 
 const ms = (t: number) => `${(performance.now() - t).toFixed(0)} ms`;
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];

@@ -59,71 +59,89 @@ const FIELDS = [
   "createdAt",
 ] as const;
 
+/** A new alert: raised, and not yet seen to. */
+const NEW_ALERT = {
+  flagged: true,
+  status: "open",
+  note: null,
+  acknowledgedBy: null,
+  acknowledgedAt: null,
+  resolvedBy: null,
+  resolvedAt: null,
+} as const;
+
+/** What the engine raised for one athlete in one week, and the kinds it judged there. */
+export type WeekAlertCheck = {
+  athleteId: number;
+  /** Kinds the caller evaluated for this week; kinds not listed are left alone. */
+  kinds: readonly AlertKind[];
+  candidates: readonly AlertCandidate[];
+};
+
 /**
- * Brings the stored alerts of one athlete-week in line with what the engine raises now, and returns the
- * alerts that are new. A flag is new when no alert of its kind and week is unresolved and the last one (if
- * any) was not still flagged: dragging a session back and forth, or re-evaluating, never adds a second alert.
+ * Brings the stored alerts of one week in line with what the engine raises now for each athlete checked, and
+ * returns the alerts that are new. A flag is new when no alert of its kind and week is unresolved and the last
+ * one (if any) was not still flagged: dragging a session back and forth, or re-evaluating, never adds a second
+ * alert. One read covers the week for every athlete, so a write touching a squad costs one query per week.
  */
 export async function syncWeekAlerts(args: {
   transaction: Transaction;
   teamId: number;
-  athleteId: number;
   weekStart: string;
   basis: AlertBasis;
-  /** Kinds the caller evaluated for this week; kinds not listed are left alone. */
-  kinds: readonly AlertKind[];
-  candidates: readonly AlertCandidate[];
-}): Promise<Array<{ id: number } & AlertCandidate>> {
+  athletes: readonly WeekAlertCheck[];
+}): Promise<Array<{ id: number; athleteId: number } & AlertCandidate>> {
   const { Alert } = await db();
-  const { transaction, teamId, athleteId, weekStart, basis } = args;
-  const created: Array<{ id: number } & AlertCandidate> = [];
-  // One read for the week; the newest row of each kind decides.
+  const { transaction, teamId, weekStart, basis } = args;
+  const created: Array<{ id: number; athleteId: number } & AlertCandidate> = [];
+  if (args.athletes.length === 0) return created;
+  // The newest row of each athlete and kind decides.
   const rows = await Alert.findAll({
-    where: { athleteId, weekStart, kind: { [Op.in]: [...args.kinds] } },
+    where: {
+      athleteId: { [Op.in]: args.athletes.map((a) => a.athleteId) },
+      weekStart,
+      kind: { [Op.in]: [...new Set(args.athletes.flatMap((a) => a.kinds))] },
+    },
     order: [["id", "DESC"]],
     transaction,
   });
-  for (const kind of args.kinds) {
-    const candidate = args.candidates.find((c) => c.kind === kind);
-    const latest = rows.find((r) => r.kind === kind) ?? null;
-    if (!candidate) {
-      if (latest?.flagged) await latest.update({ flagged: false }, { transaction });
-      continue;
+  for (const { athleteId, kinds, candidates } of args.athletes) {
+    for (const kind of kinds) {
+      const candidate = candidates.find((c) => c.kind === kind);
+      const latest = rows.find((r) => r.athleteId === athleteId && r.kind === kind) ?? null;
+      if (!candidate) {
+        if (latest?.flagged) await latest.update({ flagged: false }, { transaction });
+        continue;
+      }
+      const facts = {
+        level: candidate.level,
+        metric: candidate.metric,
+        value: candidate.value,
+        threshold: candidate.threshold,
+        date: candidate.date,
+        reason: candidate.reason,
+        provisional: candidate.provisional,
+      };
+      if (latest && latest.status !== "resolved") {
+        await latest.update({ ...facts, flagged: true }, { transaction });
+        continue;
+      }
+      // Resolved while the flag stayed up: the physio has dealt with this one.
+      if (latest?.flagged) continue;
+      const row = await Alert.create(
+        {
+          teamId,
+          athleteId,
+          kind,
+          weekStart,
+          basis,
+          ...facts,
+          ...NEW_ALERT,
+        },
+        { transaction },
+      );
+      created.push({ id: row.id, athleteId, ...candidate });
     }
-    const facts = {
-      level: candidate.level,
-      metric: candidate.metric,
-      value: candidate.value,
-      threshold: candidate.threshold,
-      date: candidate.date,
-      reason: candidate.reason,
-      provisional: candidate.provisional,
-    };
-    if (latest && latest.status !== "resolved") {
-      await latest.update({ ...facts, flagged: true }, { transaction });
-      continue;
-    }
-    // Resolved while the flag stayed up: the physio has dealt with this one.
-    if (latest?.flagged) continue;
-    const row = await Alert.create(
-      {
-        teamId,
-        athleteId,
-        kind,
-        weekStart,
-        basis,
-        ...facts,
-        flagged: true,
-        status: "open",
-        note: null,
-        acknowledgedBy: null,
-        acknowledgedAt: null,
-        resolvedBy: null,
-        resolvedAt: null,
-      },
-      { transaction },
-    );
-    created.push({ id: row.id, ...candidate });
   }
   return created;
 }
@@ -367,13 +385,7 @@ export async function addOverrideAlert({
       basis: "planned",
       reason: text,
       provisional: false,
-      flagged: true,
-      status: "open",
-      note: null,
-      acknowledgedBy: null,
-      acknowledgedAt: null,
-      resolvedBy: null,
-      resolvedAt: null,
+      ...NEW_ALERT,
     },
     { transaction },
   );

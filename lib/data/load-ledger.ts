@@ -74,3 +74,65 @@ export async function getLedgerWeek({
     }),
   };
 }
+
+/**
+ * Several weeks of the athletes (the team's, or `athleteIds`) from one read of the ledger and of the sessions
+ * across them: each week's summary and flags exactly as getLedgerWeek answers that week. The season view and the
+ * alert check after a squad-wide write (a generated progression) read their weeks this way, one query per table.
+ */
+export async function getLedgerWeeks({
+  teamId,
+  athleteIds,
+  starts,
+  today,
+  view,
+  transaction,
+}: {
+  transaction?: Transaction;
+  teamId: number;
+  athleteIds?: readonly number[];
+  /** Week starts (YYYY-MM-DD), in any order. */
+  starts: readonly string[];
+  today: string;
+  view: LoadView;
+}): Promise<Omit<LoadInputs, "athletes"> & { athletes: (LoadAthleteInputs & { weeks: Map<string, LedgerWeek> })[] }> {
+  const sorted = [...new Set(starts)].sort();
+  const first = sorted[0];
+  const last = addDays(sorted[sorted.length - 1], 6);
+  await ensureLedgerFresh({ transaction });
+  const inputs = await getLoadSeriesInputs({
+    teamId,
+    athleteIds,
+    from: addDays(first, -MAX_LOOK_BACK_DAYS),
+    through: last,
+    transaction,
+  });
+  const todayDay = dayIndex(today);
+  const fromDay = dayIndex(first) - 7;
+  const toDay = dayIndex(last);
+  const ids = inputs.athletes.map((a) => a.id);
+  const rows = await readLedgerRows({ athleteIds: ids, ...ledgerReadRange(fromDay, toDay, todayDay), transaction });
+  const method = ledgerMethod(inputs.settings);
+  return {
+    ...inputs,
+    athletes: inputs.athletes.map((a) => {
+      const window = ledgerWindow({ rows: rows.get(a.id) ?? [], fromDay, toDay, todayDay, view, method });
+      const weeks = new Map(
+        sorted.map((weekStart) => [
+          weekStart,
+          weekFromLedger({
+            window,
+            sessions: a.sessions,
+            logs: a.logs,
+            profile: a.profile,
+            settings: inputs.settings,
+            view,
+            todayDay,
+            weekStartDay: dayIndex(weekStart),
+          }),
+        ]),
+      );
+      return { ...a, weeks };
+    }),
+  };
+}

@@ -4,6 +4,7 @@ import { AppError } from "@/lib/errors";
 import { normaliseBlock, type BlockContent } from "@/lib/plan/blocks";
 import { toPlanSession, type SessionRow } from "@/lib/plan/dto";
 import type { PlanSession } from "@/lib/plan/types";
+import { insertRowsReturningIds } from "@/lib/db/insert-rows";
 import { db } from "@/models";
 
 // Session rows as the plan readers (lib/data/plan.ts) and the plan services (lib/services/plan-*.ts) see them.
@@ -153,10 +154,8 @@ export async function insertBlocks({
   if (blocks.length === 0) return;
   await assertTemplateLinks({ teamId, blocks, transaction });
   const { SessionBlock } = await db();
-  // One create per block, not bulkCreate: Sequelize's SQLite bulkCreate writes the values into the SQL text,
-  // where a NUL ends the statement; create() binds them. A session holds at most 20 blocks.
-  for (const [i, raw] of blocks.entries())
-    await SessionBlock.create({ sessionId, position: start + i, ...blockValues(raw) }, { transaction });
+  const rows = blocks.map((raw, i) => ({ sessionId, position: start + i, ...blockValues(raw) }));
+  await insertRowsReturningIds(SessionBlock, rows, transaction);
 }
 
 /** The stored columns of a block, normalised. */

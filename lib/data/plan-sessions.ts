@@ -3,6 +3,7 @@ import { Op, type InferAttributes, type Transaction } from "sequelize";
 import { AppError } from "@/lib/errors";
 import type { BlockContent } from "@/lib/plan/blocks";
 import { db, type PlannedSession } from "@/models";
+import { insertRowsReturningIds } from "@/lib/db/insert-rows";
 import { assertTemplateLinks, blockValues, insertBlocks } from "./plan-rows";
 
 // Row writes of planned sessions and their blocks. The workflows (transaction, rules, restriction guard,
@@ -22,21 +23,39 @@ export type SessionValues = Partial<
   Omit<NewSession, "blocks"> & Pick<Columns, "status" | "publishedAt" | "version" | "sequence">
 >;
 
-/** A new draft with its blocks; its id. */
-export async function insertSession({
+/** A new session's own columns (its blocks are rows of their own). */
+const sessionColumns = ({ athleteId, date, startTime, durationMin, title, plannedRpe, notes }: NewSession) =>
+  ({ athleteId, date, startTime, durationMin, title, plannedRpe, notes }) satisfies Omit<NewSession, "blocks">;
+
+/** New drafts with their blocks, in one statement per table (a generated season is hundreds); their ids in order. */
+export async function insertSessions({
   teamId,
-  session,
+  sessions,
   transaction,
 }: {
   teamId: number;
-  session: NewSession;
+  sessions: readonly NewSession[];
   transaction: Transaction;
-}): Promise<number> {
-  const { PlannedSession } = await db();
-  const { blocks, ...fields } = session;
-  const row = await PlannedSession.create({ teamId, ...fields, status: "draft", publishedAt: null }, { transaction });
-  await insertBlocks({ teamId, sessionId: row.id, blocks, transaction });
-  return row.id;
+}): Promise<number[]> {
+  if (sessions.length === 0) return [];
+  const { PlannedSession, SessionBlock } = await db();
+  await assertTemplateLinks({ teamId, blocks: sessions.flatMap((s) => s.blocks), transaction });
+  const ids = await insertRowsReturningIds(
+    PlannedSession,
+    sessions.map((s) => ({ teamId, ...sessionColumns(s), status: "draft" as const, publishedAt: null })),
+    transaction,
+  );
+  const blocks = sessions.flatMap((s, i) =>
+    s.blocks.map((raw, position) => ({ sessionId: ids[i], position, ...blockValues(raw) })),
+  );
+  await insertRowsReturningIds(SessionBlock, blocks, transaction);
+  return ids;
+}
+
+/** A new draft with its blocks; its id. */
+export async function insertSession(args: { teamId: number; session: NewSession; transaction: Transaction }) {
+  const [id] = await insertSessions({ teamId: args.teamId, sessions: [args.session], transaction: args.transaction });
+  return id;
 }
 
 export async function updateSessionRow({

@@ -1,12 +1,10 @@
 import "server-only";
-import { addDays, dayIndex, isoWeekOf, shiftWeek, startOfWeek } from "@/lib/dates/plain-date";
+import { addDays, isoWeekOf, shiftWeek, startOfWeek } from "@/lib/dates/plain-date";
 import { teamToday, type TeamClock } from "@/lib/dates/zoned";
-import { ledgerMethod, ledgerReadRange, ledgerWindow } from "@/lib/load/ledger";
-import { weekFromLedger } from "@/lib/load/ledger-week";
 import type { TeamLoadSettings } from "@/lib/load/types";
 import { seasonRow, type GridMeet, type LedgerWeekFigures, type SeasonRow } from "@/lib/season/season-grid";
-import { ensureLedgerFresh, readLedgerRows } from "./ledger";
-import { getLoadSeriesInputs, getTeamClock } from "./load";
+import { getTeamClock } from "./load";
+import { getLedgerWeeks } from "./load-ledger";
 import { listMeets, listPhases, type SeasonMeet, type SeasonPhase } from "./season";
 
 export type SeasonViewDto = {
@@ -80,42 +78,17 @@ export async function getSeasonView({
   };
 }
 
-/** The most days before a week the recovery rule can look back (recoveryHours is at most 120 h). */
-const MAX_LOOK_BACK_DAYS = 6;
-
-/**
- * Every athlete's weeks from one read of the ledger and the sessions of the whole span (lib/load/README.md §12):
- * each week is weekFromLedger over one window, in the projected view, as getLedgerWeek answers it week by week.
- */
+/** Every athlete's weeks from one read of the ledger and the sessions of the whole span, in the projected view. */
 async function ledgerWeeks({ teamId, starts, today }: { teamId: number; starts: string[]; today: string }) {
-  const first = starts[0];
-  const last = addDays(starts[starts.length - 1], 6);
-  await ensureLedgerFresh({});
-  const inputs = await getLoadSeriesInputs({ teamId, from: addDays(first, -MAX_LOOK_BACK_DAYS - 7), through: last });
-  const todayDay = dayIndex(today);
-  const fromDay = dayIndex(first) - 7;
-  const toDay = dayIndex(last);
-  const ids = inputs.athletes.map((a) => a.id);
-  const rows = await readLedgerRows({ athleteIds: ids, ...ledgerReadRange(fromDay, toDay, todayDay) });
-  const method = ledgerMethod(inputs.settings);
+  const { settings, athletes } = await getLedgerWeeks({ teamId, starts, today, view: "projected" });
   return {
-    settings: inputs.settings,
-    athletes: inputs.athletes.map((a) => {
-      const window = ledgerWindow({ rows: rows.get(a.id) ?? [], fromDay, toDay, todayDay, view: "projected", method });
-      const weeks = starts.map((weekStart): LedgerWeekFigures => {
-        const { week, flags, topLevel } = weekFromLedger({
-          window,
-          sessions: a.sessions,
-          logs: a.logs,
-          profile: a.profile,
-          settings: inputs.settings,
-          view: "projected",
-          todayDay,
-          weekStartDay: dayIndex(weekStart),
-        });
+    settings,
+    athletes: athletes.map(({ weeks, ...athlete }) => ({
+      athlete,
+      weeks: starts.map((weekStart): LedgerWeekFigures => {
+        const { week, flags, topLevel } = weeks.get(weekStart)!;
         return { ...week, flags, topLevel };
-      });
-      return { athlete: a, weeks };
-    }),
+      }),
+    })),
   };
 }

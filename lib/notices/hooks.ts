@@ -36,9 +36,12 @@ export async function afterPlanChange(args: {
     if (c.after) dates.add(c.after.date);
     datesByAthlete.set(c.athleteId, dates);
   }
-  for (const [athleteId, dates] of datesByAthlete) {
-    await evaluateLoadAlerts({ transaction, teamId, athleteId, dates: [...dates], basis: "planned" });
-  }
+  await evaluateLoadAlerts({
+    transaction,
+    teamId,
+    athletes: [...datesByAthlete].map(([athleteId, dates]) => ({ athleteId, dates: [...dates] })),
+    basis: "planned",
+  });
   await queueCalendarNotices({ transaction, teamId, actorUserId, changes, overrides });
   wakeOutboxOnCommit(transaction);
 }
@@ -54,6 +57,6 @@ export async function afterLogChange(args: {
   const { transaction, teamId, athleteId, sessionId } = args;
   const date = await getAthleteSessionDate({ athleteId, sessionId, transaction });
   if (!date) return;
-  await evaluateLoadAlerts({ transaction, teamId, athleteId, dates: [date], basis: "actual" });
+  await evaluateLoadAlerts({ transaction, teamId, athletes: [{ athleteId, dates: [date] }], basis: "actual" });
   wakeOutboxOnCommit(transaction);
 }

@@ -3,7 +3,7 @@ import type { Transaction } from "sequelize";
 import { loadAlertEmail } from "@/emails/load-alert";
 import { syncWeekAlerts, type AlertCandidate } from "@/lib/data/alerts";
 import { getTeamClock, type LoadAthleteInputs, type LoadInputs } from "@/lib/data/load";
-import { getLedgerWeek } from "@/lib/data/load-ledger";
+import { getLedgerWeeks } from "@/lib/data/load-ledger";
 import { teamToday } from "@/lib/dates/zoned";
 import { enqueueMail } from "@/lib/data/outbox";
 import { getNoticeTeam, listAlertRecipients } from "@/lib/data/notification-settings";
@@ -80,9 +80,8 @@ export function alertWeekLoad({
 export type EvaluateArgs = {
   transaction: Transaction;
   teamId: number;
-  athleteId: number;
-  /** Session dates the change touched (before and after), YYYY-MM-DD. */
-  dates: readonly string[];
+  /** Per athlete, the session dates the change touched (before and after), YYYY-MM-DD. */
+  athletes: ReadonlyArray<{ athleteId: number; dates: readonly string[] }>;
   basis: AlertBasis;
   /** The team's "today"; defaults to the clock in the team's zone. */
   today?: string;
@@ -91,51 +90,51 @@ export type EvaluateArgs = {
 /**
  * Runs the load engine over the weeks a change touched (on the projected view: logged work plus the plan
  * from today on, so a spike is flagged while it is still only planned), records new alerts and queues
- * their e-mails, all inside the caller's transaction. Returns the ids of the new alerts.
+ * their e-mails, all inside the caller's transaction. Returns the ids of the new alerts. Each week is read
+ * once for every athlete it concerns, so a squad-wide write (a generated progression) costs a read per week.
  */
 export async function evaluateLoadAlerts(args: EvaluateArgs): Promise<number[]> {
-  const { transaction, teamId, athleteId } = args;
-  if (args.dates.length === 0) return [];
-  const sorted = [...args.dates].sort();
+  const { transaction, teamId } = args;
+  if (args.athletes.every((a) => a.dates.length === 0)) return [];
   // The writer has brought the ledger up to date in this transaction (README §12); getLedgerWeek would take in
   // anything still marked.
   const clock = await getTeamClock({ teamId, transaction });
   const weekStartDay = clock.weekStartDay;
-  const weeks = new Map<string, Set<AlertKind>>();
-  for (const w of new Set(sorted.map((d) => startOfWeek(d, weekStartDay)))) {
-    weeks.set(w, new Set([...(weeks.get(w) ?? []), ...WEEK_KINDS]));
-    const next = addDays(w, 7);
-    weeks.set(next, new Set([...(weeks.get(next) ?? []), ...NEXT_WEEK_KINDS]));
-  }
+  // week → athlete → the alert kinds judged there.
+  const weeks = new Map<string, Map<number, Set<AlertKind>>>();
+  const judge = (weekStart: string, athleteId: number, kinds: readonly AlertKind[]) => {
+    const byAthlete = weeks.get(weekStart) ?? new Map<number, Set<AlertKind>>();
+    byAthlete.set(athleteId, new Set([...(byAthlete.get(athleteId) ?? []), ...kinds]));
+    weeks.set(weekStart, byAthlete);
+  };
+  for (const { athleteId, dates } of args.athletes)
+    for (const w of new Set(dates.map((d) => startOfWeek(d, weekStartDay)))) {
+      judge(w, athleteId, WEEK_KINDS);
+      judge(addDays(w, 7), athleteId, NEXT_WEEK_KINDS);
+    }
   const today = args.today ?? teamToday({ timeZone: clock.timeZone, now: new Date() });
-  let athleteName = "";
+  const names = new Map<number, string>();
 
-  const created: Array<{ id: number } & AlertCandidate> = [];
-  for (const [weekStart, kindSet] of [...weeks.entries()].sort(([a], [b]) => a.localeCompare(b))) {
-    const kinds = WEEK_KINDS.filter((k) => kindSet.has(k));
-    const read = await getLedgerWeek({
-      teamId,
-      athleteIds: [athleteId],
-      weekStart,
-      today,
-      view: "projected",
-      transaction,
+  const athleteIds = [...new Set([...weeks.values()].flatMap((byAthlete) => [...byAthlete.keys()]))];
+  const read = await getLedgerWeeks({
+    teamId,
+    athleteIds,
+    starts: [...weeks.keys()],
+    today,
+    view: "projected",
+    transaction,
+  });
+  for (const a of read.athletes) names.set(a.id, a.name);
+  const created: Array<{ id: number; athleteId: number } & AlertCandidate> = [];
+  for (const [weekStart, byAthlete] of [...weeks.entries()].sort(([a], [b]) => a.localeCompare(b))) {
+    const checks = read.athletes.flatMap((athlete) => {
+      const kindSet = byAthlete.get(athlete.id);
+      if (!kindSet) return [];
+      const kinds = WEEK_KINDS.filter((k) => kindSet.has(k));
+      const flags = athlete.weeks.get(weekStart)!.flags;
+      return [{ athleteId: athlete.id, kinds, candidates: strongestByKind(flags, kinds) }];
     });
-    const athlete = read.athletes[0];
-    if (!athlete) continue;
-    athleteName = athlete.name;
-    const load = athlete.load;
-    const candidates = strongestByKind(load.flags, kinds);
-    const fresh = await syncWeekAlerts({
-      transaction,
-      teamId,
-      athleteId,
-      weekStart,
-      basis: args.basis,
-      kinds,
-      candidates,
-    });
-    created.push(...fresh);
+    created.push(...(await syncWeekAlerts({ transaction, teamId, weekStart, basis: args.basis, athletes: checks })));
   }
   if (created.length === 0) return [];
 
@@ -143,7 +142,7 @@ export async function evaluateLoadAlerts(args: EvaluateArgs): Promise<number[]> 
   const team = await getNoticeTeam({ teamId, transaction });
   const base = appUrl();
   for (const alert of created) {
-    const item = toLoadAlertItem({ ...alert, athleteId, athleteName, basis: args.basis }, base);
+    const item = toLoadAlertItem({ ...alert, athleteName: names.get(alert.athleteId) ?? "", basis: args.basis }, base);
     for (const r of recipients) {
       await enqueueMail({
         transaction,

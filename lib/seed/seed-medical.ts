@@ -97,8 +97,7 @@ export async function seedMedical(d: Db, club: SeededClub, options: { today?: st
     const ids = await evaluateLoadAlerts({
       transaction,
       teamId: club.teamId,
-      athleteId: club.athleteIds[SPIKE_ATHLETE],
-      dates: [nextWeek],
+      athletes: [{ athleteId: club.athleteIds[SPIKE_ATHLETE], dates: [nextWeek] }],
       basis: "planned",
       today,
     });

@@ -3,7 +3,7 @@ import { diffDays, shiftWeek } from "@/lib/dates/plain-date";
 import { listSquad } from "@/lib/data/athletes";
 import { teamWeek } from "@/lib/data/plan";
 import { loadById, loadSessionsBetween, type Loaded } from "@/lib/data/plan-rows";
-import { destroySessions, insertSession } from "@/lib/data/plan-sessions";
+import { destroySessions, insertSessions, type NewSession } from "@/lib/data/plan-sessions";
 import * as seasonRows from "@/lib/data/season";
 import { inTransaction } from "@/lib/data/transaction";
 import type { PlanWriteResult } from "@/lib/plan/types";
@@ -68,7 +68,7 @@ export async function generateProgression({
       (l) => athletes.has(l.dto.athleteId) && l.dto.status === "draft" && !l.dto.logged,
     );
     await destroySessions({ sessionIds: replaced.map((l) => l.dto.id), transaction });
-    const created: number[] = [];
+    const drafted: NewSession[] = [];
     let weeks: { weekStart: string; factor: number }[] = [];
     for (const athleteId of athletes) {
       const drafts = inSource.filter((l) => l.dto.athleteId === athleteId).map((l) => draftOf(l, source.weekStart));
@@ -79,10 +79,9 @@ export async function generateProgression({
         rule: input.rule,
       });
       weeks = generated.map(({ weekStart, factor }) => ({ weekStart, factor }));
-      for (const week of generated)
-        for (const session of week.sessions)
-          created.push(await insertSession({ teamId, session: { athleteId, ...session }, transaction }));
+      for (const week of generated) drafted.push(...week.sessions.map((session) => ({ athleteId, ...session })));
     }
+    const created = await insertSessions({ teamId, sessions: drafted, transaction });
     const after = await loadById(created, transaction);
     await notify({
       transaction,
@@ -123,18 +122,23 @@ export async function copyPhase({
     const inPhase = (await loadSessionsBetween({ teamId, from: phase.startsOn, to: phase.endsOn, transaction })).filter(
       (l) => l.dto.status !== "cancelled" && (!inGroup || inGroup.has(l.dto.athleteId)),
     );
-    const created: number[] = [];
-    for (const { dto: s } of inPhase) {
-      const { athleteId, startTime, durationMin, title, plannedRpe, notes, blocks } = s;
-      const date = shiftWeek(s.date, weeksLater);
-      created.push(
-        await insertSession({
-          teamId,
-          session: { athleteId, date, startTime, durationMin, title, plannedRpe, notes, blocks },
-          transaction,
-        }),
-      );
-    }
+    const created = await insertSessions({
+      teamId,
+      sessions: inPhase.map(({ dto: s }) => {
+        const { athleteId, startTime, durationMin, title, plannedRpe, notes, blocks } = s;
+        return {
+          athleteId,
+          date: shiftWeek(s.date, weeksLater),
+          startTime,
+          durationMin,
+          title,
+          plannedRpe,
+          notes,
+          blocks,
+        };
+      }),
+      transaction,
+    });
     const after = await loadById(created, transaction);
     await notify({
       transaction,
