@@ -1,12 +1,14 @@
 // The coach's season journey in Chromium against next start on the demo club: add a phase, write five draft weeks
 // from one week (+10 % for three weeks, then a 40 % unload), see the forecast warn about the week that jumps
-// after the unload, write them again with a lighter unload and see the warning clear. Far-future weeks keep the
-// demo's own plan out of the figures. axe on the screen; no sideways scroll on a phone.
+// after the unload, fix it by dragging a block onto the unload week in the week plan and see the warning clear;
+// writing the weeks again with a lighter unload keeps it clear. Far-future weeks keep the demo's own plan out of
+// the figures. axe on the screen; no sideways scroll on a phone.
 import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { addDays, shiftWeek, startOfWeek } from "@/lib/dates/plain-date";
 import { seriousAxeViolations } from "./axe";
 import { apiSession, describeBrowser, launchBrowser, screenshot, signIn } from "./harness";
+import { cell as dayCell, mouseDrag, settled } from "./planner-page";
 import { startMailApp, type MailApp } from "./notices-app";
 
 const HEAD = "head.coach@harbourvale.test";
@@ -15,6 +17,7 @@ describeBrowser("the season view", () => {
   let app: MailApp;
   let browser: Browser;
   let source: string;
+  let mayaId: number;
 
   beforeAll(async () => {
     app = await startMailApp();
@@ -26,6 +29,7 @@ describeBrowser("the season view", () => {
       "SELECT id, team_id FROM athletes WHERE name LIKE 'Maya%'",
     );
     const team = { id: maya.team_id };
+    mayaId = maya.id;
     for (const day of [1, 3]) {
       const res = await head.fetch(`/api/teams/${team.id}/sessions`, {
         method: "POST",
@@ -90,6 +94,19 @@ describeBrowser("the season view", () => {
     expect(await cell.getAttribute("href")).toBe(`/plan?week=${shiftWeek(source, 5)}`);
     await screenshot(page, "season-warned");
     expect(await seriousAxeViolations(page)).toEqual([]);
+
+    // The fix a coach makes by hand: more work in the unload week, so the week after no longer jumps.
+    const unloadWeek = shiftWeek(source, 4);
+    await page.goto(`${app.url}/plan?week=${unloadWeek}`);
+    await page.getByTestId("planner").waitFor();
+    const shelfBlock = page.locator('[data-testid="template-card"][data-kind="max_velocity"]').first();
+    const target = dayCell(page, mayaId, addDays(unloadWeek, 2));
+    await mouseDrag(page, shelfBlock, target);
+    await settled(page);
+    await target.getByTestId("session-card").first().waitFor();
+    await page.goto(`${app.url}/season?from=${source}`);
+    await page.getByTestId("season-grid").waitFor();
+    await page.getByTestId("no-season-warnings").waitFor();
 
     await write(page, "10");
     await page.getByTestId("no-season-warnings").waitFor();
