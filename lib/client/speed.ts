@@ -1,5 +1,5 @@
 import type { z } from "zod";
-import type { speedUploadSchema } from "@/lib/validations/speed";
+import type { speedLabSettingsSchema, speedUploadSchema } from "@/lib/validations/speed";
 import { ApiError, OFFLINE_MESSAGE, sendJson, toApiError } from "./fetcher";
 
 // The speed lab's requests from the browser. The upload goes through XMLHttpRequest: fetch reports no upload
@@ -8,6 +8,7 @@ import { ApiError, OFFLINE_MESSAGE, sendJson, toApiError } from "./fetcher";
 export const speedKeys = {
   timingUploads: (teamId: number) => `/api/teams/${teamId}/speed/timing-uploads`,
   accept: (teamId: number, testId: number) => `/api/teams/${teamId}/speed/tests/${testId}/accept`,
+  settings: (teamId: number) => `/api/teams/${teamId}/speed/settings`,
   template: "/speed-timing-template.csv",
 };
 
@@ -18,6 +19,9 @@ export type TimingUploadResult = {
 };
 
 export const speedApi = {
+  saveSettings: (teamId: number, body: z.input<typeof speedLabSettingsSchema>) =>
+    sendJson<{ retestWeeks: number }>("PATCH", speedKeys.settings(teamId), body),
+
   accept: (teamId: number, testId: number) =>
     sendJson<{ entryId: number; effectiveFrom: string }>("POST", speedKeys.accept(teamId, testId)),
 

@@ -10,7 +10,7 @@ import { getLedgerWeek } from "./load-ledger";
 import { getTeamClock } from "./load";
 import { loadSessions } from "./plan-rows";
 import { listRestrictions } from "./restrictions";
-import { listSpeedRetestsDue, type RetestDue } from "./speed-retests";
+import { listRetestsDue, type RetestDue } from "./speed-views";
 
 type Clock = Omit<TeamClock, "teamId">;
 
@@ -63,6 +63,8 @@ export type CoachTodayDto = {
   spikes: TodaySpike[];
   restrictions: TodayRestriction[];
   retests: RetestDue[];
+  /** The team's re-test interval in weeks (the speed lab's setting). */
+  retestWeeks: number;
 };
 
 const ALERTS_SHOWN = 8;
@@ -84,14 +86,14 @@ export async function getCoachToday({
   const weekStart = startOfWeek(now, probe.weekStartDay);
   const weekEnd = addDays(weekStart, 6);
   const nextWeek = addDays(weekStart, 7);
-  const [rows, alerts, thisWeek, next, restrictions, retests] = await Promise.all([
+  const [rows, alerts, thisWeek, next, restrictions, retest] = await Promise.all([
     loadSessions({ teamId, date: { [Op.between]: [weekStart, now] }, status: { [Op.ne]: "cancelled" } }),
     listAlerts({ teamId, userId, query: { status: "unresolved", limit: 200 } }),
     getLedgerWeek({ teamId, weekStart, today: now, view: "projected" }),
     // The next 7 days reach into next week unless today is the first day of the week.
     now === weekStart ? null : getLedgerWeek({ teamId, weekStart: nextWeek, today: now, view: "projected" }),
     listRestrictions({ teamId, from: weekStart }),
-    listSpeedRetestsDue({ teamId, today: now }),
+    listRetestsDue({ teamId, today: now }),
   ]);
   // The ledger week reads every athlete of the team, so it names everyone the other lists mention.
   const names = new Map(thisWeek.athletes.map((a) => [a.id, a.name]));
@@ -158,6 +160,7 @@ export async function getCoachToday({
     alertCount: alerts.length,
     spikes: spikes.sort((x, y) => x.date.localeCompare(y.date) || y.ratio - x.ratio),
     restrictions: changes,
-    retests,
+    retests: retest.due,
+    retestWeeks: retest.retestWeeks,
   };
 }

@@ -1,6 +1,6 @@
 import "server-only";
 import { createHash } from "node:crypto";
-import type { Transaction } from "sequelize";
+import { col, fn, type Transaction } from "sequelize";
 import type { SpeedStartType, SpeedTestKind } from "@/lib/domain/speed";
 import { AppError } from "@/lib/errors";
 import { db } from "@/models";
@@ -177,4 +177,22 @@ export async function getSpeedUpload({ teamId, uploadId }: { teamId: number; upl
   });
   if (!row) throw new AppError("not_found", "Not found");
   return row;
+}
+
+/** Each athlete's latest test date of one kind (athlete id → YYYY-MM-DD); one grouped read over the index. */
+export async function latestTestDates({
+  teamId,
+  kind,
+}: {
+  teamId: number;
+  kind: SpeedTestKind;
+}): Promise<Map<number, string>> {
+  const { SpeedTest } = await db();
+  const rows = (await SpeedTest.findAll({
+    where: { teamId, kind },
+    attributes: ["athleteId", [fn("MAX", col("test_date")), "latest"]],
+    group: ["athleteId"],
+    raw: true,
+  })) as unknown as { athleteId: number; latest: string }[];
+  return new Map(rows.map((r) => [Number(r.athleteId), String(r.latest).slice(0, 10)]));
 }

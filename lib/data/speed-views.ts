@@ -1,20 +1,62 @@
 import "server-only";
-import { listSquad } from "@/lib/data/athletes";
+import { listSquad, type AthleteRow } from "@/lib/data/athletes";
+import { sessionMetrics } from "@/lib/load/session-metrics";
+import { toSessionInput } from "@/lib/plan/blocks";
+import { entryInForce } from "@/lib/speed/profile-values";
+import type { SpeedTraceAnalysis } from "@/lib/speed/speed-trace";
+import { loadSessions } from "./plan-rows";
+import { getTeamLoadSettings } from "./team-settings";
 import { db } from "@/models";
-import { DEFAULT_RETEST_WEEKS, retestStatus, vmaxChange, type RetestStatus } from "@/lib/speed/retest";
+import { retestStatus, vmaxChange, type RetestStatus } from "@/lib/speed/retest";
 import type { TimingTrialAnalysis } from "@/lib/speed/timing-trial";
 import { listProfileEntries, type ProfileEntryRow } from "./speed-profiles";
-import { listSpeedTests, type SpeedTestRow } from "./speed-tests";
+import { getSpeedLabSettings } from "./speed-settings";
+import { latestTestDates, listSpeedTests, type SpeedTestRow } from "./speed-tests";
 
 // What the speed-lab screens show (lib/speed/README.md §6): each athlete against their own earlier tests first,
 // the squad's range only as context.
 
 export type SpeedTestView = SpeedTestRow & { accepted: boolean; fitVmax: number | null };
 
-export async function retestWeeksOf(teamId: number): Promise<number> {
-  const { SpeedLabSettings } = await db();
-  const row = await SpeedLabSettings.findByPk(teamId, { attributes: ["retestWeeks"], raw: true });
-  return row?.retestWeeks ?? DEFAULT_RETEST_WEEKS;
+async function retestWeeksOf(teamId: number): Promise<number> {
+  return (await getSpeedLabSettings({ teamId })).retestWeeks;
+}
+
+/**
+ * The last timing test: the speed lab's latest, or the test date typed on the athlete's profile when that is
+ * later (a test timed outside the lab) (lib/speed/README.md §6).
+ */
+function lastTimingTestOf(labLatest: string | null | undefined, typed: string | null): string | null {
+  const dates = [labLatest ?? null, typed].filter((d): d is string => d !== null).sort();
+  return dates.at(-1) ?? null;
+}
+
+export type RetestDue = {
+  athleteId: number;
+  athleteName: string;
+  lastTestedOn: string | null;
+  daysSince: number | null;
+};
+
+/**
+ * Athletes due a re-test on `today` by the team's interval (`retestStatus`), longest waiting first, never tested
+ * first of all: the coach's Today reads this, the speed lab's squad view the same rule through getSquadSpeed.
+ */
+export async function listRetestsDue({ teamId, today }: { teamId: number; today: string }) {
+  const [squad, latest, retestWeeks] = await Promise.all([
+    listSquad({ teamId }),
+    latestTestDates({ teamId, kind: "timing" }),
+    retestWeeksOf(teamId),
+  ]);
+  const due: RetestDue[] = squad.flatMap((a) => {
+    const lastTestedOn = lastTimingTestOf(latest.get(a.id), a.vmaxTestedOn);
+    const status = retestStatus({ lastTimingTest: lastTestedOn, today, retestWeeks });
+    return status.due ? [{ athleteId: a.id, athleteName: a.name, lastTestedOn, daysSince: status.daysSince }] : [];
+  });
+  due.sort(
+    (x, y) => (y.daysSince ?? Infinity) - (x.daysSince ?? Infinity) || x.athleteName.localeCompare(y.athleteName),
+  );
+  return { retestWeeks, due };
 }
 
 async function acceptedTestIds(teamId: number): Promise<Set<number>> {
@@ -51,7 +93,7 @@ export async function getSquadSpeed({ teamId, today }: { teamId: number; today: 
     const own = tests.filter((t) => t.athleteId === a.id).map((t) => withFit(t, accepted));
     const fitted = own.filter((t) => t.fitVmax !== null).map((t) => t.fitVmax!);
     const change = vmaxChange(fitted);
-    const lastTimingTest = own[0]?.testDate ?? null;
+    const lastTimingTest = lastTimingTestOf(own[0]?.testDate, a.vmaxTestedOn);
     return {
       athleteId: a.id,
       name: a.name,
@@ -69,6 +111,62 @@ export async function getSquadSpeed({ teamId, today }: { teamId: number; today: 
   return { rows, retestWeeks, recent };
 }
 
+export type MeasuredSession = {
+  testId: number;
+  sessionId: number;
+  date: string;
+  title: string;
+  planned: { hsrM: number; nearMaxM: number; runM: number };
+  measured: { hsrM: number; nearMaxM: number; runM: number };
+};
+
+/**
+ * Speed traces attached to planned sessions: the session's planned running load (the engine's sessionMetrics with
+ * the speed profile in force on its date) next to what the trace measured by the same bands.
+ */
+async function measuredSessions({
+  teamId,
+  athlete,
+  entries,
+  traces,
+}: {
+  teamId: number;
+  athlete: Pick<AthleteRow, "id" | "vmaxMs" | "tauS" | "stepLengthM" | "plyoLevel">;
+  entries: readonly ProfileEntryRow[];
+  traces: readonly SpeedTestRow[];
+}): Promise<MeasuredSession[]> {
+  const attached = traces.filter((t) => t.plannedSessionId !== null);
+  if (attached.length === 0) return [];
+  const [sessions, settings] = await Promise.all([
+    loadSessions({ id: attached.map((t) => t.plannedSessionId!), athleteId: athlete.id }),
+    getTeamLoadSettings({ teamId }),
+  ]);
+  const byId = new Map(sessions.map((s) => [s.dto.id, s.dto]));
+  return attached.flatMap((t) => {
+    const session = byId.get(t.plannedSessionId!);
+    if (!session) return [];
+    const inForce = entryInForce(entries, session.date);
+    const profile = {
+      vmax: inForce?.vmaxMs ?? athlete.vmaxMs,
+      tau: inForce?.tauS ?? athlete.tauS,
+      stepLengthM: inForce?.stepLengthM ?? athlete.stepLengthM,
+      plyoLevel: athlete.plyoLevel,
+    };
+    const planned = sessionMetrics(toSessionInput(session), profile, settings);
+    const r = t.result as SpeedTraceAnalysis;
+    return [
+      {
+        testId: t.id,
+        sessionId: session.id,
+        date: session.date,
+        title: session.title,
+        planned: { hsrM: planned.metrics.hsrM, nearMaxM: planned.metrics.nearMaxM, runM: planned.runM },
+        measured: { hsrM: r.hsrM, nearMaxM: r.nearMaxM, runM: r.distanceM },
+      },
+    ];
+  });
+}
+
 /** One athlete's profile history and tests, plus the squad's current range of each value (context only). */
 export async function getAthleteSpeed({ teamId, athleteId }: { teamId: number; athleteId: number }) {
   const [squad, entries, tests, accepted] = await Promise.all([
@@ -78,6 +176,9 @@ export async function getAthleteSpeed({ teamId, athleteId }: { teamId: number; a
     acceptedTestIds(teamId),
   ]);
   const athlete = squad.find((a) => a.id === athleteId) ?? null;
+  const measured = athlete
+    ? await measuredSessions({ teamId, athlete, entries, traces: tests.filter((t) => t.kind === "trace") })
+    : [];
   const range = (values: (number | null)[]) => {
     const v = values.filter((x): x is number => x !== null);
     return v.length ? { min: Math.min(...v), max: Math.max(...v), n: v.length } : null;
@@ -86,6 +187,7 @@ export async function getAthleteSpeed({ teamId, athleteId }: { teamId: number; a
     athlete,
     entries: entries as ProfileEntryRow[],
     tests: tests.map((t) => withFit(t, accepted)),
+    measured,
     squadRange: {
       vmaxMs: range(squad.map((a) => a.vmaxMs)),
       tauS: range(squad.map((a) => a.tauS)),

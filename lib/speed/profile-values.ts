@@ -44,3 +44,10 @@ export function mergeProfile(inForce: SpeedProfileValues, measured: Partial<Spee
   }
   return out;
 }
+
+/** The entry in force on `date`: the latest whose first day is on or before it (lib/speed/README.md §4). */
+export function entryInForce<E extends { effectiveFrom: string }>(entries: readonly E[], date: string): E | null {
+  let found: E | null = null;
+  for (const e of entries) if (e.effectiveFrom <= date && (!found || e.effectiveFrom > found.effectiveFrom)) found = e;
+  return found;
+}

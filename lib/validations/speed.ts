@@ -75,3 +75,29 @@ export const speedUploadSchema = z.object({
 });
 
 export const speedTestParamsSchema = z.object({ teamId: idSchema, testId: idSchema });
+
+/** Weeks without a timing test before an athlete is due a re-test (lib/speed/README.md §6). */
+export const speedLabSettingsSchema = z.object({
+  retestWeeks: z
+    .number({ message: "Enter a number of weeks" })
+    .int("Enter whole weeks")
+    .min(1, "At least 1 week")
+    .max(52, "At most 52 weeks"),
+});
+export type SpeedLabSettingsInput = z.infer<typeof speedLabSettingsSchema>;
+
+/** A speed trace, force trace or contact-measurement file for one athlete (lib/speed/README.md §8, §9). */
+export const speedMeasureUploadSchema = speedUploadSchema.extend({
+  kind: z.enum(["trace", "force", "contacts"], { message: "Choose what the file holds" }),
+  athleteId: z.number({ message: "Choose the athlete" }).int().positive("Choose the athlete"),
+  testDate: pastDateSchema,
+  /** A speed trace of a planned session becomes its measured running load. */
+  plannedSessionId: z.number().int().positive().nullable().optional(),
+  bodyMassKg: z
+    .number({ message: "Body mass must be a number" })
+    .min(25, "Body mass must be at least 25")
+    .max(200, "Body mass must be at most 200")
+    .nullable()
+    .optional(),
+});
+export type SpeedMeasureUploadInput = z.infer<typeof speedMeasureUploadSchema>;

@@ -154,6 +154,8 @@ export const REQUESTS: Record<string, Build> = {
     api("POST", `/api/teams/${w.teamId}/plan/publish`, { week: farWeek }),
   "POST /api/teams/[teamId]/speed/tests/[testId]/accept": async (w, s) =>
     api("POST", `/api/teams/${w.teamId}/speed/tests/${await w.speedTest(athlete(w, s))}/accept`),
+  "PATCH /api/teams/[teamId]/speed/settings": async (w) =>
+    api("PATCH", `/api/teams/${w.teamId}/speed/settings`, { retestWeeks: 6 }),
   "POST /api/teams/[teamId]/speed/timing-uploads": async (w, s) =>
     api("POST", `/api/teams/${w.teamId}/speed/timing-uploads`, {
       fileName: "matrix.csv",

@@ -54,6 +54,16 @@ describeBrowser("speed lab", () => {
     expect(await seriousAxeViolations(page)).toEqual([]);
     await noSidewaysScroll(page);
 
+    // The re-test interval: a bad value is named on the form, a good one is saved and the card follows it.
+    const weeks = page.locator("#retestWeeks");
+    await weeks.fill("60");
+    await page.getByTestId("save-retest-weeks").click();
+    await page.getByRole("alert").filter({ hasText: "At most 52 weeks" }).waitFor();
+    await weeks.fill("8");
+    await page.getByTestId("save-retest-weeks").click();
+    await page.getByText("Saved: due after 8 weeks.").waitFor();
+    await page.getByTestId("retest-due").getByText("No timing test in the last 8 weeks.").waitFor();
+
     // A file with a problem: the row is named and nothing is saved.
     const header = "athlete,date,trial,start,distance_m,time_s,body_mass_kg";
     await page.setInputFiles("#timing-file", {

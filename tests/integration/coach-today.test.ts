@@ -8,7 +8,9 @@ import { createTestTeam } from "../helpers/fixtures";
 const d = await setupTestDb();
 const { getCoachToday } = await import("@/lib/data/coach-today");
 const { getSquadWeekLoad } = await import("@/lib/data/load-views");
-const { RETEST_AFTER_DAYS } = await import("@/lib/data/speed-retests");
+const { DEFAULT_RETEST_WEEKS } = await import("@/lib/speed/retest");
+// A team without a speed-lab setting uses the default interval.
+const RETEST_AFTER_DAYS = DEFAULT_RETEST_WEEKS * 7;
 
 const TODAY = "2026-12-02";
 const WEEK = startOfWeek(TODAY, 1); // Monday 2026-11-30

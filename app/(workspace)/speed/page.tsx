@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { Badge } from "@/components/ui/badge";
 import { Card, EmptyState, PageHeader } from "@/components/ui/card";
+import { RetestWeeksForm } from "@/components/speed/retest-weeks-form";
 import { TimingUploadForm } from "@/components/speed/upload-form";
 import { pageViewer } from "@/lib/auth/page-access";
 import { scopeOf } from "@/lib/auth/permissions";
@@ -51,6 +52,7 @@ export default async function SpeedLabPage() {
               ))}
             </ul>
           )}
+          {canEdit ? <RetestWeeksForm teamId={viewer.teamId} initial={{ retestWeeks }} /> : null}
         </Card>
         <Card className="p-4" data-testid="vmax-dropped">
           <h2 className="text-base font-semibold text-ink-900">vmax lower than the test before</h2>
