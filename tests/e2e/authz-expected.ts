@@ -74,6 +74,7 @@ const TABLE: Line[] = [
   ["POST /api/teams/[teamId]/plan/[tool]",             401,   403,   403,   403,   200,   200,   404],
   ["POST /api/teams/[teamId]/sessions",                401,   403,   403,   403,   201,   201,   404],
   ["POST /api/teams/[teamId]/speed/tests/[testId]/accept",401, 403, 403,   403,   200,   200,   404],
+  ["POST /api/teams/[teamId]/speed/measure-uploads",   401,   403,   403,   403,   201,   201,   404],
   ["PATCH /api/teams/[teamId]/speed/settings",         401,   403,   403,   403,   200,   200,   404],
   ["POST /api/teams/[teamId]/speed/timing-uploads",    401,   403,   403,   403,   201,   201,   404],
   ["GET /api/teams/[teamId]/season",                   401,   403,   403,   200,   200,   200,   404],

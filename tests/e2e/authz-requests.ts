@@ -154,6 +154,14 @@ export const REQUESTS: Record<string, Build> = {
     api("POST", `/api/teams/${w.teamId}/plan/publish`, { week: farWeek }),
   "POST /api/teams/[teamId]/speed/tests/[testId]/accept": async (w, s) =>
     api("POST", `/api/teams/${w.teamId}/speed/tests/${await w.speedTest(athlete(w, s))}/accept`),
+  "POST /api/teams/[teamId]/speed/measure-uploads": async (w, s) =>
+    api("POST", `/api/teams/${w.teamId}/speed/measure-uploads`, {
+      kind: "contacts",
+      fileName: "matrix-contacts.csv",
+      content: "contact_time_s,flight_time_s\n0.1,0.12\n",
+      athleteId: athlete(w, s),
+      testDate: "2020-01-01",
+    }),
   "PATCH /api/teams/[teamId]/speed/settings": async (w) =>
     api("PATCH", `/api/teams/${w.teamId}/speed/settings`, { retestWeeks: 6 }),
   "POST /api/teams/[teamId]/speed/timing-uploads": async (w, s) =>
