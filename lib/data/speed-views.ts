@@ -1,4 +1,5 @@
 import "server-only";
+import { Op } from "sequelize";
 import { listSquad, type AthleteRow } from "@/lib/data/athletes";
 import { sessionMetrics } from "@/lib/load/session-metrics";
 import { toSessionInput } from "@/lib/plan/blocks";
@@ -194,4 +195,25 @@ export async function getAthleteSpeed({ teamId, athleteId }: { teamId: number; a
       stepLengthM: range(squad.map((a) => a.stepLengthM)),
     },
   };
+}
+
+/** The athlete's sessions a speed trace may belong to: not cancelled, dated `from`..`to` (newest first). */
+export async function listTraceSessionChoices({
+  teamId,
+  athleteId,
+  from,
+  to,
+}: {
+  teamId: number;
+  athleteId: number;
+  from: string;
+  to: string;
+}): Promise<{ id: number; date: string; title: string }[]> {
+  const rows = await loadSessions({
+    teamId,
+    athleteId,
+    date: { [Op.between]: [from, to] },
+    status: { [Op.ne]: "cancelled" },
+  });
+  return rows.map((r) => ({ id: r.dto.id, date: r.dto.date, title: r.dto.title })).reverse();
 }

@@ -107,4 +107,61 @@ describeBrowser("speed lab", () => {
     expect(await hsrOf(lastWeek)).toBe(lastBefore);
     expect(await hsrOf(nextWeek)).not.toBe(nextBefore);
   }, 240_000);
+
+  it("a speed trace of a planned session shows measured next to planned; a 2 Hz trace is refused; contact rows", async () => {
+    await page.goto(`${app.url}/speed`);
+    await page.getByRole("link", { name: maya.name }).first().click();
+    await page.getByTestId("measure-upload").waitFor();
+    // The sprint model of lib/speed/README.md T4 (vmax 9.5 m/s, τ 1.1 s) after 1 s standing, at `hz`.
+    const trace = (hz: number) =>
+      [
+        "time_s,speed_ms",
+        ...Array.from({ length: 10 * hz + 1 }, (_, i) => {
+          const t = i / hz;
+          return `${t.toFixed(3)},${(t < 1 ? 0 : 9.5 * (1 - Math.exp(-(t - 1) / 1.1))).toFixed(3)}`;
+        }),
+      ].join("\n");
+    const choices = page.locator("#measure-session option");
+    expect(await choices.count()).toBeGreaterThan(1);
+    await page.locator("#measure-session").selectOption({ index: 1 });
+    await page.setInputFiles("#measure-file", {
+      name: "slow.csv",
+      mimeType: "text/csv",
+      buffer: Buffer.from(trace(2)),
+    });
+    await page.getByTestId("measure-send").click();
+    await page
+      .getByTestId("measure-message")
+      .filter({ hasText: "The speed trace is sampled at 2.0 Hz; at least 10 Hz is needed. Nothing was saved." })
+      .waitFor();
+    expect(await page.locator('[data-testid^="trace-summary-"]').count()).toBe(0);
+
+    await page.setInputFiles("#measure-file", {
+      name: "radar.csv",
+      mimeType: "text/csv",
+      buffer: Buffer.from(trace(20)),
+    });
+    await page.getByTestId("measure-send").click();
+    await page.getByTestId("measure-message").filter({ hasText: "Saved radar.csv." }).waitFor();
+    const summary = page.locator('[data-testid^="trace-summary-"]').first();
+    await summary.waitFor();
+    expect(await summary.innerText()).toMatch(/τ 1\.10 s/);
+    const table = page.locator('[data-testid^="plan-measured-"]').first();
+    expect(await table.innerText()).toContain("planned against measured");
+    expect(await table.innerText()).toContain("HSR metres");
+    await page.getByTestId("trace-chart").locator("svg").first().waitFor();
+
+    await page.locator("#measure-kind").selectOption("contacts");
+    const mat = "contact_time_s,flight_time_s,step_length_m\n0.086,0.145,2.3\n0.086,0.145,2.3\n";
+    await page.setInputFiles("#measure-file", { name: "mat.csv", mimeType: "text/csv", buffer: Buffer.from(mat) });
+    await page.getByTestId("measure-send").click();
+    const means = page.locator('[data-testid^="contacts-means-"]').first();
+    await means.waitFor();
+    // lib/speed/README.md B1/B2: 4.329 Hz and 2.686 BW.
+    expect(await means.innerText()).toContain("4.33 Hz");
+    expect(await means.innerText()).toContain("2.69 × BW");
+    expect(await seriousAxeViolations(page)).toEqual([]);
+    await noSidewaysScroll(page);
+    await screenshot(page, "speed-traces-and-contacts");
+  }, 240_000);
 });

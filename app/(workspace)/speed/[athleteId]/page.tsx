@@ -5,10 +5,15 @@ import { Card, PageHeader } from "@/components/ui/card";
 import { AcceptResultButton } from "@/components/speed/accept-button";
 import { FitChart } from "@/components/speed/fit-chart";
 import { HistoryChart } from "@/components/speed/history-chart";
+import { ContactTests, TraceTests } from "@/components/speed/measure-tests";
+import { MeasureUploadForm } from "@/components/speed/measure-upload-form";
 import { pageAthlete } from "@/lib/auth/page-access";
 import { scopeOf } from "@/lib/auth/permissions";
 import { BASELINE_FROM } from "@/lib/data/speed-profiles";
-import { getAthleteSpeed } from "@/lib/data/speed-views";
+import { getAthleteSpeed, listTraceSessionChoices } from "@/lib/data/speed-views";
+import { getTeamLoadSettings } from "@/lib/data/team-settings";
+import { addDays } from "@/lib/dates/plain-date";
+import { teamToday } from "@/lib/dates/zoned";
 import type { SpeedProfileValues } from "@/lib/speed/profile-values";
 import type { TimingTrialAnalysis } from "@/lib/speed/timing-trial";
 
@@ -28,12 +33,22 @@ const VALUES: { key: keyof SpeedProfileValues; label: string; unit: string; digi
 export default async function SpeedProfilePage({ params }: { params: Promise<{ athleteId: string }> }) {
   const { athleteId } = await params;
   const viewer = await pageAthlete(Number(athleteId), "speed:view");
-  const { athlete, entries, tests, squadRange } = await getAthleteSpeed({
-    teamId: viewer.teamId,
-    athleteId: viewer.athlete.id,
-  });
+  const today = teamToday({ timeZone: viewer.timeZone, now: new Date() });
+  const [{ athlete, entries, tests: allTests, squadRange, measured }, settings] = await Promise.all([
+    getAthleteSpeed({ teamId: viewer.teamId, athleteId: viewer.athlete.id }),
+    getTeamLoadSettings({ teamId: viewer.teamId }),
+  ]);
   if (!athlete) notFound();
   const canEdit = scopeOf(viewer.role, "speed:edit") === "team";
+  const sessions = canEdit
+    ? await listTraceSessionChoices({
+        teamId: viewer.teamId,
+        athleteId: athlete.id,
+        from: addDays(today, -56),
+        to: today,
+      })
+    : [];
+  const tests = allTests.filter((t) => t.kind === "timing");
   const tested = entries.filter((e) => e.effectiveFrom !== BASELINE_FROM);
   const current = entries.at(-1);
   const previous = entries.at(-2);
@@ -109,7 +124,7 @@ export default async function SpeedProfilePage({ params }: { params: Promise<{ a
           </ul>
         )}
       </Card>
-      <h2 className="mt-6 mb-2 text-lg font-semibold text-ink-900">Tests</h2>
+      <h2 className="mt-6 mb-2 text-lg font-semibold text-ink-900">Timing tests</h2>
       <div className="space-y-4">
         {tests.map((t) => {
           const r = t.result as TimingTrialAnalysis;
@@ -157,6 +172,16 @@ export default async function SpeedProfilePage({ params }: { params: Promise<{ a
         })}
         {tests.length === 0 ? <p className="text-sm text-ink-700">No tests yet.</p> : null}
       </div>
+      {canEdit ? (
+        <Card className="mt-6 p-4">
+          <h2 className="mb-3 text-base font-semibold text-ink-900">Add a speed trace, force trace or contact file</h2>
+          <MeasureUploadForm teamId={viewer.teamId} athleteId={athlete.id} today={today} sessions={sessions} />
+        </Card>
+      ) : null}
+      <h2 className="mt-6 mb-2 text-lg font-semibold text-ink-900">Speed traces</h2>
+      <TraceTests tests={allTests.filter((t) => t.kind === "trace")} measured={measured} settings={settings} />
+      <h2 className="mt-6 mb-2 text-lg font-semibold text-ink-900">Contacts and force</h2>
+      <ContactTests tests={allTests.filter((t) => t.kind === "force" || t.kind === "contacts")} />
     </>
   );
 }
