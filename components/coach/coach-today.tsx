@@ -135,11 +135,11 @@ export function CoachToday({ data }: { data: CoachTodayDto }) {
         id="retests"
         title="Due a speed re-test"
         count={data.retests.length}
-        more={{ href: "/speed", label: "Speed lab" }}
+        more={{ href: "/squad", label: "Squad" }}
         empty={`Every athlete had a timing test in the last ${data.retestWeeks} weeks.`}
       >
         {data.retests.slice(0, SHOWN).map((r) => (
-          <TodayItem key={r.athleteId} href={`/speed/${r.athleteId}`} testId="today-retest">
+          <TodayItem key={r.athleteId} href={`/squad/${r.athleteId}`} testId="today-retest">
             <span className="font-medium text-ink-900">{r.athleteName}</span>
             <span className="text-ink-600">
               {r.lastTestedOn
@@ -149,8 +149,8 @@ export function CoachToday({ data }: { data: CoachTodayDto }) {
           </TodayItem>
         ))}
         {data.retests.length > SHOWN ? (
-          <TodayItem href="/speed">
-            <span className="text-ink-600">and {data.retests.length - SHOWN} more in the speed lab</span>
+          <TodayItem href="/squad">
+            <span className="text-ink-600">and {data.retests.length - SHOWN} more on the squad page</span>
           </TodayItem>
         ) : null}
       </TodaySection>
