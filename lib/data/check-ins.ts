@@ -40,7 +40,7 @@ export async function latestCheckInByAthlete({
   transaction?: Transaction;
 }): Promise<Map<number, CheckInDto>> {
   const { CheckIn } = await db();
-  const where = latestDayWhere({ teamId, athleteIds, table: "check_ins", alias: "CheckIn" });
+  const where = latestDayWhere({ teamId, athleteIds, table: "check_ins", model: CheckIn });
   const rows = await CheckIn.findAll({ where, attributes: [...FIELDS], transaction });
   return new Map(rows.map((r) => [r.athleteId, toDto(r)]));
 }

@@ -62,7 +62,7 @@ export async function latestPainReportByAthlete({
   transaction?: Transaction;
 }): Promise<Map<number, PainReportDto>> {
   const { PainReport } = await db();
-  const where = latestDayWhere({ teamId, athleteIds, table: "pain_reports", alias: "PainReport" });
+  const where = latestDayWhere({ teamId, athleteIds, table: "pain_reports", model: PainReport });
   const rows = await PainReport.findAll({ where, attributes: [...FIELDS], order: [["id", "ASC"]], transaction });
   const out = new Map<number, PainReportDto>();
   for (const r of rows) out.set(r.athleteId, toDto(r));

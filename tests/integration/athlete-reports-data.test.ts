@@ -48,6 +48,23 @@ describe("latest reports per athlete (the physio's squad status reads these)", (
     expect(latest.has(stranger)).toBe(false);
   });
 
+  // The production bundle minifies class names, and Sequelize names the outer table after the model's class: the
+  // correlated MAX spelled "PainReport" once and /status failed under `next start` only. Rename the classes as the
+  // minifier does and read again.
+  it("reads the same under minified model class names", async () => {
+    const before = [await latestPainReportByAthlete({ teamId }), await latestCheckInByAthlete({ teamId })];
+    const rename = (model: object, name: string) => Object.defineProperty(model, "name", { value: name });
+    rename(d.PainReport, "s");
+    rename(d.CheckIn, "t");
+    try {
+      expect(await latestPainReportByAthlete({ teamId })).toEqual(before[0]);
+      expect(await latestCheckInByAthlete({ teamId })).toEqual(before[1]);
+    } finally {
+      rename(d.PainReport, "PainReport");
+      rename(d.CheckIn, "CheckIn");
+    }
+  });
+
   it("keeps a pain report when its session is deleted", async () => {
     const session = await d.PlannedSession.create({
       teamId,
