@@ -65,7 +65,7 @@ describeBrowser("physio squad status journey", () => {
       .evaluateAll((els) => els.map((e) => e.getAttribute("data-athlete")));
     expect(names).toEqual([...names].sort((a, b) => (a ?? "").localeCompare(b ?? "")));
     await page.close();
-  });
+  }, 90_000);
 
   it("the athlete page: acknowledge and resolve the spike with a note; axe finds nothing serious", async () => {
     const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
@@ -96,7 +96,7 @@ describeBrowser("physio squad status journey", () => {
     expect(stored.status).toBe("resolved");
     await screenshot(page, "physio-athlete-page");
     await page.close();
-  });
+  }, 90_000);
 
   it("the physio sets an athlete to modified training, and the coach's planner warns about her sessions", async () => {
     const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
@@ -110,7 +110,9 @@ describeBrowser("physio squad status journey", () => {
     const message = form.getByTestId("availability-message");
     await message.getByText("Saved: Modified training").waitFor();
     expect(await message.textContent()).toMatch(/already planned break it: the coaches were told/);
-    await expect.poll(() => page.getByTestId("availability-level").first().getAttribute("data-level")).toBe("modified");
+    await expect
+      .poll(() => page.getByTestId("availability-level").first().getAttribute("data-level"), { timeout: 15_000 })
+      .toBe("modified");
     expect(await noSidewaysScroll(page)).toBe(true);
     expect(await seriousAxeViolations(page)).toEqual([]);
     await page.close();
@@ -126,5 +128,5 @@ describeBrowser("physio squad status journey", () => {
     expect(await athleteRow.getByTestId("row-restriction").textContent()).toMatch(/Running at most 85% of vmax/);
     await screenshot(coach, "coach-planner-modified");
     await coach.close();
-  });
+  }, 90_000);
 });
