@@ -2,14 +2,15 @@
 
 import { useState } from "react";
 import { useForm } from "react-hook-form";
-import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
+import { FormSaveRow, type SaveMessage } from "@/components/ui/form-save-row";
 import { seasonApi } from "@/lib/client/api";
 import { ApiError } from "@/lib/client/fetcher";
 import { applyServerErrors } from "@/lib/client/form-errors";
 import { MEET_PRIORITIES, type MeetPriority } from "@/lib/domain/season";
+import { AudienceSelect, audienceIds, type Audience, type AudienceChoices } from "./audience-select";
 
-type Values = { name: string; date: string; priority: MeetPriority };
+type Values = { name: string; date: string; priority: MeetPriority; audience: Audience };
 
 const PRIORITY_WORD: Record<MeetPriority, string> = {
   A: "A: the meet to peak for",
@@ -17,21 +18,32 @@ const PRIORITY_WORD: Record<MeetPriority, string> = {
   C: "C: a training race",
 };
 
-/** A meet on the season calendar for the whole team. */
-export function MeetForm({ teamId, onSaved }: { teamId: number; onSaved: () => void }) {
-  const form = useForm<Values>({ defaultValues: { name: "", date: "", priority: "B" } });
-  const [message, setMessage] = useState<string | null>(null);
+/** A meet on the season calendar for the whole team, one training group or one athlete. */
+export function MeetForm({
+  teamId,
+  choices,
+  onSaved,
+}: {
+  teamId: number;
+  choices: AudienceChoices;
+  onSaved: () => void;
+}) {
+  const form = useForm<Values>({ defaultValues: { name: "", date: "", priority: "B", audience: "team" } });
+  const [message, setMessage] = useState<SaveMessage>();
   const errors = form.formState.errors;
   const onSubmit = form.handleSubmit(async (v) => {
-    setMessage(null);
+    setMessage(undefined);
     try {
-      await seasonApi.createMeet(teamId, { ...v, groupId: null, athleteId: null });
-      form.reset({ name: "", date: "", priority: v.priority });
-      setMessage("Meet added");
+      const { audience, ...fields } = v;
+      await seasonApi.createMeet(teamId, { ...fields, ...audienceIds(audience) });
+      form.reset({ name: "", date: "", priority: v.priority, audience: v.audience });
+      setMessage({ tone: "ok", text: "Meet added" });
       onSaved();
     } catch (e) {
-      if (!(e instanceof ApiError) || !applyServerErrors(form, e))
-        setMessage(e instanceof Error ? e.message : "Not saved");
+      const scope = e instanceof ApiError ? (e.fields?.athleteId ?? e.fields?.groupId) : undefined;
+      if (scope) form.setError("audience", { message: scope[0] });
+      else if (!(e instanceof ApiError) || !applyServerErrors(form, e))
+        setMessage({ tone: "error", text: e instanceof Error ? e.message : "Not saved" });
     }
   });
   return (
@@ -56,16 +68,13 @@ export function MeetForm({ teamId, onSaved }: { teamId: number; onSaved: () => v
           </Select>
         </Field>
       </div>
-      <div className="flex items-center gap-3">
-        <Button type="submit" disabled={form.formState.isSubmitting}>
-          Add meet
-        </Button>
-        {message ? (
-          <p role="status" className="text-xs text-ink-700">
-            {message}
-          </p>
-        ) : null}
-      </div>
+      <AudienceSelect
+        id="meet-audience"
+        choices={choices}
+        registration={form.register("audience")}
+        error={errors.audience?.message}
+      />
+      <FormSaveRow label="Add meet" saving={form.formState.isSubmitting} dirty message={message} testId="meet-save" />
     </form>
   );
 }

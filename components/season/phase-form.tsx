@@ -2,12 +2,13 @@
 
 import { useState } from "react";
 import { useForm } from "react-hook-form";
-import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
+import { FormSaveRow, type SaveMessage } from "@/components/ui/form-save-row";
 import { applyServerErrors } from "@/lib/client/form-errors";
 import { seasonApi } from "@/lib/client/api";
 import { ApiError } from "@/lib/client/fetcher";
 import { SEASON_PHASE_KINDS, SEASON_PHASE_LABELS, TARGET_METRICS, type TargetMetric } from "@/lib/domain/season";
+import { AudienceSelect, audienceIds, type Audience, type AudienceChoices } from "./audience-select";
 
 type Range = { min: string; max: string };
 type Values = {
@@ -16,6 +17,7 @@ type Values = {
   startsOn: string;
   endsOn: string;
   goal: string;
+  audience: Audience;
   targets: Record<TargetMetric, Range>;
 };
 
@@ -30,14 +32,19 @@ const blankTargets = () =>
   Object.fromEntries(TARGET_METRICS.map((m) => [m, { min: "", max: "" }])) as Record<TargetMetric, Range>;
 const num = (v: string) => (v.trim() === "" ? null : Number(v));
 
-/** A new phase of the season with its weekly target ranges (either end may stay empty). */
+/**
+ * A new phase of the season with its weekly target ranges (either end may stay empty), for the whole team or one
+ * training group (a group's phase wins over the team's in the weeks both cover).
+ */
 export function PhaseForm({
   teamId,
   defaultStart,
+  groups,
   onSaved,
 }: {
   teamId: number;
   defaultStart: string;
+  groups: AudienceChoices["groups"];
   onSaved: () => void;
 }) {
   const form = useForm<Values>({
@@ -47,13 +54,14 @@ export function PhaseForm({
       startsOn: defaultStart,
       endsOn: "",
       goal: "",
+      audience: "team",
       targets: blankTargets(),
     },
   });
-  const [message, setMessage] = useState<string | null>(null);
+  const [message, setMessage] = useState<SaveMessage>();
   const errors = form.formState.errors;
   const onSubmit = form.handleSubmit(async (v) => {
-    setMessage(null);
+    setMessage(undefined);
     const targets = Object.fromEntries(
       TARGET_METRICS.filter((m) => v.targets[m].min !== "" || v.targets[m].max !== "").map((m) => [
         m,
@@ -61,13 +69,15 @@ export function PhaseForm({
       ]),
     );
     try {
-      await seasonApi.createPhase(teamId, { ...v, groupId: null, targets });
+      const { audience, ...fields } = v;
+      await seasonApi.createPhase(teamId, { ...fields, groupId: audienceIds(audience).groupId, targets });
       form.reset({ ...v, name: "", goal: "", targets: blankTargets() });
-      setMessage("Phase added");
+      setMessage({ tone: "ok", text: "Phase added" });
       onSaved();
     } catch (e) {
-      if (!(e instanceof ApiError) || !applyServerErrors(form, e))
-        setMessage(e instanceof Error ? e.message : "Not saved");
+      if (e instanceof ApiError && e.fields?.groupId) form.setError("audience", { message: e.fields.groupId[0] });
+      else if (!(e instanceof ApiError) || !applyServerErrors(form, e))
+        setMessage({ tone: "error", text: e instanceof Error ? e.message : "Not saved" });
     }
   });
   return (
@@ -94,6 +104,12 @@ export function PhaseForm({
         <Field label="Last day" htmlFor="phase-end" error={errors.endsOn?.message}>
           <Input id="phase-end" type="date" {...form.register("endsOn")} aria-invalid={!!errors.endsOn} />
         </Field>
+        <AudienceSelect
+          id="phase-audience"
+          choices={{ groups }}
+          registration={form.register("audience")}
+          error={errors.audience?.message}
+        />
       </div>
       <Field label="Goal" htmlFor="phase-goal" error={errors.goal?.message}>
         <Textarea id="phase-goal" rows={2} {...form.register("goal")} />
@@ -112,16 +128,7 @@ export function PhaseForm({
           </div>
         ))}
       </fieldset>
-      <div className="flex items-center gap-3">
-        <Button type="submit" disabled={form.formState.isSubmitting}>
-          Add phase
-        </Button>
-        {message ? (
-          <p role="status" className="text-xs text-ink-700">
-            {message}
-          </p>
-        ) : null}
-      </div>
+      <FormSaveRow label="Add phase" saving={form.formState.isSubmitting} dirty message={message} testId="phase-save" />
     </form>
   );
 }

@@ -31,6 +31,13 @@ function meetsInWeek(view: SeasonViewDto, weekStart: string, weekEnd: string) {
   return view.meets.filter((m) => m.date >= weekStart && m.date <= weekEnd);
 }
 
+/** Whom a meet is for, when not the whole team. */
+function meetAudience(view: SeasonViewDto, meet: SeasonViewDto["meets"][number]): string | null {
+  if (meet.athleteId !== null) return view.athletes.find((a) => a.id === meet.athleteId)?.name ?? null;
+  if (meet.groupId !== null) return view.groups.find((g) => g.id === meet.groupId)?.name ?? null;
+  return null;
+}
+
 function TargetMarks({ checks }: { checks: TargetCheck[] }) {
   const off = checks.filter((c) => c.standing !== "within");
   if (checks.length === 0) return null;
@@ -116,8 +123,10 @@ export function SeasonGrid({ view }: { view: SeasonViewDto }) {
       key: String(g.id),
       name: g.name,
       rows: view.athletes.filter((a) => a.groupId === g.id),
+      // The group's own phases; its weeks follow them over the team's (lib/season/season-grid.ts phaseOfWeek).
+      phases: view.phases.filter((p) => p.groupId === g.id),
     })),
-    { key: "none", name: "No group", rows: view.athletes.filter((a) => a.groupId === null) },
+    { key: "none", name: "No group", rows: view.athletes.filter((a) => a.groupId === null), phases: [] },
   ].filter((g) => g.rows.length > 0);
   return (
     // relative: the cells' sr-only labels are placed absolutely; outside a positioned box they widen the page.
@@ -179,11 +188,15 @@ export function SeasonGrid({ view }: { view: SeasonViewDto }) {
             </th>
             {view.weeks.map((w) => (
               <td key={w.weekStart} className="border-l border-ink-100 px-2 py-1 text-2xs text-ink-800">
-                {meetsInWeek(view, w.weekStart, addWeekEnd(w.weekStart)).map((m) => (
-                  <span key={m.id} className="block font-medium">
-                    <span className="rounded bg-ink-800 px-1 text-paper-raised">{m.priority}</span> {m.name}
-                  </span>
-                ))}
+                {meetsInWeek(view, w.weekStart, addWeekEnd(w.weekStart)).map((m) => {
+                  const audience = meetAudience(view, m);
+                  return (
+                    <span key={m.id} className="block font-medium" data-testid="season-meet">
+                      <span className="rounded bg-ink-800 px-1 text-paper-raised">{m.priority}</span> {m.name}
+                      {audience ? <span className="font-normal text-ink-600"> · {audience}</span> : null}
+                    </span>
+                  );
+                })}
               </td>
             ))}
           </tr>
@@ -197,6 +210,12 @@ export function SeasonGrid({ view }: { view: SeasonViewDto }) {
                 className="px-3 py-1 text-xs font-semibold text-ink-700"
               >
                 {g.name}
+                {g.phases.map((p) => (
+                  <span key={p.id} className="ml-2 font-normal text-ink-700" data-testid="group-phase">
+                    · {p.name} ({SEASON_PHASE_LABELS[p.kind]}), {formatDayShort(p.startsOn)} to{" "}
+                    {formatDayShort(p.endsOn)}
+                  </span>
+                ))}
               </th>
             </tr>
             {g.rows.map((a) => (

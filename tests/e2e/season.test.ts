@@ -113,6 +113,75 @@ describeBrowser("the season view", () => {
     await page.close();
   }, 180_000);
 
+  it("adds a meet for one athlete and a phase for one group, and shows for whom", async () => {
+    const [group] = await app.query<{ id: number; name: string }>(
+      `SELECT g.id, g.name FROM training_groups g JOIN athletes a ON a.group_id = g.id WHERE a.id = ${mayaId}`,
+    );
+    const [maya] = await app.query<{ name: string }>(`SELECT name FROM athletes WHERE id = ${mayaId}`);
+    const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    await signIn(page, app, HEAD);
+    await page.goto(`${app.url}/season?from=${source}`);
+    await page.getByTestId("season-grid").waitFor();
+
+    const meet = page.getByTestId("meet-form");
+    await meet.getByLabel("Meet").fill("Harbour indoor 60");
+    await meet.getByLabel("Date").fill(addDays(shiftWeek(source, 2), 5));
+    await meet.getByLabel("Priority").selectOption("A");
+    await meet.getByLabel("For", { exact: true }).selectOption({ label: maya.name });
+    await meet.getByRole("button", { name: "Add meet" }).click();
+    await meet.getByText("Meet added").waitFor();
+    const shown = page.getByTestId("season-meet").filter({ hasText: "Harbour indoor 60" });
+    await shown.waitFor();
+    expect(await shown.textContent()).toContain(maya.name);
+    const [stored] = await app.query<{ athlete_id: number; group_id: number | null }>(
+      "SELECT athlete_id, group_id FROM meets WHERE name = 'Harbour indoor 60'",
+    );
+    expect(stored).toEqual({ athlete_id: mayaId, group_id: null });
+
+    const phase = page.getByTestId("phase-form");
+    await phase.getByLabel("Name").fill("Group speed block");
+    await phase.getByLabel("Kind").selectOption({ label: "Pre-competition" });
+    await phase.getByLabel("First day").fill(shiftWeek(source, 6));
+    await phase.getByLabel("Last day").fill(addDays(shiftWeek(source, 8), 6));
+    await phase.getByLabel("For", { exact: true }).selectOption({ label: group.name });
+    await phase.getByRole("button", { name: "Add phase" }).click();
+    await phase.getByText("Phase added").waitFor();
+    await page.getByTestId("group-phase").filter({ hasText: "Group speed block" }).waitFor();
+    await page
+      .getByTestId("season-phase")
+      .filter({ hasText: `for ${group.name}` })
+      .waitFor();
+    expect(await seriousAxeViolations(page)).toEqual([]);
+    await page.close();
+  }, 120_000);
+
+  it("prints the season in pages of eight weeks with every athlete and none of the screen's controls", async () => {
+    const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    await signIn(page, app, HEAD);
+    await page.goto(`${app.url}/season?from=${source}`);
+    await page.getByTestId("season-grid").waitFor();
+    const athletes = await page.getByTestId("season-row").count();
+    await page.emulateMedia({ media: "print" });
+    const sheet = page.getByTestId("season-print");
+    await sheet.waitFor();
+    expect(await page.getByTestId("season-grid").isVisible()).toBe(false);
+    expect(await page.getByTestId("progression-form").isVisible()).toBe(false);
+    expect(await page.getByRole("navigation").first().isVisible()).toBe(false);
+    // 16 weeks on screen: two pages of eight.
+    expect(await sheet.getByTestId("season-print-page").count()).toBe(2);
+    expect(await sheet.getByTestId("season-print-row").count()).toBe(athletes * 2);
+    expect(await sheet.textContent()).toContain("monitoring aids, not diagnoses");
+    const cut = await sheet.evaluate((el) =>
+      [...el.querySelectorAll<HTMLElement>("th, td")]
+        .filter((c) => c.scrollWidth > c.clientWidth + 1 || c.scrollHeight > c.clientHeight + 1)
+        .map((c) => c.innerText.slice(0, 40)),
+    );
+    expect(cut).toEqual([]);
+    const pdf = await page.pdf({ format: "A4", landscape: true, preferCSSPageSize: true });
+    expect(pdf.subarray(0, 5).toString()).toBe("%PDF-");
+    await page.close();
+  }, 120_000);
+
   it("fits a phone without sideways scrolling", async () => {
     const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
     await signIn(page, app, HEAD);

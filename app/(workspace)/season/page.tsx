@@ -20,13 +20,15 @@ export default async function SeasonPage({
   const initial = await getSeasonView({ teamId: viewer.teamId, from, weeks: 16, clock: viewerClock(viewer) });
   return (
     <>
-      <PageHeader
-        title="Season"
-        lead={
-          "Weeks across, athletes down: what each week holds against its phase's target, and where every ratio will " +
-          "stand if the plan is kept. Past weeks show what was logged, later weeks the plan."
-        }
-      />
+      <div className="print:hidden">
+        <PageHeader
+          title="Season"
+          lead={
+            "Weeks across, athletes down: what each week holds against its phase's target, and where every ratio will " +
+            "stand if the plan is kept. Past weeks show what was logged, later weeks the plan."
+          }
+        />
+      </div>
       <SeasonView teamId={viewer.teamId} initial={initial} canEdit={scopeOf(viewer.role, "plan:edit") === "team"} />
     </>
   );
