@@ -64,6 +64,11 @@ export async function authorizeTeam({
   if (!userId) throw new AppError("unauthenticated", "Sign in first");
   const viewer = await loadViewer({ userId, teamId });
   if (!viewer) throw new AppError("not_found", "Not found");
+  return assertCan(viewer, can, scope);
+}
+
+/** 403 unless the member's role grants `can` in `scope` (the permission half of authorizeTeam). */
+export function assertCan(viewer: Viewer, can: Action, scope: Scope = "team"): Viewer {
   const granted = scopeOf(viewer.role, can);
   if (!granted || (scope === "team" && granted !== "team"))
     throw new AppError("forbidden", "Your role does not allow this");

@@ -1,7 +1,8 @@
 import "server-only";
 import { notFound, redirect } from "next/navigation";
 import { AppError } from "@/lib/errors";
-import { requireAthlete, requireMember, requireViewer } from "./access";
+import { requireAthlete, requireViewer } from "./access";
+import { assertCan } from "./authorize";
 import type { Action, Scope } from "./permissions";
 
 /** Pages turn access errors into navigation: sign-in, the "not for your role" page, or 404. */
@@ -18,11 +19,14 @@ async function guard<T>(fn: () => Promise<T>): Promise<T> {
   }
 }
 
-/** For a page of the signed-in member's own team; squad screens need "team" scope (the default). */
+/**
+ * For a page of the signed-in member's own team; squad screens need "team" scope (the default). The layout and
+ * the page share one viewer look-up (requireViewer is cached per request).
+ */
 export async function pageViewer(can?: Action, scope: Scope = "team") {
   return guard(async () => {
     const viewer = await requireViewer();
-    return can ? requireMember({ teamId: viewer.teamId, can, scope }) : viewer;
+    return can ? assertCan(viewer, can, scope) : viewer;
   });
 }
 
