@@ -1,7 +1,7 @@
 import "server-only";
-import { addDays, dayIndex, startOfWeek } from "@/lib/dates/plain-date";
+import { addDays, dateFromDayIndex, dayIndex, startOfWeek } from "@/lib/dates/plain-date";
 import {
-  computeAthleteLoad,
+  METRICS,
   type AthleteProfile,
   type Flag,
   type FlagLevel,
@@ -14,11 +14,14 @@ import {
   type SpeedBands,
   type ContactsByIntensity,
 } from "@/lib/load";
+import { ledgerMethod, ledgerWindow, type LedgerWindow } from "@/lib/load/ledger";
+import { ledgerPreviewContext, weekFromLedger } from "@/lib/load/ledger-week";
+import { computeWeekPreview, weekDayValues } from "@/lib/load/week-preview";
 import { AppError } from "@/lib/errors";
 import type { LoadPreviewInput } from "@/lib/validations/load";
 import { teamToday, type TeamClock } from "@/lib/dates/zoned";
-import { getLedgerWeek } from "./load-ledger";
-import { getAthleteLoadInputs, getTeamClock } from "./load";
+import { getAthleteLedgerWeek, getLedgerWeek, MAX_LOOK_BACK_DAYS, readLedgerSpan } from "./load-ledger";
+import { getTeamClock } from "./load";
 
 /** The caller's already-known team clock (e.g. from the authorized viewer) saves a query on hot paths. */
 type Clock = Omit<TeamClock, "teamId">;
@@ -196,37 +199,63 @@ export async function getAthleteLoad({
   if (dayIndex(range.to) < dayIndex(range.from))
     throw new AppError("invalid", "Invalid to", { fields: { to: ["Must be on or after from"] } });
   const weekStart = startOfWeek(now <= range.to ? now : range.to, probe.weekStartDay);
+  const ws = dayIndex(weekStart);
+  const todayDay = dayIndex(now);
+  const fromDay = Math.min(dayIndex(range.from), ws - 7);
   // Through the end of next week as well: the "upcoming" summary reads it.
-  const nextWeekEnd = addDays(weekStart, 13);
-  const inputs = await getAthleteLoadInputs({ athleteId, through: range.to > nextWeekEnd ? range.to : nextWeekEnd });
-  if (inputs.teamId !== teamId) throw new AppError("not_found", "Not found");
-  const { athlete, settings } = inputs;
-  const chosen = metric ?? settings.acwrMetric;
-  const sessions = withDrafts ? athlete.sessions : athlete.sessions.filter((s) => s.status !== "draft");
-  const base = {
-    profile: athlete.profile,
-    settings: { ...settings, acwrMetric: chosen },
-    sessions,
-    from: range.from,
-    to: range.to,
-    weekStart,
-  };
-  const load = computeAthleteLoad({ ...base, logs: athlete.logs, today: now, view });
-  // "Planned": the engine's projected view with today before every session and no logs counts the whole plan.
-  const plan = computeAthleteLoad({ ...base, logs: [], today: "1970-01-01", view: "projected" });
-  // Flags judge the team's own metric, not the one charted.
-  const flagged =
-    chosen === settings.acwrMetric
-      ? load
-      : computeAthleteLoad({ ...base, settings, logs: athlete.logs, today: now, view });
-  const next = computeAthleteLoad({
-    ...base,
-    settings,
-    logs: athlete.logs,
-    today: now,
-    view: "projected",
-    weekStart: addDays(weekStart, 7),
+  const toDay = Math.max(dayIndex(range.to), ws + 13);
+  // From the ledger: the days shown and the 28 before, whatever the length of the history (README §12).
+  const span = await readLedgerSpan({
+    teamId,
+    athleteIds: [athleteId],
+    fromDay,
+    toDay,
+    todayDay,
+    sessionsFrom: ws - MAX_LOOK_BACK_DAYS,
+    withDrafts,
   });
+  const athlete = span.athletes[0];
+  if (!athlete) throw new AppError("not_found", "Not found");
+  const { settings } = span;
+  const chosen = metric ?? settings.acwrMetric;
+  const method = ledgerMethod(settings);
+  const windowOf = (v: LoadView) => ledgerWindow({ rows: athlete.rows, fromDay, toDay, todayDay, view: v, method });
+  const win = windowOf(view);
+  const week = (w: LedgerWindow, v: LoadView, weekStartDay: number) =>
+    weekFromLedger({
+      window: w,
+      sessions: athlete.sessions,
+      logs: athlete.logs,
+      profile: athlete.profile,
+      settings,
+      view: v,
+      todayDay,
+      weekStartDay,
+    });
+  // Flags judge the team's own metric, not the one charted.
+  const flagged = week(win, view, ws);
+  const next = week(view === "projected" ? win : windowOf("projected"), "projected", ws + 7);
+  // "Planned": every session not cancelled, logs ignored (the ledger's plan values).
+  const k = METRICS.indexOf(chosen);
+  const planned = new Map(athlete.rows.map((r) => [r.day, r.planned[k]]));
+  const days: AthleteLoadDayDto[] = [];
+  for (let d = dayIndex(range.from); d <= dayIndex(range.to); d++) {
+    const i = d - win.startDay;
+    const ratio = win.acwr[chosen].ratio[i];
+    const missing = win.missing[i] === 1;
+    days.push({
+      date: dateFromDayIndex(d),
+      value: win.values[chosen][i],
+      planned: planned.get(d) ?? 0,
+      acute: win.acwr[chosen].acute[i],
+      chronic: win.acwr[chosen].chronic[i],
+      ratio: Number.isFinite(ratio) ? ratio : null,
+      provisional: win.provisional[i] === 1,
+      logged: win.logged[i] === 1,
+      missing,
+      estimated: missing && settings.missingLogs === "estimate",
+    });
+  }
   return {
     athlete: { id: athlete.id, name: athlete.name, groupName: athlete.groupName, profile: athlete.profile },
     from: range.from,
@@ -235,18 +264,7 @@ export async function getAthleteLoad({
     view,
     metric: chosen,
     settings,
-    days: load.days.map((d, i) => ({
-      date: d.date,
-      value: d.values[chosen],
-      planned: plan.days[i]?.values[chosen] ?? 0,
-      acute: d.acute[chosen],
-      chronic: d.chronic[chosen],
-      ratio: d.ratio[chosen],
-      provisional: d.provisional,
-      logged: d.logged,
-      missing: d.missing,
-      estimated: d.missing && inputs.settings.missingLogs === "estimate",
-    })),
+    days,
     week: flagged.week,
     flags: flagged.flags,
     upcoming: { week: next.week, flags: next.flags },
@@ -282,10 +300,15 @@ export async function previewAthleteWeek({
   if (Object.keys(fields).length > 0)
     throw new AppError("invalid", `Invalid ${Object.keys(fields).join(", ")}`, { fields });
   const now = today ?? teamToday({ timeZone: probe.timeZone, now: new Date() });
-  const inputs = await getAthleteLoadInputs({ athleteId: input.athleteId, through: weekEnd });
   // An athlete of another team is "not found", whatever the caller may do in its own team.
-  if (inputs.teamId !== input.teamId) throw new AppError("not_found", "Not found");
-  const { athlete, settings } = inputs;
+  const { athlete, settings } = await getAthleteLedgerWeek({
+    teamId: input.teamId,
+    athleteId: input.athleteId,
+    weekStart,
+    from: addDays(weekStart, -28),
+    today: now,
+    view: "projected",
+  });
   const proposed: SessionInput[] = input.sessions.map((s, i) => ({
     id: s.id === undefined ? `proposed-${i}` : String(s.id),
     date: s.date,
@@ -301,28 +324,43 @@ export async function previewAthleteWeek({
       drills: b.drills,
     })),
   }));
-  const outside = athlete.sessions.filter((s) => s.date < weekStart || s.date > weekEnd);
   // Logs carry over to proposed sessions that are the same saved session (same id), per-block reps included:
   // reps logged against a block id the proposal still holds count as logged (lib/load/README.md §4).
   const proposedIds = new Set(proposed.map((s) => s.id));
-  const outsideIds = new Set(outside.map((s) => s.id));
-  const keptLogs = athlete.logs.filter((l) => outsideIds.has(l.sessionId) || proposedIds.has(l.sessionId));
-  const base = {
+  const weekLogs = athlete.logs.filter((l) => proposedIds.has(l.sessionId));
+  const todayDay = dayIndex(now);
+  // The saved series up to the week, then the proposal: the drag preview's computation (README §12).
+  const context = ledgerPreviewContext(athlete.window, {
+    sessions: athlete.sessions,
+    logs: athlete.logs,
     profile: athlete.profile,
     settings,
-    from: weekStart,
-    to: weekEnd,
-    today: now,
-    view: "projected" as const,
+    todayDay,
     weekStart,
-  };
-  const next = computeAthleteLoad({ ...base, sessions: [...outside, ...proposed], logs: keptLogs });
-  const saved = computeAthleteLoad({ ...base, sessions: athlete.sessions, logs: athlete.logs });
+  });
+  const next = computeWeekPreview({
+    ...context,
+    weekSessions: proposed,
+    weekLogs,
+    profile: athlete.profile,
+    settings,
+    weekStart,
+    today: now,
+    view: "projected",
+  });
+  const days = weekDayValues({
+    sessions: proposed,
+    logs: weekLogs,
+    profile: athlete.profile,
+    settings,
+    weekStart,
+    todayDay,
+  });
   return {
     weekStart,
     weekEnd,
     today: now,
-    proposed: { week: next.week, flags: next.flags, days: next.days.map((d) => ({ date: d.date, values: d.values })) },
-    current: { week: saved.week, flags: saved.flags },
+    proposed: { week: next.week, flags: next.flags, days },
+    current: { week: athlete.load.week, flags: athlete.load.flags },
   };
 }

@@ -1,17 +1,12 @@
 import "server-only";
 import { Op } from "sequelize";
 import { AppError } from "@/lib/errors";
-import { buildWeekPreviewContext } from "@/lib/load/week-preview";
-import { packSessions } from "@/lib/load/packed";
-import { computeSquadWeek, type SquadAthleteInput } from "@/lib/load/squad";
 import { logsFor } from "@/lib/plan/blocks";
-import { compactContext } from "@/lib/plan/context";
 import type { PlanAthlete, PlanGroup, PlanSession, PlanWeek, PlanWriteResult, WeekRow } from "@/lib/plan/types";
 import { addDays, dayIndex, isoWeekOf, startOfWeek, weekDays } from "@/lib/dates/plain-date";
 import { ledgerPreviewContext } from "@/lib/load/ledger-week";
 import { db } from "@/models";
 import { listGroups } from "./athletes";
-import { getLoadSeriesInputs } from "./load";
 import { getLedgerWeek } from "./load-ledger";
 import { loadSessions } from "./plan-rows";
 import { listRestrictions } from "./restrictions";
@@ -56,10 +51,19 @@ export async function getPlanWeek({
   if (own && audience.ownAthleteId === null)
     throw new AppError("not_found", "No athlete profile is linked to your account");
   const visible = (s: { status: string }) => !own || s.status !== "draft";
-  const [inputs, groups, weekRows, templates, restrictions] = await Promise.all([
-    // Staff read the ledger (README §12); an athlete's own view leaves drafts out of the whole history, which
-    // the ledger (drafts in) cannot give, so it reads that one athlete's history.
-    own ? getLoadSeriesInputs({ teamId, athleteIds: [audience.ownAthleteId!], through: weekEnd }) : null,
+  const athleteIds = own ? [audience.ownAthleteId!] : undefined;
+  const [source, groups, weekRows, templates, restrictions] = await Promise.all([
+    // From the ledger (README §12): the week, and the 28 days before it the drag preview continues from. An
+    // athlete's own view leaves drafts out.
+    getLedgerWeek({
+      teamId,
+      athleteIds,
+      weekStart,
+      from: addDays(weekStart, -28),
+      today,
+      view: "projected",
+      withDrafts: !own,
+    }),
     listGroups({ teamId }),
     loadSessions({
       teamId,
@@ -67,66 +71,31 @@ export async function getPlanWeek({
       ...(own ? { athleteId: audience.ownAthleteId! } : {}),
     }),
     own ? Promise.resolve([]) : listTemplates({ teamId }),
-    listRestrictions({ teamId, from: weekStart, ...(own ? { athleteIds: [audience.ownAthleteId!] } : {}) }),
+    listRestrictions({ teamId, from: weekStart, ...(own ? { athleteIds } : {}) }),
   ]);
-  const ledger = own
-    ? null
-    : await getLedgerWeek({ teamId, weekStart, from: addDays(weekStart, -28), today, view: "projected" });
-  const source = own ? inputs! : ledger!;
-  const squad: SquadAthleteInput[] = source.athletes
-    .filter((a) => !own || a.id === audience.ownAthleteId)
-    .map((a) => {
-      const sessions = a.sessions.filter(visible);
-      return {
-        id: String(a.id),
-        name: a.name,
-        group: a.groupName,
-        profile: a.profile,
-        sessions,
-        logs: a.logs,
-        packed: own ? packSessions(sessions, a.logs) : undefined,
-      };
-    });
-  const rows = own
-    ? computeSquadWeek(squad, source.settings, weekStart, today, "projected")
-    : ledger!.athletes.map((a) => a.load);
   const weekSessions = new Map<number, PlanSession[]>();
   for (const { dto } of weekRows)
     if (visible(dto)) weekSessions.set(dto.athleteId, [...(weekSessions.get(dto.athleteId) ?? []), dto]);
 
-  const athletes: PlanAthlete[] = squad.map((a, i) => {
-    const id = Number(a.id);
-    const sessions = weekSessions.get(id) ?? [];
-    const from = ledger?.athletes[i];
-    const context = from
-      ? ledgerPreviewContext(from.window, {
-          sessions: a.sessions,
-          logs: a.logs,
-          profile: a.profile,
-          settings: source.settings,
-          todayDay: dayIndex(today),
-          weekStart,
-        })
-      : compactContext(
-          buildWeekPreviewContext({
-            profile: a.profile,
-            settings: source.settings,
-            sessions: a.sessions,
-            logs: a.logs,
-            weekStart,
-            today,
-          }),
-          source.settings.acwrMetric,
-        );
+  const athletes: PlanAthlete[] = source.athletes.map((a) => {
+    const sessions = weekSessions.get(a.id) ?? [];
+    const context = ledgerPreviewContext(a.window, {
+      sessions: a.sessions,
+      logs: a.logs,
+      profile: a.profile,
+      settings: source.settings,
+      todayDay: dayIndex(today),
+      weekStart,
+    });
     return {
-      id,
+      id: a.id,
       name: a.name,
-      groupId: source.athletes.find((x) => x.id === id)!.groupId,
+      groupId: a.groupId,
       profile: a.profile,
       sessions,
       logs: logsFor(a.logs, sessions),
       context,
-      load: { week: rows[i].week, flags: rows[i].flags, topLevel: rows[i].topLevel },
+      load: { week: a.load.week, flags: a.load.flags, topLevel: a.load.topLevel },
     };
   });
   const planGroups: PlanGroup[] = [...groups, { id: null, name: "No group", sortOrder: Number.MAX_SAFE_INTEGER }]

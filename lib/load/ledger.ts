@@ -407,3 +407,18 @@ export function ledgerWindow(input: LedgerWindowInput): LedgerWindow {
     states: shown,
   };
 }
+
+/**
+ * Rows whose day values are replaced by `values` where the days match (states kept): a view that leaves some
+ * sessions out (an athlete's own view has no drafts) over the days it recomputes. Sound where the stored
+ * state does not depend on the sessions left out: drafts never count before today (sessionUse; a draft cannot
+ * be logged), so their rows before today hold the same values and states either way.
+ */
+export function withDayValues(rows: readonly LedgerRow[], values: readonly LedgerDayValues[]): LedgerRow[] {
+  if (values.length === 0) return [...rows];
+  const first = values[0].day;
+  return rows.map((r) => {
+    const v = values[r.day - first];
+    return v && v.day === r.day ? { ...r, ...v } : r;
+  });
+}

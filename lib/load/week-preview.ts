@@ -14,6 +14,7 @@ import {
   type SessionInput,
   type TeamLoadSettings,
 } from "./types";
+import { metricRecord } from "./metric-record";
 import { weekExtras } from "./week-extras";
 import { summariseWeek, type WeekSummary } from "./week-summary";
 
@@ -246,4 +247,30 @@ export function buildWeekPreviewContext(input: WeekPreviewContextInput): WeekPre
     firstDataDate: firstDataDay !== null ? dateFromDayIndex(firstDataDay) : null,
     priorSessions,
   };
+}
+
+/** The daily values of a week's sessions (what a proposed week shows per day), in the view the planner uses. */
+export function weekDayValues(input: {
+  sessions: readonly SessionInput[];
+  logs: readonly LogInput[];
+  profile: AthleteProfile;
+  settings: TeamLoadSettings;
+  weekStart: string;
+  todayDay: number;
+  view?: LoadView;
+}): { date: string; values: Record<Metric, number> }[] {
+  const ws = dayIndex(input.weekStart);
+  const cols = buildDailyColumns({
+    startDay: ws,
+    length: 7,
+    sessions: input.sessions,
+    logFor: alignLogs(input.sessions, input.logs),
+    rp: resolveProfile(input.profile, input.settings),
+    view: input.view ?? "projected",
+    todayDay: input.todayDay,
+  });
+  return Array.from({ length: 7 }, (_, i) => ({
+    date: dateFromDayIndex(ws + i),
+    values: metricRecord((m) => cols.values[m][i]),
+  }));
 }
