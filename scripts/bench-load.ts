@@ -6,7 +6,6 @@ import { ACC_SIZE, evaluateSessionInto, resolveProfile } from "../lib/load/accum
 import { computeAthleteLoad } from "../lib/load/athlete-load";
 import { addDays, dayIndex, startOfWeek } from "../lib/dates/plain-date";
 import { dailySeries, indexLogs, sessionUse } from "../lib/load/series";
-import { packSessions } from "../lib/load/packed";
 import { computeSquadWeek } from "../lib/load/squad";
 import { DEFAULT_TEAM_LOAD_SETTINGS, METRICS, type SessionInput } from "../lib/load/types";
 import { buildWeekPreviewContext, computeWeekPreview } from "../lib/load/week-preview";
@@ -219,19 +218,12 @@ function main(): void {
   const scratch = new Float64Array(3 * n);
   const days = new Float64Array(NM * n);
 
-  // The data layer hands the engine each athlete's sessions packed into columns (lib/load/packed.ts), as it reads
-  // them; like the bare passes' pre-extracted arrays, that packing is not part of the engine's time. The object
-  // input (packing inside the call) is timed too.
-  const packedSquad = squad.map((a) => ({ ...a, packed: packSessions(a.sessions, a.logs) }));
+  // The whole-history engine (what the ledger's rebuild runs); the screens read the ledger instead.
   let flagCount = 0;
-  const [engine, objects, bareA, bareB] = interleaved([
+  const [engine, bareA, bareB] = interleaved([
     () => {
-      flagCount = computeSquadWeek(packedSquad, settings, WEEK, TODAY, "projected").reduce(
-        (t, r) => t + r.flags.length,
-        0,
-      );
+      flagCount = computeSquadWeek(squad, settings, WEEK, TODAY, "projected").reduce((t, r) => t + r.flags.length, 0);
     },
-    () => computeSquadWeek(squad, settings, WEEK, TODAY, "projected"),
     () => bareEwma(daily, n, scratch),
     () => bareFull(flats, n, days, scratch),
   ]);
@@ -240,10 +232,7 @@ function main(): void {
   const ratio = (a: Timing, b: Timing) => `${(a.wall / b.wall).toFixed(2)}× wall, ${(a.cpu / b.cpu).toFixed(2)}× cpu`;
   const within = (a: Timing, b: Timing) => (a.wall / b.wall <= TARGET_RATIO ? "met" : "NOT met");
   console.log("Squad week, whole engine: daily series + ACWR for all 6 metrics + week summary + flags, per athlete");
-  console.log(
-    `  engine   ${ms(engine)}  (${n} days per athlete, ${flagCount} flags), sessions packed into columns as the data layer hands them`,
-  );
-  console.log(`  objects  ${ms(objects)}  the same call on session objects (no packed columns given)`);
+  console.log(`  engine   ${ms(engine)}  (${n} days per athlete, ${flagCount} flags), from session objects`);
   console.log(`  bare A   ${ms(bareA)}  EWMA recurrence only, over pre-summed daily typed arrays`);
   console.log(`  bare B   ${ms(bareB)}  block maths + daily sums + EWMA, over inputs pre-extracted to typed arrays`);
   console.log(`  ratio    engine / bare A: ${ratio(engine, bareA)}; engine / bare B: ${ratio(engine, bareB)}`);

@@ -2,7 +2,6 @@ import "server-only";
 import { jsonIds } from "@/lib/db/sql";
 import { QueryTypes, type Sequelize } from "sequelize";
 import { buildLedger } from "@/lib/load/ledger";
-import { packSessions } from "@/lib/load/packed";
 import { db } from "@/models";
 import { getLoadSeriesInputs } from "./load";
 import { writeLedgerRows } from "./ledger";
@@ -72,7 +71,6 @@ export async function rebuildLedger({
               logs: a.logs,
               profile: a.profile,
               settings: inputs.settings,
-              packed: packSessions(a.sessions, a.logs),
             })
           : [];
         await writeLedgerRows({ sequelize, transaction, athleteId: id, keepFrom: 0, from: -1e9, rows: ledger });

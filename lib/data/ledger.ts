@@ -4,7 +4,6 @@ import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
 import { sqliteConnectionOf } from "@/lib/db/raw";
 import { dateFromDayIndex, dayIndex } from "@/lib/dates/plain-date";
 import { ledgerDayValues, ledgerMethod, recomputeLedger, type LedgerRow, type LedgerState } from "@/lib/load/ledger";
-import { packSessions } from "@/lib/load/packed";
 import { METRICS } from "@/lib/load/types";
 import { db } from "@/models";
 import { transactionTeam } from "./transaction";
@@ -263,7 +262,6 @@ export async function refreshLedger({
             logs: a.logs,
             profile: a.profile,
             settings: inputs.settings,
-            packed: packSessions(a.sessions, a.logs),
           },
           p.start!,
           p.last,

@@ -236,7 +236,7 @@ function addScaledBlock(acc: Float64Array, block: BlockInput, rp: ResolvedProfil
         if (flying && runIn > 0) reach = buildUpReach(reach, runIn, rp.bandSpeeds[j], target);
         if (reach < total) acc[SLOT_ABS_HSR + j] += (total - reach) * reps;
       }
-      // hsrM and near-max are the team's driving bands (same sums, so identical to packed.ts).
+      // hsrM and near-max are the team's driving bands (the same sums).
       acc[SLOT_HSR] = acc[SLOT_ABS_HSR + rp.hsrBand];
       acc[SLOT_NEAR_MAX] = acc[SLOT_ABS_HSR + BAND_NEAR];
     }

@@ -23,7 +23,6 @@ import {
   type TeamLoadSettings,
 } from "./types";
 import { metricRecord } from "./metric-record";
-import type { PackedSessions } from "./packed";
 import { weekExtras } from "./week-extras";
 import { summariseWeek, type WeekSummary } from "./week-summary";
 import { reserve, type EngineWorkspace } from "./workspace";
@@ -68,8 +67,6 @@ export interface ColumnsRequest {
    */
   fromDay: number;
   toDay: number;
-  /** packSessions(sessions, logs) when the caller has it (same sessions, same order). */
-  packed?: PackedSessions;
 }
 
 /**
@@ -78,9 +75,9 @@ export interface ColumnsRequest {
  * next call overwrites them.
  */
 export function computeAthleteColumns(req: ColumnsRequest, ws?: EngineWorkspace): AthleteColumns {
-  const sessionDays = req.packed ? req.packed.day : sessionDayNumbers(req.sessions);
+  const sessionDays = sessionDayNumbers(req.sessions);
   const first = firstDayOnRecord(
-    { sessions: req.sessions, sessionDays, logFor: req.logFor, packed: req.packed },
+    { sessions: req.sessions, sessionDays, logFor: req.logFor },
     req.view,
     req.todayDay,
     req.toDay,
@@ -108,7 +105,6 @@ export function computeAthleteColumns(req: ColumnsRequest, ws?: EngineWorkspace)
     view: req.view,
     todayDay: req.todayDay,
     scratch: { f64, u8 },
-    packed: req.packed,
   });
   const prefix = f64.subarray(4 * nm * n, f64Size);
   const acwr = {} as Record<Metric, AcwrColumns>;

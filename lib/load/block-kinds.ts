@@ -1,6 +1,5 @@
-// What each block kind means to the load engine, in one table. Both engine paths (the object path in
-// accumulate.ts and the packed columns in packed.ts) read it, as do the forms, the plan validation and the
-// restriction rules, so a new kind is decided once and cannot count on one path and vanish on the other.
+// What each block kind means to the load engine, in one table. The engine (accumulate.ts) reads it, as do the
+// forms, the plan validation and the restriction rules, so a new kind is decided once, in one place.
 // `satisfies Record<BlockKind, BlockKindRules>` makes the compiler refuse a kind without a row.
 import type { BlockKind, RecoveryWork } from "./types";
 

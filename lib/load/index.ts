@@ -28,9 +28,8 @@
  *   band's top are an overload; high-intensity sessions (max-velocity block or high plyometrics) less than 48 h
  *   apart by wall clock are a short recovery (exactly 48 h passes). Comparisons allow 1e-9 of float noise.
  * - Flags are monitoring aids, not diagnoses: show LOAD_CAUTION with them.
- * - Input: sessions and logs as plain objects; for whole-history work the data layer also hands over
- *   packSessions(sessions, logs) (packed.ts), the same numbers in typed-array columns, which the daily sums
- *   read instead of the objects (identical results; tests/unit/load/packed.test.ts).
+ * - Input: sessions and logs as plain objects; readers of a few days take the stored series from the ledger
+ *   (ledger.ts, README §12) instead of the whole history.
  */
 // Only what callers import from "@/lib/load"; everything else is imported from its own module.
 export * from "./types";
@@ -39,4 +38,3 @@ export type { Flag, FlagLevel } from "./flags";
 export type { WeekSummary } from "./week-summary";
 export { computeAthleteLoad, type AthleteLoad } from "./athlete-load";
 export { computeSquadWeek } from "./squad";
-export { packSessions } from "./packed";

@@ -22,7 +22,6 @@ import {
 } from "./acwr";
 import { resolveProfile, type ResolvedProfile } from "./accumulate";
 import { alignLogs, type AlignedLogs } from "./align-logs";
-import type { PackedSessions } from "./packed";
 import { dateFromDayIndex } from "@/lib/dates/plain-date";
 import { buildDailyColumns, metricColumns, sessionDayNumbers } from "./series";
 import {
@@ -96,8 +95,6 @@ export interface LedgerSource {
   logs: readonly LogInput[];
   profile: AthleteProfile;
   settings: TeamLoadSettings;
-  /** packSessions(sessions, logs), when the caller has it: the sums then read typed arrays. */
-  packed?: PackedSessions;
 }
 
 /** The day values of [fromDay, toDay] from an athlete's sessions and logs (every session of those days must be given). */
@@ -105,12 +102,10 @@ export function ledgerDayValues(src: LedgerSource, fromDay: number, toDay: numbe
   const length = Math.max(0, toDay - fromDay + 1);
   if (length === 0) return [];
   const rp = resolveProfile(src.profile, src.settings);
-  const logFor: AlignedLogs = src.packed?.logFor ?? alignLogs(src.sessions, src.logs);
-  const sessionDays = src.packed ? src.packed.day : sessionDayNumbers(src.sessions);
-  const columns = (view: LoadView, todayDay: number, o: { rp?: ResolvedProfile; noLogs?: boolean } = {}) => {
-    const packed =
-      src.packed && o.noLogs ? { ...src.packed, hasLog: new Uint8Array(src.packed.day.length) } : src.packed;
-    return buildDailyColumns({
+  const logFor: AlignedLogs = alignLogs(src.sessions, src.logs);
+  const sessionDays = sessionDayNumbers(src.sessions);
+  const columns = (view: LoadView, todayDay: number, o: { rp?: ResolvedProfile; noLogs?: boolean } = {}) =>
+    buildDailyColumns({
       startDay: fromDay,
       length,
       sessions: src.sessions,
@@ -119,9 +114,7 @@ export function ledgerDayValues(src: LedgerSource, fromDay: number, toDay: numbe
       rp: o.rp ?? rp,
       view,
       todayDay,
-      packed,
     });
-  };
   // Every day before today: logs, and missing sessions (series.ts sessionUse).
   const past = columns("projected", toDay + 1);
   // Logs only: the actual view up to today with missing days not estimated.
@@ -300,7 +293,7 @@ export function recomputeLedger(
 
 /** An athlete's whole ledger from scratch: rows from the first to the last day holding a session. */
 export function buildLedger(src: LedgerSource): LedgerRow[] {
-  const days = src.packed ? src.packed.day : sessionDayNumbers(src.sessions);
+  const days = sessionDayNumbers(src.sessions);
   if (days.length === 0) return [];
   let first = days[0];
   let last = days[0];

@@ -2,7 +2,6 @@ import { ACC_SIZE, addAccToColumns, evaluateSessionInto, resolveProfile, type Re
 import { alignLogs, type AlignedLogs } from "./align-logs";
 import type { FlagSession } from "./flags";
 import { dateFromDayIndex, dayIndex, weekStartOfDay } from "@/lib/dates/plain-date";
-import { addPackedToColumns, PACKED_ACC_SIZE, PACKED_STATUS, sumPackedSession, type PackedSessions } from "./packed";
 import { toSessionMetrics, type SessionMetrics } from "./session-metrics";
 import {
   METRICS,
@@ -59,20 +58,16 @@ export interface DailyColumns {
  * (logged, planned or missing; lib/load/README.md §5). The daily series starts here; null when none.
  */
 export function firstDayOnRecord(
-  input: { sessions: readonly SessionInput[]; sessionDays: Int32Array; logFor: AlignedLogs; packed?: PackedSessions },
+  input: { sessions: readonly SessionInput[]; sessionDays: Int32Array; logFor: AlignedLogs },
   view: LoadView,
   todayDay: number,
   toDay: number,
 ): number | null {
   let first: number | null = null;
-  const p = input.packed;
-  const n = p ? p.day.length : input.sessions.length;
-  for (let k = 0; k < n; k++) {
-    const day = p ? p.day[k] : input.sessionDays[k];
+  for (let k = 0; k < input.sessions.length; k++) {
+    const day = input.sessionDays[k];
     if (day > toDay || (first !== null && day >= first)) continue;
-    const use = p
-      ? sessionUse(PACKED_STATUS[p.status[k]], p.hasLog[k] === 1, day, todayDay, view)
-      : sessionUse(input.sessions[k].status, input.logFor[k] !== undefined, day, todayDay, view);
+    const use = sessionUse(input.sessions[k].status, input.logFor[k] !== undefined, day, todayDay, view);
     if (use !== "none") first = day;
   }
   return first;
@@ -115,8 +110,6 @@ export interface ColumnsInput {
   todayDay: number;
   /** Zeroed scratch to use instead of allocating: ≥ 6·length doubles and ≥ 2·length bytes. */
   scratch?: { f64: Float64Array; u8: Uint8Array };
-  /** packSessions(sessions, logs): the same sessions as columns; the sums then run over typed arrays. */
-  packed?: PackedSessions;
 }
 
 /** Hot path: no per-day or per-session allocation; one scratch accumulator for all sessions. */
@@ -125,19 +118,6 @@ export function buildDailyColumns(input: ColumnsInput): DailyColumns {
   const { buffer, values } = metricColumns(length, input.scratch?.f64);
   const logged = input.scratch ? input.scratch.u8.subarray(0, length) : new Uint8Array(length);
   const missing = input.scratch ? input.scratch.u8.subarray(length, 2 * length) : new Uint8Array(length);
-  if (input.packed) {
-    const firstDataIndex = packedIntoColumns(input.packed, {
-      startDay,
-      length,
-      rp,
-      view,
-      todayDay,
-      buffer,
-      logged,
-      missing,
-    });
-    return { startDay, length, values, logged, missing, firstDataIndex };
-  }
   const days = input.sessionDays ?? sessionDayNumbers(sessions);
   const acc = new Float64Array(ACC_SIZE);
   let firstDataIndex: number | null = null;
@@ -159,43 +139,6 @@ export function buildDailyColumns(input: ColumnsInput): DailyColumns {
     addToColumns(acc, buffer, length, i);
   }
   return { startDay, length, values, logged, missing, firstDataIndex };
-}
-
-/** buildDailyColumns over packed sessions: the same rules, reading typed arrays. Returns firstDataIndex. */
-function packedIntoColumns(
-  p: PackedSessions,
-  o: {
-    startDay: number;
-    length: number;
-    rp: ResolvedProfile;
-    view: LoadView;
-    todayDay: number;
-    buffer: Float64Array;
-    logged: Uint8Array;
-    missing: Uint8Array;
-  },
-): number | null {
-  const { startDay, length, rp, view, todayDay, buffer, logged, missing } = o;
-  const acc = new Float64Array(PACKED_ACC_SIZE);
-  const n = p.day.length;
-  let firstDataIndex: number | null = null;
-  for (let k = 0; k < n; k++) {
-    const day = p.day[k];
-    const i = day - startDay;
-    if (i < 0 || i >= length) continue;
-    const hasLog = p.hasLog[k] === 1;
-    const use = sessionUse(PACKED_STATUS[p.status[k]], hasLog, day, todayDay, view);
-    if (use === "none") continue;
-    if (firstDataIndex === null || i < firstDataIndex) firstDataIndex = i;
-    if (use === "missing") {
-      missing[i] = 1;
-      if (!rp.estimateMissing) continue;
-    }
-    sumPackedSession(acc, p, k, use === "logged", rp);
-    if (use === "logged") logged[i] = 1;
-    addPackedToColumns(acc, buffer, length, i);
-  }
-  return firstDataIndex;
 }
 
 /** A session as it enters a view, with its numbers: what the flags look at. */

@@ -2,7 +2,6 @@ import { computeAthleteColumns, weekFromColumns, type ColumnsRequest } from "./a
 import { dayIndex } from "@/lib/dates/plain-date";
 import { topFlagLevel, type Flag, type FlagLevel } from "./flags";
 import { metricRecord } from "./metric-record";
-import type { PackedSessions } from "./packed";
 import { alignLogs } from "./series";
 import { createWorkspace } from "./workspace";
 import type { AthleteProfile, LoadView, LogInput, Metric, SessionInput, TeamLoadSettings } from "./types";
@@ -15,8 +14,6 @@ export interface SquadAthleteInput {
   profile: AthleteProfile;
   sessions: readonly SessionInput[];
   logs: readonly LogInput[];
-  /** packSessions(sessions, logs), as the data layer hands it over: the history's sums then read columns. */
-  packed?: PackedSessions;
 }
 
 export interface SquadWeekRow {
@@ -47,8 +44,7 @@ export function computeSquadWeek(
       profile: a.profile,
       settings,
       sessions: a.sessions,
-      logFor: a.packed?.logFor ?? alignLogs(a.sessions, a.logs),
-      packed: a.packed,
+      logFor: alignLogs(a.sessions, a.logs),
       view,
       todayDay,
       fromDay: ws - 7,

@@ -11,7 +11,6 @@ import {
   recomputeLedger,
   type LedgerRow,
 } from "@/lib/load/ledger";
-import { packSessions } from "@/lib/load/packed";
 import { alignLogs } from "@/lib/load/series";
 import {
   ACWR_METHODS,
@@ -50,7 +49,6 @@ const caseArb = fc.record({
   view: fc.constantFrom<LoadView>("actual", "projected"),
   method: fc.constantFrom(...ACWR_METHODS),
   missingLogs: fc.constantFrom<TeamLoadSettings["missingLogs"]>("estimate", "exclude"),
-  packed: fc.boolean(),
 });
 
 describe("load ledger", () => {
@@ -64,8 +62,7 @@ describe("load ledger", () => {
           acwrMethod: c.method,
           missingLogs: c.missingLogs,
         };
-        const packed = c.packed ? packSessions(a.sessions, a.logs) : undefined;
-        const rows = buildLedger({ sessions: a.sessions, logs: a.logs, profile: a.profile, settings, packed });
+        const rows = buildLedger({ sessions: a.sessions, logs: a.logs, profile: a.profile, settings });
         const fromDay = dayIndex(START) + c.from;
         const toDay = fromDay + c.span;
         const todayDay = dayIndex(today);

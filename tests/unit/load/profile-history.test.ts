@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { addDays, dayIndex } from "@/lib/dates/plain-date";
 import { computeAthleteColumns } from "@/lib/load/athlete-load";
-import { packSessions } from "@/lib/load/packed";
+import { ledgerDayValues } from "@/lib/load/ledger";
 import { alignLogs } from "@/lib/load/series";
 import { sessionMetrics } from "@/lib/load/session-metrics";
 import { DEFAULT_TEAM_LOAD_SETTINGS, METRICS, type AthleteProfile } from "@/lib/load/types";
@@ -35,7 +35,7 @@ describe("speed profile in force by date", () => {
     expect(changed).toBeGreaterThan(0);
   });
 
-  it("daily columns: days before the test equal the old profile's, later days the new one's, on both engine paths", () => {
+  it("daily columns: days before the test equal the old profile's, later days the new one's, engine and ledger", () => {
     const req = {
       settings,
       sessions: a.sessions,
@@ -45,19 +45,24 @@ describe("speed profile in force by date", () => {
       fromDay: dayIndex(START),
       toDay: dayIndex(START) + DAYS - 1,
     };
-    const packed = packSessions(a.sessions, a.logs);
     const mixed = computeAthleteColumns({ ...req, profile: withHistory });
-    const mixedPacked = computeAthleteColumns({ ...req, profile: withHistory, packed });
     const old = computeAthleteColumns({ ...req, profile: before });
     const fresh = computeAthleteColumns({ ...req, profile: after });
     const cut = dayIndex(TEST_DAY) - mixed.startDay;
     for (const m of METRICS) {
       const v = Array.from(mixed.values[m]);
-      expect(Array.from(mixedPacked.values[m])).toEqual(v);
       expect(v.slice(0, cut)).toEqual(Array.from(old.values[m]).slice(0, cut));
       expect(v.slice(cut)).toEqual(Array.from(fresh.values[m]).slice(cut));
     }
     expect(Array.from(mixed.values.hsrM).slice(cut)).not.toEqual(Array.from(old.values.hsrM).slice(cut));
+    // The ledger's day values (the one path every whole-history reader now takes) switch on the same day.
+    const day = (profile: AthleteProfile) =>
+      ledgerDayValues({ sessions: a.sessions, logs: a.logs, profile, settings }, req.fromDay, req.toDay);
+    const [ledgerMixed, ledgerOld, ledgerFresh] = [day(withHistory), day(before), day(after)];
+    const at = dayIndex(TEST_DAY) - req.fromDay;
+    expect(ledgerMixed.slice(0, at)).toEqual(ledgerOld.slice(0, at));
+    expect(ledgerMixed.slice(at)).toEqual(ledgerFresh.slice(at));
+    expect(ledgerMixed.slice(at)).not.toEqual(ledgerOld.slice(at));
   });
 
   it("without earlier profiles nothing changes (the current profile applies on every day)", () => {
