@@ -1,4 +1,11 @@
-import { ACWR_MIN_HISTORY_DAYS, acwrFromFirstDay, allocAcwrColumns, CHRONIC_DAYS, markProvisional } from "./acwr";
+import {
+  ACUTE_DAYS,
+  ACWR_MIN_HISTORY_DAYS,
+  acwrFromFirstDay,
+  allocAcwrColumns,
+  CHRONIC_DAYS,
+  markProvisional,
+} from "./acwr";
 import { computeAthleteColumns } from "./athlete-load";
 import { resolveProfile } from "./accumulate";
 import { dateFromDayIndex, dayIndex } from "@/lib/dates/plain-date";
@@ -42,24 +49,37 @@ export interface WeekPreviewInput {
   seed?: PreviewSeed | null;
 }
 
-/** Series state of the team metric at the end of each day before the week, oldest first, ending weekStart − 1 (≤ 28). */
+/**
+ * The team metric's series state before the week, as the week's seven days step it (ledger.ts stepLedger): the
+ * state at the end of the day before the week, and the prefix sums and kept-day counts of the days 7 and 28
+ * before each day of the week (weekStart − 7 … − 1 and weekStart − 28 … − 22), which the rolling means read.
+ * Days before the athlete's first day on record are 0. About thirty numbers per athlete, whatever the history.
+ */
 export interface PreviewSeed {
-  onRecord: number[];
-  kept: number[];
-  cum: number[];
-  acute: number[];
-  chronic: number[];
+  onRecord: number;
+  acute: number;
+  chronic: number;
+  /** weekStart − 7 + i, i = 0 … 6 (the last is the day before the week). */
+  cum7: number[];
+  kept7: number[];
+  /** weekStart − 28 + i, i = 0 … 6. */
+  cum28: number[];
+  kept28: number[];
 }
 
-/** The seed of a ledger window's days before the week, for the team metric (index k in METRICS). */
+/** The seed from a ledger window's states of the days before the week (oldest first, ending weekStart − 1). */
 export function previewSeedFrom(states: readonly LedgerState[], k: number): PreviewSeed {
-  const last = states.slice(-CHRONIC_DAYS);
+  const at = (back: number) => states[states.length - back];
+  const last = at(1);
+  const days = (from: number) => Array.from({ length: 7 }, (_, i) => at(from - i));
   return {
-    onRecord: last.map((s) => s.onRecord),
-    kept: last.map((s) => s.kept),
-    cum: last.map((s) => s.cum[k]),
-    acute: last.map((s) => s.acute[k]),
-    chronic: last.map((s) => s.chronic[k]),
+    onRecord: last?.onRecord ?? 0,
+    acute: last?.acute[k] ?? 0,
+    chronic: last?.chronic[k] ?? 0,
+    cum7: days(ACUTE_DAYS).map((x) => x?.cum[k] ?? 0),
+    kept7: days(ACUTE_DAYS).map((x) => x?.kept ?? 0),
+    cum28: days(CHRONIC_DAYS).map((x) => x?.cum[k] ?? 0),
+    kept28: days(CHRONIC_DAYS).map((x) => x?.kept ?? 0),
   };
 }
 
@@ -73,14 +93,24 @@ function seededRatios(
   out: { ratio: Float64Array; provisional: Uint8Array; offset: number },
 ): void {
   const expand = (x: number) => METRICS.map((_, j) => (j === k ? x : 0));
-  const states: LedgerState[] = seed.onRecord.map((onRecord, i) => ({
+  // The 28 states before the week, as stepLedger reads them: back 1 (the day before), back 7 and back 28 of
+  // each week day. The days in between are never read; the same state before the first day on record is 0.
+  const state = (cum: number, kept: number, onRecord = 0, acute = 0, chronic = 0): LedgerState => ({
     onRecord,
-    kept: seed.kept[i],
-    cum: expand(seed.cum[i]),
-    acute: expand(seed.acute[i]),
-    chronic: expand(seed.chronic[i]),
+    kept,
+    cum: expand(cum),
+    acute: expand(acute),
+    chronic: expand(chronic),
     ratio: expand(Number.NaN),
-  }));
+  });
+  const states: LedgerState[] = Array.from({ length: CHRONIC_DAYS }, (_, i) => {
+    if (i < 7) return state(seed.cum28[i], seed.kept28[i]);
+    if (i < CHRONIC_DAYS - ACUTE_DAYS) return state(0, 0);
+    const j = i - (CHRONIC_DAYS - ACUTE_DAYS);
+    return j === 6
+      ? state(seed.cum7[j], seed.kept7[j], seed.onRecord, seed.acute, seed.chronic)
+      : state(seed.cum7[j], seed.kept7[j]);
+  });
   const days = Array.from({ length: 7 }, (_, i) => i);
   const stepped = runLedger(
     states,
