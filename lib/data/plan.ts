@@ -12,6 +12,19 @@ import { loadSessions } from "./plan-rows";
 import { listRestrictions } from "./restrictions";
 import { listTemplates } from "./templates";
 
+/**
+ * Whether the /plan page should carry the week in its HTML: the grid's markup plus the same week again as the
+ * page's RSC payload grow by about 25 KB per athlete (1.5 MB for 60), so a large squad's page sends the frame and
+ * the browser reads the week as JSON (the planner's own request), which is about a third of that.
+ */
+export const SEED_MAX_ATHLETES = 20;
+
+export async function seedsPlanWeek({ teamId, scope }: { teamId: number; scope: PlanAudience["scope"] }) {
+  if (scope === "own") return true;
+  const { Athlete } = await db();
+  return (await Athlete.count({ where: { teamId } })) <= SEED_MAX_ATHLETES;
+}
+
 /** Who is looking: staff see the squad; an athlete ("own" scope) sees only their row and nothing in draft. */
 export type PlanAudience = { canEdit: boolean; ownAthleteId: number | null; scope: "team" | "own" };
 

@@ -3,7 +3,8 @@ import { Planner } from "@/components/planner/planner";
 import { pageViewer } from "@/lib/auth/page-access";
 import { scopeOf } from "@/lib/auth/permissions";
 import { teamToday } from "@/lib/dates/zoned";
-import { getPlanWeek } from "@/lib/data/plan";
+import { getPlanWeek, seedsPlanWeek } from "@/lib/data/plan";
+import { startOfWeek } from "@/lib/dates/plain-date";
 import { weekQuerySchema } from "@/lib/validations/plan";
 
 export const metadata = { title: "Week plan" };
@@ -25,11 +26,16 @@ export default async function PlanPage({
   }
   const query = weekQuerySchema.safeParse({ week: (await searchParams).week });
   const today = teamToday({ timeZone: viewer.timeZone, now: new Date() });
-  const initial = await getPlanWeek({
-    teamId: viewer.teamId,
-    date: (query.success && query.data.week) || today,
-    today,
-    audience: { scope, canEdit: scopeOf(viewer.role, "plan:edit") === "team", ownAthleteId: viewer.athleteId },
-  });
-  return <Planner teamId={viewer.teamId} initialWeek={initial.weekStart} initial={initial} />;
+  const date = (query.success && query.data.week) || today;
+  // A large squad's week comes as JSON after the frame (seedsPlanWeek): the page stays small and quick.
+  const initial = (await seedsPlanWeek({ teamId: viewer.teamId, scope }))
+    ? await getPlanWeek({
+        teamId: viewer.teamId,
+        date,
+        today,
+        audience: { scope, canEdit: scopeOf(viewer.role, "plan:edit") === "team", ownAthleteId: viewer.athleteId },
+      })
+    : null;
+  const initialWeek = initial?.weekStart ?? startOfWeek(date, viewer.weekStartDay);
+  return <Planner teamId={viewer.teamId} initialWeek={initialWeek} initial={initial} />;
 }
