@@ -54,16 +54,25 @@ export async function rebuildLedger({
         replacements: { teamId },
         transaction,
       });
-      // One athlete at a time: a team's whole history at once is mostly garbage-collector work.
-      for (const { id } of ids) {
-        const inputs = await getLoadSeriesInputs({
-          sequelize,
-          teamId,
-          athleteIds: [id],
-          through: "9999-12-31",
-          transaction,
-          profileHistory,
-        });
+      // One athlete at a time: a team's whole history at once is mostly garbage-collector work. The next
+      // athlete's history is read on the reading connection while this one's rows are computed and written (the
+      // team's write turn is held, so nothing it reads can change in between), which keeps a second core busy.
+      const read = (id: number) =>
+        getLoadSeriesInputs({ sequelize, teamId, athleteIds: [id], through: "9999-12-31", profileHistory });
+      let next = ids.length > 0 ? read(ids[0].id) : null;
+      try {
+        for (let i = 0; i < ids.length; i++) {
+          const id = ids[i].id;
+          const inputs = await next!;
+          next = i + 1 < ids.length ? read(ids[i + 1].id) : null;
+          rows += await rebuildOne(inputs, id);
+          show(++done);
+        }
+      } finally {
+        // A write that failed leaves the read ahead unawaited.
+        void next?.catch(() => undefined);
+      }
+      async function rebuildOne(inputs: Awaited<ReturnType<typeof read>>, id: number): Promise<number> {
         const a = inputs.athletes[0];
         const ledger = a
           ? buildLedger({
@@ -74,8 +83,7 @@ export async function rebuildLedger({
             })
           : [];
         await writeLedgerRows({ sequelize, transaction, athleteId: id, keepFrom: 0, from: -1e9, rows: ledger });
-        rows += ledger.length;
-        show(++done);
+        return ledger.length;
       }
       await sequelize.query(
         "DELETE FROM load_ledger_dirty WHERE athlete_id IN (SELECT id FROM athletes WHERE team_id = :teamId)",
