@@ -1,4 +1,6 @@
+import { Badge } from "@/components/ui/badge";
 import { Card } from "@/components/ui/card";
+import { AcceptResultButton } from "@/components/speed/accept-button";
 import { TraceChart } from "@/components/speed/trace-chart";
 import type { MeasuredSession, SpeedTestView } from "@/lib/data/speed-views";
 import type { TeamLoadSettings } from "@/lib/load/types";
@@ -6,6 +8,13 @@ import type { ContactRowsAnalysis, ForceTraceAnalysis } from "@/lib/speed/contac
 import { TRACE_SMOOTHING_S, type SpeedTraceAnalysis } from "@/lib/speed/speed-trace";
 
 // The speed lab's traces and contact files on an athlete's page (lib/speed/README.md §8, §9).
+
+/** "In use" when accepted; the accept button for coaches (`teamId` given) when there is something to accept. */
+function AcceptSlot({ test, teamId, can }: { test: SpeedTestView; teamId: number | null; can: boolean }) {
+  if (test.accepted) return <Badge tone="steady">In use from {test.testDate}</Badge>;
+  if (teamId === null || !can) return null;
+  return <AcceptResultButton teamId={teamId} testId={test.id} testDate={test.testDate} />;
+}
 
 const f = (v: number | null | undefined, digits: number, unit = "") =>
   v === null || v === undefined || !Number.isFinite(v) ? "–" : `${v.toFixed(digits)}${unit}`;
@@ -15,9 +24,12 @@ export function TraceTests({
   tests,
   measured,
   settings,
+  teamId,
 }: {
   tests: SpeedTestView[];
   measured: MeasuredSession[];
+  /** Given when the viewer may accept results. */
+  teamId: number | null;
   settings: Pick<TeamLoadSettings, "hsrSpeedMs" | "hsrPct" | "nearMaxPct" | "speedZones">;
 }) {
   if (tests.length === 0) return <p className="text-sm text-ink-700">No speed traces yet.</p>;
@@ -31,7 +43,10 @@ export function TraceTests({
           settings.speedZones === "relative" ? (r.bandVmaxMs * settings.hsrPct) / 100 : settings.hsrSpeedMs;
         return (
           <Card key={t.id} id={`test-${t.id}`} className="p-4" data-testid={`trace-${t.id}`}>
-            <h3 className="font-semibold text-ink-900">Speed trace · {t.testDate}</h3>
+            <div className="flex flex-wrap items-center justify-between gap-2">
+              <h3 className="font-semibold text-ink-900">Speed trace · {t.testDate}</h3>
+              <AcceptSlot test={t} teamId={teamId} can={r.fit !== null} />
+            </div>
             <p className="mt-1 text-sm text-ink-800 tabular-nums" data-testid={`trace-summary-${t.id}`}>
               vmax {f(r.vmaxMs, 2, " m/s")} ({TRACE_SMOOTHING_S} s average; highest sample {f(r.rawPeakMs, 2, " m/s")})
               · τ {r.fit ? f(r.fit.tau, 2, " s") : "no fit"} · {f(r.distanceM, 0, " m")} in all · HSR{" "}
@@ -96,12 +111,16 @@ export function TraceTests({
 }
 
 /** Force traces and contact-mat files: each contact and the mean, and step time ÷ contact time beside it. */
-export function ContactTests({ tests }: { tests: SpeedTestView[] }) {
+export function ContactTests({ tests, teamId }: { tests: SpeedTestView[]; teamId: number | null }) {
   if (tests.length === 0) return <p className="text-sm text-ink-700">No force traces or contact files yet.</p>;
   return (
     <div className="space-y-4">
       {tests.map((t) =>
-        t.kind === "force" ? <ForceCard key={t.id} test={t} /> : <ContactRowsCard key={t.id} test={t} />,
+        t.kind === "force" ? (
+          <ForceCard key={t.id} test={t} teamId={teamId} />
+        ) : (
+          <ContactRowsCard key={t.id} test={t} teamId={teamId} />
+        ),
       )}
     </div>
   );
@@ -110,13 +129,16 @@ export function ContactTests({ tests }: { tests: SpeedTestView[] }) {
 const th = "py-1 pr-3 text-left text-xs font-medium text-ink-500 whitespace-nowrap";
 const td = "py-1 pr-3 whitespace-nowrap";
 
-function ForceCard({ test }: { test: SpeedTestView }) {
+function ForceCard({ test, teamId }: { test: SpeedTestView; teamId: number | null }) {
   const r = test.result as ForceTraceAnalysis;
   return (
     <Card id={`test-${test.id}`} className="p-4" data-testid={`force-${test.id}`}>
-      <h3 className="font-semibold text-ink-900">
-        Force trace · {test.testDate} · {r.mode === "jump" ? "jump" : `${r.contacts.length} contacts`}
-      </h3>
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <h3 className="font-semibold text-ink-900">
+          Force trace · {test.testDate} · {r.mode === "jump" ? "jump" : `${r.contacts.length} contacts`}
+        </h3>
+        <AcceptSlot test={test} teamId={teamId} can={r.mode === "contacts" && r.means.contactTimeS !== null} />
+      </div>
       <p className="text-xs text-ink-500">
         {f(r.samplingHz, 0, " Hz")}, body mass {f(r.bodyMassKg, 1, " kg")}, contact above {r.thresholdN} N.
       </p>
@@ -187,14 +209,17 @@ function ForceCard({ test }: { test: SpeedTestView }) {
   );
 }
 
-function ContactRowsCard({ test }: { test: SpeedTestView }) {
+function ContactRowsCard({ test, teamId }: { test: SpeedTestView; teamId: number | null }) {
   const r = test.result as ContactRowsAnalysis | null;
   if (!r) return null;
   return (
     <Card id={`test-${test.id}`} className="p-4" data-testid={`contacts-${test.id}`}>
-      <h3 className="font-semibold text-ink-900">
-        Contact measurements · {test.testDate} · {r.rows.length} contacts
-      </h3>
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <h3 className="font-semibold text-ink-900">
+          Contact measurements · {test.testDate} · {r.rows.length} contacts
+        </h3>
+        <AcceptSlot test={test} teamId={teamId} can />
+      </div>
       <p className="mt-1 text-sm text-ink-800 tabular-nums" data-testid={`contacts-means-${test.id}`}>
         Mean: contact {f(r.means.contactTimeS, 3, " s")} · flight {f(r.means.flightTimeS, 3, " s")} · step frequency{" "}
         {f(r.means.stepFrequencyHz, 2, " Hz")} · step length {f(r.means.stepLengthM, 2, " m")} · mean stance force (step

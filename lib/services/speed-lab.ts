@@ -12,12 +12,12 @@ import { getSpeedTest, insertSpeedTests, insertSpeedUpload } from "@/lib/data/sp
 import { inTeamTransaction } from "@/lib/data/transaction";
 import { AppError } from "@/lib/errors";
 import {
+  measuredProfileValues,
   mergeProfile,
   PROFILE_VALUE_KEYS,
-  timingProfileValues,
   type SpeedProfileValues,
 } from "@/lib/speed/profile-values";
-import { analyseTimingTrial, type TimingTrialAnalysis } from "@/lib/speed/timing-trial";
+import { analyseTimingTrial } from "@/lib/speed/timing-trial";
 import type { TimingTrialInput } from "@/lib/validations/speed";
 
 // Accepting a speed test: the athlete's profile changes from the test's date on, earlier days keep the profile
@@ -81,14 +81,18 @@ export async function acceptSpeedTest({
 }): Promise<{ entryId: number; effectiveFrom: string; values: SpeedProfileValues }> {
   return inTeamTransaction(teamId, async (transaction) => {
     const test = await getSpeedTest({ teamId, testId, transaction });
-    const measured = test.kind === "timing" ? timingProfileValues(test.result as TimingTrialAnalysis) : null;
+    const measured = measuredProfileValues(test.kind, test.result);
     if (!measured)
       throw new AppError("invalid", "This test has no result to accept", { fields: { testId: ["No fitted result"] } });
     // The athlete form's bounds (lib/validations/athlete.ts): an accepted profile must stay editable there.
-    if (measured.vmaxMs! < 4 || measured.vmaxMs! > 13 || measured.tauS! < 0.4 || measured.tauS! > 3) {
-      throw new AppError("invalid", "The fitted vmax or τ is outside the accepted range (vmax 4–13 m/s, τ 0.4–3 s)", {
-        fields: { testId: ["Fitted values out of range"] },
-      });
+    const outside = (v: number | null | undefined, lo: number, hi: number) =>
+      typeof v === "number" && (v < lo || v > hi);
+    if (outside(measured.vmaxMs, 4, 13) || outside(measured.tauS, 0.4, 3) || outside(measured.stepLengthM, 1, 3.2)) {
+      throw new AppError(
+        "invalid",
+        "A measured value is outside the accepted range (vmax 4–13 m/s, τ 0.4–3 s, step length 1–3.2 m)",
+        { fields: { testId: ["Measured values out of range"] } },
+      );
     }
     const { athleteId, testDate } = test;
     let entries = await listProfileEntries({ teamId, athleteId, transaction });

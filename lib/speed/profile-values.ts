@@ -1,3 +1,6 @@
+import type { SpeedTestKind } from "@/lib/domain/speed";
+import type { ContactRowsAnalysis, ForceTraceAnalysis } from "./contact-analysis";
+import type { SpeedTraceAnalysis } from "./speed-trace";
 import type { TimingTrialAnalysis } from "./timing-trial";
 
 // What an accepted test puts into the athlete's speed profile (lib/speed/README.md §4). A value the test did not
@@ -32,6 +35,36 @@ export function timingProfileValues(result: TimingTrialAnalysis): Partial<SpeedP
     vmaxMs: result.fit.vmax,
     tauS: result.fit.tau,
     ...(result.profile ? { f0N: result.profile.f0N, pmaxW: result.profile.pmaxW } : {}),
+  };
+}
+
+/**
+ * The profile values any kind of test measured (lib/speed/README.md §4, §9); null when it has nothing to accept.
+ * A speed trace gives its smoothed vmax and fitted τ; contact files and running force traces the step
+ * frequency, contact time and mean stance force (and a mat's step length); a jump gives none of these.
+ */
+export function measuredProfileValues(kind: SpeedTestKind, result: unknown): Partial<SpeedProfileValues> | null {
+  if (kind === "timing") return timingProfileValues(result as TimingTrialAnalysis);
+  if (kind === "trace") {
+    const r = result as SpeedTraceAnalysis;
+    return r.fit ? { vmaxMs: r.vmaxMs, tauS: r.fit.tau } : null;
+  }
+  if (kind === "contacts") {
+    const r = result as ContactRowsAnalysis | null;
+    if (!r) return null;
+    return {
+      stepFrequencyHz: r.means.stepFrequencyHz,
+      contactTimeS: r.means.contactTimeS,
+      stanceForceBw: r.means.stanceForceBw,
+      ...(r.means.stepLengthM ? { stepLengthM: r.means.stepLengthM } : {}),
+    };
+  }
+  const r = result as ForceTraceAnalysis;
+  if (r.mode !== "contacts" || r.means.contactTimeS === null) return null;
+  return {
+    contactTimeS: r.means.contactTimeS,
+    ...(r.means.stepFrequencyHz ? { stepFrequencyHz: r.means.stepFrequencyHz } : {}),
+    ...(r.means.meanBw ? { stanceForceBw: r.means.meanBw } : {}),
   };
 }
 

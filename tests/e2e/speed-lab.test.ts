@@ -152,6 +152,9 @@ describeBrowser("speed lab", () => {
     await page.getByTestId("trace-chart").locator("svg").first().waitFor();
 
     await page.locator("#measure-kind").selectOption("contacts");
+    // Not the timing test's day (one profile entry a day): today, or yesterday when today starts the week.
+    const today = teamToday({ timeZone: "Europe/London", now: new Date() });
+    await page.locator("#measure-date").fill(today === startOfWeek(today, 1) ? addDays(today, -1) : today);
     const mat = "contact_time_s,flight_time_s,step_length_m\n0.086,0.145,2.3\n0.086,0.145,2.3\n";
     await page.setInputFiles("#measure-file", { name: "mat.csv", mimeType: "text/csv", buffer: Buffer.from(mat) });
     await page.getByTestId("measure-send").click();
@@ -160,6 +163,10 @@ describeBrowser("speed lab", () => {
     // lib/speed/README.md B1/B2: 4.329 Hz and 2.686 BW.
     expect(await means.innerText()).toContain("4.33 Hz");
     expect(await means.innerText()).toContain("2.69 × BW");
+    // Accepted, the contact rows become the profile's step frequency and stance force from their date on.
+    await page.locator('[data-testid^="contacts-"] [data-testid^="accept-"]').first().click();
+    await page.getByTestId("current-stepFrequencyHz").filter({ hasText: "4.33 Hz" }).waitFor();
+    expect(await page.getByTestId("current-stanceForceBw").innerText()).toBe("2.69 × BW");
     expect(await seriousAxeViolations(page)).toEqual([]);
     await noSidewaysScroll(page);
     await screenshot(page, "speed-traces-and-contacts");

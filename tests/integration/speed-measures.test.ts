@@ -8,6 +8,7 @@ import { who } from "../helpers/handler-session";
 
 const d = await setupTestDb();
 const upload = await import("@/app/api/teams/[teamId]/speed/measure-uploads/route");
+const accept = await import("@/app/api/teams/[teamId]/speed/tests/[testId]/accept/route");
 const { getAthleteSpeed } = await import("@/lib/data/speed-views");
 
 const a = await createTestTeam(d, { name: "Alpha Track" });
@@ -219,6 +220,48 @@ describe("force traces and contact measurements", () => {
     expect(r.means.stanceForceBw).toBeCloseTo(2.686, 3);
     expect(r.means.stepLengthM).toBe(2.3);
     expect(r.rows[1].stanceForceBw).toBeCloseTo(2.686, 3);
+  });
+
+  it("accepting results: contact rows set step frequency, contact time, stance force and step length from their date on", async () => {
+    who.userId = coach.userId;
+    const acceptTest = (testId: number) =>
+      accept.POST(new Request("http://localhost/x", { method: "POST" }), {
+        params: Promise.resolve({ teamId: String(a.teamId), testId: String(testId) }),
+      });
+    const mat = csv("contact_time_s,flight_time_s,step_length_m", [[0.086, 0.145, 2.3]]);
+    const up = await post(a.teamId, {
+      kind: "contacts",
+      fileName: "m.csv",
+      content: mat,
+      athleteId: ben,
+      testDate: DAY,
+    });
+    const { testId } = (await up.json()) as { testId: number };
+    const res = await acceptTest(testId);
+    expect(res.status).toBe(200);
+    const { values } = (await res.json()) as { values: Record<string, number | null> };
+    // B1/B2 (lib/speed/README.md §7); vmax and τ carry on from the hand-typed profile (9.5 m/s, 1.15 s).
+    expect(values.stepFrequencyHz).toBeCloseTo(4.329, 3);
+    expect(values.contactTimeS).toBeCloseTo(0.086, 12);
+    expect(values.stanceForceBw).toBeCloseTo(2.686, 3);
+    expect(values.stepLengthM).toBe(2.3);
+    expect([values.vmaxMs, values.tauS]).toEqual([9.5, 1.15]);
+    expect((await d.Athlete.findByPk(ben, { raw: true }))!.stepLengthM).toBe(2.3);
+
+    // A speed trace gives its smoothed vmax and fitted τ; a jump has nothing to accept.
+    const tr = await post(a.teamId, {
+      kind: "trace",
+      fileName: "t.csv",
+      content: sprintTrace(20),
+      athleteId: ben,
+      testDate: "2026-11-20",
+    });
+    const trace = (await tr.json()) as { testId: number };
+    const taken = (await (await acceptTest(trace.testId)).json()) as { values: Record<string, number | null> };
+    const stored = JSON.parse((await d.SpeedTest.findByPk(trace.testId, { raw: true }))!.result);
+    expect(taken.values.vmaxMs).toBe(stored.vmaxMs);
+    expect(taken.values.tauS).toBe(stored.fit.tau);
+    expect(taken.values.stepFrequencyHz).toBeCloseTo(4.329, 3); // carried on from the contact rows
   });
 
   it("who may upload: coaches of the team; a physio 403, another team's head coach 404", async () => {

@@ -179,9 +179,17 @@ export default async function SpeedProfilePage({ params }: { params: Promise<{ a
         </Card>
       ) : null}
       <h2 className="mt-6 mb-2 text-lg font-semibold text-ink-900">Speed traces</h2>
-      <TraceTests tests={allTests.filter((t) => t.kind === "trace")} measured={measured} settings={settings} />
+      <TraceTests
+        tests={allTests.filter((t) => t.kind === "trace")}
+        measured={measured}
+        settings={settings}
+        teamId={canEdit ? viewer.teamId : null}
+      />
       <h2 className="mt-6 mb-2 text-lg font-semibold text-ink-900">Contacts and force</h2>
-      <ContactTests tests={allTests.filter((t) => t.kind === "force" || t.kind === "contacts")} />
+      <ContactTests
+        tests={allTests.filter((t) => t.kind === "force" || t.kind === "contacts")}
+        teamId={canEdit ? viewer.teamId : null}
+      />
     </>
   );
 }
