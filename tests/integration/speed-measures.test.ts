@@ -206,6 +206,37 @@ describe("force traces and contact measurements", () => {
     expect(r.means.impliedStanceBw).toBeGreaterThan(2.1);
   });
 
+  it("a jump from quiet standing: take-off velocity and height by impulse–momentum and by flight time (B6)", async () => {
+    who.userId = coach.userId;
+    // B6 (lib/speed/README.md §7): 75 kg, 1500 N for 0.25 s from standing → 2.5475 m/s, 0.330772 m; the flight
+    // that velocity gives, 2v/g = 0.519368 s, lands at the same height.
+    const mass = 75;
+    const bw = mass * 9.81;
+    const flight = (2 * 2.5475) / 9.81;
+    const rows: number[][] = [];
+    for (let i = 0; i <= 2000; i++) {
+      const t = i / 1000;
+      const f = t <= 0.5 ? bw : t <= 0.75 ? 1500 : t < 0.75 + flight ? 0 : bw;
+      rows.push([Number(t.toFixed(3)), Number(f.toFixed(3))]);
+    }
+    const res = await post(a.teamId, {
+      kind: "force",
+      fileName: "jump.csv",
+      content: csv("time_s,force_n", rows),
+      athleteId: ada,
+      testDate: DAY,
+      bodyMassKg: mass,
+    });
+    expect(res.status).toBe(201);
+    const { testId } = (await res.json()) as { testId: number };
+    const r = JSON.parse((await d.SpeedTest.findByPk(testId, { raw: true }))!.result);
+    expect(r.mode).toBe("jump");
+    // One 1 ms sample at each edge moves the figures by well under a percent.
+    expect(r.jump.takeOffVelocityMs).toBeCloseTo(2.5475, 2);
+    expect(r.jump.heightByImpulseM).toBeCloseTo(0.330772, 2);
+    expect(r.jump.heightByFlightTimeM).toBeCloseTo(0.330772, 2);
+  });
+
   it("contact-mat rows: per contact and mean; 0.086 s contact and 0.145 s flight give 4.329 Hz and 2.686 BW (B1/B2)", async () => {
     who.userId = coach.userId;
     const content = csv("contact_time_s,flight_time_s,step_length_m", [
