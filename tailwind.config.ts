@@ -80,6 +80,11 @@ const config = {
           strength: { DEFAULT: "#3f3a36", soft: "#ebe8e5" },
           recovery: { DEFAULT: "#6b6256", soft: "#efece7" },
         },
+        // A physio restriction (a card past one, an athlete's chip, the hits before a drop): always a dashed border,
+        // the ⚕ mark and words.
+        limit: { DEFAULT: "#7a2e5c", soft: "#f7e8f1" },
+        // Forms: a refused field or save (with role="alert" and words) and a save that went through.
+        form: { error: "#a31b3c", "error-soft": "#fbe7ec", ok: "#24663f", "ok-soft": "#e6f3ea" },
         // A session's state: published is a filled ink dot, draft a hollow ring (plus the word, never colour alone).
         state: { published: "#2b384b", draft: "#59697f" },
       },

@@ -34,7 +34,7 @@ export function ForgotPasswordForm() {
   return (
     <form onSubmit={onSubmit} noValidate className="mt-6 space-y-4">
       {error ? (
-        <p role="alert" className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">
+        <p role="alert" className="rounded-lg bg-form-error-soft px-3 py-2 text-sm text-form-error">
           {error}
         </p>
       ) : null}

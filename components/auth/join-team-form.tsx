@@ -22,7 +22,7 @@ export function JoinTeamForm({ token, teamName }: { token: string; teamName: str
   return (
     <div className="mt-6 space-y-3">
       {error ? (
-        <p role="alert" className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">
+        <p role="alert" className="rounded-lg bg-form-error-soft px-3 py-2 text-sm text-form-error">
           {error}
         </p>
       ) : null}

@@ -45,7 +45,7 @@ export function SignInForm({
         <p
           role="alert"
           data-testid="sign-in-error"
-          className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike"
+          className="rounded-lg bg-form-error-soft px-3 py-2 text-sm text-form-error"
         >
           {error}
         </p>

@@ -78,8 +78,8 @@ export function AddMemberForm({ unlinkedAthletes }: { unlinkedAthletes: { id: nu
           data-testid="add-member-message"
           className={
             message.tone === "error"
-              ? "rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike"
-              : "rounded-lg bg-lane-50 px-3 py-2 text-sm text-lane-800"
+              ? "rounded-lg bg-form-error-soft px-3 py-2 text-sm text-form-error"
+              : "rounded-lg bg-form-ok-soft px-3 py-2 text-sm text-form-ok"
           }
         >
           <p>{message.text}</p>

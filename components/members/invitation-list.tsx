@@ -21,7 +21,7 @@ export function InvitationList({ invitations }: { invitations: Invitation[] }) {
         They get no alerts, digests or team data until they accept. Add the address again to send a fresh link.
       </p>
       {error ? (
-        <p role="alert" className="mx-4 mt-2 rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">
+        <p role="alert" className="mx-4 mt-2 rounded-lg bg-form-error-soft px-3 py-2 text-sm text-form-error">
           {error}
         </p>
       ) : null}

@@ -23,7 +23,7 @@ export function MemberList({ members, viewerUserId }: { members: Member[]; viewe
   return (
     <Card className="overflow-hidden">
       {error ? (
-        <p role="alert" className="border-b border-ink-100 bg-flag-spike-soft px-4 py-2 text-sm text-flag-spike">
+        <p role="alert" className="border-b border-ink-100 bg-form-error-soft px-4 py-2 text-sm text-form-error">
           {error}
         </p>
       ) : null}

@@ -86,8 +86,8 @@ export const RestrictionChip = memo(function RestrictionChip({
       data-testid="row-restriction"
       title={limitsText}
       className={clsx(
-        "mt-0.5 inline-flex max-w-full items-center gap-1 rounded-full border border-dashed border-flag-climb",
-        "bg-flag-climb-soft px-1.5 py-px text-2xs font-medium text-ink-900",
+        "mt-0.5 inline-flex max-w-full items-center gap-1 rounded-full border border-dashed border-limit",
+        "bg-limit-soft px-1.5 py-px text-2xs font-medium text-limit",
       )}
     >
       <span aria-hidden>⚕</span>

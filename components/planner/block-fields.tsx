@@ -82,7 +82,7 @@ function Drills({ prefix }: { prefix: string }) {
     <fieldset className="space-y-2">
       <legend className="text-sm font-medium text-ink-800">Drills</legend>
       {listError ? (
-        <p className="text-xs font-medium text-flag-spike" role="alert">
+        <p className="text-xs font-medium text-form-error" role="alert">
           {listError}
         </p>
       ) : null}
@@ -167,7 +167,7 @@ export function BlockFields({ prefix = "" }: { prefix?: string }) {
         <fieldset className="grid grid-cols-2 gap-2 sm:grid-cols-4">
           <legend className="col-span-full mb-1 text-sm font-medium text-ink-800">Runs</legend>
           {err("running") ? (
-            <p className="col-span-full text-xs font-medium text-flag-spike" role="alert">
+            <p className="col-span-full text-xs font-medium text-form-error" role="alert">
               {err("running")}
             </p>
           ) : null}

@@ -68,7 +68,7 @@ function PreviewCard({
                   <li
                     key={`${h.restrictionId}:${h.date}`}
                     data-testid="drop-restriction"
-                    className="rounded-md border border-flag-climb/30 bg-flag-climb-soft px-2 py-1 text-xs text-ink-800"
+                    className="rounded-md border border-dashed border-limit bg-limit-soft px-2 py-1 text-xs text-ink-800"
                   >
                     <span className="font-semibold">{name(h.athleteId)} · Physio restriction:</span> {h.rule}.{" "}
                     {h.detail}.

@@ -64,7 +64,7 @@ function OverrideForm({ request, onDone }: { request: OverrideRequest; onDone: (
           <li
             key={`${h.restrictionId}:${h.date}`}
             data-testid="override-hit"
-            className="rounded-md border border-flag-climb/30 bg-flag-climb-soft px-3 py-2 text-sm"
+            className="rounded-md border border-dashed border-limit bg-limit-soft px-3 py-2 text-sm"
           >
             <span className="font-semibold text-ink-900">
               {request.athleteName(h.athleteId)} · {formatDayShort(h.date)}

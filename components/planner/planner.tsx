@@ -306,7 +306,7 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
       />
       {active ? null : <NoticeToast notice={act.notice} />}
       {error && !shown ? (
-        <p className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">
+        <p className="rounded-lg bg-form-error-soft px-3 py-2 text-sm text-form-error">
           The plan could not be loaded: {error instanceof Error ? error.message : "unknown error"}.
         </p>
       ) : null}

@@ -4,14 +4,14 @@ import { useDraggable } from "@dnd-kit/core";
 import { clsx } from "clsx";
 import { memo } from "react";
 import type { Flag } from "@/lib/load/flags";
-import { FLAG_DISPLAY, flagClasses } from "@/lib/load/flag-display";
 import { BLOCK_KIND_LABEL, blockSummary, mainBlockKind } from "@/lib/format/block-summary";
 import { formatDayShort } from "@/lib/format/dates";
 import { toBlockInput } from "@/lib/plan/blocks";
 import type { PlanSession } from "@/lib/plan/types";
 import { CardMenu } from "./card-menu";
 import { dragId, type DragData } from "./dnd";
-import { KIND_STYLE } from "@/components/ui/kind-style";
+import { FlagMark } from "@/components/ui/flag-mark";
+import { KindMark } from "@/components/ui/kind-mark";
 
 const STATUS_WORD = { draft: "Draft", published: "Published", cancelled: "Cancelled" } as const;
 
@@ -21,10 +21,9 @@ export function sessionLabel(s: PlanSession, athleteName: string): string {
   return `${what} for ${athleteName}, ${formatDayShort(s.date)} ${s.startTime}, ${STATUS_WORD[s.status].toLowerCase()}`;
 }
 
-/** What a card's visible text leaves to the eye: whose it is, which day, its kind. */
+/** What a card's visible text leaves to the eye: whose it is, which day (each block's kind is in its KindMark). */
 function contextOf(s: PlanSession, athleteName: string): string {
-  const kind = mainBlockKind(s.blocks);
-  return `${kind ? `${BLOCK_KIND_LABEL[kind]} ` : ""}for ${athleteName || "the athlete"}, ${formatDayShort(s.date)}`;
+  return `for ${athleteName || "the athlete"}, ${formatDayShort(s.date)}`;
 }
 
 /** Published: a filled dot; draft: a hollow one (the card is also hatched); cancelled: a cross. */
@@ -97,7 +96,7 @@ export const SessionCard = memo(function SessionCard({
       className={clsx(
         "group relative flex flex-col overflow-hidden rounded-md bg-paper-raised text-left shadow-card transition-opacity",
         // A conflict with a physio restriction is a thick dashed border and a label, never colour alone.
-        restricted ? "border-2 border-dashed border-flag-climb" : "ring-1",
+        restricted ? "border-2 border-dashed border-limit" : "ring-1",
         s.status === "draft"
           ? "[background-image:repeating-linear-gradient(135deg,transparent_0_6px,rgba(154,169,189,0.08)_6px_12px)] ring-ink-200"
           : "ring-ink-100",
@@ -112,7 +111,7 @@ export const SessionCard = memo(function SessionCard({
         <span
           data-testid="card-restricted"
           title={restricted}
-          className="flex items-center gap-1 bg-flag-climb-soft px-1.5 py-0.5 text-2xs font-semibold text-ink-900"
+          className="flex items-center gap-1 bg-limit-soft px-1.5 py-0.5 text-2xs font-semibold text-limit"
         >
           <span aria-hidden>⚕</span> Past a physio limit
           <span className="sr-only">: {restricted}</span>
@@ -140,12 +139,13 @@ export const SessionCard = memo(function SessionCard({
   );
 });
 
-/** The whole prescription, every block, wrapped (never clipped), in ink dark enough for the track (≥ 4.5:1). */
+/**
+ * The whole prescription, every block, wrapped (never clipped), in ink dark enough for the track (≥ 4.5:1); each
+ * block starts with its kind's code tag (KindMark), so kinds differ by letters as well as colour.
+ */
 const CardBody = memo(function CardBody({ session: s }: { session: PlanSession }) {
-  const kind = mainBlockKind(s.blocks);
   return (
     <>
-      <span aria-hidden className={clsx("w-1 shrink-0", kind ? KIND_STYLE[kind].bar : "bg-ink-100")} />
       <span className="block min-w-0 flex-1 px-1.5 py-1">
         <span className="flex items-center gap-1 text-2xs text-ink-700">
           <span className="tabular-nums">{s.startTime}</span>
@@ -161,7 +161,7 @@ const CardBody = memo(function CardBody({ session: s }: { session: PlanSession }
         </span>
         {s.blocks.map((b) => (
           <span key={b.id} data-testid="card-block" className="mt-0.5 block text-xs leading-4 break-words text-ink-700">
-            {blockSummary(toBlockInput(b))}
+            <KindMark kind={b.kind} className="mr-1 align-top" /> {blockSummary(toBlockInput(b))}
           </span>
         ))}
       </span>
@@ -171,18 +171,11 @@ const CardBody = memo(function CardBody({ session: s }: { session: PlanSession }
 
 const CardFlags = memo(function CardFlags({ flags }: { flags: Flag[] }) {
   return (
-    <span className="absolute right-1 bottom-1 flex gap-0.5">
+    <span className="flex flex-wrap justify-end gap-1 px-1.5 pb-1">
       {flags.map((f) => (
-        <span
-          key={`${f.kind}${f.date}`}
-          title={f.reason}
-          data-testid="card-flag"
-          data-kind={f.kind}
-          className={clsx("h-2 w-2 rounded-full", flagClasses(f.kind).dot)}
-        >
-          <span className="sr-only">
-            {FLAG_DISPLAY[f.kind].label}: {f.reason}
-          </span>
+        // The flag's own shape and colour (FlagMark); the label and reason are read out and shown on hover.
+        <span key={`${f.kind}${f.date}`} data-testid="card-flag" data-kind={f.kind}>
+          <FlagMark kind={f.kind} label="sr-only" detail={f.reason} className="[&>svg]:h-3 [&>svg]:w-3" />
         </span>
       ))}
     </span>

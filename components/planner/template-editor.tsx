@@ -106,7 +106,7 @@ function TemplateForm({ template, onClose, onSave, onDelete, profile, settings }
         </div>
         <BlockLoadPreview profile={profile} settings={settings} />
         {failure ? (
-          <p role="alert" className="rounded-md bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">
+          <p role="alert" className="rounded-md bg-form-error-soft px-3 py-2 text-sm text-form-error">
             {failure}
           </p>
         ) : null}

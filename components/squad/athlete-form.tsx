@@ -113,7 +113,7 @@ export function AthleteForm({ athleteId, initial, groups }: Props) {
           <p
             role={message.tone === "error" ? "alert" : "status"}
             data-testid="athlete-form-message"
-            className={message.tone === "error" ? "text-sm text-flag-spike" : "text-sm text-lane-700"}
+            className={message.tone === "error" ? "text-sm text-form-error" : "text-sm text-form-ok"}
           >
             {message.text}
           </p>

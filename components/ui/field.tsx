@@ -9,7 +9,7 @@ import {
 
 export const inputClass =
   "block w-full rounded-lg border-0 bg-paper-raised px-3 py-2 text-sm text-ink-900 ring-1 ring-inset ring-ink-200 " +
-  "placeholder:text-ink-300 focus:ring-2 focus:ring-lane-500 aria-[invalid=true]:ring-flag-spike";
+  "placeholder:text-ink-300 focus:ring-2 focus:ring-lane-500 aria-[invalid=true]:ring-form-error";
 
 export function Field({
   label,
@@ -33,7 +33,7 @@ export function Field({
       </label>
       {children}
       {error ? (
-        <p id={`${htmlFor}-error`} role="alert" className="text-xs font-medium text-flag-spike">
+        <p id={`${htmlFor}-error`} role="alert" className="text-xs font-medium text-form-error">
           {error}
         </p>
       ) : hint ? (

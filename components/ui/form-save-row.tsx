@@ -17,10 +17,7 @@ export function FormSaveRow(props: {
         {props.saving ? "Saving…" : props.label}
       </Button>
       {props.message ? (
-        <p
-          role="status"
-          className={props.message.tone === "ok" ? "text-sm text-flag-steady" : "text-sm text-flag-spike"}
-        >
+        <p role="status" className={props.message.tone === "ok" ? "text-sm text-form-ok" : "text-sm text-form-error"}>
           {props.message.text}
         </p>
       ) : null}

@@ -320,5 +320,22 @@ describeBrowser("planner on touch screens, by keyboard and for screen readers", 
     await openPlan(page, app, thisWeek);
     await page.getByTestId("session-card").first().waitFor();
     expect(await seriousAxeViolations(page, { rules: ["label-content-name-mismatch"] })).toEqual([]);
+    // Never colour alone: every block on a card opens with its kind's code (KindMark), every flag is drawn as its
+    // shape (FlagMark), and a card past a physio limit has a dashed border and the words.
+    const blocks = await page.getByTestId("card-block").count();
+    expect(blocks).toBeGreaterThan(0);
+    expect(await page.locator('[data-testid="card-block"] [data-testid="kind-mark"]').count()).toBe(blocks);
+    const codes = await page
+      .locator('[data-testid="card-block"] [data-testid="kind-mark"] [aria-hidden]')
+      .allTextContents();
+    expect(codes.every((c) => /^[A-Z]{2,3}$/.test(c))).toBe(true);
+    const flags = await page.getByTestId("card-flag").count();
+    expect(await page.locator('[data-testid="card-flag"] svg[data-shape]').count()).toBe(flags);
+    const restricted = page.locator('[data-testid="session-card"][data-restricted="true"]');
+    for (const card of await restricted.all()) {
+      expect(await card.evaluate((el) => getComputedStyle(el).borderTopStyle)).toBe("dashed");
+      expect(await card.getByTestId("card-restricted").textContent()).toContain("Past a physio limit");
+    }
+    console.info(`week plan: ${blocks} blocks, ${flags} card flags, ${await restricted.count()} restricted cards`);
   }, 120_000);
 });

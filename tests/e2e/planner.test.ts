@@ -269,6 +269,12 @@ describeBrowser("planner journeys", () => {
     await cards(page, ruben, day(2)).first().waitFor();
     await settled(page);
     expect(await cards(page, ruben, day(2)).first().getByTestId("card-restricted").count()).toBe(1);
+    // Unmistakable, never colour alone: a thick dashed border and the words on the card.
+    const past = cards(page, ruben, day(2)).first();
+    expect(
+      await past.evaluate((el) => [getComputedStyle(el).borderTopStyle, getComputedStyle(el).borderTopWidth]),
+    ).toEqual(["dashed", "2px"]);
+    expect(await past.getByTestId("card-restricted").textContent()).toContain("Past a physio limit");
 
     // The medical staff see the override with its reason, and have an alert for it.
     const list = (await (await staff.fetch(`/api/athletes/${ruben}/restrictions`)).json()) as {

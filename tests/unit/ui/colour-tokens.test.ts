@@ -71,11 +71,26 @@ describe("colour tokens", () => {
       ...Object.values(kind).map((k) => k.DEFAULT),
       ...Object.values(FLAG_DISPLAY).map((d) => flag[d.colour]),
       colours.state.published,
+      colours.limit.DEFAULT,
+      colours.form.error,
+      colours.form.ok,
       colours.clay[600],
       colours.lane[500],
       colours.lane[700],
     ];
     expect(new Set(meanings).size).toBe(meanings.length);
+  });
+
+  it("the physio-restriction mark and the form messages read on their soft fills and on paper", () => {
+    const pairs = [
+      [colours.limit.DEFAULT, colours.limit.soft],
+      [colours.form.error, colours.form["error-soft"]],
+      [colours.form.ok, colours.form["ok-soft"]],
+    ];
+    for (const [text, fill] of pairs) {
+      expect(contrast(text, fill)).toBeGreaterThanOrEqual(AA_TEXT);
+      for (const paper of PAPERS) expect(contrast(text, paper)).toBeGreaterThanOrEqual(AA_TEXT);
+    }
   });
 
   it("primary (accent) buttons read at 4.5:1", () => {
