@@ -56,97 +56,108 @@ beforeEach(() => {
 });
 
 describe("one series for the demo club, whoever reads it", () => {
-  it("squad week, plan rows, drag preview, athlete page and alert evaluation agree to 1e-12 on every day of 10 weeks", async () => {
-    const zoneFlags: { athleteId: number; flag: Flag }[] = [];
-    for (const week of weeks) {
-      const squad = await body<{
-        rows: { id: number; dailyRatio: (number | null)[]; dailyProvisional: boolean[]; flags: Flag[] }[];
-      }>(
-        await squadLoad.GET(
-          get(`/api/teams/${club.teamId}/load?week=${week}&view=projected`),
-          p({ teamId: String(club.teamId) }),
-        ),
-      );
-      for (const r of squad.rows) {
-        record("squad", r.id, week, { ratio: r.dailyRatio, provisional: r.dailyProvisional });
-        for (const f of r.flags)
-          if (f.kind === "spike" || f.kind === "rising" || f.kind === "low")
-            zoneFlags.push({ athleteId: r.id, flag: f });
-      }
-      const plan = await body<PlanWeek>(
-        await planRoute.GET(get(`/api/teams/${club.teamId}/plan?week=${week}`), p({ teamId: String(club.teamId) })),
-      );
-      for (const a of plan.athletes) {
-        record("plan", a.id, week, fromWeek(a.load.week));
-        record("preview", a.id, week, fromWeek(rowLoad(plan, a).week));
-      }
-      for (const id of athleteIds) {
-        const inputs = await getAthleteLoadInputs({ athleteId: id, through: addDays(week, 20) });
-        record("alerts", id, week, fromWeek(alertWeekLoad({ inputs, weekStart: week, today }).week));
-      }
-    }
-    for (const id of athleteIds) {
-      const page = await body<{ days: { date: string; ratio: number | null; provisional: boolean }[] }>(
-        await athleteLoad.GET(
-          get(`/api/athletes/${id}/load?from=${weeks[0]}&to=${addDays(thisWeek, 6)}&view=projected&metric=srpe`),
-          p({ athleteId: String(id) }),
-        ),
-      );
-      record("athlete", id, weeks[0], {
-        ratio: page.days.map((x) => x.ratio),
-        provisional: page.days.map((x) => x.provisional),
-      });
-    }
-
-    const reference = seen.get("athlete")!;
-    let compared = 0;
-    for (const [reader, byAthlete] of seen) {
-      expect(byAthlete.size, reader).toBe(athleteIds.length);
-      for (const [id, byDate] of byAthlete) {
-        expect(byDate.size, `${reader} ${id}`).toBe(70);
-        for (const [date, v] of byDate) {
-          const ref = reference.get(id)!.get(date)!;
-          expect(v.provisional, `${reader} athlete ${id} ${date}`).toBe(ref.provisional);
-          expect(v.ratio === null, `${reader} athlete ${id} ${date}`).toBe(ref.ratio === null);
-          if (v.ratio !== null && ref.ratio !== null)
-            expect(Math.abs(v.ratio - ref.ratio), `${reader} athlete ${id} ${date}`).toBeLessThanOrEqual(1e-12);
-          compared++;
+  // Every reader for 13 athletes × 10 weeks: 12–19 s on a busy two-core machine, so more than the 20 s default.
+  it(
+    "squad week, plan rows, drag preview, athlete page and alert evaluation agree to 1e-12 on every day of 10 weeks",
+    { timeout: 90_000 },
+    async () => {
+      const zoneFlags: { athleteId: number; flag: Flag }[] = [];
+      for (const week of weeks) {
+        const squad = await body<{
+          rows: { id: number; dailyRatio: (number | null)[]; dailyProvisional: boolean[]; flags: Flag[] }[];
+        }>(
+          await squadLoad.GET(
+            get(`/api/teams/${club.teamId}/load?week=${week}&view=projected`),
+            p({ teamId: String(club.teamId) }),
+          ),
+        );
+        for (const r of squad.rows) {
+          record("squad", r.id, week, { ratio: r.dailyRatio, provisional: r.dailyProvisional });
+          for (const f of r.flags)
+            if (f.kind === "spike" || f.kind === "rising" || f.kind === "low")
+              zoneFlags.push({ athleteId: r.id, flag: f });
+        }
+        const plan = await body<PlanWeek>(
+          await planRoute.GET(get(`/api/teams/${club.teamId}/plan?week=${week}`), p({ teamId: String(club.teamId) })),
+        );
+        for (const a of plan.athletes) {
+          record("plan", a.id, week, fromWeek(a.load.week));
+          record("preview", a.id, week, fromWeek(rowLoad(plan, a).week));
+        }
+        for (const id of athleteIds) {
+          const inputs = await getAthleteLoadInputs({ athleteId: id, through: addDays(week, 20) });
+          record("alerts", id, week, fromWeek(alertWeekLoad({ inputs, weekStart: week, today }).week));
         }
       }
-    }
-    expect(compared).toBe(5 * athleteIds.length * 70);
+      for (const id of athleteIds) {
+        const page = await body<{ days: { date: string; ratio: number | null; provisional: boolean }[] }>(
+          await athleteLoad.GET(
+            get(`/api/athletes/${id}/load?from=${weeks[0]}&to=${addDays(thisWeek, 6)}&view=projected&metric=srpe`),
+            p({ athleteId: String(id) }),
+          ),
+        );
+        record("athlete", id, weeks[0], {
+          ratio: page.days.map((x) => x.ratio),
+          provisional: page.days.map((x) => x.provisional),
+        });
+      }
 
-    // Every series starts on the athlete's first day on record, HISTORY_WEEKS ago, seeded with that day's load:
-    // its first day reads 1, never λ7/λ28 = 3.625, and no zone flag comes from a day with a short history.
-    const first = addDays(thisWeek, -7 * HISTORY_WEEKS);
-    for (const id of athleteIds) {
-      const early = await body<{ days: { date: string; ratio: number | null }[] }>(
-        await athleteLoad.GET(
-          get(`/api/athletes/${id}/load?from=${addDays(first, -7)}&to=${addDays(first, 6)}&view=projected&metric=srpe`),
-          p({ athleteId: String(id) }),
-        ),
-      );
-      const firstDay = early.days.find((x) => x.ratio !== null)!;
-      expect(firstDay).toEqual({ ...firstDay, date: first, ratio: 1 });
-    }
-    expect(zoneFlags.filter((z) => z.flag.provisional)).toEqual([]);
-  });
+      const reference = seen.get("athlete")!;
+      let compared = 0;
+      for (const [reader, byAthlete] of seen) {
+        expect(byAthlete.size, reader).toBe(athleteIds.length);
+        for (const [id, byDate] of byAthlete) {
+          expect(byDate.size, `${reader} ${id}`).toBe(70);
+          for (const [date, v] of byDate) {
+            const ref = reference.get(id)!.get(date)!;
+            expect(v.provisional, `${reader} athlete ${id} ${date}`).toBe(ref.provisional);
+            expect(v.ratio === null, `${reader} athlete ${id} ${date}`).toBe(ref.ratio === null);
+            if (v.ratio !== null && ref.ratio !== null)
+              expect(Math.abs(v.ratio - ref.ratio), `${reader} athlete ${id} ${date}`).toBeLessThanOrEqual(1e-12);
+            compared++;
+          }
+        }
+      }
+      expect(compared).toBe(5 * athleteIds.length * 70);
 
-  it("the demo history, from its first week to next week's plan, raises no flag from how a series starts", async () => {
-    const early: { name: string; flag: Flag }[] = [];
-    for (let k = -HISTORY_WEEKS; k <= 1; k++) {
-      const week = addDays(thisWeek, 7 * k);
-      const squad = await body<{ rows: { name: string; flags: Flag[] }[] }>(
-        await squadLoad.GET(
-          get(`/api/teams/${club.teamId}/load?week=${week}&view=projected`),
-          p({ teamId: String(club.teamId) }),
-        ),
-      );
-      for (const r of squad.rows)
-        for (const f of r.flags)
-          if (f.provisional || (k < -HISTORY_WEEKS + 4 && ["spike", "rising", "low"].includes(f.kind)))
-            early.push({ name: r.name, flag: f });
-    }
-    expect(early).toEqual([]);
-  });
+      // Every series starts on the athlete's first day on record, HISTORY_WEEKS ago, seeded with that day's load:
+      // its first day reads 1, never λ7/λ28 = 3.625, and no zone flag comes from a day with a short history.
+      const first = addDays(thisWeek, -7 * HISTORY_WEEKS);
+      for (const id of athleteIds) {
+        const early = await body<{ days: { date: string; ratio: number | null }[] }>(
+          await athleteLoad.GET(
+            get(
+              `/api/athletes/${id}/load?from=${addDays(first, -7)}&to=${addDays(first, 6)}&view=projected&metric=srpe`,
+            ),
+            p({ athleteId: String(id) }),
+          ),
+        );
+        const firstDay = early.days.find((x) => x.ratio !== null)!;
+        expect(firstDay).toEqual({ ...firstDay, date: first, ratio: 1 });
+      }
+      expect(zoneFlags.filter((z) => z.flag.provisional)).toEqual([]);
+    },
+  );
+
+  it(
+    "the demo history, from its first week to next week's plan, raises no flag from how a series starts",
+    { timeout: 60_000 },
+    async () => {
+      const early: { name: string; flag: Flag }[] = [];
+      for (let k = -HISTORY_WEEKS; k <= 1; k++) {
+        const week = addDays(thisWeek, 7 * k);
+        const squad = await body<{ rows: { name: string; flags: Flag[] }[] }>(
+          await squadLoad.GET(
+            get(`/api/teams/${club.teamId}/load?week=${week}&view=projected`),
+            p({ teamId: String(club.teamId) }),
+          ),
+        );
+        for (const r of squad.rows)
+          for (const f of r.flags)
+            if (f.provisional || (k < -HISTORY_WEEKS + 4 && ["spike", "rising", "low"].includes(f.kind)))
+              early.push({ name: r.name, flag: f });
+      }
+      expect(early).toEqual([]);
+    },
+  );
 });
