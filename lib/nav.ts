@@ -16,7 +16,7 @@ export type NavLink = { href: string; label: string; unread?: number };
  * The signed-in navigation. An item shows when the role holds the action at the given scope, so an athlete
  * ("own" scope) never sees squad screens. Hiding an item is convenience only: every page checks again.
  */
-export const NAV: NavItem[] = [
+const NAV: NavItem[] = [
   { href: "/home", label: "Today", can: "team:view", scope: "own" },
   { href: "/plan", label: "Week plan", can: "plan:view", scope: "team" },
   { href: "/season", label: "Season", can: "plan:view", scope: "team" },

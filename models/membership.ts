@@ -33,7 +33,7 @@ export class Membership extends Model<InferAttributes<Membership>, InferCreation
     Membership.init(
       {
         id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-        role: { type: DataTypes.STRING(20), allowNull: false, validate: { isIn: [ROLES as unknown as string[]] } },
+        role: { type: DataTypes.STRING(20), allowNull: false, validate: { isIn: [[...ROLES]] } },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -75,7 +75,7 @@ export async function toApiError(res: Response): Promise<ApiError> {
 }
 
 /** One request to our API: JSON in, JSON out; throws ApiError on a refusal or when the server is unreachable. */
-export async function requestJson<T>(method: Method, url: string, body?: unknown): Promise<T> {
+async function requestJson<T>(method: Method, url: string, body?: unknown): Promise<T> {
   let res: Response;
   try {
     res = await fetch(url, {

@@ -17,7 +17,7 @@ import { listTemplates } from "./templates";
  * page's RSC payload grow by about 25 KB per athlete (1.5 MB for 60), so a large squad's page sends the frame and
  * the browser reads the week as JSON (the planner's own request), which is about a third of that.
  */
-export const SEED_MAX_ATHLETES = 20;
+const SEED_MAX_ATHLETES = 20;
 
 export async function seedsPlanWeek({ teamId, scope }: { teamId: number; scope: PlanAudience["scope"] }) {
   if (scope === "own") return true;

@@ -8,7 +8,7 @@ import { db, type Restriction as RestrictionRow, type RestrictionOverride as Res
 import { userNames } from "./users";
 
 /** A stored row in the shape lib/restrictions/rules.ts checks. */
-export function toRestriction(row: RestrictionRow, names: ReadonlyMap<number, string>): Restriction {
+function toRestriction(row: RestrictionRow, names: ReadonlyMap<number, string>): Restriction {
   const base = {
     id: row.id,
     athleteId: row.athleteId,

@@ -49,14 +49,13 @@ export async function countSessionMessages({
   sessionIds: readonly number[];
 }): Promise<Map<number, number>> {
   if (sessionIds.length === 0) return new Map();
-  const { SessionMessage, sequelize } = await db();
-  const rows = (await SessionMessage.findAll({
+  const { SessionMessage } = await db();
+  // A grouped count answers one { sessionId, count } per group.
+  const rows = await SessionMessage.count({
     where: { sessionId: { [Op.in]: [...sessionIds] } },
-    attributes: ["sessionId", [sequelize.fn("COUNT", sequelize.col("id")), "n"]],
     group: ["sessionId"],
-    raw: true,
-  })) as unknown as Array<{ sessionId: number; n: number | string }>;
-  return new Map(rows.map((r) => [r.sessionId, Number(r.n)]));
+  });
+  return new Map(rows.map((r) => [Number(r.sessionId), Number(r.count)]));
 }
 
 export async function insertSessionMessage({

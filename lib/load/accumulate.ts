@@ -45,7 +45,7 @@ const GRID = 201;
 /** Thresholds per memo cell, in this order: absolute HSR, absolute sprint, relative HSR, near-max, maximal. */
 const BANDS = 5;
 const BAND_ABS_HSR = 0;
-export const BAND_NEAR = 3;
+const BAND_NEAR = 3;
 /** Memo cells per start class: GRID grid cells and one scratch cell, BANDS thresholds each. */
 const CLASS_CELLS = (GRID + 1) * BANDS;
 
@@ -84,7 +84,7 @@ export interface ResolvedProfile {
 }
 
 /** Non-negative finite number, else 0: stored data should be validated, but the maths never sees NaN. */
-export function nonNeg(value: number | null | undefined): number {
+function nonNeg(value: number | null | undefined): number {
   const v = value ?? 0;
   return v > 0 && v < Number.POSITIVE_INFINITY ? v : 0;
 }
@@ -133,14 +133,14 @@ export function resolveProfile(profile: AthleteProfile, settings: TeamLoadSettin
 }
 
 /** The profile in force on `day` (lib/speed/README.md §4): the first earlier one it falls before, else the current. */
-export function profileOn(rp: ResolvedProfile, day: number): ResolvedProfile {
+function profileOn(rp: ResolvedProfile, day: number): ResolvedProfile {
   const earlier = rp.earlier;
   if (earlier === null) return rp;
   for (let i = 0; i < earlier.length; i++) if (day < earlier[i].untilDay) return earlier[i].rp;
   return rp;
 }
 
-export function memoOf(rp: ResolvedProfile): Float64Array {
+function memoOf(rp: ResolvedProfile): Float64Array {
   if (rp.reach === null) rp.reach = new Float64Array(2 * CLASS_CELLS).fill(Number.NaN);
   return rp.reach;
 }
@@ -151,7 +151,7 @@ export function memoOf(rp: ResolvedProfile): Float64Array {
  * base; band j is at base + j. Callers read the cells back from the Float64Array so they stay unboxed
  * doubles (merging a call's result with an array load would box a number on every block).
  */
-export function reachCell(rp: ResolvedProfile, memo: Float64Array, pct: number, cls: number): number {
+function reachCell(rp: ResolvedProfile, memo: Float64Array, pct: number, cls: number): number {
   const grid = pct * 2;
   const g = grid | 0;
   const onGrid = g === grid && g < GRID;
@@ -169,7 +169,7 @@ export function reachCell(rp: ResolvedProfile, memo: Float64Array, pct: number, 
  * run-in at constant acceleration (v² = 2·a·x, so x = runIn·(speed/target)²), but never faster than the
  * athlete's all-out acceleration allows (`allOut`, from rest): the later of the two.
  */
-export function buildUpReach(allOut: number, runIn: number, speed: number, target: number): number {
+function buildUpReach(allOut: number, runIn: number, speed: number, target: number): number {
   const ratio = speed / target;
   const gentle = runIn * ratio * ratio;
   return gentle > allOut ? gentle : allOut;

@@ -37,4 +37,3 @@ export { prescribedReps } from "./block-metrics";
 export type { Flag, FlagLevel } from "./flags";
 export type { WeekSummary } from "./week-summary";
 export { computeAthleteLoad, type AthleteLoad } from "./athlete-load";
-export { computeSquadWeek } from "./squad";

@@ -39,9 +39,9 @@ const NM = METRICS.length;
 
 /** Row flags. */
 export const LEDGER_LOGGED = 1;
-export const LEDGER_MISSING = 2;
+const LEDGER_MISSING = 2;
 /** A session counts on the day when it is today or later in the projected view (logged, or planned and not cancelled). */
-export const LEDGER_AHEAD_HAS = 4;
+const LEDGER_AHEAD_HAS = 4;
 
 /** The running state of the settled series at the end of one day. */
 export interface LedgerState {
@@ -147,7 +147,7 @@ export function ledgerDayValues(src: LedgerSource, fromDay: number, toDay: numbe
 }
 
 /** The value set a day counts with and whether it is on record, for a read on `todayDay` in `view`. */
-export function dayAs(
+function dayAs(
   row: LedgerDayValues,
   todayDay: number,
   view: LoadView,
@@ -173,7 +173,7 @@ const LC = ewmaLambda(CHRONIC_DAYS);
  * the day has no state, i.e. lies before the first day on record). The same operations in the same order as
  * acwr.ts (acwrInto / acwrSkipping over the series from the first day on record), so the numbers are identical.
  */
-export function stepLedger(
+function stepLedger(
   back: (k: number) => LedgerState | null,
   day: { values: readonly number[]; has: boolean; missing: boolean },
   m: LedgerMethod,

@@ -41,10 +41,10 @@ function isMetric(value: string | null): value is Metric {
   return value !== null && value in METRIC_INFO;
 }
 
-export type AlertFacts = { kind: AlertKind; metric: string | null };
+type AlertFacts = { kind: AlertKind; metric: string | null };
 
 /** What was measured, its unit, and whether the threshold is a ceiling or a floor. */
-export function alertMeasure(alert: AlertFacts): {
+function alertMeasure(alert: AlertFacts): {
   metricLabel: string;
   unit: string | null;
   direction: "above" | "below" | "count";
@@ -84,7 +84,7 @@ export type AlertForMail = AlertFacts & {
   basis: AlertBasis;
 };
 
-export function loadPageUrl(appUrl: string, athleteId: number): string {
+function loadPageUrl(appUrl: string, athleteId: number): string {
   return `${appUrl.replace(/\/+$/, "")}/load/${athleteId}`;
 }
 

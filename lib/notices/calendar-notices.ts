@@ -20,7 +20,7 @@ export type PlannedPast = { hits: ReadonlyArray<RestrictionHit & { sessionId: nu
 export type CalendarAction =
   { method: "REQUEST"; update: boolean; session: CalendarSession } | { method: "CANCEL"; session: CalendarSession };
 
-export function toCalendarSession(s: SessionSnapshot, overrides: Partial<CalendarSession> = {}): CalendarSession {
+function toCalendarSession(s: SessionSnapshot, overrides: Partial<CalendarSession> = {}): CalendarSession {
   return {
     id: String(s.id),
     date: s.date,

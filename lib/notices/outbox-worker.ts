@@ -27,7 +27,7 @@ export interface OutboxWorkerOptions {
   log?: (message: string) => void;
 }
 
-export type RoundResult = { sent: number; retrying: number; failed: number };
+type RoundResult = { sent: number; retrying: number; failed: number };
 
 export interface OutboxWorker {
   /** One delivery round over every due message; concurrent calls share the round in flight. */
@@ -207,11 +207,4 @@ export function startOutboxWorker(options: OutboxWorkerOptions = {}): OutboxWork
 /** Wakes the running worker, if this process has one (writers call it after their transaction commits). */
 export function kickOutbox(): void {
   cache.__sprintwrightOutbox?.worker?.kick();
-}
-
-export async function stopOutboxWorker(): Promise<void> {
-  const worker = cache.__sprintwrightOutbox?.worker;
-  if (!worker) return;
-  cache.__sprintwrightOutbox = {};
-  await worker.stop();
 }

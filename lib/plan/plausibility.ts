@@ -36,7 +36,7 @@ export const PLAUSIBILITY_LIMITS = {
   sessionContacts: { value: 400 },
 } as const;
 
-export type PlausibilityLimit = keyof typeof PLAUSIBILITY_LIMITS;
+type PlausibilityLimit = keyof typeof PLAUSIBILITY_LIMITS;
 
 /** One limit a session goes past: which, where (the body field, as the editor and the API name it), the numbers. */
 export type PlausibilityCheck = {

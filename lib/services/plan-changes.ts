@@ -35,7 +35,7 @@ export function change(kind: SessionChange["kind"], before: Loaded | null, after
  * A change that goes past a plausibility limit it did not already go past is refused (422 "implausible", the
  * checks with their numbers, each field named with its limit) unless the body said `confirmed: true`.
  */
-export function guardPlausibility(changes: readonly SessionChange[], confirmed: boolean | undefined) {
+function guardPlausibility(changes: readonly SessionChange[], confirmed: boolean | undefined) {
   if (confirmed) return;
   const checks = changes.flatMap((c) =>
     newPlausibilityChecks(c.before, c.after).map((check) => ({ ...check, sessionId: c.sessionId })),
@@ -79,7 +79,7 @@ export async function notify({
 }
 
 /** The athletes' days a list of changes touched, each once. */
-export function touchedBy(changes: readonly SessionChange[]): Touched[] {
+function touchedBy(changes: readonly SessionChange[]): Touched[] {
   const seen = new Map<string, Touched>();
   for (const c of changes) {
     for (const s of [c.before, c.after])
