@@ -24,7 +24,8 @@ const SAMPLE_BUDGET_MS = 10_000;
 /** A single request slower than this counts as an error (the server may still be working off a load run). */
 const REQUEST_TIMEOUT_MS = 60_000;
 const CACHE = join(tmpdir(), "sprintwright-bench-scale");
-const DIST = ".next-bench";
+/** BENCH_DIST_DIR: measure a build made elsewhere (e.g. the browser tests' .next-e2e) as it is. */
+const DIST = process.env.BENCH_DIST_DIR || ".next-bench";
 const TSX = ["--conditions=react-server", "--import", "tsx"];
 
 const args = process.argv.slice(2);
@@ -124,8 +125,10 @@ function prepareBuild() {
     "package.json",
   ];
   const newest = Math.max(...sources.flatMap(filesUnder).map((f) => statSync(join(ROOT, f)).mtimeMs));
+  const given = Boolean(process.env.BENCH_DIST_DIR) && existsSync(built);
   const fresh =
-    existsSync(built) && existsSync(join(ROOT, DIST, "sprintwright-run")) && statSync(built).mtimeMs > newest;
+    given ||
+    (existsSync(built) && existsSync(join(ROOT, DIST, "sprintwright-run")) && statSync(built).mtimeMs > newest);
   if (fresh) process.env.E2E_REUSE_BUILD = "1";
   else process.env.SPRINTWRIGHT_RUN_ID = `bench-scale-${Date.now()}`;
   return fresh;
