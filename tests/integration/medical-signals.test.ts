@@ -152,6 +152,9 @@ describe("an athlete's log note reaches the staff, and the session's thread answ
     as(ada.userId);
     const last = await post(past.id, { body: "Will do, thank you" });
     expect((last.body.messages as unknown[]).length).toBe(3);
+    // The count the staff lists show beside a note (a grouped count per session; none for a session without any).
+    const { countSessionMessages } = await import("@/lib/data/session-messages");
+    expect(await countSessionMessages({ sessionIds: [past.id, past.id + 10_000] })).toEqual(new Map([[past.id, 3]]));
     await n.worker.runOnce();
     const about = (s: string[]) => s.filter((x) => x.includes("Ada Athlete's session"));
     // Ada: from the physio and the coach; the physio: from the coach and Ada; the coach: from Ada only.
