@@ -7,14 +7,18 @@ import { formatDayShort } from "@/lib/format/dates";
 import { dayHeading } from "@/lib/dates/plain-date";
 import { sessionHits } from "@/lib/plan/restrictions";
 import type { PlanAthlete } from "@/lib/plan/types";
+import type { GridPhase } from "@/lib/season/season-grid";
 import { describeRestriction, type Restriction } from "@/lib/restrictions/rules";
 import { DropCell } from "./day-cell";
 import { useRowPreview, type HoverStore } from "./hover-store";
 import { RowLoadSummary } from "./row-load";
+import { RowTarget } from "./row-target";
 import { SessionCard, type CardActions } from "./session-card";
 
 type Props = {
   athlete: PlanAthlete;
+  /** The season phase in force for the athlete this week, if any (its weekly targets). */
+  phase?: GridPhase | null;
   /** The athlete's physio restrictions that touch this week. */
   restrictions: readonly Restriction[];
   days: string[];
@@ -36,6 +40,7 @@ function flagsBySession(flags: readonly Flag[]): Map<string, Flag[]> {
 /** One athlete: name and week numbers, then a cell per day holding that day's session cards. */
 export const AthleteRow = memo(function AthleteRow({
   athlete,
+  phase,
   restrictions,
   days,
   today,
@@ -59,6 +64,7 @@ export const AthleteRow = memo(function AthleteRow({
         <span className="block text-sm font-medium break-normal text-ink-900">{athlete.name}</span>
         <RestrictionChip restrictions={restrictions} />
         <RowLoadSummary load={athlete.load} preview={preview?.after ?? null} raised={preview?.warnings ?? NO_FLAGS} />
+        <RowTarget phase={phase ?? null} load={preview?.after ?? athlete.load} />
       </th>
       <RowDays
         athlete={athlete}

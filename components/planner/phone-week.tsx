@@ -3,9 +3,11 @@
 import { memo, useMemo } from "react";
 import type { PlanWeek } from "@/lib/plan/types";
 import type { Restriction } from "@/lib/restrictions/rules";
+import { phaseOfWeek } from "@/lib/season/season-grid";
 import { RestrictionChip, RowDays } from "./athlete-row";
 import { useRowPreview, type HoverStore } from "./hover-store";
 import { RowLoadSummary } from "./row-load";
+import { RowTarget } from "./row-target";
 import type { CardActions } from "./session-card";
 
 type Props = {
@@ -69,6 +71,10 @@ export const PhoneWeek = memo(function PhoneWeek({
         <h2 className="text-base font-semibold break-normal text-ink-900">{athlete.name}</h2>
         <RestrictionChip restrictions={restrictions.length ? restrictions : NO_RESTRICTIONS} />
         <RowLoadSummary load={athlete.load} preview={preview?.after ?? null} raised={preview?.warnings ?? []} />
+        <RowTarget
+          phase={phaseOfWeek(week.phases ?? [], athlete.groupId, week.weekStart)}
+          load={preview?.after ?? athlete.load}
+        />
       </div>
       <ol className="space-y-2" data-testid="plan-grid" aria-label="Days of the week">
         <RowDays

@@ -5,6 +5,7 @@ import { memo, useMemo } from "react";
 import type { PlanWeek } from "@/lib/plan/types";
 import type { Restriction } from "@/lib/restrictions/rules";
 import { dayHeading } from "@/lib/dates/plain-date";
+import { phaseOfWeek } from "@/lib/season/season-grid";
 import { AthleteRow } from "./athlete-row";
 import { GroupRow, groupKey } from "./group-row";
 import type { HoverStore } from "./hover-store";
@@ -42,6 +43,10 @@ export const WeekGrid = memo(function WeekGrid({
     for (const r of week.restrictions) out.set(r.athleteId, [...(out.get(r.athleteId) ?? []), r]);
     return out;
   }, [week.restrictions]);
+  const phases = useMemo(
+    () => new Map(week.athletes.map((a) => [a.id, phaseOfWeek(week.phases ?? [], a.groupId, week.weekStart)])),
+    [week.athletes, week.phases, week.weekStart],
+  );
   return (
     // Positioned, so absolutely placed screen-reader text in the cells stays inside this scroll box (not the page).
     <div className="relative overflow-x-auto rounded-card bg-paper-raised shadow-card ring-1 ring-ink-100">
@@ -107,6 +112,7 @@ export const WeekGrid = memo(function WeekGrid({
                       <AthleteRow
                         key={id}
                         athlete={athlete}
+                        phase={phases.get(id) ?? null}
                         restrictions={limits.get(id) ?? NO_RESTRICTIONS}
                         days={week.days}
                         today={week.today}

@@ -10,6 +10,7 @@ import { listGroups } from "./athletes";
 import { getLedgerWeek } from "./load-ledger";
 import { loadSessions } from "./plan-rows";
 import { listRestrictions } from "./restrictions";
+import { listPhases } from "./season";
 import { listTemplates } from "./templates";
 
 /**
@@ -65,7 +66,7 @@ export async function getPlanWeek({
     throw new AppError("not_found", "No athlete profile is linked to your account");
   const visible = (s: { status: string }) => !own || s.status !== "draft";
   const athleteIds = own ? [audience.ownAthleteId!] : undefined;
-  const [source, groups, weekRows, templates, restrictions] = await Promise.all([
+  const [source, groups, weekRows, templates, restrictions, phases] = await Promise.all([
     // From the ledger (README §12): the week, and the 28 days before it the drag preview continues from. An
     // athlete's own view leaves drafts out.
     getLedgerWeek({
@@ -85,6 +86,7 @@ export async function getPlanWeek({
     }),
     own ? Promise.resolve([]) : listTemplates({ teamId }),
     listRestrictions({ teamId, from: weekStart, ...(own ? { athleteIds } : {}) }),
+    own ? Promise.resolve([]) : listPhases({ teamId, from: weekStart, to: weekStart }),
   ]);
   const weekSessions = new Map<number, PlanSession[]>();
   for (const { dto } of weekRows)
@@ -130,6 +132,7 @@ export async function getPlanWeek({
     athletes,
     templates,
     restrictions: restrictions.filter((r) => r.startsOn <= weekEnd),
+    phases,
     canEdit: audience.canEdit,
     scope: audience.scope,
   };

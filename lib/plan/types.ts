@@ -1,4 +1,5 @@
 // Plain JSON shapes of the week plan, shared by lib/data/plan.ts, the route handlers and the week grid.
+import type { GridPhase } from "@/lib/season/season-grid";
 import type { Flag, FlagLevel } from "@/lib/load/flags";
 import type {
   AthleteProfile,
@@ -94,6 +95,11 @@ export type PlanWeek = {
   templates: PlanTemplate[];
   /** Physio restrictions that apply on some day of the week, for the athletes shown. */
   restrictions: Restriction[];
+  /**
+   * Season phases in force on the week's first day (staff only): each row shows its week against the targets of
+   * the athlete's phase (the group's own, else the team's; lib/season/season-grid.ts phaseOfWeek).
+   */
+  phases?: GridPhase[];
   /** The viewer may change the plan (head coach, coach). */
   canEdit: boolean;
   /** "own": an athlete seeing only their own row. */

@@ -290,7 +290,7 @@ describeBrowser("planner journeys", () => {
       alerts: { kind: string }[];
     };
     expect(alerts.alerts.map((a) => a.kind)).toContain("restriction_override");
-  });
+  }, 60_000);
 
   it("drags with the keyboard, and announces the drop's effect", async () => {
     const first = plan.groups[0].athleteIds[0];

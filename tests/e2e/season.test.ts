@@ -83,6 +83,8 @@ describeBrowser("the season view", () => {
     await phase.getByLabel("Kind").selectOption({ label: "Specific preparation" });
     await phase.getByLabel("First day").fill(shiftWeek(source, 1));
     await phase.getByLabel("Last day").fill(addDays(shiftWeek(source, 5), 6));
+    await phase.locator("#target-srpe-min").fill("600");
+    await phase.locator("#target-srpe-max").fill("5000");
     await phase.getByRole("button", { name: "Add phase" }).click();
     await page.getByTestId("season-phases").getByText("Speed build · Specific preparation").waitFor();
 
@@ -101,9 +103,21 @@ describeBrowser("the season view", () => {
     await page.getByTestId("planner").waitFor();
     const shelfBlock = page.locator('[data-testid="template-card"][data-kind="max_velocity"]').first();
     const target = dayCell(page, mayaId, addDays(unloadWeek, 2));
+    // The row shows its week against the phase's sRPE target, from the same figure as the row's total.
+    const row = page.locator(`[data-testid="athlete-row"][data-athlete-id="${mayaId}"]`).first();
+    const againstTarget = async () => {
+      const total = Number(await row.getByTestId("total-srpe").getAttribute("data-value"));
+      const check = row.getByTestId("row-target").locator('[data-metric="srpe"]');
+      expect(Number(await check.getAttribute("data-value"))).toBe(total);
+      expect(await check.getAttribute("data-standing")).toBe(total < 600 ? "below" : "within");
+      return total;
+    };
+    await row.getByTestId("row-target").getByText("Speed build target").waitFor();
+    const before = await againstTarget();
     await mouseDrag(page, shelfBlock, target);
     await settled(page);
     await target.getByTestId("session-card").first().waitFor();
+    expect(await againstTarget()).toBeGreaterThan(before);
     await page.goto(`${app.url}/season?from=${source}`);
     await page.getByTestId("season-grid").waitFor();
     await page.getByTestId("no-season-warnings").waitFor();
