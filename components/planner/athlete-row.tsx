@@ -105,7 +105,8 @@ export const RestrictionChip = memo(function RestrictionChip({
 
 /**
  * The row's day cells: memoised apart from the preview, so hovering a row does not re-render its cards. `stacked`:
- * the phone's week, one list item per day with its heading.
+ * the phone's views, one list item per cell headed by its day (one athlete's week) or by the athlete (the squad's
+ * day; long names wrap between words).
  */
 export const RowDays = memo(function RowDays({
   athlete,
@@ -117,7 +118,7 @@ export const RowDays = memo(function RowDays({
   copyArmedId,
   actions,
   stacked = false,
-}: Props & { stacked?: boolean }) {
+}: Props & { stacked?: false | "day" | "athlete" }) {
   const bySession = flagsBySession(athlete.load.flags);
   const restrictedText = (s: PlanAthlete["sessions"][number]) => {
     const hits = sessionHits({ restrictions }, s);
@@ -135,7 +136,10 @@ export const RowDays = memo(function RowDays({
           today={date === today}
           as={stacked ? "li" : "td"}
         >
-          {stacked ? <StackedDayHeading date={date} today={date === today} /> : null}
+          {stacked === "day" ? <StackedDayHeading date={date} today={date === today} /> : null}
+          {stacked === "athlete" ? (
+            <h3 className="px-2 pt-1.5 text-sm font-medium break-normal text-ink-900">{athlete.name}</h3>
+          ) : null}
           <div className={clsx("flex flex-col gap-1 p-0.5", stacked ? "min-h-12" : "min-h-16")}>
             {athlete.sessions
               .filter((s) => s.date === date)

@@ -86,7 +86,7 @@ export const PhoneWeek = memo(function PhoneWeek({
           hoverStore={hoverStore}
           copyArmedId={copyArmedId}
           actions={actions}
-          stacked
+          stacked="day"
         />
       </ol>
     </section>

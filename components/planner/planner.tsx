@@ -21,6 +21,7 @@ import { DropPreviewPanel } from "./drop-preview-panel";
 import { useLatest } from "./latest";
 import { NoticeToast } from "./notice-toast";
 import { OverrideProvider, useOverrideReason } from "./override-dialog";
+import { PhoneSquadDay } from "./phone-squad-day";
 import { PhoneWeek } from "./phone-week";
 import { SessionCard, type CardActions } from "./session-card";
 import { SessionEditor } from "./session-editor";
@@ -61,6 +62,36 @@ function focusRegion(id: string) {
   if (!el) return;
   el.focus({ preventScroll: true });
   el.scrollIntoView({ block: "start" });
+}
+
+/** The phone's squad day: the one picked while it is in the week shown, else today when shown, else the first day. */
+function phoneDayOf(week: PlanWeek, picked: string | null): string {
+  if (picked && week.days.includes(picked)) return picked;
+  return week.days.includes(week.today) ? week.today : week.days[0]!;
+}
+
+/** On a phone: one athlete's week, or one day for the whole squad. */
+function PhoneViewChoice({ view, onView }: { view: "athlete" | "day"; onView: (v: "athlete" | "day") => void }) {
+  const choice = (v: "athlete" | "day", text: string) => (
+    <button
+      type="button"
+      aria-pressed={view === v}
+      data-testid={`phone-view-${v}`}
+      onClick={() => onView(v)}
+      className={clsx(
+        "flex-1 rounded-md px-2 py-1.5 text-sm font-medium",
+        view === v ? "bg-ink-900 text-paper" : "text-ink-700 ring-1 ring-ink-200 ring-inset",
+      )}
+    >
+      {text}
+    </button>
+  );
+  return (
+    <div role="group" aria-label="Show" className="flex gap-1" data-testid="phone-view">
+      {choice("athlete", "One athlete's week")}
+      {choice("day", "The squad's day")}
+    </div>
+  );
 }
 
 function useHydrated() {
@@ -134,8 +165,12 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
   const collapsedBox = useLatest(collapsed);
   const phone = usePhone();
   const [phoneAthleteId, setPhoneAthleteId] = useState<number | null>(null);
-  const phoneAthlete = phone ? (phoneAthleteId ?? shown?.athletes[0]?.id ?? null) : null;
+  const [phoneView, setPhoneView] = useState<"athlete" | "day">("athlete");
+  const [phoneDayPicked, setPhoneDay] = useState<string | null>(null);
+  const squadDay = phone && phoneView === "day" && shown ? phoneDayOf(shown, phoneDayPicked) : null;
+  const phoneAthlete = phone && squadDay === null ? (phoneAthleteId ?? shown?.athletes[0]?.id ?? null) : null;
   const phoneAthleteBox = useLatest(phoneAthlete);
+  const phoneDayBox = useLatest(squadDay);
   const { say, saveChange, deleteSession, clearUndo } = act;
 
   const onDrop = useCallback(
@@ -158,6 +193,7 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
     week: weekBox,
     collapsed: collapsedBox,
     phoneAthlete: phoneAthleteBox,
+    phoneDay: phoneDayBox,
     onDrop,
     onRefused,
   });
@@ -364,6 +400,18 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
                 <p className="rounded-card border border-dashed border-ink-200 px-6 py-10 text-center text-sm text-ink-500">
                   No athletes in the team yet. Add them on the squad screen.
                 </p>
+              ) : phone ? (
+                <PhoneViewChoice view={squadDay === null ? "athlete" : "day"} onView={setPhoneView} />
+              ) : null}
+              {shown.athletes.length === 0 ? null : squadDay !== null ? (
+                <PhoneSquadDay
+                  week={shown}
+                  day={squadDay}
+                  onDay={setPhoneDay}
+                  hoverStore={hoverStore}
+                  copyArmedId={dnd.copyArmedId}
+                  actions={actions}
+                />
               ) : phoneAthlete !== null ? (
                 <PhoneWeek
                   week={shown}

@@ -46,6 +46,8 @@ type Args = {
   collapsed: Latest<ReadonlySet<string>>;
   /** On a phone the week of one athlete, days stacked: the keyboard walks that athlete's days up and down. */
   phoneAthlete: Latest<number | null>;
+  /** On a phone, one day for the squad: the keyboard walks the athletes up and down. */
+  phoneDay: Latest<string | null>;
   /** `hits`: the physio restrictions the change would go past (the caller asks for a reason first). */
   onDrop: (change: PlanChange, hits: RestrictionHit[]) => void;
   onRefused: (reason: string) => void;
@@ -55,7 +57,7 @@ type Args = {
  * Everything about dragging: sensors (pointer, and keyboard moving cell by cell), the copy modifier, the
  * in-browser load preview of the cell under the item, screen-reader announcements, and the drop itself.
  */
-export function usePlannerDnd({ week, collapsed, phoneAthlete, onDrop, onRefused }: Args) {
+export function usePlannerDnd({ week, collapsed, phoneAthlete, phoneDay, onDrop, onRefused }: Args) {
   const [active, setActive] = useState<DragData | null>(null);
   const hoverStore = useHoverStore();
   const setHover = hoverStore.set;
@@ -111,6 +113,17 @@ export function usePlannerDnd({ week, collapsed, phoneAthlete, onDrop, onRefused
   const layout = useCallback((): GridLayout => {
     const w = week.get();
     if (!w) return { rows: [], days: [] };
+    const day = phoneDay.get();
+    if (day !== null)
+      return {
+        rows: w.groups.flatMap((g) =>
+          g.athleteIds.map((id) => ({
+            key: `athlete:${id}`,
+            target: (date: string): DropTarget => ({ type: "cell", athleteId: id, date }),
+          })),
+        ),
+        days: [day],
+      };
     const one = phoneAthlete.get();
     if (one !== null)
       return {
@@ -127,7 +140,7 @@ export function usePlannerDnd({ week, collapsed, phoneAthlete, onDrop, onRefused
         rows.push({ key: `athlete:${id}`, target: (date) => ({ type: "cell", athleteId: id, date }) });
     }
     return { rows, days: w.days };
-  }, [week, collapsed, phoneAthlete]);
+  }, [week, collapsed, phoneAthlete, phoneDay]);
 
   const keyboardStart = useCallback(() => {
     const src = dragging.get()?.source;

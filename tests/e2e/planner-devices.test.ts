@@ -250,6 +250,38 @@ describeBrowser("planner on touch screens, by keyboard and for screen readers", 
     expect(await seriousAxeViolations(page, { rules: ["label-content-name-mismatch"] })).toEqual([]);
   }, 120_000);
 
+  it("gives a 390 × 844 phone one day for the squad, with touch drag onto an athlete's day, and passes axe", async () => {
+    const page = await signedIn({ viewport: { width: 390, height: 844 }, hasTouch: true });
+    const week = weekAt(11);
+    await openPlan(page, app, week);
+    await page.getByTestId("phone-view-day").click();
+    await page.getByTestId("phone-squad-day").waitFor();
+    const wednesday = addDays(week, 2);
+    await page.getByTestId("phone-day").selectOption(wednesday);
+    const athletes = plan.groups.flatMap((g) => g.athleteIds);
+    await expect
+      .poll(() => page.locator(`[data-testid="day-cell"][data-date="${wednesday}"]`).count())
+      .toBe(athletes.length);
+    expect(await page.getByTestId("day-cell").count()).toBe(athletes.length);
+    expect(await widerThanScreen(page)).toEqual([]);
+    expect(await seriousAxeViolations(page, { rules: ["label-content-name-mismatch"] })).toEqual([]);
+    const who = free()[1]!;
+    const cdp = await page.context().newCDPSession(page);
+    await touchDrag(
+      page,
+      cdp,
+      page.getByTestId("template-card").first().getByTestId("template-drag"),
+      cell(page, who, wednesday),
+    );
+    await settled(page);
+    await expect.poll(() => cards(page, who, wednesday).count()).toBe(1);
+    await screenshot(page, "planner-phone-squad-day");
+    // Back to one athlete's week: the card is on that athlete's Wednesday there too.
+    await page.getByTestId("phone-view-athlete").click();
+    await page.getByTestId("phone-athlete").selectOption(String(who));
+    await expect.poll(() => cards(page, who, wednesday).count()).toBe(1);
+  }, 120_000);
+
   // Once pinned as failing: the finger lifted while auto-scroll still carried the page, over another element.
   it("drags by touch on a 390 × 844 phone to a day below the fold (auto-scroll)", async () => {
     const page = await signedIn({ viewport: { width: 390, height: 844 }, hasTouch: true });
