@@ -9,6 +9,7 @@ import { FLAG_DISPLAY } from "@/lib/load/flag-display";
 import type { FlagKind } from "@/lib/load/flags";
 import { ALERT_KIND_LABEL } from "@/lib/notices/alert-display";
 import { METRIC_INFO, type Metric } from "@/lib/load/types";
+import { LogNoteLine, logNoteHref } from "@/components/status/log-note-line";
 import { TodayItem, TodaySection } from "./today-section";
 
 /** Alerts raised by a load flag show the flag's mark; the others (overrides, pain) their own words. */
@@ -155,8 +156,19 @@ export function CoachToday({ data }: { data: CoachTodayDto }) {
         ) : null}
       </TodaySection>
 
-      {/* Slot: recent athlete log notes (lib/data/log-notes.ts, being added with the physio's screens). */}
-      <TodaySection id="notes" title="Notes from athletes" empty="Athletes' notes on their logs will show here." />
+      <TodaySection
+        id="notes"
+        title="Notes from athletes"
+        count={data.notes.length}
+        more={{ href: "/status", label: "Squad status" }}
+        empty="No notes on the logs of the last 7 days."
+      >
+        {data.notes.map((n) => (
+          <TodayItem key={n.sessionId} href={logNoteHref(n)} testId="today-note">
+            <LogNoteLine note={n} />
+          </TodayItem>
+        ))}
+      </TodaySection>
 
       <div className="lg:col-span-2">
         <LoadCaution />

@@ -2,6 +2,7 @@
 
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { CHART, shortDate } from "@/components/load/chart-theme";
+import { Card } from "@/components/ui/card";
 import { formatNumber } from "@/lib/format/number";
 import type { PlanActualWeek } from "@/lib/load/plan-vs-actual";
 import type { Metric } from "@/lib/load/types";
@@ -46,5 +47,22 @@ export function PlanActualChart({ weeks, metric, unit }: { weeks: PlanActualWeek
         </BarChart>
       </ResponsiveContainer>
     </div>
+  );
+}
+
+/** The chart in its card, with the same figures as a list for screen readers. */
+export function PlanActualTrend({ weeks, metric, unit }: { weeks: PlanActualWeek[]; metric: Metric; unit: string }) {
+  return (
+    <Card className="p-3 sm:p-4">
+      <PlanActualChart weeks={weeks} metric={metric} unit={unit} />
+      <ul className="sr-only">
+        {weeks.map((w) => (
+          <li key={w.weekStart}>
+            Week of {shortDate(w.weekStart)}: {formatNumber(w.done[metric], 0)} {unit} done of{" "}
+            {formatNumber(w.prescribedToDate[metric], 0)} due
+          </li>
+        ))}
+      </ul>
+    </Card>
   );
 }

@@ -3,14 +3,11 @@
 import Link from "next/link";
 import { useId, useState } from "react";
 import { Segmented } from "@/components/load/segmented";
-import { shortDate } from "@/components/load/chart-theme";
-import { Card } from "@/components/ui/card";
 import type { PlanActualDto } from "@/lib/data/plan-vs-actual";
-import { formatNumber } from "@/lib/format/number";
 import { figuresHref } from "@/lib/load/figures-link";
 import { PLAN_ACTUAL_METRICS } from "@/lib/load/plan-vs-actual";
 import { METRIC_INFO, type Metric } from "@/lib/load/types";
-import { PlanActualChart } from "./plan-actual-chart";
+import { PlanActualTrend } from "./plan-actual-chart";
 import { PlanActualTable } from "./plan-actual-table";
 
 const METRIC_OPTIONS = PLAN_ACTUAL_METRICS.map((m): [Metric, string] => [m, METRIC_INFO[m].short]);
@@ -63,17 +60,7 @@ export function PlanActualView({ data }: { data: PlanActualDto }) {
             </select>
           </label>
         </div>
-        <Card className="p-3 sm:p-4">
-          <PlanActualChart weeks={weeks} metric={metric} unit={info.unit} />
-          <ul className="sr-only">
-            {weeks.map((w) => (
-              <li key={w.weekStart}>
-                Week of {shortDate(w.weekStart)}: {formatNumber(w.done[metric], 0)} {info.unit} done of{" "}
-                {formatNumber(w.prescribedToDate[metric], 0)} due
-              </li>
-            ))}
-          </ul>
-        </Card>
+        <PlanActualTrend weeks={weeks} metric={metric} unit={info.unit} />
       </section>
     </div>
   );

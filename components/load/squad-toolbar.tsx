@@ -3,7 +3,7 @@
 import { clsx } from "clsx";
 import type { ReactTable } from "@tanstack/react-table";
 import { Button } from "@/components/ui/button";
-import { Select } from "@/components/ui/field";
+import { ToolbarSelect } from "@/components/ui/toolbar-select";
 import { toCsv } from "@/lib/format/csv";
 import { FLAG_DISPLAY, LOAD_CAUTION } from "@/lib/load/flag-display";
 import type { FlagKind } from "@/lib/load/flags";
@@ -11,7 +11,11 @@ import { COLUMN_LABELS, csvValue, type FlagFilter, type SquadRow, type squadFeat
 
 type Table = ReactTable<typeof squadFeatures, SquadRow>;
 
-const FLAG_KINDS = Object.keys(FLAG_DISPLAY) as FlagKind[];
+const FLAG_OPTIONS: [string, string][] = [
+  ["", "Everyone"],
+  ["any", "Any flag"],
+  ...(Object.keys(FLAG_DISPLAY) as FlagKind[]).map((k): [string, string] => [k, FLAG_DISPLAY[k].label]),
+];
 
 /** CSV of the rows as shown (filtered, sorted) and the visible columns. */
 function exportCsv(table: Table, week: string) {
@@ -44,39 +48,20 @@ export function SquadToolbar({
   const flags = table.getColumn("flags");
   return (
     <div className="relative flex flex-wrap items-end gap-3">
-      <label className="flex flex-col gap-1 text-xs font-medium text-ink-600">
-        Group
-        <Select
-          className="w-44"
-          data-testid="filter-group"
-          value={(group?.getFilterValue() as string | undefined) ?? ""}
-          onChange={(e) => group?.setFilterValue(e.target.value || undefined)}
-        >
-          <option value="">All groups</option>
-          {groups.map((g) => (
-            <option key={g.id} value={g.name}>
-              {g.name}
-            </option>
-          ))}
-        </Select>
-      </label>
-      <label className="flex flex-col gap-1 text-xs font-medium text-ink-600">
-        Flags
-        <Select
-          className="w-44"
-          data-testid="filter-flag"
-          value={(flags?.getFilterValue() as FlagFilter | undefined) ?? ""}
-          onChange={(e) => flags?.setFilterValue((e.target.value || undefined) as FlagFilter | undefined)}
-        >
-          <option value="">Everyone</option>
-          <option value="any">Any flag</option>
-          {FLAG_KINDS.map((k) => (
-            <option key={k} value={k}>
-              {FLAG_DISPLAY[k].label}
-            </option>
-          ))}
-        </Select>
-      </label>
+      <ToolbarSelect
+        label="Group"
+        testId="filter-group"
+        value={(group?.getFilterValue() as string | undefined) ?? ""}
+        onChange={(v) => group?.setFilterValue(v || undefined)}
+        options={[["", "All groups"], ...groups.map((g): [string, string] => [g.name, g.name])]}
+      />
+      <ToolbarSelect
+        label="Flags"
+        testId="filter-flag"
+        value={(flags?.getFilterValue() as FlagFilter | undefined) ?? ""}
+        onChange={(v) => flags?.setFilterValue((v || undefined) as FlagFilter | undefined)}
+        options={FLAG_OPTIONS}
+      />
       {/* Below sm the list spans the toolbar (it may sit at the right edge); from sm it hangs under its button. */}
       <details className="sm:relative">
         <summary

@@ -1,11 +1,12 @@
 "use client";
 
-import { clsx } from "clsx";
 import { useState } from "react";
 import { useTable, type ColumnFiltersState, type SortingState } from "@tanstack/react-table";
 import { Card, EmptyState } from "@/components/ui/card";
-import { Input, Select } from "@/components/ui/field";
+import { Input } from "@/components/ui/field";
 import { LoadCaution } from "@/components/ui/caution";
+import { SortHeader } from "@/components/ui/sort-header";
+import { ToolbarSelect } from "@/components/ui/toolbar-select";
 import { AVAILABILITY_LABEL, AVAILABILITY_LEVELS, type AvailabilityLevel } from "@/lib/availability/levels";
 import type { SquadStatusRow } from "@/lib/data/squad-status";
 import { STATUS_COLUMN_LABELS, statusColumns, statusFeatures, type AttentionFilter } from "./squad-status-columns";
@@ -17,6 +18,11 @@ const SORTS: Array<[string, string, boolean]> = [
   ["ratio", "ACWR, highest first", true],
   ["note", "Latest log note", true],
   ["pain", "Latest pain report", true],
+];
+
+const LEVEL_OPTIONS: [string, string][] = [
+  ["", "Everyone"],
+  ...AVAILABILITY_LEVELS.map((l): [string, string] => [l, AVAILABILITY_LABEL[l]]),
 ];
 
 /**
@@ -52,40 +58,24 @@ export function SquadStatusTable({ rows }: { rows: SquadStatusRow[] }) {
             data-testid="status-search"
           />
         </label>
-        <label className="flex flex-col gap-1 text-xs font-medium text-ink-600">
-          Availability
-          <Select
-            className="w-44"
-            value={(level?.getFilterValue() as string | undefined) ?? ""}
-            onChange={(e) => level?.setFilterValue((e.target.value || undefined) as AvailabilityLevel | undefined)}
-            data-testid="status-filter-level"
-          >
-            <option value="">Everyone</option>
-            {AVAILABILITY_LEVELS.map((l) => (
-              <option key={l} value={l}>
-                {AVAILABILITY_LABEL[l]}
-              </option>
-            ))}
-          </Select>
-        </label>
-        <label className="flex flex-col gap-1 text-xs font-medium text-ink-600">
-          Sort by
-          <Select
-            className="w-52"
-            value={sortKey}
-            onChange={(e) => {
-              const s = SORTS.find(([id]) => id === e.target.value);
-              setSorting(s ? [{ id: s[0], desc: s[2] }] : []);
-            }}
-            data-testid="status-sort"
-          >
-            {SORTS.map(([id, label]) => (
-              <option key={id} value={id}>
-                {label}
-              </option>
-            ))}
-          </Select>
-        </label>
+        <ToolbarSelect
+          label="Availability"
+          testId="status-filter-level"
+          value={(level?.getFilterValue() as string | undefined) ?? ""}
+          onChange={(v) => level?.setFilterValue((v || undefined) as AvailabilityLevel | undefined)}
+          options={LEVEL_OPTIONS}
+        />
+        <ToolbarSelect
+          label="Sort by"
+          testId="status-sort"
+          className="w-52"
+          value={sortKey}
+          onChange={(v) => {
+            const s = SORTS.find(([id]) => id === v);
+            setSorting(s ? [{ id: s[0], desc: s[2] }] : []);
+          }}
+          options={SORTS.map(([id, words]): [string, string] => [id, words])}
+        />
         <label className="flex h-10 items-center gap-2 text-sm text-ink-800">
           <input
             type="checkbox"
@@ -104,28 +94,17 @@ export function SquadStatusTable({ rows }: { rows: SquadStatusRow[] }) {
           <thead className="border-b border-ink-100 text-left text-xs text-ink-500 max-md:sr-only">
             {table.getHeaderGroups().map((group) => (
               <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  return (
-                    <th
-                      key={header.id}
-                      scope="col"
-                      aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : "none"}
-                      className="px-3 py-2.5 font-medium"
-                    >
-                      <button
-                        type="button"
-                        onClick={header.column.getToggleSortingHandler()}
-                        className={clsx("inline-flex items-center gap-1 hover:text-ink-900", sorted && "text-ink-900")}
-                      >
-                        <table.FlexRender header={header} />
-                        <span aria-hidden className="w-3">
-                          {sorted === "asc" ? "↑" : sorted === "desc" ? "↓" : ""}
-                        </span>
-                      </button>
-                    </th>
-                  );
-                })}
+                {group.headers.map((header) => (
+                  <SortHeader
+                    key={header.id}
+                    sorted={header.column.getIsSorted()}
+                    onSort={header.column.getToggleSortingHandler()}
+                    testId={`status-sort-${header.column.id}`}
+                    className="px-3 py-2.5 text-left"
+                  >
+                    <table.FlexRender header={header} />
+                  </SortHeader>
+                ))}
               </tr>
             ))}
           </thead>

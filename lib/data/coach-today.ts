@@ -8,6 +8,7 @@ import { describeRestriction, lastDay } from "@/lib/restrictions/rules";
 import { listAlerts } from "./alerts";
 import { getLedgerWeek } from "./load-ledger";
 import { getTeamClock } from "./load";
+import { recentLogNotes, type LogNote } from "./log-notes";
 import { loadSessions } from "./plan-rows";
 import { listRestrictions } from "./restrictions";
 import { listRetestsDue, type RetestDue } from "./speed-views";
@@ -65,9 +66,12 @@ export type CoachTodayDto = {
   retests: RetestDue[];
   /** The team's re-test interval in weeks (the speed lab's setting). */
   retestWeeks: number;
+  /** Log notes of the sessions of the last 7 days, newest session first. */
+  notes: LogNote[];
 };
 
 const ALERTS_SHOWN = 8;
+const NOTES_SHOWN = 6;
 
 /** A coach's day (issue 13): every list reads the same repositories and ledger as the screen that handles it. */
 export async function getCoachToday({
@@ -86,7 +90,7 @@ export async function getCoachToday({
   const weekStart = startOfWeek(now, probe.weekStartDay);
   const weekEnd = addDays(weekStart, 6);
   const nextWeek = addDays(weekStart, 7);
-  const [rows, alerts, thisWeek, next, restrictions, retest] = await Promise.all([
+  const [rows, alerts, thisWeek, next, restrictions, retest, notes] = await Promise.all([
     loadSessions({ teamId, date: { [Op.between]: [weekStart, now] }, status: { [Op.ne]: "cancelled" } }),
     listAlerts({ teamId, userId, query: { status: "unresolved", limit: 200 } }),
     getLedgerWeek({ teamId, weekStart, today: now, view: "projected" }),
@@ -94,6 +98,7 @@ export async function getCoachToday({
     now === weekStart ? null : getLedgerWeek({ teamId, weekStart: nextWeek, today: now, view: "projected" }),
     listRestrictions({ teamId, from: weekStart }),
     listRetestsDue({ teamId, today: now }),
+    recentLogNotes({ teamId, since: addDays(now, -6), limit: NOTES_SHOWN }),
   ]);
   // The ledger week reads every athlete of the team, so it names everyone the other lists mention.
   const names = new Map(thisWeek.athletes.map((a) => [a.id, a.name]));
@@ -162,5 +167,6 @@ export async function getCoachToday({
     restrictions: changes,
     retests: retest.due,
     retestWeeks: retest.retestWeeks,
+    notes,
   };
 }

@@ -1,7 +1,9 @@
 import "server-only";
 import { Op } from "sequelize";
 import type { Completion } from "@/lib/domain/sessions";
+import { mentionsPain } from "@/lib/domain/wellbeing";
 import { db } from "@/models";
+import { painReportsBySession, type PainReportValues } from "./pain-reports";
 import { countSessionMessages } from "./session-messages";
 
 export type LogNote = {
@@ -18,6 +20,10 @@ export type LogNote = {
   loggedAt: string;
   /** Messages in the session's thread. */
   messages: number;
+  /** The pain report written with the log, if any. */
+  pain: PainReportValues | null;
+  /** A pain report, or a note that speaks of pain (`mentionsPain`): the physio's screens show these. */
+  aboutPain: boolean;
 };
 
 /**
@@ -58,17 +64,26 @@ export async function recentLogNotes({
     ],
     limit,
   });
-  const counts = await countSessionMessages({ sessionIds: rows.map((r) => r.sessionId) });
-  return rows.map((r) => ({
-    sessionId: r.sessionId,
-    athleteId: r.athleteId,
-    athleteName: r.athlete!.name,
-    date: String(r.session!.date).slice(0, 10),
-    title: r.session!.title,
-    note: r.notes ?? "",
-    completion: r.completion,
-    rpe: r.rpe,
-    loggedAt: r.updatedAt.toISOString(),
-    messages: counts.get(r.sessionId) ?? 0,
-  }));
+  const sessionIds = rows.map((r) => r.sessionId);
+  const [counts, pains] = await Promise.all([
+    countSessionMessages({ sessionIds }),
+    painReportsBySession({ sessionIds }),
+  ]);
+  return rows.map((r) => {
+    const pain = pains.get(r.sessionId);
+    return {
+      sessionId: r.sessionId,
+      athleteId: r.athleteId,
+      athleteName: r.athlete!.name,
+      date: String(r.session!.date).slice(0, 10),
+      title: r.session!.title,
+      note: r.notes ?? "",
+      completion: r.completion,
+      rpe: r.rpe,
+      loggedAt: r.updatedAt.toISOString(),
+      messages: counts.get(r.sessionId) ?? 0,
+      pain: pain ? { region: pain.region, severity: pain.severity, stoppedSession: pain.stoppedSession } : null,
+      aboutPain: Boolean(pain) || mentionsPain(r.notes ?? ""),
+    };
+  });
 }

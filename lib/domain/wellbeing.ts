@@ -30,6 +30,21 @@ export const BODY_REGION_LABEL: Record<BodyRegion, string> = {
   other: "Somewhere else",
 };
 
+/**
+ * Words that make a log note the physio's business even without a pain report: our own short list of how athletes
+ * describe a niggle ("Felt a twinge in the left hamstring", "calf a bit tight").
+ */
+const PAIN_WORDS = new Set([
+  ...["pain", "painful", "hurt", "hurts", "hurting", "sore", "soreness", "twinge", "twinged", "tight", "tightness"],
+  ...["ache", "aches", "aching", "strain", "strained", "pulled", "niggle", "cramp", "cramped", "injury", "injured"],
+  ...["swollen", "swelling", "stiff", "tender"],
+]);
+
+/** A note that speaks of pain: one of the words above as a whole word, in any case. */
+export function mentionsPain(note: string): boolean {
+  return (note.toLowerCase().match(/\p{L}+/gu) ?? []).some((w) => PAIN_WORDS.has(w));
+}
+
 /** How bad, 0 (none) to 10 (worst imaginable): an 11-point numeric rating scale (common practice). */
 export const PAIN_MIN = 0;
 export const PAIN_MAX = 10;

@@ -112,6 +112,30 @@ await d.Alert.create({
   resolvedAt: null,
 });
 
+// Notes on logs: Ada's on Monday and (with a pain report) three days ago are of the last 7 days; Ben's of 9 days
+// ago is not.
+async function noteOn(athleteId: number, date: string, notes: string) {
+  const [log] = await d.SessionLog.findAll({
+    where: { athleteId },
+    include: [{ model: d.PlannedSession, as: "session", where: { date }, required: true }],
+  });
+  await log.update({ notes });
+  return log.sessionId;
+}
+const mondayNote = await noteOn(ada.athleteId!, WEEK, "Felt quick today.");
+const painNote = await noteOn(ada.athleteId!, addDays(TODAY, -3), "Left calf a bit tight on the last run.");
+await d.PainReport.create({
+  teamId: t.teamId,
+  athleteId: ada.athleteId!,
+  sessionId: painNote,
+  date: addDays(TODAY, -3),
+  region: "calf",
+  severity: 2,
+  stoppedSession: false,
+  alertId: null,
+});
+await noteOn(ben.athleteId!, addDays(TODAY, -9), "Old news.");
+
 const today = await getCoachToday({ teamId: t.teamId, userId: coach.userId, today: TODAY });
 
 describe("the coach's Today", () => {
@@ -158,5 +182,14 @@ describe("the coach's Today", () => {
     expect(today.spikes.map((s) => ({ athleteId: s.athleteId, ratio: s.ratio }))).toEqual(expected);
     expect(today.spikes[0].date > TODAY).toBe(true);
     expect(today.spikes[0].provisional).toBe(false);
+  });
+
+  it("gives the athletes' log notes of the last 7 days, newest first, with a pain report where there is one", () => {
+    expect(today.notes.map((n) => [n.sessionId, n.athleteName, n.note, n.aboutPain])).toEqual([
+      [mondayNote, "Ada Athlete", "Felt quick today.", false],
+      [painNote, "Ada Athlete", "Left calf a bit tight on the last run.", true],
+    ]);
+    expect(today.notes[1].pain).toEqual({ region: "calf", severity: 2, stoppedSession: false });
+    expect(today.notes[0].pain).toBeNull();
   });
 });

@@ -1,8 +1,11 @@
 import Link from "next/link";
+import { AthletePlanActual } from "@/components/coach/athlete-plan-actual";
 import { AthleteLoadView } from "@/components/load/athlete-load-view";
 import { PageHeader } from "@/components/ui/card";
 import { pageAthlete } from "@/lib/auth/page-access";
 import { getAthleteLoad } from "@/lib/data/load-views";
+import { getPlanVersusActual } from "@/lib/data/plan-vs-actual";
+import { viewerClock } from "@/lib/dates/zoned";
 import { PLYO_LEVEL_LABEL, formatSpeed } from "@/lib/format/athlete";
 
 export const metadata = { title: "Athlete load" };
@@ -19,6 +22,15 @@ export default async function AthleteLoadPage({ params }: { params: Promise<{ at
   });
   const p = initial.athlete.profile;
   const staff = viewer.role !== "athlete";
+  // Staff see what was prescribed against what was done, the squad screen's figures for this athlete alone.
+  const planActual = staff
+    ? await getPlanVersusActual({
+        teamId: viewer.athlete.teamId,
+        athleteIds: [viewer.athlete.id],
+        weeks: 8,
+        clock: viewerClock(viewer),
+      })
+    : null;
   return (
     <>
       <PageHeader
@@ -39,6 +51,11 @@ export default async function AthleteLoadPage({ params }: { params: Promise<{ at
         }
       />
       <AthleteLoadView initial={initial} />
+      {planActual?.athletes[0] ? (
+        <div className="mt-8">
+          <AthletePlanActual weeks={planActual.athletes[0].weeks} athleteName={initial.athlete.name} />
+        </div>
+      ) : null}
     </>
   );
 }

@@ -79,8 +79,9 @@ export default async function AthleteStatusPage({ params }: { params: Promise<{ 
           <h2 className="mb-3 font-semibold text-ink-950">Next 7 days</h2>
           {days.length === 0 ? <p className="text-sm text-ink-500">Nothing planned.</p> : null}
           <ul className="divide-y divide-ink-100">
+            {/* `#session-` is the log below (mails and the coach's Today link there); today's session is in both lists. */}
             {days.map((s) => (
-              <li key={s.sessionId} id={`session-${s.sessionId}`} className="py-2.5 text-sm" data-testid="next-day">
+              <li key={s.sessionId} id={`next-${s.sessionId}`} className="py-2.5 text-sm" data-testid="next-day">
                 <p className="flex flex-wrap items-center gap-2">
                   <span className="font-medium text-ink-900">
                     {formatDayLabel(s.date)} {s.startTime} · {s.title}
