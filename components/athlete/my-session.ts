@@ -23,4 +23,6 @@ export type MySession = {
   restrictions: string[];
   /** What in this session goes past one of those limits. */
   breaches: string[];
+  /** Restrictions set after the session was sent that it now breaks and the coach has not planned past (in words). */
+  medicalChanges: string[];
 };

@@ -2,6 +2,7 @@ import "server-only";
 import { listAthleteSessions } from "@/lib/data/calendar-tokens";
 import { painReportsBySession } from "@/lib/data/pain-reports";
 import { listRestrictions } from "@/lib/data/restrictions";
+import { medicalChangesFor } from "@/lib/data/session-conflicts";
 import { zonedLabel } from "@/lib/dates/zoned";
 import { formatDayLong } from "@/lib/format/dates";
 import { describeRestriction, isActiveOn, restrictionHits } from "@/lib/restrictions/rules";
@@ -27,9 +28,10 @@ export async function listMySessions({
   now: Date;
 }): Promise<MySession[]> {
   const sessions = await listAthleteSessions({ teamId, athleteId, from, to });
-  const [pain, restrictions] = await Promise.all([
+  const [pain, restrictions, changed] = await Promise.all([
     painReportsBySession({ sessionIds: sessions.map((s) => s.sessionId) }),
     listRestrictions({ teamId, athleteIds: [athleteId], from }),
+    medicalChangesFor({ teamId, athleteId, from }),
   ]);
   return Promise.all(
     sessions.map(async (s): Promise<MySession> => {
@@ -65,6 +67,7 @@ export async function listMySessions({
         breaches: restrictionHits(restrictions, { athleteId, date: s.date, status: s.status, blocks: s.blocks }).map(
           (h) => h.detail,
         ),
+        medicalChanges: changed.get(s.sessionId) ?? [],
       };
     }),
   );

@@ -1,5 +1,6 @@
 import { blockDescription } from "@/lib/format/block-summary";
 import { formatMinutes } from "@/lib/format/duration";
+import { MEDICAL_CHANGE_NOTICE } from "@/lib/restrictions/conflicts";
 import type { MySession } from "./my-session";
 
 /** A session in plain words: start time, blocks, the coach's notes and any limit from the medical staff. */
@@ -10,14 +11,18 @@ export function SessionDetails({ session }: { session: MySession }) {
         Starts {session.startTime} · about {formatMinutes(session.durationMin)} · planned effort RPE{" "}
         {session.plannedRpe}
       </p>
-      {session.breaches.length > 0 ? (
-        <p
+      {session.medicalChanges.length > 0 ? (
+        <div
           role="note"
-          className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm font-medium text-flag-spike"
-          data-testid="session-breach"
+          className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike"
+          data-testid="session-medical-change"
         >
-          Changed by your medical staff: check with your coach. ({session.breaches.join("; ")})
-        </p>
+          <p className="font-medium">{MEDICAL_CHANGE_NOTICE}.</p>
+          <p className="mt-0.5">
+            Your medical staff set a limit after this session was planned, and the session goes past it:{" "}
+            {session.medicalChanges.join("; ")}.
+          </p>
+        </div>
       ) : null}
       <ol className="space-y-2 text-sm text-ink-700" data-testid="session-blocks">
         {session.blocks.map((b, i) => (
@@ -43,6 +48,11 @@ export function SessionDetails({ session }: { session: MySession }) {
               <li key={r}>{r}</li>
             ))}
           </ul>
+          {session.breaches.length > 0 ? (
+            <p className="mt-1" data-testid="session-breach">
+              Past the limit in this session: {session.breaches.join("; ")}.
+            </p>
+          ) : null}
         </div>
       ) : null}
     </div>

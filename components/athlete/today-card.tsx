@@ -75,6 +75,11 @@ export function WeekList({
                     >
                       {s.title}
                     </span>
+                    {s.medicalChanges.length > 0 ? (
+                      <Badge tone="spike" className="shrink-0">
+                        Medical change
+                      </Badge>
+                    ) : null}
                     <LogBadge session={s} />
                   </span>
                 }

@@ -12,6 +12,8 @@ import { countSessionMessages } from "./session-messages";
 export type MedicalLogRow = {
   sessionId: number;
   date: string;
+  startTime: string;
+  durationMin: number;
   title: string;
   completion: Completion;
   rpe: number | null;
@@ -41,7 +43,7 @@ export async function recentAthleteLogs({
       {
         model: PlannedSession,
         as: "session",
-        attributes: ["id", "date", "title"],
+        attributes: ["id", "date", "startTime", "durationMin", "title"],
         where: { teamId, date: { [Op.between]: [addDays(today, -days), today] } },
         required: true,
       },
@@ -56,6 +58,8 @@ export async function recentAthleteLogs({
   return rows.map((r) => ({
     sessionId: r.sessionId,
     date: String(r.session!.date).slice(0, 10),
+    startTime: r.session!.startTime,
+    durationMin: r.session!.durationMin,
     title: r.session!.title,
     completion: r.completion,
     rpe: r.rpe,

@@ -1,11 +1,13 @@
 // The athlete's day on a phone (390 × 844): today's session at the top in plain words, logged in a sheet with
 // two of three blocks done, RPE 7 for 60 minutes and mild calf pain, then the week's load moves; "My load" shows
-// only their own figures; axe finds no serious or critical violation; a Sunday-start team's "this week".
+// only their own figures; axe finds no serious or critical violation; a session a later restriction breaks is
+// marked as changed by the medical staff; a Sunday-start team's "this week" runs Sunday to Saturday.
 import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { teamToday } from "@/lib/dates/zoned";
 import { formatDayShort } from "@/lib/format/dates";
+import { MEDICAL_CHANGE_NOTICE } from "@/lib/restrictions/conflicts";
 import { createAppTeam } from "../helpers/app-team";
 import { TEST_PASSWORD } from "../helpers/fixtures";
 import { seriousAxeViolations } from "./axe";
@@ -23,7 +25,14 @@ describeBrowser("athlete's day on the phone", () => {
   const today = teamToday({ timeZone: "Europe/London", now: new Date() });
   const sqlNow = () => new Date().toISOString().replace("T", " ").replace("Z", " +00:00");
 
-  async function addSession(athleteId: number, date: string, title: string, blocks: string[], notes: string | null) {
+  async function addSession(
+    athleteId: number,
+    date: string,
+    title: string,
+    blocks: string[],
+    notes: string | null,
+    kind = "acceleration",
+  ) {
     const now = sqlNow();
     await app.query(
       "INSERT INTO planned_sessions (team_id, athlete_id, date, start_time, duration_min, title, planned_rpe, status, " +
@@ -44,8 +53,8 @@ describeBrowser("athlete's day on the phone", () => {
     for (const [position, name] of blocks.entries())
       await app.query(
         "INSERT INTO session_blocks (session_id, template_id, position, kind, title, running, drills, notes, " +
-          "created_at, updated_at) VALUES (?, NULL, ?, 'acceleration', ?, ?, NULL, NULL, ?, ?)",
-        [id, position, name, running, now, now],
+          "created_at, updated_at) VALUES (?, NULL, ?, ?, ?, ?, NULL, NULL, ?, ?)",
+        [id, position, kind, name, running, now, now],
       );
     return id;
   }
@@ -170,18 +179,72 @@ describeBrowser("athlete's day on the phone", () => {
     await page.close();
   }, 60_000);
 
-  it("starts 'this week' on Sunday for a Sunday-start team", async () => {
+  it("marks a session that a restriction set after it was sent now breaks, and only that one", async () => {
+    const ada = team.users[ADA].athleteId!;
+    const flys = await addSession(ada, addDays(today, 2), "Top speed flys", ["Flying 30s"], null, "max_velocity");
+    const starts = await addSession(ada, addDays(today, 3), "Short starts", ["Two-point starts"], null);
+    // The physio's limit comes after both sessions were published (as when it is set on the squad status screen).
+    await app.query(
+      "INSERT INTO restrictions (team_id, athlete_id, rule, block_kinds, limit_value, starts_on, ends_on, lifted_on, note, " +
+        "created_by, lifted_by, created_at, updated_at) VALUES (?, ?, 'no_kind', ?, NULL, ?, NULL, NULL, 'Hamstring care', " +
+        "NULL, NULL, ?, ?)",
+      [team.teamId, ada, JSON.stringify(["max_velocity"]), today, sqlNow(), sqlNow()],
+    );
+    const page = await context.newPage();
+    await page.goto(`${app.url}/me`);
+    const row = (id: number) => page.locator(`[data-testid="my-session"][data-session-id="${id}"]`);
+    await row(flys).waitFor();
+    expect(await row(flys).innerText()).toContain("Medical change");
+    expect(await row(starts).innerText()).not.toContain("Medical change");
+    // Today's session (acceleration only) breaks nothing: no mark at the top.
+    expect(await page.getByTestId("today-session").getByTestId("session-medical-change").count()).toBe(0);
+    await noSidewaysScroll(page);
+    expect(await seriousAxeViolations(page)).toEqual([]);
+
+    await row(flys).getByTestId("open-session").click();
+    const sheet = page.locator(`dialog[open][data-testid="session-sheet"]`);
+    const mark = sheet.getByTestId("session-medical-change");
+    await mark.waitFor();
+    const words = await mark.innerText();
+    expect(words).toContain(MEDICAL_CHANGE_NOTICE);
+    expect(words).toMatch(/No max velocity/);
+    expect(await seriousAxeViolations(page)).toEqual([]);
+    await screenshot(page, "athlete-day-medical-change");
+    await page.keyboard.press("Escape");
+    await sheet.waitFor({ state: "hidden" });
+
+    await row(starts).getByTestId("open-session").click();
+    await sheet.waitFor();
+    expect(await sheet.getByTestId("session-medical-change").count()).toBe(0);
+    await app.query("DELETE FROM restrictions WHERE note = 'Hamstring care'");
+    await page.close();
+  }, 60_000);
+
+  it("runs 'this week' Sunday to Saturday for a Sunday-start team", async () => {
     await app.query("UPDATE teams SET week_start_day = 7 WHERE id = ?", [team.teamId]);
     const sunday = startOfWeek(today, 7);
     const ada = team.users[ADA].athleteId!;
-    const before = addDays(sunday, -1);
-    await addSession(ada, before, "Saturday before the week", [], null);
+    // The days that differ from a Monday week: the Saturday before, this week's Sunday and the next Sunday.
+    const saturdayBefore = await addSession(ada, addDays(sunday, -1), "Saturday before the week", [], null);
+    const firstDay = await addSession(ada, sunday, "Sunday that opens the week", [], null);
+    const nextSunday = await addSession(ada, addDays(sunday, 7), "Sunday that opens next week", [], null);
     const page = await context.newPage();
     await page.goto(`${app.url}/me`);
-    const week = page.getByTestId("week-this");
-    await week.waitFor();
-    expect(await week.textContent()).toContain(`from ${formatDayShort(sunday)}`);
+    const thisWeek = page.getByTestId("week-this");
+    const nextWeek = page.getByTestId("week-next");
+    await thisWeek.waitFor();
+    expect(await thisWeek.textContent()).toContain(`from ${formatDayShort(sunday)}`);
+    expect(await nextWeek.textContent()).toContain(`from ${formatDayShort(addDays(sunday, 7))}`);
+    const ids = async (list: typeof thisWeek) =>
+      await list.getByTestId("my-session").evaluateAll((els) => els.map((e) => Number(e.dataset.sessionId)));
+    const hero = Number(await page.getByTestId("today-session").getAttribute("data-session-id"));
+    // Today's hero is shown above the lists; when the Sunday is today it is the hero instead of a row.
+    expect(firstDay === hero || (await ids(thisWeek)).includes(firstDay)).toBe(true);
+    expect(await ids(thisWeek)).not.toContain(nextSunday);
+    expect(await ids(nextWeek)).toContain(nextSunday);
+    expect([...(await ids(thisWeek)), ...(await ids(nextWeek))]).not.toContain(saturdayBefore);
     expect(await page.getByText("Saturday before the week").count()).toBe(0);
+    await noSidewaysScroll(page);
     await app.query("UPDATE teams SET week_start_day = 1 WHERE id = ?", [team.teamId]);
     await page.close();
   }, 60_000);

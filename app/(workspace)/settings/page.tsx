@@ -1,15 +1,20 @@
 import { ThresholdsForm } from "@/components/load/thresholds-form";
+import { AthleteReportsForm } from "@/components/settings/athlete-reports-form";
 import { WeekStartForm } from "@/components/settings/week-start-form";
 import { Card, PageHeader } from "@/components/ui/card";
 import { LoadCaution } from "@/components/ui/caution";
 import { pageViewer } from "@/lib/auth/page-access";
+import { getAthleteReportSettings } from "@/lib/data/athlete-report-settings";
 import { getTeamLoadSettings } from "@/lib/data/team-settings";
 
 export const metadata = { title: "Thresholds" };
 
 export default async function ThresholdsPage() {
   const viewer = await pageViewer("settings:edit");
-  const settings = await getTeamLoadSettings({ teamId: viewer.teamId });
+  const [settings, reports] = await Promise.all([
+    getTeamLoadSettings({ teamId: viewer.teamId }),
+    getAthleteReportSettings({ teamId: viewer.teamId }),
+  ]);
   return (
     <>
       <PageHeader
@@ -22,6 +27,10 @@ export default async function ThresholdsPage() {
       <Card className="mb-4 p-5">
         <h2 className="mb-3 text-sm font-semibold text-ink-900">Training week</h2>
         <WeekStartForm teamId={viewer.teamId} initial={{ weekStartDay: viewer.weekStartDay === 7 ? 7 : 1 }} />
+      </Card>
+      <Card className="mb-4 p-5">
+        <h2 className="mb-3 text-sm font-semibold text-ink-900">Athlete reports</h2>
+        <AthleteReportsForm teamId={viewer.teamId} initial={reports} />
       </Card>
       <Card className="p-5">
         <ThresholdsForm teamId={viewer.teamId} initial={settings} />

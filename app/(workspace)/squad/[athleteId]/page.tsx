@@ -5,9 +5,11 @@ import { pageAthlete } from "@/lib/auth/page-access";
 import { FeedCard } from "@/components/calendar/feed-card";
 import { AthleteRestrictions } from "@/components/restrictions/athlete-restrictions";
 import { AthleteForm } from "@/components/squad/athlete-form";
+import { AthleteLogs } from "@/components/squad/athlete-logs";
 import { scopeOf } from "@/lib/auth/permissions";
 import { getAthlete, listGroups } from "@/lib/data/athletes";
 import { getCalendarFeedStatus } from "@/lib/data/calendar-tokens";
+import { teamToday } from "@/lib/dates/zoned";
 import { PLYO_LEVEL_LABEL, formatSpeed } from "@/lib/format/athlete";
 
 export default async function AthleteProfilePage({ params }: { params: Promise<{ athleteId: string }> }) {
@@ -19,6 +21,7 @@ export default async function AthleteProfilePage({ params }: { params: Promise<{
   const groups = canEdit ? await listGroups({ teamId: viewer.teamId }) : [];
   const canManageFeed = scopeOf(viewer.role, "calendar:manage") === "team";
   const feed = canManageFeed ? await getCalendarFeedStatus({ athleteId: athlete.id }) : null;
+  const staff = scopeOf(viewer.role, "athletes:view") === "team";
   const facts: [string, string][] = [
     ["Training group", athlete.groupName ?? "None"],
     ["Max velocity", formatSpeed(athlete.vmaxMs)],
@@ -53,6 +56,17 @@ export default async function AthleteProfilePage({ params }: { params: Promise<{
       <div className="mt-6">
         <AthleteRestrictions viewer={viewer} athleteId={athlete.id} />
       </div>
+      {staff ? (
+        <div className="mt-6">
+          <AthleteLogs
+            teamId={viewer.teamId}
+            athleteId={athlete.id}
+            today={teamToday({ timeZone: viewer.timeZone, now: new Date() })}
+            timeZone={viewer.timeZone}
+            canReopen={scopeOf(viewer.role, "log:unlock") === "team"}
+          />
+        </div>
+      ) : null}
       {feed ? (
         <div className="mt-6">
           <FeedCard athleteId={athlete.id} initial={feed} />
