@@ -32,6 +32,21 @@ describeBrowser("athletes' reports, the staff's side", () => {
     return id;
   }
 
+  /** A published session of Ada's with her log, written straight to SQLite (the log closed if the day is old). */
+  async function loggedSession(
+    date: string,
+    title: string,
+    log: { rpe: number; minutes: number; notes: string | null },
+  ) {
+    const sessionId = await publishedSession(date, title);
+    await app.query(
+      "INSERT INTO session_logs (session_id, athlete_id, completion, rpe, minutes, completed_reps, notes, created_at, " +
+        "updated_at) VALUES (?, ?, 'yes', ?, ?, NULL, ?, ?, ?)",
+      [sessionId, team.users[ADA].athleteId, log.rpe, log.minutes, log.notes, sqlNow(), sqlNow()],
+    );
+    return sessionId;
+  }
+
   async function phone(): Promise<{ context: BrowserContext; page: Page }> {
     const context = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
     return { context, page: await context.newPage() };
@@ -51,12 +66,11 @@ describeBrowser("athletes' reports, the staff's side", () => {
   });
 
   it("a coach reopens a closed log from the athlete's page; the athlete can change it again", async () => {
-    const sessionId = await publishedSession(addDays(today, -5), "Hill sprints five days ago");
-    await app.query(
-      "INSERT INTO session_logs (session_id, athlete_id, completion, rpe, minutes, completed_reps, notes, created_at, " +
-        "updated_at) VALUES (?, ?, 'yes', 6, 50, NULL, 'Legs heavy at the end', ?, ?)",
-      [sessionId, team.users[ADA].athleteId, sqlNow(), sqlNow()],
-    );
+    const sessionId = await loggedSession(addDays(today, -5), "Hill sprints five days ago", {
+      rpe: 6,
+      minutes: 50,
+      notes: "Legs heavy at the end",
+    });
     const athlete = await apiSession(app, ADA, TEST_PASSWORD);
     const write = () =>
       athlete.fetch(`/api/sessions/${sessionId}/log`, {
@@ -107,12 +121,11 @@ describeBrowser("athletes' reports, the staff's side", () => {
   }, 120_000);
 
   it("a physio sees a closed log but has no button to reopen it", async () => {
-    const sessionId = await publishedSession(addDays(today, -6), "Tempo six days ago");
-    await app.query(
-      "INSERT INTO session_logs (session_id, athlete_id, completion, rpe, minutes, completed_reps, notes, created_at, " +
-        "updated_at) VALUES (?, ?, 'yes', 5, 40, NULL, NULL, ?, ?)",
-      [sessionId, team.users[ADA].athleteId, sqlNow(), sqlNow()],
-    );
+    const sessionId = await loggedSession(addDays(today, -6), "Tempo six days ago", {
+      rpe: 5,
+      minutes: 40,
+      notes: null,
+    });
     const { context, page } = await phone();
     await signIn(page, app, "physio@reopenclub.test", TEST_PASSWORD);
     await page.goto(`${app.url}/squad/${team.users[ADA].athleteId}`);
