@@ -242,8 +242,12 @@ describeBrowser("planner journeys", () => {
     await page.getByTestId("plan-grid").waitFor();
     expect(await row(page, ruben).getByTestId("row-restriction").textContent()).toMatch(/Physio restriction/);
 
-    // Hovering says so before the drop; dropping asks why; "keep the plan" saves nothing.
+    // Hovering says so before the drop; dropping asks why; "keep the plan" saves nothing. Ruben's row is the last
+    // one: held near the window's bottom edge, the drag would scroll the page and the drop land on another row,
+    // so the day is brought to the middle first (the shelf stays in view beside it).
     const target = cell(page, ruben, day(2));
+    const centre = () => target.evaluate((el) => el.scrollIntoView({ block: "center" }));
+    await centre();
     await drag(page, template(page, "max_velocity"), target, {
       hold: async () => {
         await page.getByTestId("drop-restriction").waitFor({ timeout: 5000 });
@@ -259,6 +263,7 @@ describeBrowser("planner journeys", () => {
     expect(await cards(page, ruben, day(2)).count()).toBe(0);
 
     // Again, with a reason (a too-short one is refused in the form first).
+    await centre();
     await drag(page, template(page, "max_velocity"), target);
     await dialog.getByTestId("override-reason").fill("ok");
     await dialog.getByTestId("override-confirm").click();
