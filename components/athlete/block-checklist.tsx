@@ -97,7 +97,7 @@ export function BlockChecklist({
                 ) : null}
               </div>
               {error ? (
-                <p role="alert" className="mt-1 text-xs font-medium text-flag-spike">
+                <p role="alert" className="mt-1 text-xs font-medium text-form-error">
                   {error}
                 </p>
               ) : null}

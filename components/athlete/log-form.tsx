@@ -182,7 +182,7 @@ export function LogForm({
         <Button type="submit" size="lg" disabled={formState.isSubmitting} className="w-full" data-testid="log-save">
           {log ? "Update my log" : "Save my log"}
         </Button>
-        <p aria-live="polite" className="text-sm font-medium text-flag-spike" data-testid="log-status">
+        <p aria-live="polite" className="text-sm font-medium text-form-error" data-testid="log-status">
           {message}
         </p>
       </div>

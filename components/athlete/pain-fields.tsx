@@ -82,7 +82,7 @@ export function PainFields({
               ))}
             </div>
             {errors["pain.severity"] ? (
-              <p role="alert" className="mt-1 text-xs font-medium text-flag-spike">
+              <p role="alert" className="mt-1 text-xs font-medium text-form-error">
                 {errors["pain.severity"]}
               </p>
             ) : null}

@@ -45,7 +45,7 @@ export function RpeScale({
         ))}
       </div>
       {error ? (
-        <p role="alert" className="mt-1 text-xs font-medium text-flag-spike">
+        <p role="alert" className="mt-1 text-xs font-medium text-form-error">
           {error}
         </p>
       ) : null}

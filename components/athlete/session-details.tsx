@@ -14,7 +14,7 @@ export function SessionDetails({ session }: { session: MySession }) {
       {session.medicalChanges.length > 0 ? (
         <div
           role="note"
-          className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike"
+          className="rounded-lg bg-form-error-soft px-3 py-2 text-sm text-form-error"
           data-testid="session-medical-change"
         >
           <p className="font-medium">{MEDICAL_CHANGE_NOTICE}.</p>

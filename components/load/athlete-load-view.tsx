@@ -98,7 +98,7 @@ export function AthleteLoadView({ initial }: { initial: AthleteLoadDto }) {
         </label>
       </div>
       {error ? (
-        <p className="rounded-lg bg-flag-spike-soft px-3 py-2 text-sm text-flag-spike">{(error as Error).message}</p>
+        <p className="rounded-lg bg-form-error-soft px-3 py-2 text-sm text-form-error">{(error as Error).message}</p>
       ) : null}
       {/* Busy, not dimmed: text at reduced opacity falls below 4.5:1 while the figures reload. */}
       <Card className="p-4 sm:p-5" aria-busy={isValidating || undefined}>

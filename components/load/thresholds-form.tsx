@@ -255,7 +255,7 @@ export function ThresholdsForm({ teamId, initial }: { teamId: number; initial: T
             ))}
           </div>
           {errors.recoveryWork ? (
-            <p role="alert" className="mt-1 text-xs font-medium text-flag-spike">
+            <p role="alert" className="mt-1 text-xs font-medium text-form-error">
               {errors.recoveryWork.message}
             </p>
           ) : null}

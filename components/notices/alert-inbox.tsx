@@ -77,7 +77,7 @@ export function AlertInbox({ canManage }: { canManage: boolean }) {
         ))}
       </div>
       {error ? (
-        <p role="alert" className="text-sm text-flag-spike">
+        <p role="alert" className="text-sm text-form-error">
           {(error as Error).message}
         </p>
       ) : null}

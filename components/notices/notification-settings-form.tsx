@@ -41,7 +41,7 @@ export function NotificationSettingsForm() {
         <legend className="font-semibold text-ink-950">Alert e-mails</legend>
         <p className="mt-1 text-sm text-ink-500">How you hear about new load flags for this team.</p>
         {error ? (
-          <p role="alert" className="mt-2 text-sm text-flag-spike">
+          <p role="alert" className="mt-2 text-sm text-form-error">
             {(error as Error).message}
           </p>
         ) : null}

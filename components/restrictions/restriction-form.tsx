@@ -94,7 +94,7 @@ export function RestrictionForm({
             ))}
           </div>
           {errors.blockKinds?.message ? (
-            <p id={id("blockKinds-error")} role="alert" className="text-xs font-medium text-flag-spike">
+            <p id={id("blockKinds-error")} role="alert" className="text-xs font-medium text-form-error">
               {errors.blockKinds.message}
             </p>
           ) : null}

@@ -57,7 +57,7 @@ export function RestrictionsCard({
         Limits the medical staff put on this athlete&apos;s training. The week plan warns before a session breaks one.
       </p>
       {error || failure ? (
-        <p role="alert" className="mt-3 text-sm text-flag-spike">
+        <p role="alert" className="mt-3 text-sm text-form-error">
           {failure ?? (error as Error).message}
         </p>
       ) : null}

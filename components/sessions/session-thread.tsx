@@ -56,7 +56,7 @@ export function SessionThread({ sessionId, className }: { sessionId: number; cla
       <h3 id={`${inputId}-title`} className="font-semibold text-ink-950">
         Log note and messages
       </h3>
-      {error ? <p className="text-flag-spike">Could not load the messages: {(error as Error).message}</p> : null}
+      {error ? <p className="text-form-error">Could not load the messages: {(error as Error).message}</p> : null}
       {data?.log ? (
         <div className="rounded-lg bg-paper-sunk/60 p-3" data-testid="log-note">
           <p className="text-xs text-ink-500">
@@ -98,12 +98,12 @@ export function SessionThread({ sessionId, className }: { sessionId: number; cla
           {...form.register("body")}
         />
         {bodyError ? (
-          <p id={`${inputId}-error`} role="alert" className="text-xs font-medium text-flag-spike">
+          <p id={`${inputId}-error`} role="alert" className="text-xs font-medium text-form-error">
             {bodyError}
           </p>
         ) : null}
         {failure ? (
-          <p role="alert" className="text-xs font-medium text-flag-spike">
+          <p role="alert" className="text-xs font-medium text-form-error">
             {failure}
           </p>
         ) : null}

@@ -32,7 +32,7 @@ export function AcceptResultButton({ teamId, testId, testDate }: { teamId: numbe
         Use from {testDate}
       </Button>
       {error ? (
-        <span role="alert" className="text-xs text-flag-spike">
+        <span role="alert" className="text-xs text-form-error">
           {error}
         </span>
       ) : null}

@@ -172,7 +172,7 @@ export function MeasureUploadForm({
         </p>
       ) : null}
       {problems.length ? (
-        <ul className="space-y-1 text-sm text-flag-spike" data-testid="measure-problems">
+        <ul className="space-y-1 text-sm text-form-error" data-testid="measure-problems">
           {problems.map((p, i) => (
             <li key={i}>
               Line {p.line}

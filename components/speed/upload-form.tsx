@@ -69,7 +69,7 @@ export function TimingUploadForm({ teamId }: { teamId: number }) {
         </p>
       ) : null}
       {problems.length ? (
-        <ul className="space-y-1 text-sm text-flag-spike" data-testid="upload-problems">
+        <ul className="space-y-1 text-sm text-form-error" data-testid="upload-problems">
           {problems.map((p, i) => (
             <li key={i}>
               Line {p.line}

@@ -35,7 +35,7 @@ export function ReopenLogButton({ sessionId, title }: { sessionId: number; title
         {busy ? "Reopening…" : "Reopen log"}
       </Button>
       {error ? (
-        <p role="alert" className="text-xs font-medium text-flag-spike">
+        <p role="alert" className="text-xs font-medium text-form-error">
           {error}
         </p>
       ) : null}
