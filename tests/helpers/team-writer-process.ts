@@ -30,6 +30,9 @@ async function main() {
     } catch (err) {
       errors.push(String(err));
     }
+    // A pause between requests, as a real process has: without it the process that just committed takes the lock
+    // straight back while the other sleeps in SQLite's busy handler, and one may finish before the other starts.
+    await new Promise((r) => setTimeout(r, 20));
   }
   console.log(JSON.stringify({ done: count - errors.length, errors, held }));
   await closeDb();
