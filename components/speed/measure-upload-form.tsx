@@ -2,12 +2,12 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { UploadOutcome, type UploadProblem } from "./upload-outcome";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, inputClass } from "@/components/ui/field";
 import { ApiError } from "@/lib/client/fetcher";
 import { speedApi } from "@/lib/client/speed";
 
-type Problem = { line: number; column: string | null; message: string };
 type Kind = "trace" | "force" | "contacts";
 
 const KINDS: { value: Kind; label: string; columns: string }[] = [
@@ -40,7 +40,7 @@ export function MeasureUploadForm({
   const [file, setFile] = useState<File | null>(null);
   const [share, setShare] = useState<number | null>(null);
   const [message, setMessage] = useState<string | null>(null);
-  const [problems, setProblems] = useState<Problem[]>([]);
+  const [problems, setProblems] = useState<UploadProblem[]>([]);
   const [fields, setFields] = useState<Record<string, string[]>>({});
   const layout = KINDS.find((k) => k.value === kind)!;
   const session = sessions.find((s) => String(s.id) === sessionId);
@@ -77,7 +77,7 @@ export function MeasureUploadForm({
       setShare(null);
       setMessage(err instanceof Error ? err.message : "The upload failed");
       if (err instanceof ApiError) {
-        if (Array.isArray(err.details.problems)) setProblems(err.details.problems as Problem[]);
+        if (Array.isArray(err.details.problems)) setProblems(err.details.problems as UploadProblem[]);
         setFields(err.fields ?? {});
       }
     }
@@ -158,29 +158,7 @@ export function MeasureUploadForm({
       <Button type="submit" disabled={share !== null && share < 1} data-testid="measure-send">
         Upload
       </Button>
-      {share !== null ? (
-        <div>
-          <progress className="h-2 w-full" value={Math.round(share * 100)} max={100} aria-label="Upload progress" />
-          <p className="text-xs text-ink-500" aria-live="polite">
-            {share < 1 ? `Sending… ${Math.round(share * 100)} %` : "Sent"}
-          </p>
-        </div>
-      ) : null}
-      {message ? (
-        <p role="status" className="text-sm text-ink-800" data-testid="measure-message">
-          {message}
-        </p>
-      ) : null}
-      {problems.length ? (
-        <ul className="space-y-1 text-sm text-form-error" data-testid="measure-problems">
-          {problems.map((p, i) => (
-            <li key={i}>
-              Line {p.line}
-              {p.column ? ` (${p.column})` : ""}: {p.message}
-            </li>
-          ))}
-        </ul>
-      ) : null}
+      <UploadOutcome share={share} message={message} problems={problems} testId="measure" />
     </form>
   );
 }

@@ -2,18 +2,17 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { UploadOutcome, type UploadProblem } from "./upload-outcome";
 import { inputClass } from "@/components/ui/field";
 import { ApiError } from "@/lib/client/fetcher";
 import { speedApi, speedKeys } from "@/lib/client/speed";
-
-type Problem = { line: number; column: string | null; message: string };
 
 /** Uploads a timing-gate CSV with a progress bar; shows every problem line by line when it is refused. */
 export function TimingUploadForm({ teamId }: { teamId: number }) {
   const router = useRouter();
   const [share, setShare] = useState<number | null>(null);
   const [message, setMessage] = useState<string | null>(null);
-  const [problems, setProblems] = useState<Problem[]>([]);
+  const [problems, setProblems] = useState<UploadProblem[]>([]);
 
   async function onFile(file: File | undefined) {
     if (!file) return;
@@ -31,7 +30,8 @@ export function TimingUploadForm({ teamId }: { teamId: number }) {
     } catch (e) {
       setShare(null);
       setMessage(e instanceof Error ? e.message : "The upload failed");
-      if (e instanceof ApiError && Array.isArray(e.details.problems)) setProblems(e.details.problems as Problem[]);
+      if (e instanceof ApiError && Array.isArray(e.details.problems))
+        setProblems(e.details.problems as UploadProblem[]);
     }
   }
 
@@ -55,29 +55,7 @@ export function TimingUploadForm({ teamId }: { teamId: number }) {
         </a>
         . Nothing is saved unless every line is right.
       </p>
-      {share !== null ? (
-        <div>
-          <progress className="h-2 w-full" value={Math.round(share * 100)} max={100} aria-label="Upload progress" />
-          <p className="text-xs text-ink-500" aria-live="polite">
-            {share < 1 ? `Sending… ${Math.round(share * 100)} %` : "Sent"}
-          </p>
-        </div>
-      ) : null}
-      {message ? (
-        <p role="status" className="text-sm text-ink-800" data-testid="upload-message">
-          {message}
-        </p>
-      ) : null}
-      {problems.length ? (
-        <ul className="space-y-1 text-sm text-form-error" data-testid="upload-problems">
-          {problems.map((p, i) => (
-            <li key={i}>
-              Line {p.line}
-              {p.column ? ` (${p.column})` : ""}: {p.message}
-            </li>
-          ))}
-        </ul>
-      ) : null}
+      <UploadOutcome share={share} message={message} problems={problems} testId="upload" />
     </div>
   );
 }
