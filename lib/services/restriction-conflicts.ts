@@ -1,9 +1,15 @@
 import "server-only";
 import type { Transaction } from "sequelize";
+import { medicalChangeEmail } from "@/emails/medical-change";
 import { restrictionConflictsEmail } from "@/emails/restriction-conflicts";
 import { addOverrideAlert } from "@/lib/data/alerts";
 import { athleteNames } from "@/lib/data/athletes";
-import { getNoticeTeam, listAlertRecipients } from "@/lib/data/notification-settings";
+import {
+  getNoticeTeam,
+  listAlertRecipients,
+  listAthleteContacts,
+  type NoticeTeam,
+} from "@/lib/data/notification-settings";
 import { enqueueMail } from "@/lib/data/outbox";
 import { listSessionConflicts } from "@/lib/data/session-conflicts";
 import { formatDayLabel, startOfWeek } from "@/lib/dates/plain-date";
@@ -15,7 +21,8 @@ import type { Restriction } from "@/lib/restrictions/rules";
 /**
  * A restriction (or availability level) just set, inside its transaction: every planned or published session
  * from today on that breaks it is listed, the coaches get one alert per week it touches (the team's inbox) and a
- * mail with the list, so nothing planned before the medical staff's change goes ahead unseen.
+ * mail with the list, and the athlete a mail about the published ones (what their screens mark "changed by your
+ * medical staff: check with your coach"), so nothing planned before the medical staff's change goes ahead unseen.
  */
 export async function reportNewRestriction({
   transaction,
@@ -75,6 +82,46 @@ export async function reportNewRestriction({
       dedupeKey: `conflicts:${restriction.id}:user:${r.userId}`,
     });
   }
-  if (coaches.length > 0) transaction.afterCommit(() => kickOutbox());
+  const athleteMailed = await mailAthlete({ transaction, teamId, restriction, rule, conflicts, team });
+  if (coaches.length > 0 || athleteMailed) transaction.afterCommit(() => kickOutbox());
   return conflicts;
+}
+
+/** Drafts were never sent to the athlete: only published sessions are theirs to hear about. */
+async function mailAthlete({
+  transaction,
+  teamId,
+  restriction,
+  rule,
+  conflicts,
+  team,
+}: {
+  transaction: Transaction;
+  teamId: number;
+  restriction: Restriction;
+  rule: string;
+  conflicts: readonly SessionConflict[];
+  team: NoticeTeam | null;
+}): Promise<boolean> {
+  const published = conflicts.filter((c) => c.status === "published");
+  if (published.length === 0) return false;
+  const contact = (await listAthleteContacts({ teamId, athleteIds: [restriction.athleteId], transaction })).get(
+    restriction.athleteId,
+  );
+  if (!contact) return false;
+  await enqueueMail({
+    transaction,
+    teamId,
+    kind: "alert",
+    to: contact.email,
+    mail: medicalChangeEmail({
+      athleteName: contact.name,
+      teamName: team?.name ?? "your team",
+      rule,
+      sessions: published.map((c) => ({ date: c.date, title: c.title, detail: c.detail })),
+      planUrl: `${appUrl().replace(/\/+$/, "")}/me#session-${published[0]!.sessionId}`,
+    }),
+    dedupeKey: `conflicts:${restriction.id}:athlete`,
+  });
+  return true;
 }

@@ -19,6 +19,8 @@ const { d } = n;
 const logRoute = await import("@/app/api/sessions/[sessionId]/log/route");
 const unlockRoute = await import("@/app/api/sessions/[sessionId]/log/unlock/route");
 const checkIns = await import("@/app/api/athletes/[athleteId]/check-ins/route");
+const sessionRoute = await import("@/app/api/sessions/[sessionId]/route");
+const threadRoute = await import("@/app/api/sessions/[sessionId]/messages/route");
 const reportSettings = await import("@/app/api/teams/[teamId]/athlete-reports/route");
 
 const team = await createTestTeam(d, { name: "Sheet Club" });
@@ -81,9 +83,12 @@ const putLog = (id: number, body: unknown) => logRoute.PUT(req("PUT", body), sid
 const log = { completion: "partly", rpe: 7, minutes: 60, completedReps: null, notes: null };
 
 describe("an athlete sees and writes only their own", () => {
-  it("answers 404 for another athlete's log and check-ins, 403 for staff writing a check-in", async () => {
+  it("answers 404 for another athlete's session, log and check-ins, 403 for staff writing a check-in", async () => {
     const bens = await session(ben.athleteId!, today);
     as(ada.userId);
+    // The session itself and its thread (log note and messages) answer like a missing id.
+    expect((await sessionRoute.GET(req("GET"), sid(bens)).then(json)).status).toBe(404);
+    expect((await threadRoute.GET(req("GET"), sid(bens)).then(json)).status).toBe(404);
     expect((await logRoute.GET(req("GET"), sid(bens)).then(json)).status).toBe(404);
     expect((await putLog(bens, log)).status).toBe(404);
     expect((await logRoute.DELETE(req("DELETE"), sid(bens)).then(json)).status).toBe(404);
@@ -97,6 +102,7 @@ describe("an athlete sees and writes only their own", () => {
     expect((await checkIns.PUT(req("PUT", scores), aid(ben.athleteId!)).then(json)).status).toBe(403);
     // Ben's own session and check-in are his to read.
     as(ben.userId);
+    expect((await sessionRoute.GET(req("GET"), sid(bens)).then(json)).status).toBe(200);
     expect((await logRoute.GET(req("GET"), sid(bens)).then(json)).status).toBe(200);
     expect((await checkIns.GET(req("GET"), aid(ben.athleteId!)).then(json)).status).toBe(200);
   });
@@ -172,6 +178,11 @@ describe("a pain report above the team's line", () => {
     expect(mails[0].text).toContain("Tight calf on the last rep");
     // Coaches opt in to load alerts; the pain e-mail goes to the medical staff only.
     expect((await n.mailTo("coach@sheetclub.test")).filter((m) => m.subject.startsWith("Pain"))).toHaveLength(0);
+    // One e-mail in all: the outbox holds a single message about it, to the team's one physio.
+    const queued = await d.OutboxMessage.findAll({ where: { kind: "alert" }, attributes: ["toEmail", "subject"] });
+    expect(queued.filter((m) => m.subject.startsWith("Pain reported")).map((m) => m.toEmail)).toEqual([
+      "physio@sheetclub.test",
+    ]);
   });
 
   it("raises nothing at or below the line, which the head coach sets", async () => {

@@ -8,6 +8,8 @@ import { recentLogNotes } from "@/lib/data/log-notes";
 import { listSessionConflicts, medicalChangesFor } from "@/lib/data/session-conflicts";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
 import { teamToday } from "@/lib/dates/zoned";
+import { formatDayShort } from "@/lib/format/dates";
+import { MEDICAL_CHANGE_NOTICE } from "@/lib/restrictions/conflicts";
 import { saveSessionLog } from "@/lib/services/session-logs";
 import { getLogTarget } from "@/lib/data/logs";
 import { createTestTeam } from "../helpers/fixtures";
@@ -251,6 +253,46 @@ describe("a restriction set after sessions were planned", async () => {
       expect(mails[0]!.text).toContain("Hamstring: no flying sprints");
     }
     expect((await subjects("physio@signalclub.test")).filter((s) => s.startsWith("Plan to change"))).toEqual([]);
+    // The athlete hears it in the words their screens use, once, about the published session only.
+    const toAda = (await n.mailTo("ada@signalclub.test")).filter((m) =>
+      m.subject.startsWith("Changed by your medical staff"),
+    );
+    expect(toAda.map((m) => m.subject)).toEqual([`Changed by your medical staff: Flying 30s on ${formatDayShort(wed)}`]);
+    expect(toAda[0]!.text).toContain(`${MEDICAL_CHANGE_NOTICE} before you train.`);
+    expect(toAda[0]!.text).toContain("No max velocity");
+    expect(toAda[0]!.text).toContain("Flying 30s: max velocity");
+    expect(toAda[0]!.text).not.toContain("Split squats");
+    expect(toAda[0]!.text).toContain(`/me#session-${flys.id}`);
+    // The physio's own note stays with the staff.
+    expect(toAda[0]!.text).not.toContain("Hamstring: no flying sprints");
+  });
+
+  it("a restriction that only drafts break tells the coaches, not the athlete", async () => {
+    const draft = await published(ben.athleteId!, thu, "max_velocity", "Draft flys", flysRunning);
+    await draft.update({ status: "draft", publishedAt: null });
+    as(physio.userId);
+    const res = await restrictions
+      .POST(
+        send(`/api/athletes/${ben.athleteId}/restrictions`, "POST", {
+          rule: "no_kind",
+          blockKinds: ["max_velocity"],
+          startsOn: today,
+          endsOn: addDays(week, 6),
+          note: "Achilles",
+        }),
+        p({ athleteId: String(ben.athleteId) }),
+      )
+      .then(json);
+    expect(res.status).toBe(201);
+    expect(res.body.conflicts).toEqual([expect.objectContaining({ sessionId: draft.id, status: "draft" })]);
+    await n.worker.runOnce();
+    expect((await subjects("coach@signalclub.test")).filter((s) => s.startsWith("Plan to change: Ben"))).toHaveLength(
+      1,
+    );
+    expect((await subjects("ben@signalclub.test")).filter((s) => s.includes("medical staff"))).toEqual([]);
+    // Lifted again so the availability checks below start from a clean plan.
+    await d.Restriction.update({ liftedOn: today }, { where: { athleteId: ben.athleteId!, note: "Achilles" } });
+    await draft.destroy();
   });
 
   it("the coach plans it anyway with a reason: no longer a conflict, and the athlete's mail names the restriction", async () => {
