@@ -257,7 +257,9 @@ describe("a restriction set after sessions were planned", async () => {
     const toAda = (await n.mailTo("ada@signalclub.test")).filter((m) =>
       m.subject.startsWith("Changed by your medical staff"),
     );
-    expect(toAda.map((m) => m.subject)).toEqual([`Changed by your medical staff: Flying 30s on ${formatDayShort(wed)}`]);
+    expect(toAda.map((m) => m.subject)).toEqual([
+      `Changed by your medical staff: Flying 30s on ${formatDayShort(wed)}`,
+    ]);
     expect(toAda[0]!.text).toContain(`${MEDICAL_CHANGE_NOTICE} before you train.`);
     expect(toAda[0]!.text).toContain("No max velocity");
     expect(toAda[0]!.text).toContain("Flying 30s: max velocity");
