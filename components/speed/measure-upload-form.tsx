@@ -6,7 +6,7 @@ import { UploadOutcome, type UploadProblem } from "./upload-outcome";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, inputClass } from "@/components/ui/field";
 import { ApiError } from "@/lib/client/fetcher";
-import { speedApi } from "@/lib/client/speed";
+import { speedApi, speedKeys } from "@/lib/client/speed";
 
 type Kind = "trace" | "force" | "contacts";
 
@@ -152,7 +152,11 @@ export function MeasureUploadForm({
           onChange={(e) => setFile(e.target.files?.[0] ?? null)}
         />
         <p id="measure-file-hint" className="text-xs text-ink-500">
-          Columns: {layout.columns}. Nothing is saved unless every line is right.
+          Columns: {layout.columns}.{" "}
+          <a href={speedKeys.templates[kind]} download className="font-medium text-lane-700 underline">
+            Download the template
+          </a>
+          . Nothing is saved unless every line is right.
         </p>
       </div>
       <Button type="submit" disabled={share !== null && share < 1} data-testid="measure-send">

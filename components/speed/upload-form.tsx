@@ -50,7 +50,7 @@ export function TimingUploadForm({ teamId }: { teamId: number }) {
       />
       <p id="timing-file-hint" className="text-xs text-ink-500">
         One row per gate: athlete, date, trial, start, distance_m, time_s, body_mass_kg.{" "}
-        <a href={speedKeys.template} download className="font-medium text-lane-700 underline">
+        <a href={speedKeys.templates.timing} download className="font-medium text-lane-700 underline">
           Download the template
         </a>
         . Nothing is saved unless every line is right.

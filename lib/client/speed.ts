@@ -10,7 +10,13 @@ export const speedKeys = {
   measureUploads: (teamId: number) => `/api/teams/${teamId}/speed/measure-uploads`,
   accept: (teamId: number, testId: number) => `/api/teams/${teamId}/speed/tests/${testId}/accept`,
   settings: (teamId: number) => `/api/teams/${teamId}/speed/settings`,
-  template: "/speed-timing-template.csv",
+  /** Our own column layouts as downloadable examples (lib/speed/README.md §5, §9). */
+  templates: {
+    timing: "/speed-timing-template.csv",
+    trace: "/speed-trace-template.csv",
+    force: "/speed-force-template.csv",
+    contacts: "/speed-contacts-template.csv",
+  },
 };
 
 export type TimingUploadResult = {

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import "./jitless";
 import { SPEED_START_TYPES } from "@/lib/domain/speed";
+import { MEASURE_CSV_LAYOUTS } from "@/lib/speed/measure-csv";
 import { pastDateSchema } from "./dates";
 import { idSchema } from "./plan";
 
@@ -11,21 +12,27 @@ const seconds = z.number({ message: "Time must be a number" }).min(0, "Time cann
 
 export const gateSchema = z.object({ distanceM: metres, timeS: seconds });
 
-/** Times must grow with distance: a gate further out is passed later. */
+/** Times must grow with distance: a gate further out is passed later. Each message names the gate it is about. */
 export const gatesSchema = z
   .array(gateSchema)
   .max(30, "At most 30 gates")
   .superRefine((gates, ctx) => {
-    const sorted = [...gates].sort((a, b) => a.distanceM - b.distanceM);
-    for (let i = 1; i < sorted.length; i++) {
-      if (sorted[i].distanceM === sorted[i - 1].distanceM) {
-        ctx.addIssue({ code: "custom", message: `The ${sorted[i].distanceM} m gate is listed twice` });
-      } else if (!(sorted[i].timeS > sorted[i - 1].timeS)) {
+    const order = gates.map((g, i) => ({ ...g, i })).sort((a, b) => a.distanceM - b.distanceM);
+    for (let k = 1; k < order.length; k++) {
+      const [near, far] = [order[k - 1], order[k]];
+      if (far.distanceM === near.distanceM) {
         ctx.addIssue({
           code: "custom",
+          path: [far.i, "distanceM"],
+          message: `The ${far.distanceM} m gate is listed twice`,
+        });
+      } else if (!(far.timeS > near.timeS)) {
+        ctx.addIssue({
+          code: "custom",
+          path: [far.i, "timeS"],
           message:
-            `Times go backwards: ${sorted[i].distanceM} m (${sorted[i].timeS} s) is not later than ` +
-            `${sorted[i - 1].distanceM} m (${sorted[i - 1].timeS} s)`,
+            `Times go backwards: ${far.distanceM} m (${far.timeS} s) is not later than ` +
+            `${near.distanceM} m (${near.timeS} s)`,
         });
       }
     }
@@ -33,7 +40,7 @@ export const gatesSchema = z
 
 export const timingTrialSchema = z
   .object({
-    athleteId: z.number().int().positive(),
+    athleteId: z.number({ message: "Choose the athlete" }).int().positive("Choose the athlete"),
     testDate: pastDateSchema,
     startType: z.enum(SPEED_START_TYPES, { message: "Choose a start type" }),
     bodyMassKg: z
@@ -101,3 +108,28 @@ export const speedMeasureUploadSchema = speedUploadSchema.extend({
     .optional(),
 });
 export type SpeedMeasureUploadInput = z.infer<typeof speedMeasureUploadSchema>;
+
+const contactColumn = (name: string, unit: string) => {
+  const c = MEASURE_CSV_LAYOUTS.contacts.find((x) => x.name === name)!;
+  const what = c.what[0].toUpperCase() + c.what.slice(1);
+  return z
+    .number({ message: `${what} must be a number` })
+    .min(c.min, `${what} must be at least ${c.min} ${unit}`)
+    .max(c.max, `${what} must be at most ${c.max} ${unit}`);
+};
+
+/** Contact-mat rows typed in on the athlete's speed page: the bounds of the contacts file (lib/speed/README.md §9). */
+export const typedContactsSchema = z.object({
+  testDate: pastDateSchema,
+  rows: z
+    .array(
+      z.object({
+        contactTimeS: contactColumn("contact_time_s", "s"),
+        flightTimeS: contactColumn("flight_time_s", "s"),
+        stepLengthM: contactColumn("step_length_m", "m").nullable(),
+      }),
+    )
+    .min(1, "Enter at least one contact")
+    .max(200, "At most 200 contacts"),
+});
+export type TypedContactsInput = z.infer<typeof typedContactsSchema>;

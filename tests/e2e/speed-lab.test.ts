@@ -12,6 +12,7 @@ import { apiSession, describeBrowser, launchBrowser, screenshot, signIn, startAp
 
 const headCoach = DEMO_STAFF.find((s) => s.role === "head_coach")!;
 const maya = DEMO_ATHLETES.find((a) => a.name === "Maya Okafor")!;
+const jonah = DEMO_ATHLETES.find((a) => a.name === "Jonah Pell")!;
 
 async function noSidewaysScroll(page: Page) {
   expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth + 1)).toBe(true);
@@ -170,5 +171,57 @@ describeBrowser("speed lab", () => {
     expect(await seriousAxeViolations(page)).toEqual([]);
     await noSidewaysScroll(page);
     await screenshot(page, "speed-traces-and-contacts");
+  }, 240_000);
+
+  it("typed in: a timing trial and contact rows, each problem on its field, saved and fitted like an upload", async () => {
+    await page.goto(`${app.url}/speed`);
+    const form = page.getByTestId("typed-timing");
+    await form.waitFor();
+    // Nothing chosen or typed yet: the athlete and each gate's time are named on their fields.
+    await page.getByTestId("typed-timing-save").click();
+    await form.getByRole("alert").filter({ hasText: "Choose the athlete" }).waitFor();
+    expect(await form.getByRole("alert").filter({ hasText: "Time must be a number" }).count()).toBe(4);
+    expect(await seriousAxeViolations(page)).toEqual([]);
+    await noSidewaysScroll(page);
+
+    // T4 splits (lib/speed/README.md §1), first with the 30 m time before the 20 m one.
+    await page.locator("#typed-athlete").selectOption({ label: jonah.name });
+    const times = ["1.969", "3.142", "3.0", "5.3017"];
+    for (const [i, t] of times.entries()) await page.locator(`#typed-gate-${i}-s`).fill(t);
+    await page.getByTestId("typed-timing-save").click();
+    await form.getByRole("alert").filter({ hasText: "Times go backwards: 30 m (3 s)" }).waitFor();
+    expect(await page.locator("#typed-gate-2-s").getAttribute("aria-invalid")).toBe("true");
+    await page.locator("#typed-gate-2-s").fill("4.2345");
+    await page.getByTestId("typed-timing-save").click();
+    await page
+      .getByTestId("typed-timing-message")
+      .filter({ hasText: `Saved the trial of ${jonah.name}` })
+      .waitFor();
+    await page.getByTestId("typed-timing-message").getByRole("link", { name: "See the fit" }).click();
+    await page.getByTestId("speed-profile").waitFor();
+    const fit = page.locator('[data-testid^="fit-"]').first();
+    expect(await fit.innerText()).toContain("vmax 9.50 m/s");
+    expect(await fit.innerText()).toContain("τ 1.10 s");
+    await page.getByTestId("no-drag-note").waitFor();
+
+    // Contact rows: a contact shorter than the file's bound is named on its field; B1 rows give 4.33 Hz, 2.69 BW.
+    const contacts = page.getByTestId("typed-contacts");
+    await page.locator("#typed-c-0-contact").fill("0.01");
+    await page.locator("#typed-c-0-flight").fill("0.145");
+    await page.locator("#typed-c-1-contact").fill("0.086");
+    await page.locator("#typed-c-1-flight").fill("0.145");
+    await page.getByTestId("typed-contacts-save").click();
+    await contacts.getByRole("alert").filter({ hasText: "Contact time must be at least 0.02 s" }).waitFor();
+    await page.locator("#typed-c-0-contact").fill("0.086");
+    await page.locator("#typed-c-0-step").fill("2.3");
+    await page.getByTestId("typed-contacts-save").click();
+    await page.getByTestId("typed-contacts-message").filter({ hasText: "Saved 2 contacts" }).waitFor();
+    const means = page.locator('[data-testid^="contacts-means-"]').first();
+    await means.waitFor();
+    expect(await means.innerText()).toContain("4.33 Hz");
+    expect(await means.innerText()).toContain("2.69 × BW");
+    expect(await seriousAxeViolations(page)).toEqual([]);
+    await noSidewaysScroll(page);
+    await screenshot(page, "speed-typed-in");
   }, 240_000);
 });

@@ -2,6 +2,7 @@ import Link from "next/link";
 import { Badge } from "@/components/ui/badge";
 import { Card, EmptyState, PageHeader } from "@/components/ui/card";
 import { RetestWeeksForm } from "@/components/speed/retest-weeks-form";
+import { TypedTimingForm } from "@/components/speed/typed-timing-form";
 import { TimingUploadForm } from "@/components/speed/upload-form";
 import { pageViewer } from "@/lib/auth/page-access";
 import { scopeOf } from "@/lib/auth/permissions";
@@ -29,6 +30,16 @@ export default async function SpeedLabPage() {
           <Card className="p-4">
             <h2 className="mb-3 text-base font-semibold text-ink-900">Add timing tests</h2>
             <TimingUploadForm teamId={viewer.teamId} />
+          </Card>
+        ) : null}
+        {canEdit ? (
+          <Card className="p-4">
+            <h2 className="mb-3 text-base font-semibold text-ink-900">Type in a timing trial</h2>
+            <TypedTimingForm
+              teamId={viewer.teamId}
+              athletes={rows.map((r) => ({ id: r.athleteId, name: r.name }))}
+              today={today}
+            />
           </Card>
         ) : null}
         <Card className="p-4" data-testid="retest-due">

@@ -7,6 +7,7 @@ import { FitChart } from "@/components/speed/fit-chart";
 import { HistoryChart } from "@/components/speed/history-chart";
 import { ContactTests, TraceTests } from "@/components/speed/measure-tests";
 import { MeasureUploadForm } from "@/components/speed/measure-upload-form";
+import { TypedContactsForm } from "@/components/speed/typed-contacts-form";
 import { pageAthlete } from "@/lib/auth/page-access";
 import { scopeOf } from "@/lib/auth/permissions";
 import { BASELINE_FROM } from "@/lib/data/speed-profiles";
@@ -98,6 +99,11 @@ export default async function SpeedProfilePage({ params }: { params: Promise<{ a
           );
         })}
       </div>
+      <p className="mt-2 text-xs text-ink-500" data-testid="no-drag-note">
+        F0 and Pmax are the no-air-drag form: F0 = body mass × vmax ÷ τ, Pmax = F0 × vmax ÷ 4. The published air-drag
+        correction needs constants for the athlete&apos;s frontal area and drag that we have not checked against the
+        paper, so it is not applied; at top speed air resistance is only a few per cent of the total.
+      </p>
       <h2 className="mt-6 mb-2 text-lg font-semibold text-ink-900">Profile history</h2>
       <Card className="p-4">
         {entries.length === 0 ? (
@@ -176,6 +182,12 @@ export default async function SpeedProfilePage({ params }: { params: Promise<{ a
         <Card className="mt-6 p-4">
           <h2 className="mb-3 text-base font-semibold text-ink-900">Add a speed trace, force trace or contact file</h2>
           <MeasureUploadForm teamId={viewer.teamId} athleteId={athlete.id} today={today} sessions={sessions} />
+        </Card>
+      ) : null}
+      {canEdit ? (
+        <Card className="mt-4 p-4">
+          <h2 className="mb-3 text-base font-semibold text-ink-900">Type in contact measurements</h2>
+          <TypedContactsForm teamId={viewer.teamId} athleteId={athlete.id} today={today} />
         </Card>
       ) : null}
       <h2 className="mt-6 mb-2 text-lg font-semibold text-ink-900">Speed traces</h2>
