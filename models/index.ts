@@ -36,25 +36,12 @@ import { TeamLoadSettings } from "./team-load-settings";
 import { TrainingGroup } from "./training-group";
 import { User } from "./user";
 
-export { Alert, CalendarToken, NotificationSetting, OutboxMessage, Restriction, RestrictionOverride };
-export { AuthSession, CalendarFeedRender, LoadLedgerDay };
-export { CheckIn, PainReport, SessionLogChange };
+export { Alert, OutboxMessage, Restriction, RestrictionOverride };
+export { CheckIn, PainReport };
 export { SpeedLabSettings, SpeedProfileEntry, SpeedTest, SpeedUpload };
-export { AthleteAvailability, SessionMessage };
+export { AthleteAvailability };
 export { Meet, SeasonPhase };
-export {
-  Athlete,
-  BlockTemplate,
-  Invitation,
-  Membership,
-  PlannedSession,
-  SessionBlock,
-  SessionLog,
-  Team,
-  TeamLoadSettings,
-  TrainingGroup,
-  User,
-};
+export { BlockTemplate, Invitation, PlannedSession, SessionBlock, SessionLog, TeamLoadSettings };
 
 const models = {
   AuthSession,
@@ -92,7 +79,7 @@ const models = {
   Meet,
   SeasonPhase,
 };
-export type Models = typeof models;
+type Models = typeof models;
 export type Db = Models & { sequelize: Sequelize };
 
 function associate() {

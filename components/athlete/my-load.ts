@@ -6,7 +6,7 @@ import type { Metric } from "@/lib/load/types";
 
 /** The figures "My load" shows: what the athlete did, week by week. */
 export const MY_LOAD_METRICS = ["hsrM", "contacts", "srpe"] as const satisfies readonly Metric[];
-export type MyLoadMetric = (typeof MY_LOAD_METRICS)[number];
+type MyLoadMetric = (typeof MY_LOAD_METRICS)[number];
 export const MY_LOAD_WEEKS = 8;
 
 export type MyLoad = {

@@ -3,7 +3,7 @@
 import { clsx } from "clsx";
 import Link from "next/link";
 import { useState } from "react";
-import { Segmented } from "@/components/load/segmented";
+import { Segmented } from "@/components/ui/segmented";
 import { shortDate } from "@/components/load/chart-theme";
 import { Card } from "@/components/ui/card";
 import { formatNumber } from "@/lib/format/number";

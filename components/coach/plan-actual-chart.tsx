@@ -8,7 +8,7 @@ import type { PlanActualWeek } from "@/lib/load/plan-vs-actual";
 import type { Metric } from "@/lib/load/types";
 
 /** Prescribed (to date) against done, one pair of bars per week. */
-export function PlanActualChart({ weeks, metric, unit }: { weeks: PlanActualWeek[]; metric: Metric; unit: string }) {
+function PlanActualChart({ weeks, metric, unit }: { weeks: PlanActualWeek[]; metric: Metric; unit: string }) {
   const data = weeks.map((w) => ({
     week: w.weekStart,
     prescribed: w.prescribedToDate[metric],

@@ -23,11 +23,11 @@ export const planActualFeatures = tableFeatures({
 export type PlanActualRow = PlanActualFigures & { id: number; name: string; metric: Metric };
 
 /** More than this far from the plan (either way) is marked: our choice of a visible step, not a published line. */
-export const OFF_PLAN_PCT = 10;
+const OFF_PLAN_PCT = 10;
 
 export type OffPlan = "under" | "over" | null;
 
-export function offPlan(f: PlanActualFigures, m: Metric): OffPlan {
+function offPlan(f: PlanActualFigures, m: Metric): OffPlan {
   const pct = f.differencePct[m];
   if (pct === null) return null;
   return pct < -OFF_PLAN_PCT ? "under" : pct > OFF_PLAN_PCT ? "over" : null;

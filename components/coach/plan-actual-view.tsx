@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { useId, useState } from "react";
-import { Segmented } from "@/components/load/segmented";
+import { Segmented } from "@/components/ui/segmented";
 import type { PlanActualDto } from "@/lib/data/plan-vs-actual";
 import { figuresHref } from "@/lib/load/figures-link";
 import { PLAN_ACTUAL_METRICS } from "@/lib/load/plan-vs-actual";

@@ -15,7 +15,7 @@ import { METRIC_INFO, METRICS, type LoadView, type Metric } from "@/lib/load/typ
 import { FlagList } from "./flag-list";
 import { LoadChart } from "./load-chart";
 import { RatioChart } from "./ratio-chart";
-import { Segmented } from "./segmented";
+import { Segmented } from "@/components/ui/segmented";
 import { WeekTotals } from "./week-totals";
 
 const RANGES = [4, 8, 12, 26] as const;

@@ -38,7 +38,7 @@ export function FlagBadge({
 }
 
 /** The distinct kinds of a flag list with their counts, most serious first (the engine's order within a day). */
-export function flagKinds(flags: readonly Flag[]): { kind: FlagKind; count: number; provisional: boolean }[] {
+function flagKinds(flags: readonly Flag[]): { kind: FlagKind; count: number; provisional: boolean }[] {
   const order: FlagKind[] = ["spike", "rising", "weekly_jump", "plyo_volume", "recovery", "low"];
   const out = new Map<FlagKind, { kind: FlagKind; count: number; provisional: boolean }>();
   for (const f of flags) {

@@ -18,7 +18,7 @@ import type { SquadWeekDto } from "@/lib/data/load-views";
 import type { LoadView } from "@/lib/load/types";
 import { METRIC_INFO } from "@/lib/load/types";
 import { COLUMN_HINTS, NUMERIC_COLUMNS, squadColumns, squadFeatures, type SquadRow } from "./squad-load-columns";
-import { Segmented } from "./segmented";
+import { Segmented } from "@/components/ui/segmented";
 import { SquadToolbar } from "./squad-toolbar";
 import { WeekNav } from "./week-nav";
 

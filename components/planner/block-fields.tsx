@@ -14,10 +14,10 @@ const RUNNING_DEFAULT: Partial<Record<BlockKind, RunningPrescription>> = {
   speed_endurance: { sets: 1, reps: 3, distanceM: 150, intensityPct: 90, start: "standing", runInM: 0, restSec: 480 },
   tempo: { sets: 1, reps: 8, distanceM: 100, intensityPct: 70, start: "standing", runInM: 0, restSec: 60 },
 };
-export const DRILL_DEFAULT: PlyoDrill = { name: "", sets: 2, reps: 10, contactsPerRep: 1, intensity: "low" };
+const DRILL_DEFAULT: PlyoDrill = { name: "", sets: 2, reps: 10, contactsPerRep: 1, intensity: "low" };
 
 /** The message of the error at a dotted path ("running.sets", "drills.0.name"), if any. */
-export function errorAt(errors: FieldErrors, path: string): string | undefined {
+function errorAt(errors: FieldErrors, path: string): string | undefined {
   const e = get(errors, path) as { message?: unknown } | undefined;
   return typeof e?.message === "string" ? e.message : undefined;
 }

@@ -13,12 +13,12 @@ export const dragId = (s: DragSource) =>
   s.type === "template" ? `template:${s.templateId}` : `session:${s.sessionId}`;
 export const dropId = (t: DropTarget) =>
   t.type === "cell" ? `cell:${t.athleteId}:${t.date}` : `group:${t.groupId}:${t.date}`;
-export const rowKey = (t: DropTarget) => (t.type === "cell" ? `athlete:${t.athleteId}` : `group:${t.groupId}`);
+const rowKey = (t: DropTarget) => (t.type === "cell" ? `athlete:${t.athleteId}` : `group:${t.groupId}`);
 
 export type DragData = { source: DragSource; label: string };
 
 /** The cell element of a target, as the grid (or the phone's week) renders it (data-testid day-cell / group-cell). */
-export function cellElement(t: DropTarget): HTMLElement | null {
+function cellElement(t: DropTarget): HTMLElement | null {
   const sel =
     t.type === "cell"
       ? `[data-testid="day-cell"][data-athlete-id="${t.athleteId}"]`

@@ -10,7 +10,7 @@ import type { RestrictionHit } from "@/lib/restrictions/rules";
 import { overrideSchema, type OverrideInput } from "@/lib/validations/plan";
 import { Dialog } from "./dialog";
 
-export type OverrideRequest = { hits: readonly RestrictionHit[]; what: string; athleteName: (id: number) => string };
+type OverrideRequest = { hits: readonly RestrictionHit[]; what: string; athleteName: (id: number) => string };
 type Ask = (request: OverrideRequest) => Promise<string | null>;
 type Pending = OverrideRequest & { resolve: (reason: string | null) => void };
 

@@ -6,6 +6,7 @@ import { useCallback, useEffect, useMemo, useState, useSyncExternalStore } from 
 import useSWR from "swr";
 import { WeekPrint } from "@/components/print/week-print";
 import { LoadCaution } from "@/components/ui/caution";
+import { Segmented } from "@/components/ui/segmented";
 import { fetchJson } from "@/lib/client/fetcher";
 import { planKeys } from "@/lib/client/keys";
 import { findSession, type PlanChange } from "@/lib/plan/drop";
@@ -70,29 +71,12 @@ function phoneDayOf(week: PlanWeek, picked: string | null): string {
   return week.days.includes(week.today) ? week.today : week.days[0]!;
 }
 
+type PhoneView = "athlete" | "day";
 /** On a phone: one athlete's week, or one day for the whole squad. */
-function PhoneViewChoice({ view, onView }: { view: "athlete" | "day"; onView: (v: "athlete" | "day") => void }) {
-  const choice = (v: "athlete" | "day", text: string) => (
-    <button
-      type="button"
-      aria-pressed={view === v}
-      data-testid={`phone-view-${v}`}
-      onClick={() => onView(v)}
-      className={clsx(
-        "flex-1 rounded-md px-2 py-1.5 text-sm font-medium",
-        view === v ? "bg-ink-900 text-paper" : "text-ink-700 ring-1 ring-ink-200 ring-inset",
-      )}
-    >
-      {text}
-    </button>
-  );
-  return (
-    <div role="group" aria-label="Show" className="flex gap-1" data-testid="phone-view">
-      {choice("athlete", "One athlete's week")}
-      {choice("day", "The squad's day")}
-    </div>
-  );
-}
+const PHONE_VIEWS: [PhoneView, string][] = [
+  ["athlete", "One athlete's week"],
+  ["day", "The squad's day"],
+];
 
 function useHydrated() {
   return useSyncExternalStore(
@@ -165,7 +149,7 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
   const collapsedBox = useLatest(collapsed);
   const phone = usePhone();
   const [phoneAthleteId, setPhoneAthleteId] = useState<number | null>(null);
-  const [phoneView, setPhoneView] = useState<"athlete" | "day">("athlete");
+  const [phoneView, setPhoneView] = useState<PhoneView>("athlete");
   const [phoneDayPicked, setPhoneDay] = useState<string | null>(null);
   const squadDay = phone && phoneView === "day" && shown ? phoneDayOf(shown, phoneDayPicked) : null;
   const phoneAthlete = phone && squadDay === null ? (phoneAthleteId ?? shown?.athletes[0]?.id ?? null) : null;
@@ -401,7 +385,13 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
                   No athletes in the team yet. Add them on the squad screen.
                 </p>
               ) : phone ? (
-                <PhoneViewChoice view={squadDay === null ? "athlete" : "day"} onView={setPhoneView} />
+                <Segmented
+                  label="Show"
+                  testId="phone-view"
+                  value={squadDay === null ? "athlete" : "day"}
+                  options={PHONE_VIEWS}
+                  onChange={setPhoneView}
+                />
               ) : null}
               {shown.athletes.length === 0 ? null : squadDay !== null ? (
                 <PhoneSquadDay

@@ -22,7 +22,7 @@ function ratioText(l: RowLoad): string {
 }
 
 /** The ACWR zone flag (spike, climbing, underloaded) of a row, if any. */
-export function zoneFlag(flags: readonly Flag[]): Flag | null {
+function zoneFlag(flags: readonly Flag[]): Flag | null {
   return flags.find((f) => f.kind === "spike" || f.kind === "rising" || f.kind === "low") ?? null;
 }
 

@@ -15,7 +15,7 @@ import { KindMark } from "@/components/ui/kind-mark";
 
 const STATUS_WORD = { draft: "Draft", published: "Published", cancelled: "Cancelled" } as const;
 
-export function sessionLabel(s: PlanSession, athleteName: string): string {
+function sessionLabel(s: PlanSession, athleteName: string): string {
   const kind = mainBlockKind(s.blocks);
   const what = kind ? `${s.title}, ${BLOCK_KIND_LABEL[kind]}` : s.title;
   return `${what} for ${athleteName}, ${formatDayShort(s.date)} ${s.startTime}, ${STATUS_WORD[s.status].toLowerCase()}`;
@@ -27,7 +27,7 @@ function contextOf(s: PlanSession, athleteName: string): string {
 }
 
 /** Published: a filled dot; draft: a hollow one (the card is also hatched); cancelled: a cross. */
-export function StatusMark({ status }: { status: PlanSession["status"] }) {
+function StatusMark({ status }: { status: PlanSession["status"] }) {
   return (
     <span className="inline-flex items-center" title={STATUS_WORD[status]}>
       {status === "published" ? <span aria-hidden className="h-1.5 w-1.5 rounded-full bg-state-published" /> : null}

@@ -33,7 +33,7 @@ type Props = {
   onDelete: (s: PlanSession, version: number) => Promise<void>;
 };
 
-export function toEditValues(s: PlanSession): SessionEditValues {
+function toEditValues(s: PlanSession): SessionEditValues {
   return {
     title: s.title,
     startTime: s.startTime,

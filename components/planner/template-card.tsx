@@ -9,7 +9,7 @@ import type { PlanTemplate } from "@/lib/plan/types";
 import { dragId, type DragData } from "./dnd";
 import { KIND_STYLE } from "@/components/ui/kind-style";
 
-export function templateLabel(t: PlanTemplate) {
+function templateLabel(t: PlanTemplate) {
   return `template ${t.title}, ${BLOCK_KIND_LABEL[t.kind]}`;
 }
 

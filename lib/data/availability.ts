@@ -42,20 +42,6 @@ export async function currentAvailability({
   return new Map([...newest].map(([id, r]) => [id, { ...toAvailability(r, names), restrictionId: r.restrictionId }]));
 }
 
-/** Every setting of one athlete, newest first (the athlete's medical page). */
-export async function listAvailabilityHistory({
-  teamId,
-  athleteId,
-}: {
-  teamId: number;
-  athleteId: number;
-}): Promise<Availability[]> {
-  const { AthleteAvailability } = await db();
-  const rows = await AthleteAvailability.findAll({ where: { teamId, athleteId }, order: [["id", "DESC"]] });
-  const names = await userNames(rows.map((r) => r.createdBy));
-  return rows.map((r) => toAvailability(r, names));
-}
-
 export async function insertAvailability({
   transaction,
   ...values

@@ -26,7 +26,7 @@ export type TodaySession = {
   logged: boolean;
 };
 
-export type TodayAlert = {
+type TodayAlert = {
   id: number;
   athleteId: number;
   athleteName: string;
@@ -36,9 +36,9 @@ export type TodayAlert = {
   status: AlertStatus;
 };
 
-export type TodaySpike = ProjectedSpike & { athleteId: number; athleteName: string; weekStart: string };
+type TodaySpike = ProjectedSpike & { athleteId: number; athleteName: string; weekStart: string };
 
-export type TodayRestriction = {
+type TodayRestriction = {
   id: number;
   athleteId: number;
   athleteName: string;

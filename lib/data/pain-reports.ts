@@ -69,28 +69,6 @@ export async function latestPainReportByAthlete({
   return out;
 }
 
-/** One athlete's reports between two days (inclusive), newest first. */
-export async function listPainReports({
-  athleteId,
-  from,
-  to,
-}: {
-  athleteId: number;
-  from: string;
-  to: string;
-}): Promise<PainReportDto[]> {
-  const { PainReport } = await db();
-  const rows = await PainReport.findAll({
-    where: { athleteId, date: { [Op.between]: [from, to] } },
-    attributes: [...FIELDS],
-    order: [
-      ["date", "DESC"],
-      ["id", "DESC"],
-    ],
-  });
-  return rows.map(toDto);
-}
-
 /** The reports written with these sessions' logs, by session id. */
 export async function painReportsBySession({
   sessionIds,

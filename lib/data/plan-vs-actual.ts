@@ -6,7 +6,7 @@ import { ensureLedgerFresh, readLedgerRows } from "./ledger";
 import { getLoadSeriesInputs, getTeamClock } from "./load";
 import type { SquadWeekDto } from "./load-views";
 
-export type PlanActualAthleteDto = {
+type PlanActualAthleteDto = {
   id: number;
   name: string;
   groupName: string | null;

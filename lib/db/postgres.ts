@@ -37,39 +37,40 @@ pg.types.setTypeParser(pg.types.builtins.INT8, (text: string) => {
   return Number.isSafeInteger(n) ? n : text;
 });
 
-type Begin = (options: TransactionOptions | undefined, fn?: (t: Transaction) => Promise<unknown>) => Promise<unknown>;
+type Work<T> = (t: Transaction) => PromiseLike<T>;
 
-function serializeWriters(sequelize: Sequelize): void {
-  const begin = sequelize.transaction.bind(sequelize) as unknown as Begin;
-  const lock = async (t: Transaction, teamId: number | undefined) => {
-    if (teamId === undefined) return void (await sequelize.query(DATABASE_LOCK_SQL, { transaction: t }));
-    await sequelize.query(SHARED_LOCK_SQL, { transaction: t });
-    await sequelize.query(TEAM_LOCK_SQL, { transaction: t, replacements: { teamId } });
-  };
-  const transaction = async (a?: unknown, b?: unknown): Promise<unknown> => {
-    const fn = (typeof a === "function" ? a : b) as ((t: Transaction) => Promise<unknown>) | undefined;
-    const options = (typeof a === "object" && a !== null ? a : undefined) as TransactionOptions | undefined;
+/** Sequelize whose every write transaction takes the write lock first (above). */
+class LockedWritesSequelize extends Sequelize {
+  override transaction<T>(options: TransactionOptions, autoCallback: Work<T>): Promise<T>;
+  override transaction<T>(autoCallback: Work<T>): Promise<T>;
+  override transaction(options?: TransactionOptions): Promise<Transaction>;
+  override async transaction<T>(a?: TransactionOptions | Work<T>, b?: Work<T>): Promise<T | Transaction> {
+    const fn = typeof a === "function" ? a : b;
+    const options = typeof a === "function" ? {} : (a ?? {});
     // A savepoint inside a transaction already holds the lock.
-    if (options?.transaction) return begin(options, fn);
-    const teamId = options?.teamId;
-    if (fn) return begin(options, async (t) => (await lock(t, teamId), fn(t)));
-    const t = (await begin(options)) as Transaction;
-    await lock(t, teamId);
+    if (options.transaction) return fn ? super.transaction(options, fn) : super.transaction(options);
+    const { teamId } = options;
+    if (fn) return super.transaction(options, async (t) => (await this.lockWriters(t, teamId), fn(t)));
+    const t = await super.transaction(options);
+    await this.lockWriters(t, teamId);
     return t;
-  };
-  Object.assign(sequelize, { transaction });
+  }
+
+  private async lockWriters(t: Transaction, teamId: number | undefined): Promise<void> {
+    if (teamId === undefined) return void (await this.query(DATABASE_LOCK_SQL, { transaction: t }));
+    await this.query(SHARED_LOCK_SQL, { transaction: t });
+    await this.query(TEAM_LOCK_SQL, { transaction: t, replacements: { teamId } });
+  }
 }
 
 /** A Sequelize instance on PostgreSQL with the app's write rule (one writer per team at a time, across processes). */
 export async function openPostgres(url: string): Promise<Sequelize> {
-  const sequelize = new Sequelize(url, {
+  return new LockedWritesSequelize(url, {
     dialect: "postgres",
     dialectModule: pg,
     logging: false,
     pool: { max: Number(process.env.DATABASE_POOL_MAX ?? 10), idle: 10_000, acquire: 30_000 },
   });
-  serializeWriters(sequelize);
-  return sequelize;
 }
 
 /** A plain pg pool on the same database, for the sign-in limiter's own table (rate-limiter-flexible). */

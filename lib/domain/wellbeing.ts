@@ -82,8 +82,7 @@ export const CHECK_IN_SCALE: Record<
 };
 
 /** Who changed a session log, for its history (every create, edit, removal and coach unlock is kept). */
-export const LOG_CHANGE_ACTIONS = ["created", "updated", "deleted", "unlocked"] as const;
-export type LogChangeAction = (typeof LOG_CHANGE_ACTIONS)[number];
+export type LogChangeAction = "created" | "updated" | "deleted" | "unlocked";
 
 /** An athlete's log stays open this long after the session ends, then only a coach can reopen it. */
 export const LOG_EDIT_HOURS = 48;

@@ -9,7 +9,7 @@ import { METRICS, type LogInput, type Metric, type MetricValues, type SessionInp
 /** The metrics the plan-versus-actual screens compare, in the order they show them. */
 export const PLAN_ACTUAL_METRICS: readonly Metric[] = ["hsrM", "nearMaxM", "contacts", "srpe"];
 
-export interface SessionCounts {
+interface SessionCounts {
   /** Sessions of the week that count in the plan (drafts in, cancelled out: the ledger's planned set). */
   planned: number;
   /** Of those, the ones already due: before today, or today and logged. */
@@ -61,7 +61,7 @@ function emptyCounts(): SessionCounts {
 }
 
 /** The figures that follow from the three sums and the counts (differences, percentages). */
-export function finishFigures(
+function finishFigures(
   sums: Pick<PlanActualFigures, "prescribed" | "prescribedToDate" | "done">,
   sessions: SessionCounts,
 ): PlanActualFigures {

@@ -12,4 +12,3 @@ export const planActualQuerySchema = z.object({
     .max(12, "At most 12 weeks")
     .default(8),
 });
-export type PlanActualQuery = z.infer<typeof planActualQuerySchema>;

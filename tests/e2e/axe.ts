@@ -1,5 +1,6 @@
 import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
+import type { RunOptions } from "axe-core";
 import type { Page } from "playwright-core";
 
 // axe-core is the general-purpose accessibility rule engine (WCAG 2.x A/AA rules); one copy of its source is
@@ -19,24 +20,13 @@ export async function seriousAxeViolations(
   await page.evaluate(AXE_SOURCE);
   const found = await page.evaluate(
     async ([exclude, extra]: [string[], string[]]) => {
-      const axe = (window as unknown as { axe: { run: (ctx: unknown, opts: unknown) => Promise<AxeRun> } }).axe;
-      type AxeRun = {
-        violations: { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }[];
-      };
+      const { axe } = window;
       const context = exclude.length ? { exclude: exclude.map((s) => [s]) } : document;
       const tags = ["wcag2a", "wcag2aa", "wcag21aa"];
       // runOnly by tag skips rules outside the tags; extra rules are run as well by naming them with the tags' rules.
-      const opts = extra.length
+      const opts: RunOptions = extra.length
         ? {
-            runOnly: {
-              type: "rule",
-              values: [
-                ...(axe as unknown as { getRules: (t: string[]) => { ruleId: string }[] })
-                  .getRules(tags)
-                  .map((r) => r.ruleId),
-                ...extra,
-              ],
-            },
+            runOnly: { type: "rule", values: [...axe.getRules(tags).map((r) => r.ruleId), ...extra] },
             rules: Object.fromEntries(extra.map((id) => [id, { enabled: true }])),
           }
         : { runOnly: { type: "tag", values: tags } };

@@ -70,9 +70,7 @@ describe.runIf(run)("next dev under the Content-Security-Policy", () => {
     await context.exposeBinding("__cspViolation", (_s, v: string) => void violations.push(v));
     await context.addInitScript(() => {
       document.addEventListener("securitypolicyviolation", (e) =>
-        (window as unknown as { __cspViolation: (v: string) => void }).__cspViolation(
-          `${location.pathname} ${e.violatedDirective} ${e.blockedURI}`,
-        ),
+        window.__cspViolation(`${location.pathname} ${e.violatedDirective} ${e.blockedURI}`),
       );
     });
     const page = await context.newPage();
@@ -85,7 +83,7 @@ describe.runIf(run)("next dev under the Content-Security-Policy", () => {
     await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"), { timeout: 180_000 });
     for (const path of ["/home", "/plan"]) {
       await page.goto(`${appUrl}${path}`, { waitUntil: "networkidle", timeout: 180_000 });
-      await page.waitForFunction(() => (window as unknown as { next?: unknown }).next !== undefined, null, {
+      await page.waitForFunction(() => window.next !== undefined, null, {
         timeout: 60_000,
       });
     }

@@ -17,7 +17,7 @@ async function watch(context: BrowserContext): Promise<{ violations: Violation[]
   await context.exposeBinding("__cspViolation", (_src, v: Violation) => void seen.violations.push(v));
   await context.addInitScript(() => {
     document.addEventListener("securitypolicyviolation", (e) => {
-      (window as unknown as { __cspViolation: (v: unknown) => void }).__cspViolation({
+      window.__cspViolation({
         directive: e.violatedDirective,
         blocked: e.blockedURI,
         source: `${location.pathname} ${e.sourceFile}:${e.lineNumber}`,
@@ -34,11 +34,9 @@ async function visit(page: Page, url: string) {
   const res = await page.goto(url, { waitUntil: "networkidle" });
   expect(res?.status(), url).toBeLessThan(400);
   // Hydration ran: a nonce-less or blocked script would leave the page without React.
-  await page.waitForFunction(
-    () => document.querySelector("body") !== null && (window as unknown as { next?: unknown }).next !== undefined,
-    null,
-    { timeout: 10_000 },
-  );
+  await page.waitForFunction(() => document.querySelector("body") !== null && window.next !== undefined, null, {
+    timeout: 10_000,
+  });
   await page.waitForTimeout(300);
 }
 

@@ -27,7 +27,7 @@ const post = (path: string, body: unknown) =>
   });
 type Body = {
   error?: { fields?: Record<string, string[]> };
-  sessions?: { title: string; blocks: { title: string }[] }[];
+  sessions?: { id: number; title: string; blocks: { title: string }[] }[];
 };
 const json = async (res: Response) => ({ status: res.status, body: (await res.json()) as Body });
 
@@ -107,7 +107,7 @@ describe("control characters in text fields", () => {
       expect(copied.status).toBe(200);
       expect(copied.body.sessions?.map((x) => [x.title, x.blocks.map((b) => b.title)])).toEqual([[title, [title]]]);
       const stored = await d.SessionBlock.findOne({
-        where: { sessionId: copied.body.sessions && (copied.body.sessions[0] as unknown as { id: number }).id },
+        where: { sessionId: copied.body.sessions && copied.body.sessions[0].id },
       });
       expect(stored?.notes).toBe("a\u0000b");
     },

@@ -100,9 +100,7 @@ describe.skipIf(onPostgres)("SQLite writes", () => {
       }
       expect(await databaseState({ sequelize: d.sequelize, storage: d.storage })).toBe("ok");
       // The connection of the transaction that never began is closed, not left open.
-      expect(
-        Object.keys((d.sequelize.connectionManager as unknown as { connections: Record<string, unknown> }).connections),
-      ).toEqual(["default"]);
+      expect(Object.keys(d.sequelize.connectionManager.connections)).toEqual(["default"]);
       await newTemplate("After the lock");
       expect(await d.BlockTemplate.count({ where: { teamId, title: "After the lock" } })).toBe(1);
       expect(await d.BlockTemplate.count({ where: { teamId, title: "Blocked 0" } })).toBe(0);

@@ -109,7 +109,7 @@ describe("getLoadSeriesInputs", () => {
 
   it("uses a constant number of queries whatever the squad size", async () => {
     let count = 0;
-    const opts = (d.sequelize as unknown as { options: { logging?: unknown } }).options;
+    const opts = d.sequelize.options;
     const before = opts.logging;
     opts.logging = () => void count++;
     try {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { who } from "../helpers/handler-session";
 import { addDays, startOfWeek } from "@/lib/dates/plain-date";
+import type { SquadWeekDto } from "@/lib/data/load-views";
 import { setupTestDb } from "../helpers/db";
 import { createTestTeam } from "../helpers/fixtures";
 
@@ -114,14 +115,7 @@ async function team(name: string) {
       p({ teamId: String(t.teamId) }),
     );
     expect(res.status).toBe(200);
-    return (await res.json()) as {
-      rows: {
-        totals: Record<string, number>;
-        flags: { kind: string; value: number; reason: string }[];
-        bands?: Record<string, number>;
-        missingDays: number;
-      }[];
-    };
+    return (await res.json()) as SquadWeekDto;
   }
   async function setSettings(body: unknown) {
     who.userId = head;
@@ -211,11 +205,7 @@ describe("the squad table shows absolute and relative bands and the week's conta
       { log: yes },
     );
     const { rows } = await t.squad(lastWeek);
-    const row = rows.find((r) => r.totals.contacts === 68) as unknown as {
-      bands: Record<string, number>;
-      contactsByIntensity: { total: number; weighted: number };
-      totals: Record<string, number>;
-    };
+    const row = rows.find((r) => r.totals.contacts === 68)!;
     expect(row.bands.absHsrM).toBeCloseTo(163.695146, 4);
     expect(row.bands.absSprintM).toBeCloseTo(145.904939, 4);
     expect(row.bands.relHsrM).toBeCloseTo(136.185757, 4);
