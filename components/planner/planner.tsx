@@ -464,6 +464,7 @@ function PlannerScreen({ teamId, initialWeek, initial }: PlannerProps) {
           <SessionEditor
             session={editingSession}
             athleteName={editingAthlete?.name ?? ""}
+            measured={shown.measured?.find((m) => m.sessionId === editingSession?.id) ?? null}
             canEdit={shown.canEdit}
             templates={shown.templates}
             onClose={() => setEditing(null)}

@@ -12,8 +12,10 @@ import { formatMinutes } from "@/lib/format/duration";
 import { toBlockInput } from "@/lib/plan/blocks";
 import { newPlausibilityChecks, type PlausibilityCheck } from "@/lib/plan/plausibility";
 import type { PlanSession, PlanTemplate } from "@/lib/plan/types";
+import type { PlanMeasured } from "@/lib/speed/plan-measured";
 import { sessionEditSchema, type SessionEditValues } from "@/lib/validations/plan";
 import { SessionThread } from "@/components/sessions/session-thread";
+import { PlanMeasuredTable } from "@/components/speed/plan-measured-table";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea } from "@/components/ui/field";
 import { BlockFields } from "./block-fields";
@@ -24,6 +26,8 @@ import { FormFooter } from "./form-footer";
 type Props = {
   session: PlanSession | null;
   athleteName: string;
+  /** The session's speed trace against its plan, when one is attached (staff). */
+  measured?: PlanMeasured | null;
   canEdit: boolean;
   templates: PlanTemplate[];
   onClose: () => void;
@@ -63,6 +67,12 @@ export function SessionEditor(props: Props) {
         ) : (
           <SessionDetails session={session} />
         )
+      ) : null}
+      {session && props.measured ? (
+        <section className="mt-5 border-t border-ink-100 pt-4" data-testid="session-measured">
+          <h3 className="text-sm font-semibold text-ink-900">Measured by a speed trace</h3>
+          <PlanMeasuredTable m={props.measured} caption="Planned against measured running load" />
+        </section>
       ) : null}
       {session ? <SessionThread sessionId={session.id} className="mt-5 border-t border-ink-100 pt-4" /> : null}
     </Dialog>

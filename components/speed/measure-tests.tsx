@@ -2,7 +2,9 @@ import { Badge } from "@/components/ui/badge";
 import { Card } from "@/components/ui/card";
 import { AcceptResultButton } from "@/components/speed/accept-button";
 import { TraceChart } from "@/components/speed/trace-chart";
-import type { MeasuredSession, SpeedTestView } from "@/lib/data/speed-views";
+import { PlanMeasuredTable } from "@/components/speed/plan-measured-table";
+import type { SpeedTestView } from "@/lib/data/speed-views";
+import type { PlanMeasured } from "@/lib/speed/plan-measured";
 import type { TeamLoadSettings } from "@/lib/load/types";
 import type { ContactRowsAnalysis, ForceTraceAnalysis } from "@/lib/speed/contact-analysis";
 import { TRACE_SMOOTHING_S, type SpeedTraceAnalysis } from "@/lib/speed/speed-trace";
@@ -27,7 +29,7 @@ export function TraceTests({
   teamId,
 }: {
   tests: SpeedTestView[];
-  measured: MeasuredSession[];
+  measured: PlanMeasured[];
   /** Given when the viewer may accept results. */
   teamId: number | null;
   settings: Pick<TeamLoadSettings, "hsrSpeedMs" | "hsrPct" | "nearMaxPct" | "speedZones">;
@@ -57,45 +59,7 @@ export function TraceTests({
               {f(hsrLine, 2, " m/s")}, near-max {settings.nearMaxPct} % ={" "}
               {f((r.bandVmaxMs * settings.nearMaxPct) / 100, 2, " m/s")}.
             </p>
-            {m ? (
-              <div className="relative mt-2 overflow-x-auto">
-                <table className="w-full text-sm tabular-nums" data-testid={`plan-measured-${t.id}`}>
-                  <caption className="text-left text-xs text-ink-600">
-                    {m.title} on {m.date}: planned against measured
-                  </caption>
-                  <thead>
-                    <tr className="text-left text-xs text-ink-500">
-                      <th scope="col" className="py-1 pr-3 font-medium">
-                        Figure
-                      </th>
-                      <th scope="col" className="py-1 pr-3 font-medium">
-                        Planned
-                      </th>
-                      <th scope="col" className="py-1 font-medium">
-                        Measured
-                      </th>
-                    </tr>
-                  </thead>
-                  <tbody>
-                    {(
-                      [
-                        ["HSR metres", m.planned.hsrM, m.measured.hsrM],
-                        ["Near-max metres", m.planned.nearMaxM, m.measured.nearMaxM],
-                        ["Running metres", m.planned.runM, m.measured.runM],
-                      ] as const
-                    ).map(([label, planned, got]) => (
-                      <tr key={label} className="border-t border-ink-100">
-                        <th scope="row" className="py-1 pr-3 text-left font-normal text-ink-700">
-                          {label}
-                        </th>
-                        <td className="py-1 pr-3">{f(planned, 0, " m")}</td>
-                        <td className="py-1 font-medium text-ink-900">{f(got, 0, " m")}</td>
-                      </tr>
-                    ))}
-                  </tbody>
-                </table>
-              </div>
-            ) : null}
+            {m ? <PlanMeasuredTable m={m} /> : null}
             {chart.length > 1 ? (
               <TraceChart
                 points={chart}

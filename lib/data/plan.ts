@@ -8,6 +8,7 @@ import { ledgerPreviewContext } from "@/lib/load/ledger-week";
 import { db } from "@/models";
 import { listGroups } from "./athletes";
 import { getLedgerWeek } from "./load-ledger";
+import { listPlanMeasured } from "./measured-load";
 import { loadSessions } from "./plan-rows";
 import { listRestrictions } from "./restrictions";
 import { listPhases } from "./season";
@@ -66,7 +67,7 @@ export async function getPlanWeek({
     throw new AppError("not_found", "No athlete profile is linked to your account");
   const visible = (s: { status: string }) => !own || s.status !== "draft";
   const athleteIds = own ? [audience.ownAthleteId!] : undefined;
-  const [source, groups, weekRows, templates, restrictions, phases] = await Promise.all([
+  const [source, groups, weekRows, templates, restrictions, phases, measured] = await Promise.all([
     // From the ledger (README §12): the week, and the 28 days before it the drag preview continues from. An
     // athlete's own view leaves drafts out.
     getLedgerWeek({
@@ -87,6 +88,7 @@ export async function getPlanWeek({
     own ? Promise.resolve([]) : listTemplates({ teamId }),
     listRestrictions({ teamId, from: weekStart, ...(own ? { athleteIds } : {}) }),
     own ? Promise.resolve([]) : listPhases({ teamId, from: weekStart, to: weekStart }),
+    own ? Promise.resolve([]) : listPlanMeasured({ teamId, from: weekStart, to: weekEnd }),
   ]);
   const weekSessions = new Map<number, PlanSession[]>();
   for (const { dto } of weekRows)
@@ -133,6 +135,7 @@ export async function getPlanWeek({
     templates,
     restrictions: restrictions.filter((r) => r.startsOn <= weekEnd),
     phases,
+    measured,
     canEdit: audience.canEdit,
     scope: audience.scope,
   };

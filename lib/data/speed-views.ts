@@ -1,12 +1,8 @@
 import "server-only";
 import { Op } from "sequelize";
-import { listSquad, type AthleteRow } from "@/lib/data/athletes";
-import { sessionMetrics } from "@/lib/load/session-metrics";
-import { toSessionInput } from "@/lib/plan/blocks";
-import { entryInForce } from "@/lib/speed/profile-values";
-import type { SpeedTraceAnalysis } from "@/lib/speed/speed-trace";
+import { listSquad } from "@/lib/data/athletes";
+import { listPlanMeasured } from "./measured-load";
 import { loadSessions } from "./plan-rows";
-import { getTeamLoadSettings } from "./team-settings";
 import { db } from "@/models";
 import { retestStatus, vmaxChange, type RetestStatus } from "@/lib/speed/retest";
 import type { TimingTrialAnalysis } from "@/lib/speed/timing-trial";
@@ -112,62 +108,6 @@ export async function getSquadSpeed({ teamId, today }: { teamId: number; today: 
   return { rows, retestWeeks, recent };
 }
 
-export type MeasuredSession = {
-  testId: number;
-  sessionId: number;
-  date: string;
-  title: string;
-  planned: { hsrM: number; nearMaxM: number; runM: number };
-  measured: { hsrM: number; nearMaxM: number; runM: number };
-};
-
-/**
- * Speed traces attached to planned sessions: the session's planned running load (the engine's sessionMetrics with
- * the speed profile in force on its date) next to what the trace measured by the same bands.
- */
-async function measuredSessions({
-  teamId,
-  athlete,
-  entries,
-  traces,
-}: {
-  teamId: number;
-  athlete: Pick<AthleteRow, "id" | "vmaxMs" | "tauS" | "stepLengthM" | "plyoLevel">;
-  entries: readonly ProfileEntryRow[];
-  traces: readonly SpeedTestRow[];
-}): Promise<MeasuredSession[]> {
-  const attached = traces.filter((t) => t.plannedSessionId !== null);
-  if (attached.length === 0) return [];
-  const [sessions, settings] = await Promise.all([
-    loadSessions({ id: attached.map((t) => t.plannedSessionId!), athleteId: athlete.id }),
-    getTeamLoadSettings({ teamId }),
-  ]);
-  const byId = new Map(sessions.map((s) => [s.dto.id, s.dto]));
-  return attached.flatMap((t) => {
-    const session = byId.get(t.plannedSessionId!);
-    if (!session) return [];
-    const inForce = entryInForce(entries, session.date);
-    const profile = {
-      vmax: inForce?.vmaxMs ?? athlete.vmaxMs,
-      tau: inForce?.tauS ?? athlete.tauS,
-      stepLengthM: inForce?.stepLengthM ?? athlete.stepLengthM,
-      plyoLevel: athlete.plyoLevel,
-    };
-    const planned = sessionMetrics(toSessionInput(session), profile, settings);
-    const r = t.result as SpeedTraceAnalysis;
-    return [
-      {
-        testId: t.id,
-        sessionId: session.id,
-        date: session.date,
-        title: session.title,
-        planned: { hsrM: planned.metrics.hsrM, nearMaxM: planned.metrics.nearMaxM, runM: planned.runM },
-        measured: { hsrM: r.hsrM, nearMaxM: r.nearMaxM, runM: r.distanceM },
-      },
-    ];
-  });
-}
-
 /** One athlete's profile history and tests, plus the squad's current range of each value (context only). */
 export async function getAthleteSpeed({ teamId, athleteId }: { teamId: number; athleteId: number }) {
   const [squad, entries, tests, accepted] = await Promise.all([
@@ -177,9 +117,7 @@ export async function getAthleteSpeed({ teamId, athleteId }: { teamId: number; a
     acceptedTestIds(teamId),
   ]);
   const athlete = squad.find((a) => a.id === athleteId) ?? null;
-  const measured = athlete
-    ? await measuredSessions({ teamId, athlete, entries, traces: tests.filter((t) => t.kind === "trace") })
-    : [];
+  const measured = athlete ? await listPlanMeasured({ teamId, athleteId }) : [];
   const range = (values: (number | null)[]) => {
     const v = values.filter((x): x is number => x !== null);
     return v.length ? { min: Math.min(...v), max: Math.max(...v), n: v.length } : null;

@@ -13,6 +13,7 @@ import type {
 import type { WeekPreviewContext } from "@/lib/load/week-preview";
 import type { WeekSummary } from "@/lib/load/week-summary";
 import type { Restriction } from "@/lib/restrictions/rules";
+import type { PlanMeasured } from "@/lib/speed/plan-measured";
 
 export type PlanBlock = {
   id: number;
@@ -100,6 +101,8 @@ export type PlanWeek = {
    * the athlete's phase (the group's own, else the team's; lib/season/season-grid.ts phaseOfWeek).
    */
   phases?: GridPhase[];
+  /** Staff only: the week's sessions with a speed trace, planned against measured (lib/speed/README.md §8). */
+  measured?: PlanMeasured[];
   /** The viewer may change the plan (head coach, coach). */
   canEdit: boolean;
   /** "own": an athlete seeing only their own row. */

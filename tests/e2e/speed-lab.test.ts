@@ -124,6 +124,8 @@ describeBrowser("speed lab", () => {
       ].join("\n");
     const choices = page.locator("#measure-session option");
     expect(await choices.count()).toBeGreaterThan(1);
+    const sessionId = await choices.nth(1).getAttribute("value");
+    const mayaId = new URL(page.url()).pathname.split("/").at(-1)!;
     await page.locator("#measure-session").selectOption({ index: 1 });
     await page.setInputFiles("#measure-file", {
       name: "slow.csv",
@@ -151,6 +153,32 @@ describeBrowser("speed lab", () => {
     expect(await table.innerText()).toContain("planned against measured");
     expect(await table.innerText()).toContain("HSR metres");
     await page.getByTestId("trace-chart").locator("svg").first().waitFor();
+    const onSpeedPage = await table.innerText();
+
+    // The same planned-against-measured figures where the coach reads the session's load: the athlete's load
+    // page and the planner's session dialog (one reader, lib/data/measured-load.ts).
+    await page.goto(`${app.url}/load/${mayaId}`);
+    const listed = page.getByTestId("plan-measured-list").locator('[data-testid^="plan-measured-"]').first();
+    await listed.waitFor();
+    expect(await listed.innerText()).toBe(onSpeedPage);
+    expect(await seriousAxeViolations(page)).toEqual([]);
+    await noSidewaysScroll(page);
+    const wide = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    try {
+      await signIn(wide, app, headCoach.email);
+      const sessionDate = / on (\d{4}-\d{2}-\d{2}): planned against measured/.exec(onSpeedPage)![1];
+      await wide.goto(`${app.url}/plan?week=${sessionDate}`);
+      await wide.locator(`[data-testid="session-card"][data-session-id="${sessionId}"] button`).first().click();
+      const dialog = wide.getByTestId("session-measured");
+      await dialog.waitFor();
+      const rowsOf = (text: string) => text.split("\n").slice(1).join("\n");
+      expect(rowsOf(await dialog.locator("table").innerText())).toBe(rowsOf(onSpeedPage));
+      expect(await seriousAxeViolations(wide)).toEqual([]);
+    } finally {
+      await wide.close();
+    }
+    await page.goto(`${app.url}/speed/${mayaId}`);
+    await page.getByTestId("measure-upload").waitFor();
 
     await page.locator("#measure-kind").selectOption("contacts");
     // Not the timing test's day (one profile entry a day): today, or yesterday when today starts the week.

@@ -1,11 +1,15 @@
 import Link from "next/link";
 import { AthletePlanActual } from "@/components/coach/athlete-plan-actual";
 import { AthleteLoadView } from "@/components/load/athlete-load-view";
+import { PlanMeasuredList } from "@/components/speed/plan-measured-list";
 import { PageHeader } from "@/components/ui/card";
 import { pageAthlete } from "@/lib/auth/page-access";
+import { scopeOf } from "@/lib/auth/permissions";
 import { getAthleteLoad } from "@/lib/data/load-views";
+import { listPlanMeasured } from "@/lib/data/measured-load";
 import { getPlanVersusActual } from "@/lib/data/plan-vs-actual";
-import { viewerClock } from "@/lib/dates/zoned";
+import { addDays } from "@/lib/dates/plain-date";
+import { teamToday, viewerClock } from "@/lib/dates/zoned";
 import { PLYO_LEVEL_LABEL, formatSpeed } from "@/lib/format/athlete";
 
 export const metadata = { title: "Athlete load" };
@@ -31,6 +35,15 @@ export default async function AthleteLoadPage({ params }: { params: Promise<{ at
         clock: viewerClock(viewer),
       })
     : null;
+  // The last 8 weeks' sessions a speed trace measured, next to their plan (lib/speed/README.md §8).
+  const measured =
+    staff && scopeOf(viewer.role, "speed:view") === "team"
+      ? await listPlanMeasured({
+          teamId: viewer.athlete.teamId,
+          athleteId: viewer.athlete.id,
+          from: addDays(teamToday({ timeZone: viewer.timeZone, now: new Date() }), -55),
+        })
+      : [];
   return (
     <>
       <PageHeader
@@ -51,6 +64,7 @@ export default async function AthleteLoadPage({ params }: { params: Promise<{ at
         }
       />
       <AthleteLoadView initial={initial} />
+      {measured.length ? <PlanMeasuredList items={measured} /> : null}
       {planActual?.athletes[0] ? (
         <div className="mt-8">
           <AthletePlanActual weeks={planActual.athletes[0].weeks} athleteName={initial.athlete.name} />
