@@ -1,13 +1,20 @@
 "use client";
 
-import { useState } from "react";
+import { useEffect, useMemo, useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
+import useSWR from "swr";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
 import { hitsOf, seasonApi } from "@/lib/client/api";
 import { ApiError } from "@/lib/client/fetcher";
 import { applyServerErrors } from "@/lib/client/form-errors";
+import { fetchJson } from "@/lib/client/fetcher";
+import { seasonKeys } from "@/lib/client/keys";
+import type { SeasonViewDto } from "@/lib/data/season-view";
+import { addDays, shiftWeek } from "@/lib/dates/plain-date";
 import type { RestrictionHit } from "@/lib/restrictions/rules";
+import { previewProgression, withPreview, type ProgressionBase } from "@/lib/season/forecast-preview";
+import { progressionSchema } from "@/lib/validations/season";
 
 type Values = {
   sourceWeek: string;
@@ -38,18 +45,51 @@ const formFields = (fields: Record<string, string[]>) =>
   Object.fromEntries(Object.entries(fields).map(([k, v]) => [k.replace(/^(rule|override)\./, ""), v]));
 
 /**
+ * The season view as the form's weeks would leave it, worked out in the page from one read of what the weeks
+ * start from (lib/season/forecast-preview.ts), so each change to the rule shows at once; null while off or
+ * while the form does not hold a progression the server would take.
+ */
+function usePreview(teamId: number, view: SeasonViewDto, on: boolean, v: Values) {
+  const request = progressionSchema.safeParse({
+    sourceWeek: v.sourceWeek,
+    firstWeek: v.firstWeek,
+    weeks: Number(v.weeks),
+    rule: ruleOf(v),
+  });
+  const to = addDays(shiftWeek(view.from, view.weeks.length - 1), 6);
+  const key =
+    on && request.success
+      ? seasonKeys.progressionBase(teamId, { sourceWeek: v.sourceWeek, firstWeek: v.firstWeek, to })
+      : null;
+  const { data: base } = useSWR<ProgressionBase>(key, fetchJson, { revalidateOnFocus: false });
+  const weeks = request.success ? request.data.weeks : 0;
+  const rule = request.success ? JSON.stringify(request.data.rule) : "";
+  return useMemo(() => {
+    if (!key || !base || !rule) return null;
+    return withPreview(view, previewProgression(base, { weeks, rule: JSON.parse(rule) }));
+  }, [key, base, view, weeks, rule]);
+}
+
+/**
  * Draft weeks from one week by a rule (lib/season/README.md): the drafts replace earlier drafts in those weeks and
  * are ordinary sessions afterwards. A physio restriction they would break is shown, with a reason to go ahead.
+ * With the preview on, the season grid shows the forecast of the weeks as they stand in the form before anything
+ * is written.
  */
 export function ProgressionForm({
   teamId,
   sourceWeek,
   firstWeek,
+  view,
+  onPreview,
   onSaved,
 }: {
   teamId: number;
   sourceWeek: string;
   firstWeek: string;
+  /** The season view as stored (the preview is worked out on it). */
+  view: SeasonViewDto;
+  onPreview: (preview: SeasonViewDto | null) => void;
   onSaved: () => void;
 }) {
   const form = useForm<Values>({
@@ -68,7 +108,14 @@ export function ProgressionForm({
   });
   const [hits, setHits] = useState<RestrictionHit[]>([]);
   const [message, setMessage] = useState<string | null>(null);
-  const kind = useWatch({ control: form.control, name: "kind" });
+  const [previewOn, setPreviewOn] = useState(false);
+  const values = useWatch({ control: form.control }) as Values;
+  const kind = values.kind;
+  const preview = usePreview(teamId, view, previewOn, values);
+  useEffect(() => {
+    onPreview(preview);
+  }, [preview, onPreview]);
+  useEffect(() => () => onPreview(null), [onPreview]);
   const errors = form.formState.errors;
   const onSubmit = form.handleSubmit(async (v) => {
     setMessage(null);
@@ -82,6 +129,7 @@ export function ProgressionForm({
       });
       setHits([]);
       setMessage(`${res.sessions.length} draft sessions written over ${res.weeks.length} weeks`);
+      setPreviewOn(false);
       onSaved();
     } catch (e) {
       if (e instanceof ApiError && e.code === "restricted") {
@@ -140,6 +188,21 @@ export function ProgressionForm({
           </Field>
         </div>
       )}
+      <label className="flex items-center gap-2 text-sm text-ink-800">
+        <input
+          type="checkbox"
+          checked={previewOn}
+          onChange={(e) => setPreviewOn(e.target.checked)}
+          data-testid="progression-preview-toggle"
+        />
+        Show these weeks in the season grid before writing them
+      </label>
+      {previewOn && preview ? (
+        <p className="text-xs text-ink-700" data-testid="progression-preview-note">
+          The grid shows the forecast with these weeks (cells marked &ldquo;not written yet&rdquo;). Nothing is saved
+          until you write them.
+        </p>
+      ) : null}
       {hits.length > 0 ? (
         <div className="space-y-2 rounded-lg bg-flag-spike-soft p-3" data-testid="progression-hits">
           <ul className="space-y-1 text-xs text-ink-900">

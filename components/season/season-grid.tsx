@@ -56,13 +56,20 @@ function TargetMarks({ checks }: { checks: TargetCheck[] }) {
 function Cell({ cell, metricShort, weekEnd }: { cell: SeasonCell; metricShort: string; weekEnd: string }) {
   const flag = cell.flagKinds[0];
   return (
-    <td className={clsx("border-l border-ink-100 p-0 align-top", cell.past && "bg-paper-sunk/60")}>
+    <td
+      className={clsx(
+        "border-l border-ink-100 p-0 align-top",
+        cell.past && "bg-paper-sunk/60",
+        cell.preview && "outline-2 -outline-offset-2 outline-state-draft outline-dashed",
+      )}
+    >
       <Link
         href={`/plan?week=${cell.weekStart}`}
         data-testid="season-cell"
         data-week={cell.weekStart}
         data-ratio={cell.ratio ?? ""}
         data-flags={cell.flagKinds.join(" ")}
+        data-preview={cell.preview ? "true" : undefined}
         className="flex min-h-16 min-w-24 flex-col gap-0.5 px-2 py-1.5 hover:bg-lane-50 focus-visible:outline-2"
       >
         <span className="sr-only">
@@ -80,6 +87,7 @@ function Cell({ cell, metricShort, weekEnd }: { cell: SeasonCell; metricShort: s
         {flag ? <FlagMark kind={flag} /> : null}
         <TargetMarks checks={cell.targets} />
         {cell.past ? <span className="text-2xs text-ink-600">logged</span> : null}
+        {cell.preview ? <span className="text-2xs font-medium text-ink-700">not written yet</span> : null}
       </Link>
     </td>
   );

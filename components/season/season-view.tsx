@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import { useState } from "react";
+import { useCallback, useState } from "react";
 import useSWR from "swr";
 import { Button, buttonClass } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
@@ -42,7 +42,11 @@ export function SeasonView({ teamId, initial, canEdit }: { teamId: number; initi
     fallbackData: from === initial.from ? initial : undefined,
     keepPreviousData: true,
   });
-  const view = data ?? initial;
+  const stored = data ?? initial;
+  // A progression being chosen in the form: its forecast is drawn in the grid and the warnings before it is written.
+  const [preview, setPreview] = useState<SeasonViewDto | null>(null);
+  const onPreview = useCallback((v: SeasonViewDto | null) => setPreview(v), []);
+  const view = preview ?? stored;
   const warnings = view.athletes.flatMap((a) => a.warnings.map((w) => ({ athlete: a, warning: w })));
   const refresh = () => void mutate();
 
@@ -75,6 +79,16 @@ export function SeasonView({ teamId, initial, canEdit }: { teamId: number; initi
             Print
           </Button>
         </div>
+        {preview ? (
+          <p
+            className="rounded-lg bg-paper-sunk px-3 py-2 text-sm text-ink-800"
+            role="status"
+            data-testid="season-preview"
+          >
+            Showing the weeks from the form below as if they were written: cells marked &ldquo;not written yet&rdquo;
+            change when the rule changes. Write them to keep them.
+          </p>
+        ) : null}
         <SeasonGrid view={view} />
         <LoadCaution />
         <section aria-labelledby="season-warnings" className="space-y-2">
@@ -154,8 +168,10 @@ export function SeasonView({ teamId, initial, canEdit }: { teamId: number; initi
             <Card className="p-4">
               <ProgressionForm
                 teamId={teamId}
-                sourceWeek={view.currentWeekStart}
-                firstWeek={shiftWeek(view.currentWeekStart, 1)}
+                sourceWeek={stored.currentWeekStart}
+                firstWeek={shiftWeek(stored.currentWeekStart, 1)}
+                view={stored}
+                onPreview={onPreview}
                 onSaved={refresh}
               />
             </Card>

@@ -54,6 +54,8 @@ export const seasonKeys = {
   meets: (teamId: number) => `/api/teams/${teamId}/season/meets`,
   meet: (meetId: number) => `/api/meets/${meetId}`,
   progression: (teamId: number) => `/api/teams/${teamId}/season/progression`,
+  progressionBase: (teamId: number, q: { sourceWeek: string; firstWeek: string; to: string }) =>
+    `/api/teams/${teamId}/season/progression?${new URLSearchParams(q)}`,
 } as const;
 
 /** The athlete's own reports: check-ins, a locked log reopened by a coach, the team's report settings. */

@@ -10,7 +10,7 @@ import {
   type LedgerRow,
   type LedgerWindow,
 } from "@/lib/load/ledger";
-import { weekFromLedger, type LedgerWeek } from "@/lib/load/ledger-week";
+import { ledgerWeeks, weekFromLedger, type LedgerWeek } from "@/lib/load/ledger-week";
 import { recoveryLookBackDays } from "@/lib/load/series";
 import type { LoadView } from "@/lib/load/types";
 import { AppError } from "@/lib/errors";
@@ -170,22 +170,18 @@ export async function getLedgerWeeks({
   return {
     ...inputs,
     athletes: inputs.athletes.map((a) => {
-      const window = ledgerWindow({ rows: rows.get(a.id) ?? [], fromDay, toDay, todayDay, view, method });
-      const weeks = new Map(
-        sorted.map((weekStart) => [
-          weekStart,
-          weekFromLedger({
-            window,
-            sessions: a.sessions,
-            logs: a.logs,
-            profile: a.profile,
-            settings: inputs.settings,
-            view,
-            todayDay,
-            weekStartDay: dayIndex(weekStart),
-          }),
-        ]),
-      );
+      const weeks = ledgerWeeks({
+        rows: rows.get(a.id) ?? [],
+        sessions: a.sessions,
+        logs: a.logs,
+        profile: a.profile,
+        settings: inputs.settings,
+        starts: sorted,
+        toDay,
+        todayDay,
+        view,
+        method,
+      });
       return { ...a, weeks };
     }),
   };

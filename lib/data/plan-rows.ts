@@ -67,7 +67,7 @@ export async function loadSessionsBetween({
   teamId: number;
   from: string;
   to: string;
-  transaction: Transaction;
+  transaction?: Transaction;
 }): Promise<Loaded[]> {
   return loadSessions({ teamId, date: { [Op.between]: [from, to] } }, transaction);
 }

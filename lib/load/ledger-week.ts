@@ -4,7 +4,7 @@
 import { resolveProfile } from "./accumulate";
 import { weekFromColumns, type AthleteColumns, type ColumnsRequest } from "./athlete-load";
 import { topFlagLevel, type Flag, type FlagLevel } from "./flags";
-import type { LedgerWindow } from "./ledger";
+import { ledgerWindow, type LedgerMethod, type LedgerRow, type LedgerWindow } from "./ledger";
 import { metricRecord } from "./metric-record";
 import { alignLogs, priorRecoverySessions, sessionDayNumbers } from "./series";
 import {
@@ -42,6 +42,13 @@ export interface LedgerWeek {
 }
 
 export function weekFromLedger(input: LedgerWeekInput): LedgerWeek {
+  return weekOf(columnsOf(input), input.weekStartDay);
+}
+
+type WeekColumns = { cols: AthleteColumns; req: ColumnsRequest; win: LedgerWindow };
+
+/** What every week of one window shares: the columns and the sessions with their logs lined up, worked out once. */
+function columnsOf(input: Omit<LedgerWeekInput, "weekStartDay">): WeekColumns {
   const { window: win, sessions, settings } = input;
   const cols: AthleteColumns = {
     ...win,
@@ -58,10 +65,39 @@ export function weekFromLedger(input: LedgerWeekInput): LedgerWeek {
     fromDay: win.startDay,
     toDay: win.startDay + win.length - 1,
   };
-  const { week, flags } = weekFromColumns(cols, req, input.weekStartDay);
-  const w = input.weekStartDay - win.startDay;
+  return { cols, req, win };
+}
+
+function weekOf({ cols, req, win }: WeekColumns, weekStartDay: number): LedgerWeek {
+  const { week, flags } = weekFromColumns(cols, req, weekStartDay);
+  const w = weekStartDay - win.startDay;
   const peakRatios = metricRecord((m) => judgedPeak(win.acwr[m].ratio, win.provisional, w, w + 7)?.value ?? null);
   return { week, flags, topLevel: topFlagLevel(flags), peakRatios };
+}
+
+/**
+ * Several weeks of one athlete from the stored rows the weeks need (ledgerReadRange of [fromDay, toDay]) and the
+ * sessions from the recovery look-back before the first week: each week's summary and flags as weekFromLedger
+ * answers it. The server's season view and the browser's progression preview both call it.
+ */
+export function ledgerWeeks(input: {
+  rows: readonly LedgerRow[];
+  sessions: readonly SessionInput[];
+  logs: readonly LogInput[];
+  profile: AthleteProfile;
+  settings: TeamLoadSettings;
+  /** Week starts, ascending; the window runs from the week before the first to `toDay`. */
+  starts: readonly string[];
+  toDay: number;
+  todayDay: number;
+  view: LoadView;
+  method: LedgerMethod;
+}): Map<string, LedgerWeek> {
+  const { rows, starts, toDay, todayDay, view, method } = input;
+  const fromDay = dayIndex(starts[0]) - 7;
+  const window = ledgerWindow({ rows, fromDay, toDay, todayDay, view, method });
+  const shared = columnsOf({ ...input, window });
+  return new Map(starts.map((weekStart) => [weekStart, weekOf(shared, dayIndex(weekStart))]));
 }
 
 /**

@@ -45,6 +45,8 @@ export type SeasonCell = {
   topLevel: FlagLevel | null;
   flagKinds: Flag["kind"][];
   targets: TargetCheck[];
+  /** The figures are a preview of weeks not written yet. */
+  preview?: boolean;
 };
 
 export type SeasonRow = { cells: SeasonCell[]; warnings: ForecastWarning[] };
@@ -67,40 +69,43 @@ export function meetsOf(meets: readonly GridMeet[], athlete: { id: number; group
   );
 }
 
-export function seasonRow(input: {
+type RowContext = {
   athlete: { id: number; groupId: number | null };
-  weeks: readonly LedgerWeekFigures[];
   phases: readonly GridPhase[];
   meets: readonly GridMeet[];
   acwrMetric: Metric;
   weeklyChangeLimitPct: number;
   /** First day of today's week. */
   currentWeekStart: string;
-}): SeasonRow {
-  const { athlete, acwrMetric } = input;
-  const cells = input.weeks.map((w): SeasonCell => {
-    const phase = phaseOfWeek(input.phases, athlete.groupId, w.weekStart);
-    const totals = {
-      hsrM: w.totals.hsrM,
-      nearMaxM: w.totals.nearMaxM,
-      contacts: w.totals.contacts,
-      srpe: w.totals.srpe,
-    };
-    return {
-      weekStart: w.weekStart,
-      past: addDays(w.weekStart, 6) < input.currentWeekStart,
-      phaseId: phase?.id ?? null,
-      totals,
-      ratio: w.peakRatio,
-      ratioProvisional: w.ratioProvisional,
-      changePct: w.changePct[acwrMetric],
-      topLevel: w.topLevel,
-      flagKinds: [...new Set(w.flags.map((f) => f.kind))],
-      targets: phase ? checkTargets(totals, phase.targets) : [],
-    };
-  });
+};
+
+/** One week's cell: the ledger's figures against the phase in force. */
+export function seasonCell(w: LedgerWeekFigures, ctx: Omit<RowContext, "meets" | "weeklyChangeLimitPct">): SeasonCell {
+  const phase = phaseOfWeek(ctx.phases, ctx.athlete.groupId, w.weekStart);
+  const totals = {
+    hsrM: w.totals.hsrM,
+    nearMaxM: w.totals.nearMaxM,
+    contacts: w.totals.contacts,
+    srpe: w.totals.srpe,
+  };
+  return {
+    weekStart: w.weekStart,
+    past: addDays(w.weekStart, 6) < ctx.currentWeekStart,
+    phaseId: phase?.id ?? null,
+    totals,
+    ratio: w.peakRatio,
+    ratioProvisional: w.ratioProvisional,
+    changePct: w.changePct[ctx.acwrMetric],
+    topLevel: w.topLevel,
+    flagKinds: [...new Set(w.flags.map((f) => f.kind))],
+    targets: phase ? checkTargets(totals, phase.targets) : [],
+  };
+}
+
+/** The forecast warnings over a row's cells (only future weeks are warned). */
+export function rowWarnings(cells: readonly SeasonCell[], ctx: RowContext): ForecastWarning[] {
   const forecast = cells.map((c) => {
-    const phase = input.phases.find((p) => p.id === c.phaseId);
+    const phase = ctx.phases.find((p) => p.id === c.phaseId);
     return {
       weekStart: c.weekStart,
       acwr: c.ratio,
@@ -110,8 +115,12 @@ export function seasonRow(input: {
     };
   });
   // Warnings look back a week (the week before a taper or after an unload) but only future weeks are warned.
-  const warnings = forecastWarnings(forecast, meetsOf(input.meets, athlete), input.weeklyChangeLimitPct).filter(
-    (w) => w.weekStart >= input.currentWeekStart,
+  return forecastWarnings(forecast, meetsOf(ctx.meets, ctx.athlete), ctx.weeklyChangeLimitPct).filter(
+    (w) => w.weekStart >= ctx.currentWeekStart,
   );
-  return { cells, warnings };
+}
+
+export function seasonRow(input: RowContext & { weeks: readonly LedgerWeekFigures[] }): SeasonRow {
+  const cells = input.weeks.map((w) => seasonCell(w, input));
+  return { cells, warnings: rowWarnings(cells, input) };
 }

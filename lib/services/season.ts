@@ -1,14 +1,13 @@
 import "server-only";
-import { diffDays, shiftWeek } from "@/lib/dates/plain-date";
+import { addDays, shiftWeek } from "@/lib/dates/plain-date";
 import { listSquad } from "@/lib/data/athletes";
 import { teamWeek } from "@/lib/data/plan";
-import { loadById, loadSessionsBetween, type Loaded } from "@/lib/data/plan-rows";
-import { destroySessions, insertSessions, type NewSession } from "@/lib/data/plan-sessions";
+import { loadById, loadSessionsBetween } from "@/lib/data/plan-rows";
+import { destroySessions, insertSessions } from "@/lib/data/plan-sessions";
 import * as seasonRows from "@/lib/data/season";
 import { inTransaction } from "@/lib/data/transaction";
 import type { PlanWriteResult } from "@/lib/plan/types";
-import { generateWeeks } from "@/lib/season/generate";
-import type { DraftSession } from "@/lib/season/scale-session";
+import { planProgression } from "@/lib/season/progression-plan";
 import type { MeetInput, PhaseInput, ProgressionInput } from "@/lib/validations/season";
 import { change, notify } from "./plan-changes";
 
@@ -29,19 +28,6 @@ export const createMeet = ({ teamId, input }: Team & { input: MeetInput }) =>
 export const updateMeet = (args: Team & { meetId: number; input: MeetInput }) =>
   inTransaction((transaction) => seasonRows.updateMeetRow({ ...args, transaction }));
 
-function draftOf(l: Loaded, weekStart: string): DraftSession<Loaded["dto"]["blocks"][number]> {
-  const s = l.dto;
-  return {
-    dayOffset: diffDays(s.date, weekStart),
-    startTime: s.startTime,
-    durationMin: s.durationMin,
-    title: s.title,
-    plannedRpe: s.plannedRpe,
-    notes: s.notes,
-    blocks: s.blocks,
-  };
-}
-
 export type ProgressionResult = PlanWriteResult & { weeks: { weekStart: string; factor: number }[] };
 
 /**
@@ -54,34 +40,23 @@ export async function generateProgression({
   actorUserId,
   input,
 }: Team & { actorUserId: number; input: ProgressionInput }): Promise<ProgressionResult> {
-  const source = await teamWeek({ teamId, date: input.sourceWeek });
+  const sourceWeekStart = (await teamWeek({ teamId, date: input.sourceWeek })).weekStart;
   const first = await teamWeek({ teamId, date: input.firstWeek });
   const lastDay = shiftWeek(first.weekEnd, input.weeks - 1);
-  const only = input.athleteIds ? new Set(input.athleteIds) : null;
-  const wanted = (l: Loaded) => !only || only.has(l.dto.athleteId);
   return inTransaction(async (transaction) => {
-    const inSource = (
-      await loadSessionsBetween({ teamId, from: source.weekStart, to: source.weekEnd, transaction })
-    ).filter((l) => wanted(l) && l.dto.status !== "cancelled");
-    const athletes = new Set(inSource.map((l) => l.dto.athleteId));
-    const replaced = (await loadSessionsBetween({ teamId, from: first.weekStart, to: lastDay, transaction })).filter(
-      (l) => athletes.has(l.dto.athleteId) && l.dto.status === "draft" && !l.dto.logged,
-    );
-    await destroySessions({ sessionIds: replaced.map((l) => l.dto.id), transaction });
-    const drafted: NewSession[] = [];
-    let weeks: { weekStart: string; factor: number }[] = [];
-    for (const athleteId of athletes) {
-      const drafts = inSource.filter((l) => l.dto.athleteId === athleteId).map((l) => draftOf(l, source.weekStart));
-      const generated = generateWeeks({
-        source: drafts,
-        firstWeekStart: first.weekStart,
-        weeks: input.weeks,
-        rule: input.rule,
-      });
-      weeks = generated.map(({ weekStart, factor }) => ({ weekStart, factor }));
-      for (const week of generated) drafted.push(...week.sessions.map((session) => ({ athleteId, ...session })));
-    }
-    const created = await insertSessions({ teamId, sessions: drafted, transaction });
+    const [source, target] = await Promise.all([
+      loadSessionsBetween({ teamId, from: sourceWeekStart, to: addDays(sourceWeekStart, 6), transaction }),
+      loadSessionsBetween({ teamId, from: first.weekStart, to: lastDay, transaction }),
+    ]);
+    const plan = planProgression({
+      source: source.map((l) => l.dto),
+      target: target.map((l) => l.dto),
+      request: { ...input, sourceWeekStart, firstWeekStart: first.weekStart },
+    });
+    const gone = new Set(plan.replacedIds);
+    const replaced = target.filter((l) => gone.has(l.dto.id));
+    await destroySessions({ sessionIds: plan.replacedIds, transaction });
+    const created = await insertSessions({ teamId, sessions: plan.drafts, transaction });
     const after = await loadById(created, transaction);
     await notify({
       transaction,
@@ -93,7 +68,7 @@ export async function generateProgression({
       ],
       override: input.override,
     });
-    return { sessions: [...after.values()].map((l) => l.dto), removedIds: replaced.map((l) => l.dto.id), weeks };
+    return { sessions: [...after.values()].map((l) => l.dto), removedIds: plan.replacedIds, weeks: plan.weeks };
   });
 }
 

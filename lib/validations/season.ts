@@ -94,6 +94,23 @@ export const progressionSchema = z
   });
 export type ProgressionInput = z.infer<typeof progressionSchema>;
 
+/** What a progression preview starts from (GET …/season/progression): the weeks the season view shows. */
+export const progressionBaseQuerySchema = z
+  .object({
+    sourceWeek: localDateSchema,
+    firstWeek: localDateSchema,
+    /** Last day previewed: the season view's last day. */
+    to: localDateSchema,
+  })
+  .refine((q) => diffDays(q.firstWeek, q.sourceWeek) > 0, {
+    message: "Generate weeks after the source week",
+    path: ["firstWeek"],
+  })
+  .refine((q) => diffDays(q.to, q.firstWeek) >= 0 && diffDays(q.to, q.firstWeek) <= 53 * 7, {
+    message: "Preview from the first week to at most 53 weeks on",
+    path: ["to"],
+  });
+
 export const seasonQuerySchema = z.object({
   from: localDateSchema.optional(),
   weeks: z.coerce.number().int().min(1, "At least one week").max(53, "At most 53 weeks").default(16),

@@ -81,6 +81,7 @@ const TABLE: Line[] = [
   ["GET /api/teams/[teamId]/season/export",            401,   403,   403,   200,   200,   200,   404],
   ["POST /api/teams/[teamId]/season/meets",            401,   403,   403,   403,   201,   201,   404],
   ["POST /api/teams/[teamId]/season/phases",           401,   403,   403,   403,   201,   201,   404],
+  ["GET /api/teams/[teamId]/season/progression",       401,   403,   403,   403,   200,   200,   404],
   ["POST /api/teams/[teamId]/season/progression",      401,   403,   403,   403,   201,   201,   404],
   ["GET /api/teams/[teamId]/settings",                 401,   200,   200,   200,   200,   200,   404],
   ["PATCH /api/teams/[teamId]/settings",               401,   403,   403,   403,   403,   200,   404],

@@ -193,6 +193,11 @@ export const REQUESTS: Record<string, Build> = {
   },
   "POST /api/teams/[teamId]/season/meets": async (w) =>
     api("POST", `/api/teams/${w.teamId}/season/meets`, { name: "Matrix meet", date: w.farMonday(), priority: "C" }),
+  "GET /api/teams/[teamId]/season/progression": async (w) =>
+    api(
+      "GET",
+      `/api/teams/${w.teamId}/season/progression?sourceWeek=${farWeek}&firstWeek=${w.farMonday()}&to=${w.farMonday()}`,
+    ),
   // An empty source week: the generator has nothing to copy, so nothing else the matrix reads changes.
   "POST /api/teams/[teamId]/season/progression": async (w) =>
     api("POST", `/api/teams/${w.teamId}/season/progression`, {

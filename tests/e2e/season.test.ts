@@ -1,7 +1,8 @@
-// The coach's season journey in Chromium against next start on the demo club: add a phase, write five draft weeks
-// from one week (+10 % for three weeks, then a 40 % unload), see the forecast warn about the week that jumps
-// after the unload, fix it by dragging a block onto the unload week in the week plan and see the warning clear;
-// writing the weeks again with a lighter unload keeps it clear. Far-future weeks keep the demo's own plan out of
+// The coach's season journey in Chromium against next start on the demo club: add a phase, preview five draft
+// weeks from one week (+10 % for three weeks, then a 40 % unload) in the grid before writing them, write them and
+// find the previewed figures, see the forecast warn about the week that jumps after the unload, fix it by
+// dragging a block onto the unload week in the week plan and see the warning clear; writing the weeks again with
+// a lighter unload keeps it clear. Far-future weeks keep the demo's own plan out of
 // the figures. axe on the screen; no sideways scroll on a phone.
 import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
@@ -60,7 +61,7 @@ describeBrowser("the season view", () => {
     await app?.stop();
   });
 
-  async function write(page: Page, unloadPct: string) {
+  async function fill(page: Page, unloadPct: string) {
     const form = page.getByTestId("progression-form");
     await form.getByLabel("Copy the week of").fill(source);
     await form.getByLabel("Start in the week of").fill(shiftWeek(source, 1));
@@ -68,6 +69,10 @@ describeBrowser("the season view", () => {
     await form.getByLabel("Rise each week (%)").fill("10");
     await form.getByLabel("Build weeks").fill("3");
     await form.getByLabel("Unload cut (%)").fill(unloadPct);
+    return form;
+  }
+  async function write(page: Page, unloadPct: string) {
+    const form = await fill(page, unloadPct);
     await form.getByRole("button", { name: "Write draft weeks" }).click();
     await form.getByTestId("progression-message").getByText("10 draft sessions written over 5 weeks").waitFor();
   }
@@ -88,9 +93,31 @@ describeBrowser("the season view", () => {
     await phase.getByRole("button", { name: "Add phase" }).click();
     await page.getByTestId("season-phases").getByText("Speed build · Specific preparation").waitFor();
 
-    await write(page, "40");
+    // Before anything is written: with the preview on, the grid and the warnings show the weeks as they would stand
+    // (worked out in the page), and follow each change to the rule.
+    const form = await fill(page, "40");
+    await form.getByTestId("progression-preview-toggle").check();
+    await page.getByTestId("season-preview").waitFor();
+    const mayaCell = page
+      .locator(`[data-testid=season-row][data-athlete-id="${mayaId}"]`)
+      .locator(`[data-testid=season-cell][data-week="${shiftWeek(source, 5)}"]`);
+    await mayaCell.and(page.locator('[data-preview="true"]')).waitFor();
     const jump = page.getByTestId("season-warning").filter({ hasText: "after an unload week" });
     await jump.waitFor();
+    const previewed = await mayaCell.getAttribute("data-ratio");
+    await form.getByLabel("Unload cut (%)").fill("10");
+    await page.getByTestId("no-season-warnings").waitFor();
+    await form.getByLabel("Unload cut (%)").fill("40");
+    await jump.waitFor();
+    expect(await mayaCell.getAttribute("data-ratio")).toBe(previewed);
+    expect(await seriousAxeViolations(page)).toEqual([]);
+
+    await write(page, "40");
+    await page.getByTestId("season-preview").waitFor({ state: "detached" });
+    await jump.waitFor();
+    // The written weeks are the previewed ones: the same ratio, no longer marked.
+    await mayaCell.and(page.locator(":not([data-preview])")).waitFor();
+    expect(await mayaCell.getAttribute("data-ratio")).toBe(previewed);
     expect(await jump.textContent()).toMatch(/^Maya/);
     const cell = page.locator(`[data-testid=season-row] [data-week="${shiftWeek(source, 5)}"]`).first();
     expect(await cell.getAttribute("href")).toBe(`/plan?week=${shiftWeek(source, 5)}`);

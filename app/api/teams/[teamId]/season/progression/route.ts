@@ -1,8 +1,10 @@
 import { requireMember } from "@/lib/auth/access";
-import { parseJson, parseParams, route } from "@/lib/http";
+import { getProgressionBase } from "@/lib/data/season-preview";
+import { viewerClock } from "@/lib/dates/zoned";
+import { parseJson, parseParams, parseQuery, route } from "@/lib/http";
 import { generateProgression } from "@/lib/services/season";
 import { teamParamsSchema } from "@/lib/validations/plan";
-import { progressionSchema } from "@/lib/validations/season";
+import { progressionBaseQuerySchema, progressionSchema } from "@/lib/validations/season";
 
 export const runtime = "nodejs";
 
@@ -12,4 +14,17 @@ export const POST = route<{ teamId: string }>(async (req, { params }) => {
   const viewer = await requireMember({ teamId, can: "plan:edit" });
   const input = await parseJson(req, progressionSchema);
   return Response.json(await generateProgression({ teamId, actorUserId: viewer.userId, input }), { status: 201 });
+});
+
+/**
+ * What the season screen previews a progression from (?sourceWeek&firstWeek&to): the browser then works out the
+ * forecast of any rule itself (lib/season/forecast-preview.ts), with the numbers the write will give.
+ */
+export const GET = route<{ teamId: string }>(async (req, { params }) => {
+  const { teamId } = parseParams(await params, teamParamsSchema);
+  const viewer = await requireMember({ teamId, can: "plan:edit" });
+  const { sourceWeek, firstWeek, to } = parseQuery(req, progressionBaseQuerySchema);
+  return Response.json(
+    await getProgressionBase({ teamId, sourceWeek, firstWeek, through: to, clock: viewerClock(viewer) }),
+  );
 });
