@@ -1,15 +1,20 @@
-// Restrictions journey against the built app and the demo seed: the physio reads Dario's seeded restriction,
-// sets a contact cap through the form (a field error first), sees it listed and lifts it; a coach reads the card
-// without the form; an athlete sees their own current limits on /me.
+// Restrictions journey against the built app, on a team of its own (so every count is this test's rows): the
+// physio reads the restriction set before the test, sets a contact cap through the form (a field error first),
+// sees it listed and lifts it; a coach reads the card without the form; an athlete sees their own current limits
+// on /me.
 import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
+import { addDays } from "@/lib/dates/plain-date";
 import { teamToday } from "@/lib/dates/zoned";
-import { RESTRICTED_ATHLETE } from "@/lib/seed/seed-restrictions";
+import { createAppTeam } from "../helpers/app-team";
+import { TEST_PASSWORD } from "../helpers/fixtures";
 import { apiSession, describeBrowser, launchBrowser, screenshot, signIn, startApp, type App } from "./harness";
 
-const PHYSIO = "physio@harbourvale.test";
-const COACH = "coach@harbourvale.test";
-const MAYA = "maya@harbourvale.test";
+const PHYSIO = "physio@limitstrack.test";
+const COACH = "coach@limitstrack.test";
+const BEN = "ben@limitstrack.test";
+const ADA_NAME = "Ada Athlete";
+const BEN_NAME = "Ben Athlete";
 
 async function athletePath(page: Page, app: App, name: string): Promise<string> {
   await page.goto(`${app.url}/squad`);
@@ -21,31 +26,47 @@ async function athletePath(page: Page, app: App, name: string): Promise<string> 
 describeBrowser("restrictions journey", () => {
   let app: App;
   let browser: Browser;
-  let darioPath = "";
+  let adaPath = "";
 
   beforeAll(async () => {
     app = await startApp();
     browser = await launchBrowser();
+    const own = await createAppTeam(app.dbPath, { name: "Limits Track" });
+    // Set before the journey, as a physio would have days ago: no max-velocity running for a week.
+    const today = teamToday({ timeZone: "Europe/London", now: new Date() });
+    const physio = await apiSession(app, PHYSIO, TEST_PASSWORD);
+    const res = await physio.fetch(`/api/athletes/${own.users["ada@limitstrack.test"].athleteId}/restrictions`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({
+        rule: "no_kind",
+        blockKinds: ["max_velocity"],
+        startsOn: addDays(today, -4),
+        endsOn: addDays(today, 3),
+        note: "Left hamstring tightness. Acceleration work to 20 m and tempo are fine; no flying sprints until reviewed.",
+      }),
+    });
+    expect(res.status, await res.clone().text()).toBe(201);
   }, 300_000);
   afterAll(async () => {
     await browser?.close();
     await app?.stop();
   });
 
-  it("the physio sees the seeded restriction, adds a contact cap through the form and lifts it", async () => {
+  it("the physio sees the earlier restriction, adds a contact cap through the form and lifts it", async () => {
     const context = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
     const page = await context.newPage();
-    await signIn(page, app, PHYSIO);
-    darioPath = await athletePath(page, app, RESTRICTED_ATHLETE);
-    await page.goto(`${app.url}${darioPath}`);
+    await signIn(page, app, PHYSIO, TEST_PASSWORD);
+    adaPath = await athletePath(page, app, ADA_NAME);
+    await page.goto(`${app.url}${adaPath}`);
     const card = page.getByTestId("restrictions-card");
     await card.waitFor();
     const current = card.getByTestId("restrictions-current");
     await expect.poll(() => current.getByTestId("restriction-item").count()).toBe(1);
-    const seeded = current.getByTestId("restriction-item").first();
-    expect(await seeded.getByTestId("restriction-text").textContent()).toMatch(/^No max velocity, /);
-    expect(await seeded.textContent()).toContain("no flying sprints until reviewed");
-    expect(await seeded.textContent()).toContain("Set by Imogen Dervaux");
+    const earlier = current.getByTestId("restriction-item").first();
+    expect(await earlier.getByTestId("restriction-text").textContent()).toMatch(/^No max velocity, /);
+    expect(await earlier.textContent()).toContain("no flying sprints until reviewed");
+    expect(await earlier.textContent()).toContain("Set by Pia Physio");
     expect(await card.getByTestId("restriction-caution").textContent()).toMatch(/monitoring aids/);
 
     const form = card.getByTestId("restriction-form");
@@ -73,7 +94,7 @@ describeBrowser("restrictions journey", () => {
       .filter({ hasText: "At most 60 ground contacts per session" })
       .filter({ hasText: "Lifted" })
       .waitFor();
-    // The seeded one is untouched.
+    // The earlier one is untouched.
     expect(await current.getByTestId("restriction-item").first().getByTestId("restriction-text").textContent()).toMatch(
       /^No max velocity, /,
     );
@@ -82,8 +103,8 @@ describeBrowser("restrictions journey", () => {
 
   it("a coach reads the card without the form or lift buttons", async () => {
     const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-    await signIn(page, app, COACH);
-    await page.goto(`${app.url}${await athletePath(page, app, RESTRICTED_ATHLETE)}`);
+    await signIn(page, app, COACH, TEST_PASSWORD);
+    await page.goto(`${app.url}${await athletePath(page, app, ADA_NAME)}`);
     const card = page.getByTestId("restrictions-card");
     await card.getByTestId("restriction-item").first().waitFor();
     expect(await card.getByTestId("restriction-item").first().textContent()).toContain("No max velocity");
@@ -96,12 +117,12 @@ describeBrowser("restrictions journey", () => {
 
   it("an athlete sees their own current limits on /me, read-only", async () => {
     const staff = await browser.newPage();
-    await signIn(staff, app, PHYSIO);
-    const mayaId = Number((await athletePath(staff, app, "Maya Okafor")).split("/").at(-1));
+    await signIn(staff, app, PHYSIO, TEST_PASSWORD);
+    const benId = Number((await athletePath(staff, app, BEN_NAME)).split("/").at(-1));
     await staff.close();
-    const physio = await apiSession(app, PHYSIO);
+    const physio = await apiSession(app, PHYSIO, TEST_PASSWORD);
     const today = teamToday({ timeZone: "Europe/London", now: new Date() });
-    const res = await physio.fetch(`/api/athletes/${mayaId}/restrictions`, {
+    const res = await physio.fetch(`/api/athletes/${benId}/restrictions`, {
       method: "POST",
       headers: { "content-type": "application/json" },
       body: JSON.stringify({
@@ -115,7 +136,7 @@ describeBrowser("restrictions journey", () => {
 
     const context = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
     const page = await context.newPage();
-    await signIn(page, app, MAYA);
+    await signIn(page, app, BEN, TEST_PASSWORD);
     await page.goto(`${app.url}/me`);
     const mine = page.getByTestId("my-restrictions");
     await mine.waitFor();
@@ -125,9 +146,9 @@ describeBrowser("restrictions journey", () => {
     expect(await mine.textContent()).toMatch(/monitoring aids/);
     expect(await page.getByTestId("lift-restriction").count()).toBe(0);
     // Her own list over the API, but nobody else's.
-    const maya = await apiSession(app, MAYA);
-    expect((await maya.fetch(`/api/athletes/${mayaId}/restrictions`)).status).toBe(200);
-    expect((await maya.fetch(`/api/athletes/${darioPath.split("/").at(-1)}/restrictions`)).status).toBe(404);
+    const ben = await apiSession(app, BEN, TEST_PASSWORD);
+    expect((await ben.fetch(`/api/athletes/${benId}/restrictions`)).status).toBe(200);
+    expect((await ben.fetch(`/api/athletes/${adaPath.split("/").at(-1)}/restrictions`)).status).toBe(404);
     await screenshot(page, "restrictions-athlete");
     await context.close();
   });
