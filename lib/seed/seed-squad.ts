@@ -125,5 +125,11 @@ export async function seedSquad(
     });
     count += sessions.length;
   }
+  // Ids were given here, so PostgreSQL's sequences did not move: the next ordinary insert would reuse one.
+  if (d.sequelize.getDialect() === "postgres")
+    for (const table of ["planned_sessions", "session_blocks"])
+      await d.sequelize.query(
+        `SELECT setval(pg_get_serial_sequence('${table}', 'id'), (SELECT coalesce(max(id), 1) FROM ${table}))`,
+      );
   return { teamId: team.id, athleteIds, sessions: count };
 }
