@@ -105,6 +105,7 @@ describeBrowser("the season view", () => {
     const jump = page.getByTestId("season-warning").filter({ hasText: "after an unload week" });
     await jump.waitFor();
     const previewed = await mayaCell.getAttribute("data-ratio");
+    await screenshot(page, "season-preview");
     await form.getByLabel("Unload cut (%)").fill("10");
     await page.getByTestId("no-season-warnings").waitFor();
     await form.getByLabel("Unload cut (%)").fill("40");
