@@ -21,6 +21,8 @@ const copy = await import("@/app/api/season-phases/[phaseId]/copy/route");
 const meets = await import("@/app/api/teams/[teamId]/season/meets/route");
 const meet = await import("@/app/api/meets/[meetId]/route");
 const progression = await import("@/app/api/teams/[teamId]/season/progression/route");
+const session = await import("@/app/api/sessions/[sessionId]/route");
+const availability = await import("@/app/api/athletes/[athleteId]/availability/route");
 const csv = await import("@/app/api/teams/[teamId]/season/export/route");
 
 const a = await createTestTeam(d, { name: "Season Track" });
@@ -216,6 +218,44 @@ describe("generated weeks", () => {
       override: { reason: "Coach and physio agreed" },
     });
     expect(forced.status).toBe(201);
+  });
+
+  it("respects the physio's availability the same way: an unavailable athlete's weeks need a reason", async () => {
+    const away = shiftWeek(W1, 8);
+    as(a.users.physio.userId);
+    const set = await availability.POST(
+      send(`/api/athletes/${ada}/availability`, "POST", {
+        level: "unavailable",
+        startsOn: away,
+        returnOn: addDays(away, 6),
+        note: "Ankle sprain",
+      }),
+      p({ athleteId: String(ada) }),
+    );
+    expect(set.status).toBe(201);
+    as(coach);
+    const refused = await json(await gen({ firstWeek: away, weeks: 1 }));
+    expect(refused.status).toBe(409);
+    expect(refused.body.error?.code).toBe("restricted");
+    expect(await sessionsOf(away, addDays(away, 6))).toHaveLength(0);
+    const forced = await gen({
+      firstWeek: away,
+      weeks: 1,
+      override: { reason: "Pool sessions agreed with the physio" },
+    });
+    expect(forced.status).toBe(201);
+    expect(await sessionsOf(away, addDays(away, 6))).toHaveLength(2);
+  });
+
+  it("are ordinary sessions: a generated draft moves to another day like any other", async () => {
+    const [draft] = (await sessionsOf(shiftWeek(W1, 5), W6end)).filter((s) => s.status === "draft");
+    as(coach);
+    const moved = await session.PATCH(
+      send(`/api/sessions/${draft.id}`, "PATCH", { version: draft.version, date: addDays(draft.date, 1) }),
+      p({ sessionId: String(draft.id) }),
+    );
+    expect(moved.status).toBe(200);
+    expect((await d.PlannedSession.findByPk(draft.id))!.date).toBe(addDays(draft.date, 1));
   });
 
   it("refuses a source week after the first generated week and more than 12 weeks", async () => {
