@@ -56,6 +56,25 @@ describe("applyServerErrors: the server's field messages on a react-hook-form fo
     expect(f.getFieldState("name").invalid).toBe(false);
   });
 
+  it("with a function, each server path lands on the form field the function names, and null skips it", async () => {
+    // A form whose body is sent in another shape (a typed-in table sent as CSV lines): the server names lines.
+    const err = await toApiError(
+      errorResponse(
+        new AppError("invalid", "Check line 2", {
+          fields: { "line 2 distance_m": ["At most 600 m", "x"], "line 2 note": ["Too long"], other: ["y"] },
+        }),
+      ),
+    );
+    const f = form();
+    const toField = (path: string) =>
+      path === "line 2 distance_m" ? ("running.distanceM" as const) : path === "line 2 note" ? ("note" as const) : null;
+    expect(applyServerErrors(f, err, toField)).toBe(true);
+    expect(f.error("running.distanceM")).toBe("At most 600 m");
+    expect(f.error("note")).toBe("Too long");
+    expect(f.getFieldState("name").invalid).toBe(false);
+    expect(applyServerErrors(form(), err, () => null)).toBe(false);
+  });
+
   it("says nothing was placed when the refusal names no field of the form (the caller shows the message)", async () => {
     const err = await toApiError(errorResponse(new AppError("forbidden", "You do not have access to this")));
     const f = form();
