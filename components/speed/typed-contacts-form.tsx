@@ -6,7 +6,7 @@ import { useState } from "react";
 import { useFieldArray, useForm, type FieldPath } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
-import { ApiError } from "@/lib/client/fetcher";
+import { applyServerErrors } from "@/lib/client/form-errors";
 import { speedApi } from "@/lib/client/speed";
 import { contactRowsCsv, typedFieldOf } from "@/lib/speed/typed-entry";
 import { typedContactsSchema, type TypedContactsInput } from "@/lib/validations/speed";
@@ -27,7 +27,7 @@ export function TypedContactsForm({ teamId, athleteId, today }: { teamId: number
     resolver: zodResolver(typedContactsSchema),
     defaultValues: { testDate: today, rows: [EMPTY_ROW, EMPTY_ROW] },
   });
-  const { register, control, formState, setError } = form;
+  const { register, control, formState } = form;
   const rows = useFieldArray({ control, name: "rows" });
   const err = formState.errors;
   const rowsError = err.rows?.message ?? err.rows?.root?.message;
@@ -53,12 +53,7 @@ export function TypedContactsForm({ teamId, athleteId, today }: { teamId: number
       router.refresh();
     } catch (e) {
       setMessage(e instanceof Error ? e.message : "Could not save the contacts");
-      if (e instanceof ApiError) {
-        for (const [key, messages] of Object.entries(e.fields ?? {})) {
-          const name = typedFieldOf("contacts", key);
-          if (name && messages[0]) setError(name as FieldPath<TypedContactsInput>, { message: messages[0] });
-        }
-      }
+      applyServerErrors(form, e, (key) => typedFieldOf("contacts", key) as FieldPath<TypedContactsInput> | null);
     }
   });
 

@@ -7,7 +7,7 @@ import { useState } from "react";
 import { useFieldArray, useForm, useWatch, type FieldPath, type Resolver } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select } from "@/components/ui/field";
-import { ApiError } from "@/lib/client/fetcher";
+import { applyServerErrors } from "@/lib/client/form-errors";
 import { speedApi } from "@/lib/client/speed";
 import { SPEED_START_TYPES } from "@/lib/domain/speed";
 import { normaliseTypedTrial, timingTrialCsv, typedFieldOf } from "@/lib/speed/typed-entry";
@@ -50,7 +50,7 @@ export function TypedTimingForm({
       flying: { lengthM: 20, timeS: BLANK },
     },
   });
-  const { register, control, formState, setError } = form;
+  const { register, control, formState } = form;
   const gates = useFieldArray({ control, name: "gates" });
   const start = useWatch({ control, name: "startType" });
   const flying = start === "flying";
@@ -75,12 +75,7 @@ export function TypedTimingForm({
       router.refresh();
     } catch (e) {
       setMessage(e instanceof Error ? e.message : "Could not save the trial");
-      if (e instanceof ApiError) {
-        for (const [key, messages] of Object.entries(e.fields ?? {})) {
-          const name = typedFieldOf("timing", key, flying);
-          if (name && messages[0]) setError(name as FieldPath<TimingTrialInput>, { message: messages[0] });
-        }
-      }
+      applyServerErrors(form, e, (key) => typedFieldOf("timing", key, flying) as FieldPath<TimingTrialInput> | null);
     }
   });
 

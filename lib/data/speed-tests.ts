@@ -3,7 +3,7 @@ import { createHash } from "node:crypto";
 import { col, fn, type Transaction } from "sequelize";
 import type { SpeedStartType, SpeedTestKind } from "@/lib/domain/speed";
 import { AppError } from "@/lib/errors";
-import { db } from "@/models";
+import { db, type SpeedTest } from "@/models";
 
 // Speed-lab uploads and tests (migration 015). The file is kept as it came; each test keeps the measurements
 // as entered and the result computed from them (JSON text).
@@ -106,19 +106,21 @@ const FIELDS = [
   "createdAt",
 ] as const;
 
-function toRow(r: Record<(typeof FIELDS)[number], unknown>): SpeedTestRow {
+// A raw read (`raw: true`) answers plain objects with the model's fields; PostgreSQL may hand numbers and dates
+// over as text, hence the conversions.
+function toRow(r: Pick<SpeedTest, (typeof FIELDS)[number]>): SpeedTestRow {
   return {
     id: Number(r.id),
     athleteId: Number(r.athleteId),
-    kind: r.kind as SpeedTestKind,
+    kind: r.kind,
     testDate: String(r.testDate).slice(0, 10),
-    startType: (r.startType as SpeedStartType | null) ?? null,
+    startType: r.startType ?? null,
     bodyMassKg: r.bodyMassKg === null ? null : Number(r.bodyMassKg),
     uploadId: r.uploadId === null ? null : Number(r.uploadId),
     plannedSessionId: r.plannedSessionId === null ? null : Number(r.plannedSessionId),
     data: JSON.parse(String(r.data)),
     result: JSON.parse(String(r.result)),
-    createdAt: r.createdAt as Date,
+    createdAt: r.createdAt,
   };
 }
 
@@ -140,7 +142,7 @@ export async function getSpeedTest({
     transaction,
   });
   if (!row) throw new AppError("not_found", "Not found");
-  return toRow(row as unknown as Record<(typeof FIELDS)[number], unknown>);
+  return toRow(row);
 }
 
 /** An athlete's tests, newest first (or the whole team's with no athleteId). */
@@ -164,7 +166,7 @@ export async function listSpeedTests({
     ],
     raw: true,
   });
-  return rows.map((r) => toRow(r as unknown as Record<(typeof FIELDS)[number], unknown>));
+  return rows.map(toRow);
 }
 
 /** The uploaded file as it came (the team's own only). */
@@ -188,11 +190,11 @@ export async function latestTestDates({
   kind: SpeedTestKind;
 }): Promise<Map<number, string>> {
   const { SpeedTest } = await db();
-  const rows = (await SpeedTest.findAll({
+  const rows = await SpeedTest.findAll({
     where: { teamId, kind },
     attributes: ["athleteId", [fn("MAX", col("test_date")), "latest"]],
     group: ["athleteId"],
-    raw: true,
-  })) as unknown as { athleteId: number; latest: string }[];
-  return new Map(rows.map((r) => [Number(r.athleteId), String(r.latest).slice(0, 10)]));
+  });
+  // `latest` is not a model field: get() reads it from the row as the database answered.
+  return new Map(rows.map((r) => [Number(r.athleteId), String(r.get("latest")).slice(0, 10)]));
 }
