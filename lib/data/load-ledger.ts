@@ -32,6 +32,8 @@ type SpanRequest = {
   sessionsFrom: number;
   /** false: the athlete's own view, where a coach's drafts do not exist. */
   withDrafts?: boolean;
+  /** Also the week grid's form of the sessions from this day on (getLoadSeriesInputs `gridFrom`). */
+  gridFrom?: string;
 };
 
 export type LedgerSpan = Omit<LoadInputs, "athletes"> & {
@@ -45,7 +47,7 @@ export type LedgerSpan = Omit<LoadInputs, "athletes"> & {
  * later) are recomputed from the sessions without them; the stored states before today never count a draft.
  */
 export async function readLedgerSpan(req: SpanRequest): Promise<LedgerSpan> {
-  const { teamId, athleteIds, fromDay, toDay, todayDay, transaction } = req;
+  const { teamId, athleteIds, fromDay, toDay, todayDay, transaction, gridFrom } = req;
   const withDrafts = req.withDrafts ?? true;
   // From today on the window steps with each day's values; the plan line shows them from fromDay.
   const ownFrom = Math.min(fromDay, todayDay);
@@ -57,6 +59,7 @@ export async function readLedgerSpan(req: SpanRequest): Promise<LedgerSpan> {
     from: dateFromDayIndex(sessionsFrom),
     through: dateFromDayIndex(toDay),
     transaction,
+    gridFrom,
   });
   const ids = inputs.athletes.map((a) => a.id);
   const rows = await readLedgerRows({ athleteIds: ids, ...ledgerReadRange(fromDay, toDay, todayDay), transaction });
@@ -102,6 +105,7 @@ export async function getLedgerWeek({
   today: string;
   view: LoadView;
   withDrafts?: boolean;
+  gridFrom?: string;
 }): Promise<Omit<LoadInputs, "athletes"> & { athletes: LedgerAthleteWeek[] }> {
   const ws = dayIndex(weekStart);
   const fromDay = from ? Math.min(dayIndex(from), ws - 7) : ws - 7;

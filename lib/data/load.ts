@@ -16,6 +16,8 @@ import type {
 } from "@/lib/load/types";
 import type { TeamClock } from "@/lib/dates/zoned";
 import { AppError } from "@/lib/errors";
+import { toPlanSession } from "@/lib/plan/dto";
+import type { PlanSession } from "@/lib/plan/types";
 import { db } from "@/models";
 import { SETTINGS_SQL_COLUMNS, toEngineSettings, type SettingsRow } from "./team-settings";
 
@@ -38,6 +40,8 @@ export type LoadInputs = {
   /** ISO weekday the team's week starts on (1 = Monday … 7 = Sunday). */
   weekStartDay: number;
   athletes: LoadAthleteInputs[];
+  /** With `gridFrom`: the week grid's form of every session read dated on or after it, in date order. */
+  gridSessions?: PlanSession[];
 };
 
 /**
@@ -54,6 +58,11 @@ type Through = {
   sequelize?: Sequelize;
   /** false: leave accepted speed tests out (a migration older than 015 reads a database without them). */
   profileHistory?: boolean;
+  /**
+   * "YYYY-MM-DD": the same query also gives the week grid's form of the sessions from this day on (`gridSessions`:
+   * titles, notes, versions, block ids and templates), so the week plan reads its sessions once.
+   */
+  gridFrom?: string;
 };
 
 /** The team's zone and ISO week start; 404 when the team does not exist. */
@@ -119,7 +128,18 @@ type SessionRow = {
   /** JSON text: [[id, kind, title, running, drills], …] in position order, or null without blocks. */
   blocks: string | null;
 };
+/** The grid's extra columns (gridFrom); the packed blocks then also carry template id, position and notes. */
+type GridColumns = {
+  title: string;
+  notes: string | null;
+  version: number;
+  sequence: number;
+  published_at: Date | string | null;
+  updated_at: Date | string;
+  log_id: number | null;
+};
 type PackedBlock = [number, BlockKind, string, RunningPrescription | null, PlyoDrill[] | null];
+type PackedGridBlock = [...PackedBlock, number | null, number, string | null];
 
 // Plain SQL, not model finders: the squad-week handler has a 50 ms budget and Sequelize's row handling costs
 // about twice the query itself. Values go in as escaped replacements; table names are the migrations'.
@@ -140,7 +160,7 @@ const SQL = {
     FROM athletes a LEFT JOIN training_groups g ON g.id = a.group_id
     WHERE a.team_id = :teamId AND (:everyone = 1 OR a.id IN (:athleteIds))`,
   sessions: `SELECT s.id, s.athlete_id, s.date, s.start_time, s.duration_min, s.planned_rpe, s.status,
-    l.completion, l.rpe, l.minutes, l.completed_reps,
+    l.completion, l.rpe, l.minutes, l.completed_reps{grid},
     {blocks} AS blocks
     FROM planned_sessions s LEFT JOIN session_logs l ON l.session_id = s.id
     WHERE {filter} ORDER BY s.date, s.start_time, s.id`,
@@ -149,12 +169,17 @@ const SQL = {
 // The same packed text in each dialect's words (PostgreSQL: string_agg and to_json for json_quote).
 const BLOCKS_SQL = {
   sqlite: `(SELECT '[' || group_concat('[' || b.id || ',' || json_quote(b.kind) || ',' || json_quote(b.title) || ','
-      || coalesce(b.running, 'null') || ',' || coalesce(b.drills, 'null') || ']', ',' ORDER BY b.position, b.id) || ']'
-      FROM session_blocks b WHERE b.session_id = s.id)`,
-  postgres: `(SELECT '[' || string_agg('[' || b.id || ',' || to_json(b.kind)::text || ',' || to_json(b.title)::text || ','
-      || coalesce(b.running::text, 'null') || ',' || coalesce(b.drills::text, 'null') || ']', ',' ORDER BY b.position, b.id)
+      || coalesce(b.running, 'null') || ',' || coalesce(b.drills, 'null'){grid} || ']', ',' ORDER BY b.position, b.id)
       || ']' FROM session_blocks b WHERE b.session_id = s.id)`,
+  postgres: `(SELECT '[' || string_agg('[' || b.id || ',' || to_json(b.kind)::text || ',' || to_json(b.title)::text || ','
+      || coalesce(b.running::text, 'null') || ',' || coalesce(b.drills::text, 'null'){grid} || ']', ','
+      ORDER BY b.position, b.id) || ']' FROM session_blocks b WHERE b.session_id = s.id)`,
 };
+const GRID_BLOCK_SQL = {
+  sqlite: ` || ',' || coalesce(b.template_id, 'null') || ',' || b.position || ',' || json_quote(b.notes)`,
+  postgres: ` || ',' || coalesce(b.template_id::text, 'null') || ',' || b.position || ',' || coalesce(to_json(b.notes)::text, 'null')`,
+};
+const GRID_SESSION_SQL = `, s.title, s.notes, s.version, s.sequence, s.published_at, s.updated_at, l.id AS log_id`;
 
 // Accepted speed tests (migration 015, lib/speed/README.md §4), packed like the blocks: one value per athlete.
 const EARLIER_SQL = {
@@ -196,6 +221,7 @@ export async function getLoadSeriesInputs({
   transaction,
   sequelize: given,
   profileHistory = true,
+  gridFrom,
 }: Through & { teamId: number; athleteIds?: readonly number[] }): Promise<LoadInputs> {
   const sequelize = given ?? (await db()).sequelize;
   // IN () is not SQL: an empty list becomes [0], which matches no row.
@@ -211,14 +237,16 @@ export async function getLoadSeriesInputs({
     sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements, transaction });
   const dialect = sequelize.getDialect() === "postgres" ? "postgres" : "sqlite";
   const athletesSql = SQL.athletes.replace("{earlier}", profileHistory ? EARLIER_SQL[dialect] : "NULL");
+  const grid = gridFrom !== undefined;
   const sessionsSql = SQL.sessions
     .replace("{filter}", athleteIds ? SESSION_FILTER.athletes : SESSION_FILTER.team)
-    .replace("{blocks}", sequelize.getDialect() === "postgres" ? BLOCKS_SQL.postgres : BLOCKS_SQL.sqlite);
+    .replace("{grid}", grid ? GRID_SESSION_SQL : "")
+    .replace("{blocks}", BLOCKS_SQL[dialect].replace("{grid}", grid ? GRID_BLOCK_SQL[dialect] : ""));
   // A constant three queries whatever the squad size: no query per athlete or per session.
   const [[team], athletes, sessions] = await Promise.all([
     select<TeamRow>(SQL.team),
     select<AthleteRow>(athletesSql),
-    select<SessionRow>(sessionsSql),
+    select<SessionRow & Partial<GridColumns>>(sessionsSql),
   ]);
   if (!team) throw new AppError("not_found", "Not found");
   const settings = toEngineSettings(team.settings_id === null ? null : team);
@@ -264,11 +292,55 @@ export async function getLoadSeriesInputs({
       });
     }
   }
+  const gridSessions = grid ? toGridSessions(sessions as (SessionRow & GridColumns)[], gridFrom) : undefined;
   const order = new Map(athletes.map((a) => [a.id, a.group_order ?? 1e9]));
   const list = [...byAthlete.values()].sort(
     (x, y) => order.get(x.id)! - order.get(y.id)! || x.name.localeCompare(y.name),
   );
-  return { teamId, settings, timeZone: team.time_zone, weekStartDay: team.week_start_day, athletes: list };
+  return {
+    teamId,
+    settings,
+    timeZone: team.time_zone,
+    weekStartDay: team.week_start_day,
+    athletes: list,
+    ...(gridSessions ? { gridSessions } : {}),
+  };
+}
+
+/** The grid's sessions (lib/plan/dto.ts, as the model reader gives them) from the rows dated `from` on. */
+function toGridSessions(rows: readonly (SessionRow & GridColumns)[], from: string): PlanSession[] {
+  return rows
+    .filter((s) => s.date.slice(0, 10) >= from)
+    .map((s) =>
+      toPlanSession({
+        id: s.id,
+        athleteId: s.athlete_id,
+        date: s.date,
+        startTime: s.start_time,
+        durationMin: s.duration_min,
+        title: s.title,
+        plannedRpe: s.planned_rpe,
+        status: s.status,
+        notes: s.notes,
+        version: Number(s.version),
+        sequence: Number(s.sequence),
+        publishedAt: s.published_at,
+        updatedAt: s.updated_at,
+        log: s.log_id === null ? null : { id: s.log_id },
+        blocks: (json<PackedGridBlock[]>(s.blocks) ?? []).map(
+          ([id, kind, title, running, drills, templateId, position, notes]) => ({
+            id,
+            templateId,
+            position,
+            kind,
+            title,
+            running,
+            drills,
+            notes,
+          }),
+        ),
+      }),
+    );
 }
 
 /** One athlete's engine inputs (getLoadSeriesInputs for their team); 404 when the athlete does not exist. */

@@ -1,5 +1,4 @@
 import "server-only";
-import { Op } from "sequelize";
 import { AppError } from "@/lib/errors";
 import { logsFor } from "@/lib/plan/blocks";
 import type { PlanAthlete, PlanGroup, PlanSession, PlanWeek, PlanWriteResult, WeekRow } from "@/lib/plan/types";
@@ -67,9 +66,9 @@ export async function getPlanWeek({
     throw new AppError("not_found", "No athlete profile is linked to your account");
   const visible = (s: { status: string }) => !own || s.status !== "draft";
   const athleteIds = own ? [audience.ownAthleteId!] : undefined;
-  const [source, groups, weekRows, templates, restrictions, phases, measured] = await Promise.all([
+  const [source, groups, templates, restrictions, phases, measured] = await Promise.all([
     // From the ledger (README §12): the week, and the 28 days before it the drag preview continues from. An
-    // athlete's own view leaves drafts out.
+    // athlete's own view leaves drafts out. The same query gives the grid's sessions of the week.
     getLedgerWeek({
       teamId,
       athleteIds,
@@ -78,20 +77,16 @@ export async function getPlanWeek({
       today,
       view: "projected",
       withDrafts: !own,
+      gridFrom: weekStart,
     }),
     listGroups({ teamId }),
-    loadSessions({
-      teamId,
-      date: { [Op.between]: [weekStart, weekEnd] },
-      ...(own ? { athleteId: audience.ownAthleteId! } : {}),
-    }),
     own ? Promise.resolve([]) : listTemplates({ teamId }),
     listRestrictions({ teamId, from: weekStart, ...(own ? { athleteIds } : {}) }),
     own ? Promise.resolve([]) : listPhases({ teamId, from: weekStart, to: weekStart }),
     own ? Promise.resolve([]) : listPlanMeasured({ teamId, from: weekStart, to: weekEnd }),
   ]);
   const weekSessions = new Map<number, PlanSession[]>();
-  for (const { dto } of weekRows)
+  for (const dto of source.gridSessions ?? [])
     if (visible(dto)) weekSessions.set(dto.athleteId, [...(weekSessions.get(dto.athleteId) ?? []), dto]);
 
   const athletes: PlanAthlete[] = source.athletes.map((a) => {

@@ -103,6 +103,33 @@ describe("readers of a few days from the ledger equal the whole-history engine",
     }
   });
 
+  it("the week grid's sessions, read in the ledger's one query, are the model reader's sessions of the week", async () => {
+    const { loadSessionsBetween } = await import("@/lib/data/plan-rows");
+    // This week (logged, published, drafts) and last week (logs): every field the grid and its writes read.
+    for (const week of [addDays(thisWeek, -7), thisWeek, addDays(thisWeek, 7)]) {
+      const staff = await getPlanWeek({
+        teamId: club.teamId,
+        date: week,
+        today,
+        audience: { scope: "team", canEdit: true, ownAthleteId: null },
+      });
+      const stored = (await loadSessionsBetween({ teamId: club.teamId, from: week, to: addDays(week, 6) })).map(
+        (l) => l.dto,
+      );
+      expect(stored.length).toBeGreaterThan(0);
+      // Each athlete's in calendar order, as the model reader orders them.
+      for (const a of staff.athletes) expect(a.sessions).toEqual(stored.filter((s) => s.athleteId === a.id));
+      expect(staff.athletes.flatMap((a) => a.sessions)).toHaveLength(stored.length);
+      const own = await getPlanWeek({
+        teamId: club.teamId,
+        date: week,
+        today,
+        audience: { scope: "own", canEdit: false, ownAthleteId: ids[0] },
+      });
+      expect(own.athletes[0].sessions).toEqual(stored.filter((s) => s.athleteId === ids[0] && s.status !== "draft"));
+    }
+  });
+
   it("a proposed week: the preview's numbers equal the engine over the saved history and the proposal", async () => {
     for (const id of ids) {
       const inputs = await getAthleteLoadInputs({ athleteId: id, through: addDays(thisWeek, 6) });
