@@ -1,19 +1,9 @@
 import { Badge } from "@/components/ui/badge";
 import { LoadCaution } from "@/components/ui/caution";
-import { FlagMark } from "@/components/ui/flag-mark";
 import type { CoachTodayDto, TodaySession } from "@/lib/data/coach-today";
 import { formatDayLabel } from "@/lib/dates/plain-date";
-import { formatNumber } from "@/lib/format/number";
-import { figuresHref } from "@/lib/load/figures-link";
-import { FLAG_DISPLAY } from "@/lib/load/flag-display";
-import type { FlagKind } from "@/lib/load/flags";
-import { ALERT_KIND_LABEL } from "@/lib/notices/alert-display";
-import { METRIC_INFO, type Metric } from "@/lib/load/types";
-import { LogNoteLine, logNoteHref } from "@/components/status/log-note-line";
+import { AlertsSection, NotesSection, RestrictionsSection, SpikesSection } from "./today-lists";
 import { TodayItem, TodaySection } from "./today-section";
-
-/** Alerts raised by a load flag show the flag's mark; the others (overrides, pain) their own words. */
-const isFlagKind = (kind: string): kind is FlagKind => Object.prototype.hasOwnProperty.call(FLAG_DISPLAY, kind);
 
 const planHref = (week: string) => `/plan?week=${week}`;
 
@@ -46,7 +36,6 @@ const SHOWN = 6;
 export function CoachToday({ data }: { data: CoachTodayDto }) {
   const published = data.sessions.filter((s) => s.status === "published");
   const logged = published.filter((s) => s.logged).length;
-  const metric = METRIC_INFO[data.acwrMetric as Metric]?.short ?? data.acwrMetric;
   const week = planHref(data.weekStart);
   return (
     <div className="grid items-start gap-4 lg:grid-cols-2" data-testid="coach-today">
@@ -79,58 +68,9 @@ export function CoachToday({ data }: { data: CoachTodayDto }) {
         ))}
       </TodaySection>
 
-      <TodaySection
-        id="alerts"
-        title="Open alerts"
-        count={data.alertCount}
-        more={{ href: "/alerts", label: "Alerts" }}
-        empty="No open alerts."
-      >
-        {data.alerts.map((a) => (
-          <TodayItem key={a.id} href="/alerts" testId="today-alert">
-            {isFlagKind(a.kind) ? <FlagMark kind={a.kind} /> : <Badge>{ALERT_KIND_LABEL[a.kind]}</Badge>}
-            <span className="font-medium text-ink-900">{a.athleteName}</span>
-            {a.status === "acknowledged" ? <span className="text-xs text-ink-500">seen</span> : null}
-            <span className="w-full text-xs text-ink-600">{a.reason}</span>
-          </TodayItem>
-        ))}
-      </TodaySection>
-
-      <TodaySection
-        id="spikes"
-        title="Spikes ahead in the next 7 days"
-        count={data.spikes.length}
-        more={{ href: figuresHref("spikes-ahead"), label: "How it is judged" }}
-        empty={`No ACWR (${metric}) at or above ${formatNumber(data.spikeRatio, 2)} in the current plan.`}
-      >
-        {data.spikes.map((s) => (
-          <TodayItem key={s.athleteId} href={planHref(s.weekStart)} testId="today-spike">
-            <FlagMark kind="spike" />
-            {s.provisional ? <span className="text-2xs text-ink-500">(early: under 28 days on record)</span> : null}
-            <span className="font-medium text-ink-900">{s.athleteName}</span>
-            <span className="text-ink-600">
-              ACWR ({metric}) {s.ratio.toFixed(2)} on {formatDayLabel(s.date)}
-            </span>
-          </TodayItem>
-        ))}
-      </TodaySection>
-
-      <TodaySection
-        id="restrictions"
-        title="Restrictions starting or ending this week"
-        count={data.restrictions.length}
-        empty="No restriction starts or ends this week."
-      >
-        {data.restrictions.map((r) => (
-          <TodayItem key={`${r.id}-${r.change}`} href={`/squad/${r.athleteId}`} testId="today-restriction">
-            <Badge tone={r.change === "starts" ? "note" : "neutral"}>
-              {r.change === "starts" ? "Starts" : "Ends"} {formatDayLabel(r.date)}
-            </Badge>
-            <span className="font-medium text-ink-900">{r.athleteName}</span>
-            <span className="w-full text-xs text-ink-600">{r.description}</span>
-          </TodayItem>
-        ))}
-      </TodaySection>
+      <AlertsSection data={data} hrefOf={() => "/alerts"} />
+      <SpikesSection data={data} hrefOf={(s) => planHref(s.weekStart)} />
+      <RestrictionsSection data={data} hrefOf={(r) => `/squad/${r.athleteId}`} />
 
       <TodaySection
         id="retests"
@@ -156,19 +96,7 @@ export function CoachToday({ data }: { data: CoachTodayDto }) {
         ) : null}
       </TodaySection>
 
-      <TodaySection
-        id="notes"
-        title="Notes from athletes"
-        count={data.notes.length}
-        more={{ href: "/status", label: "Squad status" }}
-        empty="No notes on the logs of the last 7 days."
-      >
-        {data.notes.map((n) => (
-          <TodayItem key={n.sessionId} href={logNoteHref(n)} testId="today-note">
-            <LogNoteLine note={n} />
-          </TodayItem>
-        ))}
-      </TodaySection>
+      <NotesSection notes={data.notes} />
 
       <div className="lg:col-span-2">
         <LoadCaution />

@@ -79,11 +79,14 @@ export async function getCoachToday({
   userId,
   today,
   clock,
+  alertsFirst = [],
 }: {
   teamId: number;
   userId: number;
   today?: string;
   clock?: Clock;
+  /** Kinds listed before the others (the physio's day puts pain reports first); newest first within each. */
+  alertsFirst?: readonly AlertKind[];
 }): Promise<CoachTodayDto> {
   const probe = clock ?? (await getTeamClock({ teamId }));
   const now = today ?? teamToday({ timeZone: probe.timeZone, now: new Date() });
@@ -153,15 +156,20 @@ export async function getCoachToday({
     spikeRatio: thisWeek.settings.spikeRatio,
     sessions: sessions.filter((s) => s.date === now),
     unlogged: sessions.filter((s) => s.date < now && s.status === "published" && !s.logged),
-    alerts: alerts.slice(0, ALERTS_SHOWN).map((a) => ({
-      id: a.id,
-      athleteId: a.athleteId,
-      athleteName: a.athleteName,
-      kind: a.kind,
-      level: a.level,
-      reason: a.reason,
-      status: a.status,
-    })),
+    alerts: [
+      ...alerts.filter((a) => alertsFirst.includes(a.kind)),
+      ...alerts.filter((a) => !alertsFirst.includes(a.kind)),
+    ]
+      .slice(0, ALERTS_SHOWN)
+      .map((a) => ({
+        id: a.id,
+        athleteId: a.athleteId,
+        athleteName: a.athleteName,
+        kind: a.kind,
+        level: a.level,
+        reason: a.reason,
+        status: a.status,
+      })),
     alertCount: alerts.length,
     spikes: spikes.sort((x, y) => x.date.localeCompare(y.date) || y.ratio - x.ratio),
     restrictions: changes,

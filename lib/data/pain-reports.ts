@@ -69,6 +69,30 @@ export async function latestPainReportByAthlete({
   return out;
 }
 
+/** The team's reports (or one athlete's) between two days (inclusive), newest first. */
+export async function listPainReports({
+  teamId,
+  athleteId,
+  from,
+  to,
+}: {
+  teamId: number;
+  athleteId?: number;
+  from: string;
+  to: string;
+}): Promise<PainReportDto[]> {
+  const { PainReport } = await db();
+  const rows = await PainReport.findAll({
+    where: { teamId, ...(athleteId === undefined ? {} : { athleteId }), date: { [Op.between]: [from, to] } },
+    attributes: [...FIELDS],
+    order: [
+      ["date", "DESC"],
+      ["id", "DESC"],
+    ],
+  });
+  return rows.map(toDto);
+}
+
 /** The reports written with these sessions' logs, by session id. */
 export async function painReportsBySession({
   sessionIds,

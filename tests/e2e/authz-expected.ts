@@ -99,7 +99,7 @@ const TABLE: Line[] = [
   ["PAGE /sign-in",           "ok",      "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
   ["PAGE /alerts",            "sign-in", "not-allowed", "not-allowed", "ok",          "ok",          "ok",          "ok"],
   ["PAGE /figures",           "sign-in", "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
-  ["PAGE /home",              "sign-in", "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
+  ["PAGE /home",              "sign-in", "redirect:/me", "redirect:/me",         "ok",          "ok",          "ok",          "ok"],
   ["PAGE /load",              "sign-in", "redirect:/load/[own]", "redirect:/load/[own]", "ok",          "ok",          "ok",          "ok"],
   ["PAGE /load/[athleteId]",  "sign-in", "ok",          "not-found",   "ok",          "ok",          "ok",          "not-found"],
   ["PAGE /mailbox",           "sign-in", "ok",          "ok",          "ok",          "ok",          "ok",          "ok"],
