@@ -46,7 +46,7 @@ export function PhysioToday({ data }: { data: PhysioTodayDto }) {
       </TodaySection>
 
       <TodaySection
-        id="away"
+        id="levels"
         title="Not on full training"
         count={data.away.length}
         empty="Every athlete is on full training."
