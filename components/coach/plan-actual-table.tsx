@@ -4,7 +4,7 @@ import { clsx } from "clsx";
 import { useMemo, useState } from "react";
 import { useTable, type SortingState } from "@tanstack/react-table";
 import { Card, EmptyState } from "@/components/ui/card";
-import { SortHeader } from "@/components/ui/sort-header";
+import { SortableHead, SortableRows } from "@/components/ui/sort-table";
 import type { PlanActualDto } from "@/lib/data/plan-vs-actual";
 import { formatNumber } from "@/lib/format/number";
 import type { Metric } from "@/lib/load/types";
@@ -42,47 +42,30 @@ export function PlanActualTable({ data, metric, unit }: { data: PlanActualDto; m
         <caption className="sr-only">
           Prescribed against done per athlete, {unit}, week of {data.weekStart}
         </caption>
-        <thead className="border-b border-ink-100 text-xs text-ink-500">
-          {table.getHeaderGroups().map((group) => (
-            <tr key={group.id}>
-              {group.headers.map((header) => {
-                const sorted = header.column.getIsSorted();
-                return (
-                  <SortHeader
-                    key={header.id}
-                    sorted={sorted}
-                    onSort={header.column.getToggleSortingHandler()}
-                    className={clsx(
-                      "px-2 py-2 sm:px-3",
-                      NUMERIC.has(header.column.id) ? "text-right" : "text-left",
-                      PHONE_HIDDEN.has(header.column.id) && "hidden sm:table-cell",
-                    )}
-                  >
-                    <table.FlexRender header={header} />
-                  </SortHeader>
-                );
-              })}
-            </tr>
-          ))}
-        </thead>
-        <tbody className="divide-y divide-ink-50">
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} data-testid="plan-actual-row" data-athlete={row.original.name}>
-              {row.getAllCells().map((cell) => (
-                <td
-                  key={cell.id}
-                  className={clsx(
-                    "px-2 py-2 align-middle sm:px-3",
-                    NUMERIC.has(cell.column.id) && "text-right",
-                    PHONE_HIDDEN.has(cell.column.id) && "hidden sm:table-cell",
-                  )}
-                >
-                  <table.FlexRender cell={cell} />
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
+        <SortableHead
+          table={table}
+          className="border-b border-ink-100 text-xs text-ink-500"
+          headClass={(id) =>
+            clsx(
+              "px-2 py-2 sm:px-3",
+              NUMERIC.has(id) ? "text-right" : "text-left",
+              PHONE_HIDDEN.has(id) && "hidden sm:table-cell",
+            )
+          }
+        />
+        <SortableRows
+          rows={table.getRowModel().rows}
+          cellsOf={(row) => row.getAllCells()}
+          className="divide-y divide-ink-50"
+          rowTestId="plan-actual-row"
+          cellClass={(id) =>
+            clsx(
+              "px-2 py-2 align-middle sm:px-3",
+              NUMERIC.has(id) && "text-right",
+              PHONE_HIDDEN.has(id) && "hidden sm:table-cell",
+            )
+          }
+        />
         <tfoot className="border-t-2 border-ink-100 font-semibold" data-testid="plan-actual-squad">
           <tr>
             <th scope="row" className="px-2 py-2 text-left sm:px-3">

@@ -1,17 +1,7 @@
 "use client";
 
-import Link from "next/link";
-import {
-  columnFilteringFeature,
-  columnVisibilityFeature,
-  createColumnHelper,
-  createFilteredRowModel,
-  createSortedRowModel,
-  rowSortingFeature,
-  sortFn_alphanumeric,
-  tableFeatures,
-  type Row,
-} from "@tanstack/react-table";
+import { columnVisibilityFeature, createColumnHelper, tableFeatures, type Row } from "@tanstack/react-table";
+import { AthleteNameCell, sortAndFilterFeatures } from "@/components/ui/sort-table";
 import type { SquadWeekRowDto } from "@/lib/data/load-views";
 import { formatNumber } from "@/lib/format/number";
 import type { FlagKind } from "@/lib/load/flags";
@@ -19,14 +9,7 @@ import { METRIC_INFO, type Metric } from "@/lib/load/types";
 import { AcwrCell } from "./acwr-cell";
 import { FlagBadges } from "./flag-badge";
 
-export const squadFeatures = tableFeatures({
-  rowSortingFeature,
-  columnFilteringFeature,
-  columnVisibilityFeature,
-  filteredRowModel: createFilteredRowModel(),
-  sortedRowModel: createSortedRowModel(),
-  sortFns: { alphanumeric: sortFn_alphanumeric },
-});
+export const squadFeatures = tableFeatures({ ...sortAndFilterFeatures(), columnVisibilityFeature });
 
 type Features = typeof squadFeatures;
 /** `estimated`: the team counts a missing log's plan as an estimate (settings.missingLogs). */
@@ -118,14 +101,12 @@ export const squadColumns = helper.columns([
     sortFn: "alphanumeric",
     enableHiding: false,
     cell: (c) => (
-      <span className="flex flex-col whitespace-nowrap">
-        <Link
-          href={`/load/${c.row.original.id}`}
-          className="font-medium text-ink-900 hover:text-lane-700 hover:underline"
-          data-testid="athlete-link"
-        >
-          {c.getValue()}
-        </Link>
+      <AthleteNameCell
+        href={`/load/${c.row.original.id}`}
+        name={c.getValue()}
+        testId="athlete-link"
+        className="whitespace-nowrap"
+      >
         {c.row.original.missingDays > 0 ? (
           <span className="text-2xs text-flag-climb" data-testid="missing-note">
             {c.row.original.missingDays === 1
@@ -134,7 +115,7 @@ export const squadColumns = helper.columns([
             {c.row.original.estimated ? " (plan counted, estimate)" : ""}
           </span>
         ) : null}
-      </span>
+      </AthleteNameCell>
     ),
   }),
   helper.accessor((r) => r.ratio ?? undefined, {

@@ -13,7 +13,7 @@ import { LoadCaution } from "@/components/ui/caution";
 import { fetchJson } from "@/lib/client/fetcher";
 import { loadKeys } from "@/lib/client/keys";
 import { Card, EmptyState } from "@/components/ui/card";
-import { SortHeader } from "@/components/ui/sort-header";
+import { SortableHead, SortableRows } from "@/components/ui/sort-table";
 import type { SquadWeekDto } from "@/lib/data/load-views";
 import type { LoadView } from "@/lib/load/types";
 import { METRIC_INFO } from "@/lib/load/types";
@@ -88,58 +88,36 @@ export function SquadLoadTable({ teamId, initial }: { teamId: number; initial: S
       ) : null}
       <Card className={clsx("overflow-x-auto transition-opacity [contain:inline-size]", isLoading && "opacity-60")}>
         <table className="w-full min-w-[56rem] text-sm" data-testid="squad-load-table">
-          <thead className="border-b border-ink-100 text-xs text-ink-500">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  const id = header.column.id;
-                  return (
-                    <SortHeader
-                      key={header.id}
-                      sorted={sorted}
-                      onSort={header.column.getToggleSortingHandler()}
-                      testId={`sort-${id}`}
-                      title={COLUMN_HINTS[id]}
-                      className={clsx(
-                        "px-3 py-2.5",
-                        NUMERIC_COLUMNS.has(id) ? "text-right" : "text-left",
-                        id === "name" && "sticky left-0 bg-paper-raised",
-                      )}
-                    >
-                      <table.FlexRender header={header} />
-                      {id === "ratio" || id === "change" ? (
-                        <span className="font-normal text-ink-400">({metric})</span>
-                      ) : null}
-                    </SortHeader>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody className="divide-y divide-ink-50">
-            {visible.map((row) => (
-              <tr
-                key={row.id}
-                data-testid="squad-load-row"
-                data-athlete={row.original.name}
-                className="hover:bg-paper/60"
-              >
-                {row.getVisibleCells().map((cell) => (
-                  <td
-                    key={cell.id}
-                    className={clsx(
-                      "px-3 py-2.5 align-middle",
-                      NUMERIC_COLUMNS.has(cell.column.id) && "text-right",
-                      cell.column.id === "name" && "sticky left-0 bg-paper-raised",
-                    )}
-                  >
-                    <table.FlexRender cell={cell} />
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
+          <SortableHead
+            table={table}
+            className="border-b border-ink-100 text-xs text-ink-500"
+            headClass={(id) =>
+              clsx(
+                "px-3 py-2.5",
+                NUMERIC_COLUMNS.has(id) ? "text-right" : "text-left",
+                id === "name" && "sticky left-0 bg-paper-raised",
+              )
+            }
+            testIdOf={(id) => `sort-${id}`}
+            titleOf={(id) => COLUMN_HINTS[id]}
+            after={(id) =>
+              id === "ratio" || id === "change" ? <span className="font-normal text-ink-400">({metric})</span> : null
+            }
+          />
+          <SortableRows
+            rows={visible}
+            cellsOf={(row) => row.getVisibleCells()}
+            className="divide-y divide-ink-50"
+            rowClass="hover:bg-paper/60"
+            rowTestId="squad-load-row"
+            cellClass={(id) =>
+              clsx(
+                "px-3 py-2.5 align-middle",
+                NUMERIC_COLUMNS.has(id) && "text-right",
+                id === "name" && "sticky left-0 bg-paper-raised",
+              )
+            }
+          />
         </table>
         {data && visible.length === 0 ? (
           <div className="p-4">

@@ -56,7 +56,7 @@ export function PhysioToday({ data }: { data: PhysioTodayDto }) {
             <span className="font-medium text-ink-900">{a.athleteName}</span>
             <AvailabilityBadge level={a.level} />
             {a.returnOn ? <span className="text-xs text-ink-600">back {formatDayLabel(a.returnOn)}</span> : null}
-            {a.note ? <span className="w-full truncate text-xs text-ink-600">{a.note}</span> : null}
+            {a.note ? <span className="w-full text-xs break-words text-ink-600">{a.note}</span> : null}
           </TodayItem>
         ))}
       </TodaySection>

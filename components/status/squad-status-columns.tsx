@@ -1,32 +1,17 @@
 "use client";
 
-import Link from "next/link";
-import {
-  columnFilteringFeature,
-  createColumnHelper,
-  createFilteredRowModel,
-  createSortedRowModel,
-  rowSortingFeature,
-  sortFn_alphanumeric,
-  tableFeatures,
-  type Row,
-} from "@tanstack/react-table";
+import { createColumnHelper, tableFeatures, type Row } from "@tanstack/react-table";
 import { AcwrCell } from "@/components/load/acwr-cell";
 import { FlagBadges } from "@/components/load/flag-badge";
 import { Badge } from "@/components/ui/badge";
+import { AthleteNameCell, sortAndFilterFeatures } from "@/components/ui/sort-table";
 import { AVAILABILITY_LEVELS, type AvailabilityLevel } from "@/lib/availability/levels";
 import { BODY_REGION_LABEL } from "@/lib/domain/wellbeing";
 import type { SquadStatusRow } from "@/lib/data/squad-status";
 import { formatDayLabel } from "@/lib/dates/plain-date";
 import { AvailabilityBadge } from "./availability-badge";
 
-export const statusFeatures = tableFeatures({
-  rowSortingFeature,
-  columnFilteringFeature,
-  filteredRowModel: createFilteredRowModel(),
-  sortedRowModel: createSortedRowModel(),
-  sortFns: { alphanumeric: sortFn_alphanumeric },
-});
+export const statusFeatures = tableFeatures(sortAndFilterFeatures());
 type Features = typeof statusFeatures;
 const helper = createColumnHelper<Features, SquadStatusRow>();
 
@@ -62,16 +47,9 @@ export const statusColumns = helper.columns([
     sortFn: "alphanumeric",
     filterFn: nameHas,
     cell: (c) => (
-      <span className="flex flex-col">
-        <Link
-          href={`/status/${c.row.original.id}`}
-          className="font-medium text-ink-900 underline-offset-2 hover:underline"
-          data-testid="status-athlete-link"
-        >
-          {c.getValue()}
-        </Link>
+      <AthleteNameCell href={`/status/${c.row.original.id}`} name={c.getValue()} testId="status-athlete-link">
         {c.row.original.groupName ? <span className="text-xs text-ink-500">{c.row.original.groupName}</span> : null}
-      </span>
+      </AthleteNameCell>
     ),
   }),
   helper.accessor((r) => AVAILABILITY_LEVELS.indexOf(r.level), {

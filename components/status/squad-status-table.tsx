@@ -5,7 +5,7 @@ import { useTable, type ColumnFiltersState, type SortingState } from "@tanstack/
 import { Card, EmptyState } from "@/components/ui/card";
 import { Input } from "@/components/ui/field";
 import { LoadCaution } from "@/components/ui/caution";
-import { SortHeader } from "@/components/ui/sort-header";
+import { SortableHead, SortableRows } from "@/components/ui/sort-table";
 import { ToolbarSelect } from "@/components/ui/toolbar-select";
 import { AVAILABILITY_LABEL, AVAILABILITY_LEVELS, type AvailabilityLevel } from "@/lib/availability/levels";
 import type { SquadStatusRow } from "@/lib/data/squad-status";
@@ -91,49 +91,32 @@ export function SquadStatusTable({ rows }: { rows: SquadStatusRow[] }) {
       </div>
       <Card>
         <table className="w-full text-sm max-md:block" data-testid="squad-status-table">
-          <thead className="border-b border-ink-100 text-left text-xs text-ink-500 max-md:sr-only">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => (
-                  <SortHeader
-                    key={header.id}
-                    sorted={header.column.getIsSorted()}
-                    onSort={header.column.getToggleSortingHandler()}
-                    testId={`status-sort-${header.column.id}`}
-                    className="px-3 py-2.5 text-left"
-                  >
-                    <table.FlexRender header={header} />
-                  </SortHeader>
-                ))}
-              </tr>
-            ))}
-          </thead>
-          <tbody className="divide-y divide-ink-100 max-md:block">
-            {visible.map((row) => (
-              <tr
-                key={row.id}
-                data-testid="status-row"
-                data-athlete={row.original.name}
-                className="max-md:block max-md:p-3"
-              >
-                {row.getAllCells().map((cell) => (
-                  <td
-                    key={cell.id}
-                    className="px-3 py-2.5 align-top max-md:flex max-md:justify-between max-md:gap-4 max-md:px-0 max-md:py-1"
-                  >
-                    {cell.column.id === "name" ? null : (
-                      <span className="shrink-0 text-xs text-ink-500 md:hidden" aria-hidden>
-                        {STATUS_COLUMN_LABELS[cell.column.id]}
-                      </span>
-                    )}
-                    <span className="min-w-0 max-md:text-right">
-                      <table.FlexRender cell={cell} />
-                    </span>
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
+          <SortableHead
+            table={table}
+            className="border-b border-ink-100 text-left text-xs text-ink-500 max-md:sr-only"
+            headClass={() => "px-3 py-2.5 text-left"}
+            testIdOf={(id) => `status-sort-${id}`}
+          />
+          <SortableRows
+            rows={visible}
+            cellsOf={(row) => row.getAllCells()}
+            className="divide-y divide-ink-100 max-md:block"
+            rowClass="max-md:block max-md:p-3"
+            rowTestId="status-row"
+            cellClass={() =>
+              "px-3 py-2.5 align-top max-md:flex max-md:justify-between max-md:gap-4 max-md:px-0 max-md:py-1"
+            }
+            wrap={(id, content) => (
+              <>
+                {id === "name" ? null : (
+                  <span className="shrink-0 text-xs text-ink-500 md:hidden" aria-hidden>
+                    {STATUS_COLUMN_LABELS[id]}
+                  </span>
+                )}
+                <span className="min-w-0 max-md:text-right">{content}</span>
+              </>
+            )}
+          />
         </table>
         {visible.length === 0 ? (
           <div className="p-4">

@@ -99,7 +99,11 @@ describeBrowser("the physio's day", () => {
     await page.getByTestId("alert-card").filter({ hasText: "Pain reported" }).waitFor();
     const form = page.getByTestId("availability-form");
     await form.getByTestId("availability-level-input").selectOption("modified");
-    await form.getByTestId("availability-note").fill("Calf: tempo and strength only until it settles.");
+    await form
+      .getByTestId("availability-note")
+      .fill(
+        "Calf: tempo and strength only until it settles, then strides at 85% of vmax from next week if it stays quiet.",
+      );
     await form.getByTestId("availability-save").click();
     const message = form.getByTestId("availability-message");
     await message.getByText("Saved: Modified training").waitFor();
