@@ -6,7 +6,7 @@ import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import type { AlertRow } from "@/lib/data/alerts";
-import { formatDayLong } from "@/lib/format/dates";
+import { formatDayLong, formatInstantShort } from "@/lib/format/dates";
 import { figuresHref } from "@/lib/load/figures-link";
 import { ALERT_KIND_HINT, ALERT_KIND_LABEL, ALERT_KIND_TOPIC } from "@/lib/notices/alert-display";
 import { AlertActionForm } from "./alert-action-form";
@@ -18,10 +18,6 @@ const STATUS_LABEL: Record<AlertRow["status"], string> = {
   resolved: "Resolved",
 };
 const STATUS_TONE = { open: "spike", acknowledged: "climb", resolved: "steady" } as const;
-
-function when(iso: string): string {
-  return new Date(iso).toLocaleString("en-GB", { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit" });
-}
 
 export function AlertCard({
   alert,
@@ -58,7 +54,7 @@ export function AlertCard({
             <Badge tone={STATUS_TONE[alert.status]}>{STATUS_LABEL[alert.status]}</Badge>
           </div>
           <p className="mt-1 text-xs text-ink-500">
-            Week of {formatDayLong(alert.weekStart)} · raised {when(alert.createdAt)}
+            Week of {formatDayLong(alert.weekStart)} · raised {formatInstantShort(alert.createdAt)}
             {alert.provisional ? " · provisional (short history)" : ""}
           </p>
         </div>
@@ -101,10 +97,10 @@ export function AlertCard({
           ) : null}
           <p className="mt-1 text-xs text-ink-500">
             {alert.acknowledgedByName && alert.acknowledgedAt
-              ? `Acknowledged by ${alert.acknowledgedByName}, ${when(alert.acknowledgedAt)}. `
+              ? `Acknowledged by ${alert.acknowledgedByName}, ${formatInstantShort(alert.acknowledgedAt)}. `
               : ""}
             {alert.resolvedByName && alert.resolvedAt
-              ? `Resolved by ${alert.resolvedByName}, ${when(alert.resolvedAt)}.`
+              ? `Resolved by ${alert.resolvedByName}, ${formatInstantShort(alert.resolvedAt)}.`
               : ""}
           </p>
         </div>

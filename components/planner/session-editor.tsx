@@ -74,7 +74,10 @@ export function SessionEditor(props: Props) {
           <PlanMeasuredTable m={props.measured} caption="Planned against measured running load" />
         </section>
       ) : null}
-      {session ? <SessionThread sessionId={session.id} className="mt-5 border-t border-ink-100 pt-4" /> : null}
+      {/* Whoever plans may reopen a closed log (plan:edit and log:unlock go together, tests/unit/auth/permissions). */}
+      {session ? (
+        <SessionThread sessionId={session.id} canReopen={props.canEdit} className="mt-5 border-t border-ink-100 pt-4" />
+      ) : null}
     </Dialog>
   );
 }

@@ -12,22 +12,33 @@ import { fetchJson } from "@/lib/client/fetcher";
 import { applyServerErrors } from "@/lib/client/form-errors";
 import { medicalKeys } from "@/lib/client/keys";
 import type { SessionLogDto } from "@/lib/data/logs";
+import { formatInstantShort } from "@/lib/format/dates";
 import type { SessionMessageDto } from "@/lib/data/session-messages";
 import { sessionMessageSchema, type SessionMessageInput } from "@/lib/validations/session-messages";
+import { LogLockLine } from "./log-lock-line";
 
-type Thread = { log: SessionLogDto | null; messages: SessionMessageDto[] };
+type Thread = {
+  session: { title: string; status: string };
+  log: SessionLogDto | null;
+  messages: SessionMessageDto[];
+};
 
 const COMPLETION: Record<SessionLogDto["completion"], string> = { yes: "Done", partly: "Partly done", no: "Not done" };
 
-function when(iso: string): string {
-  return new Date(iso).toLocaleString("en-GB", { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit" });
-}
-
 /**
  * The athlete's log note on a session and the short thread under it, where the athlete, the coaches and the
- * physio answer each other; every message is e-mailed to the others in the thread.
+ * physio answer each other; every message is e-mailed to the others in the thread. With `canReopen` (a coach) a
+ * published session's log that closed to the athlete can be reopened here too.
  */
-export function SessionThread({ sessionId, className }: { sessionId: number; className?: string }) {
+export function SessionThread({
+  sessionId,
+  className,
+  canReopen = false,
+}: {
+  sessionId: number;
+  className?: string;
+  canReopen?: boolean;
+}) {
   const key = medicalKeys.thread(sessionId);
   const { data, error, mutate } = useSWR<Thread>(key, fetchJson);
   const [failure, setFailure] = useState<string | null>(null);
@@ -60,7 +71,7 @@ export function SessionThread({ sessionId, className }: { sessionId: number; cla
       {data?.log ? (
         <div className="rounded-lg bg-paper-sunk/60 p-3" data-testid="log-note">
           <p className="text-xs text-ink-500">
-            Logged {when(data.log.updatedAt)} · {COMPLETION[data.log.completion]}
+            Logged {formatInstantShort(data.log.updatedAt)} · {COMPLETION[data.log.completion]}
             {data.log.rpe !== null ? ` · RPE ${data.log.rpe}` : ""}
             {data.log.minutes !== null ? ` · ${data.log.minutes} min` : ""}
           </p>
@@ -73,12 +84,15 @@ export function SessionThread({ sessionId, className }: { sessionId: number; cla
       ) : data ? (
         <p className="text-ink-500">Not logged yet.</p>
       ) : null}
+      {canReopen && data?.session.status === "published" ? (
+        <LogLockLine sessionId={sessionId} title={data.session.title} />
+      ) : null}
       {data && data.messages.length > 0 ? (
         <ol className="space-y-2" data-testid="thread-messages">
           {data.messages.map((m) => (
             <li key={m.id} className="rounded-lg bg-paper-raised p-3 ring-1 ring-ink-100 ring-inset">
               <p className="text-xs text-ink-500">
-                <span className="font-medium text-ink-800">{m.authorName}</span> · {when(m.createdAt)}
+                <span className="font-medium text-ink-800">{m.authorName}</span> · {formatInstantShort(m.createdAt)}
               </p>
               <p className="mt-1 whitespace-pre-line text-ink-900">{m.body}</p>
             </li>

@@ -5,8 +5,19 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { athleteReportApi } from "@/lib/client/api";
 
-/** A coach reopens an athlete's locked log for another 48 hours; the page then shows the new closing time. */
-export function ReopenLogButton({ sessionId, title }: { sessionId: number; title: string }) {
+/**
+ * A coach reopens an athlete's locked log for another 48 hours; then the page (or `onReopened`, where the lock is
+ * read in the browser) shows the new closing time.
+ */
+export function ReopenLogButton({
+  sessionId,
+  title,
+  onReopened,
+}: {
+  sessionId: number;
+  title: string;
+  onReopened?: () => unknown;
+}) {
   const router = useRouter();
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string>();
@@ -15,7 +26,8 @@ export function ReopenLogButton({ sessionId, title }: { sessionId: number; title
     setError(undefined);
     try {
       await athleteReportApi.unlockLog(sessionId);
-      router.refresh();
+      if (onReopened) await onReopened();
+      else router.refresh();
     } catch (err) {
       setError(err instanceof Error ? err.message : "Could not reopen the log");
     } finally {

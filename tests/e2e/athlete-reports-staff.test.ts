@@ -120,6 +120,50 @@ describeBrowser("athletes' reports, the staff's side", () => {
     expect(log).toEqual({ completion: "partly", rpe: 7, minutes: 45 });
   }, 120_000);
 
+  it("a coach reopens a closed log from the planner's session dialog, where the log is read", async () => {
+    const date = addDays(today, -4);
+    const title = "Wickets four days ago";
+    const sessionId = await loggedSession(date, title, { rpe: 7, minutes: 55, notes: "Quick off the fourth wicket" });
+    const page = await browser.newPage({ viewport: { width: 1400, height: 900 } });
+    await signIn(page, app, "coach@reopenclub.test", TEST_PASSWORD);
+    await page.goto(`${app.url}/plan?week=${date}`);
+    const card = page.locator(
+      `[data-testid="day-cell"][data-athlete-id="${team.users[ADA].athleteId}"][data-date="${date}"] ` +
+        '[data-testid="session-card"]',
+    );
+    await card.first().locator("button").first().click();
+    const dialog = page.getByTestId("session-editor");
+    await dialog.waitFor();
+    await dialog.getByTestId("log-note").getByText("Quick off the fourth wicket").waitFor();
+    const state = dialog.getByTestId("log-lock-state");
+    await state.waitFor();
+    expect(await state.getAttribute("data-locked")).toBe("yes");
+    expect(await seriousAxeViolations(page)).toEqual([]);
+    await screenshot(page, "planner-log-closed");
+    await dialog.getByRole("button", { name: `Reopen the log of ${title}` }).click();
+    await expect.poll(() => state.getAttribute("data-locked")).toBe("no");
+    expect(await state.innerText()).toMatch(/^Open to the athlete until /);
+    expect(await dialog.getByTestId("reopen-log").count()).toBe(0);
+    const history = await app.query<{ action: string; user_id: number }>(
+      "SELECT action, user_id FROM session_log_changes WHERE session_id = ? ORDER BY id",
+      [sessionId],
+    );
+    expect(history).toEqual([{ action: "unlocked", user_id: team.users.coach.userId }]);
+    await page.close();
+
+    // The physio reads the same dialog without the way to reopen (the route refuses a physio too, below).
+    const other = await loggedSession(date, "Tempo for the physio", { rpe: 4, minutes: 30, notes: "Easy one" });
+    const physio = await browser.newPage({ viewport: { width: 1400, height: 900 } });
+    await signIn(physio, app, "physio@reopenclub.test", TEST_PASSWORD);
+    await physio.goto(`${app.url}/plan?week=${date}`);
+    await physio.locator(`[data-testid="session-card"][data-session-id="${other}"]`).locator("button").first().click();
+    const read = physio.getByTestId("session-editor");
+    await read.getByTestId("log-note").getByText("Easy one").waitFor();
+    expect(await read.getByTestId("reopen-log").count()).toBe(0);
+    expect(await read.getByTestId("log-lock").count()).toBe(0);
+    await physio.close();
+  }, 120_000);
+
   it("a physio sees a closed log but has no button to reopen it", async () => {
     const sessionId = await loggedSession(addDays(today, -6), "Tempo six days ago", {
       rpe: 5,

@@ -23,6 +23,10 @@ describe("permission table", () => {
     }
   });
 
+  it("lets exactly the roles that plan reopen a closed log (the planner's session dialog offers it to them)", () => {
+    for (const role of ROLES) expect(can(role, "log:unlock", "team"), role).toBe(can(role, "plan:edit", "team"));
+  });
+
   it("keeps physios read-only on the plan", () => {
     expect(can("physio", "plan:view", "team")).toBe(true);
     expect(can("physio", "plan:edit", "team")).toBe(false);

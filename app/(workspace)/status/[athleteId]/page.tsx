@@ -42,6 +42,7 @@ export default async function AthleteStatusPage({ params }: { params: Promise<{ 
   ]);
   const current = availability.get(athleteId) ?? null;
   const level = levelOn(current, today);
+  const canReopen = scopeOf(viewer.role, "log:unlock") === "team";
   const conflictsOf = (sessionId: number) => conflicts.filter((c) => c.sessionId === sessionId);
   return (
     <>
@@ -137,7 +138,7 @@ export default async function AthleteStatusPage({ params }: { params: Promise<{ 
                   <summary className="cursor-pointer text-sm font-medium text-lane-700">
                     {l.messages > 0 ? `Messages (${l.messages})` : "Answer"}
                   </summary>
-                  <SessionThread sessionId={l.sessionId} className="mt-2" />
+                  <SessionThread sessionId={l.sessionId} canReopen={canReopen} className="mt-2" />
                 </details>
               ) : null}
             </li>
