@@ -26,7 +26,7 @@ export type TodaySession = {
   logged: boolean;
 };
 
-type TodayAlert = {
+export type TodayAlert = {
   id: number;
   athleteId: number;
   athleteName: string;
@@ -36,9 +36,9 @@ type TodayAlert = {
   status: AlertStatus;
 };
 
-type TodaySpike = ProjectedSpike & { athleteId: number; athleteName: string; weekStart: string };
+export type TodaySpike = ProjectedSpike & { athleteId: number; athleteName: string; weekStart: string };
 
-type TodayRestriction = {
+export type TodayRestriction = {
   id: number;
   athleteId: number;
   athleteName: string;
