@@ -68,7 +68,16 @@ export function route<P = Record<string, string>>(fn: (req: Request, ctx: Ctx<P>
 }
 
 export async function parseJson<T extends z.ZodType>(req: Request, schema: T): Promise<z.infer<T>> {
+  return parseJsonText(await readBodyText(req, JSON_BODY_LIMIT), schema);
+}
+
+/** Like parseJson, but an empty body reads as `{}`: a POST whose options are all optional may send none. */
+export async function parseOptionalJson<T extends z.ZodType>(req: Request, schema: T): Promise<z.infer<T>> {
   const text = await readBodyText(req, JSON_BODY_LIMIT);
+  return parseJsonText(text.trim() === "" ? "{}" : text, schema);
+}
+
+function parseJsonText<T extends z.ZodType>(text: string, schema: T): z.infer<T> {
   let body: unknown;
   try {
     body = JSON.parse(text);

@@ -28,6 +28,7 @@ import { SessionLog } from "./session-log";
 import { SessionLogChange } from "./session-log-change";
 import { SpeedLabSettings } from "./speed-lab-settings";
 import { SpeedProfileEntry } from "./speed-profile-entry";
+import { SpeedProfileReplacement } from "./speed-profile-replacement";
 import { SpeedTest } from "./speed-test";
 import { SpeedUpload } from "./speed-upload";
 import { SessionMessage } from "./session-message";
@@ -72,6 +73,8 @@ const models = {
   SpeedProfileEntry,
   SpeedTest,
   SpeedUpload,
+  // Same-day results replaced in a speed profile (migration 026): plain id columns.
+  SpeedProfileReplacement,
   // Availability and session threads (migration 014): plain id columns, no associations needed.
   AthleteAvailability,
   SessionMessage,

@@ -1,5 +1,10 @@
 import type { z } from "zod";
-import type { speedLabSettingsSchema, speedMeasureUploadSchema, speedUploadSchema } from "@/lib/validations/speed";
+import type {
+  speedAcceptSchema,
+  speedLabSettingsSchema,
+  speedMeasureUploadSchema,
+  speedUploadSchema,
+} from "@/lib/validations/speed";
 import { ApiError, OFFLINE_MESSAGE, sendJson, toApiError } from "./fetcher";
 
 // The speed lab's requests from the browser. The upload goes through XMLHttpRequest: fetch reports no upload
@@ -50,8 +55,12 @@ export const speedApi = {
   saveSettings: (teamId: number, body: z.input<typeof speedLabSettingsSchema>) =>
     sendJson<{ retestWeeks: number }>("PATCH", speedKeys.settings(teamId), body),
 
-  accept: (teamId: number, testId: number) =>
-    sendJson<{ entryId: number; effectiveFrom: string }>("POST", speedKeys.accept(teamId, testId)),
+  accept: (teamId: number, testId: number, body?: z.input<typeof speedAcceptSchema>) =>
+    sendJson<{ entryId: number; effectiveFrom: string; replaced: boolean }>(
+      "POST",
+      speedKeys.accept(teamId, testId),
+      body,
+    ),
 
   /** Sends the file, calling `onProgress` with the share sent (0–1); rejects with an ApiError like sendJson. */
   uploadTiming: (teamId: number, body: z.input<typeof speedUploadSchema>, onProgress: (share: number) => void) =>

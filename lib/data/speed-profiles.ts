@@ -135,3 +135,99 @@ export async function copyCurrentProfile({
     transaction,
   });
 }
+
+export type ReplacementRow = {
+  id: number;
+  effectiveFrom: string;
+  speedTestId: number | null;
+  acceptedByName: string | null;
+  acceptedAt: Date;
+  replacedByName: string | null;
+  replacedAt: Date;
+  values: ProfileValues;
+};
+
+/**
+ * Moves the result in force from an entry's day into the replaced history (who had accepted it and when, who
+ * replaced it and now) and puts the new one in its place (lib/speed/README.md §4).
+ */
+export async function replaceProfileEntry({
+  teamId,
+  entry,
+  speedTestId,
+  userId,
+  now,
+  values,
+  transaction,
+}: {
+  teamId: number;
+  entry: ProfileEntryRow & { athleteId: number };
+  speedTestId: number;
+  userId: number;
+  now: Date;
+  values: ProfileValues;
+  transaction: Transaction;
+}): Promise<void> {
+  const { SpeedProfileEntry, SpeedProfileReplacement } = await db();
+  await SpeedProfileReplacement.create(
+    {
+      teamId,
+      athleteId: entry.athleteId,
+      entryId: entry.id,
+      effectiveFrom: entry.effectiveFrom,
+      speedTestId: entry.speedTestId,
+      acceptedByUserId: entry.acceptedByUserId,
+      acceptedAt: entry.acceptedAt,
+      values: JSON.stringify(Object.fromEntries(VALUE_FIELDS.map((f) => [f, entry[f]]))),
+      replacedByUserId: userId,
+      replacedAt: now,
+    },
+    { transaction },
+  );
+  await SpeedProfileEntry.update(
+    { speedTestId, acceptedByUserId: userId, acceptedAt: now, ...values },
+    { where: { id: entry.id, teamId }, transaction },
+  );
+}
+
+/** The results an athlete's profile no longer uses because a same-day one replaced them, newest first. */
+export async function listProfileReplacements({
+  teamId,
+  athleteId,
+}: {
+  teamId: number;
+  athleteId: number;
+}): Promise<ReplacementRow[]> {
+  const { SpeedProfileReplacement, User } = await db();
+  const rows = await SpeedProfileReplacement.findAll({
+    where: { teamId, athleteId },
+    attributes: [
+      "id",
+      "effectiveFrom",
+      "speedTestId",
+      "acceptedByUserId",
+      "acceptedAt",
+      "replacedByUserId",
+      "replacedAt",
+      "values",
+    ],
+    order: [["id", "DESC"]],
+    raw: true,
+  });
+  const ids = [
+    ...new Set(rows.flatMap((r) => [r.acceptedByUserId, r.replacedByUserId]).filter((x): x is number => x !== null)),
+  ];
+  const users = ids.length ? await User.findAll({ where: { id: ids }, attributes: ["id", "name"], raw: true }) : [];
+  const names = new Map(users.map((u) => [u.id, u.name]));
+  const date = (v: unknown) => (v instanceof Date ? v : new Date(String(v)));
+  return rows.map((r) => ({
+    id: r.id,
+    effectiveFrom: String(r.effectiveFrom).slice(0, 10),
+    speedTestId: r.speedTestId ?? null,
+    acceptedByName: r.acceptedByUserId ? (names.get(r.acceptedByUserId) ?? null) : null,
+    acceptedAt: date(r.acceptedAt),
+    replacedByName: r.replacedByUserId ? (names.get(r.replacedByUserId) ?? null) : null,
+    replacedAt: date(r.replacedAt),
+    values: JSON.parse(r.values) as ProfileValues,
+  }));
+}

@@ -6,7 +6,7 @@ import { loadSessions } from "./plan-rows";
 import { db } from "@/models";
 import { retestStatus, vmaxChange, type RetestStatus } from "@/lib/speed/retest";
 import type { TimingTrialAnalysis } from "@/lib/speed/timing-trial";
-import { listProfileEntries, type ProfileEntryRow } from "./speed-profiles";
+import { listProfileEntries, listProfileReplacements, type ProfileEntryRow } from "./speed-profiles";
 import { getSpeedLabSettings } from "./speed-settings";
 import { latestTestDates, listSpeedTests, type SpeedTestRow } from "./speed-tests";
 
@@ -110,9 +110,10 @@ export async function getSquadSpeed({ teamId, today }: { teamId: number; today: 
 
 /** One athlete's profile history and tests, plus the squad's current range of each value (context only). */
 export async function getAthleteSpeed({ teamId, athleteId }: { teamId: number; athleteId: number }) {
-  const [squad, entries, tests, accepted] = await Promise.all([
+  const [squad, entries, replaced, tests, accepted] = await Promise.all([
     listSquad({ teamId }),
     listProfileEntries({ teamId, athleteId }),
+    listProfileReplacements({ teamId, athleteId }),
     listSpeedTests({ teamId, athleteId }),
     acceptedTestIds(teamId),
   ]);
@@ -125,6 +126,7 @@ export async function getAthleteSpeed({ teamId, athleteId }: { teamId: number; a
   return {
     athlete,
     entries: entries as ProfileEntryRow[],
+    replaced,
     tests: tests.map((t) => withFit(t, accepted)),
     measured,
     squadRange: {

@@ -1,4 +1,5 @@
 import "server-only";
+import type { Transaction } from "sequelize";
 import { dayIndex } from "@/lib/dates/plain-date";
 import { refreshLedger } from "@/lib/data/ledger";
 import {
@@ -7,6 +8,7 @@ import {
   getAthleteSpeedRow,
   insertProfileEntry,
   listProfileEntries,
+  replaceProfileEntry,
 } from "@/lib/data/speed-profiles";
 import { getSpeedTest, insertSpeedTests, insertSpeedUpload } from "@/lib/data/speed-tests";
 import { inTeamTransaction } from "@/lib/data/transaction";
@@ -73,12 +75,15 @@ export async function acceptSpeedTest({
   testId,
   userId,
   now,
+  replace = false,
 }: {
   teamId: number;
   testId: number;
   userId: number;
   now: Date;
-}): Promise<{ entryId: number; effectiveFrom: string; values: SpeedProfileValues }> {
+  /** Replace a result already in use from the test's date (else that is a 409 saying so). */
+  replace?: boolean;
+}): Promise<{ entryId: number; effectiveFrom: string; values: SpeedProfileValues; replaced: boolean }> {
   return inTeamTransaction(teamId, async (transaction) => {
     const test = await getSpeedTest({ teamId, testId, transaction });
     const measured = measuredProfileValues(test.kind, test.result);
@@ -98,10 +103,40 @@ export async function acceptSpeedTest({
     let entries = await listProfileEntries({ teamId, athleteId, transaction });
     if (entries.some((e) => e.speedTestId === testId))
       throw new AppError("conflict", "This result is already accepted");
-    if (entries.some((e) => e.effectiveFrom === testDate)) {
-      throw new AppError("conflict", `A result is already in force from ${testDate}`, {
-        fields: { testId: ["Same date"] },
+    const sameDay = entries.find((e) => e.effectiveFrom === testDate);
+    if (sameDay && !replace) {
+      const who = sameDay.acceptedByName ?? "a former member";
+      throw new AppError(
+        "conflict",
+        `Another result is already in use from ${testDate} (accepted by ${who} on ` +
+          `${sameDay.acceptedAt.toISOString().slice(0, 10)}). Use this one instead to replace it for that day; ` +
+          "the replaced result stays in the history.",
+        {
+          fields: { testId: ["Another result is in use from this date"] },
+          details: { sameDay: { speedTestId: sameDay.speedTestId, acceptedByName: who, effectiveFrom: testDate } },
+        },
+      );
+    }
+    if (sameDay) {
+      // Same kind: the new result replaces the day's whole result (a second trial). Another kind: its values go
+      // over the day's result, so a timing test and a contact test of one day both count (README §4).
+      const replacedKind = sameDay.speedTestId
+        ? (await getSpeedTest({ teamId, testId: sameDay.speedTestId, transaction })).kind
+        : null;
+      const before = entries.filter((e) => e.effectiveFrom < testDate).at(-1);
+      const base = replacedKind === test.kind && before ? pick(before) : pick(sameDay);
+      const values = mergeProfile(base, measured);
+      await replaceProfileEntry({
+        teamId,
+        entry: { ...sameDay, athleteId },
+        speedTestId: testId,
+        userId,
+        now,
+        values,
+        transaction,
       });
+      await afterProfileChange({ athleteId, entries, testDate, values, transaction });
+      return { entryId: sameDay.id, effectiveFrom: testDate, values, replaced: true };
     }
     const row = await getAthleteSpeedRow({ teamId, athleteId, transaction });
     if (entries.length === 0) {
@@ -130,19 +165,38 @@ export async function acceptSpeedTest({
       values,
       transaction,
     });
-    const latest = entries.every((e) => e.effectiveFrom < testDate);
-    if (latest) {
-      await copyCurrentProfile({
-        athleteId,
-        values: { vmaxMs: values.vmaxMs, tauS: values.tauS, stepLengthM: values.stepLengthM },
-        testedOn: testDate,
-        fromDate: testDate,
-        transaction,
-      });
-    }
-    await refreshLedger({ transaction, athleteIds: [athleteId], fromDay: dayIndex(testDate) });
-    return { entryId: id, effectiveFrom: testDate, values };
+    await afterProfileChange({ athleteId, entries, testDate, values, transaction });
+    return { entryId: id, effectiveFrom: testDate, values, replaced: false };
   });
+}
+
+/**
+ * The entry of `testDate` changed: the latest entry is copied onto the athlete row (the current profile), and
+ * the ledger is refreshed from that date in the same transaction.
+ */
+async function afterProfileChange({
+  athleteId,
+  entries,
+  testDate,
+  values,
+  transaction,
+}: {
+  athleteId: number;
+  entries: readonly { effectiveFrom: string }[];
+  testDate: string;
+  values: SpeedProfileValues;
+  transaction: Transaction;
+}) {
+  if (entries.every((e) => e.effectiveFrom <= testDate)) {
+    await copyCurrentProfile({
+      athleteId,
+      values: { vmaxMs: values.vmaxMs, tauS: values.tauS, stepLengthM: values.stepLengthM },
+      testedOn: testDate,
+      fromDate: testDate,
+      transaction,
+    });
+  }
+  await refreshLedger({ transaction, athleteIds: [athleteId], fromDay: dayIndex(testDate) });
 }
 
 function pick(v: SpeedProfileValues): SpeedProfileValues {

@@ -83,6 +83,11 @@ export const speedUploadSchema = z.object({
 
 export const speedTestParamsSchema = z.object({ teamId: idSchema, testId: idSchema });
 
+/** Accepting a result: `replace` takes the place of a result already in use from the same date. */
+export const speedAcceptSchema = z.object({
+  replace: z.boolean({ message: "replace must be true or false" }).optional(),
+});
+
 /** Weeks without a timing test before an athlete is due a re-test (lib/speed/README.md §6). */
 export const speedLabSettingsSchema = z.object({
   retestWeeks: z

@@ -231,6 +231,8 @@ describeBrowser("speed lab", () => {
     expect(await fit.innerText()).toContain("vmax 9.50 m/s");
     expect(await fit.innerText()).toContain("τ 1.10 s");
     await page.getByTestId("no-drag-note").waitFor();
+    await page.locator('[data-testid^="test-"] button[data-testid^="accept-"]').first().click();
+    await page.getByTestId("current-vmaxMs").filter({ hasText: "9.50 m/s" }).waitFor();
 
     // Contact rows: a contact shorter than the file's bound is named on its field; B1 rows give 4.33 Hz, 2.69 BW.
     const contacts = page.getByTestId("typed-contacts");
@@ -248,6 +250,18 @@ describeBrowser("speed lab", () => {
     await means.waitFor();
     expect(await means.innerText()).toContain("4.33 Hz");
     expect(await means.innerText()).toContain("2.69 × BW");
+
+    // The same day already has the timing result: the coach is told, and may use the contacts as well.
+    await page.locator('[data-testid^="contacts-"] button[data-testid^="accept-"]').first().click();
+    const refused = page.locator('[data-testid^="accept-error-"]').first();
+    await refused.filter({ hasText: "Another result is already in use from" }).waitFor();
+    expect(await refused.innerText()).toContain(`accepted by ${headCoach.name}`);
+    await page.locator('button[data-testid^="replace-"]').first().click();
+    await page.getByTestId("current-stepFrequencyHz").filter({ hasText: "4.33 Hz" }).waitFor();
+    expect(await page.getByTestId("current-vmaxMs").innerText()).toBe("9.50 m/s");
+    expect(await page.getByTestId("profile-replaced").innerText()).toMatch(
+      new RegExp(`^Replaced: vmax 9\\.50 m/s · τ 1\\.10 s,\\s+accepted by ${headCoach.name}`),
+    );
     expect(await seriousAxeViolations(page)).toEqual([]);
     await noSidewaysScroll(page);
     await screenshot(page, "speed-typed-in");

@@ -35,7 +35,7 @@ export default async function SpeedProfilePage({ params }: { params: Promise<{ a
   const { athleteId } = await params;
   const viewer = await pageAthlete(Number(athleteId), "speed:view");
   const today = teamToday({ timeZone: viewer.timeZone, now: new Date() });
-  const [{ athlete, entries, tests: allTests, squadRange, measured }, settings] = await Promise.all([
+  const [{ athlete, entries, replaced, tests: allTests, squadRange, measured }, settings] = await Promise.all([
     getAthleteSpeed({ teamId: viewer.teamId, athleteId: viewer.athlete.id }),
     getTeamLoadSettings({ teamId: viewer.teamId }),
   ]);
@@ -125,6 +125,15 @@ export default async function SpeedProfilePage({ params }: { params: Promise<{ a
                     ? `accepted by ${e.acceptedByName ?? "a former member"} on ${e.acceptedAt.toISOString().slice(0, 10)}`
                     : "typed in"}
                 </span>
+                {replaced
+                  .filter((r) => r.effectiveFrom === e.effectiveFrom)
+                  .map((r) => (
+                    <span key={r.id} className="w-full text-xs text-ink-500" data-testid="profile-replaced">
+                      Replaced: vmax {r.values.vmaxMs?.toFixed(2) ?? "–"} m/s · τ {r.values.tauS?.toFixed(2) ?? "–"} s,
+                      accepted by {r.acceptedByName ?? "a former member"} on {r.acceptedAt.toISOString().slice(0, 10)};
+                      replaced by {r.replacedByName ?? "a former member"} on {r.replacedAt.toISOString().slice(0, 10)}
+                    </span>
+                  ))}
               </li>
             ))}
           </ul>
