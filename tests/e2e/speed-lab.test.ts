@@ -49,6 +49,21 @@ describeBrowser("speed lab", () => {
     };
     const [lastBefore, nextBefore] = [await hsrOf(lastWeek), await hsrOf(nextWeek)];
     expect(nextBefore).toBeGreaterThan(0);
+    // The same figures on the week plan's screen (a desktop-width planner: Maya's row total).
+    const wide = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await signIn(wide, app, headCoach.email);
+    const mayaRow = (
+      (await (await api.fetch(`/api/teams/${teamId}/plan?week=${thisWeek}`)).json()) as PlanWeek
+    ).athletes.find((a) => a.name === maya.name)!.id;
+    const onScreen = async (week: string) => {
+      await wide.goto(`${app.url}/plan?week=${week}`);
+      const total = wide.locator(`[data-testid="athlete-row"][data-athlete-id="${mayaRow}"] [data-testid="total-hsr"]`);
+      return Number(await total.first().getAttribute("data-value"));
+    };
+    expect([await onScreen(lastWeek), await onScreen(nextWeek)]).toEqual([
+      Math.round(lastBefore),
+      Math.round(nextBefore),
+    ]);
 
     await page.goto(`${app.url}/speed`);
     await page.getByTestId("retest-due").waitFor();
@@ -107,6 +122,10 @@ describeBrowser("speed lab", () => {
     // The plan: last week's HSR as it was; next week's follows the new vmax.
     expect(await hsrOf(lastWeek)).toBe(lastBefore);
     expect(await hsrOf(nextWeek)).not.toBe(nextBefore);
+    expect(await onScreen(lastWeek)).toBe(Math.round(lastBefore));
+    // The screen shows the new figure (whole metres: the change can be under one).
+    expect(await onScreen(nextWeek)).toBe(Math.round(await hsrOf(nextWeek)));
+    await wide.close();
   }, 240_000);
 
   it("a speed trace of a planned session shows measured next to planned; a 2 Hz trace is refused; contact rows", async () => {
