@@ -229,7 +229,25 @@ describeBrowser("athletes' reports, the staff's side", () => {
     const athletePhone = await phone();
     await signIn(athletePhone.page, app, ADA, TEST_PASSWORD);
     await athletePhone.page.goto(`${app.url}/me`);
-    await athletePhone.page.getByTestId("check-in").waitFor();
+    const checkIn = athletePhone.page.getByTestId("check-in");
+    await checkIn.waitFor();
+    expect(await athletePhone.page.getByTestId("check-in-trend").count()).toBe(0);
+    // Five taps and a save (the quick check-in the issue asks for), then the athlete's own trend shows it.
+    for (const [item, score] of Object.entries({ sleep: 4, fatigue: 3, soreness: 4, stress: 5, mood: 4 }))
+      await checkIn.getByTestId(`check-in-${item}-${score}`).check({ force: true });
+    await checkIn.getByTestId("check-in-save").click();
+    await checkIn.getByTestId("check-in-status").getByText("Checked in today. Thank you!").waitFor();
+    const trend = athletePhone.page.getByTestId("check-in-trend");
+    await trend.waitFor();
+    expect(await trend.innerText()).toMatch(/20 of 25/);
+    await noSidewaysScroll(athletePhone.page);
+    expect(await seriousAxeViolations(athletePhone.page)).toEqual([]);
+    await screenshot(athletePhone.page, "athlete-check-in");
+    const [stored] = await app.query<{ total: number }>(
+      "SELECT sleep + fatigue + soreness + stress + mood AS total FROM check_ins WHERE athlete_id = ?",
+      [team.users[ADA].athleteId],
+    );
+    expect(stored.total).toBe(20);
     await athletePhone.context.close();
     const sessionId = await publishedSession(addDays(today, -1), "Starts yesterday");
     const athlete = await apiSession(app, ADA, TEST_PASSWORD);
