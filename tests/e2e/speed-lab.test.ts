@@ -107,6 +107,8 @@ describeBrowser("speed lab", () => {
     const fit = page.locator('[data-testid^="fit-"]').first();
     expect(await fit.innerText()).toContain("vmax 9.50 m/s");
     expect(await fit.innerText()).toContain("τ 1.10 s");
+    // lib/speed/README.md §3, no-drag form: V0 = vmax.
+    expect(await fit.innerText()).toMatch(/F0 \d+ N · V0 9\.50 m\/s · Pmax \d+ W \(no air drag\)/);
     await page.getByTestId("fit-chart").locator("svg").first().waitFor();
     expect(await seriousAxeViolations(page)).toEqual([]);
     await noSidewaysScroll(page);

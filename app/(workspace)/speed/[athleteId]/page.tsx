@@ -161,7 +161,8 @@ export default async function SpeedProfilePage({ params }: { params: Promise<{ a
                     Fit: vmax {r.fit.vmax.toFixed(2)} m/s ({(r.fit.vmax * 3.6).toFixed(1)} km/h) · τ{" "}
                     {r.fit.tau.toFixed(2)} s · time residuals RMS {(r.fit.rmseTimeS * 1000).toFixed(1)} ms
                     {r.profile
-                      ? ` · F0 ${r.profile.f0N.toFixed(0)} N · Pmax ${r.profile.pmaxW.toFixed(0)} W (no air drag)`
+                      ? ` · F0 ${r.profile.f0N.toFixed(0)} N · V0 ${r.profile.v0.toFixed(2)} m/s · ` +
+                        `Pmax ${r.profile.pmaxW.toFixed(0)} W (no air drag)`
                       : ""}
                   </p>
                   <FitChart vmax={r.fit.vmax} tau={r.fit.tau} intervals={r.intervals} gates={r.splits} />
