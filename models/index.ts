@@ -39,7 +39,7 @@ import { User } from "./user";
 
 export { Alert, OutboxMessage, Restriction, RestrictionOverride };
 export { CheckIn, PainReport };
-export { SpeedLabSettings, SpeedProfileEntry, SpeedTest, SpeedUpload };
+export { SpeedTest };
 export { AthleteAvailability };
 export { Meet, SeasonPhase };
 export { BlockTemplate, Invitation, PlannedSession, SessionBlock, SessionLog, TeamLoadSettings };

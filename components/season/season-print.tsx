@@ -8,7 +8,7 @@ import { LOAD_CAUTION } from "@/lib/load/flag-display";
 import { phaseOfWeek } from "@/lib/season/season-grid";
 
 /** Weeks per printed table: eight columns of figures stay legible on A4 landscape beside the names. */
-export const PRINT_WEEKS_PER_PAGE = 8;
+const PRINT_WEEKS_PER_PAGE = 8;
 
 const TARGET_WORD = { hsrM: "HSR", nearMaxM: "near-max", contacts: "contacts", srpe: "sRPE" } as const;
 

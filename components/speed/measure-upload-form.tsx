@@ -6,7 +6,8 @@ import { UploadOutcome, type UploadProblem } from "./upload-outcome";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, inputClass } from "@/components/ui/field";
 import { ApiError } from "@/lib/client/fetcher";
-import { speedApi, speedKeys } from "@/lib/client/speed";
+import { speedKeys } from "@/lib/client/keys";
+import { speedApi } from "@/lib/client/speed";
 
 type Kind = "trace" | "force" | "contacts";
 

@@ -5,7 +5,8 @@ import { useState } from "react";
 import { UploadOutcome, type UploadProblem } from "./upload-outcome";
 import { inputClass } from "@/components/ui/field";
 import { ApiError } from "@/lib/client/fetcher";
-import { speedApi, speedKeys } from "@/lib/client/speed";
+import { speedKeys } from "@/lib/client/keys";
+import { speedApi } from "@/lib/client/speed";
 
 /** Uploads a timing-gate CSV with a progress bar; shows every problem line by line when it is refused. */
 export function TimingUploadForm({ teamId }: { teamId: number }) {

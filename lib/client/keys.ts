@@ -64,3 +64,18 @@ export const athleteReportKeys = {
   unlockLog: (sessionId: number) => `/api/sessions/${sessionId}/log/unlock`,
   teamSettings: (teamId: number) => `/api/teams/${teamId}/athlete-reports`,
 } as const;
+
+/** The speed lab: uploads, acceptance and settings (lib/client/speed.ts sends them), and the CSV templates. */
+export const speedKeys = {
+  timingUploads: (teamId: number) => `/api/teams/${teamId}/speed/timing-uploads`,
+  measureUploads: (teamId: number) => `/api/teams/${teamId}/speed/measure-uploads`,
+  accept: (teamId: number, testId: number) => `/api/teams/${teamId}/speed/tests/${testId}/accept`,
+  settings: (teamId: number) => `/api/teams/${teamId}/speed/settings`,
+  /** Our own column layouts as downloadable examples (lib/speed/README.md §5, §9). */
+  templates: {
+    timing: "/speed-timing-template.csv",
+    trace: "/speed-trace-template.csv",
+    force: "/speed-force-template.csv",
+    contacts: "/speed-contacts-template.csv",
+  },
+};

@@ -6,23 +6,10 @@ import type {
   speedUploadSchema,
 } from "@/lib/validations/speed";
 import { ApiError, OFFLINE_MESSAGE, sendJson, toApiError } from "./fetcher";
+import { speedKeys } from "./keys";
 
 // The speed lab's requests from the browser. The upload goes through XMLHttpRequest: fetch reports no upload
 // progress, and the coach should see a large file going up.
-
-export const speedKeys = {
-  timingUploads: (teamId: number) => `/api/teams/${teamId}/speed/timing-uploads`,
-  measureUploads: (teamId: number) => `/api/teams/${teamId}/speed/measure-uploads`,
-  accept: (teamId: number, testId: number) => `/api/teams/${teamId}/speed/tests/${testId}/accept`,
-  settings: (teamId: number) => `/api/teams/${teamId}/speed/settings`,
-  /** Our own column layouts as downloadable examples (lib/speed/README.md §5, §9). */
-  templates: {
-    timing: "/speed-timing-template.csv",
-    trace: "/speed-trace-template.csv",
-    force: "/speed-force-template.csv",
-    contacts: "/speed-contacts-template.csv",
-  },
-};
 
 export type TimingUploadResult = {
   testIds: number[];

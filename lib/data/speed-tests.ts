@@ -169,18 +169,6 @@ export async function listSpeedTests({
   return rows.map(toRow);
 }
 
-/** The uploaded file as it came (the team's own only). */
-export async function getSpeedUpload({ teamId, uploadId }: { teamId: number; uploadId: number }) {
-  const { SpeedUpload } = await db();
-  const row = await SpeedUpload.findOne({
-    where: { id: uploadId, teamId },
-    attributes: ["id", "fileName", "kind", "sizeBytes", "sha256", "content", "createdAt"],
-    raw: true,
-  });
-  if (!row) throw new AppError("not_found", "Not found");
-  return row;
-}
-
 /** Each athlete's latest test date of one kind (athlete id → YYYY-MM-DD); one grouped read over the index. */
 export async function latestTestDates({
   teamId,

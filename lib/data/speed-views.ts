@@ -67,7 +67,7 @@ function withFit(t: SpeedTestRow, accepted: Set<number>): SpeedTestView {
   return { ...t, accepted: accepted.has(t.id), fitVmax: fit ? fit.vmax : null };
 }
 
-export type SquadSpeedRow = {
+type SquadSpeedRow = {
   athleteId: number;
   name: string;
   vmaxMs: number | null;

@@ -6,7 +6,7 @@
 // - Taper before an A meet: cut volume by 41–60 % over 8–14 days, progressively rather than in one step, and keep
 //   intensity and frequency (Bosquet et al. 2007, Med Sci Sports Exerc 39(8):1358–65; from memory).
 
-export type BuildRule = {
+type BuildRule = {
   kind: "build";
   /** Weekly rise in the build weeks, % (e.g. 8). */
   weeklyIncreasePct: number;
@@ -16,9 +16,9 @@ export type BuildRule = {
   unloadPct: number;
 };
 
-export type TaperShape = "linear" | "exponential" | "step";
+type TaperShape = "linear" | "exponential" | "step";
 
-export type TaperRule = {
+type TaperRule = {
   kind: "taper";
   /** Total volume cut reached in the last taper week, % of the source week (e.g. 50). */
   reductionPct: number;

@@ -38,7 +38,7 @@ function scaleDrill(drill: PlyoDrill, factor: number): PlyoDrill {
   return { ...drill, ...scaleCounts(drill.sets, drill.reps, factor) };
 }
 
-export function scaleBlock<B extends ScalableBlock>(block: B, factor: number): B {
+function scaleBlock<B extends ScalableBlock>(block: B, factor: number): B {
   const rules = blockKindRules(block.kind);
   if (rules?.carries === "running" && block.running) return { ...block, running: scaleRunning(block.running, factor) };
   if (rules?.carries === "drills" && block.drills)

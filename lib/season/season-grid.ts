@@ -8,7 +8,7 @@ import { forecastWarnings, type ForecastWarning, type Meet } from "./forecast-wa
 import { checkTargets, type TargetCheck, type WeekTargets } from "./targets";
 
 /** A week whose load falls by at least this share on the week before counts as an unload (common practice). */
-export const UNLOAD_DROP_PCT = 20;
+const UNLOAD_DROP_PCT = 20;
 
 export type GridPhase = {
   id: number;
@@ -60,7 +60,7 @@ export function phaseOfWeek(phases: readonly GridPhase[], groupId: number | null
 }
 
 /** Meets that concern the athlete: the team's, the athlete's group's and the athlete's own. */
-export function meetsOf(meets: readonly GridMeet[], athlete: { id: number; groupId: number | null }): GridMeet[] {
+function meetsOf(meets: readonly GridMeet[], athlete: { id: number; groupId: number | null }): GridMeet[] {
   return meets.filter(
     (m) =>
       (m.groupId === null && m.athleteId === null) ||

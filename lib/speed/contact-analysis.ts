@@ -15,7 +15,7 @@ import {
 
 const mean = (xs: readonly number[]) => (xs.length ? xs.reduce((s, x) => s + x, 0) / xs.length : null);
 
-export type ContactMeans = {
+type ContactMeans = {
   contactTimeS: number | null;
   flightTimeS: number | null;
   stepTimeS: number | null;

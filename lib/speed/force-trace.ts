@@ -43,7 +43,7 @@ export function samplingHz(t: readonly number[]): number {
 }
 
 /** Trapezoidal ∫ y dt over samples i..j inclusive. */
-export function trapezoid(t: readonly number[], y: readonly number[], i = 0, j = t.length - 1): number {
+function trapezoid(t: readonly number[], y: readonly number[], i = 0, j = t.length - 1): number {
   let s = 0;
   for (let k = i; k < j; k++) s += ((y[k] + y[k + 1]) / 2) * (t[k + 1] - t[k]);
   return s;
@@ -110,7 +110,7 @@ export function detectContacts(tr: Trace, bodyMassKg: number, threshold = CONTAC
 }
 
 /** Jump height from take-off velocity, h = v²/(2g). */
-export function heightFromVelocity(v: number): number {
+function heightFromVelocity(v: number): number {
   return (v * v) / (2 * G);
 }
 

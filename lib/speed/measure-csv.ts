@@ -30,7 +30,7 @@ export const MEASURE_CSV_LAYOUTS: Record<MeasureKind, readonly Column[]> = {
 };
 
 /** Rows we read at most: 40 minutes at 50 Hz for a trace, a few minutes at 1000 Hz for force (the 2 MB cap first). */
-export const MEASURE_CSV_MAX_ROWS = 200_000;
+const MEASURE_CSV_MAX_ROWS = 200_000;
 const MIN_HZ: Partial<Record<MeasureKind, number>> = { trace: MIN_TRACE_HZ, force: MIN_FORCE_HZ };
 
 export type MeasureCsvResult =

@@ -11,7 +11,7 @@ import type { SpeedTraceAnalysis } from "./speed-trace";
 // what the trace measured by the same bands. Every screen that shows it (the athlete's speed page, the planner's
 // session dialog, the athlete's load page) takes it from here; the load series keeps counting plan and log.
 
-export type RunningFigures = { hsrM: number; nearMaxM: number; runM: number };
+type RunningFigures = { hsrM: number; nearMaxM: number; runM: number };
 
 export type PlanMeasured = {
   testId: number;

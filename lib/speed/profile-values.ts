@@ -29,7 +29,7 @@ export const PROFILE_VALUE_KEYS = [
 ] as const satisfies readonly (keyof SpeedProfileValues)[];
 
 /** The profile values a timing trial measured; null when it has no fit (nothing to accept). */
-export function timingProfileValues(result: TimingTrialAnalysis): Partial<SpeedProfileValues> | null {
+function timingProfileValues(result: TimingTrialAnalysis): Partial<SpeedProfileValues> | null {
   if (!result.fit) return null;
   return {
     vmaxMs: result.fit.vmax,

@@ -6,7 +6,7 @@ import { dayIndex } from "@/lib/dates/plain-date";
 /** Weeks without a timing test after which an athlete is due one (team setting; common practice, from memory). */
 export const DEFAULT_RETEST_WEEKS = 6;
 /** A drop smaller than this is within timing noise (our choice: ≈ 1 % of a trained sprinter's vmax). */
-export const VMAX_DROP_NOISE_MS = 0.1;
+const VMAX_DROP_NOISE_MS = 0.1;
 
 export type RetestStatus = {
   /** Days since the last timing test; null when never tested. */

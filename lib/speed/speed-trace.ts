@@ -15,11 +15,11 @@ export const MIN_TRACE_HZ = 10;
  */
 export const TRACE_SMOOTHING_S = 0.5;
 /** Below this the athlete is taken to be at rest: the sprint that holds the peak starts at the last such sample. */
-export const TRACE_REST_MS = 0.2;
+const TRACE_REST_MS = 0.2;
 
 export type SpeedTrace = { t: readonly number[]; v: readonly number[] };
 
-export type TraceFit = { vmax: number; tau: number; startS: number; rmseMs: number; samples: number };
+type TraceFit = { vmax: number; tau: number; startS: number; rmseMs: number; samples: number };
 
 export type SpeedTraceAnalysis = {
   samplingHz: number;
@@ -98,7 +98,7 @@ export function metresAbove(tr: SpeedTrace, lineMs: number): number {
  * holds the smoothed peak, from the last sample at rest before it up to the peak, by least squares on speed with
  * ml-levenberg-marquardt; the start t₀ is fitted too (a trace's clock does not start with the run).
  */
-export function fitTraceSprint(tr: SpeedTrace, peakIndex: number): TraceFit | null {
+function fitTraceSprint(tr: SpeedTrace, peakIndex: number): TraceFit | null {
   const { t, v } = tr;
   let s = peakIndex;
   while (s > 0 && v[s] >= TRACE_REST_MS) s--;

@@ -11,7 +11,7 @@ export interface GateTime {
   timeS: number;
 }
 
-export interface GateResidual {
+interface GateResidual {
   distanceM: number;
   timeS: number;
   /** Model distance at the measured time minus the gate's distance, m. */

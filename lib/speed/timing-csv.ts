@@ -16,11 +16,11 @@ export const TIMING_CSV_COLUMNS = [
 ] as const;
 const REQUIRED = ["athlete", "date", "start", "distance_m", "time_s"] as const;
 /** A header line, then at most this many rows: a season's testing of a big squad fits many times over. */
-export const TIMING_CSV_MAX_ROWS = 5000;
+const TIMING_CSV_MAX_ROWS = 5000;
 
 export type CsvProblem = { line: number; column: string | null; message: string };
 
-export type ParsedTimingTrial = {
+type ParsedTimingTrial = {
   athleteId: number;
   athleteName: string;
   testDate: string;

@@ -6,19 +6,19 @@ import { fitSprint, timedGates, type GateTime, type SprintFit } from "./sprint-f
 // gate, speed over each interval between gates, the best flying interval, the model fit and, with body mass,
 // the horizontal force–velocity profile.
 
-export interface SpeedPair {
+interface SpeedPair {
   ms: number;
   kmh: number;
 }
 
-export interface GateInterval {
+interface GateInterval {
   fromM: number;
   toM: number;
   seconds: number;
   speed: SpeedPair;
 }
 
-export interface FlyingZone {
+interface FlyingZone {
   lengthM: number;
   timeS: number;
 }
@@ -41,7 +41,7 @@ export interface TimingTrialAnalysis {
   profile: ForceVelocityProfile | null;
 }
 
-export function speedPair(ms: number): SpeedPair {
+function speedPair(ms: number): SpeedPair {
   return { ms, kmh: msToKmh(ms) };
 }
 

@@ -8,7 +8,7 @@ import { lineText, noteText } from "./text";
 /** Longest phase and longest season view: a year (plus a week so a season that starts mid-week fits). */
 const MAX_SPAN_DAYS = 371;
 /** Most weeks one progression writes at once: a training block is rarely longer than 12 weeks (common practice). */
-export const MAX_PROGRESSION_WEEKS = 12;
+const MAX_PROGRESSION_WEEKS = 12;
 
 const amount = z.number({ error: "Enter a number" }).finite().min(0, "Cannot be negative").max(1e6, "Too large");
 const rangeSchema = z
@@ -18,7 +18,7 @@ const rangeSchema = z
     path: ["max"],
   });
 
-export const targetsSchema = z.partialRecord(z.enum(TARGET_METRICS), rangeSchema).default({});
+const targetsSchema = z.partialRecord(z.enum(TARGET_METRICS), rangeSchema).default({});
 
 const phaseFields = z.object({
   kind: z.enum(SEASON_PHASE_KINDS, { error: "Choose a phase kind" }),
@@ -59,7 +59,7 @@ export type MeetInput = z.infer<typeof meetInputSchema>;
 const pct = (max: number) =>
   z.number({ error: "Enter a percentage" }).finite().min(0, "Cannot be negative").max(max, `At most ${max} %`);
 
-export const progressionRuleSchema = z.discriminatedUnion(
+const progressionRuleSchema = z.discriminatedUnion(
   "kind",
   [
     z.object({

@@ -10,10 +10,10 @@ import { idSchema } from "./plan";
 const metres = z.number({ message: "Distance must be a number" }).min(0, "Distance cannot be negative").max(500);
 const seconds = z.number({ message: "Time must be a number" }).min(0, "Time cannot be negative").max(120);
 
-export const gateSchema = z.object({ distanceM: metres, timeS: seconds });
+const gateSchema = z.object({ distanceM: metres, timeS: seconds });
 
 /** Times must grow with distance: a gate further out is passed later. Each message names the gate it is about. */
-export const gatesSchema = z
+const gatesSchema = z
   .array(gateSchema)
   .max(30, "At most 30 gates")
   .superRefine((gates, ctx) => {
@@ -64,10 +64,6 @@ export const timingTrialSchema = z
   });
 
 export type TimingTrialInput = z.infer<typeof timingTrialSchema>;
-
-export const timingTrialsSchema = z.object({
-  trials: z.array(timingTrialSchema).min(1, "Enter at least one trial").max(200),
-});
 
 /** The largest speed-lab file we take: a 40-minute force trace at 1000 Hz as CSV is about 1.5 MB. */
 export const SPEED_UPLOAD_MAX_BYTES = 2 * 1024 * 1024;
