@@ -26,13 +26,19 @@ function cellElement(t: DropTarget): HTMLElement | null {
   return document.querySelector<HTMLElement>(`${sel}[data-date="${t.date}"]`);
 }
 
+/** How close to the top or bottom of the window an aimed cell may come before the page scrolls it to the middle. */
+const REVEAL_MARGIN_PX = 24;
+
 /** Keeps the cell the keyboard aims at on screen (page and the grid's own sideways scroll), then its box. */
 function revealCell(t: DropTarget): DOMRect | null {
   const el = cellElement(t);
   if (!el) return null;
   const r = el.getBoundingClientRect();
-  const off = r.top < 0 || r.bottom > window.innerHeight || r.left < 0 || r.right > window.innerWidth;
-  if (off) el.scrollIntoView({ block: "nearest", inline: "nearest" });
+  // A cell at the very edge counts as off: the preview that follows can grow the rows above it by a line and
+  // push it out again, so the aimed cell is brought to the middle rather than to the edge.
+  const edge = REVEAL_MARGIN_PX;
+  const off = r.top < edge || r.bottom > window.innerHeight - edge || r.left < 0 || r.right > window.innerWidth;
+  if (off) el.scrollIntoView({ block: "center", inline: "nearest" });
   return el.getBoundingClientRect();
 }
 
