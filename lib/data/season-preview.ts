@@ -3,8 +3,7 @@ import { addDays, dayIndex, startOfWeek } from "@/lib/dates/plain-date";
 import { teamToday, type TeamClock } from "@/lib/dates/zoned";
 import { toWireRows, type ProgressionBase } from "@/lib/season/forecast-preview";
 import { ensureLedgerFresh, readLedgerRows } from "./ledger";
-import { getLoadSeriesInputs } from "./load";
-import { getTeamClock } from "./load";
+import { getLoadSeriesInputs, getTeamClock } from "./load";
 import { MAX_LOOK_BACK_DAYS } from "./load-ledger";
 import { loadSessionsBetween } from "./plan-rows";
 
